@@ -1,0 +1,2 @@
+package com.baysheet;
+public final class App { public static void main(String[] a) {} }

@@ -1,0 +1,105 @@
+package com.baysheet.engine.code;
+
+import com.baysheet.engine.Check;
+import com.baysheet.engine.InputError;
+import com.baysheet.engine.units.Convert;
+import com.baysheet.engine.units.Quantity;
+import com.baysheet.engine.units.UnitSystem;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.Collection;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+/**
+ * The occupancy catalogue: the built-in rows of engine/occupancies.json plus a firm's own rows.
+ * Immutable; {@link #with} returns a new catalogue.
+ */
+public final class OccupancyCatalogue {
+    private static final OccupancyCatalogue BUILT_IN = load("/engine/occupancies.json");
+
+    private final Map<String, Occupancy> byId;
+
+    private OccupancyCatalogue(Map<String, Occupancy> byId) {
+        this.byId = Map.copyOf(byId);
+        this.order = byId.keySet().toArray(String[]::new);
+    }
+
+    private final String[] order;
+
+    public static OccupancyCatalogue builtIn() { return BUILT_IN; }
+
+    public Occupancy get(String id) {
+        Occupancy o = byId.get(id);
+        if (o == null) throw new InputError("occupancy", id, "is not in the occupancy catalogue");
+        return o;
+    }
+
+    public boolean contains(String id) { return byId.containsKey(id); }
+
+    public Collection<Occupancy> all() {
+        return java.util.Arrays.stream(order).map(byId::get).toList();
+    }
+
+    /** This catalogue with one more (or a replaced) row. */
+    public OccupancyCatalogue with(Occupancy o) {
+        Map<String, Occupancy> m = new LinkedHashMap<>();
+        for (String id : order) m.put(id, byId.get(id));
+        m.put(o.id(), o);
+        return new OccupancyCatalogue(m);
+    }
+
+    /**
+     * A firm's own occupancy, given in one unit system; the other system's values are the exact
+     * conversion (NIST SP 811), since no code prints them.
+     *
+     * @param uniform       L0 in psf (US) or kN/m² (SI)
+     * @param concentrated  lb (US) or kN (SI), 0 for none
+     * @param contactSide   side of the square contact area in in (US) or mm (SI)
+     */
+    public static Occupancy custom(String id, String name, UnitSystem system, double uniform, double concentrated,
+                                   double contactSide, ReductionRule rule, boolean assembly) {
+        Check.positive("uniform", uniform);
+        Check.nonNegative("concentrated", concentrated);
+        Check.positive("contactSide", contactSide);
+        boolean us = system == UnitSystem.US;
+        double psf = us ? uniform : Convert.toUs(Quantity.PRESSURE, uniform);
+        double kpa = us ? Convert.toSi(Quantity.PRESSURE, uniform) : uniform;
+        double lb = us ? concentrated : Convert.toUs(Quantity.FORCE, concentrated);
+        double kn = us ? Convert.toSi(Quantity.FORCE, concentrated) : concentrated;
+        double in = us ? contactSide : contactSide / 25.4;
+        double mm = us ? contactSide * 25.4 : contactSide;
+        String clause = switch (rule) {
+            case HEAVY -> "reduction.heavy";
+            case GARAGE -> "reduction.garage";
+            case NOT_REDUCIBLE -> assembly ? "reduction.assembly" : "loads.table";
+            case ROOF -> "roof.reduction";
+            case ORDINARY -> "";
+        };
+        return new Occupancy(id, name, psf, kpa, lb, kn, in, mm, rule, clause, assembly, "firm");
+    }
+
+    static OccupancyCatalogue load(String resource) {
+        try (InputStream in = OccupancyCatalogue.class.getResourceAsStream(resource)) {
+            if (in == null) throw new IllegalStateException("missing resource " + resource);
+            JsonNode root = new ObjectMapper().readTree(in);
+            Map<String, Occupancy> m = new LinkedHashMap<>();
+            for (JsonNode r : root.get("occupancies")) {
+                Occupancy o = new Occupancy(r.get("id").asText(), r.get("name").asText(),
+                        r.get("uniformPsf").asDouble(), r.get("uniformKPa").asDouble(),
+                        r.get("concentratedLb").asDouble(), r.get("concentratedKN").asDouble(),
+                        r.get("contactSideIn").asDouble(), r.get("contactSideMm").asDouble(),
+                        ReductionRule.valueOf(r.get("rule").asText()), r.get("ruleClause").asText(),
+                        r.get("assembly").asBoolean(), r.get("confidence").asText());
+                m.put(o.id(), o);
+            }
+            return new OccupancyCatalogue(m);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

@@ -1,0 +1,11 @@
+package com.baysheet.engine.load;
+
+/**
+ * Project options that change the calculation.
+ *
+ * @param partitionAllowance add the partition allowance of ASCE 7-16 4.3.2 on floors with L0 below 80 psf
+ * @param reducePartitions   reduce the partition allowance with the live load (disputed in practice; default no)
+ */
+public record DesignOptions(boolean partitionAllowance, boolean reducePartitions) {
+    public static final DesignOptions DEFAULT = new DesignOptions(false, false);
+}

@@ -1,0 +1,63 @@
+package com.baysheet.engine.member;
+
+import com.baysheet.engine.beam.BeamLoads;
+import com.baysheet.engine.code.Occupancy;
+import com.baysheet.engine.load.MemberInput;
+import com.baysheet.engine.record.RecordBuilder;
+import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.units.Quantity;
+
+/** Axial load on a column: dead, live unreduced and reduced, roof live, concentrated check, combinations. */
+final class AxialActions {
+    private AxialActions() {}
+
+    static void record(CalcContext ctx, MemberInput in, LoadBook book, BeamLoads floor0, BeamLoads floor,
+                       BeamLoads roof0, BeamLoads roof, boolean halfL, RecordBuilder rec) {
+        var ed = ctx.edition();
+        double d = rec.step("P_D", "Axial dead load", "P_D = Σ D", "sum of dead loads", book.dead.total(), Quantity.FORCE, ed.clause("combo.lrfd"));
+        double l0 = floor0.total(), l = floor.total();
+        if (l0 > 0) {
+            rec.step("P_L0", "Axial floor live load, unreduced", "P_L0 = Σ L0 A_i", "sum over sources", l0, Quantity.FORCE, ed.clause("loads.table"));
+            rec.step("P_L", "Axial floor live load, reduced", "P_L = Σ f_i L0 A_i", "sum over sources", l, Quantity.FORCE, ed.clause("reduction.eq"));
+        }
+        double lr = roof.total();
+        if (roof0.total() > 0) {
+            rec.step("P_Lr", "Axial roof live load", "P_Lr = Σ Lr A_i", "sum over roof sources", lr, Quantity.FORCE, ed.clause("roof.reduction"));
+        }
+        double lc = concentrated(ctx, book);
+        double ldes = l;
+        if (lc > 0 && l0 > 0) {
+            rec.step("P_c", "Concentrated live load, not reduced", "P_c", rec.show(lc, Quantity.FORCE), lc, Quantity.FORCE, ed.clause("concentrated"));
+            if (lc > l) {
+                ldes = lc;
+                rec.info("The concentrated load governs the axial live load (used alone, never added to the uniform load).", ed.clause("concentrated"));
+            } else {
+                rec.info("The reduced uniform live load governs the axial live load; the concentrated load is not added.", ed.clause("concentrated"));
+            }
+        }
+        var lrfd = LoadCombinations.govern(true, "P_u", "axial load", d, ldes, lr, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
+        var asd = LoadCombinations.govern(false, "P_a", "axial load", d, ldes, lr, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
+        if (halfL && lrfd.combination().halfL()) rec.info("0.5 L used in " + lrfd.combination().name() + ".", ed.clause("combo.halfL"));
+
+        rec.result("D.P", "Dead load P_D", d, Quantity.FORCE)
+           .result("L0.P", "Live load, unreduced", l0, Quantity.FORCE)
+           .result("L.P", "Live load, reduced", l, Quantity.FORCE)
+           .result("Lc.P", "Concentrated live load", lc, Quantity.FORCE)
+           .result("Ldes.P", "Design live load", ldes, Quantity.FORCE)
+           .result("Lr0.P", "Roof live load, unreduced", roof0.total(), Quantity.FORCE)
+           .result("Lr.P", "Roof live load Lr", lr, Quantity.FORCE)
+           .result("LRFD.P", "Factored axial load P_u (" + lrfd.combination().name() + ")", lrfd.value(), Quantity.FORCE)
+           .result("ASD.P", "Service axial load P_a (" + asd.combination().name() + ")", asd.value(), Quantity.FORCE)
+           .governs("LRFD.P").governs("ASD.P");
+    }
+
+    /** The largest concentrated load of the floor occupancies carried. */
+    static double concentrated(CalcContext ctx, LoadBook book) {
+        double p = 0;
+        for (String id : book.floorAreas.keySet()) {
+            Occupancy o = ctx.catalogue().get(id);
+            p = Math.max(p, o.concentrated(ctx.system()));
+        }
+        return p;
+    }
+}

@@ -1,0 +1,190 @@
+package com.baysheet.engine.member;
+
+import com.baysheet.engine.beam.BeamActions;
+import com.baysheet.engine.beam.BeamLoads;
+import com.baysheet.engine.code.Edition;
+import com.baysheet.engine.code.Occupancy;
+import com.baysheet.engine.load.MemberInput;
+import com.baysheet.engine.load.Support;
+import com.baysheet.engine.record.Clause;
+import com.baysheet.engine.record.RecordBuilder;
+import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.units.Quantity;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Reactions, shears, moments and deflections of a beam or girder for D, L and Lr, the concentrated-load
+ * check against L, and the gravity combinations of the governing effects.
+ */
+final class BendingActions {
+    private BendingActions() {}
+
+    /** Effects reported for a support kind: R1, R2, V, M+, M−. */
+    enum Effect {
+        R1("R1", "Left reaction"), R2("R2", "Right reaction"), V("V", "Maximum shear"),
+        MPOS("M+", "Maximum positive moment"), MNEG("M-", "Maximum negative moment");
+        final String key, title;
+        Effect(String key, String title) { this.key = key; this.title = title; }
+        Quantity q() { return this == MPOS || this == MNEG ? Quantity.MOMENT : Quantity.FORCE; }
+    }
+
+    static List<Effect> effects(Support s) {
+        if (s instanceof Support.Cantilever) return List.of(Effect.R1, Effect.V, Effect.MNEG);
+        if (s instanceof Support.Overhang) return List.of(Effect.R1, Effect.R2, Effect.V, Effect.MPOS, Effect.MNEG);
+        return List.of(Effect.R1, Effect.R2, Effect.V, Effect.MPOS);
+    }
+
+    static void record(CalcContext ctx, MemberInput in, LoadBook book, BeamLoads floor0, BeamLoads floor,
+                       BeamLoads roof, boolean halfL, RecordBuilder rec) {
+        Edition ed = ctx.edition();
+        Support s = in.support();
+        List<Effect> effects = effects(s);
+        double ei = in.stiffness();
+        double[] d = caseEffects(rec, "D", "dead load", s, List.of(book.dead), effects, ei, ed.clause("combo.lrfd"));
+        double[] l = new double[effects.size()];
+        if (!floor0.isEmpty()) {
+            caseEffects(rec, "L0", "floor live load, unreduced", s, List.of(floor0), effects, Double.NaN, ed.clause("loads.table"));
+            l = caseEffects(rec, "L", "floor live load, reduced", s, patterns(s, floor), effects, ei, ed.clause("reduction.eq"));
+        }
+        double[] lr = new double[effects.size()];
+        if (!roof.isEmpty()) lr = caseEffects(rec, "Lr", "roof live load", s, patterns(s, roof), effects, ei, ed.clause("roof.reduction"));
+        if (s instanceof Support.Overhang && !(floor.isEmpty() && roof.isEmpty()))
+            rec.info("Live load placed on the back span, on the overhang and on both; the worst of the three is used for each effect.",
+                    ed.clause("reduction.basic"));
+
+        double[] design = concentrated(ctx, book, s, effects, l, rec);
+        for (int i = 0; i < effects.size(); i++) {
+            Effect e = effects.get(i);
+            var u = LoadCombinations.govern(true, "LRFD." + e.key, e.title.toLowerCase(), d[i], design[i], lr[i], halfL, e.q(),
+                    ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
+            var a = LoadCombinations.govern(false, "ASD." + e.key, e.title.toLowerCase(), d[i], design[i], lr[i], halfL, e.q(),
+                    ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
+            rec.result("Ldes." + e.key, e.title + ", design live load", design[i], e.q())
+               .result("LRFD." + e.key, e.title + ", factored (" + u.combination().name() + ")", u.value(), e.q())
+               .result("ASD." + e.key, e.title + ", service (" + a.combination().name() + ")", a.value(), e.q())
+               .governs("LRFD." + e.key);
+        }
+        if (halfL && !floor0.isEmpty()) rec.info("0.5 L permitted in LRFD 3 (every L0 at most 100 psf, no garage or assembly use).", ed.clause("combo.halfL"));
+        if (!Double.isNaN(ei)) {
+            BeamLoads total = new BeamLoads().add(book.dead, 1).add(floor, 1).add(roof, 1);
+            BeamActions t = MemberCalculation.solve(s, total, ei);
+            rec.step("Δ.total", "Deflection under D + L + Lr (all spans loaded)", "Δ from ∫∫ M/EI", "at x = " + rec.show(t.maxDeflectionAt(), Quantity.LENGTH),
+                    t.maxDeflection(), Quantity.SMALL_LENGTH, Clause.NONE);
+            rec.result("Δ.total", "Deflection, D + L + Lr", t.maxDeflection(), Quantity.SMALL_LENGTH);
+        }
+    }
+
+    /** Live load patterns: the whole member, and for an overhang the back span and the overhang alone. */
+    static List<BeamLoads> patterns(Support s, BeamLoads live) {
+        if (!(s instanceof Support.Overhang o)) return List.of(live);
+        return List.of(live, live.within(0, o.span()), live.within(o.span(), o.length()));
+    }
+
+    /** Records the effects of one load case, worst over its patterns, and returns them in the order of {@code effects}. */
+    private static double[] caseEffects(RecordBuilder rec, String c, String what, Support s, List<BeamLoads> patterns,
+                                        List<Effect> effects, double ei, Clause clause) {
+        List<BeamActions> acts = new ArrayList<>();
+        for (BeamLoads p : patterns) acts.add(MemberCalculation.solve(s, p, ei));
+        BeamActions full = acts.get(0);
+        double w = patterns.get(0).total();
+        rec.step("W." + c, "Total " + what, "W = Σ w·ℓ + Σ P", "sum of loads", w, Quantity.FORCE, clause);
+        double[] out = new double[effects.size()];
+        for (int i = 0; i < effects.size(); i++) {
+            Effect e = effects.get(i);
+            double best = 0, at = position(full, e, s);
+            for (BeamActions a : acts) {
+                double v = value(a, e, s);
+                // M− is the most negative; every other effect the largest (a reaction's uplift is not a gravity design value)
+                if (e == Effect.MNEG ? v < best : v > best) { best = v; at = position(a, e, s); }
+            }
+            out[i] = best;
+            rec.step(e.key + "." + c, e.title + ", " + what, formula(e, s), where(rec, e, at, s), best, e.q(), clause);
+            rec.result(c + "." + e.key, e.title + ", " + what, best, e.q());
+        }
+        if (!Double.isNaN(ei) && !c.equals("L0")) {
+            rec.step("Δ." + c, "Deflection, " + what, "Δ from ∫∫ M/EI", "at x = " + rec.show(full.maxDeflectionAt(), Quantity.LENGTH),
+                    full.maxDeflection(), Quantity.SMALL_LENGTH, clause);
+            rec.result(c + ".Δ", "Deflection, " + what, full.maxDeflection(), Quantity.SMALL_LENGTH);
+        }
+        return out;
+    }
+
+    static double value(BeamActions a, Effect e, Support s) {
+        return switch (e) {
+            case R1 -> a.left();
+            case R2 -> a.right();
+            case V -> Math.abs(a.maxShear());
+            case MPOS -> Math.max(0, a.maxMoment());
+            case MNEG -> Math.min(0, a.minMoment());
+        };
+    }
+
+    private static double position(BeamActions a, Effect e, Support s) {
+        return switch (e) {
+            case R1 -> 0;
+            case R2 -> s.span();
+            case V -> a.maxShearAt();
+            case MPOS -> a.maxMomentAt();
+            case MNEG -> a.minMomentAt();
+        };
+    }
+
+    private static String formula(Effect e, Support s) {
+        boolean cant = s instanceof Support.Cantilever;
+        return switch (e) {
+            case R1 -> cant ? "R = W" : "R1 = W − R2";
+            case R2 -> "R2 = Σ(load × x) / ℓ";
+            case V -> "V_max = max |V(x)|";
+            case MPOS -> "M+ = max M(x), at zero shear or under a load";
+            case MNEG -> cant ? "M− = −Σ(load × x) at the fixed end" : "M− = min M(x), over the support";
+        };
+    }
+
+    private static String where(RecordBuilder rec, Effect e, double at, Support s) {
+        if (e == Effect.R1 || e == Effect.R2) return "statics";
+        return "at x = " + rec.show(at, Quantity.LENGTH);
+    }
+
+    /**
+     * ASCE 7-16 4.4: the largest concentrated load of the occupancies on the member, on its contact area,
+     * placed for each effect; compared with the reduced uniform live load, never added to it.
+     * Returns the design live effect for each effect.
+     */
+    private static double[] concentrated(CalcContext ctx, LoadBook book, Support s, List<Effect> effects, double[] l,
+                                         RecordBuilder rec) {
+        double[] design = l.clone();
+        Occupancy worst = null;
+        for (String id : book.floorAreas.keySet()) {
+            Occupancy o = ctx.catalogue().get(id);
+            if (o.concentrated(ctx.system()) > 0 && (worst == null || o.concentrated(ctx.system()) > worst.concentrated(ctx.system())))
+                worst = o;
+        }
+        if (worst == null) return design;
+        Edition ed = ctx.edition();
+        double p = worst.concentrated(ctx.system()), side = worst.contactSide(ctx.system());
+        rec.step("P_c", "Concentrated load, " + worst.name() + ", on a " + rec.show(side, Quantity.LENGTH) + " square, not reduced",
+                "P_c", rec.num(p, Quantity.FORCE), p, Quantity.FORCE, ed.clause("concentrated"));
+        rec.info("The full concentrated load is taken on this member (no spread to neighbouring members: common practice, conservative).",
+                ed.clause("concentrated"));
+        for (int i = 0; i < effects.size(); i++) {
+            Effect e = effects.get(i);
+            ConcentratedCheck.Effect ce = switch (e) {
+                case R1, R2 -> ConcentratedCheck.Effect.REACTION;
+                case V -> ConcentratedCheck.Effect.SHEAR;
+                case MPOS -> ConcentratedCheck.Effect.MAX_MOMENT;
+                case MNEG -> ConcentratedCheck.Effect.MIN_MOMENT;
+            };
+            ConcentratedCheck.Placement pl = ConcentratedCheck.place(s, p, side, ce);
+            double v = e == Effect.MNEG ? Math.min(0, pl.effect()) : e == Effect.MPOS ? Math.max(0, pl.effect()) : Math.abs(pl.effect());
+            rec.step(e.key + ".Lc", e.title + ", concentrated load", "placed for the largest effect",
+                    "centre at x = " + rec.show(pl.at(), Quantity.LENGTH), v, e.q(), ed.clause("concentrated"));
+            rec.result("Lc." + e.key, e.title + ", concentrated load", v, e.q());
+            boolean conc = Math.abs(v) > Math.abs(l[i]);
+            if (conc) design[i] = e == Effect.R1 || e == Effect.R2 ? Math.copySign(v, l[i] == 0 ? 1 : l[i]) : v;
+            rec.resultText("gov." + e.key, e.title + ": governing live load", conc ? "concentrated" : "uniform");
+        }
+        return design;
+    }
+}

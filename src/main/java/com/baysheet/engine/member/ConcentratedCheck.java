@@ -1,0 +1,68 @@
+package com.baysheet.engine.member;
+
+import com.baysheet.engine.beam.BeamActions;
+import com.baysheet.engine.beam.BeamLoads;
+import com.baysheet.engine.beam.BeamSolver;
+import com.baysheet.engine.load.Support;
+
+/**
+ * Places a concentrated load, spread over its contact length, along a member for the largest effect
+ * (ASCE 7-16 4.4): a bounded scan of positions, then a golden-section refinement around the best one.
+ */
+final class ConcentratedCheck {
+    private ConcentratedCheck() {}
+
+    /** Coarse positions scanned along the member. */
+    static final int SCAN_POSITIONS = 41;
+    /** Golden-section steps around the best coarse position, and the position tolerance as a share of length. */
+    static final int REFINE_STEPS = 40;
+    static final double POSITION_TOLERANCE = 1e-9;
+
+    enum Effect { MAX_MOMENT, MIN_MOMENT, SHEAR, REACTION }
+
+    /** The largest effect (signed for moments) and the centre position of the load that gives it. */
+    record Placement(double effect, double at) {}
+
+    static Placement place(Support support, double load, double side, Effect effect) {
+        double length = support.length();
+        double patch = Math.min(side, length);
+        double lo = patch / 2, hi = length - patch / 2;
+        if (hi - lo <= POSITION_TOLERANCE * length) return new Placement(value(support, load, patch, lo, effect), lo);
+        double step = (hi - lo) / (SCAN_POSITIONS - 1);
+        double bestAt = lo, best = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < SCAN_POSITIONS; i++) {
+            double x = lo + i * step;
+            double v = score(support, load, patch, x, effect);
+            if (v > best) { best = v; bestAt = x; }
+        }
+        double a = Math.max(lo, bestAt - step), b = Math.min(hi, bestAt + step);
+        double g = (Math.sqrt(5) - 1) / 2;
+        double c = b - g * (b - a), d = a + g * (b - a);
+        double fc = score(support, load, patch, c, effect), fd = score(support, load, patch, d, effect);
+        for (int i = 0; i < REFINE_STEPS && b - a > POSITION_TOLERANCE * length; i++) {
+            if (fc >= fd) { b = d; d = c; fd = fc; c = b - g * (b - a); fc = score(support, load, patch, c, effect); }
+            else { a = c; c = d; fc = fd; d = a + g * (b - a); fd = score(support, load, patch, d, effect); }
+        }
+        double x = fc >= fd ? c : d;
+        double fx = Math.max(fc, fd);
+        if (fx < best) x = bestAt;
+        return new Placement(value(support, load, patch, x, effect), x);
+    }
+
+    /** The quantity maximised: moments by sign, shear and reaction by magnitude. */
+    private static double score(Support s, double load, double patch, double x, Effect e) {
+        double v = value(s, load, patch, x, e);
+        return e == Effect.MIN_MOMENT ? -v : Math.abs(v);
+    }
+
+    private static double value(Support s, double load, double patch, double x, Effect e) {
+        BeamLoads l = new BeamLoads().distributed(load / patch, x - patch / 2, x + patch / 2);
+        BeamActions a = BeamSolver.solve(s, l, Double.NaN);
+        return switch (e) {
+            case MAX_MOMENT -> a.maxMoment();
+            case MIN_MOMENT -> a.minMoment();
+            case SHEAR -> a.maxShear();
+            case REACTION -> a.maxReaction();
+        };
+    }
+}

@@ -1,0 +1,112 @@
+package com.baysheet.engine.member;
+
+import com.baysheet.engine.beam.BeamLoads;
+import com.baysheet.engine.code.Occupancy;
+import com.baysheet.engine.load.AreaLoad;
+import com.baysheet.engine.load.AreaShare;
+import com.baysheet.engine.load.AreaStrip;
+import com.baysheet.engine.load.LiveShare;
+import com.baysheet.engine.load.MemberInput;
+import com.baysheet.engine.load.PointLoad;
+import com.baysheet.engine.reduction.CalcContext;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+/**
+ * A member's loads sorted by source: the dead load, and the unreduced live load of each source (an
+ * occupancy, or the partition allowance on it), with the tributary area of each occupancy.
+ * Axial members keep their loads as point loads at x = 0.
+ */
+final class LoadBook {
+    final BeamLoads dead = new BeamLoads();
+    final Map<String, BeamLoads> live = new LinkedHashMap<>();
+    final Map<String, Double> floorAreas = new LinkedHashMap<>();
+    final Map<String, Double> roofAreas = new LinkedHashMap<>();
+    /** Area of each occupancy apportioned to the left and right ends by the lever rule (half-way rule). */
+    final Map<String, Double> leftAreas = new LinkedHashMap<>();
+    final Map<String, Double> rightAreas = new LinkedHashMap<>();
+    private final CalcContext ctx;
+    private final MemberInput in;
+
+    private LoadBook(CalcContext ctx, MemberInput in) { this.ctx = ctx; this.in = in; }
+
+    static LoadBook of(CalcContext ctx, MemberInput in) {
+        LoadBook b = new LoadBook(ctx, in);
+        double length = in.support().length();
+        if (in.selfWeight() > 0) b.dead.distributed(in.selfWeight(), 0, length);
+        for (int i = 0; i < in.strips().size(); i++) {
+            AreaStrip s = in.strips().get(i);
+            Occupancy o = b.occupancy("strips[" + i + "].occupancy", s.occupancy());
+            b.dead.distributed(s.deadPressure() * s.width(), s.from(), s.to());
+            b.source(o.id()).distributed(o.uniform(ctx.system()) * s.width(), s.from(), s.to());
+            if (b.partitioned(o)) b.source(o.id() + "#partitions").distributed(b.partition() * s.width(), s.from(), s.to());
+            b.area(o, s.area(), (s.from() + s.to()) / 2);
+        }
+        for (int i = 0; i < in.areas().size(); i++) {
+            AreaLoad a = in.areas().get(i);
+            Occupancy o = b.occupancy("areas[" + i + "].occupancy", a.occupancy());
+            b.dead.point(a.deadPressure() * a.area(), 0);
+            b.source(o.id()).point(o.uniform(ctx.system()) * a.area(), 0);
+            if (b.partitioned(o)) b.source(o.id() + "#partitions").point(b.partition() * a.area(), 0);
+            b.area(o, a.area(), 0);
+        }
+        for (int i = 0; i < in.pointLoads().size(); i++) {
+            PointLoad p = in.pointLoads().get(i);
+            double x = in.kind().isColumn() ? 0 : p.x();
+            b.dead.point(p.dead(), x);
+            for (LiveShare l : p.live()) {
+                b.occupancy("pointLoads[" + i + "].live.occupancy", l.occupancy());
+                b.source(l.source()).point(l.amount(), x);
+            }
+            for (AreaShare a : p.areas()) b.area(b.occupancy("pointLoads[" + i + "].areas.occupancy", a.occupancy()), a.area(), x);
+        }
+        return b;
+    }
+
+    boolean isRoofSource(String source) {
+        return ctx.catalogue().get(occupancyOf(source)).isRoof();
+    }
+
+    static String occupancyOf(String source) {
+        int k = source.indexOf('#');
+        return k < 0 ? source : source.substring(0, k);
+    }
+
+    /** The sum of each source's loads times its multiplier, for floor or roof sources. */
+    BeamLoads combined(Map<String, Double> factors, boolean roof) {
+        BeamLoads out = new BeamLoads();
+        for (Map.Entry<String, BeamLoads> e : live.entrySet()) {
+            if (isRoofSource(e.getKey()) != roof) continue;
+            Double f = factors == null ? Double.valueOf(1) : factors.get(e.getKey());
+            if (f == null) throw new IllegalStateException("no factor for " + e.getKey());
+            out.add(e.getValue(), f);
+        }
+        return out;
+    }
+
+    private Occupancy occupancy(String field, String id) {
+        if (!ctx.catalogue().contains(id))
+            throw new com.baysheet.engine.InputError(field, id, "is not in the occupancy catalogue");
+        return ctx.catalogue().get(id);
+    }
+
+    private boolean partitioned(Occupancy o) {
+        return ctx.options().partitionAllowance() && !o.isRoof() && o.uniform(ctx.system()) < ctx.constant("partition.exempt");
+    }
+
+    private double partition() { return ctx.constant("partition"); }
+
+    private BeamLoads source(String key) { return live.computeIfAbsent(key, k -> new BeamLoads()); }
+
+    private void area(Occupancy o, double a, double centroid) {
+        (o.isRoof() ? roofAreas : floorAreas).merge(o.id(), a, Double::sum);
+        double toRight = 0;
+        if (in.support() instanceof com.baysheet.engine.load.Support.Simple
+                || in.support() instanceof com.baysheet.engine.load.Support.Overhang) {
+            toRight = Math.min(1, centroid / in.support().span());
+        }
+        if (toRight < 1) leftAreas.merge(o.id(), a * (1 - toRight), Double::sum);
+        if (toRight > 0) rightAreas.merge(o.id(), a * toRight, Double::sum);
+    }
+}

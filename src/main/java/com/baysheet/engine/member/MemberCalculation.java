@@ -1,0 +1,113 @@
+package com.baysheet.engine.member;
+
+import com.baysheet.engine.beam.BeamActions;
+import com.baysheet.engine.beam.BeamLoads;
+import com.baysheet.engine.beam.BeamSolver;
+import com.baysheet.engine.code.Edition;
+import com.baysheet.engine.code.Occupancy;
+import com.baysheet.engine.code.ReductionRule;
+import com.baysheet.engine.load.AreaShare;
+import com.baysheet.engine.load.LiveShare;
+import com.baysheet.engine.load.MemberInput;
+import com.baysheet.engine.load.Support;
+import com.baysheet.engine.record.RecordBuilder;
+import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.reduction.LiveFactors;
+import com.baysheet.engine.reduction.ReductionMethods;
+import com.baysheet.engine.reduction.RoofLiveLoad;
+import com.baysheet.engine.units.Display;
+import com.baysheet.engine.units.Quantity;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * One member, from its input to its calculation record: live loads from the catalogue, the floor
+ * reduction and roof live load, the member actions for D, L and Lr, the concentrated-load check, and the
+ * gravity load combinations. The entry point of the engine.
+ */
+public final class MemberCalculation {
+    private MemberCalculation() {}
+
+    public static MemberResult calculate(CalcContext ctx, MemberInput in) {
+        RecordBuilder rec = new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system());
+        LoadBook book = LoadBook.of(ctx, in);
+        Inputs.record(ctx, in, book, rec);
+        Map<String, Double> factors = factors(ctx, in, book, rec);
+        BeamLoads floor0 = book.combined(null, false), floor = book.combined(factors, false);
+        BeamLoads roof0 = book.combined(null, true), roof = book.combined(factors, true);
+        boolean halfL = halfLAllowed(ctx, book);
+        if (in.kind().isColumn()) AxialActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, rec);
+        else BendingActions.record(ctx, in, book, floor0, floor, roof, halfL, rec);
+        Cautions.standard(ctx, book, rec);
+        return new MemberResult(rec.build(), share(ctx, in, book, true), in.kind().isColumn()
+                || in.support() instanceof Support.Cantilever ? null : share(ctx, in, book, false));
+    }
+
+    /** Multipliers on every live source: floor reduction for floor sources, Lr/L0 for roof sources. */
+    private static Map<String, Double> factors(CalcContext ctx, MemberInput in, LoadBook book, RecordBuilder rec) {
+        Map<String, Double> f = new LinkedHashMap<>();
+        if (!book.floorAreas.isEmpty()) {
+            if (in.onRoof())
+                rec.info("Occupiable roof: its live load follows the floor rules.", ctx.edition().clause("roof.occupiable"));
+            LiveFactors lf = ReductionMethods.forEdition(ctx).reduce(ctx, in.kind(), book.floorAreas, in.floorsSupported(),
+                    in.support().span(), rec);
+            f.putAll(lf.bySource());
+        }
+        if (!book.roofAreas.isEmpty()) {
+            double area = 0;
+            for (double a : book.roofAreas.values()) area += a;
+            for (String id : book.roofAreas.keySet()) {
+                Occupancy o = ctx.catalogue().get(id);
+                f.put(id, RoofLiveLoad.factor(ctx, o, area, in.roofSlope(), rec));
+            }
+        }
+        for (String source : book.live.keySet())
+            if (!f.containsKey(source)) f.put(source, 1.0); // a partition share handed down with the option now off
+        return f;
+    }
+
+    /** ASCE 7-16 2.3.1 Exception 1: 0.5 L where every L0 is at most 100 psf, except garages and assembly. */
+    private static boolean halfLAllowed(CalcContext ctx, LoadBook book) {
+        if (book.floorAreas.isEmpty()) return false;
+        for (String id : book.floorAreas.keySet()) {
+            Occupancy o = ctx.catalogue().get(id);
+            if (o.uniform(ctx.system()) > ctx.constant("halfL.maxL0") || o.rule() == ReductionRule.GARAGE || o.assembly())
+                return false;
+        }
+        return true;
+    }
+
+    /** The unreduced end share handed to the carrying member, by the lever rule. */
+    private static EndShare share(CalcContext ctx, MemberInput in, LoadBook book, boolean left) {
+        Support s = in.support();
+        double dead = end(s, book.dead, left);
+        List<LiveShare> live = new ArrayList<>();
+        for (Map.Entry<String, BeamLoads> e : book.live.entrySet()) {
+            String src = e.getKey();
+            live.add(new LiveShare(LoadBook.occupancyOf(src), src.endsWith("#partitions"), Math.max(0, end(s, e.getValue(), left))));
+        }
+        List<AreaShare> areas = new ArrayList<>();
+        (left ? book.leftAreas : book.rightAreas).forEach((id, a) -> areas.add(new AreaShare(id, a)));
+        return new EndShare(dead, live, areas);
+    }
+
+    private static double end(Support s, BeamLoads loads, boolean left) {
+        double total = loads.total();
+        if (s instanceof Support.Axial || s instanceof Support.Cantilever) return left ? total : 0;
+        double right = loads.momentAboutStart() / s.span();
+        return left ? total - right : right;
+    }
+
+    static String fmt(double v) { return Display.sig3(v); }
+
+    static BeamActions solve(Support s, BeamLoads l, double ei) { return BeamSolver.solve(s, l, ei); }
+
+    static Quantity q(String effect) {
+        return effect.startsWith("M") ? Quantity.MOMENT : Quantity.FORCE;
+    }
+
+    static Edition ed(CalcContext ctx) { return ctx.edition(); }
+}

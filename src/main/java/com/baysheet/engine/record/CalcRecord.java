@@ -1,0 +1,34 @@
+package com.baysheet.engine.record;
+
+import java.util.List;
+
+/**
+ * The calculation record: the single source of truth that pages, PDF sheets and the API render.
+ * Inputs, ordered steps, results (the governing ones flagged in {@code governing}) and notes.
+ */
+public record CalcRecord(String subject, String edition, String units, List<Entry> inputs,
+                         List<Step> steps, List<Entry> results, List<String> governing, List<Note> notes) {
+    public CalcRecord {
+        inputs = List.copyOf(inputs);
+        steps = List.copyOf(steps);
+        results = List.copyOf(results);
+        governing = List.copyOf(governing);
+        notes = List.copyOf(notes);
+    }
+
+    /** A result by key, or NaN when absent. */
+    public double result(String key) {
+        for (Entry e : results) if (e.key().equals(key)) return e.value();
+        return Double.NaN;
+    }
+
+    public Entry entry(String key) {
+        for (Entry e : results) if (e.key().equals(key)) return e;
+        throw new IllegalArgumentException("no result " + key + " on " + subject);
+    }
+
+    public Step step(String symbol) {
+        for (Step s : steps) if (s.symbol().equals(symbol)) return s;
+        throw new IllegalArgumentException("no step " + symbol + " on " + subject);
+    }
+}

@@ -1,0 +1,164 @@
+package com.baysheet.engine.reduction;
+
+import com.baysheet.engine.code.Edition;
+import com.baysheet.engine.code.MemberKind;
+import com.baysheet.engine.code.Occupancy;
+import com.baysheet.engine.code.ReductionRule;
+import com.baysheet.engine.record.RecordBuilder;
+import com.baysheet.engine.units.Display;
+import com.baysheet.engine.units.Quantity;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+/**
+ * The basic floor live load reduction of ASCE 7 (7-16 numbering): Eq. 4.7-1 with the 400 ft² threshold and
+ * the 0.50/0.40 limits (4.7.2), heavy loads and garages (4.7.3, 4.7.4), assembly uses (4.7.5), the one-way
+ * slab cap (4.7.6), and the partition allowance (4.3.2) as its own source.
+ *
+ * <p>Mixed occupancy (common practice, no code clause): one factor from K_LL times the reducible area; it
+ * reduces the reducible loads only; the others add unreduced.
+ */
+final class Asce7BasicReduction implements FloorReductionMethod {
+    @Override
+    public String id() { return "asce7-basic"; }
+
+    @Override
+    public LiveFactors reduce(CalcContext ctx, MemberKind kind, Map<String, Double> areas, int floors, double span,
+                              RecordBuilder rec) {
+        Edition ed = ctx.edition();
+        double kll = rec.step("K_LL", "Live load element factor, " + kind.title().toLowerCase(), "K_LL",
+                "Table value", ed.kll(kind), Quantity.RATIO, ed.clause("reduction.kll"));
+
+        double total = 0, reducible = 0;
+        StringBuilder sum = new StringBuilder();
+        for (Map.Entry<String, Double> e : areas.entrySet()) {
+            Occupancy o = ctx.catalogue().get(e.getKey());
+            total += e.getValue();
+            if (sum.length() > 0) sum.append(" + ");
+            sum.append(rec.num(e.getValue(), Quantity.AREA));
+            if (reducible(effectiveRule(ctx, o, rec), floors)) reducible += e.getValue();
+        }
+        rec.step("A_T", "Floor tributary area", "A_T = Σ A_i", sum.toString(), total, Quantity.AREA,
+                ed.clause("reduction.basic"));
+        if (areas.size() > 1)
+            rec.info("Mixed occupancy: one factor from K_LL times the reducible tributary area reduces the reducible "
+                    + "loads only; the others are added unreduced (common practice, no code clause).", ed.clause("reduction.basic"));
+        if (floors > 1)
+            rec.info("A_T is the sum of the tributary areas over the " + floors + " floors supported.", ed.clause("reduction.multifloor"));
+
+        if (kind == MemberKind.ONE_WAY_SLAB && reducible > 0) {
+            double cap = ed.constant("oneway.areaFactor") * span * span;
+            if (reducible > cap) {
+                reducible = rec.step("A_T,slab", "One-way slab: tributary area capped", "A_T ≤ 1.5 ℓ²",
+                        "1.5 × " + rec.num(span, Quantity.LENGTH) + "²", cap, Quantity.AREA, ed.clause("reduction.oneway"));
+            }
+        }
+
+        double factor = 1;
+        if (reducible > 0) factor = basicFactor(ctx, kll, reducible, total, floors, rec);
+
+        Map<String, Double> bySource = new LinkedHashMap<>();
+        for (String id : areas.keySet()) {
+            Occupancy o = ctx.catalogue().get(id);
+            double f = occupancyFactor(ctx, o, effectiveRule(ctx, o, null), floors, factor, rec);
+            bySource.put(id, f);
+            double l0 = o.uniform(ctx.system());
+            rec.step("L[" + id + "]", "Design uniform live load, " + o.name(), "L = L0 × f",
+                    rec.num(l0, Quantity.PRESSURE) + " × " + Display.sig3(f), l0 * f, Quantity.PRESSURE,
+                    ed.clause("reduction.eq"));
+            partition(ctx, o, f, bySource, rec);
+        }
+        return new LiveFactors(bySource, total, reducible, kll, factor);
+    }
+
+    private double basicFactor(CalcContext ctx, double kll, double reducible, double total, int floors, RecordBuilder rec) {
+        Edition ed = ctx.edition();
+        double threshold = ctx.constant("threshold");
+        String area = reducible < total ? "A_T,r" : "A_T";
+        double kat = rec.step("K_LL·A_T", "Influence area", "K_LL × " + area,
+                Display.sig3(kll) + " × " + rec.num(reducible, Quantity.AREA), kll * reducible, Quantity.AREA,
+                ed.clause("reduction.basic"));
+        if (kat < threshold) {
+            rec.info("K_LL·A_T = " + rec.show(kat, Quantity.AREA) + " is below " + rec.show(threshold, Quantity.AREA)
+                    + ": no reduction.", ed.clause("reduction.basic"));
+            return 1;
+        }
+        double base = ed.constant("reduction.base"), coef = ctx.constant("reduction.coef");
+        double eq = rec.step("f_eq", "Reduction factor", "f = " + Display.plain(base) + " + " + Display.plain(coef) + "/√(K_LL·A_T)",
+                Display.plain(base) + " + " + Display.plain(coef) + "/√" + rec.num(kat, Quantity.AREA), Math.min(1, base + coef / Math.sqrt(kat)),
+                Quantity.RATIO, ed.clause("reduction.eq"));
+        double limit = ed.constant(floors == 1 ? "limit.oneFloor" : "limit.multiFloor");
+        double f = rec.step("f", "Reduction factor with its lower limit (" + (floors == 1 ? "one floor" : "two or more floors") + ")",
+                "f = max(f_eq, " + Display.plain(limit) + ")", "max(" + Display.sig3(eq) + ", " + Display.sig3(limit) + ")",
+                Math.max(eq, limit), Quantity.RATIO, ed.clause("reduction.basic"));
+        if (eq < limit)
+            rec.info("Lower limit governs: L not less than " + Display.sig3(limit) + " L0.", ed.clause("reduction.basic"));
+        return f;
+    }
+
+    private double occupancyFactor(CalcContext ctx, Occupancy o, ReductionRule rule, int floors, double factor,
+                                   RecordBuilder rec) {
+        Edition ed = ctx.edition();
+        return switch (rule) {
+            case ORDINARY -> factor;
+            case HEAVY, GARAGE -> {
+                String clause = rule == ReductionRule.HEAVY ? "reduction.heavy" : "reduction.garage";
+                String what = rule == ReductionRule.HEAVY ? "live load over " + rec.show(ctx.constant("heavy.threshold"), Quantity.PRESSURE) : "passenger vehicle garage";
+                if (floors == 1) {
+                    rec.info("Not reduced: " + o.name() + " (" + what + ") on a member supporting one floor.", ed.clause(clause));
+                    yield 1;
+                }
+                double min = ed.constant("heavy.minFactor");
+                double f = Math.max(min, factor);
+                rec.step("f[" + o.id() + "]", "Reduction limited to 20 %: " + what, "f = max(" + Display.plain(min) + ", f)",
+                        "max(" + Display.sig3(min) + ", " + Display.sig3(factor) + ")", f, Quantity.RATIO, ed.clause(clause));
+                yield f;
+            }
+            case NOT_REDUCIBLE -> {
+                String why = o.assembly() ? "assembly use" : "the code does not permit reduction";
+                rec.info("Not reduced: " + o.name() + ", " + why + ", " + ed.clause(o.ruleClause().isEmpty() ? "loads.table" : o.ruleClause()).label() + ".",
+                        ed.clause(o.ruleClause().isEmpty() ? "loads.table" : o.ruleClause()));
+                yield 1;
+            }
+            case ROOF -> throw new IllegalStateException("roof occupancy " + o.id() + " reached the floor reduction");
+        };
+    }
+
+    private void partition(CalcContext ctx, Occupancy o, double f, Map<String, Double> bySource, RecordBuilder rec) {
+        if (!ctx.options().partitionAllowance()) return;
+        Edition ed = ctx.edition();
+        double exempt = ctx.constant("partition.exempt");
+        if (o.uniform(ctx.system()) >= exempt) {
+            rec.info("No partition allowance on " + o.name() + ": L0 is at least " + rec.show(exempt, Quantity.PRESSURE) + ".",
+                    ed.clause("partitions"));
+            return;
+        }
+        boolean reduce = ctx.options().reducePartitions();
+        double pf = reduce ? f : 1;
+        bySource.put(o.id() + "#partitions", pf);
+        double p = ctx.constant("partition");
+        rec.step("L_p[" + o.id() + "]", "Partition allowance, " + (reduce ? "reduced with the live load (project option)" : "not reduced (project option)"),
+                reduce ? "L_p = " + rec.num(p, Quantity.PRESSURE) + " × f" : "L_p", reduce ? rec.num(p, Quantity.PRESSURE) + " × " + Display.sig3(pf) : rec.num(p, Quantity.PRESSURE),
+                p * pf, Quantity.PRESSURE, ed.clause("partitions"));
+    }
+
+    /** An ordinary row over the heavy threshold (a firm's own row, say) is treated as heavy. */
+    static ReductionRule effectiveRule(CalcContext ctx, Occupancy o, RecordBuilder rec) {
+        if (o.rule() == ReductionRule.ORDINARY && o.uniform(ctx.system()) > ctx.constant("heavy.threshold")) {
+            if (rec != null)
+                rec.caution(o.name() + ": L0 over " + rec.show(ctx.constant("heavy.threshold"), Quantity.PRESSURE)
+                        + ", treated as a heavy live load.", ctx.edition().clause("reduction.heavy"));
+            return ReductionRule.HEAVY;
+        }
+        return o.rule();
+    }
+
+    private static boolean reducible(ReductionRule rule, int floors) {
+        return switch (rule) {
+            case ORDINARY -> true;
+            case HEAVY, GARAGE -> floors > 1;
+            case NOT_REDUCIBLE, ROOF -> false;
+        };
+    }
+}

@@ -1,0 +1,33 @@
+package com.baysheet.engine.reduction;
+
+import com.baysheet.engine.code.Edition;
+import com.baysheet.engine.code.Editions;
+import com.baysheet.engine.code.OccupancyCatalogue;
+import com.baysheet.engine.load.DesignOptions;
+import com.baysheet.engine.units.UnitSystem;
+
+/** The project-level setting of a calculation: edition, unit system, catalogue (with the firm's rows), options. */
+public record CalcContext(Edition edition, UnitSystem system, OccupancyCatalogue catalogue, DesignOptions options) {
+    public CalcContext {
+        com.baysheet.engine.Check.present("edition", edition);
+        com.baysheet.engine.Check.present("units", system);
+        com.baysheet.engine.Check.present("catalogue", catalogue);
+        com.baysheet.engine.Check.present("options", options);
+    }
+
+    /** ASCE 7-16, the built-in catalogue, default options. */
+    public static CalcContext of(UnitSystem system) {
+        return new CalcContext(Editions.builtIn().byDefault(), system, OccupancyCatalogue.builtIn(), DesignOptions.DEFAULT);
+    }
+
+    public CalcContext withOptions(DesignOptions o) { return new CalcContext(edition, system, catalogue, o); }
+
+    public CalcContext withEdition(Edition e) { return new CalcContext(e, system, catalogue, options); }
+
+    public CalcContext withCatalogue(OccupancyCatalogue c) { return new CalcContext(edition, system, c, options); }
+
+    /** An edition constant for this unit system: key.us or key.si. */
+    public double constant(String key) {
+        return edition.constant(key + (system == UnitSystem.US ? ".us" : ".si"));
+    }
+}

@@ -1,0 +1,63 @@
+package com.baysheet.framing.model;
+
+import com.baysheet.engine.InputError;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Named grid lines in one direction, in order, with the spacing between each line and the next
+ * (ft or m). Unequal spacings are allowed.
+ *
+ * @param axis "x" (lines placed along x, usually numbered) or "y" (usually lettered), for messages
+ */
+public record GridAxis(String axis, List<String> names, List<Double> spacings) {
+    public GridAxis {
+        names = List.copyOf(names);
+        spacings = List.copyOf(spacings);
+        if (names.size() < 2) throw new InputError("grid." + axis, names.size(), "needs at least two grid lines");
+        if (spacings.size() != names.size() - 1)
+            throw new InputError("grid." + axis + ".spacings", spacings.size(), "must give one spacing between each pair of lines (" + (names.size() - 1) + ")");
+        Set<String> seen = new HashSet<>();
+        for (String n : names) {
+            if (n == null || n.isBlank()) throw new InputError("grid." + axis + ".names", "\"\"", "a grid line needs a name");
+            if (!seen.add(n)) throw new InputError("grid." + axis + ".names", n, "grid line named twice");
+        }
+        for (int i = 0; i < spacings.size(); i++) {
+            double s = spacings.get(i);
+            if (!Double.isFinite(s) || s <= 0)
+                throw new InputError("grid." + axis + ".spacings[" + names.get(i) + "-" + names.get(i + 1) + "]", s,
+                        "spacing must be a finite number greater than 0");
+        }
+    }
+
+    /** Builds an axis from line positions, which must rise strictly. */
+    public static GridAxis ofPositions(String axis, List<String> names, List<Double> positions) {
+        List<Double> s = new ArrayList<>();
+        for (int i = 1; i < positions.size(); i++) {
+            double d = positions.get(i) - positions.get(i - 1);
+            if (!(d > 0)) throw new InputError("grid." + axis + ".positions[" + names.get(i) + "]", positions.get(i),
+                    "grid lines must be in order, each past the one before (" + positions.get(i - 1) + ")");
+            s.add(d);
+        }
+        return new GridAxis(axis, names, s);
+    }
+
+    public int lines() { return names.size(); }
+
+    public int cells() { return names.size() - 1; }
+
+    public double position(int line) {
+        double p = 0;
+        for (int i = 0; i < line; i++) p += spacings.get(i);
+        return p;
+    }
+
+    public double spacing(int cell) { return spacings.get(cell); }
+
+    public double extent() { return position(lines() - 1); }
+
+    public String name(int line) { return names.get(line); }
+}

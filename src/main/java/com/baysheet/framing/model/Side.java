@@ -1,0 +1,4 @@
+package com.baysheet.framing.model;
+
+/** A side of a bay: north is +y, east is +x. */
+public enum Side { NORTH, SOUTH, EAST, WEST }
