@@ -57,13 +57,13 @@ public final class BeamLoads {
 
     public boolean isEmpty() { return nd == 0 && np == 0; }
 
-    int distributedCount() { return nd; }
-    int pointCount() { return np; }
-    double w(int i) { return w[i]; }
-    double a(int i) { return a[i]; }
-    double b(int i) { return b[i]; }
-    double p(int i) { return p[i]; }
-    double x(int i) { return x[i]; }
+    public int distributedCount() { return nd; }
+    public int pointCount() { return np; }
+    public double w(int i) { return w[i]; }
+    public double a(int i) { return a[i]; }
+    public double b(int i) { return b[i]; }
+    public double p(int i) { return p[i]; }
+    public double x(int i) { return x[i]; }
 
     private static double[] grow(double[] v) { return Arrays.copyOf(v, v.length * 2); }
 }

@@ -4,16 +4,19 @@ import java.util.List;
 
 /**
  * The calculation record: the single source of truth that pages, PDF sheets and the API render.
- * Inputs, ordered steps, results (the governing ones flagged in {@code governing}) and notes.
+ * Inputs, ordered steps, results (the keys of the governing ones in {@code governing}), notes, and the
+ * sketch a load diagram is drawn from.
  */
 public record CalcRecord(String subject, String edition, String units, List<Entry> inputs,
-                         List<Step> steps, List<Entry> results, List<String> governing, List<Note> notes) {
+                         List<Step> steps, List<Entry> results, List<String> governing, List<Note> notes,
+                         Sketch sketch) {
     public CalcRecord {
         inputs = List.copyOf(inputs);
         steps = List.copyOf(steps);
         results = List.copyOf(results);
         governing = List.copyOf(governing);
         notes = List.copyOf(notes);
+        if (sketch == null) sketch = Sketch.NONE;
     }
 
     /** A result by key, or NaN when absent. */

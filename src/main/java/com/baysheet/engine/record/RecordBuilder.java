@@ -17,6 +17,7 @@ public final class RecordBuilder {
     private final List<Entry> results = new ArrayList<>();
     private final List<String> governing = new ArrayList<>();
     private final List<Note> notes = new ArrayList<>();
+    private Sketch sketch = Sketch.NONE;
 
     public RecordBuilder(String subject, String edition, UnitSystem system) {
         this.subject = subject;
@@ -73,7 +74,12 @@ public final class RecordBuilder {
         return this;
     }
 
+    public RecordBuilder sketch(Sketch s) {
+        this.sketch = s;
+        return this;
+    }
+
     public CalcRecord build() {
-        return new CalcRecord(subject, edition, system.name(), inputs, steps, results, governing, notes);
+        return new CalcRecord(subject, edition, system.name(), inputs, steps, results, governing, notes, sketch);
     }
 }
