@@ -1,0 +1,44 @@
+package com.baysheet.framing;
+
+import com.baysheet.framing.model.Building;
+import com.baysheet.framing.model.Level;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
+/**
+ * From a building model to every member and every column take-down. The whole building is recomputed on
+ * each call (see docs/benchmarks.md for why that is fast enough); the result is immutable.
+ */
+public final class Derivation {
+    private Derivation() {}
+
+    /** @throws com.baysheet.engine.InputError naming the level, grid line or bay where the model is wrong */
+    public static Derived derive(Building b) {
+        ModelCheck.validate(b);
+        List<Integer> order = new ArrayList<>();
+        for (int k = 0; k < b.levels().size(); k++) order.add(k);
+        order.sort(Comparator.comparingDouble((Integer k) -> b.levels().get(k).elevation()).reversed());
+
+        List<LevelPlan> plans = new ArrayList<>();
+        List<LevelFraming> framings = new ArrayList<>();
+        List<DerivedMember> members = new ArrayList<>();
+        for (int k : order) {
+            Level l = b.levels().get(k);
+            LevelPlan plan = new LevelPlan("L" + k, l, b.grid());
+            LevelFraming f = new LevelFraming(b.context(), plan).derive();
+            plans.add(plan);
+            framings.add(f);
+            members.addAll(f.members);
+        }
+        ColumnTakeDown down = new ColumnTakeDown(b.context(), plans, framings);
+        List<TakeDown> takeDowns = new ArrayList<>();
+        for (int i = 0; i < b.grid().x().lines(); i++)
+            for (int j = 0; j < b.grid().y().lines(); j++) {
+                TakeDown t = down.stack(i, j, members);
+                if (t != null) takeDowns.add(t);
+            }
+        return new Derived(b, members, takeDowns);
+    }
+}

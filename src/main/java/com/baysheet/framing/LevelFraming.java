@@ -1,0 +1,141 @@
+package com.baysheet.framing;
+
+import com.baysheet.engine.code.MemberKind;
+import com.baysheet.engine.load.AreaStrip;
+import com.baysheet.engine.load.MemberInput;
+import com.baysheet.engine.load.Support;
+import com.baysheet.engine.member.EndShare;
+import com.baysheet.engine.member.MemberCalculation;
+import com.baysheet.engine.member.MemberResult;
+import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.framing.model.Bay;
+import com.baysheet.framing.model.Direction;
+import com.baysheet.framing.model.Side;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * One level's beams and girders, by the half-way rule: infill beams carry a strip one beam spacing wide;
+ * grid-line members parallel to the infill beams carry half a spacing (plus any cantilever slab past the
+ * edge); girders, the grid-line members across the beams, carry the beams' unreduced reactions as point
+ * loads. The members' end shares are handed to the columns at the grid points.
+ */
+final class LevelFraming {
+    final List<DerivedMember> members = new ArrayList<>();
+    /** End shares arriving at each grid point, indexed [x line][y line]. */
+    final List<EndShare>[][] atPoint;
+    private final CalcContext ctx;
+    private final LevelPlan plan;
+    private final Segment[][] alongX, alongY;
+
+    @SuppressWarnings("unchecked")
+    LevelFraming(CalcContext ctx, LevelPlan plan) {
+        this.ctx = ctx;
+        this.plan = plan;
+        int nx = plan.xCells(), ny = plan.yCells();
+        atPoint = new List[nx + 1][ny + 1];
+        alongX = new Segment[nx][ny + 1];
+        alongY = new Segment[nx + 1][ny];
+        for (int i = 0; i < nx; i++) for (int j = 0; j <= ny; j++) alongX[i][j] = new Segment(true, i, j, plan.x(i + 1) - plan.x(i));
+        for (int i = 0; i <= nx; i++) for (int j = 0; j < ny; j++) alongY[i][j] = new Segment(false, i, j, plan.y(j + 1) - plan.y(j));
+    }
+
+    LevelFraming derive() {
+        for (int c = 0; c < plan.xCells(); c++)
+            for (int r = 0; r < plan.yCells(); r++) {
+                Bay b = plan.floored(c, r);
+                if (b != null) bay(b);
+            }
+        for (Segment[] row : alongX) for (Segment s : row) if (s.loaded()) gridMember(s);
+        for (Segment[] row : alongY) for (Segment s : row) if (s.loaded()) gridMember(s);
+        return this;
+    }
+
+    private void bay(Bay b) {
+        int c = b.col(), r = b.row();
+        double x0 = plan.x(c), x1 = plan.x(c + 1), y0 = plan.y(r), y1 = plan.y(r + 1);
+        String name = plan.grid.bayName(c, r);
+        boolean beamsAlongX = b.framing().beams() == Direction.X;
+        int n = b.framing().infillBeams();
+        double beamLength = beamsAlongX ? x1 - x0 : y1 - y0;
+        double s = (beamsAlongX ? y1 - y0 : x1 - x0) / (n + 1);
+        // grid-line members parallel to the beams: half a spacing each
+        Segment lo = beamsAlongX ? alongX[c][r] : alongY[c][r];
+        Segment hi = beamsAlongX ? alongX[c][r + 1] : alongY[c + 1][r];
+        lo.strip(b.occupancy(), s / 2, b.deadLoad(), beamsAlongX ? new PlanRect(x0, y0, x1, y0 + s / 2) : new PlanRect(x0, y0, x0 + s / 2, y1), name);
+        hi.strip(b.occupancy(), s / 2, b.deadLoad(), beamsAlongX ? new PlanRect(x0, y1 - s / 2, x1, y1) : new PlanRect(x1 - s / 2, y0, x1, y1), name);
+        Segment startGirder = beamsAlongX ? alongY[c][r] : alongX[c][r];
+        Segment endGirder = beamsAlongX ? alongY[c + 1][r] : alongX[c][r + 1];
+        for (int k = 1; k <= n; k++) {
+            double t = k * s;
+            PlanLine line = beamsAlongX ? new PlanLine(x0, y0 + t, x1, y0 + t) : new PlanLine(x0 + t, y0, x0 + t, y1);
+            PlanRect trib = beamsAlongX ? new PlanRect(x0, y0 + t - s / 2, x1, y0 + t + s / 2) : new PlanRect(x0 + t - s / 2, y0, x0 + t + s / 2, y1);
+            String id = plan.id + "-bay" + c + "x" + r + "-b" + k;
+            String title = "Beam " + name + " #" + k;
+            MemberResult res = calc(title, MemberKind.INTERIOR_BEAM, beamLength, List.of(new AreaStrip(b.occupancy(), s, 0, beamLength, b.deadLoad())));
+            members.add(new DerivedMember(id, title, plan.level.name(), MemberRole.INFILL_BEAM, MemberKind.INTERIOR_BEAM, line,
+                    beamLength, s, Map.of(b.occupancy(), s * beamLength), s * beamLength, List.of(name), List.of(trib), res));
+            PlanRect startHalf = beamsAlongX ? new PlanRect(x0, y0 + t - s / 2, (x0 + x1) / 2, y0 + t + s / 2) : new PlanRect(x0 + t - s / 2, y0, x0 + t + s / 2, (y0 + y1) / 2);
+            PlanRect endHalf = beamsAlongX ? new PlanRect((x0 + x1) / 2, y0 + t - s / 2, x1, y0 + t + s / 2) : new PlanRect(x0 + t - s / 2, (y0 + y1) / 2, x0 + t + s / 2, y1);
+            startGirder.point(res.left().at(t), startHalf, name);
+            endGirder.point(res.right().at(t), endHalf, name);
+        }
+        for (Map.Entry<Side, Double> e : b.cantilevers().entrySet()) cantilever(b, e.getKey(), e.getValue(), name, x0, x1, y0, y1);
+    }
+
+    private void cantilever(Bay b, Side side, double len, String name, double x0, double x1, double y0, double y1) {
+        Segment seg;
+        PlanRect rect;
+        switch (side) {
+            case SOUTH -> { seg = alongX[b.col()][b.row()]; rect = new PlanRect(x0, y0 - len, x1, y0); }
+            case NORTH -> { seg = alongX[b.col()][b.row() + 1]; rect = new PlanRect(x0, y1, x1, y1 + len); }
+            case WEST -> { seg = alongY[b.col()][b.row()]; rect = new PlanRect(x0 - len, y0, x0, y1); }
+            default -> { seg = alongY[b.col() + 1][b.row()]; rect = new PlanRect(x1, y0, x1 + len, y1); }
+        }
+        seg.strip(b.occupancy(), len, b.deadLoad(), rect, name);
+        seg.cantilever = true;
+    }
+
+    private void gridMember(Segment s) {
+        int i = s.i, j = s.j;
+        Bay one = s.alongX ? plan.floored(i, j - 1) : plan.floored(i - 1, j);
+        Bay two = s.alongX ? plan.floored(i, j) : plan.floored(i, j);
+        boolean edge = one == null || two == null;
+        MemberKind kind = !edge ? MemberKind.INTERIOR_BEAM : s.cantilever ? MemberKind.EDGE_BEAM_CANTILEVER : MemberKind.EDGE_BEAM;
+        boolean girder = !s.points.isEmpty();
+        String line = s.alongX ? plan.grid.y().name(j) : plan.grid.x().name(i);
+        String between = s.alongX ? plan.grid.x().name(i) + "-" + plan.grid.x().name(i + 1)
+                : plan.grid.y().name(j) + "-" + plan.grid.y().name(j + 1);
+        String title = (girder ? "Girder " : "Beam ") + line + "/" + between;
+        String id = plan.id + (s.alongX ? "-h" : "-v") + i + "x" + j;
+        MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(s.length), 1, s.strips,
+                List.of(), s.points, 0, roofSlope(), Double.NaN, plan.level.roof());
+        MemberResult res = MemberCalculation.calculate(ctx, in);
+        PlanLine pl = s.alongX ? new PlanLine(plan.x(i), plan.y(j), plan.x(i + 1), plan.y(j))
+                : new PlanLine(plan.x(i), plan.y(j), plan.x(i), plan.y(j + 1));
+        Map<String, Double> areas = new java.util.LinkedHashMap<>();
+        for (AreaStrip st : s.strips) areas.merge(st.occupancy(), st.area(), Double::sum);
+        for (var p : s.points) for (var a : p.areas()) areas.merge(a.occupancy(), a.area(), Double::sum);
+        double width = s.length > 0 ? s.direct / s.length : 0;
+        members.add(new DerivedMember(id, title, plan.level.name(), girder ? MemberRole.GIRDER : MemberRole.GRID_BEAM, kind, pl,
+                s.length, girder ? 0 : width, areas, s.direct, s.bays, s.outline, res));
+        arrive(i, j, res.left());
+        if (s.alongX) arrive(i + 1, j, res.right());
+        else arrive(i, j + 1, res.right());
+    }
+
+    private MemberResult calc(String title, MemberKind kind, double span, List<AreaStrip> strips) {
+        MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(span), 1, strips, List.of(),
+                List.of(), 0, roofSlope(), Double.NaN, plan.level.roof());
+        return MemberCalculation.calculate(ctx, in);
+    }
+
+    private double roofSlope() { return plan.level.roofSlope(); }
+
+    private void arrive(int i, int j, EndShare share) {
+        if (atPoint[i][j] == null) atPoint[i][j] = new ArrayList<>();
+        atPoint[i][j].add(share);
+    }
+}

@@ -1,0 +1,67 @@
+package com.baysheet.framing;
+
+import com.baysheet.framing.model.Bay;
+import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.Level;
+import com.baysheet.framing.model.Side;
+
+/** A level's bays indexed by grid cell, with the geometry the derivation asks of it. */
+final class LevelPlan {
+    final Level level;
+    final Grid grid;
+    final String id;
+    private final Bay[][] cells;
+
+    LevelPlan(String id, Level level, Grid grid) {
+        this.id = id;
+        this.level = level;
+        this.grid = grid;
+        this.cells = new Bay[grid.x().cells()][grid.y().cells()];
+        this.xs = positions(grid.x());
+        this.ys = positions(grid.y());
+        for (Bay b : level.bays()) cells[b.col()][b.row()] = b;
+    }
+
+    /** The floored bay at a cell, or null for no bay, an opening or a cell outside the grid. */
+    Bay floored(int col, int row) {
+        if (col < 0 || row < 0 || col >= cells.length || row >= cells[0].length) return null;
+        Bay b = cells[col][row];
+        return b == null || b.opening() ? null : b;
+    }
+
+    /** The neighbouring cell's floored bay across a side. */
+    Bay across(Bay b, Side s) {
+        return switch (s) {
+            case NORTH -> floored(b.col(), b.row() + 1);
+            case SOUTH -> floored(b.col(), b.row() - 1);
+            case EAST -> floored(b.col() + 1, b.row());
+            case WEST -> floored(b.col() - 1, b.row());
+        };
+    }
+
+    double x(int line) { return xs[line]; }
+
+    double y(int line) { return ys[line]; }
+
+    int xCells() { return cells.length; }
+
+    int yCells() { return cells[0].length; }
+
+    /** Floored bays around a grid point, in the order SW, SE, NW, NE. */
+    int flooredAround(int i, int j) {
+        int n = 0;
+        if (floored(i - 1, j - 1) != null) n++;
+        if (floored(i, j - 1) != null) n++;
+        if (floored(i - 1, j) != null) n++;
+        if (floored(i, j) != null) n++;
+        return n;
+    }
+
+    private final double[] xs, ys;
+
+    private static double[] positions(com.baysheet.framing.model.GridAxis axis) {
+        double[] p = new double[axis.lines()];
+        for (int i = 1; i < p.length; i++) p[i] = p[i - 1] + axis.spacing(i - 1);
+        return p;
+    }
+}

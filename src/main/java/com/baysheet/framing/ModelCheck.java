@@ -1,0 +1,67 @@
+package com.baysheet.framing;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.framing.model.Bay;
+import com.baysheet.framing.model.Building;
+import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.Level;
+import com.baysheet.framing.model.Side;
+
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Whole-model checks that no single record can make: bays inside the grid and not given twice, a floor on
+ * every level, known occupancies, cantilevers only past the building edge, a slope where a roof load acts.
+ * Each error names the level and the bay.
+ */
+public final class ModelCheck {
+    private ModelCheck() {}
+
+    public static void validate(Building b) {
+        if (b.levels().isEmpty()) throw new InputError("levels", 0, "a building needs at least one level");
+        Set<String> names = new HashSet<>();
+        Set<Double> elevations = new HashSet<>();
+        for (Level l : b.levels()) {
+            if (!names.add(l.name())) throw new InputError("levels", l.name(), "two levels have this name");
+            if (!elevations.add(l.elevation()))
+                throw new InputError("levels[" + l.name() + "].elevation", l.elevation(), "another level has this elevation");
+            level(b, l);
+        }
+    }
+
+    private static void level(Building b, Level l) {
+        Grid g = b.grid();
+        String at = "levels[" + l.name() + "]";
+        Set<Long> cells = new HashSet<>();
+        boolean anyFloor = false;
+        for (Bay bay : l.bays()) {
+            if (bay.col() >= g.x().cells() || bay.row() >= g.y().cells())
+                throw new InputError(at + ".bays[" + bay.col() + "," + bay.row() + "]", bay.col() + "," + bay.row(),
+                        "bay lies outside the grid (" + g.x().cells() + " × " + g.y().cells() + " bays)");
+            String name = g.bayName(bay.col(), bay.row());
+            if (!cells.add((long) bay.col() << 32 | bay.row()))
+                throw new InputError(at + ".bays[" + name + "]", name, "bay given twice on this level");
+            if (bay.opening()) continue;
+            anyFloor = true;
+            if (!b.context().catalogue().contains(bay.occupancy()))
+                throw new InputError(at + ".bays[" + name + "].occupancy", bay.occupancy(), "is not in the occupancy catalogue");
+            if (b.context().catalogue().get(bay.occupancy()).isRoof() && Double.isNaN(l.roofSlope()))
+                throw new InputError(at + ".roofSlope", "nothing", "is required: bay " + name + " carries a roof live load");
+        }
+        if (!anyFloor) throw new InputError(at + ".bays", l.bays().size(), "level " + l.name() + " has no floor at all");
+        LevelPlan plan = new LevelPlan("", l, g);
+        for (Bay bay : l.bays()) {
+            for (Map.Entry<Side, Double> c : bay.cantilevers().entrySet()) {
+                if (plan.across(bay, c.getKey()) != null)
+                    throw new InputError(at + ".bays[" + g.bayName(bay.col(), bay.row()) + "].cantilevers." + c.getKey().name().toLowerCase(),
+                            c.getValue(), "a cantilever slab must project past the building edge, not over the next bay");
+            }
+        }
+    }
+
+    /** For messages. */
+    static String list(List<String> items) { return String.join(", ", items); }
+}

@@ -1,0 +1,49 @@
+package com.baysheet.framing;
+
+import com.baysheet.engine.load.AreaStrip;
+import com.baysheet.engine.load.PointLoad;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * A grid-line member between two adjacent grid points while its loads are gathered from the bays on
+ * either side: slab strips (with their plan outlines) and infill beam reactions.
+ */
+final class Segment {
+    final boolean alongX;
+    final int i, j;
+    final double length;
+    final List<AreaStrip> strips = new ArrayList<>();
+    final List<PointLoad> points = new ArrayList<>();
+    final List<PlanRect> outline = new ArrayList<>();
+    final List<String> bays = new ArrayList<>();
+    boolean cantilever;
+    double direct;
+
+    Segment(boolean alongX, int i, int j, double length) {
+        this.alongX = alongX;
+        this.i = i;
+        this.j = j;
+        this.length = length;
+    }
+
+    void strip(String occupancy, double width, double dead, PlanRect rect, String bay) {
+        strips.add(new AreaStrip(occupancy, width, 0, length, dead));
+        outline.add(rect);
+        direct += width * length;
+        serves(bay);
+    }
+
+    void point(PointLoad p, PlanRect rect, String bay) {
+        points.add(p);
+        outline.add(rect);
+        serves(bay);
+    }
+
+    boolean loaded() { return !strips.isEmpty() || !points.isEmpty(); }
+
+    private void serves(String bay) {
+        if (!bays.contains(bay)) bays.add(bay);
+    }
+}
