@@ -34,12 +34,13 @@ public final class OccupancyCatalogue {
     public static OccupancyCatalogue builtIn() { return BUILT_IN; }
 
     public Occupancy get(String id) {
-        Occupancy o = byId.get(id);
+        // an immutable map throws on a null key: a missing id is the user's error, not ours
+        Occupancy o = id == null ? null : byId.get(id);
         if (o == null) throw new InputError("occupancy", id, "is not in the occupancy catalogue");
         return o;
     }
 
-    public boolean contains(String id) { return byId.containsKey(id); }
+    public boolean contains(String id) { return id != null && byId.containsKey(id); }
 
     public Collection<Occupancy> all() {
         return java.util.Arrays.stream(order).map(byId::get).toList();
@@ -66,6 +67,8 @@ public final class OccupancyCatalogue {
         Check.positive("uniform", uniform);
         Check.nonNegative("concentrated", concentrated);
         Check.positive("contactSide", contactSide);
+        Check.present("rule", rule);
+        Check.present("units", system);
         boolean us = system == UnitSystem.US;
         double psf = us ? uniform : Convert.toUs(Quantity.PRESSURE, uniform);
         double kpa = us ? Convert.toSi(Quantity.PRESSURE, uniform) : uniform;
