@@ -3,13 +3,9 @@ package com.baysheet.framing;
 import com.baysheet.engine.code.MemberKind;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
-import com.baysheet.engine.member.MemberCalculation;
 import com.baysheet.engine.member.MemberResult;
 import com.baysheet.engine.record.CalcRecord;
-import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.reduction.CalcContext;
-import com.baysheet.engine.units.Display;
-import com.baysheet.engine.units.Quantity;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -21,11 +17,13 @@ import java.util.List;
  */
 final class ColumnTakeDown {
     private final CalcContext ctx;
+    private final MemberCache cache;
     private final List<LevelPlan> plans;        // top down
     private final List<LevelFraming> framings;  // same order
 
-    ColumnTakeDown(CalcContext ctx, List<LevelPlan> plans, List<LevelFraming> framings) {
+    ColumnTakeDown(CalcContext ctx, MemberCache cache, List<LevelPlan> plans, List<LevelFraming> framings) {
         this.ctx = ctx;
+        this.cache = cache;
         this.plans = plans;
         this.framings = framings;
     }
@@ -33,10 +31,9 @@ final class ColumnTakeDown {
     /** The stack at grid point (i, j), or null where no level frames into it. Adds each level's column to {@code out}. */
     TakeDown stack(int i, int j, List<DerivedMember> out) {
         String point = plans.get(0).grid.pointName(i, j);
-        String title = "Column " + point + " take-down";
-        RecordBuilder rec = new RecordBuilder(title, ctx.edition().id(), ctx.system());
         StackLoad total = new StackLoad();
         List<TakeDown.Row> rows = new ArrayList<>();
+        List<CalcRecord> records = new ArrayList<>();
         int floors = 0;
         double slope = Double.NaN, floorArea = 0;
         ColumnClass cls = null;
@@ -57,41 +54,25 @@ final class ColumnTakeDown {
             String name = "Column " + point + " below " + p.level.name();
             MemberInput in = new MemberInput(name + " (" + cls.label() + ")", kind, new Support.Axial(), Math.max(1, floors), List.of(),
                     List.of(), List.of(total.asPointLoad()), 0, slope, Double.NaN, false);
-            MemberResult res = MemberCalculation.calculate(ctx, in);
+            MemberResult res = cache.calculate(in);
             String id = p.id + "-c" + i + "x" + j;
             out.add(new DerivedMember(id, name, p.level.name(), MemberRole.COLUMN, kind,
                     new PlanLine(p.x(i), p.y(j), p.x(i), p.y(j)), 0, 0, here.areas, 0, bays(p, i, j), outline(p, i, j), res));
-            rows.add(row(p, id, name, res.record(), areaHere, floorArea, kind, floors, here.dead, rec));
+            rows.add(row(p, id, res.record(), areaHere, floorArea, kind, floors, here.dead));
+            records.add(res.record());
         }
         if (rows.isEmpty()) return null;
-        rec.caution("Results must be checked by a licensed engineer; the adopted local code and its amendments govern.",
-                com.baysheet.engine.record.Clause.NONE);
-        return new TakeDown("c" + i + "x" + j, point, rows, rec.build());
+        CalcContext c = ctx; // the writer keeps only what it needs, not this take-down's working state
+        return new TakeDown("c" + i + "x" + j, point, rows,
+                () -> TakeDownRecord.write(c, "Column " + point + " take-down", rows, records));
     }
 
-    private TakeDown.Row row(LevelPlan p, String id, String member, CalcRecord r, double areaHere, double cumArea, MemberKind kind,
-                             int floors, double deadHere, RecordBuilder rec) {
-        var ed = ctx.edition();
-        double kll = ed.kll(kind);
-        double factor = factor(r);
-        String at = "@" + p.level.name();
-        rec.step("ΣA_T" + at, p.level.name() + ": floor area supported (" + floors + " floor" + (floors == 1 ? "" : "s") + ")",
-                "ΣA_T", "level adds " + rec.show(areaHere, Quantity.AREA), cumArea, Quantity.AREA, ed.clause("reduction.multifloor"));
-        rec.step("K_LL·ΣA_T" + at, p.level.name() + ": influence area", "K_LL × ΣA_T", Display.sig3(kll) + " × " + rec.num(cumArea, Quantity.AREA),
-                kll * cumArea, Quantity.AREA, ed.clause("reduction.kll"));
-        rec.step("f" + at, p.level.name() + ": reduction factor on ordinary floor live load", "f = max(0.25 + 15/√(K_LL·ΣA_T), limit)",
-                "see " + member, factor, Quantity.RATIO, ed.clause("reduction.eq"));
-        double d = r.result("D.P"), l0 = r.result("L0.P"), l = r.result("L.P"), lr = r.result("Lr.P");
-        rec.step("P_D" + at, p.level.name() + ": dead load", "Σ D", "level adds " + rec.show(deadHere, Quantity.FORCE), d, Quantity.FORCE, ed.clause("combo.lrfd"));
-        rec.step("P_L" + at, p.level.name() + ": floor live load, reduced (unreduced " + rec.show(l0, Quantity.FORCE) + ")", "Σ f_i L0 A_i",
-                "see " + member, l, Quantity.FORCE, ed.clause("reduction.eq"));
-        if (lr > 0) rec.step("P_Lr" + at, p.level.name() + ": roof live load", "Σ Lr A_i", "see " + member, lr, Quantity.FORCE, ed.clause("roof.reduction"));
-        double pu = rec.step("P_u" + at, p.level.name() + ": factored axial load", r.step("P_u").formula(), r.step("P_u").substituted(),
-                r.result("LRFD.P"), Quantity.FORCE, ed.clause("combo.lrfd"));
-        double pa = rec.step("P_a" + at, p.level.name() + ": service axial load", r.step("P_a").formula(), r.step("P_a").substituted(),
-                r.result("ASD.P"), Quantity.FORCE, ed.clause("combo.asd"));
-        return new TakeDown.Row(p.level.name(), id, areaHere, cumArea, kll, kll * cumArea, floors, factor,
-                deadHere, d, l0, l, lr, pu, combo(r, "LRFD.P"), pa, combo(r, "ASD.P"));
+    private TakeDown.Row row(LevelPlan p, String id, CalcRecord r, double areaHere, double cumArea, MemberKind kind,
+                             int floors, double deadHere) {
+        double kll = ctx.edition().kll(kind);
+        return new TakeDown.Row(p.level.name(), id, areaHere, cumArea, kll, kll * cumArea, floors, factor(r),
+                deadHere, r.result("D.P"), r.result("L0.P"), r.result("L.P"), r.result("Lr.P"),
+                r.result("LRFD.P"), combo(r, "LRFD.P"), r.result("ASD.P"), combo(r, "ASD.P"));
     }
 
     private double floorArea(StackLoad s) {

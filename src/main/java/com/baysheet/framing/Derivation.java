@@ -24,15 +24,16 @@ public final class Derivation {
         List<LevelPlan> plans = new ArrayList<>();
         List<LevelFraming> framings = new ArrayList<>();
         List<DerivedMember> members = new ArrayList<>();
+        MemberCache cache = new MemberCache(b.context());
         for (int k : order) {
             Level l = b.levels().get(k);
             LevelPlan plan = new LevelPlan("L" + k, l, b.grid());
-            LevelFraming f = new LevelFraming(b.context(), plan).derive();
+            LevelFraming f = new LevelFraming(cache, plan).derive();
             plans.add(plan);
             framings.add(f);
             members.addAll(f.members);
         }
-        ColumnTakeDown down = new ColumnTakeDown(b.context(), plans, framings);
+        ColumnTakeDown down = new ColumnTakeDown(b.context(), cache, plans, framings);
         List<TakeDown> takeDowns = new ArrayList<>();
         for (int i = 0; i < b.grid().x().lines(); i++)
             for (int j = 0; j < b.grid().y().lines(); j++) {

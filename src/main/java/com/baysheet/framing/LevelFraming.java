@@ -5,9 +5,7 @@ import com.baysheet.engine.load.AreaStrip;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.member.EndShare;
-import com.baysheet.engine.member.MemberCalculation;
 import com.baysheet.engine.member.MemberResult;
-import com.baysheet.engine.reduction.CalcContext;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Direction;
 import com.baysheet.framing.model.Side;
@@ -26,13 +24,13 @@ final class LevelFraming {
     final List<DerivedMember> members = new ArrayList<>();
     /** End shares arriving at each grid point, indexed [x line][y line]. */
     final List<EndShare>[][] atPoint;
-    private final CalcContext ctx;
+    private final MemberCache cache;
     private final LevelPlan plan;
     private final Segment[][] alongX, alongY;
 
     @SuppressWarnings("unchecked")
-    LevelFraming(CalcContext ctx, LevelPlan plan) {
-        this.ctx = ctx;
+    LevelFraming(MemberCache cache, LevelPlan plan) {
+        this.cache = cache;
         this.plan = plan;
         int nx = plan.xCells(), ny = plan.yCells();
         atPoint = new List[nx + 1][ny + 1];
@@ -112,7 +110,7 @@ final class LevelFraming {
         String id = plan.id + (s.alongX ? "-h" : "-v") + i + "x" + j;
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(s.length), 1, s.strips,
                 List.of(), s.points, 0, roofSlope(), Double.NaN, plan.level.roof());
-        MemberResult res = MemberCalculation.calculate(ctx, in);
+        MemberResult res = cache.calculate(in);
         PlanLine pl = s.alongX ? new PlanLine(plan.x(i), plan.y(j), plan.x(i + 1), plan.y(j))
                 : new PlanLine(plan.x(i), plan.y(j), plan.x(i), plan.y(j + 1));
         Map<String, Double> areas = new java.util.LinkedHashMap<>();
@@ -129,7 +127,7 @@ final class LevelFraming {
     private MemberResult calc(String title, MemberKind kind, double span, List<AreaStrip> strips) {
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(span), 1, strips, List.of(),
                 List.of(), 0, roofSlope(), Double.NaN, plan.level.roof());
-        return MemberCalculation.calculate(ctx, in);
+        return cache.calculate(in);
     }
 
     private double roofSlope() { return plan.level.roofSlope(); }

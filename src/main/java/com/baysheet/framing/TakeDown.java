@@ -3,22 +3,47 @@ package com.baysheet.framing;
 import com.baysheet.engine.record.CalcRecord;
 
 import java.util.List;
+import java.util.function.Supplier;
 
 /**
  * A column stack taken down the building, one row per level from the top down, and the take-down's own
- * record (its steps are the per-level table, with clause numbers).
- *
- * @param gridPoint the grid intersection, e.g. "B/2"
+ * record (its steps are the per-level table, with clause numbers). The rows hold every number; the record
+ * is written from them when first asked for, since a large building has tens of thousands of rows and
+ * most are never shown.
  */
-public record TakeDown(String id, String gridPoint, List<Row> rows, CalcRecord record) {
-    public TakeDown {
-        rows = List.copyOf(rows);
+public final class TakeDown {
+    private final String id;
+    private final String gridPoint;
+    private final List<Row> rows;
+    private Supplier<CalcRecord> writer;
+    private CalcRecord record;
+
+    /** @param gridPoint the grid intersection, e.g. "B/2" */
+    public TakeDown(String id, String gridPoint, List<Row> rows, Supplier<CalcRecord> writer) {
+        this.id = id;
+        this.gridPoint = gridPoint;
+        this.rows = List.copyOf(rows);
+        this.writer = writer;
+    }
+
+    public String id() { return id; }
+
+    public String gridPoint() { return gridPoint; }
+
+    public List<Row> rows() { return rows; }
+
+    public synchronized CalcRecord record() {
+        if (record == null) {
+            record = writer.get();
+            writer = null;
+        }
+        return record;
     }
 
     /**
      * One level of the stack. Areas in ft² or m², loads in lb or kN (system base units).
      *
-     * @param member the column member at this level, whose record holds the full calculation
+     * @param member the id of the column member at this level, whose record holds the full calculation
      */
     public record Row(String level, String member, double areaAtLevel, double cumulativeArea, double kll,
                       double influenceArea, int floorsSupported, double factor, double deadAtLevel, double dead,

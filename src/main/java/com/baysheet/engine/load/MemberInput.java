@@ -61,6 +61,10 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
         return new MemberInput(subject, kind, new Support.Axial(), floors, List.of(), areas, List.of(), 0, Double.NaN, Double.NaN, false);
     }
 
+    public MemberInput withSubject(String s) {
+        return new MemberInput(s, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof);
+    }
+
     public MemberInput withRoofSlope(double slope) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, slope, stiffness, onRoof);
     }

@@ -19,6 +19,11 @@ public record CalcRecord(String subject, String edition, String units, List<Entr
         if (sketch == null) sketch = Sketch.NONE;
     }
 
+    /** The same record under another subject (the framing model reuses one calculation for identical members). */
+    public CalcRecord withSubject(String s) {
+        return s.equals(subject) ? this : new CalcRecord(s, edition, units, inputs, steps, results, governing, notes, sketch);
+    }
+
     /** A result by key, or NaN when absent. */
     public double result(String key) {
         for (Entry e : results) if (e.key().equals(key)) return e.value();
