@@ -1,0 +1,60 @@
+package com.baysheet.review;
+
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.record.Entry;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * What changed between two revisions of a sheet: the inputs and the results whose value or unit differ,
+ * and those present in only one, side by side in the order of the later record (then the earlier one's
+ * leftovers). Values are compared at full precision; the shown text is what the page prints.
+ */
+public record RevisionComparison(List<Change> inputs, List<Change> results, int unchangedInputs, int unchangedResults) {
+    public enum Kind { CHANGED, ADDED, REMOVED }
+
+    /** One entry side by side; {@code before} or {@code after} is blank where the entry is absent. */
+    public record Change(String key, String label, String before, String after, Kind kind) {}
+
+    public RevisionComparison {
+        inputs = List.copyOf(inputs);
+        results = List.copyOf(results);
+    }
+
+    public static RevisionComparison of(CalcRecord before, CalcRecord after) {
+        List<Change> in = diff(before.inputs(), after.inputs());
+        List<Change> out = diff(before.results(), after.results());
+        return new RevisionComparison(in, out, unchanged(after.inputs(), in), unchanged(after.results(), out));
+    }
+
+    public boolean same() { return inputs.isEmpty() && results.isEmpty(); }
+
+    private static List<Change> diff(List<Entry> before, List<Entry> after) {
+        Map<String, Entry> old = new LinkedHashMap<>();
+        for (Entry e : before) old.put(e.key(), e);
+        List<Change> changes = new ArrayList<>();
+        for (Entry now : after) {
+            Entry was = old.remove(now.key());
+            if (was == null) changes.add(new Change(now.key(), now.label(), "", shown(now), Kind.ADDED));
+            else if (differs(was, now)) changes.add(new Change(now.key(), now.label(), shown(was), shown(now), Kind.CHANGED));
+        }
+        for (Entry gone : old.values()) changes.add(new Change(gone.key(), gone.label(), shown(gone), "", Kind.REMOVED));
+        return changes;
+    }
+
+    private static boolean differs(Entry a, Entry b) {
+        return Double.compare(a.value(), b.value()) != 0 || !a.unit().equals(b.unit()) || !a.shown().equals(b.shown());
+    }
+
+    private static String shown(Entry e) {
+        return e.unit().isBlank() || e.shown().endsWith(e.unit()) ? e.shown() : e.shown() + " " + e.unit();
+    }
+
+    private static int unchanged(List<Entry> after, List<Change> changes) {
+        long touched = changes.stream().filter(c -> c.kind() != Kind.REMOVED).count();
+        return after.size() - (int) touched;
+    }
+}

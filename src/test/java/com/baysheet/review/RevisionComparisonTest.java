@@ -1,0 +1,47 @@
+package com.baysheet.review;
+
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.record.Entry;
+import com.baysheet.engine.record.Sketch;
+import org.junit.jupiter.api.Test;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+class RevisionComparisonTest {
+    @Test
+    void identicalRecordsHaveNoChanges() {
+        RevisionComparison c = RevisionComparison.of(Sheets.record(20, 40), Sheets.record(20, 40));
+        assertThat(c.same()).isTrue();
+        assertThat(c.unchangedInputs()).isEqualTo(2);
+        assertThat(c.unchangedResults()).isEqualTo(2);
+    }
+
+    @Test
+    void showsChangedInputsAndResultsSideBySide() {
+        RevisionComparison c = RevisionComparison.of(Sheets.record(20, 40), Sheets.record(24, 38.5));
+        assertThat(c.inputs()).containsExactly(
+                new RevisionComparison.Change("span", "Span", "20.0 ft", "24.0 ft", RevisionComparison.Kind.CHANGED));
+        assertThat(c.results()).extracting(RevisionComparison.Change::key).containsExactly("L");
+        assertThat(c.results().get(0).before()).isEqualTo("40.0 psf");
+        assertThat(c.results().get(0).after()).isEqualTo("38.5 psf");
+        assertThat(c.unchangedInputs()).isEqualTo(1);
+    }
+
+    @Test
+    void listsEntriesAddedAndRemoved() {
+        CalcRecord a = Sheets.record(20, 40);
+        List<Entry> inputs = new ArrayList<>(a.inputs().subList(0, 1));
+        inputs.add(new Entry("P", "Point load", 2, "kip", "2"));
+        CalcRecord b = new CalcRecord(a.subject(), a.edition(), a.units(), inputs, a.steps(), a.results(), a.governing(),
+                a.notes(), Sketch.NONE);
+        RevisionComparison c = RevisionComparison.of(a, b);
+        assertThat(c.inputs()).extracting(RevisionComparison.Change::kind)
+                .containsExactly(RevisionComparison.Kind.ADDED, RevisionComparison.Kind.REMOVED);
+        assertThat(c.inputs().get(0).before()).isEmpty();
+        assertThat(c.inputs().get(1).after()).isEmpty();
+        assertThat(c.inputs().get(1).key()).isEqualTo("L0");
+    }
+}
