@@ -1,0 +1,25 @@
+package com.baysheet.sheet;
+
+import com.baysheet.engine.InputError;
+
+import java.util.List;
+
+/**
+ * A calculation package: cover (project data and design criteria), index, member sheets grouped by level
+ * and member kind, column take-downs and the revision log, all under one title block.
+ *
+ * @param title what the package covers ("Project package", "Level 2 package")
+ */
+public record CalcPackage(SheetHeader header, String title, DesignCriteria criteria, List<MemberSheet> sheets,
+                          List<TakeDownTable> takeDowns, List<Revision> revisions) {
+    public CalcPackage {
+        if (header == null) throw new InputError("header", "none", "a package needs its title block");
+        if (title == null || title.isBlank()) throw new InputError("title", "\"\"", "a package needs a title");
+        if (criteria == null) throw new InputError("criteria", "none", "a package needs its design criteria");
+        sheets = List.copyOf(sheets);
+        takeDowns = List.copyOf(takeDowns);
+        revisions = List.copyOf(revisions);
+        if (sheets.isEmpty() && takeDowns.isEmpty())
+            throw new InputError("sheets", 0, "a package needs at least one member sheet or take-down");
+    }
+}

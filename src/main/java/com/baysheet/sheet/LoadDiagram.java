@@ -1,0 +1,169 @@
+package com.baysheet.sheet;
+
+import com.baysheet.engine.record.Sketch;
+import com.baysheet.engine.units.Display;
+import com.baysheet.engine.units.Quantity;
+import com.baysheet.engine.units.UnitSystem;
+import com.lowagie.text.Element;
+import com.lowagie.text.pdf.PdfContentByte;
+import com.lowagie.text.pdf.PdfTemplate;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The member drawn as a hand calculation sketches it: the beam to scale along its length, its supports,
+ * the distributed loads as blocks (stacked where they overlap) and the point loads as arrows, each with
+ * its dead and live values, the service reactions below, and the span dimensioned. Values come from the
+ * record's sketch and are only converted to the sheet's units for labelling.
+ */
+final class LoadDiagram {
+    static final float WIDTH = 330, HEIGHT = 160;
+    private static final float LEFT = 34, RIGHT = WIDTH - 34, BEAM = 66, ROW = 17;
+    private static final int MAX_ROWS = 4;
+
+    private final Fonts fonts;
+    private final UnitSystem system;
+    private final Sketch s;
+    private final PdfTemplate t;
+
+    private LoadDiagram(Fonts fonts, UnitSystem system, Sketch s, PdfTemplate t) {
+        this.fonts = fonts;
+        this.system = system;
+        this.s = s;
+        this.t = t;
+    }
+
+    static PdfTemplate draw(PdfContentByte page, Fonts fonts, UnitSystem system, Sketch s) {
+        PdfTemplate t = page.createTemplate(WIDTH, HEIGHT);
+        new LoadDiagram(fonts, system, s, t).draw();
+        return t;
+    }
+
+    private float x(double pos) { return (float) (LEFT + (RIGHT - LEFT) * pos / s.length()); }
+
+    private void draw() {
+        t.setColorStroke(Fonts.INK);
+        t.setColorFill(Fonts.INK);
+        distributed();
+        points();
+        t.setLineWidth(2.2f);
+        Drawing.line(t, x(0), BEAM, x(s.length()), BEAM);
+        t.setLineWidth(0.6f);
+        supports();
+        dimensions();
+    }
+
+    private void distributed() {
+        List<double[]> rows = new ArrayList<>();   // the right end reached so far in each stacked row
+        int n = Math.min(s.distributed().size(), MAX_ROWS);
+        for (int i = 0; i < n; i++) {
+            Sketch.Segment g = s.distributed().get(i);
+            int row = 0;
+            while (row < rows.size() && rows.get(row)[0] > g.from() + 1e-9) row++;
+            if (row == rows.size()) rows.add(new double[]{g.to()});
+            else rows.get(row)[0] = g.to();
+            float y0 = BEAM + 3 + row * ROW, x0 = x(g.from()), x1 = x(g.to());
+            t.setLineWidth(0.5f);
+            t.rectangle(x0, y0 + 4, x1 - x0, 7);
+            t.stroke();
+            int arrows = Math.max(2, (int) ((x1 - x0) / 14));
+            for (int k = 0; k <= arrows; k++) {
+                float xa = x0 + (x1 - x0) * k / arrows;
+                Drawing.arrow(t, xa, y0 + 11, xa, y0 + 1, 2.5f);
+            }
+            String label = "w_D " + Display.sig3(Quantity.LINE_LOAD.unit(system).fromBase(g.dead())) + "  w_L "
+                    + Display.of(g.live(), Quantity.LINE_LOAD, system);
+            Text.show(t, fonts.regular, 5.5f, Fonts.INK, Element.ALIGN_CENTER,
+                    Text.fit(label, fonts.regular, 5.5f, Math.max(x1 - x0, 60)), (x0 + x1) / 2, y0 + 12.5f);
+        }
+        if (s.distributed().size() > MAX_ROWS)
+            Text.show(t, fonts.regular, 5.5f, Fonts.GREY, Element.ALIGN_LEFT,
+                    "+ " + (s.distributed().size() - MAX_ROWS) + " more distributed loads (see steps)", LEFT, HEIGHT - 8);
+    }
+
+    private void points() {
+        float top = HEIGHT - 18;
+        float lastX = -1000;
+        int level = 0;
+        for (Sketch.Point p : s.points()) {
+            float xp = x(p.x());
+            level = xp - lastX < 48 ? 1 - level : 0;   // alternate label heights where arrows crowd
+            lastX = xp;
+            t.setLineWidth(0.9f);
+            Drawing.arrow(t, xp, top - level * 8, xp, BEAM + 1.5f, 4f);
+            String label = "P_D " + Display.sig3(Quantity.FORCE.unit(system).fromBase(p.dead())) + "  P_L "
+                    + Display.of(p.live(), Quantity.FORCE, system);
+            Text.show(t, fonts.regular, 5.5f, Fonts.INK, Element.ALIGN_CENTER, label, clampLabel(xp), top + 2 - level * 8);
+        }
+    }
+
+    private float clampLabel(float xp) { return Math.max(LEFT + 10, Math.min(RIGHT - 10, xp)); }
+
+    private void supports() {
+        if (s.support().equals("cantilever")) {
+            fixedEnd(x(0));
+            reaction(x(0), "R = " + force(s.leftReaction()));
+            return;
+        }
+        pin(x(0));
+        roller(x(s.span()));
+        reaction(x(0), "R1 = " + force(s.leftReaction()));
+        reaction(x(s.span()), "R2 = " + force(s.rightReaction()));
+    }
+
+    private String force(double v) { return Display.of(v, Quantity.FORCE, system); }
+
+    private void pin(float xs) {
+        t.moveTo(xs, BEAM - 1);
+        t.lineTo(xs - 6, BEAM - 11);
+        t.lineTo(xs + 6, BEAM - 11);
+        t.closePath();
+        t.stroke();
+        ground(xs, BEAM - 11);
+    }
+
+    private void roller(float xs) {
+        t.moveTo(xs, BEAM - 1);
+        t.lineTo(xs - 6, BEAM - 8);
+        t.lineTo(xs + 6, BEAM - 8);
+        t.closePath();
+        t.stroke();
+        t.circle(xs - 3, BEAM - 9.5f, 1.5f);
+        t.circle(xs + 3, BEAM - 9.5f, 1.5f);
+        t.stroke();
+        ground(xs, BEAM - 11);
+    }
+
+    private void ground(float xs, float y) {
+        Drawing.line(t, xs - 9, y, xs + 9, y);
+        for (float h = xs - 8; h < xs + 9; h += 3) Drawing.line(t, h, y, h - 2.5f, y - 2.5f);
+    }
+
+    private void fixedEnd(float xs) {
+        t.setLineWidth(1.2f);
+        Drawing.line(t, xs, BEAM - 14, xs, BEAM + 14);
+        t.setLineWidth(0.5f);
+        for (float y = BEAM - 13; y < BEAM + 14; y += 3.5f) Drawing.line(t, xs, y, xs - 4, y - 3);
+    }
+
+    private void reaction(float xs, String label) {
+        t.setLineWidth(0.9f);
+        Drawing.arrow(t, xs, BEAM - 34, xs, BEAM - 15, 4f);
+        t.setLineWidth(0.6f);
+        Text.show(t, fonts.bold, 6f, Fonts.INK, Element.ALIGN_CENTER, label, Math.max(LEFT, Math.min(RIGHT, xs)), BEAM - 42);
+    }
+
+    private void dimensions() {
+        float y = 10;
+        t.setLineWidth(0.4f);
+        Drawing.dimension(t, x(0), x(s.span()), y);
+        Text.show(t, fonts.regular, 6f, Fonts.INK, Element.ALIGN_CENTER, "ℓ = " + Display.of(s.span(), Quantity.LENGTH, system),
+                (x(0) + x(s.span())) / 2, y + 2.5f);
+        if (s.support().equals("overhang")) {
+            Drawing.dimension(t, x(s.span()), x(s.length()), y);
+            Text.show(t, fonts.regular, 6f, Fonts.INK, Element.ALIGN_CENTER,
+                    "a = " + Display.of(s.length() - s.span(), Quantity.LENGTH, system), (x(s.span()) + x(s.length())) / 2, y + 2.5f);
+        }
+    }
+}

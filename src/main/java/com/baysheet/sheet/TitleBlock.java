@@ -1,0 +1,94 @@
+package com.baysheet.sheet;
+
+import com.lowagie.text.Element;
+import com.lowagie.text.pdf.PdfContentByte;
+import com.lowagie.text.pdf.PdfTemplate;
+
+import java.awt.Color;
+
+/**
+ * The title block at the head of each page, drawn as a ruled grid: firm, project, job number and sheet
+ * n of N; subject, prepared by, checked by, revision and issue date; then a band with the sheet's place in
+ * its package and its status (issued, or a checking copy in red).
+ */
+final class TitleBlock {
+    private static final float LABEL = 5.5f;
+    private static final float VALUE = 8.5f;
+
+    private final Fonts fonts;
+    private final PdfContentByte cb;
+    private final SheetHeader h;
+    private final String context;
+    private final boolean checking;
+
+    TitleBlock(Fonts fonts, PdfContentByte cb, SheetHeader h, String context, boolean checking) {
+        this.fonts = fonts;
+        this.cb = cb;
+        this.h = h;
+        this.context = context;
+        this.checking = checking;
+    }
+
+    void draw(float x, float y, float w, float height, int page, PdfTemplate total) {
+        float row = 24, top = y + height;
+        cb.saveState();
+        cb.setLineWidth(0.8f);
+        cb.setColorStroke(Fonts.INK);
+        cb.rectangle(x, y, w, height);
+        cb.stroke();
+        cb.setLineWidth(0.4f);
+        line(x, top - row, x + w, top - row);
+        line(x, top - 2 * row, x + w, top - 2 * row);
+        float a = x + w * 0.37f, b = x + w * 0.74f, c = x + w * 0.87f;
+        float p = a + (b - a) / 2;
+        vertical(a, top, top - 2 * row);
+        vertical(b, top, top - 2 * row);
+        vertical(c, top, top - 2 * row);
+        vertical(p, top - row, top - 2 * row);
+        cb.restoreState();
+
+        Text.show(cb, fonts.bold, 10f, Fonts.INK, Element.ALIGN_LEFT, Text.fit(h.firm(), fonts.bold, 10f, a - x - 8), x + 4, top - 16);
+        cell("Project", h.project(), a, top, b - a);
+        cell("Job no.", h.jobNumber(), b, top, c - b);
+        Text.show(cb, fonts.regular, LABEL, Fonts.GREY, Element.ALIGN_LEFT, "Sheet", c + 4, top - 8);
+        String n = page + " of ";
+        Text.show(cb, fonts.bold, 9f, Fonts.INK, Element.ALIGN_LEFT, n, c + 4, top - 19);
+        cb.addTemplate(total, c + 4 + fonts.bold.getWidthPoint(n, 9f), top - 21);
+
+        cell("Subject", h.subject(), x, top - row, a - x);
+        cell("Prepared by", h.preparedBy() + "   " + h.preparedOn(), a, top - row, p - a);
+        cell("Checked by", h.isChecked() ? h.checkedBy() + "   " + h.checkedOn() : "not yet checked", p, top - row, b - p);
+        cell("Revision", h.revision(), b, top - row, c - b);
+        cell("Issue date", h.issueDate().toString(), c, top - row, x + w - c);
+        band(x, y, w, height - 2 * row);
+    }
+
+    private void band(float x, float y, float w, float height) {
+        Text.show(cb, fonts.regular, 6.5f, Fonts.INK, Element.ALIGN_LEFT, Text.fit(context, fonts.regular, 6.5f, w * 0.55f), x + 4, y + 5);
+        if (checking) {
+            float bw = w * 0.4f;
+            cb.saveState();
+            cb.setColorFill(Fonts.MARK);
+            cb.rectangle(x + w - bw, y, bw, height);
+            cb.fill();
+            cb.restoreState();
+            Text.show(cb, fonts.bold, 7.5f, Color.WHITE, Element.ALIGN_CENTER, PageFrame.CHECKING, x + w - bw / 2, y + 5);
+        } else {
+            String status = "ISSUED · Rev " + h.revision() + " · " + h.issueDate();
+            Text.show(cb, fonts.bold, 7f, Fonts.INK, Element.ALIGN_RIGHT, status, x + w - 4, y + 5);
+        }
+    }
+
+    private void cell(String label, String value, float x, float top, float w) {
+        Text.show(cb, fonts.regular, LABEL, Fonts.GREY, Element.ALIGN_LEFT, label, x + 4, top - 8);
+        Text.show(cb, fonts.bold, VALUE, Fonts.INK, Element.ALIGN_LEFT, Text.fit(value, fonts.bold, VALUE, w - 8), x + 4, top - 19);
+    }
+
+    private void line(float x1, float y1, float x2, float y2) {
+        cb.moveTo(x1, y1);
+        cb.lineTo(x2, y2);
+        cb.stroke();
+    }
+
+    private void vertical(float x, float y1, float y2) { line(x, y1, x, y2); }
+}
