@@ -1,0 +1,37 @@
+package com.baysheet.store;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.framing.model.Bay;
+import com.baysheet.framing.model.Framing;
+import com.baysheet.framing.model.Side;
+
+import java.util.List;
+import java.util.Map;
+
+/**
+ * One action of the bay editor: the selected cells all get the same bay (occupancy, dead load in psf or kPa,
+ * framing, cantilevers in ft or m), or all become an opening.
+ */
+public record BayAssignment(List<Cell> cells, boolean opening, String occupancy, double deadLoad, Framing framing,
+                            Map<Side, Double> cantilevers) {
+    public BayAssignment {
+        cells = List.copyOf(cells);
+        if (cells.isEmpty()) throw new InputError("cells", "none", "select at least one bay");
+        cantilevers = Map.copyOf(cantilevers);
+        bayAt(cells.get(0), opening, occupancy, deadLoad, framing, cantilevers);
+    }
+
+    public static BayAssignment opening(List<Cell> cells) {
+        return new BayAssignment(cells, true, null, 0, null, Map.of());
+    }
+
+    public Bay bayAt(Cell cell) {
+        return bayAt(cell, opening, occupancy, deadLoad, framing, cantilevers);
+    }
+
+    private static Bay bayAt(Cell cell, boolean opening, String occupancy, double deadLoad, Framing framing,
+                             Map<Side, Double> cantilevers) {
+        return opening ? Bay.opening(cell.col(), cell.row())
+                : new Bay(cell.col(), cell.row(), occupancy, deadLoad, framing, false, cantilevers);
+    }
+}

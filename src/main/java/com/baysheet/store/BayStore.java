@@ -1,0 +1,125 @@
+package com.baysheet.store;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.framing.model.Bay;
+import com.baysheet.framing.model.Direction;
+import com.baysheet.framing.model.Framing;
+import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.Side;
+
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/** The bays of a level: the framed grid cells with their occupancy, dead load, framing, openings and cantilevers. */
+public final class BayStore {
+    private static final Side[] SIDES = {Side.NORTH, Side.SOUTH, Side.EAST, Side.WEST};
+
+    private final ModelWrites writes;
+    private final OccupancyStore occupancies;
+
+    public BayStore(ModelWrites writes, OccupancyStore occupancies) {
+        this.writes = writes;
+        this.occupancies = occupancies;
+    }
+
+    public List<Bay> findByLevel(long projectId, long levelId) {
+        return writes.sql().tx(c -> {
+            LevelStore.find(c, projectId, levelId);
+            return findByLevel(c, levelId);
+        });
+    }
+
+    /** Gives every selected cell the assignment's bay, replacing what was there. */
+    public void assign(long projectId, long version, long levelId, BayAssignment a) {
+        writes.change(projectId, version, c -> {
+            requireCells(c, projectId, levelId, a.cells());
+            if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
+                throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
+            delete(c, levelId, a.cells());
+            insert(c, levelId, a);
+            return null;
+        });
+    }
+
+    /** Leaves the selected cells unframed at this level (no bay at all, unlike an opening). */
+    public void clear(long projectId, long version, long levelId, List<Cell> cells) {
+        writes.change(projectId, version, c -> {
+            requireCells(c, projectId, levelId, cells);
+            delete(c, levelId, cells);
+            return null;
+        });
+    }
+
+    static List<Bay> findByLevel(Connection c, long levelId) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT * FROM bay WHERE level_id = ? ORDER BY row_index, col_index")) {
+            ps.setLong(1, levelId);
+            List<Bay> out = new ArrayList<>();
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) out.add(read(rs));
+            }
+            return out;
+        }
+    }
+
+    private static void requireCells(Connection c, long projectId, long levelId, List<Cell> cells) throws SQLException {
+        LevelStore.find(c, projectId, levelId);
+        if (cells.isEmpty()) throw new InputError("cells", "none", "select at least one bay");
+        Grid g = GridStore.find(c, projectId);
+        for (Cell cell : cells)
+            if (cell.col() >= g.x().cells() || cell.row() >= g.y().cells())
+                throw new InputError("cells", cell.key(), "is outside the grid (" + g.x().cells() + " × " + g.y().cells() + " bays)");
+    }
+
+    private static void delete(Connection c, long levelId, List<Cell> cells) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("DELETE FROM bay WHERE level_id = ? AND col_index = ? AND row_index = ?")) {
+            for (Cell cell : cells) {
+                ps.setLong(1, levelId);
+                ps.setInt(2, cell.col());
+                ps.setInt(3, cell.row());
+                ps.addBatch();
+            }
+            ps.executeBatch();
+        }
+    }
+
+    private static void insert(Connection c, long levelId, BayAssignment a) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO bay (level_id, col_index, row_index, is_opening, "
+                + "occupancy, dead_load, beam_direction, infill_beams, cantilever_north, cantilever_south, "
+                + "cantilever_east, cantilever_west) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+            for (Cell cell : a.cells()) {
+                Bay b = a.bayAt(cell);
+                ps.setLong(1, levelId);
+                ps.setInt(2, b.col());
+                ps.setInt(3, b.row());
+                ps.setBoolean(4, b.opening());
+                ps.setString(5, b.occupancy());
+                Sql.setDouble(ps, 6, b.opening() ? null : b.deadLoad());
+                ps.setString(7, b.opening() ? null : b.framing().beams().name());
+                if (b.opening()) ps.setNull(8, java.sql.Types.INTEGER);
+                else ps.setInt(8, b.framing().infillBeams());
+                for (int i = 0; i < SIDES.length; i++) Sql.setDouble(ps, 9 + i, b.cantilevers().get(SIDES[i]));
+                ps.addBatch();
+            }
+            ps.executeBatch();
+        }
+    }
+
+    private static Bay read(ResultSet rs) throws SQLException {
+        int col = rs.getInt("col_index");
+        int row = rs.getInt("row_index");
+        if (rs.getBoolean("is_opening")) return Bay.opening(col, row);
+        Map<Side, Double> cantilevers = new EnumMap<>(Side.class);
+        for (Side s : SIDES) {
+            double v = Sql.getDouble(rs, "cantilever_" + s.name().toLowerCase());
+            if (!Double.isNaN(v)) cantilevers.put(s, v);
+        }
+        Framing f = new Framing(Direction.valueOf(rs.getString("beam_direction")), rs.getInt("infill_beams"));
+        return new Bay(col, row, rs.getString("occupancy"), rs.getDouble("dead_load"), f, false, cantilevers);
+    }
+}

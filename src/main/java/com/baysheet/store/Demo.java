@@ -1,0 +1,54 @@
+package com.baysheet.store;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Loads the invented demo projects of demo-data/ (listed in demo-data/index.json) through the same store
+ * calls and validation a user's entries go through. Bays are assigned in file order, so a file lists
+ * cantilevers after the bays that make their edge an edge.
+ */
+public final class Demo {
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    private Demo() {}
+
+    /** Loads the demo into an empty database; returns the new projects, or nothing when projects exist already. */
+    public static List<Project> loadIfEmpty(Store store) {
+        if (!store.projects().findAll().isEmpty()) return List.of();
+        JsonNode index = read("demo-data/index.json");
+        for (JsonNode o : index.path("firmOccupancies")) store.occupancies().add(ModelJson.firmOccupancy(o));
+        List<Project> out = new ArrayList<>();
+        for (JsonNode file : index.path("projects")) out.add(loadProject(store, read("demo-data/" + file.asText())));
+        return out;
+    }
+
+    static Project loadProject(Store store, JsonNode p) {
+        long id = store.projects().create(ModelJson.project(p.path("project"))).id();
+        store.grids().save(id, version(store, id), ModelJson.grid(p.path("grid")));
+        for (JsonNode l : p.path("levels")) {
+            long levelId = store.levels().add(id, version(store, id), ModelJson.level(l)).id();
+            for (JsonNode b : l.path("bays")) store.bays().assign(id, version(store, id), levelId, ModelJson.bays(b));
+        }
+        return store.projects().find(id);
+    }
+
+    private static long version(Store store, long id) {
+        return store.projects().find(id).version();
+    }
+
+    private static JsonNode read(String resource) {
+        try (InputStream in = Demo.class.getClassLoader().getResourceAsStream(resource)) {
+            if (in == null) throw new IllegalStateException("missing demo resource " + resource);
+            return JSON.readTree(in);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+}

@@ -1,0 +1,18 @@
+package com.baysheet.store;
+
+import com.baysheet.framing.model.Building;
+
+import java.util.List;
+
+/**
+ * A project's framing model as read in one go: the project (with the version it was read at), the
+ * building for derivation, the levels in order with their ids, and the names of levels left out of the
+ * building because they have no floor yet (no bays, or only openings).
+ */
+public record Model(Project project, long catalogueVersion, Building building, List<StoredLevel> levels,
+                    List<String> unframed) {
+    public Model {
+        levels = List.copyOf(levels);
+        unframed = List.copyOf(unframed);
+    }
+}

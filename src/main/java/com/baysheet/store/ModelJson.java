@@ -1,0 +1,143 @@
+package com.baysheet.store;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.engine.code.ReductionRule;
+import com.baysheet.engine.units.UnitSystem;
+import com.baysheet.framing.model.Direction;
+import com.baysheet.framing.model.Framing;
+import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.GridAxis;
+import com.baysheet.framing.model.Side;
+import com.fasterxml.jackson.databind.JsonNode;
+
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Reads the model from JSON, for the API and the demo data alike, so that both are validated the same
+ * way: a missing or mistyped value is an {@link InputError} naming the field.
+ */
+public final class ModelJson {
+    private ModelJson() {}
+
+    public static ProjectInfo project(JsonNode n) {
+        return new ProjectInfo(text(n, "jobNumber"), text(n, "name"), optText(n, "address"), optText(n, "client"),
+                n.hasNonNull("edition") ? text(n, "edition") : "ASCE 7-16", UnitSystem.parse("units", text(n, "units")),
+                flag(n, "partitionAllowance"), flag(n, "reducePartitions"));
+    }
+
+    public static Grid grid(JsonNode n) {
+        return new Grid(axis(n, "x"), axis(n, "y"));
+    }
+
+    public static LevelInfo level(JsonNode n) {
+        boolean roof = flag(n, "roof");
+        return new LevelInfo(text(n, "name"), number(n, "elevation"), roof, roof ? number(n, "roofSlope") : Double.NaN);
+    }
+
+    /** A bay assignment: {@code cells} as [[col,row], ...] or the ranges {@code cols} and {@code rows} as [first,last]. */
+    public static BayAssignment bays(JsonNode n) {
+        List<Cell> cells = cells(n);
+        if (flag(n, "opening")) return BayAssignment.opening(cells);
+        Framing f = new Framing(Direction.valueOf(choice(n, "beams", "X", "Y")), integer(n, "infillBeams"));
+        Map<Side, Double> cantilevers = new EnumMap<>(Side.class);
+        JsonNode cn = n.path("cantilevers");
+        for (Side s : Side.values()) {
+            String key = s.name().toLowerCase();
+            if (cn.hasNonNull(key)) cantilevers.put(s, number(cn, key, "cantilevers." + key));
+        }
+        return new BayAssignment(cells, false, text(n, "occupancy"), number(n, "deadLoad"), f, cantilevers);
+    }
+
+    public static List<Cell> cells(JsonNode n) {
+        List<Cell> cells = new ArrayList<>();
+        if (n.has("cells")) {
+            for (JsonNode c : n.get("cells")) {
+                if (!c.isArray() || c.size() != 2 || !c.get(0).canConvertToInt() || !c.get(1).canConvertToInt())
+                    throw new InputError("cells", c, "a cell is given as [column, row]");
+                cells.add(new Cell(c.get(0).asInt(), c.get(1).asInt()));
+            }
+        } else {
+            int[] cols = range(n, "cols");
+            int[] rows = range(n, "rows");
+            for (int r = rows[0]; r <= rows[1]; r++)
+                for (int c = cols[0]; c <= cols[1]; c++) cells.add(new Cell(c, r));
+        }
+        return cells;
+    }
+
+    public static FirmOccupancy firmOccupancy(JsonNode n) {
+        return new FirmOccupancy(text(n, "id"), text(n, "name"), UnitSystem.parse("units", text(n, "units")),
+                number(n, "uniform"), n.has("concentrated") ? number(n, "concentrated") : 0, number(n, "contactSide"),
+                ReductionRule.parse("rule", text(n, "rule")), flag(n, "assembly"));
+    }
+
+    public static long version(JsonNode n) {
+        if (!n.path("version").canConvertToLong())
+            throw new InputError("version", n.path("version"), "give the version of the project this change is based on");
+        return n.get("version").asLong();
+    }
+
+    private static GridAxis axis(JsonNode n, String axis) {
+        JsonNode a = n.path(axis);
+        List<String> names = new ArrayList<>();
+        for (JsonNode name : a.path("names")) names.add(name.asText());
+        List<Double> spacings = new ArrayList<>();
+        int i = 0;
+        for (JsonNode s : a.path("spacings")) {
+            if (!s.isNumber()) throw new InputError("grid." + axis + ".spacings[" + i + "]", s, "must be a number");
+            spacings.add(s.asDouble());
+            i++;
+        }
+        return new GridAxis(axis, names, spacings);
+    }
+
+    private static int[] range(JsonNode n, String field) {
+        JsonNode r = n.path(field);
+        if (!r.isArray() || r.size() != 2 || !r.get(0).canConvertToInt() || !r.get(1).canConvertToInt()
+                || r.get(0).asInt() > r.get(1).asInt())
+            throw new InputError(field, r, "give [first, last] indices, or cells as [[column, row], ...]");
+        return new int[]{r.get(0).asInt(), r.get(1).asInt()};
+    }
+
+    private static String text(JsonNode n, String field) {
+        JsonNode v = n.path(field);
+        if (!v.isTextual() || v.asText().isBlank()) throw new InputError(field, v, "is required (text)");
+        return v.asText();
+    }
+
+    private static String optText(JsonNode n, String field) {
+        return n.hasNonNull(field) ? n.get(field).asText() : "";
+    }
+
+    private static String choice(JsonNode n, String field, String... allowed) {
+        String v = text(n, field).toUpperCase();
+        for (String a : allowed) if (a.equals(v)) return v;
+        throw new InputError(field, v, "must be one of " + String.join(", ", allowed));
+    }
+
+    private static boolean flag(JsonNode n, String field) {
+        JsonNode v = n.path(field);
+        if (v.isMissingNode() || v.isNull()) return false;
+        if (!v.isBoolean()) throw new InputError(field, v, "must be true or false");
+        return v.asBoolean();
+    }
+
+    private static double number(JsonNode n, String field) {
+        return number(n, field, field);
+    }
+
+    private static double number(JsonNode n, String key, String field) {
+        JsonNode v = n.path(key);
+        if (!v.isNumber()) throw new InputError(field, v.isMissingNode() ? "nothing" : v, "must be a number");
+        return v.asDouble();
+    }
+
+    private static int integer(JsonNode n, String field) {
+        JsonNode v = n.path(field);
+        if (!v.isIntegralNumber()) throw new InputError(field, v.isMissingNode() ? "nothing" : v, "must be a whole number");
+        return v.asInt();
+    }
+}

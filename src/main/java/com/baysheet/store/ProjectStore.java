@@ -1,0 +1,163 @@
+package com.baysheet.store;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.engine.units.UnitSystem;
+import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.GridAxis;
+
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.OffsetDateTime;
+import java.util.ArrayList;
+import java.util.List;
+
+/** Projects: listing, creating, settings, and the version that guards every change to a project. */
+public final class ProjectStore {
+    private static final String COLUMNS = "id, version, job_number, name, address, client, edition, unit_system, "
+            + "partition_allowance, reduce_partitions";
+
+    private final Sql sql;
+
+    public ProjectStore(Sql sql) {
+        this.sql = sql;
+    }
+
+    public List<Project> findAll() {
+        return sql.tx(c -> {
+            try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM project ORDER BY job_number")) {
+                List<Project> out = new ArrayList<>();
+                try (ResultSet rs = ps.executeQuery()) {
+                    while (rs.next()) out.add(read(rs));
+                }
+                return out;
+            }
+        });
+    }
+
+    public Project find(long id) {
+        return sql.tx(c -> find(c, id));
+    }
+
+    /** Creates a project with a starting grid (three lines each way), so that bays can be laid out at once. */
+    public Project create(ProjectInfo info) {
+        return sql.tx(c -> {
+            requireFreeJobNumber(c, info.jobNumber(), -1);
+            long id;
+            try (PreparedStatement ps = c.prepareStatement("INSERT INTO project (version, job_number, name, address, "
+                    + "client, edition, unit_system, partition_allowance, reduce_partitions, created_at, updated_at) "
+                    + "VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
+                int i = bind(ps, info);
+                ps.setObject(i++, OffsetDateTime.now());
+                ps.setObject(i, OffsetDateTime.now());
+                ps.executeUpdate();
+                try (ResultSet keys = ps.getGeneratedKeys()) {
+                    keys.next();
+                    id = keys.getLong(1);
+                }
+            }
+            GridStore.write(c, id, startingGrid(info.units()));
+            return find(c, id);
+        });
+    }
+
+    /** Saves new settings over {@code version}; the unit system cannot change once the project has levels. */
+    public Project update(long id, long version, ProjectInfo info) {
+        return sql.tx(c -> {
+            Project old = find(c, id);
+            requireFreeJobNumber(c, info.jobNumber(), id);
+            if (old.info().units() != info.units() && !LevelStore.findByProject(c, id).isEmpty())
+                throw new InputError("units", info.units(), "cannot change once the project has levels: "
+                        + "its lengths and loads are stored in " + old.info().units());
+            touch(c, id, version);
+            try (PreparedStatement ps = c.prepareStatement("UPDATE project SET job_number = ?, name = ?, address = ?, "
+                    + "client = ?, edition = ?, unit_system = ?, partition_allowance = ?, reduce_partitions = ? WHERE id = ?")) {
+                int i = bind(ps, info);
+                ps.setLong(i, id);
+                ps.executeUpdate();
+            }
+            return find(c, id);
+        });
+    }
+
+    public void delete(long id, long version) {
+        sql.tx(c -> {
+            touch(c, id, version);
+            try (PreparedStatement ps = c.prepareStatement("DELETE FROM project WHERE id = ?")) {
+                ps.setLong(1, id);
+                return ps.executeUpdate();
+            }
+        });
+    }
+
+    /**
+     * Claims the next version of a project for a change in this transaction, or refuses a change based on
+     * an old version. Every write to a project or anything in it goes through here.
+     */
+    static long touch(Connection c, long id, long version) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(
+                "UPDATE project SET version = version + 1, updated_at = ? WHERE id = ? AND version = ?")) {
+            ps.setObject(1, OffsetDateTime.now());
+            ps.setLong(2, id);
+            ps.setLong(3, version);
+            if (ps.executeUpdate() == 1) return version + 1;
+        }
+        throw new StaleVersion(id, version, find(c, id).version());
+    }
+
+    static Project find(Connection c, long id) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM project WHERE id = ?")) {
+            ps.setLong(1, id);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (!rs.next()) throw new NotFound("project", id);
+                return read(rs);
+            }
+        }
+    }
+
+    private static void requireFreeJobNumber(Connection c, String jobNumber, long self) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT name FROM project WHERE job_number = ? AND id <> ?")) {
+            ps.setString(1, jobNumber);
+            ps.setLong(2, self);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (rs.next()) throw new InputError("jobNumber", jobNumber, "is already the job number of " + rs.getString(1));
+            }
+        }
+    }
+
+    private static GridAxis axis(String axis, String first, int lines, double spacing) {
+        List<String> names = new ArrayList<>();
+        List<Double> spacings = new ArrayList<>();
+        for (int i = 0; i < lines; i++) {
+            names.add(String.valueOf((char) (first.charAt(0) + i)));
+            if (i > 0) spacings.add(spacing);
+        }
+        return new GridAxis(axis, names, spacings);
+    }
+
+    private static Grid startingGrid(UnitSystem units) {
+        double spacing = units == UnitSystem.US ? 30 : 9;
+        return new Grid(axis("x", "1", 3, spacing), axis("y", "A", 3, spacing));
+    }
+
+    private static int bind(PreparedStatement ps, ProjectInfo p) throws SQLException {
+        ps.setString(1, p.jobNumber());
+        ps.setString(2, p.name());
+        ps.setString(3, p.address());
+        ps.setString(4, p.client());
+        ps.setString(5, p.edition());
+        ps.setString(6, p.units().name());
+        ps.setBoolean(7, p.partitionAllowance());
+        ps.setBoolean(8, p.reducePartitions());
+        return 9;
+    }
+
+    private static Project read(ResultSet rs) throws SQLException {
+        return new Project(rs.getLong("id"), rs.getLong("version"), new ProjectInfo(rs.getString("job_number"),
+                rs.getString("name"), rs.getString("address"), rs.getString("client"), rs.getString("edition"),
+                UnitSystem.valueOf(rs.getString("unit_system")), rs.getBoolean("partition_allowance"),
+                rs.getBoolean("reduce_partitions")));
+    }
+}

@@ -1,0 +1,82 @@
+package com.baysheet.store;
+
+import com.baysheet.framing.Derived;
+import com.baysheet.framing.model.Building;
+
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Function;
+
+/**
+ * Derived results, recomputed on read and cached by project id, project version and firm catalogue
+ * version. Every change to a project bumps its version in the same transaction, so a key names exactly
+ * one state of the model and an entry can never be stale; old entries simply age out.
+ */
+public final class Results {
+    /** Enough for the projects a small office has open at once; each entry is one derived building. */
+    private static final int CACHE_SIZE = 16;
+    /** A model read races a concurrent save at most this often before we derive without caching. */
+    private static final int READ_ATTEMPTS = 3;
+
+    private record Key(long project, long version, long catalogue) {}
+
+    /** A project's model and what was derived from it. */
+    public record Computed(Model model, Derived derived) {
+        public Project project() { return model.project(); }
+    }
+
+    private final Sql sql;
+    private final Function<Building, Derived> derive;
+    private final Map<Key, Computed> cache = new LinkedHashMap<>(CACHE_SIZE, 0.75f, true) {
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<Key, Computed> eldest) { return size() > CACHE_SIZE; }
+    };
+
+    public Results(Sql sql, Function<Building, Derived> derive) {
+        this.sql = sql;
+        this.derive = derive;
+    }
+
+    public Computed of(long projectId) {
+        for (int attempt = 1; ; attempt++) {
+            Computed hit = cached(sql.tx(c -> key(c, projectId)));
+            if (hit != null) return hit;
+            Model m = sql.tx(c -> BuildingMapper.load(c, projectId));
+            Key read = new Key(projectId, m.project().version(), m.catalogueVersion());
+            Computed computed = new Computed(m, derive(m.building()));
+            if (read.equals(sql.tx(c -> key(c, projectId)))) {
+                synchronized (cache) { cache.put(read, computed); }
+                return computed;
+            }
+            if (attempt == READ_ATTEMPTS) return computed;
+        }
+    }
+
+    /** How many derived buildings are held, for tests of the cache. */
+    public int cachedCount() {
+        synchronized (cache) { return cache.size(); }
+    }
+
+    private Derived derive(Building b) {
+        return b.levels().isEmpty() ? new Derived(b, List.of(), List.of()) : derive.apply(b);
+    }
+
+    private Computed cached(Key k) {
+        synchronized (cache) { return cache.get(k); }
+    }
+
+    private static Key key(Connection c, long projectId) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT version FROM project WHERE id = ?")) {
+            ps.setLong(1, projectId);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (!rs.next()) throw new NotFound("project", projectId);
+                return new Key(projectId, rs.getLong(1), OccupancyStore.catalogueVersion(c));
+            }
+        }
+    }
+}

@@ -1,0 +1,51 @@
+package com.baysheet.store;
+
+import javax.sql.DataSource;
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.SQLException;
+import java.sql.Types;
+
+/** Transactions over the pool; a database fault becomes {@link StoreFailure}, a user's mistake passes through. */
+public final class Sql {
+    /** Work done on one connection. */
+    @FunctionalInterface
+    public interface Work<T> {
+        T run(Connection c) throws SQLException;
+    }
+
+    private final DataSource ds;
+
+    public Sql(DataSource ds) {
+        this.ds = ds;
+    }
+
+    /** Runs work in one transaction: committed when it returns, rolled back when it throws. */
+    public <T> T tx(Work<T> work) {
+        try (Connection c = ds.getConnection()) {
+            c.setAutoCommit(false);
+            try {
+                T result = work.run(c);
+                c.commit();
+                return result;
+            } catch (SQLException | RuntimeException e) {
+                c.rollback();
+                throw e;
+            }
+        } catch (SQLException e) {
+            throw new StoreFailure(e);
+        }
+    }
+
+    /** Sets a parameter that may be absent (NaN or null becomes SQL NULL). */
+    static void setDouble(PreparedStatement ps, int i, Double v) throws SQLException {
+        if (v == null || v.isNaN()) ps.setNull(i, Types.DOUBLE);
+        else ps.setDouble(i, v);
+    }
+
+    /** Reads a nullable DOUBLE PRECISION column: NaN where NULL. */
+    static double getDouble(java.sql.ResultSet rs, String col) throws SQLException {
+        double v = rs.getDouble(col);
+        return rs.wasNull() ? Double.NaN : v;
+    }
+}

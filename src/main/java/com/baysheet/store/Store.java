@@ -1,0 +1,21 @@
+package com.baysheet.store;
+
+import com.baysheet.framing.Derived;
+import com.baysheet.framing.model.Building;
+
+import javax.sql.DataSource;
+import java.util.function.Function;
+
+/** All of the store over one database, wired once. */
+public record Store(ProjectStore projects, GridStore grids, LevelStore levels, BayStore bays,
+                    OccupancyStore occupancies, Results results) {
+
+    /** @param derive the framing derivation, run to validate each model change and to compute results */
+    public static Store on(DataSource ds, Function<Building, Derived> derive) {
+        Sql sql = new Sql(ds);
+        ModelWrites writes = new ModelWrites(sql, derive);
+        OccupancyStore occupancies = new OccupancyStore(sql);
+        return new Store(new ProjectStore(sql), new GridStore(writes), new LevelStore(writes),
+                new BayStore(writes, occupancies), occupancies, new Results(sql, derive));
+    }
+}

@@ -1,0 +1,6 @@
+package com.baysheet.store;
+
+/** A level as stored, with its id. */
+public record StoredLevel(long id, long projectId, LevelInfo info) {
+    public String name() { return info.name(); }
+}

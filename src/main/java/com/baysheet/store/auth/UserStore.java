@@ -1,0 +1,147 @@
+package com.baysheet.store.auth;
+
+import com.baysheet.auth.NewUser;
+import com.baysheet.auth.Role;
+import com.baysheet.auth.User;
+import com.baysheet.engine.InputError;
+import com.baysheet.store.NotFound;
+import com.baysheet.store.Sql;
+
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.OffsetDateTime;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+/** Users and their password hashes. Users are made inactive, never deleted. */
+public final class UserStore {
+    private static final String COLUMNS = "id, username, full_name, initials, role, active, password_hash";
+
+    /** A user with the stored hash, for checking a login. */
+    public record WithHash(User user, String passwordHash) {}
+
+    private final Sql sql;
+
+    public UserStore(Sql sql) {
+        this.sql = sql;
+    }
+
+    public long count() {
+        return sql.tx(c -> {
+            try (PreparedStatement ps = c.prepareStatement("SELECT COUNT(*) FROM app_user");
+                 ResultSet rs = ps.executeQuery()) {
+                rs.next();
+                return rs.getLong(1);
+            }
+        });
+    }
+
+    public User create(NewUser u, String passwordHash) {
+        return sql.tx(c -> insert(c, u, passwordHash));
+    }
+
+    /**
+     * Creates the first administrator, once: the set-up flag flips in the same transaction, so a second
+     * set-up (or two at once) finds it closed and creates nobody.
+     */
+    public Optional<User> createFirstAdministrator(NewUser u, String passwordHash) {
+        if (u.role() != Role.ADMINISTRATOR) throw new IllegalArgumentException("role: the first user is the administrator");
+        return sql.tx(c -> {
+            try (PreparedStatement ps = c.prepareStatement(
+                    "UPDATE firm_setting SET setup_done = TRUE, version = version + 1 WHERE id = 1 AND setup_done = FALSE")) {
+                if (ps.executeUpdate() == 0) return Optional.empty();
+            }
+            return Optional.of(insert(c, u, passwordHash));
+        });
+    }
+
+    public boolean setupDone() {
+        return sql.tx(c -> {
+            try (PreparedStatement ps = c.prepareStatement("SELECT setup_done FROM firm_setting WHERE id = 1");
+                 ResultSet rs = ps.executeQuery()) {
+                return rs.next() && rs.getBoolean(1);
+            }
+        });
+    }
+
+    public Optional<WithHash> findByUsername(String username) {
+        return sql.tx(c -> one(c, "username = ?", username));
+    }
+
+    public User find(long id) {
+        return sql.tx(c -> one(c, "id = ?", id)).map(WithHash::user).orElseThrow(() -> new NotFound("user", id));
+    }
+
+    public List<User> findAll() {
+        return sql.tx(c -> {
+            try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM app_user ORDER BY username");
+                 ResultSet rs = ps.executeQuery()) {
+                List<User> out = new ArrayList<>();
+                while (rs.next()) out.add(read(rs).user());
+                return out;
+            }
+        });
+    }
+
+    public void setPassword(long id, String passwordHash) {
+        update(id, "password_hash = ?", passwordHash);
+    }
+
+    public void setRole(long id, Role role) {
+        update(id, "role = ?", role.name());
+    }
+
+    public void setActive(long id, boolean active) {
+        update(id, "active = ?", active);
+    }
+
+    private void update(long id, String assignment, Object v) {
+        sql.tx(c -> {
+            try (PreparedStatement ps = c.prepareStatement(
+                    "UPDATE app_user SET " + assignment + ", version = version + 1 WHERE id = ?")) {
+                ps.setObject(1, v);
+                ps.setLong(2, id);
+                if (ps.executeUpdate() == 0) throw new NotFound("user", id);
+                return null;
+            }
+        });
+    }
+
+    private static User insert(Connection c, NewUser u, String hash) throws SQLException {
+        if (one(c, "username = ?", u.username()).isPresent())
+            throw new InputError("username", "\"" + u.username() + "\"", "is taken by another user");
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO app_user (username, full_name, initials, role, "
+                + "password_hash, active, version, created_at) VALUES (?, ?, ?, ?, ?, TRUE, 1, ?)", Statement.RETURN_GENERATED_KEYS)) {
+            ps.setString(1, u.username());
+            ps.setString(2, u.fullName());
+            ps.setString(3, u.initials());
+            ps.setString(4, u.role().name());
+            ps.setString(5, hash);
+            ps.setObject(6, OffsetDateTime.now());
+            ps.executeUpdate();
+            try (ResultSet keys = ps.getGeneratedKeys()) {
+                keys.next();
+                return new User(keys.getLong(1), u.username(), u.fullName(), u.initials(), u.role(), true);
+            }
+        }
+    }
+
+    private static Optional<WithHash> one(Connection c, String where, Object arg) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM app_user WHERE " + where)) {
+            ps.setObject(1, arg);
+            try (ResultSet rs = ps.executeQuery()) {
+                return rs.next() ? Optional.of(read(rs)) : Optional.empty();
+            }
+        }
+    }
+
+    private static WithHash read(ResultSet rs) throws SQLException {
+        User u = new User(rs.getLong("id"), rs.getString("username"), rs.getString("full_name"), rs.getString("initials"),
+                Role.valueOf(rs.getString("role")), rs.getBoolean("active"));
+        return new WithHash(u, rs.getString("password_hash"));
+    }
+}

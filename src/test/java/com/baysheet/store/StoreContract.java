@@ -1,0 +1,214 @@
+package com.baysheet.store;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.engine.code.ReductionRule;
+import com.baysheet.engine.units.UnitSystem;
+import com.baysheet.framing.Derivation;
+import com.baysheet.framing.model.Bay;
+import com.baysheet.framing.model.Direction;
+import com.baysheet.framing.model.Framing;
+import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.GridAxis;
+import com.baysheet.framing.model.Side;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+
+import java.util.List;
+import java.util.Map;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+/** The store's behaviour, run against each database with the real migrations. */
+abstract class StoreContract {
+    protected Database db;
+    protected Store store;
+
+    /** A URL of an empty database for one test. */
+    protected abstract String freshUrl();
+
+    @BeforeEach
+    void open() {
+        db = Database.open(freshUrl());
+        store = Store.on(db.dataSource(), Derivation::derive);
+    }
+
+    @AfterEach
+    void close() {
+        db.close();
+    }
+
+    static ProjectInfo info(String job) {
+        return new ProjectInfo(job, "Test block " + job, "1 Test Way", "Test client", "ASCE 7-16", UnitSystem.US, false, false);
+    }
+
+    static BayAssignment office(Cell... cells) {
+        return new BayAssignment(List.of(cells), false, "office", 60, new Framing(Direction.Y, 2), Map.of());
+    }
+
+    Project projectWithLevel() {
+        Project p = store.projects().create(info("T-1"));
+        store.levels().add(p.id(), p.version(), new LevelInfo("Level 2", 12, false, Double.NaN));
+        return store.projects().find(p.id());
+    }
+
+    long level(Project p) {
+        return store.levels().findByProject(p.id()).get(0).id();
+    }
+
+    @Test
+    void createdProjectHasItsInfoVersionOneAndAStartingGrid() {
+        Project p = store.projects().create(info("24-100"));
+        assertThat(store.projects().find(p.id())).isEqualTo(p);
+        assertThat(p.version()).isEqualTo(1);
+        Grid g = store.grids().find(p.id());
+        assertThat(g.x().names()).containsExactly("1", "2", "3");
+        assertThat(g.y().spacings()).containsExactly(30.0, 30.0);
+    }
+
+    @Test
+    void jobNumberIsUniqueAcrossProjects() {
+        store.projects().create(info("24-100"));
+        assertThatThrownBy(() -> store.projects().create(info("24-100")))
+                .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("jobNumber"));
+        assertThat(store.projects().findAll()).hasSize(1);
+    }
+
+    @Test
+    void aChangeBasedOnAnOldVersionIsRefusedAndNothingIsOverwritten() {
+        Project p = store.projects().create(info("24-100"));
+        store.projects().update(p.id(), p.version(), info("24-101"));
+        assertThatThrownBy(() -> store.projects().update(p.id(), p.version(), info("24-999")))
+                .isInstanceOfSatisfying(StaleVersion.class, e -> {
+                    assertThat(e.given()).isEqualTo(1);
+                    assertThat(e.current()).isEqualTo(2);
+                });
+        assertThatThrownBy(() -> store.levels().add(p.id(), p.version(), new LevelInfo("L", 1, false, Double.NaN)))
+                .isInstanceOf(StaleVersion.class);
+        assertThat(store.projects().find(p.id()).info().jobNumber()).isEqualTo("24-101");
+        assertThat(store.levels().findByProject(p.id())).isEmpty();
+    }
+
+    @Test
+    void levelsComeLowestFirstAndShareNeitherNameNorElevation() {
+        Project p = store.projects().create(info("24-100"));
+        store.levels().add(p.id(), 1, new LevelInfo("Roof", 30, true, 0.25));
+        store.levels().add(p.id(), 2, new LevelInfo("Level 2", 12, false, Double.NaN));
+        assertThat(store.levels().findByProject(p.id())).extracting(StoredLevel::name).containsExactly("Level 2", "Roof");
+        assertThatThrownBy(() -> store.levels().add(p.id(), 3, new LevelInfo("Mezzanine", 12, false, Double.NaN)))
+                .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("elevation"));
+        assertThat(store.levels().findByProject(p.id()).get(1).info().roofSlope()).isEqualTo(0.25);
+    }
+
+    @Test
+    void baysRoundTripWithFramingCantileversAndOpenings() {
+        Project p = projectWithLevel();
+        long l = level(p);
+        store.bays().assign(p.id(), p.version(), l, new BayAssignment(List.of(new Cell(0, 1), new Cell(1, 1)), false,
+                "office", 62.5, new Framing(Direction.X, 3), Map.of(Side.NORTH, 5.5)));
+        store.bays().assign(p.id(), p.version() + 1, l, BayAssignment.opening(List.of(new Cell(0, 0))));
+        List<Bay> bays = store.bays().findByLevel(p.id(), l);
+        assertThat(bays).hasSize(3);
+        assertThat(bays.get(0).opening()).isTrue();
+        Bay b = bays.get(1);
+        assertThat(b.deadLoad()).isEqualTo(62.5);
+        assertThat(b.framing()).isEqualTo(new Framing(Direction.X, 3));
+        assertThat(b.cantilevers()).isEqualTo(Map.of(Side.NORTH, 5.5));
+        store.bays().clear(p.id(), p.version() + 2, l, List.of(new Cell(0, 0)));
+        assertThat(store.bays().findByLevel(p.id(), l)).hasSize(2);
+    }
+
+    @Test
+    void aModelTheDerivationRefusesIsRolledBack() {
+        Project p = projectWithLevel();
+        long l = level(p);
+        store.bays().assign(p.id(), p.version(), l, office(new Cell(0, 0), new Cell(0, 1)));
+        // a cantilever on the north side of (0,0) would project over bay (0,1)
+        BayAssignment over = new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60,
+                new Framing(Direction.Y, 2), Map.of(Side.NORTH, 4.0));
+        assertThatThrownBy(() -> store.bays().assign(p.id(), p.version() + 1, l, over))
+                .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).contains("cantilevers.north"));
+        assertThat(store.bays().findByLevel(p.id(), l)).allSatisfy(b -> assertThat(b.cantilevers()).isEmpty());
+        assertThat(store.projects().find(p.id()).version()).isEqualTo(p.version() + 1);
+    }
+
+    @Test
+    void baysOutsideTheGridAndGridsThatWouldStrandBaysAreRefused() {
+        Project p = projectWithLevel();
+        long l = level(p);
+        assertThatThrownBy(() -> store.bays().assign(p.id(), p.version(), l, office(new Cell(2, 0))))
+                .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("cells"));
+        store.bays().assign(p.id(), p.version(), l, office(new Cell(1, 1)));
+        Grid smaller = new Grid(new GridAxis("x", List.of("1", "2"), List.of(30.0)), new GridAxis("y", List.of("A", "B", "C"), List.of(30.0, 30.0)));
+        assertThatThrownBy(() -> store.grids().save(p.id(), p.version() + 1, smaller)).isInstanceOf(InputError.class);
+        assertThat(store.grids().find(p.id()).x().lines()).isEqualTo(3);
+    }
+
+    @Test
+    void unknownOccupancyIsRefusedUntilTheFirmAddsIt() {
+        Project p = projectWithLevel();
+        long l = level(p);
+        BayAssignment lab = new BayAssignment(List.of(new Cell(0, 0)), false, "print-room", 50, new Framing(Direction.Y, 1), Map.of());
+        assertThatThrownBy(() -> store.bays().assign(p.id(), p.version(), l, lab))
+                .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("occupancy"));
+        store.occupancies().add(new FirmOccupancy("print-room", "Print room", UnitSystem.US, 150, 0, 30, ReductionRule.HEAVY, false));
+        store.bays().assign(p.id(), p.version(), l, lab);
+        assertThat(store.results().of(p.id()).derived().members()).isNotEmpty();
+        assertThatThrownBy(() -> store.occupancies().add(new FirmOccupancy("office", "Mine", UnitSystem.US, 50, 0, 30, ReductionRule.ORDINARY, false)))
+                .isInstanceOf(InputError.class);
+    }
+
+    @Test
+    void resultsAreCachedPerVersionAndRecomputedAfterAChange() {
+        Project p = projectWithLevel();
+        long l = level(p);
+        store.bays().assign(p.id(), p.version(), l, office(new Cell(0, 0)));
+        Results.Computed first = store.results().of(p.id());
+        assertThat(store.results().of(p.id())).isSameAs(first);
+        store.bays().assign(p.id(), p.version() + 1, l, office(new Cell(0, 0), new Cell(1, 0)));
+        Results.Computed second = store.results().of(p.id());
+        assertThat(second).isNotSameAs(first);
+        assertThat(second.derived().members().size()).isGreaterThan(first.derived().members().size());
+        store.occupancies().add(new FirmOccupancy("loft", "Loft", UnitSystem.US, 50, 0, 30, ReductionRule.ORDINARY, false));
+        assertThat(store.results().of(p.id())).isNotSameAs(second);
+    }
+
+    @Test
+    void levelsWithoutAFloorAreLeftOutOfTheDerivation() {
+        Project p = projectWithLevel();
+        Results.Computed r = store.results().of(p.id());
+        assertThat(r.model().unframed()).containsExactly("Level 2");
+        assertThat(r.derived().members()).isEmpty();
+    }
+
+    @Test
+    void unknownIdsAreNotFound() {
+        Project p = projectWithLevel();
+        Project other = store.projects().create(info("T-2"));
+        assertThatThrownBy(() -> store.projects().find(9999)).isInstanceOf(NotFound.class);
+        assertThatThrownBy(() -> store.levels().find(other.id(), level(p))).isInstanceOf(NotFound.class);
+        assertThatThrownBy(() -> store.results().of(9999)).isInstanceOf(NotFound.class);
+    }
+
+    @Test
+    void unitSystemIsFixedOnceTheProjectHasLevels() {
+        Project p = projectWithLevel();
+        ProjectInfo si = new ProjectInfo("T-1", "x", "", "", "ASCE 7-16", UnitSystem.SI, false, false);
+        assertThatThrownBy(() -> store.projects().update(p.id(), p.version(), si))
+                .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("units"));
+    }
+
+    @Test
+    void demoLoadsBothProjectsOnceWithMembersAndTakeDowns() {
+        List<Project> demo = Demo.loadIfEmpty(store);
+        assertThat(demo).extracting(d -> d.info().name()).containsExactly("Alder Street Commons", "Millrace Park-and-Ride Deck");
+        Results.Computed r = store.results().of(demo.get(0).id());
+        assertThat(r.model().levels()).hasSize(4);
+        assertThat(r.derived().members()).hasSizeGreaterThan(100);
+        assertThat(r.derived().takeDowns()).hasSize(20);
+        assertThat(store.results().of(demo.get(1).id()).project().info().units()).isEqualTo(UnitSystem.SI);
+        assertThat(Demo.loadIfEmpty(store)).isEmpty();
+        assertThat(store.projects().findAll()).hasSize(2);
+    }
+}
