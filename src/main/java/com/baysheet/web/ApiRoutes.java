@@ -1,0 +1,117 @@
+package com.baysheet.web;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.store.ModelJson;
+import com.baysheet.store.Project;
+import com.baysheet.store.Store;
+import com.fasterxml.jackson.databind.JsonNode;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+
+import java.util.Map;
+
+/** The JSON API for the model: projects, grid, levels, bays and the firm's occupancies. See docs/api.md. */
+final class ApiRoutes {
+    private final Store store;
+
+    ApiRoutes(Store store) {
+        this.store = store;
+    }
+
+    void install(RoutesConfig r) {
+        r.get("/api/projects", ctx -> Json.send(ctx, store.projects().findAll()));
+        r.post("/api/projects", this::createProject);
+        r.get("/api/projects/{project}", this::showProject);
+        r.put("/api/projects/{project}", this::updateProject);
+        r.put("/api/projects/{project}/grid", this::updateGrid);
+        r.get("/api/projects/{project}/levels", ctx -> Json.send(ctx,
+                store.levels().findByProject(Ids.project(ctx)).stream().map(ApiViews.LevelJson::of).toList()));
+        r.post("/api/projects/{project}/levels", this::createLevel);
+        r.put("/api/projects/{project}/levels/{level}", this::updateLevel);
+        r.delete("/api/projects/{project}/levels/{level}", this::deleteLevel);
+        r.get("/api/projects/{project}/levels/{level}/bays", ctx -> Json.send(ctx,
+                store.bays().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList()));
+        r.post("/api/projects/{project}/levels/{level}/bays", this::assignBays);
+        r.post("/api/projects/{project}/levels/{level}/bays/clear", this::clearBays);
+        r.get("/api/occupancies", ctx -> Json.send(ctx, store.occupancies().findAll()));
+        r.post("/api/occupancies", ctx -> {
+            store.occupancies().add(ModelJson.firmOccupancy(Json.body(ctx)));
+            Json.send(ctx, 201, store.occupancies().findAll());
+        });
+    }
+
+    void createProject(Context ctx) {
+        Project p = store.projects().create(ModelJson.project(Json.body(ctx)));
+        ctx.header("Location", "/api/projects/" + p.id());
+        Json.send(ctx, 201, p);
+    }
+
+    void showProject(Context ctx) {
+        long id = Ids.project(ctx);
+        Project p = store.projects().find(id);
+        Json.send(ctx, Map.of("project", p, "grid", store.grids().find(id),
+                "levels", store.levels().findByProject(id).stream().map(ApiViews.LevelJson::of).toList()));
+    }
+
+    void updateProject(Context ctx) {
+        JsonNode body = Json.body(ctx);
+        Json.send(ctx, store.projects().update(Ids.project(ctx), ModelJson.version(body), ModelJson.project(body)));
+    }
+
+    void updateGrid(Context ctx) {
+        JsonNode body = Json.body(ctx);
+        long id = Ids.project(ctx);
+        store.grids().save(id, ModelJson.version(body), ModelJson.grid(body));
+        saved(ctx, 200, id, store.grids().find(id));
+    }
+
+    void createLevel(Context ctx) {
+        JsonNode body = Json.body(ctx);
+        long id = Ids.project(ctx);
+        var level = store.levels().add(id, ModelJson.version(body), ModelJson.level(body));
+        ctx.header("Location", "/api/projects/" + id + "/levels/" + level.id());
+        saved(ctx, 201, id, ApiViews.LevelJson.of(level));
+    }
+
+    void updateLevel(Context ctx) {
+        JsonNode body = Json.body(ctx);
+        long id = Ids.project(ctx);
+        store.levels().update(id, ModelJson.version(body), Ids.level(ctx), ModelJson.level(body));
+        saved(ctx, 200, id, ApiViews.LevelJson.of(store.levels().find(id, Ids.level(ctx))));
+    }
+
+    /** DELETE carries the version as ?version=N, since a DELETE has no body by convention. */
+    void deleteLevel(Context ctx) {
+        long id = Ids.project(ctx);
+        long version = queryVersion(ctx.queryParam("version"));
+        store.levels().delete(id, version, Ids.level(ctx));
+        saved(ctx, 200, id, Map.of("deleted", Ids.level(ctx)));
+    }
+
+    void assignBays(Context ctx) {
+        JsonNode body = Json.body(ctx);
+        long id = Ids.project(ctx);
+        store.bays().assign(id, ModelJson.version(body), Ids.level(ctx), ModelJson.bays(body));
+        saved(ctx, 200, id, store.bays().findByLevel(id, Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList());
+    }
+
+    void clearBays(Context ctx) {
+        JsonNode body = Json.body(ctx);
+        long id = Ids.project(ctx);
+        store.bays().clear(id, ModelJson.version(body), Ids.level(ctx), ModelJson.cells(body));
+        saved(ctx, 200, id, store.bays().findByLevel(id, Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList());
+    }
+
+    /** Answers a model change with the project's new version, which the next change must carry. */
+    private void saved(Context ctx, int status, long projectId, Object what) {
+        Json.send(ctx, status, new ApiViews.Saved(store.projects().find(projectId).version(), what));
+    }
+
+    private static long queryVersion(String text) {
+        try {
+            return Long.parseLong(text == null ? "" : text.strip());
+        } catch (NumberFormatException e) {
+            throw new InputError("version", text, "give the version this change is based on as ?version=N");
+        }
+    }
+}

@@ -1,0 +1,48 @@
+package com.baysheet.web;
+
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.record.Entry;
+import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.model.Bay;
+import com.baysheet.store.StoredLevel;
+
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+/** The shapes the API answers with, where a stored or derived record does not serialise as the API reads it back. */
+final class ApiViews {
+    private ApiViews() {}
+
+    record LevelJson(long id, String name, double elevation, boolean roof, Double roofSlope) {
+        static LevelJson of(StoredLevel l) {
+            return new LevelJson(l.id(), l.name(), l.info().elevation(), l.info().roof(),
+                    l.info().roof() ? l.info().roofSlope() : null);
+        }
+    }
+
+    /** A bay in the same shape the bay assignment takes. */
+    record BayJson(int col, int row, boolean opening, String occupancy, Double deadLoad, String beams, Integer infillBeams,
+                   Map<String, Double> cantilevers) {
+        static BayJson of(Bay b) {
+            if (b.opening()) return new BayJson(b.col(), b.row(), true, null, null, null, null, Map.of());
+            Map<String, Double> c = new TreeMap<>();
+            b.cantilevers().forEach((s, v) -> c.put(s.name().toLowerCase(), v));
+            return new BayJson(b.col(), b.row(), false, b.occupancy(), b.deadLoad(), b.framing().beams().name(),
+                    b.framing().infillBeams(), c);
+        }
+    }
+
+    record MemberJson(String id, String name, String level, String role, String kind, double span, double tributaryWidth,
+                      double tributaryArea, Map<String, Double> areas, List<String> bays, List<Entry> governing) {
+        static MemberJson of(DerivedMember m) {
+            return new MemberJson(m.id(), m.name(), m.level(), m.role().name(), m.kind().name(), m.span(),
+                    m.tributaryWidth(), m.tributaryArea(), new TreeMap<>(m.areas()), m.bays(),
+                    MemberRow.governing(m.result().record()));
+        }
+    }
+
+    record MemberDetail(MemberJson member, CalcRecord record) {}
+
+    record Saved(long version, Object saved) {}
+}

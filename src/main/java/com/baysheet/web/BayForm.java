@@ -1,0 +1,69 @@
+package com.baysheet.web;
+
+import com.baysheet.framing.model.Bay;
+import com.baysheet.framing.model.Direction;
+import com.baysheet.framing.model.Framing;
+import com.baysheet.framing.model.Side;
+import com.baysheet.store.BayAssignment;
+import com.baysheet.store.Cell;
+
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The bay editor's form: the selected cells (checkboxes "col,row"), then what they get: an occupancy,
+ * dead load, framing direction and number of infill beams, and cantilever lengths by side (blank for none).
+ */
+final class BayForm {
+    static final List<String> SIDES = List.of("north", "south", "east", "west");
+
+    private BayForm() {}
+
+    /** The values of an existing bay, to start the form from when one bay is being edited. */
+    static Map<String, String> values(Bay b) {
+        Map<String, String> v = new java.util.HashMap<>();
+        if (b.opening()) return v;
+        v.put("occupancy", b.occupancy());
+        v.put("deadLoad", com.baysheet.engine.units.Display.plain(b.deadLoad()));
+        v.put("beams", b.framing().beams().name());
+        v.put("infillBeams", String.valueOf(b.framing().infillBeams()));
+        b.cantilevers().forEach((s, len) -> v.put("cantilevers." + s.name().toLowerCase(), com.baysheet.engine.units.Display.plain(len)));
+        return v;
+    }
+
+    static List<Cell> cells(Form f) {
+        List<Cell> cells = new ArrayList<>();
+        for (String key : f.values("cells")) {
+            try {
+                cells.add(Cell.parse(key));
+            } catch (com.baysheet.engine.InputError e) {
+                f.reject("cells", e.problem());
+            }
+        }
+        if (cells.isEmpty()) f.reject("cells", "select at least one bay");
+        return cells;
+    }
+
+    /** Reads the numbers, recording errors; the assignment is built later, inside {@link Form#attempt}. */
+    static Values read(Form f) {
+        double deadLoad = f.number("deadLoad");
+        int infill = f.integer("infillBeams");
+        Map<Side, Double> cantilevers = new EnumMap<>(Side.class);
+        for (String s : SIDES) {
+            double len = f.optionalNumber("cantilevers." + s);
+            if (!Double.isNaN(len)) cantilevers.put(Side.valueOf(s.toUpperCase()), len);
+        }
+        String beams = f.text("beams");
+        if (!beams.equals("X") && !beams.equals("Y")) f.reject("beams", "choose the direction the infill beams span");
+        return new Values(f.text("occupancy"), deadLoad, beams, infill, cantilevers);
+    }
+
+    record Values(String occupancy, double deadLoad, String beams, int infillBeams, Map<Side, Double> cantilevers) {
+        BayAssignment assignment(List<Cell> cells) {
+            return new BayAssignment(cells, false, occupancy, deadLoad,
+                    new Framing(Direction.valueOf(beams), infillBeams), cantilevers);
+        }
+    }
+}

@@ -1,0 +1,73 @@
+package com.baysheet.web;
+
+import com.baysheet.framing.model.Bay;
+import com.baysheet.store.BayAssignment;
+import com.baysheet.store.Cell;
+import com.baysheet.store.Project;
+import com.baysheet.store.StoredLevel;
+import com.baysheet.store.Store;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/** The bay editor of a level: select several bays, then give them an occupancy and framing, make them an opening, or clear them. */
+final class BayRoutes {
+    private final Store store;
+
+    BayRoutes(Store store) {
+        this.store = store;
+    }
+
+    void install(RoutesConfig r) {
+        r.get("/projects/{project}/levels/{level}/bays", this::edit);
+        r.post("/projects/{project}/levels/{level}/bays", this::apply);
+    }
+
+    void edit(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
+        Map<String, String> start = new HashMap<>(Map.of("version", String.valueOf(p.version()), "beams", "Y",
+                "infillBeams", "2", "occupancy", "office"));
+        render(ctx, p, l, Form.filled(start));
+    }
+
+    void apply(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
+        Form form = Form.of(ctx);
+        long version = form.version();
+        List<Cell> cells = BayForm.cells(form);
+        String action = form.text("action");
+        Optional<Object> done = switch (action) {
+            case "clear" -> form.attempt(() -> { store.bays().clear(p.id(), version, l.id(), cells); return action; });
+            case "opening" -> form.attempt(() -> { store.bays().assign(p.id(), version, l.id(), BayAssignment.opening(cells)); return action; });
+            default -> {
+                BayForm.Values v = BayForm.read(form);
+                yield form.attempt(() -> { store.bays().assign(p.id(), version, l.id(), v.assignment(cells)); return action; });
+            }
+        };
+        done.ifPresentOrElse(a -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels/" + l.id() + "/bays"),
+                () -> render(ctx.status(form.stale() ? 409 : 422), p, l, form));
+    }
+
+    private void render(Context ctx, Project p, StoredLevel l, Form form) {
+        var computed = store.results().of(p.id());
+        var catalogue = computed.model().building().context().catalogue();
+        List<Bay> bays = store.bays().findByLevel(p.id(), l.id());
+        Map<String, Object> m = new HashMap<>();
+        m.put("project", computed.project());
+        m.put("level", l);
+        m.put("levels", computed.model().levels());
+        m.put("form", form);
+        m.put("units", UnitLabels.of(p.info().units()));
+        m.put("sides", BayForm.SIDES);
+        m.put("occupancies", catalogue.all());
+        m.put("table", BayGridView.of(computed.model().building().grid(), bays, catalogue, new HashSet<>(form.values("cells"))));
+        ctx.render("bays/edit", m);
+    }
+}

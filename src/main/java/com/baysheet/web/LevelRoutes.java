@@ -1,0 +1,108 @@
+package com.baysheet.web;
+
+import com.baysheet.store.Project;
+import com.baysheet.store.StoredLevel;
+import com.baysheet.store.Store;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+
+import java.util.HashMap;
+import java.util.Map;
+
+/** Levels and grid: the grid lines with their spacings, the list of levels, adding, editing and removing a level. */
+final class LevelRoutes {
+    private final Store store;
+
+    LevelRoutes(Store store) {
+        this.store = store;
+    }
+
+    void install(RoutesConfig r) {
+        r.get("/projects/{project}/levels", this::show);
+        r.post("/projects/{project}/grid", this::updateGrid);
+        r.post("/projects/{project}/levels", this::create);
+        r.get("/projects/{project}/levels/{level}/edit", this::editForm);
+        r.post("/projects/{project}/levels/{level}", this::update);
+        r.post("/projects/{project}/levels/{level}/delete", this::delete);
+    }
+
+    void show(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        renderPage(ctx, p, Form.filled(gridValues(p)), Form.filled(Map.of("version", String.valueOf(p.version()))));
+    }
+
+    void updateGrid(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        Form form = Form.of(ctx);
+        long version = form.version();
+        GridForm.check(form);
+        form.attempt(() -> {
+            store.grids().save(p.id(), version, GridForm.read(form));
+            return p;
+        }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
+                () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, form, Form.filled(Map.of("version", String.valueOf(p.version())))));
+    }
+
+    void create(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        Form form = Form.of(ctx);
+        long version = form.version();
+        LevelForm.Values v = LevelForm.read(form);
+        form.attempt(() -> store.levels().add(p.id(), version, v.info()))
+                .ifPresentOrElse(l -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
+                        () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, Form.filled(gridValues(p)), form));
+    }
+
+    void editForm(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
+        renderEdit(ctx, p, l, Form.filled(LevelForm.values(l, p.version())));
+    }
+
+    void update(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
+        Form form = Form.of(ctx);
+        long version = form.version();
+        LevelForm.Values v = LevelForm.read(form);
+        form.attempt(() -> {
+            store.levels().update(p.id(), version, l.id(), v.info());
+            return l;
+        }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
+                () -> renderEdit(ctx.status(form.stale() ? 409 : 422), p, l, form));
+    }
+
+    void delete(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
+        Form form = Form.of(ctx);
+        long version = form.version();
+        form.attempt(() -> {
+            store.levels().delete(p.id(), version, l.id());
+            return l;
+        }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
+                () -> renderEdit(ctx.status(form.stale() ? 409 : 422), p, l, form));
+    }
+
+    private Map<String, String> gridValues(Project p) {
+        Map<String, String> v = new HashMap<>(GridForm.values(store.grids().find(p.id())));
+        v.put("version", String.valueOf(p.version()));
+        return v;
+    }
+
+    private void renderPage(Context ctx, Project p, Form gridForm, Form levelForm) {
+        var computed = store.results().of(p.id());
+        Map<String, Object> m = new HashMap<>();
+        m.put("project", computed.project());
+        m.put("levels", computed.model().levels());
+        m.put("grid", computed.model().building().grid());
+        m.put("units", UnitLabels.of(p.info().units()));
+        m.put("gridForm", gridForm);
+        m.put("levelForm", levelForm);
+        ctx.render("levels/index", m);
+    }
+
+    private void renderEdit(Context ctx, Project p, StoredLevel l, Form form) {
+        ctx.render("levels/edit", Map.of("project", p, "level", l, "form", form, "units", UnitLabels.of(p.info().units())));
+    }
+}

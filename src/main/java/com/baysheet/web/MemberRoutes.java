@@ -1,0 +1,66 @@
+package com.baysheet.web;
+
+import com.baysheet.engine.code.MemberKind;
+import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.MemberRole;
+import com.baysheet.framing.model.Level;
+import com.baysheet.store.NotFound;
+import com.baysheet.store.Results;
+import com.baysheet.store.Store;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/** Derived members: the filtered list with governing numbers, and a member's whole calculation record with its plan. */
+final class MemberRoutes {
+    private final Store store;
+
+    MemberRoutes(Store store) {
+        this.store = store;
+    }
+
+    void install(RoutesConfig r) {
+        r.get("/projects/{project}/members", this::list);
+        r.get("/projects/{project}/members/{member}", this::show);
+    }
+
+    void list(Context ctx) {
+        Results.Computed c = store.results().of(Ids.project(ctx));
+        MemberFilter filter = MemberFilter.of(ctx);
+        UnitLabels units = UnitLabels.of(c.project().info().units());
+        String href = "/projects/" + c.project().id() + "/members/";
+        List<MemberRow> rows = filter.apply(c.derived().members()).stream().map(m -> MemberRow.of(m, href + m.id(), units)).toList();
+        Map<String, Object> m = base(c);
+        m.put("rows", rows);
+        m.put("filter", filter);
+        m.put("roles", MemberRole.values());
+        m.put("kinds", MemberKind.values());
+        ctx.render("members/list", m);
+    }
+
+    void show(Context ctx) {
+        Results.Computed c = store.results().of(Ids.project(ctx));
+        DerivedMember member = c.derived().member(ctx.pathParam("member"))
+                .orElseThrow(() -> new NotFound("member", ctx.pathParam("member")));
+        Level level = c.model().building().levels().stream().filter(l -> l.name().equals(member.level())).findFirst().orElseThrow();
+        String href = "/projects/" + c.project().id() + "/members/{id}";
+        Map<String, Object> m = base(c);
+        m.put("member", member);
+        m.put("record", member.result().record());
+        m.put("row", MemberRow.of(member, "", UnitLabels.of(c.project().info().units())));
+        m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), member,
+                c.model().building().context().catalogue(), href));
+        ctx.render("members/show", m);
+    }
+
+    static Map<String, Object> base(Results.Computed c) {
+        Map<String, Object> m = new HashMap<>();
+        m.put("project", c.project());
+        m.put("model", c.model());
+        m.put("units", UnitLabels.of(c.project().info().units()));
+        return m;
+    }
+}

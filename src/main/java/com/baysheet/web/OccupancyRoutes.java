@@ -1,0 +1,47 @@
+package com.baysheet.web;
+
+import com.baysheet.engine.code.OccupancyCatalogue;
+import com.baysheet.engine.code.ReductionRule;
+import com.baysheet.engine.units.UnitSystem;
+import com.baysheet.store.FirmOccupancy;
+import com.baysheet.store.Store;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+
+import java.util.Map;
+
+/** The firm's own occupancies, beside the built-in catalogue, for every project. */
+final class OccupancyRoutes {
+    private final Store store;
+
+    OccupancyRoutes(Store store) {
+        this.store = store;
+    }
+
+    void install(RoutesConfig r) {
+        r.get("/occupancies", this::list);
+        r.post("/occupancies", this::create);
+    }
+
+    void list(Context ctx) {
+        render(ctx, Form.filled(Map.of("units", "US", "rule", "ORDINARY", "concentrated", "0", "contactSide", "30")));
+    }
+
+    void create(Context ctx) {
+        Form form = Form.of(ctx);
+        double uniform = form.number("uniform");
+        double concentrated = form.number("concentrated");
+        double contactSide = form.number("contactSide");
+        form.attempt(() -> {
+            FirmOccupancy o = new FirmOccupancy(form.text("id"), form.text("name"), UnitSystem.parse("units", form.text("units")),
+                    uniform, concentrated, contactSide, ReductionRule.parse("rule", form.text("rule")), form.checked("assembly"));
+            store.occupancies().add(o);
+            return o;
+        }).ifPresentOrElse(o -> Pages.seeOther(ctx, "/occupancies"), () -> render(ctx.status(422), form));
+    }
+
+    private void render(Context ctx, Form form) {
+        ctx.render("occupancies/list", Map.of("form", form, "firm", store.occupancies().findAll(),
+                "builtIn", OccupancyCatalogue.builtIn().all(), "rules", ReductionRule.values()));
+    }
+}

@@ -1,0 +1,91 @@
+package com.baysheet.web;
+
+import com.baysheet.engine.code.Editions;
+import com.baysheet.engine.units.UnitSystem;
+import com.baysheet.store.Project;
+import com.baysheet.store.ProjectInfo;
+import com.baysheet.store.Store;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+
+import java.util.HashMap;
+import java.util.Map;
+
+/** Projects: the list, a new project, its overview and its settings. */
+final class ProjectRoutes {
+    private final Store store;
+
+    ProjectRoutes(Store store) {
+        this.store = store;
+    }
+
+    void install(RoutesConfig r) {
+        r.get("/", ctx -> ctx.redirect("/projects"));
+        r.get("/projects", this::list);
+        r.get("/projects/new", this::newForm);
+        r.post("/projects", this::create);
+        r.get("/projects/{project}", this::show);
+        r.get("/projects/{project}/settings", this::settingsForm);
+        r.post("/projects/{project}/settings", this::updateSettings);
+    }
+
+    void list(Context ctx) {
+        ctx.render("projects/list", Map.of("projects", store.projects().findAll()));
+    }
+
+    void newForm(Context ctx) {
+        renderForm(ctx, "projects/new", null, Form.filled(Map.of("edition", Editions.builtIn().byDefault().id(), "units", "US")));
+    }
+
+    void create(Context ctx) {
+        Form form = Form.of(ctx);
+        form.attempt(() -> store.projects().create(info(form)))
+                .ifPresentOrElse(p -> Pages.seeOther(ctx, "/projects/" + p.id()),
+                        () -> renderForm(ctx.status(422), "projects/new", null, form));
+    }
+
+    void show(Context ctx) {
+        var computed = store.results().of(Ids.project(ctx));
+        ctx.render("projects/show", Map.of("project", computed.project(), "model", computed.model(),
+                "derived", computed.derived(), "units", UnitLabels.of(computed.project().info().units())));
+    }
+
+    void settingsForm(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        renderForm(ctx, "projects/settings", p, Form.filled(values(p)));
+    }
+
+    void updateSettings(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        Form form = Form.of(ctx);
+        long version = form.version();
+        form.attempt(() -> store.projects().update(p.id(), version, info(form)))
+                .ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id()),
+                        () -> renderForm(ctx.status(form.stale() ? 409 : 422), "projects/settings", p, form));
+    }
+
+    private void renderForm(Context ctx, String template, Project p, Form form) {
+        Map<String, Object> m = new HashMap<>();
+        m.put("form", form);
+        m.put("editions", Editions.builtIn().ids());
+        m.put("unitSystems", UnitSystem.values());
+        if (p != null) m.put("project", p);
+        ctx.render(template, m);
+    }
+
+    private static ProjectInfo info(Form f) {
+        UnitSystem units = UnitSystem.parse("units", f.text("units"));
+        return new ProjectInfo(f.text("jobNumber"), f.text("name"), f.text("address"), f.text("client"),
+                f.text("edition"), units, f.checked("partitionAllowance"), f.checked("reducePartitions"));
+    }
+
+    private static Map<String, String> values(Project p) {
+        ProjectInfo i = p.info();
+        Map<String, String> v = new HashMap<>(Map.of("version", String.valueOf(p.version()), "jobNumber", i.jobNumber(),
+                "name", i.name(), "address", i.address(), "client", i.client(), "edition", i.edition(),
+                "units", i.units().name()));
+        if (i.partitionAllowance()) v.put("partitionAllowance", "on");
+        if (i.reducePartitions()) v.put("reducePartitions", "on");
+        return v;
+    }
+}

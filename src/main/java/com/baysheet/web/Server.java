@@ -1,0 +1,47 @@
+package com.baysheet.web;
+
+import com.baysheet.store.Store;
+import io.javalin.Javalin;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.staticfiles.Location;
+
+/**
+ * The office server: static files, templates, the exception mapping, a before-filter stage, and the routes
+ * of each feature. Features add routes in their own class; access control (login, roles, review) adds its
+ * filter in {@link #filters}, which runs before every route.
+ */
+public final class Server {
+    private Server() {}
+
+    /** A configured server, not yet started: {@code start(host, port)} or {@code start(0)} for a random port. */
+    public static Javalin create(Store store) {
+        return Javalin.create(cfg -> {
+            cfg.startup.showJavalinBanner = false;
+            cfg.fileRenderer(new Views());
+            cfg.staticFiles.add(sf -> {
+                sf.hostedPath = "/static";
+                sf.directory = "/static";
+                sf.location = Location.CLASSPATH;
+            });
+            filters(cfg.routes);
+            Errors.install(cfg.routes);
+            new ProjectRoutes(store).install(cfg.routes);
+            new LevelRoutes(store).install(cfg.routes);
+            new BayRoutes(store).install(cfg.routes);
+            new PlanRoutes(store).install(cfg.routes);
+            new MemberRoutes(store).install(cfg.routes);
+            new TakeDownRoutes(store).install(cfg.routes);
+            new OccupancyRoutes(store).install(cfg.routes);
+            new ApiRoutes(store).install(cfg.routes);
+            new ApiResultRoutes(store).install(cfg.routes);
+        });
+    }
+
+    /** Before-filters, in order. An access filter (issue 6) goes first here and may halt a request. */
+    private static void filters(RoutesConfig routes) {
+        // pages show live project state: never let a browser or proxy reuse an old copy
+        routes.before(ctx -> {
+            if (!ctx.path().startsWith("/static/")) ctx.header("Cache-Control", "no-store");
+        });
+    }
+}

@@ -1,0 +1,40 @@
+package com.baysheet.web;
+
+import com.baysheet.framing.TakeDown;
+import com.baysheet.store.NotFound;
+import com.baysheet.store.Results;
+import com.baysheet.store.Store;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+
+import java.util.Map;
+
+/** Column take-downs: the stacks of the project, and one stack level by level from the top down. */
+final class TakeDownRoutes {
+    private final Store store;
+
+    TakeDownRoutes(Store store) {
+        this.store = store;
+    }
+
+    void install(RoutesConfig r) {
+        r.get("/projects/{project}/takedowns", this::list);
+        r.get("/projects/{project}/takedowns/{stack}", this::show);
+    }
+
+    void list(Context ctx) {
+        Results.Computed c = store.results().of(Ids.project(ctx));
+        Map<String, Object> m = MemberRoutes.base(c);
+        m.put("takeDowns", c.derived().takeDowns());
+        ctx.render("takedowns/list", m);
+    }
+
+    void show(Context ctx) {
+        Results.Computed c = store.results().of(Ids.project(ctx));
+        TakeDown t = c.derived().takeDown(ctx.pathParam("stack")).orElseThrow(() -> new NotFound("column stack", ctx.pathParam("stack")));
+        Map<String, Object> m = MemberRoutes.base(c);
+        m.put("takeDown", t);
+        m.put("record", t.record());
+        ctx.render("takedowns/show", m);
+    }
+}

@@ -1,0 +1,93 @@
+package com.baysheet.web;
+
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+import java.net.http.HttpResponse;
+import java.util.List;
+
+import static java.util.Map.entry;
+import static org.assertj.core.api.Assertions.assertThat;
+
+class ProjectPagesTest {
+    static TestServer server;
+
+    @BeforeAll
+    static void start() { server = new TestServer(); }
+
+    @AfterAll
+    static void stop() { server.close(); }
+
+    @Test
+    void projectListShowsTheDemoProjects() {
+        HttpResponse<String> r = server.get("/projects");
+        assertThat(r.statusCode()).isEqualTo(200);
+        assertThat(r.body()).contains("Alder Street Commons", "24-031", "Millrace Park-and-Ride Deck", "SI")
+                .contains("Results are for review by a licensed engineer");
+    }
+
+    @Test
+    void rootRedirectsToTheProjects() {
+        HttpResponse<String> r = server.get("/");
+        assertThat(r.statusCode()).isBetween(301, 303);
+        assertThat(r.headers().firstValue("Location")).hasValue("/projects");
+    }
+
+    @Test
+    void aNewProjectIsCreatedAndThenRedirectedTo() {
+        HttpResponse<String> r = server.post("/projects", List.of(entry("jobNumber", "25-900"), entry("name", "Wren Court Lofts"),
+                entry("address", "12 Wren Court"), entry("client", "Wren Holdings"), entry("edition", "ASCE 7-16"),
+                entry("units", "SI"), entry("partitionAllowance", "on")));
+        assertThat(r.statusCode()).isEqualTo(303);
+        String location = r.headers().firstValue("Location").orElseThrow();
+        HttpResponse<String> page = server.get(location);
+        assertThat(page.body()).contains("Wren Court Lofts", "Wren Holdings", "SI", "added");
+        assertThat(server.get(location + "/levels").body()).contains("Spacings along x (m)", "value=\"9 9\"");
+    }
+
+    @Test
+    void aBadNewProjectIsRefusedBesideItsFieldWithTheInputKept() {
+        int before = server.store.projects().findAll().size();
+        HttpResponse<String> r = server.post("/projects", List.of(entry("jobNumber", "24-031"), entry("name", "Copy of Alder"),
+                entry("edition", "ASCE 7-16"), entry("units", "US")));
+        assertThat(r.statusCode()).isEqualTo(422);
+        assertThat(r.body()).contains("id=\"error-jobNumber\"", "is already the job number of Alder Street Commons",
+                "value=\"Copy of Alder\"", "Nothing was saved");
+        assertThat(server.store.projects().findAll()).hasSize(before);
+    }
+
+    @Test
+    void settingsAreSavedOverTheCurrentVersion() {
+        long id = server.deck().id();
+        long v = server.version(id);
+        HttpResponse<String> form = server.get("/projects/" + id + "/settings");
+        assertThat(form.body()).contains("name=\"version\" value=\"" + v + "\"", "Riverton Transit Authority");
+        HttpResponse<String> r = server.post("/projects/" + id + "/settings", List.of(entry("version", String.valueOf(v)),
+                entry("jobNumber", "24-058"), entry("name", "Millrace Park-and-Ride Deck"), entry("client", "Riverton Transit Authority"),
+                entry("address", "Millrace Road"), entry("edition", "ASCE 7-22"), entry("units", "SI")));
+        assertThat(r.statusCode()).isEqualTo(303);
+        assertThat(server.store.projects().find(id).info().edition()).isEqualTo("ASCE 7-22");
+        assertThat(server.get("/projects/" + id).body()).contains("ASCE 7-22");
+    }
+
+    @Test
+    void unknownIdsGiveANotFoundPageAndNoStackTrace() {
+        for (String path : List.of("/projects/9999", "/projects/abc/levels", "/projects/1/members/no-such-member",
+                "/projects/1/takedowns/nowhere", "/projects/1/levels/9999/bays", "/no/such/page")) {
+            HttpResponse<String> r = server.get(path);
+            assertThat(r.statusCode()).as(path).isEqualTo(404);
+            assertThat(r.body()).as(path).contains("Not found").doesNotContain("Exception", "at com.baysheet");
+        }
+    }
+
+    @Test
+    void aPostWithoutAVersionIsRefusedNotSaved() {
+        long id = server.alder().id();
+        long v = server.version(id);
+        HttpResponse<String> r = server.post("/projects/" + id + "/levels", List.of(entry("name", "Penthouse"), entry("elevation", "50")));
+        assertThat(r.statusCode()).isEqualTo(422);
+        assertThat(r.body()).contains("carries no project version");
+        assertThat(server.version(id)).isEqualTo(v);
+    }
+}

@@ -1,0 +1,102 @@
+package com.baysheet.web;
+
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.record.Step;
+import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.TakeDown;
+import com.baysheet.store.Results;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+import java.net.http.HttpResponse;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** The result pages of the demo, checked against the records they render. */
+class ResultPagesTest {
+    static final String CAUTION = "for review by a licensed engineer";
+    static TestServer server;
+    static Results.Computed alder;
+
+    @BeforeAll
+    static void start() {
+        server = new TestServer();
+        alder = server.store.results().of(server.alder().id());
+    }
+
+    @AfterAll
+    static void stop() { server.close(); }
+
+    static String html(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;").replace("'", "&#39;");
+    }
+
+    static String base() { return "/projects/" + server.alder().id(); }
+
+    @Test
+    void memberPageRendersTheWholeRecordWithClausesAndCautions() {
+        DerivedMember girder = alder.derived().members().stream()
+                .filter(m -> m.name().equals("Girder D/1-2") && m.level().equals("Level 3")).findFirst().orElseThrow();
+        HttpResponse<String> r = server.get(base() + "/members/" + girder.id());
+        assertThat(r.statusCode()).isEqualTo(200);
+        String body = r.body();
+        assertThat(body).contains("Girder D/1-2", "Edge beam with cantilever slab", CAUTION, "adopted local code");
+        CalcRecord rec = girder.result().record();
+        for (Step s : rec.steps())
+            assertThat(body).contains(html(s.formula()), html(s.substituted()), html(s.shown()), html(s.clause().label()));
+        rec.inputs().forEach(e -> assertThat(body).contains(html(e.label()), html(e.shown())));
+        rec.notes().forEach(n -> assertThat(body).contains(html(n.text())));
+        assertThat(body).contains("ASCE 7-16 2.3.1", "ASCE 7-16 2.4.1", "governs");
+        assertThat(body).contains("<svg", "class=\"tributary\"", "member girder selected");
+    }
+
+    @Test
+    void memberListFiltersByLevelAndRoleAndShowsGoverningNumbers() {
+        HttpResponse<String> r = server.get(base() + "/members?level=Level+1&role=COLUMN");
+        String body = r.body();
+        long columns = alder.derived().members().stream()
+                .filter(m -> m.level().equals("Level 1") && m.role().name().equals("COLUMN")).count();
+        assertThat(body).contains(columns + "</span> members", "Column B/2 below Level 1", CAUTION).doesNotContain("Girder A/1-2");
+        DerivedMember c = alder.derived().members().stream().filter(m -> m.name().equals("Column B/2 below Level 1")).findFirst().orElseThrow();
+        assertThat(body).contains(html(c.result().record().entry("LRFD.P").shown()));
+        assertThat(server.get(base() + "/members?kind=EDGE_BEAM_CANTILEVER").body()).contains("Girder D/1-2").doesNotContain("Girder B/1-2");
+    }
+
+    @Test
+    void takeDownPageTabulatesEveryLevelFromTheTop() {
+        TakeDown t = alder.derived().takeDown("c1x2").orElseThrow();
+        String body = server.get(base() + "/takedowns/c1x2").body();
+        UnitLabels us = UnitLabels.of(server.alder().info().units());
+        assertThat(body).contains("Column take-down at C/2", CAUTION, "Eq. 4.7-1");
+        assertThat(body.indexOf(">Roof<")).isLessThan(body.indexOf(">Level 1<"));
+        for (TakeDown.Row row : t.rows())
+            assertThat(body).contains(html(us.force(row.liveReduced())), html(us.force(row.lrfd())), row.lrfdCombination());
+        assertThat(server.get(base() + "/takedowns").body()).contains("C/2", "B/4");
+    }
+
+    @Test
+    void framingPlanDrawsGridNamesOccupancyLegendAndMemberLinks() {
+        long level3 = alder.model().levels().stream().filter(l -> l.name().equals("Level 3")).findFirst().orElseThrow().id();
+        String body = server.get(base() + "/plan?level=" + level3).body();
+        assertThat(body).contains("<svg", ">A</text>", ">5</text>", "Offices", "Office corridors above first floor",
+                "Assembly: movable seats", "class=\"cantilever\"", "class=\"opening\"", "href=\"" + base() + "/members/L2-h0x3\"", CAUTION);
+    }
+
+    @Test
+    void siProjectShowsSiUnits() {
+        Results.Computed deck = server.store.results().of(server.deck().id());
+        DerivedMember m = deck.derived().members().get(0);
+        String body = server.get("/projects/" + server.deck().id() + "/members/" + m.id()).body();
+        assertThat(body).contains(" kN", "kPa", "Garages").doesNotContain(" kip");
+    }
+
+    @Test
+    void apiRecordIsTheSameRecordAsThePage() {
+        DerivedMember m = alder.derived().members().get(3);
+        HttpResponse<String> r = server.get("/api" + base() + "/members/" + m.id() + "/record");
+        assertThat(r.statusCode()).isEqualTo(200);
+        assertThat(r.headers().firstValue("Content-Type").orElse("")).startsWith("application/json");
+        assertThat(r.body()).isEqualTo(com.baysheet.engine.record.RecordJson.write(m.result().record()));
+    }
+}
