@@ -6,7 +6,7 @@ import java.util.List;
 
 /**
  * A calculation package: cover (project data and design criteria), index, member sheets grouped by level
- * and member kind, column take-downs and the revision log, all under one title block.
+ * and member kind (put in that order here, otherwise as given), column take-downs and the revision log, all under one title block.
  *
  * @param title what the package covers ("Project package", "Level 2 package")
  */
@@ -16,7 +16,7 @@ public record CalcPackage(SheetHeader header, String title, DesignCriteria crite
         if (header == null) throw new InputError("header", "none", "a package needs its title block");
         if (title == null || title.isBlank()) throw new InputError("title", "\"\"", "a package needs a title");
         if (criteria == null) throw new InputError("criteria", "none", "a package needs its design criteria");
-        sheets = List.copyOf(sheets);
+        sheets = Index.grouped(List.copyOf(sheets));
         takeDowns = List.copyOf(takeDowns);
         revisions = List.copyOf(revisions);
         if (sheets.isEmpty() && takeDowns.isEmpty())

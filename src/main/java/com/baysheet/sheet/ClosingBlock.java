@@ -25,14 +25,15 @@ final class ClosingBlock {
         this.checking = checking;
     }
 
-    PdfPTable table(PdfPTable governing) {
+    /** @param lead what sits above the disclaimer (the governing results), or null */
+    PdfPTable table(com.lowagie.text.Element lead) {
         PdfPTable t = Cells.table(540 - STAMP, STAMP);
         t.setSpacingBefore(8);
         t.setKeepTogether(true);
         Phrase words = new Phrase(DISCLAIMER, fonts.body());
         if (checking) words.add(new Chunk("\n\nCHECKING COPY — NOT FOR SUBMITTAL. Markups may be open; do not seal.", fonts.mark()));
         PdfPCell left = new PdfPCell();
-        left.addElement(governing);
+        if (lead != null) left.addElement(lead);
         com.lowagie.text.Paragraph p = new com.lowagie.text.Paragraph(words);
         p.setLeading(9.5f);
         left.addElement(p);

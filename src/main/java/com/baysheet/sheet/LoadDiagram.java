@@ -74,12 +74,19 @@ final class LoadDiagram {
             }
             String label = "w_D " + Display.sig3(Quantity.LINE_LOAD.unit(system).fromBase(g.dead())) + "  w_L "
                     + Display.of(g.live(), Quantity.LINE_LOAD, system);
-            Text.show(t, fonts.regular, 5.5f, Fonts.INK, Element.ALIGN_CENTER,
-                    Text.fit(label, fonts.regular, 5.5f, Math.max(x1 - x0, 60)), (x0 + x1) / 2, y0 + 12.5f);
+            label = Text.fit(label, fonts.regular, 5.5f, Math.max(x1 - x0, 60));
+            float lw = fonts.regular.getWidthPoint(label, 5.5f), cx = (x0 + x1) / 2;
+            if (crossesPoint(cx - lw / 2 - 2, cx + lw / 2 + 2)) cx = Math.max(x0, LEFT) + lw / 2 + 2;
+            Text.show(t, fonts.regular, 5.5f, Fonts.INK, Element.ALIGN_CENTER, label, cx, y0 + 12.5f);
         }
         if (s.distributed().size() > MAX_ROWS)
             Text.show(t, fonts.regular, 5.5f, Fonts.GREY, Element.ALIGN_LEFT,
                     "+ " + (s.distributed().size() - MAX_ROWS) + " more distributed loads (see steps)", LEFT, HEIGHT - 8);
+    }
+
+    private boolean crossesPoint(float from, float to) {
+        for (Sketch.Point p : s.points()) if (x(p.x()) > from && x(p.x()) < to) return true;
+        return false;
     }
 
     private void points() {
@@ -88,12 +95,13 @@ final class LoadDiagram {
         int level = 0;
         for (Sketch.Point p : s.points()) {
             float xp = x(p.x());
-            level = xp - lastX < 48 ? 1 - level : 0;   // alternate label heights where arrows crowd
+            String label = "P_D " + Display.sig3(Quantity.FORCE.unit(system).fromBase(p.dead())) + "  P_L "
+                    + Display.of(p.live(), Quantity.FORCE, system);
+            float room = fonts.regular.getWidthPoint(label, 5.5f) + 6;
+            level = xp - lastX < room ? 1 - level : 0;   // alternate label heights where arrows crowd
             lastX = xp;
             t.setLineWidth(0.9f);
             Drawing.arrow(t, xp, top - level * 8, xp, BEAM + 1.5f, 4f);
-            String label = "P_D " + Display.sig3(Quantity.FORCE.unit(system).fromBase(p.dead())) + "  P_L "
-                    + Display.of(p.live(), Quantity.FORCE, system);
             Text.show(t, fonts.regular, 5.5f, Fonts.INK, Element.ALIGN_CENTER, label, clampLabel(xp), top + 2 - level * 8);
         }
     }

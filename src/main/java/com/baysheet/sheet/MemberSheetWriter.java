@@ -27,6 +27,7 @@ final class MemberSheetWriter {
     private final MemberSheet sheet;
     private final CalcRecord r;
     private final Markups markups;
+    private final List<PdfTemplate> drawings = new java.util.ArrayList<>();
 
     MemberSheetWriter(PdfaDocument pdf, MemberSheet sheet, Markups markups) {
         this.pdf = pdf;
@@ -39,6 +40,7 @@ final class MemberSheetWriter {
     void write() {
         pdf.add(intro());
         pdf.add(figures());
+        drawings.forEach(this::release);
         pdf.add(new EntryTable(fonts, markups).of("Design inputs", r.inputs()));
         pdf.add(new StepTable(fonts, markups, r.edition()).of(r.steps()));
         ResultMatrix matrix = new ResultMatrix(fonts, r.results(), r.governing());
@@ -65,6 +67,15 @@ final class MemberSheetWriter {
         return "";
     }
 
+    /** The drawings are complete once placed: writing them out at once keeps a long package's memory flat. */
+    private void release(PdfTemplate t) {
+        try {
+            pdf.writer.releaseTemplate(t);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
     private PdfPTable figures() {
         PdfPTable t = Cells.table(LoadDiagram.WIDTH, 10, KeyPlanDrawing.WIDTH);
         UnitSystem system = UnitSystem.parse("units", r.units());
@@ -72,9 +83,13 @@ final class MemberSheetWriter {
                 ? ColumnDiagram.draw(pdf.writer.getDirectContent(), fonts, r)
                 : LoadDiagram.draw(pdf.writer.getDirectContent(), fonts, system, r.sketch());
         t.addCell(figure(diagram));
+        drawings.add(diagram);
         t.addCell(Cells.blank(fonts));
-        if (sheet.keyPlan() != null) t.addCell(figure(KeyPlanDrawing.draw(pdf.writer.getDirectContent(), fonts, sheet.keyPlan())));
-        else t.addCell(Cells.text("No key plan: this member was entered on its own, not derived from a floor plan.", fonts.smallGrey()));
+        if (sheet.keyPlan() != null) {
+            PdfTemplate plan = KeyPlanDrawing.draw(pdf.writer.getDirectContent(), fonts, sheet.keyPlan());
+            drawings.add(plan);
+            t.addCell(figure(plan));
+        } else t.addCell(Cells.text("No key plan: this member was entered on its own, not derived from a floor plan.", fonts.smallGrey()));
         t.addCell(caption(r.sketch().support().equals("axial")
                 ? "Axial load at the column head (from the results below)."
                 : "Load diagram: dead (w_D, P_D) and design live loads (w_L, P_L: floor live reduced, roof live included); service reactions D + L + Lr."));

@@ -90,15 +90,13 @@ final class PageFrame extends PdfPageEventHelper {
         float totalW = fonts.regular.getWidthPoint("0000", 6.5f);
         Text.show(cb, fonts.regular, 6.5f, Fonts.INK, Element.ALIGN_LEFT, prefix, right - w - totalW, y);
         cb.addTemplate(totalInFooter, right - totalW, y - 1.5f);
-        if (checking)
-            Text.show(cb, fonts.bold, 6.5f, Fonts.MARK, Element.ALIGN_CENTER, CHECKING, page.getWidth() / 2 + 70, y);
     }
 
     /** Light, opaque and under the content: PDF/A-1 allows no transparency. */
     private void watermark(PdfContentByte under, Rectangle page) {
         under.saveState();
         under.beginText();
-        under.setFontAndSize(fonts.bold, 40f);
+        under.setFontAndSize(fonts.bold, 30f);
         under.setColorFill(new Color(0xf6, 0xd5, 0xd5));
         under.showTextAligned(Element.ALIGN_CENTER, CHECKING, page.getWidth() / 2, page.getHeight() / 2, 55f);
         under.endText();

@@ -62,6 +62,7 @@ final class PdfaDocument {
         byte[] id = Arrays.copyOf(contentId, 16);
         writer.getInfo().put(PdfName.FILEID, PdfEncryption.createInfoId(id, id));
         document.open();
+        writer.getInfo().put(PdfName.CREATIONDATE, date);   // open() stamps the clock time over it
         try {
             writer.setOutputIntents("Custom", "", "http://www.color.org", "sRGB IEC61966-2.1",
                     ICC_Profile.getInstance(ColorSpace.CS_sRGB));

@@ -24,7 +24,7 @@ final class ResultMatrix {
         CASES.put("D", "Dead D");
         CASES.put("L0", "Live L0 unreduced");
         CASES.put("L", "Live L reduced");
-        CASES.put("Lc", "Concentrated");
+        CASES.put("Lc", "Point Lc");
         CASES.put("gov", "Live load governing");
         CASES.put("Ldes", "Design live");
         CASES.put("Lr0", "Roof live unreduced");

@@ -1,0 +1,88 @@
+package com.baysheet.sheet;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.framing.Derived;
+import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.MemberRole;
+import com.baysheet.framing.PlanRect;
+import com.baysheet.framing.model.Bay;
+import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.Level;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
+/**
+ * Sheets and packages from a derived framing model: each member's record with a key plan of its level,
+ * grouped by level (top down, as derived) and by role (girders, beams on grid lines, infill beams, columns).
+ */
+public final class FramingSheets {
+    private FramingSheets() {}
+
+    /** One member's sheet; the header's subject becomes the member's name. */
+    public static MemberSheet member(SheetHeader base, Derived d, String memberId) {
+        DerivedMember m = d.member(memberId).orElseThrow(() -> new InputError("member", memberId, "is not a member of this model"));
+        return sheet(base, d, m);
+    }
+
+    /** The package of one level: its member sheets and the take-downs of the columns at that level. */
+    public static CalcPackage level(SheetHeader base, Derived d, String level, List<Revision> revisions) {
+        List<DerivedMember> on = d.onLevel(level);
+        if (on.isEmpty()) throw new InputError("level", level, "has no members in this model");
+        List<TakeDownTable> downs = new ArrayList<>();
+        for (var t : d.takeDowns())
+            if (t.rows().stream().anyMatch(r -> r.level().equals(level))) downs.add(TakeDownTables.of(d, t));
+        return new CalcPackage(base.withSubject(level + " package"), level + " package", Criteria.of(d.building()),
+                sheets(base, d, on), downs, revisions);
+    }
+
+    /** The whole project: every member sheet and every column take-down. */
+    public static CalcPackage project(SheetHeader base, Derived d, List<Revision> revisions) {
+        return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
+                sheets(base, d, d.members()), d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions);
+    }
+
+    private static List<MemberSheet> sheets(SheetHeader base, Derived d, List<DerivedMember> members) {
+        List<String> levels = members.stream().map(DerivedMember::level).distinct().toList();
+        return members.stream()
+                .sorted(Comparator.comparingInt((DerivedMember m) -> levels.indexOf(m.level())).thenComparingInt(m -> rank(m.role())))
+                .map(m -> sheet(base, d, m)).toList();
+    }
+
+    private static MemberSheet sheet(SheetHeader base, Derived d, DerivedMember m) {
+        return new MemberSheet(base.withSubject(m.name()), m.result().record(), keyPlan(d, m), m.level(), group(m.role()));
+    }
+
+    static int rank(MemberRole r) {
+        return switch (r) { case GIRDER -> 0; case GRID_BEAM -> 1; case INFILL_BEAM -> 2; case COLUMN -> 3; };
+    }
+
+    static String group(MemberRole r) {
+        return switch (r) {
+            case GIRDER -> "Girders";
+            case GRID_BEAM -> "Beams on grid lines";
+            case INFILL_BEAM -> "Infill beams";
+            case COLUMN -> "Columns";
+        };
+    }
+
+    /** The member's level drawn from the model: grid lines, framed bays, the member and its tributary outline. */
+    public static KeyPlan keyPlan(Derived d, DerivedMember m) {
+        Grid g = d.building().grid();
+        List<KeyPlan.GridLine> lines = new ArrayList<>();
+        for (int i = 0; i < g.x().lines(); i++) lines.add(new KeyPlan.GridLine(g.x().name(i), true, g.x().position(i)));
+        for (int j = 0; j < g.y().lines(); j++) lines.add(new KeyPlan.GridLine(g.y().name(j), false, g.y().position(j)));
+        List<KeyPlan.Rect> bays = new ArrayList<>();
+        Level level = d.building().levels().stream().filter(l -> l.name().equals(m.level())).findFirst().orElse(null);
+        if (level != null)
+            for (Bay b : level.bays())
+                if (!b.opening())
+                    bays.add(new KeyPlan.Rect(g.x().position(b.col()), g.y().position(b.row()),
+                            g.x().position(b.col() + 1), g.y().position(b.row() + 1)));
+        List<KeyPlan.Rect> trib = new ArrayList<>();
+        for (PlanRect r : m.tributary()) trib.add(new KeyPlan.Rect(r.x1(), r.y1(), r.x2(), r.y2()));
+        var p = m.plan();
+        return new KeyPlan(m.level(), lines, bays, new KeyPlan.Line(p.x1(), p.y1(), p.x2(), p.y2()), trib);
+    }
+}

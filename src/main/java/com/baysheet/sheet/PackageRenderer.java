@@ -1,0 +1,72 @@
+package com.baysheet.sheet;
+
+import java.io.ByteArrayOutputStream;
+import java.io.OutputStream;
+import java.security.MessageDigest;
+import java.nio.charset.StandardCharsets;
+
+/**
+ * Renders a calculation package to PDF/A-1b: cover with the design criteria, index, the member sheets
+ * grouped by level and member kind, the column take-downs and the revision log, "n of N" on every page.
+ * Pages are written to the stream as they are completed, so a package of hundreds of members needs little
+ * memory; the index's page numbers and N are small templates filled in as the pages become known.
+ */
+public final class PackageRenderer {
+    private PackageRenderer() {}
+
+    /** Told after each member sheet is laid out, for a progress bar; called on the rendering thread. */
+    @FunctionalInterface
+    public interface Progress {
+        void sheetDone(int done, int total);
+
+        Progress NONE = (done, total) -> {};
+    }
+
+    /** The issued package written to {@code out} (left open). The package header must name its checker. */
+    public static StreamedPdf render(CalcPackage pkg, OutputStream out, Progress progress) {
+        SheetRenderer.requireChecked(pkg.header());
+        for (MemberSheet s : pkg.sheets()) SheetRenderer.requireChecked(s.header());
+        PdfaDocument pdf = PdfaDocument.open(out, pkg.header(), pkg.title() + ", " + pkg.header().project(), digest(pkg), false);
+        Index index = new Index(pdf, pkg);
+        pdf.frame.show(pkg.header(), pkg.title() + " · cover");
+        new Cover(pdf, pkg).write();
+        pdf.newPage();
+        pdf.frame.show(pkg.header().withSubject("Index of sheets"), pkg.title() + " · index");
+        index.write();
+        int done = 0;
+        for (MemberSheet s : pkg.sheets()) {
+            pdf.newPage();
+            pdf.frame.show(s.header(), SheetRenderer.context(s));
+            index.startsHere(s);
+            new MemberSheetWriter(pdf, s, Markups.ISSUED).write();
+            progress.sheetDone(++done, pkg.sheets().size());
+        }
+        if (!pkg.takeDowns().isEmpty()) {
+            pdf.newPage();
+            pdf.frame.show(pkg.header().withSubject("Column take-downs"), pkg.title() + " · column take-downs");
+            index.startsHere(Index.TAKE_DOWNS);
+            new TakeDownPages(pdf, pkg.takeDowns()).write();
+        }
+        pdf.newPage();
+        pdf.frame.show(pkg.header().withSubject("Revision log"), pkg.title() + " · revision log");
+        index.startsHere(Index.REVISIONS);
+        new RevisionLog(pdf, pkg).write();
+        return pdf.finish();
+    }
+
+    /** The issued package in memory, for small packages and tests. */
+    public static RenderedPdf render(CalcPackage pkg) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream(256 * 1024);
+        StreamedPdf s = render(pkg, out, Progress.NONE);
+        return new RenderedPdf(out.toByteArray(), s.sha256(), s.pages());
+    }
+
+    /** A digest of everything printed, fed part by part so that a large package is never one string. */
+    private static byte[] digest(CalcPackage pkg) {
+        MessageDigest d = Hashes.sha256();
+        d.update(("package|" + pkg.header() + "|" + pkg.title() + "|" + pkg.criteria() + "|" + pkg.revisions()).getBytes(StandardCharsets.UTF_8));
+        for (MemberSheet s : pkg.sheets()) d.update(s.toString().getBytes(StandardCharsets.UTF_8));
+        for (TakeDownTable t : pkg.takeDowns()) d.update(t.toString().getBytes(StandardCharsets.UTF_8));
+        return d.digest();
+    }
+}

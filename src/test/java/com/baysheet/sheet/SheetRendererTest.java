@@ -1,0 +1,103 @@
+package com.baysheet.sheet;
+
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.record.Entry;
+import com.baysheet.engine.record.Note;
+import com.baysheet.engine.record.Step;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+import java.security.MessageDigest;
+import java.util.HexFormat;
+import java.util.List;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+class SheetRendererTest {
+    static CalcRecord beam;
+    static RenderedPdf issued;
+    static String text;
+
+    private static String sq(String s) { return SheetFixtures.squash(s); }
+
+    @BeforeAll
+    static void render() {
+        beam = SheetFixtures.beam();
+        issued = SheetRenderer.issued(MemberSheet.of(SheetFixtures.header("Beam B1"), beam));
+        text = SheetFixtures.squash(SheetFixtures.text(issued.bytes()));
+    }
+
+    @Test
+    void textHoldsEveryInputWithItsShownValue() {
+        for (Entry e : beam.inputs()) assertThat(text).contains(sq(e.label())).contains(sq(e.shown()));
+    }
+
+    @Test
+    void textHoldsEveryStepResultAndClauseNumber() {
+        for (Step s : beam.steps()) {
+            assertThat(text).contains(sq(s.shown()));
+            if (!s.clause().isNone()) assertThat(text).contains(sq(s.clause().ref()));
+        }
+        assertThat(text).contains(sq("4.7.2, Eq. 4.7-1")).contains(sq("Table 4.7-1"));
+    }
+
+    @Test
+    void textHoldsEveryResultAndTheGoverningOnesSetApart() {
+        for (Entry e : beam.results()) assertThat(text).contains(sq(e.shown()));
+        String governing = text.substring(text.indexOf("GOVERNINGRESULTS"));
+        for (String k : beam.governing()) assertThat(governing).contains(sq(beam.entry(k).label())).contains(sq(beam.entry(k).shown()));
+    }
+
+    @Test
+    void textHoldsInitialsCautionsDisclaimerAndStampBox() {
+        assertThat(text).contains("JQR").contains("2025-05-28").contains("MKL").contains("2025-05-30");
+        for (Note n : beam.notes()) assertThat(text).contains(sq(n.text()));
+        assertThat(text).contains("CAUTION").contains(sq("licensed professional engineer"))
+                .contains(sq("adopted local building code")).contains(sq("Engineer's seal and signature"));
+    }
+
+    @Test
+    void veraPdfFindsItPdfA1b() {
+        assertThat(PdfA.failures(issued.bytes())).isEmpty();
+    }
+
+    @Test
+    void everyPageCountsItselfOfTheTotal() {
+        int n = SheetFixtures.pages(issued.bytes());
+        assertThat(issued.pages()).isEqualTo(n).isGreaterThanOrEqualTo(2);
+        for (int p = 1; p <= n; p++)
+            assertThat(SheetFixtures.page(issued.bytes(), p)).contains(p + " of " + n).contains("Page " + p + " of " + n);
+    }
+
+    @Test
+    void sameInputsGiveTheSameBytesAndTheHashIsTheFilesHash() throws Exception {
+        RenderedPdf again = SheetRenderer.issued(MemberSheet.of(SheetFixtures.header("Beam B1"), SheetFixtures.beam()));
+        assertThat(again.bytes()).isEqualTo(issued.bytes());
+        assertThat(again.sha256()).isEqualTo(issued.sha256())
+                .isEqualTo(HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(issued.bytes())));
+    }
+
+    @Test
+    void anotherIssueDateGivesOtherBytes() {
+        SheetHeader h = SheetFixtures.header("Beam B1");
+        SheetHeader later = new SheetHeader(h.firm(), h.project(), h.jobNumber(), h.subject(), h.preparedBy(), h.preparedOn(),
+                h.checkedBy(), h.checkedOn(), "B", h.issueDate().plusDays(7));
+        assertThat(SheetRenderer.issued(MemberSheet.of(later, beam)).sha256()).isNotEqualTo(issued.sha256());
+    }
+
+    @Test
+    void bundledFontHasEverySymbolTheRecordsUse() {
+        Fonts f = Fonts.create(1);
+        for (char c : "²·√Σ≤≥−×ℓ†—…Δ".toCharArray()) assertThat(f.regular.charExists(c)).as("glyph %s", c).isTrue();
+        for (char c : "²·√Σ≤≥−×ℓ†—…Δ".toCharArray()) assertThat(f.bold.charExists(c)).as("bold glyph %s", c).isTrue();
+    }
+
+    @Test
+    void girderAndColumnSheetsRenderTheirOwnShownValues() {
+        for (CalcRecord r : List.of(SheetFixtures.girder(), SheetFixtures.column())) {
+            String t = sq(SheetFixtures.text(SheetRenderer.issued(MemberSheet.of(SheetFixtures.header(r.subject()), r)).bytes()));
+            for (Step s : r.steps()) assertThat(t).contains(sq(s.shown()));
+            for (Entry e : r.results()) assertThat(t).contains(sq(e.shown()));
+        }
+    }
+}
