@@ -1,0 +1,14 @@
+package com.baysheet.store.auth;
+
+import com.baysheet.store.Sql;
+import com.baysheet.store.review.AuditTrail;
+
+/** The user side of the store, wired once. */
+public record Accounts(UserStore users, SessionStore sessions, Logins logins, UserAdmin admin) {
+    public static Accounts on(Sql sql, AuditTrail audit, Logins.Policy policy) {
+        UserStore users = new UserStore(sql);
+        SessionStore sessions = new SessionStore(sql);
+        Logins logins = new Logins(users, sessions, new LoginFailures(sql), audit, policy);
+        return new Accounts(users, sessions, logins, new UserAdmin(users, sessions, audit, policy.passwords()));
+    }
+}

@@ -1,0 +1,128 @@
+package com.baysheet.store.auth;
+
+import com.baysheet.auth.LoginRefused;
+import com.baysheet.auth.LoginThrottle;
+import com.baysheet.auth.NewUser;
+import com.baysheet.auth.Passwords;
+import com.baysheet.auth.SessionPolicy;
+import com.baysheet.auth.Tokens;
+import com.baysheet.auth.User;
+import com.baysheet.engine.InputError;
+import com.baysheet.review.AuditEvent;
+import com.baysheet.store.review.AuditTrail;
+import com.baysheet.store.auth.SessionStore.StoredSession;
+
+import java.time.Clock;
+import java.time.Instant;
+import java.util.Locale;
+import java.util.Optional;
+
+/**
+ * Logging in and out: passwords checked against their hashes, failed attempts throttled and recorded,
+ * a fresh session for every login (any session the browser brought along is ended, so a planted cookie
+ * never becomes a login), sessions that lapse when idle and at a fixed cap.
+ */
+public final class Logins {
+    /** Ready-made pieces, so that tests can give a cheap hash strength and their own clock. */
+    public record Policy(Passwords passwords, SessionPolicy sessions, LoginThrottle throttle, Clock clock) {}
+
+    private final UserStore users;
+    private final SessionStore sessions;
+    private final LoginFailures failures;
+    private final AuditTrail audit;
+    private final Policy policy;
+
+    public Logins(UserStore users, SessionStore sessions, LoginFailures failures, AuditTrail audit, Policy policy) {
+        this.users = users;
+        this.sessions = sessions;
+        this.failures = failures;
+        this.audit = audit;
+        this.policy = policy;
+    }
+
+    public SignedIn login(String typedUsername, String password, String address, String oldToken) {
+        String name = typedUsername == null ? "" : typedUsername.strip().toLowerCase(Locale.ROOT);
+        Instant now = policy.clock().instant();
+        Optional<Instant> locked = policy.throttle().lockedUntil(failures.byUsername(name, policy.throttle().since(now)),
+                failures.byAddress(address, policy.throttle().since(now)), now);
+        if (locked.isPresent()) {
+            audit.append(AuditEvent.of(null, name, "login throttled", "user " + name, "", address));
+            throw LoginRefused.throttled(locked.get());
+        }
+        Optional<UserStore.WithHash> found = users.findByUsername(name);
+        boolean ok = policy.passwords().matches(password, found.map(UserStore.WithHash::passwordHash).orElse(null));
+        if (!ok || !found.get().user().active()) {
+            failures.record(name, address, now);
+            audit.append(AuditEvent.of(null, name, "login failed", "user " + name, "", address));
+            throw LoginRefused.badCredentials();
+        }
+        if (oldToken != null) sessions.delete(Tokens.sha256(oldToken));
+        failures.clear(name, policy.throttle().since(now));
+        User u = found.get().user();
+        audit.append(AuditEvent.of(u.id(), u.username(), "login", "user " + u.username(), "", address));
+        return start(u, now);
+    }
+
+    /** The login a cookie value stands for, if it is live; each use slides its idle expiry. */
+    public Optional<SignedIn> session(String token) {
+        if (token == null || token.isBlank()) return Optional.empty();
+        String hash = Tokens.sha256(token);
+        Optional<StoredSession> s = sessions.find(hash);
+        Instant now = policy.clock().instant();
+        if (s.isEmpty()) return Optional.empty();
+        if (!s.get().expiresAt().isAfter(now)) {
+            sessions.delete(hash);
+            return Optional.empty();
+        }
+        User u = users.find(s.get().userId());
+        if (!u.active()) {
+            sessions.deleteAll(u.id());
+            return Optional.empty();
+        }
+        Instant expires = policy.sessions().expiresAt(s.get().createdAt(), now);
+        sessions.extend(hash, expires);
+        return Optional.of(new SignedIn(u, token, s.get().csrfToken(), expires));
+    }
+
+    public void logout(SignedIn s, String address) {
+        sessions.delete(Tokens.sha256(s.token()));
+        audit.append(AuditEvent.of(s.user().id(), s.user().username(), "logout", "user " + s.user().username(), "", address));
+    }
+
+    /** Changes the password after checking the current one; the user's other sessions are ended. */
+    public void changePassword(SignedIn s, String current, String replacement, String confirm, String address) {
+        UserStore.WithHash w = users.findByUsername(s.user().username()).orElseThrow();
+        if (!policy.passwords().matches(current, w.passwordHash()))
+            throw new InputError("currentPassword", "(hidden)", "is not your current password");
+        String hash = policy.passwords().hash(Passwords.acceptable("newPassword", confirmed(replacement, confirm)));
+        users.setPassword(s.user().id(), hash);
+        sessions.deleteOthers(s.user().id(), Tokens.sha256(s.token()));
+        audit.append(AuditEvent.of(s.user().id(), s.user().username(), "password changed", "user " + s.user().username(), "", address));
+    }
+
+    /** The one-time set-up: creates the first administrator and logs them in; empty once set-up is done. */
+    public Optional<SignedIn> setUp(NewUser admin, String password, String confirm, String address) {
+        String hash = policy.passwords().hash(Passwords.acceptable("password", confirmed(password, confirm)));
+        Optional<User> u = users.createFirstAdministrator(admin, hash);
+        u.ifPresent(x -> audit.append(AuditEvent.of(x.id(), x.username(), "set-up", "user " + x.username(),
+                "first administrator created", address)));
+        return u.map(x -> start(x, policy.clock().instant()));
+    }
+
+    public boolean setupDone() { return users.setupDone(); }
+
+    private SignedIn start(User u, Instant now) {
+        String token = Tokens.random();
+        String csrf = Tokens.random();
+        Instant expires = policy.sessions().expiresAt(now, now);
+        sessions.deleteExpired(now);
+        sessions.create(new StoredSession(Tokens.sha256(token), u.id(), csrf, now, expires));
+        return new SignedIn(u, token, csrf, expires);
+    }
+
+    private static String confirmed(String password, String confirm) {
+        if (password != null && !password.equals(confirm))
+            throw new InputError("confirmPassword", "(hidden)", "does not match the new password");
+        return password;
+    }
+}

@@ -1,0 +1,63 @@
+package com.baysheet.store.auth;
+
+import com.baysheet.auth.NewUser;
+import com.baysheet.auth.Passwords;
+import com.baysheet.auth.Role;
+import com.baysheet.auth.User;
+import com.baysheet.engine.InputError;
+import com.baysheet.review.AuditEvent;
+import com.baysheet.store.review.AuditTrail;
+
+/**
+ * What the administrator does to users: add one with a starting password, change a role, make a user
+ * inactive or active again. An administrator cannot demote or deactivate themselves (the office would be
+ * left with nobody to manage users). Every change goes to the audit trail.
+ */
+public final class UserAdmin {
+    private final UserStore users;
+    private final SessionStore sessions;
+    private final AuditTrail audit;
+    private final Passwords passwords;
+
+    public UserAdmin(UserStore users, SessionStore sessions, AuditTrail audit, Passwords passwords) {
+        this.users = users;
+        this.sessions = sessions;
+        this.audit = audit;
+        this.passwords = passwords;
+    }
+
+    public User add(User admin, NewUser u, String password, String address) {
+        User made = users.create(u, passwords.hash(Passwords.acceptable("password", password)));
+        log(admin, "user added", made, made.role().label(), address);
+        return made;
+    }
+
+    public void setRole(User admin, long userId, Role role, String address) {
+        User u = users.find(userId);
+        if (u.id() == admin.id() && role != Role.ADMINISTRATOR)
+            throw new InputError("role", role.label(), "you cannot take the administrator role from yourself");
+        users.setRole(userId, role);
+        sessions.deleteAll(userId);
+        log(admin, "role changed", u, u.role().label() + " to " + role.label(), address);
+    }
+
+    public void setActive(User admin, long userId, boolean active, String address) {
+        User u = users.find(userId);
+        if (u.id() == admin.id() && !active) throw new InputError("active", "false", "you cannot make yourself inactive");
+        users.setActive(userId, active);
+        if (!active) sessions.deleteAll(userId);
+        log(admin, active ? "user activated" : "user deactivated", u, "", address);
+    }
+
+    /** The administrator sets a new password for someone who forgot theirs; their sessions end. */
+    public void resetPassword(User admin, long userId, String password, String address) {
+        User u = users.find(userId);
+        users.setPassword(userId, passwords.hash(Passwords.acceptable("password", password)));
+        sessions.deleteAll(userId);
+        log(admin, "password reset", u, "", address);
+    }
+
+    private void log(User admin, String action, User u, String detail, String address) {
+        audit.append(AuditEvent.of(admin.id(), admin.username(), action, "user " + u.username(), detail, address));
+    }
+}

@@ -1,0 +1,138 @@
+package com.baysheet.store.review;
+
+import com.baysheet.auth.Tokens;
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.review.AuditEvent;
+import com.baysheet.review.Caller;
+import com.baysheet.review.InputsFingerprint;
+import com.baysheet.review.MarkupNote;
+import com.baysheet.review.RecordSnapshot;
+import com.baysheet.review.SheetRef;
+import com.baysheet.review.SheetRevision;
+import com.baysheet.store.NotFound;
+import com.baysheet.store.Sql;
+
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.UnaryOperator;
+
+/**
+ * The sheet check over the store: each step reads the current revision, refuses it if the user's page is
+ * out of date, applies the lifecycle rules and writes the result with its audit entry in one transaction.
+ * The calculation record passed in is the member's current one, as the framing derivation gives it.
+ */
+public final class Reviews {
+    /** What a sheet's page shows: the current revision, its markups and all revisions. */
+    public record SheetView(StoredRevision current, List<MarkupNote> markups, List<StoredRevision> history) {}
+
+    private final Sql sql;
+
+    public Reviews(Sql sql) {
+        this.sql = sql;
+    }
+
+    public SheetView view(SheetRef ref) {
+        return sql.tx(c -> {
+            StoredRevision cur = current(c, ref);
+            List<MarkupNote> m = cur.stored() ? Markups.forRevision(c, cur.id()) : List.of();
+            return new SheetView(cur, m, Revisions.history(c, ref));
+        });
+    }
+
+    public List<StoredRevision> latestOf(long projectId) {
+        return sql.tx(c -> Revisions.latestOf(c, projectId));
+    }
+
+    public StoredRevision revision(long id) {
+        return sql.tx(c -> Revisions.byId(c, id)).orElseThrow(() -> new NotFound("revision", id));
+    }
+
+    /** The frozen bytes of an issued (or since superseded) revision. */
+    public Optional<byte[]> issuedPdf(long revisionId) {
+        return sql.tx(c -> Revisions.pdf(c, revisionId));
+    }
+
+    /** Issued revisions whose PDF has this SHA-256. */
+    public List<StoredRevision> withPdf(String sha256) {
+        return sql.tx(c -> Revisions.withPdf(c, sha256));
+    }
+
+    public void submit(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current) {
+        String fp = InputsFingerprint.of(current);
+        step(ref, version, who, "submit", r -> r.submit(who.actor(), fp, today), RecordSnapshot.write(current), null);
+    }
+
+    public void resubmit(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current) {
+        String fp = InputsFingerprint.of(current);
+        step(ref, version, who, "resubmit", r -> r.resubmit(who.actor(), fp, today), RecordSnapshot.write(current), null);
+    }
+
+    public void returnWithMarkups(SheetRef ref, long version, Caller who) {
+        sql.tx(c -> {
+            StoredRevision cur = current(c, ref);
+            int open = cur.stored() ? Markups.openCount(c, cur.id()) : 0;
+            return apply(c, cur, version, who, "return", r -> r.returnWithMarkups(who.actor(), open), cur.recordJson(), null);
+        });
+    }
+
+    public void approve(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current) {
+        String fp = InputsFingerprint.of(current);
+        sql.tx(c -> {
+            StoredRevision cur = current(c, ref);
+            int open = cur.stored() ? Markups.openCount(c, cur.id()) : 0;
+            return apply(c, cur, version, who, "approve", r -> r.approve(who.actor(), today, open, fp), cur.recordJson(), null);
+        });
+    }
+
+    /** Issues the approved revision with this PDF, rendered from {@code current}; its SHA-256 is computed here. */
+    public void issue(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current, byte[] pdf) {
+        String fp = InputsFingerprint.of(current);
+        String sha = Tokens.sha256(pdf);
+        step(ref, version, who, "issue", r -> r.issue(who.actor(), today, sha, fp), RecordSnapshot.write(current), pdf);
+    }
+
+    /**
+     * Marks the issued revision superseded and opens the next one when the member's inputs changed since
+     * it was issued; returns whether it did. Called whenever the sheet is looked at or its project changes.
+     */
+    public boolean supersedeIfChanged(SheetRef ref, CalcRecord current, Caller who) {
+        String fp = InputsFingerprint.of(current);
+        return sql.tx(c -> {
+            StoredRevision cur = current(c, ref);
+            if (!cur.revision().outdatedBy(fp) || !Revisions.claim(c, cur.id(), cur.version())) return false;
+            SheetRevision gone = cur.revision().supersede(fp);
+            Revisions.write(c, cur.id(), gone, cur.recordJson(), null);
+            Revisions.insertNext(c, cur.id(), gone.next());
+            AuditTrail.append(c, event(who, "supersede", ref, "revision " + gone.number() + " superseded; revision "
+                    + (gone.number() + 1) + " opened because the member's inputs changed"));
+            return true;
+        });
+    }
+
+    private void step(SheetRef ref, long version, Caller who, String action, UnaryOperator<SheetRevision> rule,
+                      String recordJson, byte[] pdf) {
+        sql.tx(c -> apply(c, current(c, ref), version, who, action, rule, recordJson, pdf));
+    }
+
+    private static Void apply(Connection c, StoredRevision cur, long version, Caller who, String action,
+                              UnaryOperator<SheetRevision> rule, String recordJson, byte[] pdf) throws SQLException {
+        if (cur.version() != version) throw new ConcurrentChange("The sheet " + cur.sheet().subject());
+        SheetRevision next = rule.apply(cur.revision());
+        if (!cur.stored()) Revisions.insertFirst(c, cur.sheet(), next, recordJson);
+        else if (!Revisions.claim(c, cur.id(), version)) throw new ConcurrentChange("The sheet " + cur.sheet().subject());
+        else Revisions.write(c, cur.id(), next, recordJson, pdf);
+        AuditTrail.append(c, event(who, action, cur.sheet(), "revision " + next.number() + " now " + next.state().label()));
+        return null;
+    }
+
+    static StoredRevision current(Connection c, SheetRef ref) throws SQLException {
+        return Revisions.current(c, ref).orElseGet(() -> StoredRevision.unsubmitted(ref));
+    }
+
+    static AuditEvent event(Caller who, String action, SheetRef ref, String detail) {
+        return AuditEvent.of(who.actor().userId(), who.username(), action, ref.label(), detail, who.address());
+    }
+}

@@ -1,0 +1,161 @@
+package com.baysheet.review.store;
+
+import com.baysheet.auth.LoginRefused;
+import com.baysheet.auth.LoginThrottle;
+import com.baysheet.auth.NewUser;
+import com.baysheet.auth.Passwords;
+import com.baysheet.auth.Role;
+import com.baysheet.auth.SessionPolicy;
+import com.baysheet.engine.InputError;
+import com.baysheet.store.Database;
+import com.baysheet.store.Sql;
+import com.baysheet.store.auth.Accounts;
+import com.baysheet.store.auth.Logins;
+import com.baysheet.store.auth.SignedIn;
+import com.baysheet.store.review.AuditTrail;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+
+import java.time.Duration;
+import java.time.Instant;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+/** Set-up, logins, sessions and the throttle over the real migrations; run on H2 and on PostgreSQL. */
+abstract class LoginsContract {
+    static final String PASSWORD = "long enough secret";
+    final TestClock clock = new TestClock(Instant.parse("2026-03-02T08:00:00Z"));
+    Database db;
+    AuditTrail audit;
+    Accounts accounts;
+
+    abstract Database open();
+
+    @BeforeEach
+    void setUp() {
+        db = open();
+        Sql sql = new Sql(db.dataSource());
+        audit = new AuditTrail(sql);
+        accounts = Accounts.on(sql, audit, new Logins.Policy(new Passwords(4),
+                new SessionPolicy(Duration.ofHours(2), Duration.ofHours(12)), new LoginThrottle(3, 10, Duration.ofMinutes(15)), clock));
+    }
+
+    @AfterEach
+    void tearDown() { db.close(); }
+
+    Logins logins() { return accounts.logins(); }
+
+    SignedIn admin() {
+        return logins().setUp(new NewUser("ada", "Ada Admin", "AA", Role.ADMINISTRATOR), PASSWORD, PASSWORD, "10.0.0.1").orElseThrow();
+    }
+
+    @Test
+    void setUpHappensOnceAndLogsTheAdministratorIn() {
+        assertThat(logins().setupDone()).isFalse();
+        SignedIn s = admin();
+        assertThat(s.user().role()).isEqualTo(Role.ADMINISTRATOR);
+        assertThat(logins().session(s.token())).isPresent();
+        assertThat(logins().setupDone()).isTrue();
+        assertThat(logins().setUp(new NewUser("mallory", "M", "M", Role.ADMINISTRATOR), PASSWORD, PASSWORD, "x")).isEmpty();
+        assertThat(accounts.users().count()).isEqualTo(1);
+    }
+
+    @Test
+    void setUpRefusesAMismatchedConfirmation() {
+        assertThatThrownBy(() -> logins().setUp(new NewUser("ada", "Ada", "AA", Role.ADMINISTRATOR), PASSWORD, "other thing!", "x"))
+                .isInstanceOf(InputError.class).hasMessageStartingWith("confirmPassword:");
+        assertThat(logins().setupDone()).isFalse();
+    }
+
+    @Test
+    void aWrongPasswordIsRefusedAndRecordedWithoutSayingWhetherTheUserExists() {
+        admin();
+        String known = messageOf(() -> logins().login("ada", "wrong password!", "10.0.0.2", null));
+        String unknown = messageOf(() -> logins().login("nobody", "wrong password!", "10.0.0.2", null));
+        assertThat(known).isEqualTo(unknown);
+        assertThat(audit.all()).extracting(e -> e.action()).containsExactly("set-up", "login failed", "login failed");
+    }
+
+    @Test
+    void repeatedFailuresThrottleEvenTheRightPasswordUntilTheWindowPasses() {
+        admin();
+        for (int i = 0; i < 3; i++) messageOf(() -> logins().login("ada", "wrong password!", "10.0.0.2", null));
+        assertThatThrownBy(() -> logins().login("ada", PASSWORD, "10.0.0.2", null)).isInstanceOf(LoginRefused.class)
+                .hasMessageContaining("Too many").matches(e -> ((LoginRefused) e).retryAfter().isPresent());
+        clock.advance(Duration.ofMinutes(16));
+        assertThat(logins().login("ada", PASSWORD, "10.0.0.2", null).user().username()).isEqualTo("ada");
+    }
+
+    @Test
+    void aLoginRenewsTheSessionAndEndsTheOneTheBrowserBrought() {
+        SignedIn first = admin();
+        SignedIn second = logins().login("ADA", PASSWORD, "10.0.0.2", first.token());
+        assertThat(second.token()).isNotEqualTo(first.token());
+        assertThat(second.csrfToken()).isNotEqualTo(first.csrfToken());
+        assertThat(logins().session(first.token())).isEmpty();
+        assertThat(logins().session(second.token())).isPresent();
+    }
+
+    @Test
+    void sessionsLapseWhenIdleAndAtTheCap() {
+        SignedIn s = admin();
+        clock.advance(Duration.ofMinutes(119));
+        assertThat(logins().session(s.token())).as("used within the idle time").isPresent();
+        for (int i = 0; i < 5; i++) {
+            clock.advance(Duration.ofMinutes(110));
+            assertThat(logins().session(s.token())).isPresent();
+        }
+        clock.advance(Duration.ofMinutes(110));
+        assertThat(logins().session(s.token())).as("past twelve hours").isEmpty();
+        SignedIn t = logins().login("ada", PASSWORD, "x", null);
+        clock.advance(Duration.ofHours(2));
+        assertThat(logins().session(t.token())).as("idle two hours").isEmpty();
+        assertThat(logins().session("made-up")).isEmpty();
+    }
+
+    @Test
+    void logoutAndPasswordChangeEndSessions() {
+        SignedIn a = admin();
+        SignedIn b = logins().login("ada", PASSWORD, "x", null);
+        logins().changePassword(a, PASSWORD, "a new long secret", "a new long secret", "x");
+        assertThat(logins().session(b.token())).as("the other browser").isEmpty();
+        assertThat(logins().session(a.token())).isPresent();
+        assertThatThrownBy(() -> logins().login("ada", PASSWORD, "x", null)).isInstanceOf(LoginRefused.class);
+        logins().logout(a, "x");
+        assertThat(logins().session(a.token())).isEmpty();
+        assertThatThrownBy(() -> logins().changePassword(b, "not it at all", "x".repeat(12), "x".repeat(12), "x"))
+                .hasMessageStartingWith("currentPassword:");
+    }
+
+    @Test
+    void anInactiveUserCannotLogInAndLosesTheirSessions() {
+        SignedIn a = admin();
+        var eve = accounts.admin().add(a.user(), new NewUser("eve", "Eve", "EP", Role.ENGINEER), PASSWORD, "x");
+        SignedIn e = logins().login("eve", PASSWORD, "x", null);
+        accounts.admin().setActive(a.user(), eve.id(), false, "x");
+        assertThat(logins().session(e.token())).isEmpty();
+        assertThatThrownBy(() -> logins().login("eve", PASSWORD, "x", null)).isInstanceOf(LoginRefused.class);
+        assertThatThrownBy(() -> accounts.admin().setActive(a.user(), a.user().id(), false, "x")).hasMessageStartingWith("active:");
+    }
+
+    @Test
+    void sqlInTheUsernameChangesNothing() {
+        admin();
+        messageOf(() -> logins().login("ada' OR '1'='1", "' OR '1'='1", "x", null));
+        assertThat(accounts.users().count()).isEqualTo(1);
+        assertThatThrownBy(() -> accounts.admin().add(accounts.users().findAll().get(0),
+                new NewUser("x'); DROP TABLE app_user; --", "X", "X", Role.ENGINEER), PASSWORD, "x")).hasMessageStartingWith("username:");
+        assertThat(accounts.users().count()).isEqualTo(1);
+    }
+
+    private static String messageOf(Runnable r) {
+        try {
+            r.run();
+            return null;
+        } catch (LoginRefused e) {
+            return e.getMessage();
+        }
+    }
+}
