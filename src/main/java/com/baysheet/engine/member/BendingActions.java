@@ -171,7 +171,8 @@ final class BendingActions {
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
             ConcentratedCheck.Effect ce = switch (e) {
-                case R1, R2 -> ConcentratedCheck.Effect.REACTION;
+                case R1 -> ConcentratedCheck.Effect.LEFT_REACTION;
+                case R2 -> ConcentratedCheck.Effect.RIGHT_REACTION;
                 case V -> ConcentratedCheck.Effect.SHEAR;
                 case MPOS -> ConcentratedCheck.Effect.MAX_MOMENT;
                 case MNEG -> ConcentratedCheck.Effect.MIN_MOMENT;

@@ -7,7 +7,8 @@ import com.baysheet.engine.load.Support;
 
 /**
  * Places a concentrated load, spread over its contact length, along a member for the largest effect
- * (ASCE 7-16 4.4): a bounded scan of positions, then a golden-section refinement around the best one.
+ * (ASCE 7-16 4.4). Where statics gives the worst position outright it is used (one solve); otherwise a
+ * bounded scan of positions, then a golden-section refinement around the best one.
  */
 final class ConcentratedCheck {
     private ConcentratedCheck() {}
@@ -18,7 +19,7 @@ final class ConcentratedCheck {
     static final int REFINE_STEPS = 40;
     static final double POSITION_TOLERANCE = 1e-9;
 
-    enum Effect { MAX_MOMENT, MIN_MOMENT, SHEAR, REACTION }
+    enum Effect { MAX_MOMENT, MIN_MOMENT, SHEAR, LEFT_REACTION, RIGHT_REACTION }
 
     /** The largest effect (signed for moments) and the centre position of the load that gives it. */
     record Placement(double effect, double at) {}
@@ -28,6 +29,28 @@ final class ConcentratedCheck {
         double patch = Math.min(side, length);
         double lo = patch / 2, hi = length - patch / 2;
         if (hi - lo <= POSITION_TOLERANCE * length) return new Placement(value(support, load, patch, lo, effect), lo);
+        double known = worstPosition(support, lo, hi, effect);
+        if (!Double.isNaN(known)) return new Placement(value(support, load, patch, known, effect), known);
+        return scan(support, load, patch, lo, hi, effect);
+    }
+
+    /**
+     * The centre position of the worst placement where statics fixes it, NaN where it must be searched.
+     * Reactions are linear in the position (R1 = P(ℓ − x)/ℓ, R2 = Px/ℓ), so they peak at an end of the range.
+     * On a simple span the largest shear is the larger reaction and the largest moment, concave in x and
+     * symmetric, peaks with the load centred (Pℓ/4 − Pc/8). On a cantilever the shear is P wherever the load
+     * is, and the fixed-end moment −Px peaks at the free end. Ties keep the first position, as the scan does.
+     */
+    static double worstPosition(Support s, double lo, double hi, Effect e) {
+        if (e == Effect.LEFT_REACTION) return lo;
+        if (e == Effect.RIGHT_REACTION) return s instanceof Support.Cantilever ? lo : hi;
+        if (s instanceof Support.Simple) return e == Effect.MAX_MOMENT ? (lo + hi) / 2 : lo;
+        if (s instanceof Support.Cantilever) return e == Effect.MIN_MOMENT ? hi : lo;
+        return Double.NaN;
+    }
+
+    private static Placement scan(Support support, double load, double patch, double lo, double hi, Effect effect) {
+        double length = support.length();
         double step = (hi - lo) / (SCAN_POSITIONS - 1);
         double bestAt = lo, best = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < SCAN_POSITIONS; i++) {
@@ -49,20 +72,21 @@ final class ConcentratedCheck {
         return new Placement(value(support, load, patch, x, effect), x);
     }
 
-    /** The quantity maximised: moments by sign, shear and reaction by magnitude. */
+    /** The quantity maximised: moments by sign, shear and reactions by magnitude. */
     private static double score(Support s, double load, double patch, double x, Effect e) {
         double v = value(s, load, patch, x, e);
         return e == Effect.MIN_MOMENT ? -v : Math.abs(v);
     }
 
-    private static double value(Support s, double load, double patch, double x, Effect e) {
+    static double value(Support s, double load, double patch, double x, Effect e) {
         BeamLoads l = new BeamLoads().distributed(load / patch, x - patch / 2, x + patch / 2);
         BeamActions a = BeamSolver.solve(s, l, Double.NaN);
         return switch (e) {
             case MAX_MOMENT -> a.maxMoment();
             case MIN_MOMENT -> a.minMoment();
             case SHEAR -> a.maxShear();
-            case REACTION -> a.maxReaction();
+            case LEFT_REACTION -> a.left();
+            case RIGHT_REACTION -> a.right();
         };
     }
 }
