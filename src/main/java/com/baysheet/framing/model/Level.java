@@ -12,7 +12,8 @@ public record Level(String name, double elevation, boolean roof, double roofSlop
     public Level {
         Check.text("level.name", name);
         Check.finite("level.elevation", elevation);
-        if (roof) Check.nonNegative("level.roofSlope", roofSlope);
+        // the field names the level, so that a form or the API can show the error beside it
+        if (roof) Check.nonNegative("levels[" + name + "].roofSlope", roofSlope);
         bays = List.copyOf(bays);
     }
 
