@@ -37,7 +37,7 @@ final class Criteria {
         List<String> options = List.of(
                 "Partition allowance: " + (!opt.partitionAllowance() ? "not included"
                         : opt.reducePartitions() ? "included, reduced with the live load" : "included, not reduced"),
-                "Live load reduction: by occupancy, as listed above (" + ctx.edition().clause("reduction.kll").label() + " for K_LL)",
+                "Live load reduction: by occupancy, as listed below (" + ctx.edition().clause("reduction.kll").label() + " for K_LL)",
                 "Load combinations: strength (LRFD) and allowable stress (ASD), gravity combinations only");
         return new DesignCriteria(ctx.edition().id(), ctx.system() == com.baysheet.engine.units.UnitSystem.US
                 ? "US customary (ft, psf, plf, kip, kip·ft)" : "SI (m, kPa, kN/m, kN, kN·m)", rows, options);

@@ -18,7 +18,7 @@ import java.util.StringJoiner;
 
 /**
  * The index of a package: each sheet under its level and member kind, with the sheet (page) it starts on
- * and its governing results. The index comes before the sheets, so each sheet number is a small template
+ * and its governing results (action, combination, value). The index comes before the sheets, so each sheet number is a small template
  * written when that sheet begins.
  */
 final class Index {
@@ -81,7 +81,11 @@ final class Index {
 
     private static String governing(CalcRecord r) {
         StringJoiner j = new StringJoiner("; ");
-        for (String k : r.governing()) j.add(r.entry(k).label() + " " + r.entry(k).shown());
+        for (String k : r.governing()) {
+            String label = r.entry(k).label(), action = k.substring(k.indexOf('.') + 1);
+            int open = label.lastIndexOf('(');
+            j.add(action + (open >= 0 && label.endsWith(")") ? " " + label.substring(open) : "") + " " + r.entry(k).shown());
+        }
         return j.toString();
     }
 

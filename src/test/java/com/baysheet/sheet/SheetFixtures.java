@@ -101,6 +101,22 @@ final class SheetFixtures {
         }
     }
 
+    /** The text of every page, the document loaded once. */
+    static List<String> pageTexts(byte[] pdf) {
+        try (PDDocument d = Loader.loadPDF(pdf)) {
+            List<String> out = new ArrayList<>();
+            PDFTextStripper s = new PDFTextStripper();
+            for (int p = 1; p <= d.getNumberOfPages(); p++) {
+                s.setStartPage(p);
+                s.setEndPage(p);
+                out.add(s.getText(d));
+            }
+            return out;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
     static int pages(byte[] pdf) {
         try (PDDocument d = Loader.loadPDF(pdf)) {
             return d.getNumberOfPages();

@@ -1,0 +1,66 @@
+package com.baysheet.sheet;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.engine.record.CalcRecord;
+import org.junit.jupiter.api.Test;
+
+import java.time.LocalDate;
+import java.util.List;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+class CheckingCopyTest {
+    static final CalcRecord girder = SheetFixtures.girder();
+    static final List<Markup> markups = List.of(
+            new Markup("f", "MKL", "Confirm K_LL: is this girder on an edge?", false,
+                    List.of(new Markup.Reply("JQR", "Interior: see the key plan."))),
+            new Markup("span", "MKL", "Span to the column centrelines?", true, List.of()));
+
+    @Test
+    void checkingCopyIsMarkedOnEveryPageAndListsItsMarkups() {
+        RenderedPdf pdf = SheetRenderer.checking(MemberSheet.of(SheetFixtures.unchecked("Girder G1"), girder), markups);
+        for (int p = 1; p <= pdf.pages(); p++)
+            assertThat(SheetFixtures.page(pdf.bytes(), p)).contains(PageFrame.CHECKING);
+        String text = SheetFixtures.squash(SheetFixtures.text(pdf.bytes()));
+        assertThat(text).contains("Checker'smarkups").contains("M1").contains("M2").contains("OPEN").contains("resolved")
+                .contains(SheetFixtures.squash("Confirm K_LL: is this girder on an edge?"))
+                .contains(SheetFixtures.squash("JQR: Interior: see the key plan.")).contains("Nottobesealed")
+                .contains("notyetchecked");
+    }
+
+    @Test
+    void issuedCopyCarriesNoCheckingMark() {
+        RenderedPdf pdf = SheetRenderer.issued(MemberSheet.of(SheetFixtures.header("Girder G1"), girder));
+        assertThat(SheetFixtures.text(pdf.bytes())).doesNotContain(PageFrame.CHECKING).doesNotContain("Checker's markups");
+    }
+
+    @Test
+    void checkingCopyIsPdfA1bAndRepeatable() {
+        MemberSheet sheet = MemberSheet.of(SheetFixtures.unchecked("Girder G1"), girder);
+        RenderedPdf a = SheetRenderer.checking(sheet, markups), b = SheetRenderer.checking(sheet, markups);
+        assertThat(a.sha256()).isEqualTo(b.sha256());
+        assertThat(PdfA.failures(a.bytes())).isEmpty();
+    }
+
+    @Test
+    void anIssuedSheetMustNameItsChecker() {
+        assertThatThrownBy(() -> SheetRenderer.issued(MemberSheet.of(SheetFixtures.unchecked("Girder G1"), girder)))
+                .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("checkedBy"));
+    }
+
+    @Test
+    void missingHeaderFieldsAreNamed() {
+        LocalDate d = LocalDate.of(2025, 6, 2);
+        assertThatThrownBy(() -> new SheetHeader(" ", "P", "J", "S", "JQR", d, "", null, "A", d))
+                .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("firm"));
+        assertThatThrownBy(() -> new SheetHeader("F", "P", "J", "S", "JQR", d, "", null, "A", null))
+                .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("issueDate"));
+        assertThatThrownBy(() -> new SheetHeader("F", "P", "J", "S", "JQR", d, "MKL", null, "A", d))
+                .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("checkedOn"));
+        assertThatThrownBy(() -> new SheetHeader("F", "P", "", "S", "JQR", d, "", null, "A", d))
+                .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("jobNumber"));
+        assertThatThrownBy(() -> new Markup("f", "", "text", false, List.of()))
+                .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("markup.author"));
+    }
+}

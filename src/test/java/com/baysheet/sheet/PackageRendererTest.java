@@ -1,0 +1,105 @@
+package com.baysheet.sheet;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.framing.Derived;
+import com.baysheet.framing.DerivedMember;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+import java.io.ByteArrayOutputStream;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+class PackageRendererTest {
+    static Derived building;
+    static CalcPackage project;
+    static RenderedPdf pdf;
+    static String text;
+    static List<String> pages;
+
+    @BeforeAll
+    static void render() {
+        building = SheetFixtures.building();
+        project = FramingSheets.project(SheetFixtures.header("Project"), building,
+                List.of(new Revision("0", LocalDate.of(2025, 4, 1), "Issued for coordination", "JQR")));
+        pdf = PackageRenderer.render(project);
+        pages = SheetFixtures.pageTexts(pdf.bytes());
+        text = SheetFixtures.squash(String.join("", pages));
+    }
+
+    @Test
+    void coverIndexSheetsTakeDownsAndRevisionLogAreAllThere() {
+        String cover = SheetFixtures.squash(pages.get(0));
+        assertThat(cover).contains("Designcriteria").contains("ASCE7-16").contains("Offices").contains("Partitionallowance")
+                .contains("Engineer'ssealandsignature");
+        assertThat(SheetFixtures.squash(pages.get(1))).contains("Indexofsheets");
+        for (DerivedMember m : building.members()) assertThat(text).contains(SheetFixtures.squash(m.name()));
+        assertThat(text).contains("Columntake-downatgrid").contains("Revisionlog").contains("Issuedforcoordination");
+    }
+
+    @Test
+    void sheetsComeGroupedByLevelThenKind() {
+        List<String> order = project.sheets().stream().map(s -> s.level() + "|" + s.group()).distinct().toList();
+        List<String> seen = new ArrayList<>();
+        for (MemberSheet s : project.sheets()) {
+            String key = s.level() + "|" + s.group();
+            if (seen.isEmpty() || !seen.get(seen.size() - 1).equals(key)) seen.add(key);
+        }
+        assertThat(seen).isEqualTo(order);
+    }
+
+    @Test
+    void indexGivesTheSheetEachMemberStartsOn() {
+        MemberSheet first = project.sheets().get(0);
+        int start = -1;
+        for (int p = 3; p <= pages.size() && start < 0; p++)
+            if (!pages.get(p - 1).contains("Index of sheets") && pages.get(p - 1).contains(first.record().subject())) start = p;
+        String index = pages.get(1);
+        assertThat(start).isGreaterThan(2);
+        assertThat(index).containsPattern("(?m)^" + start + " " + java.util.regex.Pattern.quote(first.record().subject()));
+    }
+
+    @Test
+    void everyPageSaysNOfTheTotal() {
+        int n = pages.size();
+        assertThat(pdf.pages()).isEqualTo(n);
+        for (int p = 1; p <= n; p++) assertThat(pages.get(p - 1)).contains("Page " + p + " of " + n).contains(p + " of " + n);
+    }
+
+    @Test
+    void streamedBytesEqualTheHeldOnesAndProgressCountsEverySheet() {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        List<Integer> done = new ArrayList<>();
+        StreamedPdf s = PackageRenderer.render(project, out, (d, total) -> done.add(d));
+        assertThat(out.toByteArray()).isEqualTo(pdf.bytes());
+        assertThat(s.sha256()).isEqualTo(pdf.sha256());
+        assertThat(s.length()).isEqualTo(pdf.bytes().length);
+        assertThat(done).hasSize(project.sheets().size()).endsWith(project.sheets().size());
+    }
+
+    @Test
+    void veraPdfFindsThePackagePdfA1b() {
+        assertThat(PdfA.failures(pdf.bytes())).isEmpty();
+    }
+
+    @Test
+    void levelPackageHoldsOnlyThatLevel() {
+        CalcPackage level = FramingSheets.level(SheetFixtures.header("Level 2"), building, "Level 2", List.of());
+        assertThat(level.sheets()).allMatch(s -> s.level().equals("Level 2")).isNotEmpty();
+        assertThat(PackageRenderer.render(level).pages()).isLessThan(pdf.pages());
+    }
+
+    @Test
+    void packageOfNothingIsRefusedNamingTheField() {
+        assertThatThrownBy(() -> new CalcPackage(SheetFixtures.header("P"), "Empty", project.criteria(), List.of(), List.of(), List.of()))
+                .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("sheets"));
+        assertThatThrownBy(() -> FramingSheets.level(SheetFixtures.header("P"), building, "Level 9", List.of()))
+                .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("level"));
+        assertThatThrownBy(() -> FramingSheets.member(SheetFixtures.header("P"), building, "nope"))
+                .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("member"));
+    }
+}
