@@ -25,8 +25,8 @@ final class ApiResultRoutes {
         });
         r.get("/api/projects/{project}/members/{member}/record", ctx ->
                 ctx.contentType("application/json; charset=utf-8").result(RecordJson.write(member(ctx).result().record())));
-        r.get("/api/projects/{project}/takedowns", ctx -> Json.send(ctx, results(ctx).derived().takeDowns()));
-        r.get("/api/projects/{project}/takedowns/{stack}", ctx -> Json.send(ctx, takeDown(ctx)));
+        r.get("/api/projects/{project}/takedowns", ctx -> Json.send(ctx, results(ctx).derived().takeDowns().stream().map(ApiViews.TakeDownJson::of).toList()));
+        r.get("/api/projects/{project}/takedowns/{stack}", ctx -> Json.send(ctx, ApiViews.TakeDownJson.of(takeDown(ctx))));
     }
 
     void members(Context ctx) {

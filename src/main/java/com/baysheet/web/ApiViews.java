@@ -3,6 +3,7 @@ package com.baysheet.web;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Entry;
 import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.TakeDown;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.store.StoredLevel;
 
@@ -43,6 +44,10 @@ final class ApiViews {
     }
 
     record MemberDetail(MemberJson member, CalcRecord record) {}
+
+    record TakeDownJson(String id, String gridPoint, List<TakeDown.Row> rows, CalcRecord record) {
+        static TakeDownJson of(TakeDown t) { return new TakeDownJson(t.id(), t.gridPoint(), t.rows(), t.record()); }
+    }
 
     record Saved(long version, Object saved) {}
 }

@@ -52,6 +52,10 @@ class ApiTest {
         assertThat(detail.get("record").get("steps").size()).isPositive();
         assertThat(json(server.get("/api/projects/" + id + "/takedowns")).size())
                 .isEqualTo(server.store.results().of(id).derived().takeDowns().size()).isPositive();
+        JsonNode stacks = json(server.get("/api/projects/" + id + "/takedowns"));
+        JsonNode one = json(server.get("/api/projects/" + id + "/takedowns/" + stacks.get(0).get("id").asText()));
+        assertThat(one.get("rows").get(0).get("level").asText()).isEqualTo("Level 2");
+        assertThat(one.get("record").get("steps").size()).isPositive();
         assertThat(json(server.get("/api/projects/" + id)).get("levels").get(0).get("name").asText()).isEqualTo("Level 2");
     }
 
