@@ -17,7 +17,7 @@ import static com.baysheet.review.SheetState.*;
  *
  * @param number      1 for the first revision; the next opens when an issued one is superseded
  * @param preparer    null until first submitted
- * @param fingerprint the member's inputs as submitted ({@link InputsFingerprint}); null until submitted
+ * @param fingerprint the member's calculation as submitted ({@link CalcFingerprint}; stored as inputs_sha256); null until submitted
  * @param approval    null until approved
  * @param issue       null until issued
  */

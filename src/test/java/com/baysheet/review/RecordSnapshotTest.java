@@ -13,7 +13,7 @@ class RecordSnapshotTest {
         CalcRecord r = Fixtures.calc(Fixtures.US, Fixtures.beam(MemberKind.INTERIOR_BEAM, 24, "office", 10, 15));
         CalcRecord back = RecordSnapshot.read(RecordSnapshot.write(r));
         assertThat(back).isEqualTo(r);
-        assertThat(InputsFingerprint.of(back)).isEqualTo(InputsFingerprint.of(r));
+        assertThat(CalcFingerprint.of(back)).isEqualTo(CalcFingerprint.of(r));
     }
 
     @Test

@@ -43,7 +43,9 @@ abstract class LoginsContract {
     }
 
     @AfterEach
-    void tearDown() { db.close(); }
+    void tearDown() {
+        if (db != null) db.close();
+    }
 
     Logins logins() { return accounts.logins(); }
 

@@ -54,7 +54,9 @@ abstract class ReviewsContract {
     }
 
     @AfterEach
-    void tearDown() { db.close(); }
+    void tearDown() {
+        if (db != null) db.close();
+    }
 
     static Caller caller(User u) { return Caller.of(u, "127.0.0.1"); }
 

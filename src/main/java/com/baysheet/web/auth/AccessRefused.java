@@ -1,0 +1,23 @@
+package com.baysheet.web.auth;
+
+/** A request the access filter stops: nobody logged in, a role that may not, or a form without its token. */
+public final class AccessRefused extends RuntimeException {
+    public enum Why { LOGIN, FORBIDDEN, FORM_TOKEN, SET_UP }
+
+    private final Why why;
+
+    public AccessRefused(Why why, String message) {
+        super(message);
+        this.why = why;
+    }
+
+    public Why why() { return why; }
+
+    public int status() {
+        return switch (why) {
+            case LOGIN -> 401;
+            case FORBIDDEN, FORM_TOKEN -> 403;
+            case SET_UP -> 503;
+        };
+    }
+}

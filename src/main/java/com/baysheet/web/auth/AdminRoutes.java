@@ -1,0 +1,132 @@
+package com.baysheet.web.auth;
+
+import com.baysheet.auth.NewUser;
+import com.baysheet.auth.Role;
+import com.baysheet.auth.User;
+import com.baysheet.review.AuditCsv;
+import com.baysheet.review.AuditEvent;
+import com.baysheet.store.NotFound;
+import com.baysheet.store.auth.Accounts;
+import com.baysheet.store.review.Firm;
+import com.baysheet.store.review.ReviewStore;
+import com.baysheet.web.Form;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+import io.javalin.http.HttpStatus;
+
+import java.util.HashMap;
+import java.util.Map;
+
+/** The administrator's pages (all under /admin, which the access rules keep to administrators). */
+public final class AdminRoutes {
+    private static final int AUDIT_PAGE = 100;
+
+    private final Accounts accounts;
+    private final ReviewStore review;
+
+    public AdminRoutes(Accounts accounts, ReviewStore review) {
+        this.accounts = accounts;
+        this.review = review;
+    }
+
+    public void install(RoutesConfig r) {
+        r.get("/admin/users", ctx -> users(ctx, Form.filled(Map.of("role", "engineer"))));
+        r.post("/admin/users", this::addUser);
+        r.post("/admin/users/{user}/role", this::setRole);
+        r.post("/admin/users/{user}/active", this::setActive);
+        r.post("/admin/users/{user}/password", this::resetPassword);
+        r.get("/admin/firm", ctx -> firm(ctx, null));
+        r.post("/admin/firm", this::updateFirm);
+        r.get("/admin/audit", this::audit);
+        r.get("/admin/audit.csv", this::auditCsv);
+    }
+
+    void users(Context ctx, Form f) {
+        Map<String, Object> m = new HashMap<>();
+        m.put("form", f);
+        m.put("users", accounts.users().findAll());
+        m.put("roles", Role.values());
+        m.put("me", Access.user(ctx));
+        ctx.render("auth/users", m);
+    }
+
+    void addUser(Context ctx) {
+        Form f = Form.of(ctx);
+        if (f.attempt(() -> accounts.admin().add(Access.user(ctx), new NewUser(f.text("username"), f.text("fullName"),
+                f.text("initials"), Role.parse("role", f.text("role"))), f.value("password"), ctx.ip())).isPresent()) {
+            ctx.redirect("/admin/users", HttpStatus.SEE_OTHER);
+        } else {
+            ctx.status(HttpStatus.BAD_REQUEST);
+            users(ctx, f);
+        }
+    }
+
+    void setRole(Context ctx) {
+        accounts.admin().setRole(Access.user(ctx), userId(ctx), Role.parse("role", ctx.formParam("role")), ctx.ip());
+        ctx.redirect("/admin/users", HttpStatus.SEE_OTHER);
+    }
+
+    void setActive(Context ctx) {
+        accounts.admin().setActive(Access.user(ctx), userId(ctx), "true".equals(ctx.formParam("active")), ctx.ip());
+        ctx.redirect("/admin/users", HttpStatus.SEE_OTHER);
+    }
+
+    void resetPassword(Context ctx) {
+        accounts.admin().resetPassword(Access.user(ctx), userId(ctx), ctx.formParam("password"), ctx.ip());
+        ctx.redirect("/admin/users", HttpStatus.SEE_OTHER);
+    }
+
+    void firm(Context ctx, Form f) {
+        Firm firm = review.firm().get();
+        Form shown = f != null ? f : Form.filled(Map.of("firmName", firm.name(), "logoText", firm.logoText(),
+                "defaultEdition", firm.defaultEdition(), "version", String.valueOf(firm.version())));
+        ctx.render("auth/firm", Map.of("form", shown));
+    }
+
+    void updateFirm(Context ctx) {
+        Form f = Form.of(ctx);
+        User u = Access.user(ctx);
+        long version = f.version();
+        if (f.attempt(() -> {
+            review.firm().update(new Firm(f.text("firmName"), f.text("logoText"), f.text("defaultEdition"), version),
+                    AuditEvent.of(u.id(), u.username(), "firm settings", "firm", f.text("firmName"), ctx.ip()));
+            return true;
+        }).isPresent()) {
+            ctx.redirect("/admin/firm", HttpStatus.SEE_OTHER);
+        } else {
+            ctx.status(HttpStatus.BAD_REQUEST);
+            firm(ctx, f);
+        }
+    }
+
+    void audit(Context ctx) {
+        int page = Math.max(0, parsePage(ctx.queryParam("page")));
+        Map<String, Object> m = new HashMap<>();
+        m.put("events", review.audit().page(AUDIT_PAGE, page * AUDIT_PAGE));
+        m.put("page", page);
+        m.put("more", review.audit().count() > (long) (page + 1) * AUDIT_PAGE);
+        ctx.render("auth/audit", m);
+    }
+
+    void auditCsv(Context ctx) {
+        ctx.header("Content-Disposition", "attachment; filename=\"baysheet-audit-trail.csv\"");
+        ctx.contentType("text/csv; charset=utf-8");
+        ctx.result(AuditCsv.of(review.audit().all()));
+    }
+
+    private static int parsePage(String p) {
+        try {
+            return p == null ? 0 : Integer.parseInt(p);
+        } catch (NumberFormatException e) {
+            return 0;
+        }
+    }
+
+    private static long userId(Context ctx) {
+        try {
+            return Long.parseLong(ctx.pathParam("user"));
+        } catch (NumberFormatException e) {
+            throw new NotFound("user", ctx.pathParam("user"));
+        }
+    }
+}

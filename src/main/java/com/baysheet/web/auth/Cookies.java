@@ -1,0 +1,33 @@
+package com.baysheet.web.auth;
+
+import io.javalin.http.Context;
+
+import java.time.Duration;
+
+/**
+ * The two cookies of a login: the session, and before login the token that the login and set-up forms
+ * echo. Both HttpOnly (no script reads them) and SameSite=Lax (not sent on another site's form posts);
+ * Secure when the request came over HTTPS. Written as headers so that every attribute is visible here.
+ */
+final class Cookies {
+    static final String SESSION = "bs_session";
+    static final String FORM = "bs_form";
+
+    private Cookies() {}
+
+    static void set(Context ctx, String name, String value, Duration maxAge) {
+        String secure = ctx.req().isSecure() ? "; Secure" : "";
+        ctx.res().addHeader("Set-Cookie", name + "=" + value + "; Path=/; Max-Age=" + maxAge.toSeconds()
+                + "; HttpOnly; SameSite=Lax" + secure);
+    }
+
+    static void clear(Context ctx, String name) {
+        ctx.res().addHeader("Set-Cookie", name + "=; Path=/; Max-Age=0; HttpOnly; SameSite=Lax");
+    }
+
+    /** A cookie value we could have issued (URL-safe base64 of 32 bytes), or null. */
+    static String token(Context ctx, String name) {
+        String v = ctx.cookie(name);
+        return v != null && v.matches("[A-Za-z0-9_-]{43}") ? v : null;
+    }
+}

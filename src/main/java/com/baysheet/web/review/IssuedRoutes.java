@@ -1,0 +1,132 @@
+package com.baysheet.web.review;
+
+import com.baysheet.auth.Tokens;
+import com.baysheet.engine.InputError;
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.review.RevisionComparison;
+import com.baysheet.store.NotFound;
+import com.baysheet.store.Store;
+import com.baysheet.store.review.ReviewStore;
+import com.baysheet.store.review.Reviews;
+import com.baysheet.store.review.StoredRevision;
+import com.baysheet.web.auth.Access;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+import io.javalin.http.UploadedFile;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.time.Clock;
+import java.time.LocalDate;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import static com.baysheet.web.review.ReviewRoutes.SHEET;
+
+/** PDFs (the frozen issued copy, a checking copy), revision comparison, and verifying an uploaded PDF. */
+public final class IssuedRoutes {
+    /** A member sheet is tens of kilobytes; a package a few megabytes. Anything bigger is not one of ours. */
+    private static final long MAX_UPLOAD = 50L * 1024 * 1024;
+
+    private final Store store;
+    private final ReviewStore review;
+    private final Clock clock;
+
+    public IssuedRoutes(Store store, ReviewStore review, Clock clock) {
+        this.store = store;
+        this.review = review;
+        this.clock = clock;
+    }
+
+    public void install(RoutesConfig r) {
+        r.get("/review/revisions/{revision}/issued.pdf", this::issuedPdf);
+        r.get(SHEET + "/checking.pdf", this::checkingPdf);
+        r.get(SHEET + "/compare", this::compare);
+        r.get("/verify", ctx -> ctx.render("review/verify", new HashMap<>()));
+        r.post("/verify", this::verify);
+    }
+
+    void issuedPdf(Context ctx) {
+        long id = id(ctx.pathParam("revision"), "revision");
+        StoredRevision r = review.reviews().revision(id);
+        byte[] pdf = review.reviews().issuedPdf(id).orElseThrow(() -> new NotFound("issued copy of revision", id));
+        pdf(ctx, pdf, r.sheet().subject() + "-rev" + r.revision().number() + ".pdf");
+    }
+
+    void checkingPdf(Context ctx) {
+        SheetContext s = SheetContext.of(store, ctx);
+        Reviews.SheetView v = review.reviews().view(s.ref());
+        byte[] pdf = SheetPdfs.checking(review.firm().get(), s, v.current().revision(), v.markups(),
+                Access.user(ctx).initials(), LocalDate.now(clock)).bytes();
+        pdf(ctx, pdf, s.member().id() + "-checking-copy.pdf");
+    }
+
+    void compare(Context ctx) {
+        SheetContext s = SheetContext.of(store, ctx);
+        List<StoredRevision> h = review.reviews().view(s.ref()).history();
+        int to = number(ctx, "to", h.isEmpty() ? 1 : h.get(h.size() - 1).revision().number());
+        int from = number(ctx, "from", Math.max(1, to - 1));
+        Map<String, Object> m = new HashMap<>();
+        m.put("project", s.computed().project());
+        m.put("member", s.member());
+        m.put("history", h);
+        m.put("from", from);
+        m.put("to", to);
+        m.put("comparison", RevisionComparison.of(record(h, from, s), record(h, to, s)));
+        ctx.render("review/compare", m);
+    }
+
+    void verify(Context ctx) {
+        UploadedFile f = ctx.uploadedFile("pdf");
+        if (f == null || f.size() == 0) throw new InputError("pdf", "nothing", "choose the PDF file to verify");
+        if (f.size() > MAX_UPLOAD) throw new InputError("pdf", f.size() + " bytes", "is larger than any sheet or package");
+        String sha = Tokens.sha256(read(f));
+        Map<String, Object> m = new HashMap<>();
+        m.put("filename", f.filename());
+        m.put("sha256", sha);
+        m.put("matches", review.reviews().withPdf(sha));
+        ctx.render("review/verify", m);
+    }
+
+    /** A revision's record as submitted; a revision not yet submitted compares as the member is now. */
+    private static CalcRecord record(List<StoredRevision> h, int number, SheetContext s) {
+        for (StoredRevision r : h)
+            if (r.revision().number() == number) return r.record().orElse(s.current());
+        if (h.isEmpty() && number == 1) return s.current();
+        throw new InputError("revision", number, "this sheet has no such revision");
+    }
+
+    private static int number(Context ctx, String param, int fallback) {
+        String v = ctx.queryParam(param);
+        if (v == null || v.isBlank()) return fallback;
+        try {
+            return Integer.parseInt(v.strip());
+        } catch (NumberFormatException e) {
+            throw new InputError(param, v, "must be a revision number");
+        }
+    }
+
+    private static long id(String text, String what) {
+        try {
+            return Long.parseLong(text);
+        } catch (NumberFormatException e) {
+            throw new NotFound(what, text);
+        }
+    }
+
+    private static byte[] read(UploadedFile f) {
+        try (InputStream in = f.content()) {
+            return in.readAllBytes();
+        } catch (IOException e) {
+            throw new UncheckedIOException("reading the upload", e);
+        }
+    }
+
+    private static void pdf(Context ctx, byte[] bytes, String filename) {
+        ctx.contentType("application/pdf");
+        ctx.header("Content-Disposition", "attachment; filename=\"" + filename.replaceAll("[^A-Za-z0-9._-]", "_") + "\"");
+        ctx.result(bytes);
+    }
+}

@@ -1,0 +1,57 @@
+package com.baysheet.web.review;
+
+import com.baysheet.store.NotFound;
+import com.baysheet.store.Store;
+import com.baysheet.store.review.ReviewMarkups;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+import io.javalin.http.HttpStatus;
+
+import static com.baysheet.web.review.ReviewRoutes.SHEET;
+import static com.baysheet.web.review.ReviewRoutes.caller;
+import static com.baysheet.web.review.ReviewRoutes.version;
+
+/** Markups on a sheet: add one on an input, a step or the whole sheet; reply; resolve or reopen. */
+public final class MarkupRoutes {
+    private final Store store;
+    private final ReviewMarkups markups;
+
+    public MarkupRoutes(Store store, ReviewMarkups markups) {
+        this.store = store;
+        this.markups = markups;
+    }
+
+    public void install(RoutesConfig r) {
+        r.post(SHEET + "/markups", this::add);
+        r.post(SHEET + "/markups/{markup}/reply", this::reply);
+        r.post(SHEET + "/markups/{markup}/resolve", ctx -> resolve(ctx, true));
+        r.post(SHEET + "/markups/{markup}/reopen", ctx -> resolve(ctx, false));
+    }
+
+    void add(Context ctx) {
+        SheetContext s = SheetContext.of(store, ctx);
+        long id = markups.add(s.ref(), caller(ctx), ctx.formParam("target"), ctx.formParam("text"));
+        ctx.redirect(s.path() + "#markup-" + id, HttpStatus.SEE_OTHER);
+    }
+
+    void reply(Context ctx) {
+        SheetContext s = SheetContext.of(store, ctx);
+        markups.reply(s.ref(), markup(ctx), caller(ctx), ctx.formParam("text"));
+        ctx.redirect(s.path() + "#markup-" + markup(ctx), HttpStatus.SEE_OTHER);
+    }
+
+    void resolve(Context ctx, boolean resolved) {
+        SheetContext s = SheetContext.of(store, ctx);
+        markups.resolve(s.ref(), markup(ctx), version(ctx), caller(ctx), resolved);
+        ctx.redirect(s.path() + "#markup-" + markup(ctx), HttpStatus.SEE_OTHER);
+    }
+
+    private static long markup(Context ctx) {
+        String text = ctx.pathParam("markup");
+        try {
+            return Long.parseLong(text);
+        } catch (NumberFormatException e) {
+            throw new NotFound("markup", text);
+        }
+    }
+}

@@ -1,0 +1,52 @@
+package com.baysheet.web.review;
+
+import com.baysheet.auth.User;
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.review.CalcFingerprint;
+import com.baysheet.review.MarkupNote;
+import com.baysheet.review.SheetRevision;
+import com.baysheet.review.SheetState;
+import com.baysheet.store.review.Reviews;
+import com.baysheet.store.review.StoredRevision;
+
+import java.util.List;
+
+/**
+ * What the sheet page shows: the record the check is about (as submitted, or the current one while being
+ * prepared), the markups grouped by what they target, and which actions to offer this user. The offer is
+ * only a convenience: every action is checked again by the review rules when posted.
+ */
+record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChanged, List<MarkupNote> markups,
+                 List<StoredRevision> history, Offer offer) {
+    /** The buttons shown to this user. */
+    record Offer(boolean submit, boolean resubmit, boolean check, boolean issue, boolean reply) {}
+
+    static SheetPage of(Reviews.SheetView v, CalcRecord currentRecord, User user) {
+        StoredRevision cur = v.current();
+        CalcRecord shown = cur.record().orElse(currentRecord);
+        SheetRevision r = cur.revision();
+        boolean changed = r.fingerprint() != null && !r.state().frozen()
+                && !r.fingerprint().equals(CalcFingerprint.of(currentRecord));
+        return new SheetPage(cur, shown, changed, v.markups(), v.history(), offer(r, user, changed));
+    }
+
+    private static Offer offer(SheetRevision r, User u, boolean changed) {
+        boolean preparer = r.preparer() != null && r.preparer().userId() == u.id();
+        boolean otherChecker = u.role().mayCheck() && !preparer;
+        SheetState s = r.state();
+        return new Offer(s == SheetState.PREPARING && u.role().mayPrepare(),
+                preparer && (s == SheetState.RETURNED || (changed && (s.awaitingCheck() || s == SheetState.APPROVED))),
+                otherChecker && s.awaitingCheck(),
+                u.role().mayCheck() && s == SheetState.APPROVED,
+                (preparer || u.role().mayCheck()) && (s.awaitingCheck() || s == SheetState.RETURNED));
+    }
+
+    /** The markups on one target code ("sheet", "input:KEY", "step:SYMBOL"). */
+    public List<MarkupNote> on(String code) {
+        return markups.stream().filter(m -> m.target().code().equals(code)).toList();
+    }
+
+    public long openCount() {
+        return markups.stream().filter(m -> !m.resolved()).count();
+    }
+}

@@ -1,0 +1,70 @@
+package com.baysheet.web.review;
+
+import com.baysheet.auth.LoginRefused;
+import com.baysheet.auth.LoginThrottle;
+import com.baysheet.auth.Passwords;
+import com.baysheet.auth.SessionPolicy;
+import com.baysheet.review.ReviewRefused;
+import com.baysheet.store.Sql;
+import com.baysheet.store.Store;
+import com.baysheet.store.auth.Accounts;
+import com.baysheet.store.auth.Logins;
+import com.baysheet.store.review.ConcurrentChange;
+import com.baysheet.store.review.ReviewStore;
+import com.baysheet.web.auth.Access;
+import com.baysheet.web.auth.AccessRefused;
+import com.baysheet.web.auth.AdminRoutes;
+import com.baysheet.web.auth.AuthRoutes;
+import com.baysheet.web.auth.CsrfForms;
+import io.javalin.config.RoutesConfig;
+
+import javax.sql.DataSource;
+import java.time.Clock;
+
+/**
+ * Users, access and the sheet check, installed into the server's routes: the access filter first (login,
+ * roles, form tokens), then the pages of login, administration and review, and the mapping of their
+ * refusals to pages. Installed by the server before its own filters and routes.
+ */
+public final class Signoff {
+    private final Store store;
+    private final Accounts accounts;
+    private final ReviewStore review;
+    private final Clock clock;
+
+    public Signoff(Store store, Accounts accounts, ReviewStore review, Clock clock) {
+        this.store = store;
+        this.accounts = accounts;
+        this.review = review;
+        this.clock = clock;
+    }
+
+    /** The office's production wiring: bcrypt at full strength, working-day sessions, the office throttle. */
+    public static Signoff on(Store store, DataSource ds) {
+        Sql sql = new Sql(ds);
+        ReviewStore review = ReviewStore.on(sql);
+        Logins.Policy policy = new Logins.Policy(new Passwords(Passwords.DEFAULT_STRENGTH), SessionPolicy.OFFICE,
+                LoginThrottle.OFFICE, Clock.systemDefaultZone());
+        return new Signoff(store, Accounts.on(sql, review.audit(), policy), review, Clock.systemDefaultZone());
+    }
+
+    public Accounts accounts() { return accounts; }
+
+    public ReviewStore review() { return review; }
+
+    public void install(RoutesConfig r) {
+        Access access = new Access(accounts.logins());
+        r.before(access::before);
+        r.after(CsrfForms::after);
+        r.after(new EditTrail(store, review)::after);
+        r.exception(AccessRefused.class, Refusals::access);
+        r.exception(LoginRefused.class, Refusals::login);
+        r.exception(ReviewRefused.class, Refusals::review);
+        r.exception(ConcurrentChange.class, Refusals::conflict);
+        new AuthRoutes(accounts.logins()).install(r);
+        new AdminRoutes(accounts, review).install(r);
+        new ReviewRoutes(store, review, clock).install(r);
+        new MarkupRoutes(store, review.markups()).install(r);
+        new IssuedRoutes(store, review, clock).install(r);
+    }
+}

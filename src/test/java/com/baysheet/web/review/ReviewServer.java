@@ -1,0 +1,70 @@
+package com.baysheet.web.review;
+
+import com.baysheet.auth.Role;
+import com.baysheet.framing.Derivation;
+import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.model.Bay;
+import com.baysheet.review.store.TestClock;
+import com.baysheet.store.BayAssignment;
+import com.baysheet.store.Cell;
+import com.baysheet.store.Database;
+import com.baysheet.store.Demo;
+import com.baysheet.store.Project;
+import com.baysheet.store.StoredLevel;
+import com.baysheet.store.Store;
+import com.baysheet.web.Server;
+import com.baysheet.web.TestLogin;
+import io.javalin.Javalin;
+
+import java.time.Instant;
+import java.util.List;
+import java.util.UUID;
+
+/** The whole office server with sign-off on a random port, over a fresh H2 database with the demo loaded. */
+final class ReviewServer implements AutoCloseable {
+    final Database db;
+    final Store store;
+    final List<Project> demo;
+    final TestClock clock = new TestClock(Instant.now());
+    final Signoff signoff;
+    final Javalin app;
+
+    ReviewServer() {
+        db = Database.open("jdbc:h2:mem:v" + UUID.randomUUID().toString().replace("-", "")
+                + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
+        store = Store.on(db.dataSource(), Derivation::derive);
+        demo = Demo.loadIfEmpty(store);
+        signoff = TestLogin.signoff(store, db, clock);
+        app = Server.create(store, signoff::install).start("127.0.0.1", 0);
+    }
+
+    TestLogin.Client as(String username, Role role) { return TestLogin.as(app, signoff, username, role); }
+
+    long project() { return demo.get(0).id(); }
+
+    /** A beam of the first demo project (its first derived member that is not a column). */
+    DerivedMember member() {
+        return store.results().of(project()).derived().members().stream()
+                .filter(m -> !m.kind().name().contains("COLUMN")).findFirst().orElseThrow();
+    }
+
+    String sheetPath() { return "/review/projects/" + project() + "/members/" + member().id(); }
+
+    /** Adds this much dead load to every bay of the member's level: its inputs change. */
+    void heavierFloor(double more) {
+        long p = project();
+        String level = member().level();
+        StoredLevel l = store.levels().findByProject(p).stream().filter(x -> x.info().name().equals(level)).findFirst().orElseThrow();
+        for (Bay b : store.bays().findByLevel(p, l.id())) {
+            if (b.opening()) continue;
+            store.bays().assign(p, store.projects().find(p).version(), l.id(), new BayAssignment(List.of(new Cell(b.col(), b.row())),
+                    false, b.occupancy(), b.deadLoad() + more, b.framing(), b.cantilevers()));
+        }
+    }
+
+    @Override
+    public void close() {
+        app.stop();
+        db.close();
+    }
+}
