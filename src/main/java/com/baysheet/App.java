@@ -7,6 +7,7 @@ import com.baysheet.store.Demo;
 import com.baysheet.store.Store;
 import com.baysheet.web.Server;
 import com.baysheet.web.ServerOptions;
+import com.baysheet.web.review.Signoff;
 import io.javalin.Javalin;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -44,7 +45,7 @@ public final class App {
             int loaded = Demo.loadIfEmpty(store).size();
             LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");
         }
-        Javalin app = Server.create(store).start(o.bind(), o.port());
+        Javalin app = Server.create(store, Signoff.on(store, db.dataSource())::install).start(o.bind(), o.port());
         Runtime.getRuntime().addShutdownHook(new Thread(() -> {
             app.stop();
             db.close();

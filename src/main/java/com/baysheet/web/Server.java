@@ -5,6 +5,8 @@ import io.javalin.Javalin;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.staticfiles.Location;
 
+import java.util.function.Consumer;
+
 /**
  * The office server: static files, templates, the exception mapping, a before-filter stage, and the routes
  * of each feature. Features add routes in their own class; access control (login, roles, review) adds its
@@ -15,6 +17,11 @@ public final class Server {
 
     /** A configured server, not yet started: {@code start(host, port)} or {@code start(0)} for a random port. */
     public static Javalin create(Store store) {
+        return create(store, null);
+    }
+
+    /** The same with access control (issue 6: login, roles, the sheet check) installed ahead of every route. */
+    public static Javalin create(Store store, Consumer<RoutesConfig> access) {
         return Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
             cfg.fileRenderer(new Views());
@@ -23,6 +30,7 @@ public final class Server {
                 sf.directory = "/static";
                 sf.location = Location.CLASSPATH;
             });
+            if (access != null) access.accept(cfg.routes);
             filters(cfg.routes);
             Errors.install(cfg.routes);
             new ProjectRoutes(store).install(cfg.routes);
