@@ -4,6 +4,7 @@ import com.baysheet.auth.Role;
 import com.baysheet.framing.Derivation;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.model.Bay;
+import com.baysheet.review.SheetRef;
 import com.baysheet.review.store.TestClock;
 import com.baysheet.store.BayAssignment;
 import com.baysheet.store.Cell;
@@ -47,6 +48,8 @@ final class ReviewServer implements AutoCloseable {
         return store.results().of(project()).derived().members().stream()
                 .filter(m -> !m.kind().name().contains("COLUMN")).findFirst().orElseThrow();
     }
+
+    SheetRef ref() { return new SheetRef(project(), member().id()); }
 
     String sheetPath() { return "/review/projects/" + project() + "/members/" + member().id(); }
 
