@@ -4,7 +4,7 @@ import com.baysheet.auth.Tokens;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.review.AuditEvent;
 import com.baysheet.review.Caller;
-import com.baysheet.review.InputsFingerprint;
+import com.baysheet.review.CalcFingerprint;
 import com.baysheet.review.MarkupNote;
 import com.baysheet.review.RecordSnapshot;
 import com.baysheet.review.SheetRef;
@@ -61,12 +61,12 @@ public final class Reviews {
     }
 
     public void submit(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current) {
-        String fp = InputsFingerprint.of(current);
+        String fp = CalcFingerprint.of(current);
         step(ref, version, who, "submit", r -> r.submit(who.actor(), fp, today), RecordSnapshot.write(current), null);
     }
 
     public void resubmit(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current) {
-        String fp = InputsFingerprint.of(current);
+        String fp = CalcFingerprint.of(current);
         step(ref, version, who, "resubmit", r -> r.resubmit(who.actor(), fp, today), RecordSnapshot.write(current), null);
     }
 
@@ -79,7 +79,7 @@ public final class Reviews {
     }
 
     public void approve(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current) {
-        String fp = InputsFingerprint.of(current);
+        String fp = CalcFingerprint.of(current);
         sql.tx(c -> {
             StoredRevision cur = current(c, ref);
             int open = cur.stored() ? Markups.openCount(c, cur.id()) : 0;
@@ -89,7 +89,7 @@ public final class Reviews {
 
     /** Issues the approved revision with this PDF, rendered from {@code current}; its SHA-256 is computed here. */
     public void issue(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current, byte[] pdf) {
-        String fp = InputsFingerprint.of(current);
+        String fp = CalcFingerprint.of(current);
         String sha = Tokens.sha256(pdf);
         step(ref, version, who, "issue", r -> r.issue(who.actor(), today, sha, fp), RecordSnapshot.write(current), pdf);
     }
@@ -99,7 +99,7 @@ public final class Reviews {
      * it was issued; returns whether it did. Called whenever the sheet is looked at or its project changes.
      */
     public boolean supersedeIfChanged(SheetRef ref, CalcRecord current, Caller who) {
-        String fp = InputsFingerprint.of(current);
+        String fp = CalcFingerprint.of(current);
         return sql.tx(c -> {
             StoredRevision cur = current(c, ref);
             if (!cur.revision().outdatedBy(fp) || !Revisions.claim(c, cur.id(), cur.version())) return false;
