@@ -129,4 +129,12 @@ class AccessMatrixTest {
         assertThat(html.split("<form method=\"post\"", -1).length - 1)
                 .isEqualTo(html.split("name=\"_csrf\" value=\"" + chk.csrf + "\"", -1).length - 1);
     }
+
+    @Test
+    void theHeaderOffersEachRoleItsOwnLinks() {
+        String e = eng.get("/projects/" + server.project()).body();
+        assertThat(e).contains("Log out").contains("Verify a PDF").contains("Sheets and check").doesNotContain("Audit trail");
+        assertThat(adm.get("/projects").body()).contains("Audit trail").contains("Users");
+        assertThat(TestLogin.anonymous(server.app).get("/login").body()).doesNotContain("Log out");
+    }
 }
