@@ -33,7 +33,7 @@ final class ColumnTakeDown {
         String point = plans.get(0).grid.pointName(i, j);
         StackLoad total = new StackLoad();
         List<TakeDown.Row> rows = new ArrayList<>();
-        List<CalcRecord> records = new ArrayList<>();
+        List<MemberResult> records = new ArrayList<>();
         int floors = 0;
         double slope = Double.NaN, floorArea = 0;
         ColumnClass cls = null;
@@ -58,8 +58,8 @@ final class ColumnTakeDown {
             String id = p.id + "-c" + i + "x" + j;
             out.add(new DerivedMember(id, name, p.level.name(), MemberRole.COLUMN, kind,
                     new PlanLine(p.x(i), p.y(j), p.x(i), p.y(j)), 0, 0, here.areas, 0, bays(p, i, j), outline(p, i, j), res));
-            rows.add(row(p, id, res.record(), areaHere, floorArea, kind, floors, here.dead));
-            records.add(res.record());
+            rows.add(row(p, id, res, areaHere, floorArea, kind, floors, here.dead));
+            records.add(res);
         }
         if (rows.isEmpty()) return null;
         CalcContext c = ctx; // the writer keeps only what it needs, not this take-down's working state
@@ -67,12 +67,12 @@ final class ColumnTakeDown {
                 () -> TakeDownRecord.write(c, "Column " + point + " take-down", rows, records));
     }
 
-    private TakeDown.Row row(LevelPlan p, String id, CalcRecord r, double areaHere, double cumArea, MemberKind kind,
+    private TakeDown.Row row(LevelPlan p, String id, MemberResult r, double areaHere, double cumArea, MemberKind kind,
                              int floors, double deadHere) {
         double kll = ctx.edition().kll(kind);
         return new TakeDown.Row(p.level.name(), id, areaHere, cumArea, kll, kll * cumArea, floors, factor(r),
-                deadHere, r.result("D.P"), r.result("L0.P"), r.result("L.P"), r.result("Lr.P"),
-                r.result("LRFD.P"), combo(r, "LRFD.P"), r.result("ASD.P"), combo(r, "ASD.P"));
+                deadHere, r.value("D.P"), r.value("L0.P"), r.value("L.P"), r.value("Lr.P"),
+                r.value("LRFD.P"), combo(r, "LRFD.P"), r.value("ASD.P"), combo(r, "ASD.P"));
     }
 
     private double floorArea(StackLoad s) {
@@ -81,13 +81,13 @@ final class ColumnTakeDown {
         return a;
     }
 
-    private static double factor(CalcRecord r) {
-        for (var s : r.steps()) if (s.symbol().equals("f")) return s.result();
-        return 1;
+    private static double factor(MemberResult r) {
+        double f = r.stepValue("f");
+        return Double.isNaN(f) ? 1 : f;
     }
 
-    private static String combo(CalcRecord r, String key) {
-        String label = r.entry(key).label();
+    private static String combo(MemberResult r, String key) {
+        String label = r.label(key);
         int a = label.lastIndexOf('('), b = label.lastIndexOf(')');
         return a >= 0 && b > a ? label.substring(a + 1, b) : "";
     }

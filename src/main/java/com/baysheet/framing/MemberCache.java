@@ -22,7 +22,7 @@ final class MemberCache {
 
     MemberResult calculate(MemberInput in) {
         MemberResult r = done.computeIfAbsent(in.withSubject(ANY), k -> MemberCalculation.calculate(ctx, k));
-        return new MemberResult(r.record().withSubject(in.subject()), r.left(), r.right());
+        return r.withSubject(in.subject());
     }
 
     int distinct() { return done.size(); }

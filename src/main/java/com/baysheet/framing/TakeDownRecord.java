@@ -1,5 +1,6 @@
 package com.baysheet.framing;
 
+import com.baysheet.engine.member.MemberResult;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
@@ -13,12 +14,12 @@ import java.util.List;
 final class TakeDownRecord {
     private TakeDownRecord() {}
 
-    static CalcRecord write(CalcContext ctx, String title, List<TakeDown.Row> rows, List<CalcRecord> columns) {
+    static CalcRecord write(CalcContext ctx, String title, List<TakeDown.Row> rows, List<MemberResult> columns) {
         var ed = ctx.edition();
         RecordBuilder rec = new RecordBuilder(title, ed.id(), ctx.system());
         for (int k = 0; k < rows.size(); k++) {
             TakeDown.Row w = rows.get(k);
-            CalcRecord r = columns.get(k);
+            CalcRecord r = columns.get(k).record();
             String at = "@" + w.level(), lv = w.level() + ": ";
             rec.step("ΣA_T" + at, lv + "floor area supported (" + w.floorsSupported() + " floor" + (w.floorsSupported() == 1 ? "" : "s") + ")",
                     "ΣA_T", "level adds " + rec.show(w.areaAtLevel(), Quantity.AREA), w.cumulativeArea(), Quantity.AREA, ed.clause("reduction.multifloor"));

@@ -25,8 +25,8 @@ final class BendingActions {
     enum Effect {
         R1("R1", "Left reaction"), R2("R2", "Right reaction"), V("V", "Maximum shear"),
         MPOS("M+", "Maximum positive moment"), MNEG("M-", "Maximum negative moment");
-        final String key, title;
-        Effect(String key, String title) { this.key = key; this.title = title; }
+        final String key, title, lower;
+        Effect(String key, String title) { this.key = key; this.title = title; this.lower = title.toLowerCase(); }
         Quantity q() { return this == MPOS || this == MNEG ? Quantity.MOMENT : Quantity.FORCE; }
     }
 
@@ -57,9 +57,9 @@ final class BendingActions {
         double[] design = concentrated(ctx, book, s, effects, l, rec);
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
-            var u = LoadCombinations.govern(true, "LRFD." + e.key, e.title.toLowerCase(), d[i], design[i], lr[i], halfL, e.q(),
+            var u = LoadCombinations.govern(true, "LRFD." + e.key, e.lower, d[i], design[i], lr[i], halfL, e.q(),
                     ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
-            var a = LoadCombinations.govern(false, "ASD." + e.key, e.title.toLowerCase(), d[i], design[i], lr[i], halfL, e.q(),
+            var a = LoadCombinations.govern(false, "ASD." + e.key, e.lower, d[i], design[i], lr[i], halfL, e.q(),
                     ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
             rec.result("Ldes." + e.key, e.title + ", design live load", design[i], e.q())
                .result("LRFD." + e.key, e.title + ", factored (" + u.combination().name() + ")", u.value(), e.q())

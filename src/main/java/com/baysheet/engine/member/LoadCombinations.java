@@ -22,7 +22,8 @@ public final class LoadCombinations {
             return d * dv + fl * lv + lr * lrv;
         }
 
-        String formula(boolean halfAllowed) {
+        String formula(boolean halfAllowed, RecordBuilder rec) {
+            if (!rec.writesText()) return "";
             double fl = halfL && halfAllowed ? 0.5 : l;
             StringBuilder s = new StringBuilder(Display.sig3(d)).append("D");
             if (fl != 0) s.append(" + ").append(Display.sig3(fl)).append("L");
@@ -52,11 +53,14 @@ public final class LoadCombinations {
             double v = c.apply(d, l, lr, halfAllowed);
             if (best == null || Math.abs(v) > Math.abs(bestV)) { best = c; bestV = v; }
         }
-        String sub = Display.sig3(best.d) + " × " + rec.num(d, q);
-        double fl = best.halfL && halfAllowed ? 0.5 : best.l;
-        if (fl != 0) sub += " + " + Display.sig3(fl) + " × " + rec.num(l, q);
-        if (best.lr != 0) sub += " + " + Display.sig3(best.lr) + " × " + rec.num(lr, q);
-        rec.step(key, (strength ? "Factored " : "Service ") + what + ", " + best.name + " governs", best.formula(halfAllowed), sub,
+        String sub = "";
+        if (rec.writesText()) {
+            double fl = best.halfL && halfAllowed ? 0.5 : best.l;
+            sub = Display.sig3(best.d) + " × " + rec.num(d, q);
+            if (fl != 0) sub += " + " + Display.sig3(fl) + " × " + rec.num(l, q);
+            if (best.lr != 0) sub += " + " + Display.sig3(best.lr) + " × " + rec.num(lr, q);
+        }
+        rec.step(key, (strength ? "Factored " : "Service ") + what + ", " + best.name + " governs", best.formula(halfAllowed, rec), sub,
                 bestV, q, strength ? lrfd : asd);
         return new Governing(bestV, best);
     }

@@ -10,6 +10,7 @@ import com.baysheet.engine.load.AreaShare;
 import com.baysheet.engine.load.LiveShare;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
+import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.reduction.CalcContext;
 import com.baysheet.engine.reduction.LiveFactors;
@@ -31,8 +32,16 @@ import java.util.Map;
 public final class MemberCalculation {
     private MemberCalculation() {}
 
+    /** Validates the input and calculates the member; the record's text is written when first read. */
     public static MemberResult calculate(CalcContext ctx, MemberInput in) {
-        RecordBuilder rec = new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system());
+        RecordBuilder rec = RecordBuilder.numbersOnly(in.subject(), ctx.edition().id(), ctx.system());
+        Outcome o = run(ctx, in, rec);
+        return new MemberResult(o.record, o.left, o.right, () -> run(ctx, in, new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system())).record);
+    }
+
+    private record Outcome(CalcRecord record, EndShare left, EndShare right) {}
+
+    private static Outcome run(CalcContext ctx, MemberInput in, RecordBuilder rec) {
         LoadBook book = LoadBook.of(ctx, in);
         Inputs.record(ctx, in, book, rec);
         Map<String, Double> factors = factors(ctx, in, book, rec);
@@ -43,7 +52,7 @@ public final class MemberCalculation {
         else BendingActions.record(ctx, in, book, floor0, floor, roof, halfL, rec);
         rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1)));
         Cautions.standard(ctx, book, rec);
-        return new MemberResult(rec.build(), share(ctx, in, book, true), in.kind().isColumn()
+        return new Outcome(rec.build(), share(ctx, in, book, true), in.kind().isColumn()
                 || in.support() instanceof Support.Cantilever ? null : share(ctx, in, book, false));
     }
 

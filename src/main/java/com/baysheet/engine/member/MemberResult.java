@@ -2,8 +2,67 @@ package com.baysheet.engine.member;
 
 import com.baysheet.engine.record.CalcRecord;
 
+import java.util.function.Supplier;
+
 /**
  * A member's calculation: its record (what every page and sheet renders) and the unreduced end shares
  * that the framing model passes down the load path. For a column or a cantilever only {@code left} is set.
+ *
+ * <p>The numbers come first: {@link #value} and {@link #stepValue} read a record with every number but no
+ * shown text. The full record is written on the first call to {@link #record()}, by the same calculation
+ * (deterministic, so identical), since most members of a large building are never displayed.
  */
-public record MemberResult(CalcRecord record, EndShare left, EndShare right) {}
+public final class MemberResult {
+    private final CalcRecord numbers;
+    private final EndShare left;
+    private final EndShare right;
+    private Supplier<CalcRecord> writer;
+    private volatile CalcRecord record;
+
+    MemberResult(CalcRecord numbers, EndShare left, EndShare right, Supplier<CalcRecord> writer) {
+        this.numbers = numbers;
+        this.left = left;
+        this.right = right;
+        this.writer = writer;
+    }
+
+    /** The full calculation record, written on first use. */
+    public CalcRecord record() {
+        CalcRecord r = record;
+        if (r == null) {
+            synchronized (this) {
+                if (record == null) {
+                    record = writer.get();
+                    writer = null;
+                }
+                r = record;
+            }
+        }
+        return r;
+    }
+
+    public EndShare left() { return left; }
+
+    public EndShare right() { return right; }
+
+    /** A result by key without writing the record's text; NaN when absent. */
+    public double value(String key) { return numbers.result(key); }
+
+    /** The label of a result (it names the governing combination), or "" when absent. */
+    public String label(String key) {
+        for (var e : numbers.results()) if (e.key().equals(key)) return e.label();
+        return "";
+    }
+
+    /** A step's result by symbol, or NaN when the calculation had no such step. */
+    public double stepValue(String symbol) {
+        for (var s : numbers.steps()) if (s.symbol().equals(symbol)) return s.result();
+        return Double.NaN;
+    }
+
+    /** The same calculation under another subject. */
+    public MemberResult withSubject(String subject) {
+        MemberResult base = this;
+        return new MemberResult(numbers.withSubject(subject), left, right, () -> base.record().withSubject(subject));
+    }
+}

@@ -7,7 +7,11 @@ import com.baysheet.engine.units.UnitSystem;
 import java.util.ArrayList;
 import java.util.List;
 
-/** Collects the steps of a calculation as it runs; the engine's only way of explaining itself. */
+/**
+ * Collects the steps of a calculation as it runs; the engine's only way of explaining itself.
+ * A builder made {@link #numbersOnly} keeps every number but writes no shown text, for callers (the framing
+ * model) that need the values of thousands of members and the text of the few someone reads.
+ */
 public final class RecordBuilder {
     private final String subject;
     private final String edition;
@@ -18,20 +22,40 @@ public final class RecordBuilder {
     private final List<String> governing = new ArrayList<>();
     private final List<Note> notes = new ArrayList<>();
     private Sketch sketch = Sketch.NONE;
+    private final boolean text;
 
     public RecordBuilder(String subject, String edition, UnitSystem system) {
+        this(subject, edition, system, true);
+    }
+
+    private RecordBuilder(String subject, String edition, UnitSystem system, boolean text) {
         this.subject = subject;
         this.edition = edition;
         this.system = system;
+        this.text = text;
+    }
+
+    /** A builder whose shown strings are left empty: same steps, same numbers. */
+    public static RecordBuilder numbersOnly(String subject, String edition, UnitSystem system) {
+        return new RecordBuilder(subject, edition, system, false);
     }
 
     public UnitSystem system() { return system; }
 
     /** Shows a base-unit value in its sheet unit, three significant figures. */
-    public String show(double base, Quantity q) { return Display.of(base, q, system); }
+    public String show(double base, Quantity q) { return text ? Display.of(base, q, system) : ""; }
+
+    /** Whether this builder writes shown text (false for a numbers-only pass). */
+    public boolean writesText() { return text; }
+
+    /** A ratio or factor to three significant figures, or "" in a numbers-only pass. */
+    public String fmt(double v) { return text ? Display.sig3(v) : ""; }
+
+    /** An equation constant as printed (15, 4.57), or "" in a numbers-only pass. */
+    public String plain(double v) { return text ? Display.plain(v) : ""; }
 
     /** The number alone in the sheet unit, for substituted values. */
-    public String num(double base, Quantity q) { return Display.sig3(q.unit(system).fromBase(base)); }
+    public String num(double base, Quantity q) { return text ? Display.sig3(q.unit(system).fromBase(base)) : ""; }
 
     public RecordBuilder input(String key, String label, double base, Quantity q) {
         inputs.add(new Entry(key, label, base, q.unit(system).symbol(), show(base, q)));

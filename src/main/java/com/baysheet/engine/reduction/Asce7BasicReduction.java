@@ -5,7 +5,6 @@ import com.baysheet.engine.code.MemberKind;
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.code.ReductionRule;
 import com.baysheet.engine.record.RecordBuilder;
-import com.baysheet.engine.units.Display;
 import com.baysheet.engine.units.Quantity;
 
 import java.util.LinkedHashMap;
@@ -65,7 +64,7 @@ final class Asce7BasicReduction implements FloorReductionMethod {
             bySource.put(id, f);
             double l0 = o.uniform(ctx.system());
             rec.step("L[" + id + "]", "Design uniform live load, " + o.name(), "L = L0 × f",
-                    rec.num(l0, Quantity.PRESSURE) + " × " + Display.sig3(f), l0 * f, Quantity.PRESSURE,
+                    rec.num(l0, Quantity.PRESSURE) + " × " + rec.fmt(f), l0 * f, Quantity.PRESSURE,
                     ed.clause("reduction.eq"));
             partition(ctx, o, f, bySource, rec);
         }
@@ -77,7 +76,7 @@ final class Asce7BasicReduction implements FloorReductionMethod {
         double threshold = ctx.constant("threshold");
         String area = reducible < total ? "A_T,r" : "A_T";
         double kat = rec.step("K_LL·A_T", "Influence area", "K_LL × " + area,
-                Display.sig3(kll) + " × " + rec.num(reducible, Quantity.AREA), kll * reducible, Quantity.AREA,
+                rec.fmt(kll) + " × " + rec.num(reducible, Quantity.AREA), kll * reducible, Quantity.AREA,
                 ed.clause("reduction.basic"));
         if (kat < threshold) {
             rec.info("K_LL·A_T = " + rec.show(kat, Quantity.AREA) + " is below " + rec.show(threshold, Quantity.AREA)
@@ -85,15 +84,15 @@ final class Asce7BasicReduction implements FloorReductionMethod {
             return 1;
         }
         double base = ed.constant("reduction.base"), coef = ctx.constant("reduction.coef");
-        double eq = rec.step("f_eq", "Reduction factor", "f = " + Display.plain(base) + " + " + Display.plain(coef) + "/√(K_LL·A_T)",
-                Display.plain(base) + " + " + Display.plain(coef) + "/√" + rec.num(kat, Quantity.AREA), Math.min(1, base + coef / Math.sqrt(kat)),
+        double eq = rec.step("f_eq", "Reduction factor", "f = " + rec.plain(base) + " + " + rec.plain(coef) + "/√(K_LL·A_T)",
+                rec.plain(base) + " + " + rec.plain(coef) + "/√" + rec.num(kat, Quantity.AREA), Math.min(1, base + coef / Math.sqrt(kat)),
                 Quantity.RATIO, ed.clause("reduction.eq"));
         double limit = ed.constant(floors == 1 ? "limit.oneFloor" : "limit.multiFloor");
         double f = rec.step("f", "Reduction factor with its lower limit (" + (floors == 1 ? "one floor" : "two or more floors") + ")",
-                "f = max(f_eq, " + Display.plain(limit) + ")", "max(" + Display.sig3(eq) + ", " + Display.sig3(limit) + ")",
+                "f = max(f_eq, " + rec.plain(limit) + ")", "max(" + rec.fmt(eq) + ", " + rec.fmt(limit) + ")",
                 Math.max(eq, limit), Quantity.RATIO, ed.clause("reduction.basic"));
         if (eq < limit)
-            rec.info("Lower limit governs: L not less than " + Display.sig3(limit) + " L0.", ed.clause("reduction.basic"));
+            rec.info("Lower limit governs: L not less than " + rec.fmt(limit) + " L0.", ed.clause("reduction.basic"));
         return f;
     }
 
@@ -111,8 +110,8 @@ final class Asce7BasicReduction implements FloorReductionMethod {
                 }
                 double min = ed.constant("heavy.minFactor");
                 double f = Math.max(min, factor);
-                rec.step("f[" + o.id() + "]", "Reduction limited to 20 %: " + what, "f = max(" + Display.plain(min) + ", f)",
-                        "max(" + Display.sig3(min) + ", " + Display.sig3(factor) + ")", f, Quantity.RATIO, ed.clause(clause));
+                rec.step("f[" + o.id() + "]", "Reduction limited to 20 %: " + what, "f = max(" + rec.plain(min) + ", f)",
+                        "max(" + rec.fmt(min) + ", " + rec.fmt(factor) + ")", f, Quantity.RATIO, ed.clause(clause));
                 yield f;
             }
             case NOT_REDUCIBLE -> {
@@ -139,7 +138,7 @@ final class Asce7BasicReduction implements FloorReductionMethod {
         bySource.put(o.id() + "#partitions", pf);
         double p = ctx.constant("partition");
         rec.step("L_p[" + o.id() + "]", "Partition allowance, " + (reduce ? "reduced with the live load (project option)" : "not reduced (project option)"),
-                reduce ? "L_p = " + rec.num(p, Quantity.PRESSURE) + " × f" : "L_p", reduce ? rec.num(p, Quantity.PRESSURE) + " × " + Display.sig3(pf) : rec.num(p, Quantity.PRESSURE),
+                reduce ? "L_p = " + rec.num(p, Quantity.PRESSURE) + " × f" : "L_p", reduce ? rec.num(p, Quantity.PRESSURE) + " × " + rec.fmt(pf) : rec.num(p, Quantity.PRESSURE),
                 p * pf, Quantity.PRESSURE, ed.clause("partitions"));
     }
 

@@ -28,6 +28,6 @@ public record CalcContext(Edition edition, UnitSystem system, OccupancyCatalogue
 
     /** An edition constant for this unit system: key.us or key.si. */
     public double constant(String key) {
-        return edition.constant(key + (system == UnitSystem.US ? ".us" : ".si"));
+        return edition.constant(key, system);
     }
 }

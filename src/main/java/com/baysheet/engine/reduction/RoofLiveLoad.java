@@ -28,7 +28,7 @@ public final class RoofLiveLoad {
         if (Double.isNaN(slope)) throw new InputError("roofSlope", "nothing", "is required where a roof live load acts");
         double max = ctx.system() == UnitSystem.US ? MAX_SLOPE_US : MAX_SLOPE_SI;
         if (!Double.isFinite(slope) || slope < 0 || slope > max)
-            throw new InputError("roofSlope", slope, "must lie between 0 and " + Display.sig3(max) + " " + Quantity.SLOPE.unit(ctx.system()).symbol());
+            throw new InputError("roofSlope", slope, "must lie between 0 and " + Display.plain(max) + " " + Quantity.SLOPE.unit(ctx.system()).symbol());
 
         double low = ctx.constant("r1.low"), high = ctx.constant("r1.high");
         double base = ed.constant("r1.base"), coef = ctx.constant("r1.coef"), r1min = ed.constant("r1.min");
@@ -36,24 +36,24 @@ public final class RoofLiveLoad {
         double r1;
         if (area <= low) { r1 = 1; r1Sub = "A_T ≤ " + rec.num(low, Quantity.AREA); }
         else if (area >= high) { r1 = r1min; r1Sub = "A_T ≥ " + rec.num(high, Quantity.AREA); }
-        else { r1 = base - coef * area; r1Sub = Display.plain(base) + " − " + Display.plain(coef) + " × " + rec.num(area, Quantity.AREA); }
-        rec.step("R1", "Roof tributary area factor", "R1 = " + Display.plain(base) + " − " + Display.plain(coef) + " A_T, " + Display.sig3(r1min) + " ≤ R1 ≤ 1",
+        else { r1 = base - coef * area; r1Sub = rec.plain(base) + " − " + rec.plain(coef) + " × " + rec.num(area, Quantity.AREA); }
+        rec.step("R1", "Roof tributary area factor", "R1 = " + rec.plain(base) + " − " + rec.plain(coef) + " A_T, " + rec.fmt(r1min) + " ≤ R1 ≤ 1",
                 r1Sub, r1, Quantity.RATIO, ed.clause("roof.reduction"));
 
         double f = slope;
         if (ctx.system() == UnitSystem.SI) {
             double k = ed.constant("r2.siPercentToF");
-            f = rec.step("F", "Slope factor F from the slope in percent", "F = " + Display.plain(k) + " × slope", Display.plain(k) + " × " + Display.sig3(slope),
+            f = rec.step("F", "Slope factor F from the slope in percent", "F = " + rec.plain(k) + " × slope", rec.plain(k) + " × " + rec.fmt(slope),
                     k * slope, Quantity.RATIO, ed.clause("roof.reduction"));
         }
         double fLow = ed.constant("r2.low"), fHigh = ed.constant("r2.high");
         double b2 = ed.constant("r2.base"), c2 = ed.constant("r2.coef"), r2min = ed.constant("r2.min");
         double r2;
         String r2Sub;
-        if (f <= fLow) { r2 = 1; r2Sub = "F ≤ " + Display.plain(fLow); }
-        else if (f >= fHigh) { r2 = r2min; r2Sub = "F ≥ " + Display.plain(fHigh); }
-        else { r2 = b2 - c2 * f; r2Sub = Display.plain(b2) + " − " + Display.plain(c2) + " × " + Display.sig3(f); }
-        rec.step("R2", "Roof slope factor", "R2 = " + Display.plain(b2) + " − " + Display.plain(c2) + " F, " + Display.sig3(r2min) + " ≤ R2 ≤ 1",
+        if (f <= fLow) { r2 = 1; r2Sub = "F ≤ " + rec.plain(fLow); }
+        else if (f >= fHigh) { r2 = r2min; r2Sub = "F ≥ " + rec.plain(fHigh); }
+        else { r2 = b2 - c2 * f; r2Sub = rec.plain(b2) + " − " + rec.plain(c2) + " × " + rec.fmt(f); }
+        rec.step("R2", "Roof slope factor", "R2 = " + rec.plain(b2) + " − " + rec.plain(c2) + " F, " + rec.fmt(r2min) + " ≤ R2 ≤ 1",
                 r2Sub, r2, Quantity.RATIO, ed.clause("roof.reduction"));
 
         double l0 = roof.uniform(ctx.system());
@@ -61,7 +61,7 @@ public final class RoofLiveLoad {
         double raw = l0 * r1 * r2;
         double lr = Math.min(hi, Math.max(lo, raw));
         rec.step("Lr", "Roof live load", "Lr = L0 R1 R2, " + rec.num(lo, Quantity.PRESSURE) + " ≤ Lr ≤ " + rec.num(hi, Quantity.PRESSURE),
-                rec.num(l0, Quantity.PRESSURE) + " × " + Display.sig3(r1) + " × " + Display.sig3(r2), lr, Quantity.PRESSURE,
+                rec.num(l0, Quantity.PRESSURE) + " × " + rec.fmt(r1) + " × " + rec.fmt(r2), lr, Quantity.PRESSURE,
                 ed.clause("roof.reduction"));
         if (raw < lo) rec.info("Lower bound governs: Lr not less than " + rec.show(lo, Quantity.PRESSURE) + ".", ed.clause("roof.reduction"));
         if (l0 < lo || l0 > hi)
