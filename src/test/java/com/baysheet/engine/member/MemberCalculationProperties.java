@@ -115,6 +115,7 @@ class MemberCalculationProperties {
                                              @ForAll @IntRange(min = 1, max = 12) int floors) {
         if (!kind.isColumn()) return;
         CalcRecord r = Fixtures.calc(Fixtures.US, Fixtures.column(kind, floors, Double.NaN, new com.baysheet.engine.load.AreaLoad("office", area, 10)));
-        assertThat(r.result("L.P") / r.result("L0.P")).isBetween(floors == 1 ? 0.5 : 0.4, 1.0);
+        // a bound that binds is met to the last bit or one below it (0.4 × P / P): allow 1e-12 of rounding
+        assertThat(r.result("L.P") / r.result("L0.P")).isBetween((floors == 1 ? 0.5 : 0.4) - 1e-12, 1.0 + 1e-12);
     }
 }
