@@ -14,7 +14,7 @@ final class AxialActions {
     static void record(CalcContext ctx, MemberInput in, LoadBook book, BeamLoads floor0, BeamLoads floor,
                        BeamLoads roof0, BeamLoads roof, boolean halfL, RecordBuilder rec) {
         var ed = ctx.edition();
-        double d = rec.step("P_D", "Axial dead load", "P_D = Σ D", "sum of dead loads", book.dead.total(), Quantity.FORCE, ed.clause("combo.lrfd"));
+        double d = rec.step("P_D", "Axial dead load", "P_D = Σ D", "sum of dead loads", book.dead.total(), Quantity.FORCE, com.baysheet.engine.record.Clause.NONE);
         double l0 = floor0.total(), l = floor.total();
         if (l0 > 0) {
             rec.step("P_L0", "Axial floor live load, unreduced", "P_L0 = Σ L0 A_i", "sum over sources", l0, Quantity.FORCE, ed.clause("loads.table"));

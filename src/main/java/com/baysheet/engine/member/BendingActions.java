@@ -42,7 +42,8 @@ final class BendingActions {
         Support s = in.support();
         List<Effect> effects = effects(s);
         double ei = in.stiffness();
-        double[] d = caseEffects(rec, "D", "dead load", s, List.of(book.dead), effects, ei, ed.clause("combo.lrfd"));
+        // statics of the dead load: no code clause (the beam formulas are those of any handbook)
+        double[] d = caseEffects(rec, "D", "dead load", s, List.of(book.dead), effects, ei, Clause.NONE);
         double[] l = new double[effects.size()];
         if (!floor0.isEmpty()) {
             caseEffects(rec, "L0", "floor live load, unreduced", s, List.of(floor0), effects, Double.NaN, ed.clause("loads.table"));

@@ -1,7 +1,10 @@
 package com.baysheet.engine.member;
 
 import com.baysheet.engine.code.Occupancy;
+import com.baysheet.engine.load.AreaLoad;
+import com.baysheet.engine.load.AreaStrip;
 import com.baysheet.engine.load.MemberInput;
+import com.baysheet.engine.load.PointLoad;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.reduction.CalcContext;
@@ -12,6 +15,7 @@ final class Inputs {
     private Inputs() {}
 
     static void record(CalcContext ctx, MemberInput in, LoadBook book, RecordBuilder rec) {
+        if (!rec.writesText()) return; // the inputs block is for reading; a numbers-only pass skips it
         rec.inputText("edition", "Code edition", ctx.edition().id());
         rec.inputText("kind", "Member", in.kind().title());
         rec.input("K_LL", "Live load element factor K_LL", ctx.edition().kll(in.kind()), Quantity.RATIO);
@@ -29,14 +33,43 @@ final class Inputs {
         } else {
             rec.inputText("support", "Support", "axial");
         }
-        rec.input("floors", "Floors supported", in.floorsSupported(), Quantity.RATIO);
+        rec.inputText("floors", "Floors supported", Integer.toString(in.floorsSupported()));
         book.floorAreas.forEach((id, a) -> occupancy(ctx, ctx.catalogue().get(id), a, rec));
         book.roofAreas.forEach((id, a) -> occupancy(ctx, ctx.catalogue().get(id), a, rec));
+        loads(ctx, in, rec);
         if (in.selfWeight() > 0) rec.input("selfWeight", "Member self weight", in.selfWeight(), Quantity.LINE_LOAD);
         if (!Double.isNaN(in.roofSlope())) rec.input("roofSlope", "Roof slope", in.roofSlope(), Quantity.SLOPE);
         if (!Double.isNaN(in.stiffness())) rec.input("EI", "Stiffness EI", in.stiffness(), Quantity.STIFFNESS);
         rec.inputText("partitions", "Partition allowance", !ctx.options().partitionAllowance() ? "not included"
                 : ctx.options().reducePartitions() ? "included, reduced with the live load" : "included, not reduced");
+    }
+
+    /** Each loaded strip, area and point load as given, so that a checker sees every load the member carries. */
+    private static void loads(CalcContext ctx, MemberInput in, RecordBuilder rec) {
+        for (int i = 0; i < in.strips().size(); i++) {
+            AreaStrip st = in.strips().get(i);
+            rec.inputText("strip[" + i + "]", "Loaded strip " + (i + 1), ctx.catalogue().get(st.occupancy()).name() + ", "
+                    + rec.show(st.width(), Quantity.LENGTH) + " wide from x = " + rec.show(st.from(), Quantity.LENGTH) + " to "
+                    + rec.show(st.to(), Quantity.LENGTH) + ", dead load " + rec.show(st.deadPressure(), Quantity.PRESSURE));
+        }
+        for (int i = 0; i < in.areas().size(); i++) {
+            AreaLoad a = in.areas().get(i);
+            rec.inputText("area[" + i + "]", "Loaded area " + (i + 1), ctx.catalogue().get(a.occupancy()).name() + ", "
+                    + rec.show(a.area(), Quantity.AREA) + ", dead load " + rec.show(a.deadPressure(), Quantity.PRESSURE));
+        }
+        for (int i = 0; i < in.pointLoads().size(); i++) {
+            PointLoad p = in.pointLoads().get(i);
+            String where = in.kind().isColumn() ? "axial" : "at x = " + rec.show(p.x(), Quantity.LENGTH);
+            rec.inputText("point[" + i + "]", (in.kind().isColumn() ? "Load carried " : "Point load ") + (i + 1), where
+                    + ": dead " + rec.show(p.dead(), Quantity.FORCE) + ", live unreduced " + rec.show(p.liveTotal(), Quantity.FORCE)
+                    + " from " + rec.show(area(p), Quantity.AREA));
+        }
+    }
+
+    private static double area(PointLoad p) {
+        double s = 0;
+        for (var a : p.areas()) s += a.area();
+        return s;
     }
 
     private static void occupancy(CalcContext ctx, Occupancy o, double area, RecordBuilder rec) {
