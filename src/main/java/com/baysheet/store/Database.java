@@ -29,10 +29,15 @@ public final class Database implements AutoCloseable {
         return db;
     }
 
-    /** The URL of the embedded database under a data directory; H2 in its closest-to-PostgreSQL mode. */
+    /**
+     * The URL of the embedded database under a data directory; H2 in its closest-to-PostgreSQL mode.
+     * WRITE_DELAY=0: H2's MVStore then writes every transaction to the file as it commits (by default it
+     * writes committed changes in the background up to half a second later, and a killed server lost
+     * saves it had already answered; see docs/reliability.md).
+     */
     public static String h2Url(Path dataDir) {
         Path file = dataDir.toAbsolutePath().normalize().resolve("baysheet");
-        return "jdbc:h2:file:" + file + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH";
+        return "jdbc:h2:file:" + file + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;WRITE_DELAY=0";
     }
 
     /** Applies pending migrations; returns how many ran. Safe to call again. */

@@ -1,0 +1,318 @@
+package com.baysheet.e2e;
+
+import com.baysheet.auth.Tokens;
+import com.baysheet.framing.Derivation;
+import com.baysheet.store.Database;
+import com.baysheet.store.Store;
+import com.baysheet.web.Server;
+import com.baysheet.web.review.Signoff;
+import io.javalin.Javalin;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.Assumptions;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.openqa.selenium.By;
+import org.openqa.selenium.Keys;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.chrome.ChromeDriver;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.UUID;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/**
+ * The whole story of one sheet in a real browser (Debian's Chromium, headless), against the production wiring
+ * (full-strength password hashing, the access filter, form tokens): the administrator's set-up, two users,
+ * an engineer entering a project, its grid, levels and bays, reading members and a take-down, downloading
+ * and submitting a sheet; a checker marking up a step and returning it; the engineer answering and
+ * resubmitting; the checker approving and issuing; the issued PDF downloaded and verified by upload.
+ * Along the way every page is checked for unlabelled form fields, and the set-up and login forms are filled
+ * and sent with the keyboard alone.
+ */
+class BrowserStoryTest {
+    private static final String ADMIN_PASSWORD = "harbour lights 42";
+    private static final String ENGINEER_PASSWORD = "gravel path 1987";
+    private static final String CHECKER_PASSWORD = "slate roof 2231";
+    private static final String MARKUP = "Is this K_LL right for a girder? <script>alert('x')</script>";
+    private static final String REPLY = "Yes: interior girder, K_LL = 2 (Table 4.7-1).";
+
+    static Database db;
+    static Javalin app;
+    static ChromeDriver driver;
+    static Path downloads;
+    Page page;
+
+    @BeforeAll
+    static void start() throws Exception {
+        String missing = Chromium.missing();
+        if (missing != null) System.out.println("BrowserStoryTest skipped: " + missing);
+        Assumptions.assumeTrue(missing == null, "browser tests need Debian's chromium and chromium-driver: " + missing);
+        db = Database.open("jdbc:h2:mem:e2e" + UUID.randomUUID().toString().replace("-", "")
+                + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
+        Store store = Store.on(db.dataSource(), Derivation::derive);
+        app = Server.create(store, Signoff.on(store, db.dataSource())::install).start("127.0.0.1", 0);
+        downloads = Files.createTempDirectory("baysheet-downloads-");
+        driver = Chromium.start(downloads);
+        driver.executeCdpCommand("Browser.setDownloadBehavior", Map.of("behavior", "allow",
+                "downloadPath", downloads.toAbsolutePath().toString()));
+    }
+
+    @AfterAll
+    static void stop() {
+        if (driver != null) driver.quit();
+        if (app != null) app.stop();
+        if (db != null) db.close();
+    }
+
+    @Test
+    void oneSheetFromSetUpToIssuedAndVerified() throws Exception {
+        page = new Page(driver, "http://127.0.0.1:" + app.port());
+        try {
+            story();
+        } catch (Throwable t) {
+            Screenshots.save(driver, "story-" + Instant.now().toString().replace(':', '-'));
+            throw t;
+        }
+        assertThat(page.unlabelled).as("form fields without a label, by page").isEmpty();
+    }
+
+    private void story() throws Exception {
+        setUpAdministratorByKeyboard();
+        addUser("erin", "Erin Marsh", "EM", "engineer", ENGINEER_PASSWORD);
+        addUser("chris", "Chris Vale", "CV", "checker", CHECKER_PASSWORD);
+        assertThat(page.text()).contains("Erin Marsh").contains("Chris Vale");
+        page.press("Log out");
+        assertThat(page.path()).startsWith("/login");
+
+        logInByKeyboard("erin", ENGINEER_PASSWORD);
+        enterProject();
+        enterGridAndLevels();
+        enterBays();
+        String member = readMembersAndTakeDown();
+        openSheet(member);
+        Path checking = download("Checking copy (PDF)");
+        assertThat(Files.readAllBytes(checking)).startsWith("%PDF".getBytes());
+        page.press("Submit for check");
+        assertThat(state()).isEqualTo("submitted for check");
+        page.press("Log out");
+
+        logInByKeyboard("chris", CHECKER_PASSWORD);
+        openSheet(member);
+        markUpAStepAndReturn();
+        page.press("Log out");
+
+        logInByKeyboard("erin", ENGINEER_PASSWORD);
+        openSheet(member);
+        assertThat(state()).isEqualTo("returned with markups");
+        WebElement reply = page.form(".markup form[action$='/reply']");
+        page.type(reply, "text", REPLY);
+        page.press(reply, "Reply");
+        page.press("Resubmit");
+        assertThat(state()).isEqualTo("resubmitted");
+        page.press("Log out");
+
+        logInByKeyboard("chris", CHECKER_PASSWORD);
+        openSheet(member);
+        assertThat(page.text()).contains(REPLY);
+        page.press("Resolve");
+        page.press("Approve");
+        assertThat(state()).isEqualTo("approved");
+        assertThat(page.form("#titleblock").getText()).contains("CV");
+        page.press("Issue");
+        assertThat(state()).isEqualTo("issued");
+        String sha = page.form("#titleblock").getText().replaceAll("(?s).*SHA-256 ([0-9a-f]{64}).*", "$1");
+        assertThat(sha).hasSize(64);
+        Path issued = download("Issued copy (PDF)");
+        assertThat(Tokens.sha256(Files.readAllBytes(issued))).as("the downloaded issued revision is the frozen one").isEqualTo(sha);
+        verifyByUpload(issued, sha);
+        page.press("Log out");
+    }
+
+    private void setUpAdministratorByKeyboard() {
+        page.open("/");
+        assertThat(page.path()).as("a new office starts at the one-time set-up").startsWith("/setup");
+        page.tabTo("username");
+        page.keys("admin", Keys.TAB, "Ada Byrne", Keys.TAB, "AB", Keys.TAB, ADMIN_PASSWORD, Keys.TAB, ADMIN_PASSWORD);
+        page.keysThenWait(Keys.ENTER);
+        assertThat(page.path()).startsWith("/admin/users");
+    }
+
+    private void addUser(String username, String fullName, String initials, String role, String password) {
+        WebElement f = page.form("#add-user");
+        page.type(f, "username", username);
+        page.type(f, "fullName", fullName);
+        page.type(f, "initials", initials);
+        page.choose(f, "role", role);
+        page.type(f, "password", password);
+        page.press(f, "Add user");
+        assertThat(page.path()).startsWith("/admin/users");
+        assertThat(page.text()).contains(fullName);
+    }
+
+    private void logInByKeyboard(String username, String password) {
+        if (!page.path().startsWith("/login")) page.open("/login");
+        page.tabTo("username");
+        page.keys(username, Keys.TAB, password);
+        page.keysThenWait(Keys.ENTER);
+        assertThat(page.path()).as("logged in as " + username).startsWith("/projects");
+    }
+
+    private void enterProject() {
+        page.follow("New project");
+        WebElement f = page.form("form[action='/projects']");
+        page.type(f, "jobNumber", "26-014");
+        page.type(f, "name", "Pier Street Offices");
+        page.type(f, "address", "14 Pier Street");
+        page.type(f, "client", "Pier Street Holdings");
+        f.findElement(By.cssSelector("input[name='units'][value='US']")).click();
+        page.press(f, "Create project");
+        assertThat(page.path()).matches("/projects/\\d+");
+        assertThat(page.text()).contains("Pier Street Offices");
+    }
+
+    private void enterGridAndLevels() {
+        page.follow("Levels and grid");
+        WebElement grid = page.form("#grid-form");
+        page.type(grid, "x.names", "1 2 3 4");
+        page.type(grid, "x.spacings", "30 30 25");
+        page.type(grid, "y.names", "A B C");
+        page.type(grid, "y.spacings", "25 25");
+        page.press(grid, "Save grid");
+        assertThat(page.text()).contains("3 × 2 bays");
+        addLevel("Level 2", "14", null);
+        addLevel("Roof", "28", "0.25");
+        assertThat(page.text()).contains("Level 2").contains("Roof");
+    }
+
+    private void addLevel(String name, String elevation, String roofSlope) {
+        WebElement f = page.form("#level-form");
+        page.type(f, "name", name);
+        page.type(f, "elevation", elevation);
+        if (roofSlope != null) {
+            page.field(f, "roof").click();
+            page.type(f, "roofSlope", roofSlope);
+        }
+        page.press(f, "Add level");
+        assertThat(page.path()).endsWith("/levels");
+        assertThat(page.text()).doesNotContain("must be");
+    }
+
+    private void enterBays() {
+        WebElement row = page.driver.findElements(By.cssSelector("table.list tr")).stream()
+                .filter(r -> r.getText().startsWith("Level 2")).findFirst().orElseThrow();
+        pageFollowIn(row, "Edit bays");
+        // the whole level at once from the "all" heading, then two bays of the south row as a corridor
+        page.driver.findElement(By.cssSelector("button[data-pick='all']")).click();
+        assignTicked("office", "65");
+        assertThat(page.driver.findElements(By.cssSelector("#bay-grid td .bay-use")).stream()
+                .filter(e -> !e.getText().isBlank()).count()).isEqualTo(6);
+        List<WebElement> boxes = page.driver.findElements(By.cssSelector("#bay-grid td input[name='cells']"));
+        boxes.get(0).click();
+        boxes.get(1).click();
+        assignTicked("office-corridor", "65");
+        Set<String> uses = page.driver.findElements(By.cssSelector("#bay-grid td .bay-use")).stream()
+                .map(WebElement::getText).collect(Collectors.toSet());
+        assertThat(uses).hasSize(2);
+
+        pageFollowIn(page.driver.findElement(By.cssSelector("p.level-switch")), "Roof");
+        page.driver.findElement(By.cssSelector("button[data-pick='all']")).click();
+        assignTicked("roof-ordinary", "20");
+    }
+
+    private void assignTicked(String occupancy, String deadLoad) {
+        WebElement f = page.form("#bay-form");
+        page.choose(f, "occupancy", occupancy);
+        page.type(f, "deadLoad", deadLoad);
+        page.choose(f, "beams", "Y");
+        page.type(f, "infillBeams", "2");
+        page.press(f, "Apply to selected bays");
+        assertThat(page.path()).endsWith("/bays");
+        assertThat(page.driver.findElements(By.cssSelector(".form-errors, .error"))).allSatisfy(e -> assertThat(e.getText()).isBlank());
+    }
+
+    /** Reads the girders of Level 2, one girder's record, and a column take-down; returns that girder's name. */
+    private String readMembersAndTakeDown() {
+        page.follow("Members");
+        WebElement filter = page.form("form.filters");
+        page.choose(filter, "level", "Level 2");
+        page.choose(filter, "role", "GIRDER");
+        page.press(filter, "Filter");
+        List<WebElement> links = page.driver.findElements(By.cssSelector("table.members tbody a"));
+        assertThat(links).isNotEmpty();
+        String name = links.get(0).getText();
+        pageFollowIn(page.driver.findElement(By.cssSelector("table.members tbody")), name);
+        assertThat(page.text()).contains(name).contains("licensed engineer").contains("4.7");
+
+        page.follow("Column take-downs");
+        WebElement firstStack = page.driver.findElement(By.cssSelector("table a[href*='/takedowns/']"));
+        pageFollowIn(firstStack.findElement(By.xpath("..")), firstStack.getText());
+        assertThat(page.text()).contains("Roof").contains("Level 2").contains("licensed engineer");
+        return name;
+    }
+
+    private void openSheet(String member) {
+        page.follow("Projects");
+        page.follow("Pier Street Offices");
+        page.follow("Sheets and check");
+        pageFollowIn(page.form("#sheets"), member);
+        assertThat(page.path()).startsWith("/review/projects/");
+    }
+
+    private void markUpAStepAndReturn() {
+        assertThat(state()).isEqualTo("submitted for check");
+        WebElement f = page.form("#add-markup form");
+        WebElement target = page.field(f, "target");
+        String step = target.findElements(By.tagName("option")).stream().map(o -> o.getAttribute("value"))
+                .filter(v -> v.startsWith("step:")).findFirst().orElseThrow();
+        page.choose(f, "target", step);
+        page.type(f, "text", MARKUP);
+        page.press(f, "Add markup");
+        WebElement row = page.driver.findElement(By.id("step-" + step.substring("step:".length())));
+        assertThat(row.getText()).as("the markup sits beside its step, shown as text").contains(MARKUP);
+        page.press("Return with markups");
+        assertThat(state()).isEqualTo("returned with markups");
+    }
+
+    private void verifyByUpload(Path pdf, String sha) {
+        page.follow("Verify a PDF");
+        WebElement f = page.form("#verify-form");
+        page.field(f, "pdf").sendKeys(pdf.toAbsolutePath().toString());
+        page.press(f, "Verify");
+        assertThat(page.text()).contains("Matches an issued revision").contains(sha).contains("revision 1");
+    }
+
+    private String state() { return page.driver.findElement(By.id("state")).getText(); }
+
+    private void pageFollowIn(WebElement scope, String linkText) {
+        WebElement link = scope.findElement(By.linkText(linkText));
+        String href = link.getAttribute("href");
+        page.open(href.substring(page.base.length()));
+    }
+
+    /** Clicks a download link and waits for the file to arrive whole. */
+    private Path download(String linkText) throws Exception {
+        Set<Path> before = listing();
+        page.driver.findElement(By.linkText(linkText)).click();
+        for (int i = 0; i < 300; i++) {
+            List<Path> fresh = listing().stream().filter(p -> !before.contains(p))
+                    .filter(p -> p.toString().endsWith(".pdf")).toList();
+            if (!fresh.isEmpty() && Files.size(fresh.get(0)) > 0) return fresh.get(0);
+            Thread.sleep(100);
+        }
+        throw new AssertionError("no download arrived after clicking " + linkText + "; folder has " + listing());
+    }
+
+    private Set<Path> listing() throws Exception {
+        try (Stream<Path> s = Files.list(downloads)) {
+            return s.collect(Collectors.toSet());
+        }
+    }
+}

@@ -1,0 +1,94 @@
+package com.baysheet.e2e;
+
+import java.io.IOException;
+import java.net.ServerSocket;
+import java.net.URI;
+import java.net.http.HttpClient;
+import java.net.http.HttpRequest;
+import java.net.http.HttpResponse;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+
+/**
+ * The office server as a process of its own ({@code java -cp <the test class path> com.baysheet.App}) on a
+ * free loopback port over its own data directory, so that it can be killed as a machine dies.
+ */
+final class ChildServer implements AutoCloseable {
+    private static final Duration STARTUP = Duration.ofSeconds(90);
+
+    final Process process;
+    final int port;
+    final Path log;
+
+    private ChildServer(Process process, int port, Path log) {
+        this.process = process;
+        this.port = port;
+        this.log = log;
+    }
+
+    /** Starts the server on this data directory and waits until its health check answers. */
+    static ChildServer start(Path dataDir, boolean demo) throws IOException, InterruptedException {
+        int port = freePort();
+        Path log = dataDir.resolveSibling(dataDir.getFileName() + "-server-" + System.nanoTime() + ".log");
+        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-Xmx512m", "-cp", System.getProperty("java.class.path"), "com.baysheet.App",
+                "--port", String.valueOf(port), "--bind", "127.0.0.1", "--data", dataDir.toString()));
+        if (demo) cmd.add("--demo");
+        Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile()).start();
+        ChildServer s = new ChildServer(p, port, log);
+        s.awaitHealthy();
+        return s;
+    }
+
+    String base() { return "http://127.0.0.1:" + port; }
+
+    /** SIGKILL: no shutdown hook runs, nothing is flushed or closed. */
+    void kill() throws InterruptedException {
+        process.destroyForcibly();
+        process.waitFor(30, TimeUnit.SECONDS);
+    }
+
+    /** SIGTERM: the server's shutdown hook stops it and closes the database. */
+    @Override
+    public void close() throws InterruptedException {
+        if (!process.isAlive()) return;
+        process.destroy();
+        if (!process.waitFor(30, TimeUnit.SECONDS)) kill();
+    }
+
+    String logText() {
+        try {
+            return Files.readString(log);
+        } catch (IOException e) {
+            return "(no log: " + e + ")";
+        }
+    }
+
+    private void awaitHealthy() throws InterruptedException {
+        HttpClient c = HttpClient.newBuilder().connectTimeout(Duration.ofSeconds(2)).build();
+        long deadline = System.nanoTime() + STARTUP.toNanos();
+        while (System.nanoTime() < deadline) {
+            if (!process.isAlive()) throw new IllegalStateException("server exited with " + process.exitValue() + ":\n" + logText());
+            try {
+                HttpResponse<String> r = c.send(HttpRequest.newBuilder(URI.create(base() + "/health")).timeout(Duration.ofSeconds(5)).build(),
+                        HttpResponse.BodyHandlers.ofString());
+                if (r.statusCode() == 200) return;
+            } catch (IOException e) {
+                // not listening yet
+            }
+            Thread.sleep(100);
+        }
+        process.destroyForcibly();
+        throw new IllegalStateException("server did not answer /health within " + STARTUP + ":\n" + logText());
+    }
+
+    private static int freePort() throws IOException {
+        try (ServerSocket s = new ServerSocket(0)) {
+            return s.getLocalPort();
+        }
+    }
+}
