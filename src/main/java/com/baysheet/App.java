@@ -33,7 +33,19 @@ public final class App {
             System.exit(2);
             return;
         }
-        start(options);
+        try {
+            start(options);
+        } catch (RuntimeException e) {
+            // a database that is locked by another server, unreachable or refusing the login: say so in one line
+            System.err.println("baysheet: could not start: " + rootCause(e));
+            System.exit(1);
+        }
+    }
+
+    private static String rootCause(Throwable e) {
+        Throwable t = e;
+        while (t.getCause() != null && t.getCause() != t) t = t.getCause();
+        return t.getMessage() == null ? t.toString() : t.getMessage();
     }
 
     /** Opens (and migrates) the database, loads the demo if asked, and starts serving. */
