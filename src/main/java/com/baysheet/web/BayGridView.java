@@ -20,7 +20,7 @@ record BayGridView(List<String> columns, List<Row> rows) {
 
     record CellView(String key, String name, String label, String detail, String fill, boolean selected, Map<String, String> values) {}
 
-    static BayGridView of(Grid g, List<Bay> bays, OccupancyCatalogue catalogue, Set<String> selected) {
+    static BayGridView of(Grid g, List<Bay> bays, OccupancyCatalogue catalogue, Set<String> selected, UnitLabels units) {
         Map<String, Bay> byKey = new HashMap<>();
         for (Bay b : bays) byKey.put(b.col() + "," + b.row(), b);
         Palette palette = new Palette(catalogue);
@@ -31,18 +31,19 @@ record BayGridView(List<String> columns, List<Row> rows) {
             List<CellView> cells = new ArrayList<>();
             for (int c = 0; c < g.x().cells(); c++) {
                 String key = c + "," + r;
-                cells.add(cell(key, g.bayName(c, r), byKey.get(key), catalogue, palette, selected.contains(key)));
+                cells.add(cell(key, g.bayName(c, r), byKey.get(key), catalogue, palette, selected.contains(key), units));
             }
             rows.add(new Row(g.y().name(r) + "-" + g.y().name(r + 1), r, cells));
         }
         return new BayGridView(columns, rows);
     }
 
-    private static CellView cell(String key, String name, Bay b, OccupancyCatalogue cat, Palette palette, boolean selected) {
+    private static CellView cell(String key, String name, Bay b, OccupancyCatalogue cat, Palette palette, boolean selected,
+                                 UnitLabels units) {
         if (b == null) return new CellView(key, name, "not framed", "", "#ffffff", selected, Map.of());
         if (b.opening()) return new CellView(key, name, "opening", "no floor", "#ffffff", selected, Map.of());
         String label = cat.contains(b.occupancy()) ? cat.get(b.occupancy()).name() : b.occupancy();
-        StringBuilder detail = new StringBuilder(com.baysheet.engine.units.Display.plain(b.deadLoad()) + " D · beams "
+        StringBuilder detail = new StringBuilder("D " + units.pressure(b.deadLoad()) + " · beams "
                 + b.framing().beams() + " × " + b.framing().infillBeams());
         for (Side s : Side.values())
             if (b.cantilevers().containsKey(s)) detail.append(" · cantilever ").append(s.name().toLowerCase());
