@@ -6,6 +6,7 @@ import com.baysheet.store.StaleVersion;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
+import org.eclipse.jetty.http.HttpException;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
@@ -35,6 +36,13 @@ final class Errors {
         routes.exception(StaleVersion.class, (e, ctx) -> respond(ctx, 409, "errors/conflict",
                 new ApiError(409, e.getMessage(), "version", String.valueOf(e.given()), "stale version; now " + e.current())));
         routes.exception(Exception.class, (e, ctx) -> {
+            int unreadable = unreadable(e);
+            if (unreadable > 0) {
+                respond(ctx, unreadable, "errors/bad-input", new ApiError(unreadable, unreadable == 413
+                        ? "the request is larger than any form or sheet this server takes" : "the request could not be read",
+                        null, null, null));
+                return;
+            }
             String ref = UUID.randomUUID().toString().substring(0, 8);
             LOG.error("fault {} on {} {}", ref, ctx.method(), ctx.path(), e);
             respond(ctx, 500, "errors/fault", new ApiError(500, "internal fault, reference " + ref, null, null, null));
@@ -43,6 +51,17 @@ final class Errors {
         routes.error(404, ctx -> {
             if (ctx.attribute(ANSWERED) == null) notFound(ctx, "no page at " + ctx.path());
         });
+    }
+
+    /**
+     * The 4xx status of a request Jetty could not read (a body past the size limits, a broken form or
+     * multipart body), found anywhere in the cause chain (the innermost, most specific one); 0 for anything else.
+     */
+    private static int unreadable(Throwable e) {
+        int code = 0;
+        for (Throwable t = e; t != null && t.getCause() != t; t = t.getCause())
+            if (t instanceof HttpException h && h.getCode() >= 400 && h.getCode() < 500) code = h.getCode();
+        return code;
     }
 
     private static void notFound(Context ctx, String message) {

@@ -3,6 +3,7 @@ package com.baysheet.web;
 import com.baysheet.store.Store;
 import io.javalin.Javalin;
 import io.javalin.config.RoutesConfig;
+import io.javalin.config.SizeUnit;
 import io.javalin.http.staticfiles.Location;
 
 import java.util.function.Consumer;
@@ -24,6 +25,11 @@ public final class Server {
     public static Javalin create(Store store, Consumer<RoutesConfig> access) {
         return Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
+            // request-size limits: a form or JSON body is a few kilobytes (a 413 past 1 MB, before it is read
+            // whole); the only upload is a PDF to verify, and no sheet or package comes near 50 MB
+            cfg.http.maxRequestSize = 1_000_000L;
+            cfg.jetty.multipartConfig.maxFileSize(50, SizeUnit.MB);
+            cfg.jetty.multipartConfig.maxTotalRequestSize(51, SizeUnit.MB);
             cfg.fileRenderer(new Views());
             cfg.staticFiles.add(sf -> {
                 sf.hostedPath = "/static";

@@ -29,7 +29,7 @@ public final class AuthRoutes {
         r.post("/logout", this::logout);
         r.get("/setup", this::setupForm);
         r.post("/setup", this::setup);
-        r.get("/account/password", ctx -> ctx.render("auth/password", model(Form.filled(Map.of()))));
+        r.get("/account/password", this::passwordForm);
         r.post("/account/password", this::changePassword);
     }
 
@@ -68,6 +68,12 @@ public final class AuthRoutes {
             startSession(ctx, done.get().get());
             ctx.redirect("/admin/users", HttpStatus.SEE_OTHER);
         }
+    }
+
+    void passwordForm(Context ctx) {
+        Map<String, Object> m = model(Form.filled(Map.of()));
+        m.put("changed", ctx.queryParam("changed") != null);
+        ctx.render("auth/password", m);
     }
 
     void changePassword(Context ctx) {
