@@ -2,6 +2,7 @@ package com.baysheet.sheet;
 
 import java.io.ByteArrayOutputStream;
 import java.io.OutputStream;
+import java.util.List;
 import java.security.MessageDigest;
 import java.nio.charset.StandardCharsets;
 
@@ -26,7 +27,20 @@ public final class PackageRenderer {
     public static StreamedPdf render(CalcPackage pkg, OutputStream out, Progress progress) {
         SheetRenderer.requireChecked(pkg.header());
         for (MemberSheet s : pkg.sheets()) SheetRenderer.requireChecked(s.header());
-        PdfaDocument pdf = PdfaDocument.open(out, pkg.header(), pkg.title() + ", " + pkg.header().project(), digest(pkg), false);
+        return write(pkg, out, progress, Markups.ISSUED);
+    }
+
+    /**
+     * A checking copy of the package, for reading and marking up before anything is issued: the checking mark
+     * on every page, "not yet checked" where no checker has signed, never a copy for submittal.
+     */
+    public static StreamedPdf checking(CalcPackage pkg, OutputStream out, Progress progress) {
+        return write(pkg, out, progress, Markups.checking(List.of()));
+    }
+
+    private static StreamedPdf write(CalcPackage pkg, OutputStream out, Progress progress, Markups markups) {
+        byte[] id = markups.checking() ? Hashes.of("checking-package", java.util.Arrays.toString(digest(pkg))) : digest(pkg);
+        PdfaDocument pdf = PdfaDocument.open(out, pkg.header(), pkg.title() + ", " + pkg.header().project(), id, markups.checking());
         Index index = new Index(pdf, pkg);
         pdf.frame.show(pkg.header(), pkg.title() + " · cover");
         new Cover(pdf, pkg).write();
@@ -38,7 +52,7 @@ public final class PackageRenderer {
             pdf.newPage();
             pdf.frame.show(s.header(), SheetRenderer.context(s));
             index.startsHere(s);
-            new MemberSheetWriter(pdf, s, Markups.ISSUED).write();
+            new MemberSheetWriter(pdf, s, markups).write();
             progress.sheetDone(++done, pkg.sheets().size());
         }
         if (!pkg.takeDowns().isEmpty()) {

@@ -66,5 +66,6 @@ public final class Signoff {
         new ReviewRoutes(store, review, clock).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
         new IssuedRoutes(store, review, clock).install(r);
+        new PackageRoutes(store, review, clock).install(r);
     }
 }

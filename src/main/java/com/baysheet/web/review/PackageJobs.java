@@ -1,0 +1,96 @@
+package com.baysheet.web.review;
+
+import com.baysheet.sheet.CalcPackage;
+import com.baysheet.sheet.PackageRenderer;
+import com.baysheet.sheet.StreamedPdf;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Optional;
+import java.util.UUID;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+
+/**
+ * Long packages are rendered off the request threads, one at a time, into a temporary file: the browser
+ * follows the progress and downloads the file when it is done, and other users' pages are not held up.
+ * The newest {@link #KEPT} jobs are kept; older files are deleted.
+ */
+final class PackageJobs {
+    static final int KEPT = 20;
+
+    /** A job as the browser sees it. {@code sha256} and {@code file} are set when it is done. */
+    static final class Job {
+        final String id, title;
+        final long project;
+        volatile int done, total;
+        volatile String sha256, error;
+        volatile Path file;
+
+        Job(String id, String title, long project) {
+            this.id = id;
+            this.title = title;
+            this.project = project;
+        }
+
+        boolean finished() { return file != null || error != null; }
+
+        /** What the progress page shows, read once so the page is consistent. */
+        View view() { return new View(id, title, done, total, sha256, error, file != null, finished()); }
+    }
+
+    /** A job's state for the template. */
+    public record View(String id, String title, int done, int total, String sha256, String error, boolean ready,
+                       boolean finished) {}
+
+    private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "package-renderer");
+        t.setDaemon(true);
+        return t;
+    });
+    private final Map<String, Job> jobs = new LinkedHashMap<>();
+
+    synchronized Job start(long project, CalcPackage pkg) {
+        Job job = new Job(UUID.randomUUID().toString(), pkg.title(), project);
+        job.total = pkg.sheets().size();
+        jobs.put(job.id, job);
+        while (jobs.size() > KEPT) forget(jobs.keySet().iterator().next());
+        worker.submit(() -> render(job, pkg));
+        return job;
+    }
+
+    synchronized Optional<Job> find(String id) { return Optional.ofNullable(jobs.get(id)); }
+
+    private static void render(Job job, CalcPackage pkg) {
+        try {
+            Path f = Files.createTempFile("baysheet-package-", ".pdf");
+            try (OutputStream out = Files.newOutputStream(f)) {
+                StreamedPdf s = PackageRenderer.checking(pkg, out, (done, total) -> { job.done = done; job.total = total; });
+                job.sha256 = s.sha256();
+            }
+            job.file = f;
+        } catch (IOException e) {
+            job.error = "the package could not be written: " + e.getMessage();
+            throw new UncheckedIOException(e);
+        } catch (RuntimeException e) {
+            job.error = "the package could not be rendered: " + e.getMessage();
+            throw e;
+        }
+    }
+
+    private void forget(String id) {
+        Job j = jobs.remove(id);
+        if (j != null && j.file != null) {
+            try {
+                Files.deleteIfExists(j.file);
+            } catch (IOException ignored) {
+                // a temporary file left behind is cleaned by the system
+            }
+        }
+    }
+}
