@@ -18,6 +18,8 @@ public record FirmOccupancy(String id, String name, UnitSystem units, double uni
         if (!id.matches("[a-z0-9][a-z0-9-]{0,59}"))
             throw new InputError("id", id, "use lower-case letters, digits and dashes, at most 60");
         name = Check.text("name", name).strip();
+        // firm_occupancy.name is VARCHAR(200): longer is a field error, not a database fault
+        if (name.length() > 200) throw new InputError("name", name.length() + " characters", "must be at most 200 characters");
         Check.present("units", units);
         Check.positive("uniform", uniform);
         Check.nonNegative("concentrated", concentrated);

@@ -1,8 +1,14 @@
 package com.baysheet.web.review;
 
+import com.baysheet.engine.member.MemberResult;
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.framing.Derived;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.review.AuditEvent;
 import com.baysheet.review.Caller;
+import com.baysheet.review.PackageManifest;
+import com.baysheet.review.PackageScope;
+import com.baysheet.review.SheetRef;
 import com.baysheet.review.SheetState;
 import com.baysheet.store.Store;
 import com.baysheet.store.auth.SignedIn;
@@ -17,7 +23,7 @@ import java.util.regex.Pattern;
 /**
  * The after-filter that follows the project pages and the API without touching them: every successful change
  * goes to the audit trail, and a change to a project supersedes at once the issued sheets whose member's
- * inputs it changed (the sheet page also checks whenever it is opened).
+ * inputs it changed, and the issued packages holding one of them (the sheet page also checks whenever it is opened).
  */
 final class EditTrail {
     private static final Pattern PROJECT = Pattern.compile("^/(?:api/)?projects/(\\d+)(?:/.*)?$");
@@ -43,12 +49,17 @@ final class EditTrail {
     }
 
     private void supersedeChanged(long projectId, Caller who) {
-        var derived = store.results().of(projectId).derived();
+        Derived derived = store.results().of(projectId).derived();
         for (StoredRevision r : review.reviews().latestOf(projectId)) {
             if (r.revision().state() != SheetState.ISSUED) continue;
-            Optional<DerivedMember> m = derived.member(r.sheet().subject());
-            m.ifPresent(x -> review.reviews().supersedeIfChanged(r.sheet(), x.result().record(), who));
+            current(derived, r.sheet()).ifPresent(x -> review.reviews().supersedeIfChanged(r.sheet(), x, who));
         }
+    }
+
+    /** What the sheet's check is about now: the member's record or the package's manifest; empty if gone. */
+    private static Optional<CalcRecord> current(Derived d, SheetRef ref) {
+        if (ref.isPackage()) return PackageScope.ofSubject(d, ref.subject()).map(s -> PackageManifest.of(s, d));
+        return d.member(ref.subject()).map(DerivedMember::result).map(MemberResult::record);
     }
 
     private static boolean own(String path) {

@@ -24,6 +24,7 @@ import java.util.List;
 import java.util.Map;
 
 import static com.baysheet.web.review.ReviewRoutes.SHEET;
+import static com.baysheet.web.review.ReviewRoutes.SHEETS;
 
 /** PDFs (the frozen issued copy, a checking copy), revision comparison, and verifying an uploaded PDF. */
 public final class IssuedRoutes {
@@ -43,7 +44,7 @@ public final class IssuedRoutes {
     public void install(RoutesConfig r) {
         r.get("/review/revisions/{revision}/issued.pdf", this::issuedPdf);
         r.get(SHEET + "/checking.pdf", this::checkingPdf);
-        r.get(SHEET + "/compare", this::compare);
+        for (String base : SHEETS) r.get(base + "/compare", this::compare);
         r.get("/verify", ctx -> ctx.render("review/verify", new HashMap<>()));
         r.post("/verify", this::verify);
     }
@@ -56,7 +57,7 @@ public final class IssuedRoutes {
     }
 
     void checkingPdf(Context ctx) {
-        SheetContext s = SheetContext.of(store, ctx);
+        SheetContext.OfMember s = SheetContext.member(store, ctx);
         Reviews.SheetView v = review.reviews().view(s.ref());
         byte[] pdf = SheetPdfs.checking(review.firm().get(), s, v.current().revision(), v.markups(),
                 Access.user(ctx).initials(), LocalDate.now(clock)).bytes();
@@ -70,7 +71,8 @@ public final class IssuedRoutes {
         int from = number(ctx, "from", Math.max(1, to - 1));
         Map<String, Object> m = new HashMap<>();
         m.put("project", s.computed().project());
-        m.put("member", s.member());
+        m.put("name", s.name());
+        m.put("back", s.path());
         m.put("history", h);
         m.put("from", from);
         m.put("to", to);

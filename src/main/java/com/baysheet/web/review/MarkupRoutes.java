@@ -7,11 +7,14 @@ import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
 
-import static com.baysheet.web.review.ReviewRoutes.SHEET;
+import static com.baysheet.web.review.ReviewRoutes.SHEETS;
 import static com.baysheet.web.review.ReviewRoutes.caller;
 import static com.baysheet.web.review.ReviewRoutes.version;
 
-/** Markups on a sheet: add one on an input, a step or the whole sheet; reply; resolve or reopen. */
+/**
+ * Markups on a sheet or a package: add one on an input, a step or the whole sheet (on a package: one of its
+ * sheets, or the package as a whole); reply; resolve or reopen.
+ */
 public final class MarkupRoutes {
     private final Store store;
     private final ReviewMarkups markups;
@@ -22,10 +25,12 @@ public final class MarkupRoutes {
     }
 
     public void install(RoutesConfig r) {
-        r.post(SHEET + "/markups", this::add);
-        r.post(SHEET + "/markups/{markup}/reply", this::reply);
-        r.post(SHEET + "/markups/{markup}/resolve", ctx -> resolve(ctx, true));
-        r.post(SHEET + "/markups/{markup}/reopen", ctx -> resolve(ctx, false));
+        for (String base : SHEETS) {
+            r.post(base + "/markups", this::add);
+            r.post(base + "/markups/{markup}/reply", this::reply);
+            r.post(base + "/markups/{markup}/resolve", ctx -> resolve(ctx, true));
+            r.post(base + "/markups/{markup}/reopen", ctx -> resolve(ctx, false));
+        }
     }
 
     void add(Context ctx) {

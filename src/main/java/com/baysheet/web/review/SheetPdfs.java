@@ -21,12 +21,12 @@ import java.util.List;
 final class SheetPdfs {
     private SheetPdfs() {}
 
-    static RenderedPdf issued(Firm firm, SheetContext s, SheetRevision approved, LocalDate today) {
+    static RenderedPdf issued(Firm firm, SheetContext.OfMember s, SheetRevision approved, LocalDate today) {
         SheetHeader h = header(firm, s, approved, approved.approval().initials(), approved.approval().on(), today);
         return SheetRenderer.issued(FramingSheets.member(h, s.computed().derived(), s.member().id()));
     }
 
-    static RenderedPdf checking(Firm firm, SheetContext s, SheetRevision r, List<MarkupNote> markups, String viewer,
+    static RenderedPdf checking(Firm firm, SheetContext.OfMember s, SheetRevision r, List<MarkupNote> markups, String viewer,
                                 LocalDate today) {
         String checker = r.approval() == null ? "" : r.approval().initials();
         LocalDate checkedOn = r.approval() == null ? null : r.approval().on();
@@ -37,7 +37,7 @@ final class SheetPdfs {
         return SheetRenderer.checking(sheet, markups.stream().map(SheetPdfs::markup).toList());
     }
 
-    private static SheetHeader header(Firm firm, SheetContext s, SheetRevision r, String checkedBy, LocalDate checkedOn,
+    private static SheetHeader header(Firm firm, SheetContext.OfMember s, SheetRevision r, String checkedBy, LocalDate checkedOn,
                                       LocalDate today) {
         var info = s.computed().project().info();
         String preparedBy = r.preparer() == null ? "-" : r.preparer().initials();

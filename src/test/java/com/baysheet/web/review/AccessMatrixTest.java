@@ -43,6 +43,7 @@ class AccessMatrixTest {
     static List<Route> routes() {
         long p = server.project();
         String s = server.sheetPath();
+        String k = "/review/projects/" + p + "/packages/project";
         List<Map.Entry<String, String>> v0 = List.of(Map.entry("version", "0"));
         List<Map.Entry<String, String>> none = List.of();
         return List.of(
@@ -66,6 +67,13 @@ class AccessMatrixTest {
                 new Route("POST", s + "/approve", v0, L, F, P, F),
                 new Route("POST", s + "/issue", v0, L, P, P, F),
                 new Route("POST", s + "/markups", List.of(Map.entry("target", "sheet"), Map.entry("text", "x")), L, F, P, F),
+                new Route("GET", k, none, L, P, P, P),
+                new Route("GET", k + "/compare", none, L, P, P, P),
+                new Route("POST", k + "/resubmit", v0, L, P, P, F),
+                new Route("POST", k + "/return", v0, L, F, P, F),
+                new Route("POST", k + "/approve", v0, L, F, P, F),
+                new Route("POST", k + "/issue", v0, L, P, P, F),
+                new Route("POST", k + "/markups", List.of(Map.entry("target", "sheet"), Map.entry("text", "x")), L, F, P, F),
                 new Route("GET", "/review/revisions/999999/issued.pdf", none, L, P, P, P),
                 new Route("GET", "/verify", none, L, P, P, P),
                 new Route("POST", "/verify", none, L, P, P, P),
