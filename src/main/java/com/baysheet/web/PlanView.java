@@ -27,6 +27,9 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
 
     private static final double MAX_W = 760, MAX_H = 560, PAD = 36;
 
+    /** The plan as SVG markup, escaped; the template inserts it as it is. */
+    public String svg() { return PlanSvg.of(this); }
+
     static PlanView of(Grid g, Level level, List<DerivedMember> members, DerivedMember selected,
                        OccupancyCatalogue cat, String memberHref) {
         Frame f = Frame.of(g, level);

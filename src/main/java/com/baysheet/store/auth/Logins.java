@@ -63,6 +63,9 @@ public final class Logins {
         return start(u, now);
     }
 
+    /** The smallest slide of a session's expiry worth writing. */
+    static final java.time.Duration EXTEND_STEP = java.time.Duration.ofMinutes(1);
+
     /** The login a cookie value stands for, if it is live; each use slides its idle expiry. */
     public Optional<SignedIn> session(String token) {
         if (token == null || token.isBlank()) return Optional.empty();
@@ -80,7 +83,9 @@ public final class Logins {
             return Optional.empty();
         }
         Instant expires = policy.sessions().expiresAt(s.get().createdAt(), now);
-        sessions.extend(hash, expires);
+        // slide the expiry at most once a minute: a page view should not cost a database write
+        if (expires.isAfter(s.get().expiresAt().plus(EXTEND_STEP))) sessions.extend(hash, expires);
+        else expires = s.get().expiresAt();
         return Optional.of(new SignedIn(u, token, s.get().csrfToken(), expires));
     }
 
