@@ -48,6 +48,9 @@ final class TakeDownRecord {
            .governs("LRFD.P").governs("ASD.P");
         rec.info("Each level's column carries everything at and above it; its reduction uses its own tributary area summed over "
                 + "the floors it supports, never the reduced reactions of the members it carries (common practice).", ed.clause("reduction.multifloor"));
+        rec.info("f is the factor of Eq. 4.7-1 with its limit, as it applies to ordinary floor live load; heavy loads and "
+                + "garages (reduced by at most 20 %) and assembly uses (not reduced) follow their own rules in each column's "
+                + "record, so L reduced / L unreduced can differ from f.", ed.clause("reduction.eq"));
         rec.caution("Results must be checked by a licensed engineer; the adopted local code and its amendments govern.", Clause.NONE);
         return rec.build();
     }
