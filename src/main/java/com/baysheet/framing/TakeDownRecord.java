@@ -28,7 +28,7 @@ final class TakeDownRecord {
             rec.step("f" + at, lv + "reduction factor on ordinary floor live load", "f = max(0.25 + 15/√(K_LL·ΣA_T), limit)",
                     "see the column record " + w.member(), w.factor(), Quantity.RATIO, ed.clause("reduction.eq"));
             rec.step("P_D" + at, lv + "dead load", "Σ D", "level adds " + rec.show(w.deadAtLevel(), Quantity.FORCE), w.dead(), Quantity.FORCE,
-                    ed.clause("combo.lrfd"));
+                    Clause.NONE);
             rec.step("P_L" + at, lv + "floor live load, reduced (unreduced " + rec.show(w.liveUnreduced(), Quantity.FORCE) + ")", "Σ f_i L0 A_i",
                     "see the column record " + w.member(), w.liveReduced(), Quantity.FORCE, ed.clause("reduction.eq"));
             if (w.roofLive() > 0)
