@@ -8,7 +8,6 @@ import com.baysheet.framing.model.Level;
 import com.baysheet.framing.model.Side;
 
 import java.util.HashSet;
-import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
@@ -61,7 +60,4 @@ public final class ModelCheck {
             }
         }
     }
-
-    /** For messages. */
-    static String list(List<String> items) { return String.join(", ", items); }
 }

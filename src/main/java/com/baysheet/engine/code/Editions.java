@@ -1,6 +1,5 @@
 package com.baysheet.engine.code;
 
-import com.baysheet.engine.InputError;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
@@ -69,7 +68,4 @@ public final class Editions {
         n.fields().forEachRemaining(f -> m.put(f.getKey(), f.getValue().asDouble()));
         return m;
     }
-
-    /** Kept for callers that need the error without looking the edition up. */
-    public static InputError unknown(String id) { return Edition.unknown(id); }
 }

@@ -3,7 +3,6 @@ package com.baysheet.engine.member;
 import com.baysheet.engine.beam.BeamActions;
 import com.baysheet.engine.beam.BeamLoads;
 import com.baysheet.engine.beam.BeamSolver;
-import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.code.ReductionRule;
 import com.baysheet.engine.load.AreaShare;
@@ -16,8 +15,6 @@ import com.baysheet.engine.reduction.CalcContext;
 import com.baysheet.engine.reduction.LiveFactors;
 import com.baysheet.engine.reduction.ReductionMethods;
 import com.baysheet.engine.reduction.RoofLiveLoad;
-import com.baysheet.engine.units.Display;
-import com.baysheet.engine.units.Quantity;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -111,13 +108,5 @@ public final class MemberCalculation {
         return left ? total - right : right;
     }
 
-    static String fmt(double v) { return Display.sig3(v); }
-
     static BeamActions solve(Support s, BeamLoads l, double ei) { return BeamSolver.solve(s, l, ei); }
-
-    static Quantity q(String effect) {
-        return effect.startsWith("M") ? Quantity.MOMENT : Quantity.FORCE;
-    }
-
-    static Edition ed(CalcContext ctx) { return ctx.edition(); }
 }
