@@ -3,6 +3,7 @@ package com.baysheet.sheet;
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.load.DesignOptions;
 import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.reduction.RoofLiveLoad;
 import com.baysheet.engine.units.Display;
 import com.baysheet.engine.units.Quantity;
 import com.baysheet.framing.model.Bay;
@@ -49,7 +50,8 @@ final class Criteria {
             case HEAVY -> "by at most 20 % on two or more floors, " + ctx.edition().clause("reduction.heavy").ref();
             case GARAGE -> "as heavy live loads, " + ctx.edition().clause("reduction.garage").ref();
             case NOT_REDUCIBLE -> "not reduced, " + ctx.edition().clause("reduction.assembly").ref();
-            case ROOF -> "roof live load by R1 and R2, " + ctx.edition().clause("roof.reduction").ref();
+            case ROOF -> RoofLiveLoad.isOrdinary(ctx, o) ? "roof live load by R1 and R2, " + ctx.edition().clause("roof.reduction").ref()
+                    : "roof live load, not reduced (not an ordinary roof, " + ctx.edition().clause("roof.reduction").ref() + ")";
         };
     }
 }

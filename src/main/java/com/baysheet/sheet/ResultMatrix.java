@@ -13,8 +13,8 @@ import java.util.Map;
 
 /**
  * The results as an engineer tabulates them: one row per action (reactions, shear, moments, axial load),
- * one column per load case (dead, live unreduced and reduced, concentrated, design live, roof live,
- * factored, service). A result key reads "case.action" ("D.R1", "LRFD.M+"); the matrix only arranges the
+ * one column per load case (dead, live unreduced and reduced, concentrated, design live, roof live, roof
+ * concentrated, design roof live, factored, service). A result key reads "case.action" ("D.R1", "LRFD.M+"); the matrix only arranges the
  * record's shown values. Keys of another form are returned for a plain list.
  */
 final class ResultMatrix {
@@ -29,6 +29,9 @@ final class ResultMatrix {
         CASES.put("Ldes", "Design live");
         CASES.put("Lr0", "Roof live unreduced");
         CASES.put("Lr", "Roof live Lr");
+        CASES.put("Lrc", "Roof point Lrc");
+        CASES.put("Lrgov", "Roof live governing");
+        CASES.put("Lrdes", "Design roof live");
         CASES.put("LRFD", "Factored (LRFD)");
         CASES.put("ASD", "Service (ASD)");
         ACTIONS.put("R1", "Left reaction R1");

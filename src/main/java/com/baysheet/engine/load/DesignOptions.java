@@ -3,7 +3,8 @@ package com.baysheet.engine.load;
 /**
  * Project options that change the calculation.
  *
- * @param partitionAllowance add the partition allowance of ASCE 7-16 4.3.2 on floors with L0 below 80 psf
+ * @param partitionAllowance add the partition allowance of ASCE 7-16 4.3.2 on floors whose L0 the edition does not
+ *                           exempt (below 80 psf in 7-16; up to 80 psf in 7-10)
  * @param reducePartitions   reduce the partition allowance with the live load (disputed in practice; default no)
  */
 public record DesignOptions(boolean partitionAllowance, boolean reducePartitions) {

@@ -35,8 +35,9 @@ final class AxialActions {
                 rec.info("The reduced uniform live load governs the axial live load; the concentrated load is not added.", ed.clause("concentrated"));
             }
         }
-        var lrfd = LoadCombinations.govern(true, "P_u", "axial load", d, ldes, lr, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
-        var asd = LoadCombinations.govern(false, "P_a", "axial load", d, ldes, lr, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
+        double lrdes = roofConcentrated(ctx, book, roof0.total(), lr, rec);
+        var lrfd = LoadCombinations.govern(true, "P_u", "axial load", d, ldes, lrdes, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
+        var asd = LoadCombinations.govern(false, "P_a", "axial load", d, ldes, lrdes, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
         if (halfL && lrfd.combination().halfL()) rec.info("0.5 L used in " + lrfd.combination().name() + ".", ed.clause("combo.halfL"));
 
         rec.result("D.P", "Dead load P_D", d, Quantity.FORCE)
@@ -49,6 +50,24 @@ final class AxialActions {
            .result("LRFD.P", "Factored axial load P_u (" + lrfd.combination().name() + ")", lrfd.value(), Quantity.FORCE)
            .result("ASD.P", "Service axial load P_a (" + asd.combination().name() + ")", asd.value(), Quantity.FORCE)
            .governs("LRFD.P").governs("ASD.P");
+    }
+
+    /**
+     * ASCE 7-16 4.4 with the roof rows' concentrated load (Table 4.3-1, roofs subject to maintenance workers):
+     * the design roof live load is the larger of Lr and that load, never their sum. Returns the design roof live load.
+     */
+    private static double roofConcentrated(CalcContext ctx, LoadBook book, double lr0, double lr, RecordBuilder rec) {
+        Occupancy o = ConcentratedCheck.largest(ctx, book.roofAreas.keySet());
+        if (o == null || lr0 <= 0) return lr;
+        var ed = ctx.edition();
+        double p = rec.step("P_c,r", "Concentrated roof live load, " + o.name() + ", not reduced", "P_c,r",
+                rec.show(o.concentrated(ctx.system()), Quantity.FORCE), o.concentrated(ctx.system()), Quantity.FORCE, ed.clause("concentrated"));
+        rec.info(p > lr ? "The concentrated roof load governs the axial roof live load (used alone, never added to the uniform roof load)."
+                : "The uniform roof live load governs the axial roof live load; the concentrated roof load is not added.", ed.clause("concentrated"));
+        double design = Math.max(p, lr);
+        rec.result("Lrc.P", "Concentrated roof live load", p, Quantity.FORCE)
+           .result("Lrdes.P", "Design roof live load", design, Quantity.FORCE);
+        return design;
     }
 
     /** The largest concentrated load of the floor occupancies carried. */

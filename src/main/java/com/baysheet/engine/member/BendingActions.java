@@ -55,12 +55,13 @@ final class BendingActions {
             rec.info("Live load placed on the back span, on the overhang and on both; the worst of the three is used for each effect.",
                     ed.clause("reduction.basic"));
 
-        double[] design = concentrated(ctx, book, s, effects, l, rec);
+        double[] design = concentrated(ctx, book.floorAreas.keySet(), s, effects, l, ConcentratedCheck.FLOOR, rec);
+        double[] lrDesign = concentrated(ctx, book.roofAreas.keySet(), s, effects, lr, ConcentratedCheck.ROOF, rec);
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
-            var u = LoadCombinations.govern(true, "LRFD." + e.key, e.lower, d[i], design[i], lr[i], halfL, e.q(),
+            var u = LoadCombinations.govern(true, "LRFD." + e.key, e.lower, d[i], design[i], lrDesign[i], halfL, e.q(),
                     ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
-            var a = LoadCombinations.govern(false, "ASD." + e.key, e.lower, d[i], design[i], lr[i], halfL, e.q(),
+            var a = LoadCombinations.govern(false, "ASD." + e.key, e.lower, d[i], design[i], lrDesign[i], halfL, e.q(),
                     ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
             rec.result("Ldes." + e.key, e.title + ", design live load", design[i], e.q())
                .result("LRFD." + e.key, e.title + ", factored (" + u.combination().name() + ")", u.value(), e.q())
@@ -149,24 +150,19 @@ final class BendingActions {
     }
 
     /**
-     * ASCE 7-16 4.4: the largest concentrated load of the occupancies on the member, on its contact area,
-     * placed for each effect; compared with the reduced uniform live load, never added to it.
-     * Returns the design live effect for each effect.
+     * ASCE 7-16 4.4: the largest concentrated load of the occupancies {@code ids} (the floor's or the roof's), on
+     * its contact area, placed for each effect; compared with the uniform live load {@code l} of the same kind
+     * (reduced L, or Lr), never added to it. Returns the design live effect for each effect.
      */
-    private static double[] concentrated(CalcContext ctx, LoadBook book, Support s, List<Effect> effects, double[] l,
-                                         RecordBuilder rec) {
+    private static double[] concentrated(CalcContext ctx, java.util.Set<String> ids, Support s, List<Effect> effects, double[] l,
+                                         ConcentratedCheck.Keys k, RecordBuilder rec) {
         double[] design = l.clone();
-        Occupancy worst = null;
-        for (String id : book.floorAreas.keySet()) {
-            Occupancy o = ctx.catalogue().get(id);
-            if (o.concentrated(ctx.system()) > 0 && (worst == null || o.concentrated(ctx.system()) > worst.concentrated(ctx.system())))
-                worst = o;
-        }
+        Occupancy worst = ConcentratedCheck.largest(ctx, ids);
         if (worst == null) return design;
         Edition ed = ctx.edition();
         double p = worst.concentrated(ctx.system()), side = worst.contactSide(ctx.system());
-        rec.step("P_c", "Concentrated load, " + worst.name() + ", on a " + rec.show(side, Quantity.LENGTH) + " square, not reduced",
-                "P_c", rec.num(p, Quantity.FORCE), p, Quantity.FORCE, ed.clause("concentrated"));
+        rec.step(k.load(), "Concentrated load, " + worst.name() + ", on a " + rec.show(side, Quantity.LENGTH) + " square, not reduced",
+                k.load(), rec.num(p, Quantity.FORCE), p, Quantity.FORCE, ed.clause("concentrated"));
         rec.info("The full concentrated load is taken on this member (no spread to neighbouring members: common practice, conservative).",
                 ed.clause("concentrated"));
         for (int i = 0; i < effects.size(); i++) {
@@ -180,12 +176,14 @@ final class BendingActions {
             };
             ConcentratedCheck.Placement pl = ConcentratedCheck.place(s, p, side, ce);
             double v = e == Effect.MNEG ? Math.min(0, pl.effect()) : e == Effect.MPOS ? Math.max(0, pl.effect()) : Math.abs(pl.effect());
-            rec.step(e.key + ".Lc", e.title + ", concentrated load", "placed for the largest effect",
+            rec.step(e.key + "." + k.step(), e.title + ", " + k.concentrated(), "placed for the largest effect",
                     "centre at x = " + rec.show(pl.at(), Quantity.LENGTH), v, e.q(), ed.clause("concentrated"));
-            rec.result("Lc." + e.key, e.title + ", concentrated load", v, e.q());
+            rec.result(k.step() + "." + e.key, e.title + ", " + k.concentrated(), v, e.q());
             boolean conc = Math.abs(v) > Math.abs(l[i]);
             if (conc) design[i] = e == Effect.R1 || e == Effect.R2 ? Math.copySign(v, l[i] == 0 ? 1 : l[i]) : v;
-            rec.resultText("gov." + e.key, e.title + ": governing live load", conc ? "concentrated" : "uniform");
+            rec.resultText(k.governs() + "." + e.key, e.title + ": governing " + k.live(), conc ? "concentrated" : "uniform");
+            // the floor's design live load is recorded with the combinations, for every member
+            if (k == ConcentratedCheck.ROOF) rec.result(k.design() + "." + e.key, e.title + ", design " + k.live(), design[i], e.q());
         }
         return design;
     }

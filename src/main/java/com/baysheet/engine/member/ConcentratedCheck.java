@@ -3,12 +3,20 @@ package com.baysheet.engine.member;
 import com.baysheet.engine.beam.BeamActions;
 import com.baysheet.engine.beam.BeamLoads;
 import com.baysheet.engine.beam.BeamSolver;
+import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.load.Support;
+import com.baysheet.engine.reduction.CalcContext;
+
+import java.util.Collection;
 
 /**
  * Places a concentrated load, spread over its contact length, along a member for the largest effect
  * (ASCE 7-16 4.4). Where statics gives the worst position outright it is used (one solve); otherwise a
  * bounded scan of positions, then a golden-section refinement around the best one.
+ *
+ * <p>Floor and roof concentrated loads are checked apart: a floor occupancy's load against the reduced
+ * floor load L, a roof row's (Table 4.3-1, roofs subject to maintenance workers) against the roof live load Lr,
+ * each never added to the uniform load it is compared with, and each staying in its own load combination slot.
  */
 final class ConcentratedCheck {
     private ConcentratedCheck() {}
@@ -20,6 +28,23 @@ final class ConcentratedCheck {
     static final double POSITION_TOLERANCE = 1e-9;
 
     enum Effect { MAX_MOMENT, MIN_MOMENT, SHEAR, LEFT_REACTION, RIGHT_REACTION }
+
+    /** Record keys of one check: the floor check against L, or the roof check against Lr. */
+    record Keys(String load, String step, String governs, String design, String concentrated, String live) {}
+
+    static final Keys FLOOR = new Keys("P_c", "Lc", "gov", "Ldes", "concentrated load", "live load");
+    static final Keys ROOF = new Keys("P_c,r", "Lrc", "Lrgov", "Lrdes", "concentrated roof load", "roof live load");
+
+    /** The occupancy with the largest concentrated load among {@code ids}, or null where none has one. */
+    static Occupancy largest(CalcContext ctx, Collection<String> ids) {
+        Occupancy worst = null;
+        for (String id : ids) {
+            Occupancy o = ctx.catalogue().get(id);
+            if (o.concentrated(ctx.system()) > 0 && (worst == null || o.concentrated(ctx.system()) > worst.concentrated(ctx.system())))
+                worst = o;
+        }
+        return worst;
+    }
 
     /** The largest effect (signed for moments) and the centre position of the load that gives it. */
     record Placement(double effect, double at) {}

@@ -9,6 +9,7 @@ import com.baysheet.engine.load.LiveShare;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.PointLoad;
 import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.reduction.PartitionAllowance;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -92,7 +93,7 @@ final class LoadBook {
     }
 
     private boolean partitioned(Occupancy o) {
-        return ctx.options().partitionAllowance() && !o.isRoof() && o.uniform(ctx.system()) < ctx.constant("partition.exempt");
+        return ctx.options().partitionAllowance() && !o.isRoof() && !PartitionAllowance.waived(ctx, o);
     }
 
     private double partition() { return ctx.constant("partition"); }

@@ -64,8 +64,14 @@ public final class MemberCalculation {
             f.putAll(lf.bySource());
         }
         if (!book.roofAreas.isEmpty()) {
+            // A_T of 4.8.2 is the ordinary roof area: other roof rows are not reduced and must not lower R1
+            // (as the reducible area of mixed floors, common practice)
             double area = 0;
-            for (double a : book.roofAreas.values()) area += a;
+            for (var e : book.roofAreas.entrySet())
+                if (RoofLiveLoad.isOrdinary(ctx, ctx.catalogue().get(e.getKey()))) area += e.getValue();
+            if (area > 0 && book.roofAreas.size() > 1 && area < book.roofAreas.values().stream().mapToDouble(Double::doubleValue).sum())
+                rec.info("Mixed roof: R1 comes from the ordinary roof area only; the other roof loads are added unreduced "
+                        + "(common practice, no code clause).", ctx.edition().clause("roof.reduction"));
             for (String id : book.roofAreas.keySet()) {
                 Occupancy o = ctx.catalogue().get(id);
                 f.put(id, RoofLiveLoad.factor(ctx, o, area, in.roofSlope(), rec));

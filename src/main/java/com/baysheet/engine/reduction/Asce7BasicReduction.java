@@ -128,9 +128,9 @@ final class Asce7BasicReduction implements FloorReductionMethod {
         if (!ctx.options().partitionAllowance()) return;
         Edition ed = ctx.edition();
         double exempt = ctx.constant("partition.exempt");
-        if (o.uniform(ctx.system()) >= exempt) {
-            rec.info("No partition allowance on " + o.name() + ": L0 is at least " + rec.show(exempt, Quantity.PRESSURE) + ".",
-                    ed.clause("partitions"));
+        if (PartitionAllowance.waived(ctx, o)) { // at or over the threshold, by edition
+            rec.info("No partition allowance on " + o.name() + ": L0 is " + PartitionAllowance.wording(ctx) + " "
+                    + rec.show(exempt, Quantity.PRESSURE) + ".", ed.clause("partitions"));
             return;
         }
         boolean reduce = ctx.options().reducePartitions();

@@ -11,9 +11,20 @@ import com.baysheet.engine.units.UnitSystem;
 /**
  * Roof live load of ASCE 7-16 4.8.2, Eq. 4.8-1: Lr = L0 R1 R2 within its bounds, R1 from the tributary area,
  * R2 from the slope. Kept apart from the floor reduction (it is Lr in the load combinations).
+ *
+ * <p>4.8.2 and its bounds cover the ordinary flat, pitched and curved roof only, whose L0 (20 psf, 0.96 kN/m²)
+ * is the edition constant {@code roof.ordinary}. A roof row with another L0 (a firm's 30 psf roof, say) is
+ * "ordinary" by its value, not by a flag, so that an existing firm row needs no new field and a 30 psf row
+ * can never be reduced or capped at 20 psf: it keeps L0, with a note.
  */
 public final class RoofLiveLoad {
     private RoofLiveLoad() {}
+
+    /**
+     * Relative tolerance on L0 when telling the ordinary roof: the code's SI value 0.96 kN/m² is 20.05 psf, and
+     * 20 psf is 0.9576 kN/m², so a firm row entered in either system stays ordinary in both (0.25 % apart).
+     */
+    public static final double ORDINARY_TOLERANCE = 0.005;
 
     /** Largest slope accepted: 24 in/ft (about 63°) or 200 %. */
     public static final double MAX_SLOPE_US = 24, MAX_SLOPE_SI = 200;
@@ -25,6 +36,7 @@ public final class RoofLiveLoad {
      */
     public static double factor(CalcContext ctx, Occupancy roof, double area, double slope, RecordBuilder rec) {
         Edition ed = ctx.edition();
+        if (!isOrdinary(ctx, roof)) return unreduced(ctx, roof, rec);
         if (Double.isNaN(slope)) throw new InputError("roofSlope", "nothing", "is required where a roof live load acts");
         double max = ctx.system() == UnitSystem.US ? MAX_SLOPE_US : MAX_SLOPE_SI;
         if (!Double.isFinite(slope) || slope < 0 || slope > max)
@@ -64,9 +76,28 @@ public final class RoofLiveLoad {
                 rec.num(l0, Quantity.PRESSURE) + " × " + rec.fmt(r1) + " × " + rec.fmt(r2), lr, Quantity.PRESSURE,
                 ed.clause("roof.reduction"));
         if (raw < lo) rec.info("Lower bound governs: Lr not less than " + rec.show(lo, Quantity.PRESSURE) + ".", ed.clause("roof.reduction"));
-        if (l0 < lo || l0 > hi)
-            rec.caution(roof.name() + ": L0 of " + rec.show(l0, Quantity.PRESSURE) + " lies outside the bounds of 4.8.2; check the roof rule.",
-                    ed.clause("roof.reduction"));
         return lr / l0;
+    }
+
+    /** A roof row (rule ROOF) is the ordinary roof of 4.8.2 where its L0 is the edition's ordinary roof load. */
+    public static boolean isOrdinary(CalcContext ctx, Occupancy o) {
+        double ordinary = ctx.constant("roof.ordinary");
+        return o.isRoof() && Math.abs(o.uniform(ctx.system()) - ordinary) <= ORDINARY_TOLERANCE * ordinary;
+    }
+
+    /** Any other roof row: no R1, R2 or bounds; Lr = L0. Below the ordinary roof load the firm must confirm its row. */
+    private static double unreduced(CalcContext ctx, Occupancy roof, RecordBuilder rec) {
+        Edition ed = ctx.edition();
+        double l0 = roof.uniform(ctx.system()), ordinary = ctx.constant("roof.ordinary");
+        rec.step("Lr[" + roof.id() + "]", "Roof live load, " + roof.name() + ", not reduced", "Lr = L0",
+                rec.num(l0, Quantity.PRESSURE), l0, Quantity.PRESSURE, ed.clause("loads.table"));
+        rec.info(roof.name() + ": not reduced and not bounded; R1, R2 and the bounds of " + ed.clause("roof.reduction").label()
+                + " apply to ordinary flat, pitched and curved roofs (L0 = " + rec.show(ordinary, Quantity.PRESSURE) + ") only.",
+                ed.clause("roof.reduction"));
+        if (l0 < ordinary * (1 - ORDINARY_TOLERANCE))
+            rec.caution(roof.name() + ": L0 of " + rec.show(l0, Quantity.PRESSURE) + " is below the ordinary roof live load of "
+                    + rec.show(ordinary, Quantity.PRESSURE) + " (" + ed.clause("loads.table").label() + "); confirm the row against the adopted code.",
+                    ed.clause("loads.table"));
+        return 1;
     }
 }

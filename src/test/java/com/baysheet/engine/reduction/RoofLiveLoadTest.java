@@ -85,6 +85,29 @@ class RoofLiveLoadTest {
     }
 
     @Test
+    void roofRowOtherThanTheOrdinaryTwentyPsfIsNeitherReducedNorBounded() {
+        // 4.8.2 covers ordinary flat, pitched and curved roofs (L0 = 20 psf, Table 4.3-1) only: a 30 psf row keeps L0
+        Occupancy firm = OccupancyCatalogue.custom("roof-30", "Firm roof", com.baysheet.engine.units.UnitSystem.US, 30, 0, 30,
+                com.baysheet.engine.code.ReductionRule.ROOF, false);
+        RecordBuilder rec = new RecordBuilder("R", "ASCE 7-16", com.baysheet.engine.units.UnitSystem.US);
+        assertThat(RoofLiveLoad.factor(Fixtures.US, firm, 600, 12, rec)).isEqualTo(1);
+        assertThat(RoofLiveLoad.isOrdinary(Fixtures.US, firm)).isFalse();
+        assertThat(RoofLiveLoad.isOrdinary(Fixtures.US, ROOF)).isTrue();
+        assertThat(RoofLiveLoad.isOrdinary(Fixtures.SI, ROOF)).isTrue();
+        assertThat(Fixtures.step(rec.build(), "Lr[roof-30]")).isEqualTo(30);
+    }
+
+    @Test
+    void roofRowBelowTheOrdinaryLoadCarriesACaution() {
+        Occupancy low = OccupancyCatalogue.custom("roof-10", "Firm canopy", com.baysheet.engine.units.UnitSystem.US, 10, 0, 30,
+                com.baysheet.engine.code.ReductionRule.ROOF, false);
+        RecordBuilder rec = new RecordBuilder("R", "ASCE 7-16", com.baysheet.engine.units.UnitSystem.US);
+        assertThat(RoofLiveLoad.factor(Fixtures.US, low, 100, Double.NaN, rec)).isEqualTo(1);
+        assertThat(rec.build().notes()).anyMatch(n -> n.level() == com.baysheet.engine.record.Note.Level.CAUTION
+                && n.text().contains("below"));
+    }
+
+    @Test
     void missingSlopeIsRefusedWhereARoofLoadActs() {
         assertThatThrownBy(() -> factor(Fixtures.US, 300, Double.NaN)).isInstanceOf(InputError.class)
                 .hasMessageContaining("roofSlope").hasMessageContaining("required");
