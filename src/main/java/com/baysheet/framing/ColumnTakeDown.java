@@ -55,7 +55,7 @@ final class ColumnTakeDown {
             MemberInput in = new MemberInput(name + " (" + cls.label() + ")", kind, new Support.Axial(), Math.max(1, floors), List.of(),
                     List.of(), List.of(total.asPointLoad()), 0, slope, Double.NaN, false);
             MemberResult res = cache.calculate(in);
-            String id = p.id + "-c" + i + "x" + j;
+            String id = p.id + "-c" + p.at(i, j);
             out.add(new DerivedMember(id, name, p.level.name(), MemberRole.COLUMN, kind,
                     new PlanLine(p.x(i), p.y(j), p.x(i), p.y(j)), 0, 0, here.areas, 0, bays(p, i, j), outline(p, i, j), res));
             rows.add(row(p, id, res, areaHere, floorArea, kind, floors, here.dead));
@@ -63,7 +63,7 @@ final class ColumnTakeDown {
         }
         if (rows.isEmpty()) return null;
         CalcContext c = ctx; // the writer keeps only what it needs, not this take-down's working state
-        return new TakeDown("c" + i + "x" + j, point, rows,
+        return new TakeDown("c" + plans.get(0).at(i, j), point, rows,
                 () -> TakeDownRecord.write(c, "Column " + point + " take-down", rows, records));
     }
 

@@ -27,7 +27,7 @@ public final class Derivation {
         MemberCache cache = new MemberCache(b.context());
         for (int k : order) {
             Level l = b.levels().get(k);
-            LevelPlan plan = new LevelPlan("L" + k, l, b.grid());
+            LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid());
             LevelFraming f = new LevelFraming(cache, plan).derive();
             plans.add(plan);
             framings.add(f);

@@ -12,7 +12,10 @@ import java.util.Map;
  *
  * @param span           ft or m (0 for a column)
  * @param tributaryWidth ft or m (0 for girders and columns)
- * @param id             opaque and URL-safe ([A-Za-z0-9-]), stable while the model's levels and grid keep their order
+ * @param id             opaque and URL-safe ([A-Za-z0-9-]): the level's key, then the kind and the stable ids of the
+ *                       grid lines it starts from ("L12-c3x7" a column at x line 3 / y line 7, "-h"/"-v" a grid-line
+ *                       member along x/y, "-bay3x7-b1" the first infill beam of the bay whose south-west corner is
+ *                       there), so that inserting or removing a line elsewhere never changes it
  * @param areas          tributary area by occupancy id at this level (for a girder, including the areas its beams
  *                       deliver), ft² or m²
  * @param directArea     floor area that loads this member directly (slab strips), ft² or m²; 0 for columns

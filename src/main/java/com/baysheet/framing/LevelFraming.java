@@ -70,7 +70,7 @@ final class LevelFraming {
             double t = k * s;
             PlanLine line = beamsAlongX ? new PlanLine(x0, y0 + t, x1, y0 + t) : new PlanLine(x0 + t, y0, x0 + t, y1);
             PlanRect trib = beamsAlongX ? new PlanRect(x0, y0 + t - s / 2, x1, y0 + t + s / 2) : new PlanRect(x0 + t - s / 2, y0, x0 + t + s / 2, y1);
-            String id = plan.id + "-bay" + c + "x" + r + "-b" + k;
+            String id = plan.id + "-bay" + plan.at(c, r) + "-b" + k;
             String title = "Beam " + name + " #" + k;
             MemberResult res = calc(title, MemberKind.INTERIOR_BEAM, beamLength, List.of(new AreaStrip(b.occupancy(), s, 0, beamLength, b.deadLoad())));
             members.add(new DerivedMember(id, title, plan.level.name(), MemberRole.INFILL_BEAM, MemberKind.INTERIOR_BEAM, line,
@@ -107,7 +107,7 @@ final class LevelFraming {
         String between = s.alongX ? plan.grid.x().name(i) + "-" + plan.grid.x().name(i + 1)
                 : plan.grid.y().name(j) + "-" + plan.grid.y().name(j + 1);
         String title = (girder ? "Girder " : "Beam ") + line + "/" + between;
-        String id = plan.id + (s.alongX ? "-h" : "-v") + i + "x" + j;
+        String id = plan.id + (s.alongX ? "-h" : "-v") + plan.at(i, j);
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(s.length), 1, s.strips,
                 List.of(), s.points, 0, roofSlope(), Double.NaN, plan.level.roof());
         MemberResult res = cache.calculate(in);

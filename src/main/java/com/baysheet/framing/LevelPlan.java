@@ -39,6 +39,9 @@ final class LevelPlan {
         };
     }
 
+    /** "3x7": the stable ids of x line i and y line j, as member ids name a grid point or a bay's corner. */
+    String at(int i, int j) { return grid.x().id(i) + "x" + grid.y().id(j); }
+
     double x(int line) { return xs[line]; }
 
     double y(int line) { return ys[line]; }

@@ -12,6 +12,7 @@ import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -31,18 +32,18 @@ public final class BayStore {
     public List<Bay> findByLevel(long projectId, long levelId) {
         return writes.sql().tx(c -> {
             LevelStore.find(c, projectId, levelId);
-            return findByLevel(c, levelId);
+            return findByLevel(c, levelId, GridStore.find(c, projectId));
         });
     }
 
     /** Gives every selected cell the assignment's bay, replacing what was there. */
     public void assign(long projectId, long version, long levelId, BayAssignment a) {
         writes.change(projectId, version, c -> {
-            requireCells(c, projectId, levelId, a.cells());
+            Grid g = requireCells(c, projectId, levelId, a.cells());
             if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
                 throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
-            delete(c, levelId, a.cells());
-            insert(c, levelId, a);
+            delete(c, levelId, a.cells(), g);
+            insert(c, levelId, a, g);
             return null;
         });
     }
@@ -50,53 +51,58 @@ public final class BayStore {
     /** Leaves the selected cells unframed at this level (no bay at all, unlike an opening). */
     public void clear(long projectId, long version, long levelId, List<Cell> cells) {
         writes.change(projectId, version, c -> {
-            requireCells(c, projectId, levelId, cells);
-            delete(c, levelId, cells);
+            delete(c, levelId, cells, requireCells(c, projectId, levelId, cells));
             return null;
         });
     }
 
-    static List<Bay> findByLevel(Connection c, long levelId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT * FROM bay WHERE level_id = ? ORDER BY row_index, col_index")) {
+    /**
+     * A level's bays with their cell indices in this grid (south row first); rows are keyed by the ids of the
+     * lines at the bay's south-west corner.
+     */
+    static List<Bay> findByLevel(Connection c, long levelId, Grid g) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT * FROM bay WHERE level_id = ?")) {
             ps.setLong(1, levelId);
             List<Bay> out = new ArrayList<>();
             try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) out.add(read(rs));
+                while (rs.next()) out.add(read(rs, g));
             }
+            out.sort(Comparator.comparingInt(Bay::row).thenComparingInt(Bay::col));
             return out;
         }
     }
 
-    private static void requireCells(Connection c, long projectId, long levelId, List<Cell> cells) throws SQLException {
+    private static Grid requireCells(Connection c, long projectId, long levelId, List<Cell> cells) throws SQLException {
         LevelStore.find(c, projectId, levelId);
         if (cells.isEmpty()) throw new InputError("cells", "none", "select at least one bay");
         Grid g = GridStore.find(c, projectId);
         for (Cell cell : cells)
             if (cell.col() >= g.x().cells() || cell.row() >= g.y().cells())
                 throw new InputError("cells", cell.key(), "is outside the grid (" + g.x().cells() + " × " + g.y().cells() + " bays)");
+        return g;
     }
 
-    private static void delete(Connection c, long levelId, List<Cell> cells) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("DELETE FROM bay WHERE level_id = ? AND col_index = ? AND row_index = ?")) {
+    private static void delete(Connection c, long levelId, List<Cell> cells, Grid g) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("DELETE FROM bay WHERE level_id = ? AND x_line = ? AND y_line = ?")) {
             for (Cell cell : cells) {
                 ps.setLong(1, levelId);
-                ps.setInt(2, cell.col());
-                ps.setInt(3, cell.row());
+                ps.setInt(2, g.x().id(cell.col()));
+                ps.setInt(3, g.y().id(cell.row()));
                 ps.addBatch();
             }
             ps.executeBatch();
         }
     }
 
-    private static void insert(Connection c, long levelId, BayAssignment a) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("INSERT INTO bay (level_id, col_index, row_index, is_opening, "
+    private static void insert(Connection c, long levelId, BayAssignment a, Grid g) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO bay (level_id, x_line, y_line, is_opening, "
                 + "occupancy, dead_load, beam_direction, infill_beams, cantilever_north, cantilever_south, "
                 + "cantilever_east, cantilever_west) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
             for (Cell cell : a.cells()) {
                 Bay b = a.bayAt(cell);
                 ps.setLong(1, levelId);
-                ps.setInt(2, b.col());
-                ps.setInt(3, b.row());
+                ps.setInt(2, g.x().id(b.col()));
+                ps.setInt(3, g.y().id(b.row()));
                 ps.setBoolean(4, b.opening());
                 ps.setString(5, b.occupancy());
                 Sql.setDouble(ps, 6, b.opening() ? null : b.deadLoad());
@@ -110,9 +116,12 @@ public final class BayStore {
         }
     }
 
-    private static Bay read(ResultSet rs) throws SQLException {
-        int col = rs.getInt("col_index");
-        int row = rs.getInt("row_index");
+    private static Bay read(ResultSet rs, Grid g) throws SQLException {
+        int col = g.x().indexOf(rs.getInt("x_line"));
+        int row = g.y().indexOf(rs.getInt("y_line"));
+        // the grid store splits and merges bays with their lines, so this is a fault of ours, not the user's
+        if (col < 0 || row < 0 || col >= g.x().cells() || row >= g.y().cells())
+            throw new IllegalStateException("bay at grid line ids " + rs.getInt("x_line") + "x" + rs.getInt("y_line") + " lies outside the grid");
         if (rs.getBoolean("is_opening")) return Bay.opening(col, row);
         Map<Side, Double> cantilevers = new EnumMap<>(Side.class);
         for (Side s : SIDES) {

@@ -4,6 +4,7 @@ import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.reduction.CalcContext;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Building;
+import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.Level;
 
 import java.sql.Connection;
@@ -11,7 +12,10 @@ import java.sql.SQLException;
 import java.util.ArrayList;
 import java.util.List;
 
-/** Builds a project's {@link Building} from the store: context, grid and the levels that have a floor. */
+/**
+ * Builds a project's {@link Building} from the store: context, grid (with its stable line ids) and the levels
+ * that have a floor, each keyed "L" + its row id, so member ids follow the level and the lines, not their places.
+ */
 final class BuildingMapper {
     private BuildingMapper() {}
 
@@ -22,12 +26,13 @@ final class BuildingMapper {
         List<StoredLevel> stored = LevelStore.findByProject(c, projectId);
         List<Level> levels = new ArrayList<>();
         List<String> unframed = new ArrayList<>();
+        Grid grid = GridStore.find(c, projectId);
         for (StoredLevel s : stored) {
-            List<Bay> bays = BayStore.findByLevel(c, s.id());
+            List<Bay> bays = BayStore.findByLevel(c, s.id(), grid);
             if (bays.stream().allMatch(Bay::opening)) unframed.add(s.name());
-            else levels.add(level(s.info(), bays));
+            else levels.add(level(s.info(), bays).withKey("L" + s.id()));
         }
-        Building b = new Building(p.info().name(), ctx, GridStore.find(c, projectId), levels);
+        Building b = new Building(p.info().name(), ctx, grid, levels);
         return new Model(p, OccupancyStore.catalogueVersion(c), b, stored, unframed);
     }
 

@@ -10,7 +10,11 @@ import java.sql.SQLException;
 import java.util.ArrayList;
 import java.util.List;
 
-/** A project's grid: named lines along x and along y with the spacing from each to the next. */
+/**
+ * A project's grid: named lines along x and along y with the spacing from each to the next. Every line has
+ * a stable id (never reused within the project: the project row counts them out); bays and member ids
+ * follow the ids, names are labels.
+ */
 public final class GridStore {
     private final ModelWrites writes;
 
@@ -25,25 +29,36 @@ public final class GridStore {
         });
     }
 
-    /** Replaces the grid; refused when bays of some level would fall outside it. */
+    /**
+     * Replaces the grid, keeping each line's id where {@link LineMatch} finds the line again: bays split at an
+     * inserted line and merge at a removed one ({@link BayRegrid}), or the change is refused naming the bays.
+     */
     public void save(long projectId, long version, Grid grid) {
         writes.change(projectId, version, c -> {
-            write(c, projectId, grid);
+            Grid before = find(c, projectId);
+            Grid after = withIds(c, projectId, grid, LineMatch.ids(before.x(), grid.x()), LineMatch.ids(before.y(), grid.y()));
+            BayRegrid.apply(c, projectId, before, after);
+            write(c, projectId, after);
             return null;
         });
+    }
+
+    /** A new project's first grid: every line gets a fresh id. */
+    static void create(Connection c, long projectId, Grid grid) throws SQLException {
+        write(c, projectId, withIds(c, projectId, grid, fresh(grid.x()), fresh(grid.y())));
     }
 
     static Grid find(Connection c, long projectId) throws SQLException {
         return new Grid(axis(c, projectId, "x"), axis(c, projectId, "y"));
     }
 
-    static void write(Connection c, long projectId, Grid grid) throws SQLException {
+    private static void write(Connection c, long projectId, Grid grid) throws SQLException {
         try (PreparedStatement del = c.prepareStatement("DELETE FROM grid_line WHERE project_id = ?")) {
             del.setLong(1, projectId);
             del.executeUpdate();
         }
         try (PreparedStatement ps = c.prepareStatement(
-                "INSERT INTO grid_line (project_id, axis, seq, name, spacing_after) VALUES (?, ?, ?, ?, ?)")) {
+                "INSERT INTO grid_line (project_id, axis, seq, name, spacing_after, line_id) VALUES (?, ?, ?, ?, ?, ?)")) {
             for (GridAxis a : List.of(grid.x(), grid.y())) {
                 for (int i = 0; i < a.lines(); i++) {
                     ps.setLong(1, projectId);
@@ -51,6 +66,7 @@ public final class GridStore {
                     ps.setInt(3, i);
                     ps.setString(4, a.name(i));
                     Sql.setDouble(ps, 5, i < a.cells() ? a.spacing(i) : null);
+                    ps.setInt(6, a.id(i));
                     ps.addBatch();
                 }
             }
@@ -58,11 +74,42 @@ public final class GridStore {
         }
     }
 
+    /** The grid with these ids, where {@link LineMatch#NEW} takes the project's next unused id. */
+    private static Grid withIds(Connection c, long projectId, Grid g, List<Integer> xs, List<Integer> ys) throws SQLException {
+        int next = nextLineId(c, projectId);
+        List<Integer> x = new ArrayList<>(), y = new ArrayList<>();
+        for (int id : xs) x.add(id == LineMatch.NEW ? next++ : id);
+        for (int id : ys) y.add(id == LineMatch.NEW ? next++ : id);
+        try (PreparedStatement ps = c.prepareStatement("UPDATE project SET next_line_id = ? WHERE id = ?")) {
+            ps.setInt(1, next);
+            ps.setLong(2, projectId);
+            ps.executeUpdate();
+        }
+        return new Grid(g.x().withIds(x), g.y().withIds(y));
+    }
+
+    private static int nextLineId(Connection c, long projectId) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT next_line_id FROM project WHERE id = ?")) {
+            ps.setLong(1, projectId);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (!rs.next()) throw new NotFound("project", projectId);
+                return rs.getInt(1);
+            }
+        }
+    }
+
+    private static List<Integer> fresh(GridAxis a) {
+        List<Integer> out = new ArrayList<>();
+        for (int i = 0; i < a.lines(); i++) out.add(LineMatch.NEW);
+        return out;
+    }
+
     private static GridAxis axis(Connection c, long projectId, String axis) throws SQLException {
         List<String> names = new ArrayList<>();
         List<Double> spacings = new ArrayList<>();
+        List<Integer> ids = new ArrayList<>();
         try (PreparedStatement ps = c.prepareStatement(
-                "SELECT name, spacing_after FROM grid_line WHERE project_id = ? AND axis = ? ORDER BY seq")) {
+                "SELECT name, spacing_after, line_id FROM grid_line WHERE project_id = ? AND axis = ? ORDER BY seq")) {
             ps.setLong(1, projectId);
             ps.setString(2, axis);
             try (ResultSet rs = ps.executeQuery()) {
@@ -70,9 +117,10 @@ public final class GridStore {
                     names.add(rs.getString(1));
                     double s = Sql.getDouble(rs, "spacing_after");
                     if (!Double.isNaN(s)) spacings.add(s);
+                    ids.add(rs.getInt(3));
                 }
             }
         }
-        return new GridAxis(axis, names, spacings);
+        return new GridAxis(axis, names, spacings, ids);
     }
 }

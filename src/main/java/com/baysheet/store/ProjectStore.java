@@ -58,7 +58,7 @@ public final class ProjectStore {
                     id = keys.getLong(1);
                 }
             }
-            GridStore.write(c, id, startingGrid(info.units()));
+            GridStore.create(c, id, startingGrid(info.units()));
             return find(c, id);
         });
     }

@@ -211,4 +211,98 @@ abstract class StoreContract {
         assertThat(Demo.loadIfEmpty(store)).isEmpty();
         assertThat(store.projects().findAll()).hasSize(2);
     }
+
+    // Grid lines keep stable ids: bays and member ids follow the lines, not their positions.
+
+    private static Grid grid(String xNames, List<Double> xSpacings) {
+        return new Grid(new GridAxis("x", List.of(xNames.split(" ")), xSpacings), new GridAxis("y", List.of("A", "B", "C"), List.of(30.0, 30.0)));
+    }
+
+    private Map<String, String> records(Project p) {
+        Map<String, String> out = new java.util.TreeMap<>();
+        for (var m : store.results().of(p.id()).derived().members())
+            out.put(m.id(), com.baysheet.engine.record.RecordJson.write(m.result().record()));
+        return out;
+    }
+
+    /** Level 2: office 1-2 (cantilever south), office 2-3 (cantilevers south and east), both in row A-B. */
+    private Project twoOfficeBays() {
+        Project p = projectWithLevel();
+        store.bays().assign(p.id(), p.version(), level(p), new BayAssignment(List.of(new Cell(0, 0), new Cell(1, 0)), false,
+                "office", 60, new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 4.0)));
+        store.bays().assign(p.id(), p.version() + 1, level(p), new BayAssignment(List.of(new Cell(1, 0)), false,
+                "office", 60, new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 4.0, Side.EAST, 3.0)));
+        return store.projects().find(p.id());
+    }
+
+    @Test
+    void insertingALineSplitsTheBaysItCrossesAndLeavesEveryOtherMemberAsItWas() {
+        Project p = twoOfficeBays();
+        Map<String, String> before = records(p);
+        var untouched = store.results().of(p.id()).derived().members().stream()
+                .filter(m -> !m.bays().contains("A-B/2-3")).map(m -> m.id()).toList();
+        store.grids().save(p.id(), p.version(), grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
+        List<Bay> bays = store.bays().findByLevel(p.id(), level(p));
+        assertThat(bays).extracting(Bay::col).containsExactly(0, 1, 2);
+        assertThat(bays).allSatisfy(b -> assertThat(b.occupancy()).isEqualTo("office"));
+        // the half 2-2A faces 2A-3 to the east now: its east cantilever went to the half still at the edge
+        assertThat(bays.get(1).cantilevers()).isEqualTo(Map.of(Side.SOUTH, 4.0));
+        assertThat(bays.get(2).cantilevers()).isEqualTo(Map.of(Side.SOUTH, 4.0, Side.EAST, 3.0));
+        Map<String, String> after = records(p);
+        assertThat(untouched).isNotEmpty();
+        for (String id : untouched) assertThat(after.get(id)).as(id).isEqualTo(before.get(id));
+        assertThat(after.keySet()).containsAll(before.keySet());
+    }
+
+    @Test
+    void removingTheInsertedLineMergesTheHalvesBackAndEverythingIsAsBefore() {
+        Project p = twoOfficeBays();
+        List<Bay> bays = store.bays().findByLevel(p.id(), level(p));
+        Map<String, String> before = records(p);
+        store.grids().save(p.id(), p.version(), grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
+        store.grids().save(p.id(), p.version() + 1, grid("1 2 3", List.of(30.0, 30.0)));
+        assertThat(store.bays().findByLevel(p.id(), level(p))).isEqualTo(bays);
+        assertThat(records(p)).isEqualTo(before);
+    }
+
+    @Test
+    void aLineInsertedAgainIsANewLineWhoseMembersAreNew() {
+        Project p = twoOfficeBays();
+        store.grids().save(p.id(), p.version(), grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
+        int first = store.grids().find(p.id()).x().id(2);
+        store.grids().save(p.id(), p.version() + 1, grid("1 2 3", List.of(30.0, 30.0)));
+        store.grids().save(p.id(), p.version() + 2, grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
+        int second = store.grids().find(p.id()).x().id(2);
+        assertThat(second).isNotEqualTo(first);
+        assertThat(store.results().of(p.id()).derived().members()).extracting(m -> m.id())
+                .noneMatch(id -> id.matches("L\\d+-[chv]" + first + "x\\d+") || id.matches("L\\d+-bay" + first + "x\\d+-b\\d+"));
+    }
+
+    @Test
+    void renamingLinesKeepsEveryMemberId() {
+        Project p = twoOfficeBays();
+        Map<String, String> before = records(p);
+        store.grids().save(p.id(), p.version(), grid("4 5 6", List.of(30.0, 30.0)));
+        assertThat(records(p).keySet()).isEqualTo(before.keySet());
+        assertThat(store.results().of(p.id()).derived().members()).anySatisfy(m -> assertThat(m.name()).contains("4-5"));
+    }
+
+    @Test
+    void removingALineBetweenBaysThatDifferIsRefusedNamingThemByGridLines() {
+        Project p = twoOfficeBays();
+        store.bays().assign(p.id(), p.version(), level(p), new BayAssignment(List.of(new Cell(1, 0)), false,
+                "office", 80, new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 4.0)));
+        long v = p.version() + 1;
+        List<Bay> bays = store.bays().findByLevel(p.id(), level(p));
+        assertThatThrownBy(() -> store.grids().save(p.id(), v, grid("1 3", List.of(60.0))))
+                .isInstanceOfSatisfying(InputError.class, e -> {
+                    assertThat(e.field()).isEqualTo("grid.x.names");
+                    assertThat(e.problem()).contains("grid line 2", "on Level 2 A-B/1-2 and A-B/2-3", "dead load 60 / 80")
+                            .doesNotContain("[");
+                });
+        assertThatThrownBy(() -> store.grids().save(p.id(), v, grid("1 2", List.of(30.0))))
+                .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.problem()).contains("grid line 3", "edge", "A-B/2-3"));
+        assertThat(store.bays().findByLevel(p.id(), level(p))).isEqualTo(bays);
+        assertThat(store.projects().find(p.id()).version()).isEqualTo(v);
+    }
 }

@@ -1,20 +1,33 @@
 package com.baysheet.framing.model;
 
 import com.baysheet.engine.Check;
+import com.baysheet.engine.InputError;
 
 import java.util.List;
 
 /**
  * A level of the building: name, elevation (ft or m), whether it is a roof, the roof slope for Lr
  * (in/ft or percent; NaN for a floor), and its bays. Grid cells without a bay are not framed at this level.
+ *
+ * @param key the level's stable key in member ids (the store gives "L" and the level's row id; null: the
+ *            derivation numbers the level by its place in the building, "L0", "L1", ...). URL-safe.
  */
-public record Level(String name, double elevation, boolean roof, double roofSlope, List<Bay> bays) {
+public record Level(String name, double elevation, boolean roof, double roofSlope, List<Bay> bays, String key) {
+    public Level(String name, double elevation, boolean roof, double roofSlope, List<Bay> bays) {
+        this(name, elevation, roof, roofSlope, bays, null);
+    }
+
     public Level {
+        if (key != null && !key.matches("[A-Za-z0-9]+")) throw new InputError("level.key", key, "must be letters and digits");
         Check.text("level.name", name);
         Check.finite("level.elevation", elevation);
         // the field names the level, so that a form or the API can show the error beside it
         if (roof) Check.nonNegative("levels[" + name + "].roofSlope", roofSlope);
         bays = List.copyOf(bays);
+    }
+
+    public Level withKey(String levelKey) {
+        return new Level(name, elevation, roof, roofSlope, bays, levelKey);
     }
 
     public static Level floor(String name, double elevation, List<Bay> bays) {
