@@ -32,14 +32,14 @@ public final class PackageManifest {
         List<Entry> results = new ArrayList<>();
         for (DerivedMember m : members) {
             CalcRecord r = m.result().record();
-            inputs.add(new Entry(m.id(), label(scope, m), 0, "", CalcFingerprint.of(r)));
+            inputs.add(Entry.unitless(m.id(), label(scope, m), 0, CalcFingerprint.of(r)));
             for (String key : r.governing()) {
                 Entry e = r.entry(key);
-                results.add(new Entry(m.id() + "." + key, label(scope, m) + ": " + e.label(), e.value(), e.unit(), e.shown()));
+                results.add(new Entry(m.id() + "." + key, label(scope, m) + ": " + e.label(), e.value(), e.unit(), e.shown(), e.shownUnit()));
             }
         }
         for (TakeDown t : scope.takeDowns(d))
-            inputs.add(new Entry(TAKE_DOWN_PREFIX + t.id(), "Column take-down " + t.gridPoint(), 0, "", CalcFingerprint.of(t.record())));
+            inputs.add(Entry.unitless(TAKE_DOWN_PREFIX + t.id(), "Column take-down " + t.gridPoint(), 0, CalcFingerprint.of(t.record())));
         CalcRecord first = members.get(0).result().record();
         Note how = new Note(Note.Level.INFO, "Each sheet is listed with the SHA-256 of its whole calculation record; "
                 + "a change to any of them changes the package.", Clause.NONE);

@@ -46,11 +46,12 @@ public record RevisionComparison(List<Change> inputs, List<Change> results, int 
     }
 
     private static boolean differs(Entry a, Entry b) {
-        return Double.compare(a.value(), b.value()) != 0 || !a.unit().equals(b.unit()) || !a.shown().equals(b.shown());
+        return Double.compare(a.value(), b.value()) != 0 || !a.unit().equals(b.unit()) || !a.shown().equals(b.shown())
+                || !a.shownUnit().equals(b.shownUnit());
     }
 
     private static String shown(Entry e) {
-        return e.unit().isBlank() || e.shown().endsWith(e.unit()) ? e.shown() : e.shown() + " " + e.unit();
+        return e.shownUnit().isBlank() || e.shown().endsWith(e.shownUnit()) ? e.shown() : e.shown() + " " + e.shownUnit();
     }
 
     private static int unchanged(List<Entry> after, List<Change> changes) {

@@ -11,11 +11,19 @@ import java.time.LocalDate;
  * @param checkedBy initials of the checking engineer; blank while the sheet is still being checked
  * @param checkedOn null while {@code checkedBy} is blank
  * @param revision  revision label as the firm writes it ("0", "A", "P1")
+ * @param logoText  the firm's short mark, printed before its name in the title block; blank for none
  */
 public record SheetHeader(String firm, String project, String jobNumber, String subject,
                           String preparedBy, LocalDate preparedOn, String checkedBy, LocalDate checkedOn,
-                          String revision, LocalDate issueDate) {
+                          String revision, LocalDate issueDate, String logoText) {
+    /** A title block without a logo text. */
+    public SheetHeader(String firm, String project, String jobNumber, String subject, String preparedBy, LocalDate preparedOn,
+                       String checkedBy, LocalDate checkedOn, String revision, LocalDate issueDate) {
+        this(firm, project, jobNumber, subject, preparedBy, preparedOn, checkedBy, checkedOn, revision, issueDate, "");
+    }
+
     public SheetHeader {
+        logoText = logoText == null ? "" : logoText.strip();
         firm = required("firm", firm);
         project = required("project", project);
         jobNumber = required("jobNumber", jobNumber);
@@ -37,7 +45,7 @@ public record SheetHeader(String firm, String project, String jobNumber, String 
 
     /** The same title block for another subject (one member of a package). */
     public SheetHeader withSubject(String s) {
-        return new SheetHeader(firm, project, jobNumber, s, preparedBy, preparedOn, checkedBy, checkedOn, revision, issueDate);
+        return new SheetHeader(firm, project, jobNumber, s, preparedBy, preparedOn, checkedBy, checkedOn, revision, issueDate, logoText);
     }
 
     private static String required(String field, String v) {

@@ -47,7 +47,7 @@ final class TitleBlock {
         vertical(p, top - row, top - 2 * row);
         cb.restoreState();
 
-        Text.show(cb, fonts.bold, 10f, Fonts.INK, Element.ALIGN_LEFT, Text.fit(h.firm(), fonts.bold, 10f, a - x - 8), x + 4, top - 16);
+        firm(x + 4, top - 16, a - x - 8);
         cell("Project", h.project(), a, top, b - a);
         cell("Job no.", h.jobNumber(), b, top, c - b);
         Text.show(cb, fonts.regular, LABEL, Fonts.GREY, Element.ALIGN_LEFT, "Sheet", c + 4, top - 8);
@@ -61,6 +61,19 @@ final class TitleBlock {
         cell("Revision", h.revision(), b, top - row, c - b);
         cell("Issue date", h.issueDate().toString(), c, top - row, x + w - c);
         band(x, y, w, height - 2 * row);
+    }
+
+    /** The firm's name, after its logo text (a short mark in bold) where it has one. */
+    private void firm(float x, float y, float width) {
+        float nameX = x;
+        if (!h.logoText().isEmpty()) {
+            String logo = Text.fit(h.logoText(), fonts.bold, 10f, width / 2);
+            Text.show(cb, fonts.bold, 10f, Fonts.INK, Element.ALIGN_LEFT, logo, x, y);
+            nameX += fonts.bold.getWidthPoint(logo, 10f) + 6;
+            Text.show(cb, fonts.regular, 8f, Fonts.INK, Element.ALIGN_LEFT, Text.fit(h.firm(), fonts.regular, 8f, x + width - nameX), nameX, y);
+            return;
+        }
+        Text.show(cb, fonts.bold, 10f, Fonts.INK, Element.ALIGN_LEFT, Text.fit(h.firm(), fonts.bold, 10f, width), x, y);
     }
 
     private void band(float x, float y, float w, float height) {

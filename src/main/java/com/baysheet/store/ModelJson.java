@@ -1,6 +1,7 @@
 package com.baysheet.store;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.code.ReductionRule;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.model.Direction;
@@ -23,8 +24,13 @@ public final class ModelJson {
     private ModelJson() {}
 
     public static ProjectInfo project(JsonNode n) {
+        return project(n, Editions.builtIn().byDefault().id());
+    }
+
+    /** @param edition the edition when the body names none (a firm's default for a new project, a project's own on a change) */
+    public static ProjectInfo project(JsonNode n, String edition) {
         return new ProjectInfo(text(n, "jobNumber"), text(n, "name"), optText(n, "address"), optText(n, "client"),
-                n.hasNonNull("edition") ? text(n, "edition") : "ASCE 7-16", UnitSystem.parse("units", text(n, "units")),
+                n.hasNonNull("edition") ? text(n, "edition") : edition, UnitSystem.parse("units", text(n, "units")),
                 flag(n, "partitionAllowance"), flag(n, "reducePartitions"));
     }
 

@@ -41,7 +41,7 @@ final class ApiRoutes {
     }
 
     void createProject(Context ctx) {
-        Project p = store.projects().create(ModelJson.project(Json.body(ctx)));
+        Project p = store.projects().create(ModelJson.project(Json.body(ctx), FirmOnPage.defaultEdition(ctx)));
         ctx.header("Location", "/api/projects/" + p.id());
         Json.send(ctx, 201, p);
     }
@@ -55,7 +55,10 @@ final class ApiRoutes {
 
     void updateProject(Context ctx) {
         JsonNode body = Json.body(ctx);
-        Json.send(ctx, store.projects().update(Ids.project(ctx), ModelJson.version(body), ModelJson.project(body)));
+        long id = Ids.project(ctx);
+        // a change that names no edition keeps the project's own
+        String edition = store.projects().find(id).info().edition();
+        Json.send(ctx, store.projects().update(id, ModelJson.version(body), ModelJson.project(body, edition)));
     }
 
     void updateGrid(Context ctx) {

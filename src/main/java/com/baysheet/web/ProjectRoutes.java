@@ -34,7 +34,7 @@ final class ProjectRoutes {
     }
 
     void newForm(Context ctx) {
-        renderForm(ctx, "projects/new", null, Form.filled(Map.of("edition", Editions.builtIn().byDefault().id(), "units", "US")));
+        renderForm(ctx, "projects/new", null, Form.filled(Map.of("edition", FirmOnPage.defaultEdition(ctx), "units", "US")));
     }
 
     void create(Context ctx) {
@@ -60,7 +60,7 @@ final class ProjectRoutes {
         Form form = Form.of(ctx);
         long version = form.version();
         form.attempt(() -> store.projects().update(p.id(), version, info(form)))
-                .ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id()),
+                .ifPresentOrElse(saved -> Pages.seeOther(ctx, Saved.PROJECT.after("/projects/" + p.id())),
                         () -> renderForm(ctx.status(form.stale() ? 409 : 422), "projects/settings", p, form));
     }
 

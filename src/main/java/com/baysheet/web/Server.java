@@ -57,5 +57,6 @@ public final class Server {
         routes.before(ctx -> {
             if (!ctx.path().startsWith("/static/")) ctx.header("Cache-Control", "no-store");
         });
+        routes.before(Saved::onRequest);
     }
 }

@@ -34,7 +34,7 @@ class RevisionComparisonTest {
     void listsEntriesAddedAndRemoved() {
         CalcRecord a = Sheets.record(20, 40);
         List<Entry> inputs = new ArrayList<>(a.inputs().subList(0, 1));
-        inputs.add(new Entry("P", "Point load", 2, "kip", "2"));
+        inputs.add(new Entry("P", "Point load", 2000, "lb", "2", "kip"));
         CalcRecord b = new CalcRecord(a.subject(), a.edition(), a.units(), inputs, a.steps(), a.results(), a.governing(),
                 a.notes(), Sketch.NONE);
         RevisionComparison c = RevisionComparison.of(a, b);

@@ -26,12 +26,12 @@ final class Sheets {
 
     static CalcRecord record(double span, double liveLoad) {
         return new CalcRecord("B-1", "ASCE 7-16", "US",
-                List.of(new Entry("span", "Span", span, "ft", String.valueOf(span)),
-                        new Entry("L0", "Unreduced live load", 50, "psf", "50")),
-                List.of(new Step("K_LL", "Live load element factor", "Table 4.7-1", "2", 2, "", "2",
+                List.of(new Entry("span", "Span", span, "ft", String.valueOf(span), "ft"),
+                        new Entry("L0", "Unreduced live load", 50, "psf", "50", "psf")),
+                List.of(new Step("K_LL", "Live load element factor", "Table 4.7-1", "2", 2, "", "2", "",
                         new Clause("ASCE 7-16", "Table 4.7-1", "seen"))),
-                List.of(new Entry("L", "Reduced live load", liveLoad, "psf", String.valueOf(liveLoad)),
-                        new Entry("M", "Moment", 12.5, "kip-ft", "12.5")),
+                List.of(new Entry("L", "Reduced live load", liveLoad, "psf", String.valueOf(liveLoad), "psf"),
+                        new Entry("M", "Moment", 12500, "lb·ft", "12.5", "kip·ft")),
                 List.of("M"), List.of(), Sketch.NONE);
     }
 

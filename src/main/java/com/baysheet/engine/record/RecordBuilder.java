@@ -58,29 +58,35 @@ public final class RecordBuilder {
     public String num(double base, Quantity q) { return text ? Display.sig3(q.unit(system).fromBase(base)) : ""; }
 
     public RecordBuilder input(String key, String label, double base, Quantity q) {
-        inputs.add(new Entry(key, label, base, q.unit(system).symbol(), show(base, q)));
+        inputs.add(entry(key, label, base, q));
         return this;
     }
 
     public RecordBuilder inputText(String key, String label, String text) {
-        inputs.add(new Entry(key, label, Double.NaN, "", text));
+        inputs.add(Entry.unitless(key, label, Double.NaN, text));
         return this;
     }
 
     public double step(String symbol, String description, String formula, String substituted,
                        double base, Quantity q, Clause clause) {
-        steps.add(new Step(symbol, description, formula, substituted, base, q.unit(system).symbol(), show(base, q), clause));
+        steps.add(new Step(symbol, description, formula, substituted, base, q.base(system).symbol(), show(base, q),
+                q.unit(system).symbol(), clause));
         return base;
     }
 
     public RecordBuilder result(String key, String label, double base, Quantity q) {
-        results.add(new Entry(key, label, base, q.unit(system).symbol(), show(base, q)));
+        results.add(entry(key, label, base, q));
         return this;
     }
 
     public RecordBuilder resultText(String key, String label, String text) {
-        results.add(new Entry(key, label, Double.NaN, "", text));
+        results.add(Entry.unitless(key, label, Double.NaN, text));
         return this;
+    }
+
+    /** The value stays in the base unit and says so; only the shown text is in the sheet unit. */
+    private Entry entry(String key, String label, double base, Quantity q) {
+        return new Entry(key, label, base, q.base(system).symbol(), show(base, q), q.unit(system).symbol());
     }
 
     public RecordBuilder governs(String key) {

@@ -9,7 +9,9 @@ import com.baysheet.store.NotFound;
 import com.baysheet.store.auth.Accounts;
 import com.baysheet.store.review.Firm;
 import com.baysheet.store.review.ReviewStore;
+import com.baysheet.engine.code.Editions;
 import com.baysheet.web.Form;
+import com.baysheet.web.Saved;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
@@ -54,7 +56,7 @@ public final class AdminRoutes {
         Form f = Form.of(ctx);
         if (f.attempt(() -> accounts.admin().add(Access.user(ctx), new NewUser(f.text("username"), f.text("fullName"),
                 f.text("initials"), Role.parse("role", f.text("role"))), f.value("password"), ctx.ip())).isPresent()) {
-            ctx.redirect("/admin/users", HttpStatus.SEE_OTHER);
+            ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
         } else {
             ctx.status(HttpStatus.BAD_REQUEST);
             users(ctx, f);
@@ -63,24 +65,24 @@ public final class AdminRoutes {
 
     void setRole(Context ctx) {
         accounts.admin().setRole(Access.user(ctx), userId(ctx), Role.parse("role", ctx.formParam("role")), ctx.ip());
-        ctx.redirect("/admin/users", HttpStatus.SEE_OTHER);
+        ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
     }
 
     void setActive(Context ctx) {
         accounts.admin().setActive(Access.user(ctx), userId(ctx), "true".equals(ctx.formParam("active")), ctx.ip());
-        ctx.redirect("/admin/users", HttpStatus.SEE_OTHER);
+        ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
     }
 
     void resetPassword(Context ctx) {
         accounts.admin().resetPassword(Access.user(ctx), userId(ctx), ctx.formParam("password"), ctx.ip());
-        ctx.redirect("/admin/users", HttpStatus.SEE_OTHER);
+        ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
     }
 
     void firm(Context ctx, Form f) {
         Firm firm = review.firm().get();
         Form shown = f != null ? f : Form.filled(Map.of("firmName", firm.name(), "logoText", firm.logoText(),
                 "defaultEdition", firm.defaultEdition(), "version", String.valueOf(firm.version())));
-        ctx.render("auth/firm", Map.of("form", shown));
+        ctx.render("auth/firm", Map.of("form", shown, "editions", Editions.builtIn().ids()));
     }
 
     void updateFirm(Context ctx) {
@@ -92,7 +94,7 @@ public final class AdminRoutes {
                     AuditEvent.of(u.id(), u.username(), "firm settings", "firm", f.text("firmName"), ctx.ip()));
             return true;
         }).isPresent()) {
-            ctx.redirect("/admin/firm", HttpStatus.SEE_OTHER);
+            ctx.redirect(Saved.FIRM.after("/admin/firm"), HttpStatus.SEE_OTHER);
         } else {
             ctx.status(HttpStatus.BAD_REQUEST);
             firm(ctx, f);

@@ -6,6 +6,7 @@ import com.baysheet.auth.SessionPolicy;
 import com.baysheet.store.auth.Logins;
 import com.baysheet.store.auth.SignedIn;
 import com.baysheet.web.Form;
+import com.baysheet.web.Saved;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
@@ -71,9 +72,7 @@ public final class AuthRoutes {
     }
 
     void passwordForm(Context ctx) {
-        Map<String, Object> m = model(Form.filled(Map.of()));
-        m.put("changed", ctx.queryParam("changed") != null);
-        ctx.render("auth/password", m);
+        ctx.render("auth/password", model(Form.filled(Map.of())));
     }
 
     void changePassword(Context ctx) {
@@ -83,7 +82,7 @@ public final class AuthRoutes {
             logins.changePassword(s, f.value("currentPassword"), f.value("newPassword"), f.value("confirmPassword"), ctx.ip());
             return true;
         }).isPresent()) {
-            ctx.redirect("/account/password?changed", HttpStatus.SEE_OTHER);
+            ctx.redirect(Saved.PASSWORD.after("/account/password"), HttpStatus.SEE_OTHER);
         } else {
             ctx.status(HttpStatus.BAD_REQUEST);
             ctx.render("auth/password", model(f));

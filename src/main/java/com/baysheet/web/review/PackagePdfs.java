@@ -31,7 +31,7 @@ final class PackagePdfs {
         SheetRevision r = v.current().revision();
         var info = s.computed().project().info();
         SheetHeader h = new SheetHeader(firm.name(), info.name(), info.jobNumber(), s.name(), r.preparer().initials(),
-                r.preparer().on(), r.approval().initials(), r.approval().on(), String.valueOf(r.number()), today);
+                r.preparer().on(), r.approval().initials(), r.approval().on(), String.valueOf(r.number()), today, firm.logoText());
         List<Revision> log = log(v.history(), r, s.current(), today);
         CalcPackage pkg = s.scope().isProject() ? FramingSheets.project(h, s.computed().derived(), log)
                 : FramingSheets.level(h, s.computed().derived(), s.scope().level(), log);

@@ -7,6 +7,7 @@ import com.baysheet.sheet.SheetHeader;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
 import com.baysheet.store.Store;
+import com.baysheet.store.review.Firm;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.web.auth.Access;
 import io.javalin.config.RoutesConfig;
@@ -64,8 +65,9 @@ public final class PackageRoutes {
         var info = c.project().info();
         LocalDate today = LocalDate.now(clock);
         String title = scope.equals("project") ? "Calculation package" : "Calculation package, " + scope;
-        SheetHeader h = new SheetHeader(review.firm().get().name(), info.name(), info.jobNumber(), title,
-                Access.user(ctx).initials(), today, "", null, "check", today);
+        Firm firm = review.firm().get();
+        SheetHeader h = new SheetHeader(firm.name(), info.name(), info.jobNumber(), title,
+                Access.user(ctx).initials(), today, "", null, "check", today, firm.logoText());
         CalcPackage pkg = scope.equals("project") ? FramingSheets.project(h, c.derived(), List.of())
                 : FramingSheets.level(h, c.derived(), scope, List.of());
         PackageJobs.Job job = jobs.start(project, pkg);

@@ -32,7 +32,7 @@ final class SheetPdfs {
         LocalDate checkedOn = r.approval() == null ? null : r.approval().on();
         SheetHeader h = header(firm, s, r, checker, checkedOn, today);
         if (r.preparer() == null) h = new SheetHeader(h.firm(), h.project(), h.jobNumber(), h.subject(), viewer, today,
-                h.checkedBy(), h.checkedOn(), h.revision(), today);
+                h.checkedBy(), h.checkedOn(), h.revision(), today, h.logoText());
         MemberSheet sheet = FramingSheets.member(h, s.computed().derived(), s.member().id());
         return SheetRenderer.checking(sheet, markups.stream().map(SheetPdfs::markup).toList());
     }
@@ -43,7 +43,7 @@ final class SheetPdfs {
         String preparedBy = r.preparer() == null ? "-" : r.preparer().initials();
         LocalDate preparedOn = r.preparer() == null ? today : r.preparer().on();
         return new SheetHeader(firm.name(), info.name(), info.jobNumber(), s.member().name(), preparedBy, preparedOn,
-                checkedBy, checkedOn, String.valueOf(r.number()), today);
+                checkedBy, checkedOn, String.valueOf(r.number()), today, firm.logoText());
     }
 
     private static Markup markup(MarkupNote m) {

@@ -11,6 +11,7 @@ import com.baysheet.store.auth.Accounts;
 import com.baysheet.store.auth.Logins;
 import com.baysheet.store.review.ConcurrentChange;
 import com.baysheet.store.review.ReviewStore;
+import com.baysheet.web.FirmOnPage;
 import com.baysheet.web.auth.Access;
 import com.baysheet.web.auth.AccessRefused;
 import com.baysheet.web.auth.AdminRoutes;
@@ -23,7 +24,7 @@ import java.time.Clock;
 
 /**
  * Users, access and the sheet check, installed into the server's routes: the access filter first (login,
- * roles, form tokens), then the pages of login, administration and review, and the mapping of their
+ * roles, form tokens) and the firm's settings for the page header and new projects, then the pages of login, administration and review, and the mapping of their
  * refusals to pages. Installed by the server before its own filters and routes.
  */
 public final class Signoff {
@@ -55,6 +56,9 @@ public final class Signoff {
     public void install(RoutesConfig r) {
         Access access = new Access(accounts.logins());
         r.before(access::before);
+        r.before(ctx -> {
+            if (!ctx.path().startsWith("/static/")) FirmOnPage.put(ctx, review.firm().get());
+        });
         r.after(CsrfForms::after);
         r.after(new EditTrail(store, review)::after);
         r.exception(AccessRefused.class, Refusals::access);

@@ -156,7 +156,8 @@ class MemberCalculationTest {
         CalcRecord r = calc(US, in);
         double w = 500 * (0.25 + 15 / Math.sqrt(600));
         assertThat(r.result("L.Δ")).isCloseTo(5 * w * Math.pow(30, 4) / (384 * ei), within(1e-12));
-        assertThat(r.entry("L.Δ").unit()).isEqualTo("in");
+        assertThat(r.entry("L.Δ").unit()).isEqualTo("ft"); // computed in ft ...
+        assertThat(r.entry("L.Δ").shownUnit()).isEqualTo("in"); // ... shown in in
     }
 
     @Test
@@ -192,5 +193,6 @@ class MemberCalculationTest {
         double w = 2.40 * 3 * (0.25 + 4.57 / Math.sqrt(54));
         assertThat(r.result("L.M+")).isCloseTo(w * 81 / 8, within(1e-3));
         assertThat(r.entry("L.M+").unit()).isEqualTo("kN·m");
+        assertThat(r.entry("L.M+").shownUnit()).isEqualTo("kN·m");
     }
 }

@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 class RecordJsonTest {
     static CalcRecord officeBeam() { return Fixtures.calc(Fixtures.US, Fixtures.beam(MemberKind.INTERIOR_BEAM, 30, "office", 10, 15)); }
@@ -34,8 +35,12 @@ class RecordJsonTest {
         for (JsonNode e : root.get("results")) if (e.get("key").asText().equals("L.M+")) m = e;
         assertThat(m).isNotNull();
         assertThat(m.get("value").asDouble()).isEqualTo(r.result("L.M+"));
-        assertThat(m.get("unit").asText()).isEqualTo("kip·ft");
+        assertThat(m.get("unit").asText()).isEqualTo("lb·ft"); // the unit of value, the US base unit
         assertThat(m.get("shown").asText()).endsWith(" kip·ft");
+        assertThat(m.get("shownUnit").asText()).isEqualTo("kip·ft");
+        // 1 kip·ft = 1000 lb·ft: the shown number is the value over 1000 to three significant figures
+        double shown = Double.parseDouble(m.get("shown").asText().replace(" kip·ft", ""));
+        assertThat(m.get("value").asDouble() / 1000).isCloseTo(shown, within(0.05));
     }
 
     @Test

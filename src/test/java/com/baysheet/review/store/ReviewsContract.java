@@ -61,10 +61,10 @@ abstract class ReviewsContract {
     static Caller caller(User u) { return Caller.of(u, "127.0.0.1"); }
 
     static CalcRecord record(double span) {
-        return new CalcRecord("B-3", "ASCE 7-16", "US", List.of(new Entry("span", "Span", span, "ft", String.valueOf(span))),
-                List.of(new Step("K_LL", "Live load element factor", "Table 4.7-1", "2", 2, "", "2",
+        return new CalcRecord("B-3", "ASCE 7-16", "US", List.of(new Entry("span", "Span", span, "ft", String.valueOf(span), "ft")),
+                List.of(new Step("K_LL", "Live load element factor", "Table 4.7-1", "2", 2, "", "2", "",
                         new Clause("ASCE 7-16", "Table 4.7-1", "seen"))),
-                List.of(new Entry("M", "Moment", span * 2, "kip-ft", String.valueOf(span * 2))), List.of("M"), List.of(), Sketch.NONE);
+                List.of(new Entry("M", "Moment", span * 2000, "lb·ft", String.valueOf(span * 2), "kip·ft")), List.of("M"), List.of(), Sketch.NONE);
     }
 
     Reviews reviews() { return store.reviews(); }

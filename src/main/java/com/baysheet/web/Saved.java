@@ -1,0 +1,41 @@
+package com.baysheet.web;
+
+import io.javalin.http.Context;
+
+/**
+ * The confirmation after a save: the handler redirects (post-redirect-get) to its page with
+ * {@code ?saved=CODE}, and the layout shows the message of that code. Only these codes are shown; any other
+ * value of the parameter shows nothing, so no text of the address reaches the page.
+ */
+public enum Saved {
+    FIRM("firm", "Saved: firm settings."),
+    PROJECT("project", "Saved: project settings."),
+    PASSWORD("password", "Saved: your new password. Your other logins were ended."),
+    USER("user", "Saved: user account.");
+
+    /** The request attribute the layout reads the message by. */
+    public static final String ATTRIBUTE = "saved";
+    private static final String PARAM = "saved";
+
+    private final String code;
+    private final String message;
+
+    Saved(String code, String message) {
+        this.code = code;
+        this.message = message;
+    }
+
+    public String message() { return message; }
+
+    /** The page to redirect to after this save: {@code path} with the confirmation asked for. */
+    public String after(String path) {
+        return path + (path.contains("?") ? "&" : "?") + PARAM + "=" + code;
+    }
+
+    /** A before-filter: a page asked with a known {@code saved} code gets its message. */
+    public static void onRequest(Context ctx) {
+        String asked = ctx.queryParam(PARAM);
+        if (asked == null) return;
+        for (Saved s : values()) if (s.code.equals(asked)) ctx.attribute(ATTRIBUTE, s.message);
+    }
+}

@@ -1,0 +1,121 @@
+package com.baysheet.web.review;
+
+import com.baysheet.auth.Role;
+import com.baysheet.web.TestLogin.Client;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.text.PDFTextStripper;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+
+import java.io.IOException;
+import java.net.http.HttpResponse;
+import java.util.List;
+import java.util.Map;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** The firm's settings act: new projects start with the firm's edition, and its name and logo text are shown. */
+class FirmSettingsTest {
+    static final String NAME = "Harbor & Pine Structural";
+    static final String LOGO = "H&P";
+
+    ReviewServer server;
+    Client admin;
+
+    @BeforeEach
+    void start() {
+        server = new ReviewServer();
+        admin = server.as("admin", Role.ADMINISTRATOR);
+    }
+
+    @AfterEach
+    void stop() { server.close(); }
+
+    HttpResponse<String> saveFirm(String edition) {
+        String page = admin.get("/admin/firm").body();
+        return admin.post("/admin/firm", List.of(Map.entry("firmName", NAME), Map.entry("logoText", LOGO),
+                Map.entry("defaultEdition", edition), Map.entry("version", Pages.version(page, "/admin/firm"))));
+    }
+
+    @Test
+    void savingTheFirmSettingsConfirmsItAfterTheRedirect() {
+        HttpResponse<String> saved = saveFirm("ASCE 7-22");
+        assertThat(saved.statusCode()).isEqualTo(303);
+        String location = saved.headers().firstValue("Location").orElseThrow();
+        assertThat(location).startsWith("/admin/firm");
+        assertThat(admin.get(location).body()).contains("Saved: firm settings.");
+        assertThat(admin.get("/admin/firm").body()).as("only right after the save").doesNotContain("Saved:");
+        assertThat(admin.get("/admin/firm?saved=%3Cb%3Ehi").body()).as("an unknown code shows nothing")
+                .doesNotContain("Saved:").doesNotContain("<b>hi");
+    }
+
+    @Test
+    void aRefusedSaveSaysNothingWasSavedAndNotSaved() {
+        String page = admin.get("/admin/firm").body();
+        HttpResponse<String> bad = admin.post("/admin/firm", List.of(Map.entry("firmName", ""), Map.entry("logoText", LOGO),
+                Map.entry("defaultEdition", "ASCE 7-22"), Map.entry("version", Pages.version(page, "/admin/firm"))));
+        assertThat(bad.statusCode()).isEqualTo(400);
+        assertThat(bad.body()).contains("Nothing was saved").doesNotContain("Saved:");
+    }
+
+    @Test
+    void theEditionFormListsTheEditionsWithTheFirmsSelected() {
+        saveFirm("ASCE 7-10");
+        assertThat(admin.get("/admin/firm").body()).containsPattern("<option value=\"ASCE 7-10\" selected=\"selected\">")
+                .contains("<option value=\"ASCE 7-22\">");
+    }
+
+    @Test
+    void aNewProjectStartsWithTheFirmsEditionOnThePage() {
+        Client eng = server.as("eve", Role.ENGINEER);
+        assertThat(eng.get("/projects/new").body()).contains("<option value=\"ASCE 7-16\" selected=\"selected\">");
+        saveFirm("ASCE 7-22");
+        String form = eng.get("/projects/new").body();
+        assertThat(form).contains("<option value=\"ASCE 7-22\" selected=\"selected\">")
+                .doesNotContain("<option value=\"ASCE 7-16\" selected=\"selected\">");
+    }
+
+    @Test
+    void theApiGivesANewProjectTheFirmsEditionWhenTheBodyNamesNone() {
+        saveFirm("ASCE 7-22");
+        Client eng = server.as("eve", Role.ENGINEER);
+        HttpResponse<String> made = eng.json("POST", "/api/projects", "{\"jobNumber\": \"26-001\", \"name\": \"Quay Shed\", \"units\": \"US\"}");
+        assertThat(made.statusCode()).isEqualTo(201);
+        assertThat(made.body()).contains("\"edition\" : \"ASCE 7-22\"");
+        HttpResponse<String> named = eng.json("POST", "/api/projects",
+                "{\"jobNumber\": \"26-002\", \"name\": \"Quay Store\", \"units\": \"US\", \"edition\": \"ASCE 7-10\"}");
+        assertThat(named.body()).contains("\"edition\" : \"ASCE 7-10\"");
+
+        // a change that names no edition keeps the project's, even after the firm's default moves on
+        saveFirm("ASCE 7-16");
+        String path = made.headers().firstValue("Location").orElseThrow();
+        HttpResponse<String> changed = eng.json("PUT", path,
+                "{\"version\": 1, \"jobNumber\": \"26-001\", \"name\": \"Quay Shed, north\", \"units\": \"US\"}");
+        assertThat(changed.statusCode()).isEqualTo(200);
+        assertThat(changed.body()).contains("\"edition\" : \"ASCE 7-22\"", "Quay Shed, north");
+    }
+
+    @Test
+    void theFirmsNameAndLogoTextAreInThePageHeader() {
+        Client eng = server.as("eve", Role.ENGINEER);
+        assertThat(eng.get("/projects").body()).doesNotContain(">H&amp;P<");
+        saveFirm("ASCE 7-16");
+        String page = eng.get("/projects").body();
+        assertThat(page).contains("<strong class=\"logo\">H&amp;P</strong> <span>Harbor &amp; Pine Structural</span>");
+    }
+
+    @Test
+    void theFirmsNameAndLogoTextAreOnTheSheetsTitleBlock() throws IOException {
+        saveFirm("ASCE 7-16");
+        Client eng = server.as("eve", Role.ENGINEER);
+        HttpResponse<byte[]> pdf = eng.getBytes(server.sheetPath() + "/checking.pdf");
+        assertThat(pdf.statusCode()).isEqualTo(200);
+        try (PDDocument doc = Loader.loadPDF(pdf.body())) {
+            PDFTextStripper first = new PDFTextStripper();
+            first.setEndPage(1);
+            assertThat(first.getText(doc)).contains(LOGO + " " + NAME);
+        }
+    }
+}
