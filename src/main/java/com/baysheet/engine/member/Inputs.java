@@ -6,6 +6,7 @@ import com.baysheet.engine.load.AreaStrip;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.PointLoad;
 import com.baysheet.engine.load.Support;
+import com.baysheet.engine.load.SupportedFloor;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.reduction.CalcContext;
 import com.baysheet.engine.units.Quantity;
@@ -34,6 +35,10 @@ final class Inputs {
             rec.inputText("support", "Support", "axial");
         }
         rec.inputText("floors", "Floors supported", Integer.toString(in.floorsSupported()));
+        if (SupportedFloor.kllVaries(ctx.edition(), in.kind(), in.floors()))
+            for (SupportedFloor f : in.floors())
+                rec.inputText("floor[" + f.name() + "]", "Floor " + f.name(), f.kind().title() + ", K_LL " + rec.fmt(ctx.edition().kll(f.kind()))
+                        + ", floor area " + rec.show(f.area(), Quantity.AREA));
         book.floorAreas.forEach((id, a) -> occupancy(ctx, ctx.catalogue().get(id), a, rec));
         book.roofAreas.forEach((id, a) -> occupancy(ctx, ctx.catalogue().get(id), a, rec));
         loads(ctx, in, rec);
