@@ -19,7 +19,9 @@ public record SupportedFloor(String name, MemberKind kind, List<AreaShare> areas
     public SupportedFloor {
         Check.text("name", name);
         Check.present("kind", kind);
-        if (!kind.isColumn()) throw new InputError("kind", kind.name(), "a supported floor takes a column kind of Table 4.7-1");
+        if (!kind.isColumn())
+            throw new InputError("kind", kind.name(), "a supported floor takes a column kind (INTERIOR_COLUMN, EXTERIOR_COLUMN, "
+                    + "EDGE_COLUMN_CANTILEVER or CORNER_COLUMN_CANTILEVER)");
         areas = List.copyOf(areas);
         double a = 0;
         for (AreaShare s : areas) a += s.area();
