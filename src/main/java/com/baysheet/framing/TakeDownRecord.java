@@ -33,7 +33,7 @@ final class TakeDownRecord {
             rec.step("K_LL" + at, lv + "live load element factor of the column's place at this level", "K_LL", "Table value",
                     w.kll(), Quantity.RATIO, ed.clause("reduction.kll"));
             Step kat = find(r, "K_LL·A_T");
-            rec.step("K_LL·ΣA_T" + at, lv + "influence area that gives f (from the reducible area of each floor)",
+            rec.step("K_LL·ΣA_T" + at, lv + "influence area that gives f" + (reducedInPart(w) ? ", from the reducible area of each floor" : ""),
                     kat == null ? "Σ K_LL,i × A_T,r,i" : kat.formula(), kat == null ? "no reducible floor area" : kat.substituted(),
                     w.influenceArea(), Quantity.AREA, ed.clause("reduction.basic"));
             rec.step("f" + at, lv + "reduction factor on ordinary floor live load", formula(ctx, rec),
@@ -70,9 +70,14 @@ final class TakeDownRecord {
                 top ? "ΣA_T = floor area at this level" : "ΣA_T = ΣA_T above + floor area at this level",
                 top ? rec.num(floorHere, Quantity.AREA) : rec.num(above, Quantity.AREA) + " + " + rec.num(floorHere, Quantity.AREA),
                 w.cumulativeArea(), Quantity.AREA, ed.clause("reduction.multifloor"));
-        if (w.cumulativeArea() - w.reducibleArea() > SAME_AREA * Math.max(1, w.cumulativeArea()))
+        if (reducedInPart(w))
             rec.step("A_T,r" + at, lv + "reducible A_T, cumulative (the floor area whose live load may be reduced)", "A_T,r ≤ ΣA_T",
                     "see the column record " + w.member(), w.reducibleArea(), Quantity.AREA, ed.clause("reduction.basic"));
+    }
+
+    /** Some of the A_T supported is not reducible (mixed occupancy), so f comes from the reducible part. */
+    private static boolean reducedInPart(TakeDown.Row w) {
+        return w.cumulativeArea() - w.reducibleArea() > SAME_AREA * Math.max(1, w.cumulativeArea());
     }
 
     /** Eq. 4.7-1 with the constant of the project's unit system, from the edition. */
