@@ -14,6 +14,7 @@ import com.baysheet.engine.load.LiveShare;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.PointLoad;
 import com.baysheet.engine.load.Support;
+import com.baysheet.engine.load.SupportedFloor;
 import com.baysheet.engine.reduction.CalcContext;
 import com.baysheet.engine.units.Quantity;
 import com.baysheet.engine.units.UnitSystem;
@@ -35,7 +36,7 @@ final class MemberJson {
     record Parsed(CalcContext context, MemberInput input) {}
 
     static final Set<String> TOP = Set.of("edition", "units", "subject", "kind", "support", "floorsSupported", "strips",
-            "areas", "pointLoads", "selfWeight", "roofSlope", "EI", "onRoof", "options", "customOccupancies");
+            "areas", "pointLoads", "selfWeight", "roofSlope", "EI", "onRoof", "options", "customOccupancies", "floors");
 
     static Parsed parse(JsonNode root) {
         Fields f = new Fields(root, "", TOP);
@@ -53,8 +54,10 @@ final class MemberJson {
         List<AreaStrip> strips = list(f, "strips", (n, p) -> strip(new Fields(n, p, Set.of("occupancy", "width", "from", "to", "deadLoad")), p));
         List<AreaLoad> areas = list(f, "areas", (n, p) -> area(new Fields(n, p, Set.of("occupancy", "area", "deadLoad")), p));
         List<PointLoad> points = list(f, "pointLoads", (n, p) -> point(new Fields(n, p, Set.of("x", "dead", "live", "areas")), p, kind.isColumn()));
-        MemberInput in = Fields.at("", () -> new MemberInput(subject, kind, support, f.integer("floorsSupported", 1), strips, areas, points,
-                f.number("selfWeight", 0), f.number("roofSlope", Double.NaN), ei, f.flag("onRoof", false)));
+        List<SupportedFloor> floors = list(f, "floors", (n, p) -> floor(new Fields(n, p, Set.of("name", "kind", "areas")), p));
+        int floorsSupported = f.integer("floorsSupported", floors.isEmpty() ? 1 : floors.size());
+        MemberInput in = Fields.at("", () -> new MemberInput(subject, kind, support, floorsSupported, strips, areas, points,
+                f.number("selfWeight", 0), f.number("roofSlope", Double.NaN), ei, f.flag("onRoof", false), floors));
         return new Parsed(ctx, in);
     }
 
@@ -83,6 +86,16 @@ final class MemberJson {
     private static AreaLoad area(Fields a, String p) {
         double dead = Check.nonNegative(a.child("deadLoad"), a.number("deadLoad", 0));
         return Fields.at(p, () -> new AreaLoad(a.text("occupancy"), a.number("area"), dead));
+    }
+
+    /** A column's floor supported: its name, the column's kind on it (so its K_LL) and its floor areas. */
+    private static SupportedFloor floor(Fields fl, String p) {
+        MemberKind kind = MemberKind.parse(fl.child("kind"), fl.text("kind"));
+        List<AreaShare> areas = list(fl, "areas", (n, q) -> {
+            Fields a = new Fields(n, q, Set.of("occupancy", "area"));
+            return Fields.at(q, () -> new AreaShare(a.text("occupancy"), a.number("area")));
+        });
+        return Fields.at(p, () -> new SupportedFloor(fl.text("name"), kind, areas));
     }
 
     /** A beam's point load needs its position; a column's loads are axial, so x may be left out. */

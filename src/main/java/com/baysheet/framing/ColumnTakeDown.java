@@ -1,11 +1,14 @@
 package com.baysheet.framing;
 
 import com.baysheet.engine.code.MemberKind;
+import com.baysheet.engine.load.AreaShare;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
+import com.baysheet.engine.load.SupportedFloor;
 import com.baysheet.engine.member.MemberResult;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.reduction.LiveFactors;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -13,7 +16,8 @@ import java.util.List;
 /**
  * Takes one column stack down the building, top level first. At each level the column below it carries
  * everything at and above that level, merged unreduced, and the engine reduces it with the column's own
- * cumulative A_T over the floors supported (never from reduced reactions). Roof live load stays Lr.
+ * cumulative A_T over the floors supported (never from reduced reactions), each floor with the K_LL of the
+ * column's place on that floor (its influence area is Σ K_LL,i A_T,i). Roof live load stays Lr.
  */
 final class ColumnTakeDown {
     private final CalcContext ctx;
@@ -34,6 +38,7 @@ final class ColumnTakeDown {
         StackLoad total = new StackLoad();
         List<TakeDown.Row> rows = new ArrayList<>();
         List<MemberResult> records = new ArrayList<>();
+        List<SupportedFloor> supported = new ArrayList<>();
         int floors = 0;
         double slope = Double.NaN, floorArea = 0;
         ColumnClass cls = null;
@@ -51,9 +56,10 @@ final class ColumnTakeDown {
             if (p.flooredAround(i, j) > 0) { cls = ColumnClass.at(p, i, j); cant = ColumnClass.cantileverTouches(p, i, j); }
             total.add(here);
             MemberKind kind = cls.kind(cant);
+            if (floorHere > 0) supported.add(new SupportedFloor(p.level.name(), kind, floorShares(here)));
             String name = "Column " + point + " below " + p.level.name();
             MemberInput in = new MemberInput(name + " (" + cls.label() + ")", kind, new Support.Axial(), Math.max(1, floors), List.of(),
-                    List.of(), List.of(total.asPointLoad()), 0, slope, Double.NaN, false);
+                    List.of(), List.of(total.asPointLoad()), 0, slope, Double.NaN, false, supported);
             MemberResult res = cache.calculate(in);
             String id = p.id + "-c" + p.at(i, j);
             out.add(new DerivedMember(id, name, p.level.name(), MemberRole.COLUMN, kind,
@@ -67,23 +73,28 @@ final class ColumnTakeDown {
                 () -> TakeDownRecord.write(c, "Column " + point + " take-down", rows, records));
     }
 
+    /** This level's row: the reduction's areas and factor as the column's own record states them. */
     private TakeDown.Row row(LevelPlan p, String id, MemberResult r, double areaHere, double cumArea, MemberKind kind,
                              int floors, double deadHere) {
-        double kll = ctx.edition().kll(kind);
-        return new TakeDown.Row(p.level.name(), id, areaHere, cumArea, kll, kll * cumArea, floors, factor(r),
+        var lf = r.floorReduction();
+        double reducible = lf.map(LiveFactors::reducibleArea).orElse(0.0), influence = lf.map(LiveFactors::influenceArea).orElse(0.0);
+        return new TakeDown.Row(p.level.name(), id, areaHere, cumArea, reducible, ctx.edition().kll(kind), influence, floors,
+                lf.map(LiveFactors::factor).orElse(1.0),
                 deadHere, r.value("D.P"), r.value("L0.P"), r.value("L.P"), r.value("Lr.P"),
                 r.value("LRFD.P"), combo(r, "LRFD.P"), r.value("ASD.P"), combo(r, "ASD.P"));
+    }
+
+    /** The floor (not roof) areas of one level, by occupancy. */
+    private List<AreaShare> floorShares(StackLoad s) {
+        List<AreaShare> out = new ArrayList<>();
+        for (var e : s.areas.entrySet()) if (!ctx.catalogue().get(e.getKey()).isRoof()) out.add(new AreaShare(e.getKey(), e.getValue()));
+        return out;
     }
 
     private double floorArea(StackLoad s) {
         double a = 0;
         for (var e : s.areas.entrySet()) if (!ctx.catalogue().get(e.getKey()).isRoof()) a += e.getValue();
         return a;
-    }
-
-    private static double factor(MemberResult r) {
-        double f = r.stepValue("f");
-        return Double.isNaN(f) ? 1 : f;
     }
 
     private static String combo(MemberResult r, String key) {

@@ -43,10 +43,17 @@ public final class TakeDown {
     /**
      * One level of the stack. Areas in ft² or m², loads in lb or kN (system base units).
      *
-     * @param member the id of the column member at this level, whose record holds the full calculation
+     * @param member         the id of the column member at this level, whose record holds the full calculation
+     * @param areaAtLevel    the area this level brings to the column, floor and roof (this level only)
+     * @param cumulativeArea A_T supported: the floor area at and above this level (cumulative, roofs excluded)
+     * @param reducibleArea  the part of A_T supported whose live load may be reduced (cumulative)
+     * @param kll            K_LL of the column's place on this level
+     * @param influenceArea  the K_LL·A_T that gave f: Σ K_LL,i × reducible A_T,i over the floors supported; 0 where
+     *                       nothing is reducible
+     * @param factor         f of Eq. 4.7-1 with its limit, as it applies to ordinary floor live load
      */
-    public record Row(String level, String member, double areaAtLevel, double cumulativeArea, double kll,
-                      double influenceArea, int floorsSupported, double factor, double deadAtLevel, double dead,
+    public record Row(String level, String member, double areaAtLevel, double cumulativeArea, double reducibleArea,
+                      double kll, double influenceArea, int floorsSupported, double factor, double deadAtLevel, double dead,
                       double liveUnreduced, double liveReduced, double roofLive, double lrfd, String lrfdCombination,
                       double asd, String asdCombination) {}
 }

@@ -50,7 +50,12 @@ final class MemberRoutes {
         Map<String, Object> m = base(c);
         m.put("member", member);
         m.put("record", member.result().record());
-        m.put("row", MemberRow.of(member, "", UnitLabels.of(c.project().info().units())));
+        UnitLabels units = UnitLabels.of(c.project().info().units());
+        m.put("row", MemberRow.of(member, "", units));
+        m.put("kllClause", c.model().building().context().edition().clause("reduction.kll").label());
+        // a column's area is this level's; the A_T it is reduced with is cumulative over the floors it supports
+        m.put("supportedArea", member.role() != MemberRole.COLUMN ? null
+                : member.result().floorReduction().map(lf -> units.area(lf.tributaryArea())).orElse(null));
         m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), member,
                 c.model().building().context().catalogue(), href));
         ctx.render("members/show", m);

@@ -70,6 +70,21 @@ final class Loads {
         };
     }
 
+    /** Whether an occupancy's live load may be reduced on a member over {@code floors} floors (ASCE 7-16 4.7.2 to 4.7.5). */
+    static boolean reducible(String id, int floors) {
+        if (isRoof(id)) return false;
+        return lowestFactor(id, floors) < 1;
+    }
+
+    /**
+     * ASCE 7-16 4.7.2, Eq. 4.7-1 (US): the factor from an influence area K_LL·A_T in ft²: 1 below 400 ft², else
+     * 0.25 + 15/√(K_LL·A_T), at most 1 and not below 0.50 (one floor) or 0.40 (two or more).
+     */
+    static double basicFactor(double influence, int floors) {
+        if (influence < 400) return 1;
+        return Math.max(floors == 1 ? 0.5 : 0.4, Math.min(1, 0.25 + 15 / Math.sqrt(influence)));
+    }
+
     static boolean hasStep(CalcRecord r, String symbol) {
         for (Step s : r.steps()) if (s.symbol().equals(symbol)) return true;
         return false;

@@ -5,6 +5,7 @@ import com.baysheet.framing.model.Building;
 import com.baysheet.framing.model.Level;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
+import net.jqwik.api.statistics.Statistics;
 
 import java.util.Comparator;
 import java.util.HashMap;
@@ -100,7 +101,7 @@ class TakeDownProperties {
                 area += here;
                 assertThat(r.floorsSupported()).as("%s at %s", t.gridPoint(), r.level()).isEqualTo(floors);
                 assertThat(r.cumulativeArea()).as("ΣA_T").isCloseTo(area, within(1e-9 * Math.max(1, area)));
-                assertThat(r.influenceArea()).isCloseTo(r.kll() * r.cumulativeArea(), within(1e-9 * Math.max(1, area)));
+                assertThat(r.reducibleArea()).as("reducible A_T").isBetween(0.0, r.cumulativeArea() * (1 + 1e-12));
                 if (above != null) {
                     assertThat(r.cumulativeArea()).isGreaterThanOrEqualTo(above.cumulativeArea());
                     assertThat(r.dead()).isCloseTo(above.dead() + r.deadAtLevel(), within(1e-9 * Math.max(1, r.dead())));
@@ -110,6 +111,59 @@ class TakeDownProperties {
                 above = r;
             }
         }
+    }
+
+    /**
+     * The influence area of a column supporting several floors is Σ K_LL,i × (reducible A_T,i) over those floors, each
+     * floor with the K_LL of the column's place on it (common practice; Commentary C4.7, from memory), and f follows
+     * from it by ASCE 7-16 4.7.2: 1 below 400 ft², else 0.25 + 15/√(K_LL·A_T), never below 0.50 (one floor) or 0.40
+     * (two or more). So f is never below the factor with every floor at the largest K_LL present (a column is never
+     * reduced more than that) nor above the factor with every floor at the smallest. (Reduced P_L at or above the
+     * value with every floor at the smallest K_LL is NOT an invariant: the sum lies between the two.)
+     */
+    @Property(tries = 150)
+    void influenceAreaIsTheSumOverTheFloorsOfEachFloorsKllTimesItsReducibleArea(@ForAll long seed) {
+        Derived d = Derivation.derive(Buildings.random(seed));
+        Map<String, DerivedMember> byId = DerivationProperties.byId(d);
+        int varied = 0;
+        for (TakeDown t : d.takeDowns()) {
+            List<double[]> kll = new java.util.ArrayList<>();       // per floor supported: {K_LL}
+            List<Map<String, Double>> areas = new java.util.ArrayList<>();
+            for (TakeDown.Row r : t.rows()) {
+                DerivedMember col = byId.get(r.member());
+                double k = Buildings.US.edition().kll(col.kind());
+                assertThat(r.kll()).as("%s at %s: K_LL of its place", t.gridPoint(), r.level()).isEqualTo(k);
+                if (floorArea(col.areas()) > 0) { kll.add(new double[] {k}); areas.add(col.areas()); }
+                int n = areas.size();
+                double sum = 0, reducible = 0, kMin = Double.MAX_VALUE, kMax = 0;
+                for (int i = 0; i < n; i++) {
+                    double a = 0;
+                    for (var e : areas.get(i).entrySet()) if (Loads.reducible(e.getKey(), n)) a += e.getValue();
+                    if (a == 0) continue;
+                    sum += kll.get(i)[0] * a;
+                    reducible += a;
+                    kMin = Math.min(kMin, kll.get(i)[0]);
+                    kMax = Math.max(kMax, kll.get(i)[0]);
+                }
+                if (kMin < kMax) varied++;
+                String where = t.gridPoint() + " at " + r.level();
+                assertThat(r.reducibleArea()).as("%s: reducible A_T", where).isCloseTo(reducible, within(1e-9 * Math.max(1, reducible)));
+                assertThat(r.influenceArea()).as("%s: Σ K_LL,i A_T,r,i", where).isCloseTo(sum, within(1e-9 * Math.max(1, sum)));
+                if (n == 0) continue;
+                double f = r.factor();
+                assertThat(f).as("%s: f from the influence area printed", where).isCloseTo(Loads.basicFactor(sum, n), within(1e-12));
+                assertThat(f).as("%s: limit", where).isBetween(n == 1 ? 0.5 : 0.4, 1.0);
+                if (reducible > 0) {
+                    assertThat(f).as("%s: not reduced more than with every floor at K_LL %s", where, kMax)
+                            .isGreaterThanOrEqualTo(Loads.basicFactor(kMax * reducible, n) - 1e-12);
+                    assertThat(f).as("%s: not reduced less than with every floor at K_LL %s", where, kMin)
+                            .isLessThanOrEqualTo(Loads.basicFactor(kMin * reducible, n) + 1e-12);
+                }
+            }
+        }
+        // the random models must exercise stacks whose K_LL varies over their floors
+        Statistics.label("K_LL varies over a stack").collect(varied > 0);
+        Statistics.label("K_LL varies over a stack").coverage(c -> c.check(true).percentage(p -> p > 10));
     }
 
     private static void combinations(String where, TakeDown.Row r, CalcRecord col) {

@@ -52,6 +52,15 @@ class ResultPagesTest {
     }
 
     @Test
+    void columnPageNamesTheAreaAtItsLevelApartFromTheCumulativeAreaItIsReducedWith() {
+        DerivedMember c = alder.derived().members().stream().filter(m -> m.name().equals("Column B/2 below Level 1")).findFirst().orElseThrow();
+        String body = server.get(base() + "/members/" + c.id()).body();
+        UnitLabels us = UnitLabels.of(server.alder().info().units());
+        assertThat(body).contains("Area at this level", "A<sub>T</sub> supported, cumulative", html(us.area(c.result().record().step("A_T").result())),
+                "Kind (ASCE 7-16 Table 4.7-1)").doesNotContain("<dt>Tributary area</dt>");
+    }
+
+    @Test
     void memberListFiltersByLevelAndRoleAndShowsGoverningNumbers() {
         HttpResponse<String> r = server.get(base() + "/members?level=Level+1&role=COLUMN");
         String body = r.body();
@@ -72,6 +81,10 @@ class ResultPagesTest {
         assertThat(body.indexOf(">Roof<")).isLessThan(body.indexOf(">Level 1<"));
         for (TakeDown.Row row : t.rows())
             assertThat(body).contains(html(us.force(row.liveReduced())), html(us.force(row.lrfd())), row.lrfdCombination());
+        // the area this level brings, the A_T supported (cumulative) and the reducible part that gave f, each named
+        assertThat(body).contains("Area at this level", "A<sub>T</sub> supported, cumulative", "Reducible A<sub>T</sub>, cumulative",
+                "Influence area Σ K<sub>LL,i</sub> A<sub>T,r,i</sub>");
+        for (Step s : t.record().steps()) assertThat(body).contains(html(s.formula()), html(s.substituted()));
         assertThat(server.get(base() + "/takedowns").body()).contains("C/2", "B/4");
     }
 

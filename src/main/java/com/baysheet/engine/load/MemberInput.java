@@ -17,10 +17,13 @@ import java.util.List;
  * @param roofSlope       roof slope, in/ft (US) or percent (SI); NaN where no roof live load acts
  * @param stiffness       EI, lb·ft² (US) or kN·m² (SI); NaN for no deflection
  * @param onRoof          the member is at a roof level (occupiable roof rules, 4.8.3)
+ * @param floors          columns only, optional: each floor supported with the column's kind there and its floor areas,
+ *                        adding up, occupancy by occupancy, to the floor areas carried; empty for one K_LL throughout
  */
 public record MemberInput(String subject, MemberKind kind, Support support, int floorsSupported,
                           List<AreaStrip> strips, List<AreaLoad> areas, List<PointLoad> pointLoads,
-                          double selfWeight, double roofSlope, double stiffness, boolean onRoof) {
+                          double selfWeight, double roofSlope, double stiffness, boolean onRoof,
+                          List<SupportedFloor> floors) {
     public MemberInput {
         Check.text("subject", subject);
         Check.present("kind", kind);
@@ -49,6 +52,22 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
                     throw new InputError("pointLoads[" + i + "].x", pointLoads.get(i).x(), "lies off the member (length " + length + ")");
         if (strips.isEmpty() && areas.isEmpty() && pointLoads.isEmpty())
             throw new InputError("loads", "none", "a member needs at least one strip, area or point load");
+        floors = List.copyOf(Check.present("floors", floors));
+        if (!floors.isEmpty()) {
+            if (!axial) throw new InputError("floors", floors.size(), "only a column lists the floors it supports");
+            if (floorsSupported != floors.size())
+                throw new InputError("floorsSupported", floorsSupported, "must equal the number of floors listed (" + floors.size() + ")");
+            java.util.Set<String> names = new java.util.HashSet<>();
+            for (int i = 0; i < floors.size(); i++)
+                if (!names.add(floors.get(i).name())) throw new InputError("floors[" + i + "].name", floors.get(i).name(), "two floors have this name");
+        }
+    }
+
+    /** One K_LL throughout: the member's own. */
+    public MemberInput(String subject, MemberKind kind, Support support, int floorsSupported, List<AreaStrip> strips,
+                       List<AreaLoad> areas, List<PointLoad> pointLoads, double selfWeight, double roofSlope,
+                       double stiffness, boolean onRoof) {
+        this(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, List.of());
     }
 
     /** A beam on simple supports carrying strips, with no point loads. */
@@ -62,14 +81,19 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
     }
 
     public MemberInput withSubject(String s) {
-        return new MemberInput(s, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof);
+        return new MemberInput(s, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors);
     }
 
     public MemberInput withRoofSlope(double slope) {
-        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, slope, stiffness, onRoof);
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, slope, stiffness, onRoof, floors);
+    }
+
+    public MemberInput withFloors(List<SupportedFloor> f) {
+        return new MemberInput(subject, kind, support, f.isEmpty() ? floorsSupported : f.size(), strips, areas, pointLoads,
+                selfWeight, roofSlope, stiffness, onRoof, f);
     }
 
     public MemberInput withPointLoads(List<PointLoad> loads) {
-        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, loads, selfWeight, roofSlope, stiffness, onRoof);
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, loads, selfWeight, roofSlope, stiffness, onRoof, floors);
     }
 }

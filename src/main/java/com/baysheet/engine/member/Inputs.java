@@ -6,6 +6,7 @@ import com.baysheet.engine.load.AreaStrip;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.PointLoad;
 import com.baysheet.engine.load.Support;
+import com.baysheet.engine.load.SupportedFloor;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.reduction.CalcContext;
 import com.baysheet.engine.units.Quantity;
@@ -18,7 +19,9 @@ final class Inputs {
         if (!rec.writesText()) return; // the inputs block is for reading; a numbers-only pass skips it
         rec.inputText("edition", "Code edition", ctx.edition().id());
         rec.inputText("kind", "Member", in.kind().title());
-        rec.input("K_LL", "Live load element factor K_LL", ctx.edition().kll(in.kind()), Quantity.RATIO);
+        boolean kllVaries = SupportedFloor.kllVaries(ctx.edition(), in.kind(), in.floors());
+        rec.input("K_LL", kllVaries ? "Live load element factor K_LL at this level (each floor's below)" : "Live load element factor K_LL",
+                ctx.edition().kll(in.kind()), Quantity.RATIO);
         Support s = in.support();
         if (s instanceof Support.Simple sp) {
             rec.inputText("support", "Support", "simple span");
@@ -34,6 +37,10 @@ final class Inputs {
             rec.inputText("support", "Support", "axial");
         }
         rec.inputText("floors", "Floors supported", Integer.toString(in.floorsSupported()));
+        if (kllVaries)
+            for (SupportedFloor f : in.floors())
+                rec.inputText("floor[" + f.name() + "]", "Floor " + f.name(), f.kind().title() + ", K_LL " + rec.fmt(ctx.edition().kll(f.kind()))
+                        + ", floor area " + rec.show(f.area(), Quantity.AREA));
         book.floorAreas.forEach((id, a) -> occupancy(ctx, ctx.catalogue().get(id), a, rec));
         book.roofAreas.forEach((id, a) -> occupancy(ctx, ctx.catalogue().get(id), a, rec));
         loads(ctx, in, rec);

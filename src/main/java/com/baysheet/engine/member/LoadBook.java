@@ -62,7 +62,34 @@ final class LoadBook {
             }
             for (AreaShare a : p.areas()) b.area(b.occupancy("pointLoads[" + i + "].areas.occupancy", a.occupancy()), a.area(), x);
         }
+        b.checkFloors();
         return b;
+    }
+
+    /** Relative difference allowed between the floors' areas and the areas carried (rounding of sums in another order). */
+    static final double FLOOR_AREA_TOLERANCE = 1e-9;
+
+    /** The floors listed must hold, occupancy by occupancy, exactly the floor areas the loads carry. */
+    private void checkFloors() {
+        if (in.floors().isEmpty()) return;
+        Map<String, Double> listed = new LinkedHashMap<>();
+        for (int i = 0; i < in.floors().size(); i++) {
+            var areas = in.floors().get(i).areas();
+            for (int j = 0; j < areas.size(); j++) {
+                String field = "floors[" + i + "].areas[" + j + "].occupancy";
+                Occupancy o = occupancy(field, areas.get(j).occupancy());
+                if (o.isRoof()) throw new com.baysheet.engine.InputError(field, o.id(), "is a roof occupancy; a supported floor lists floor areas only");
+                listed.merge(o.id(), areas.get(j).area(), Double::sum);
+            }
+        }
+        java.util.Set<String> ids = new java.util.LinkedHashSet<>(floorAreas.keySet());
+        ids.addAll(listed.keySet());
+        for (String id : ids) {
+            double carried = floorAreas.getOrDefault(id, 0.0), given = listed.getOrDefault(id, 0.0);
+            if (Math.abs(carried - given) > FLOOR_AREA_TOLERANCE * Math.max(1, Math.max(carried, given)))
+                throw new com.baysheet.engine.InputError("floors", id + " " + given, "the floors listed must add up to the floor area of "
+                        + id + " the member carries (" + carried + ")");
+        }
     }
 
     boolean isRoofSource(String source) {

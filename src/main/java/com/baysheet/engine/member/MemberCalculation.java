@@ -33,15 +33,16 @@ public final class MemberCalculation {
     public static MemberResult calculate(CalcContext ctx, MemberInput in) {
         RecordBuilder rec = RecordBuilder.numbersOnly(in.subject(), ctx.edition().id(), ctx.system());
         Outcome o = run(ctx, in, rec);
-        return new MemberResult(o.record, o.left, o.right, () -> run(ctx, in, new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system())).record);
+        return new MemberResult(o.record, o.left, o.right, o.reduction, () -> run(ctx, in, new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system())).record);
     }
 
-    private record Outcome(CalcRecord record, EndShare left, EndShare right) {}
+    private record Outcome(CalcRecord record, EndShare left, EndShare right, LiveFactors reduction) {}
 
     private static Outcome run(CalcContext ctx, MemberInput in, RecordBuilder rec) {
         LoadBook book = LoadBook.of(ctx, in);
         Inputs.record(ctx, in, book, rec);
-        Map<String, Double> factors = factors(ctx, in, book, rec);
+        LiveFactors[] reduction = new LiveFactors[1];
+        Map<String, Double> factors = factors(ctx, in, book, rec, reduction);
         BeamLoads floor0 = book.combined(null, false), floor = book.combined(factors, false);
         BeamLoads roof0 = book.combined(null, true), roof = book.combined(factors, true);
         boolean halfL = halfLAllowed(ctx, book);
@@ -50,18 +51,19 @@ public final class MemberCalculation {
         rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1)));
         Cautions.standard(ctx, book, rec);
         return new Outcome(rec.build(), share(ctx, in, book, true), in.kind().isColumn()
-                || in.support() instanceof Support.Cantilever ? null : share(ctx, in, book, false));
+                || in.support() instanceof Support.Cantilever ? null : share(ctx, in, book, false), reduction[0]);
     }
 
     /** Multipliers on every live source: floor reduction for floor sources, Lr/L0 for roof sources. */
-    private static Map<String, Double> factors(CalcContext ctx, MemberInput in, LoadBook book, RecordBuilder rec) {
+    private static Map<String, Double> factors(CalcContext ctx, MemberInput in, LoadBook book, RecordBuilder rec, LiveFactors[] reduction) {
         Map<String, Double> f = new LinkedHashMap<>();
         if (!book.floorAreas.isEmpty()) {
             if (in.onRoof())
                 rec.info("Occupiable roof: its live load follows the floor rules.", ctx.edition().clause("roof.occupiable"));
-            LiveFactors lf = ReductionMethods.forEdition(ctx).reduce(ctx, in.kind(), book.floorAreas, in.floorsSupported(),
-                    in.support().span(), rec);
+            LiveFactors lf = ReductionMethods.forEdition(ctx).reduce(ctx, in.kind(), book.floorAreas, in.floors(),
+                    in.floorsSupported(), in.support().span(), rec);
             f.putAll(lf.bySource());
+            reduction[0] = lf;
         }
         if (!book.roofAreas.isEmpty()) {
             // A_T of 4.8.2 is the ordinary roof area: other roof rows are not reduced and must not lower R1

@@ -1,7 +1,9 @@
 package com.baysheet.engine.member;
 
 import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.reduction.LiveFactors;
 
+import java.util.Optional;
 import java.util.function.Supplier;
 
 /**
@@ -16,13 +18,15 @@ public final class MemberResult {
     private final CalcRecord numbers;
     private final EndShare left;
     private final EndShare right;
+    private final LiveFactors reduction;
     private Supplier<CalcRecord> writer;
     private volatile CalcRecord record;
 
-    MemberResult(CalcRecord numbers, EndShare left, EndShare right, Supplier<CalcRecord> writer) {
+    MemberResult(CalcRecord numbers, EndShare left, EndShare right, LiveFactors reduction, Supplier<CalcRecord> writer) {
         this.numbers = numbers;
         this.left = left;
         this.right = right;
+        this.reduction = reduction;
         this.writer = writer;
     }
 
@@ -45,6 +49,12 @@ public final class MemberResult {
 
     public EndShare right() { return right; }
 
+    /**
+     * The floor live load reduction as the record states it (areas, influence area, factor), or empty where the
+     * member carries no floor live load.
+     */
+    public Optional<LiveFactors> floorReduction() { return Optional.ofNullable(reduction); }
+
     /** A result by key without writing the record's text; NaN when absent. */
     public double value(String key) { return numbers.result(key); }
 
@@ -63,6 +73,6 @@ public final class MemberResult {
     /** The same calculation under another subject. */
     public MemberResult withSubject(String subject) {
         MemberResult base = this;
-        return new MemberResult(numbers.withSubject(subject), left, right, () -> base.record().withSubject(subject));
+        return new MemberResult(numbers.withSubject(subject), left, right, reduction, () -> base.record().withSubject(subject));
     }
 }

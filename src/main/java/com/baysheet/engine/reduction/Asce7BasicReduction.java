@@ -4,10 +4,12 @@ import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.code.MemberKind;
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.code.ReductionRule;
+import com.baysheet.engine.load.SupportedFloor;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.units.Quantity;
 
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -16,17 +18,20 @@ import java.util.Map;
  * slab cap (4.7.6), and the partition allowance (4.3.2) as its own source.
  *
  * <p>Mixed occupancy (common practice, no code clause): one factor from K_LL times the reducible area; it
- * reduces the reducible loads only; the others add unreduced.
+ * reduces the reducible loads only; the others add unreduced. A column whose K_LL differs from floor to floor
+ * takes the influence area Σ K_LL,i × (reducible A_T,i) over its floors ({@link InfluenceArea}).
  */
 final class Asce7BasicReduction implements FloorReductionMethod {
     @Override
     public String id() { return "asce7-basic"; }
 
     @Override
-    public LiveFactors reduce(CalcContext ctx, MemberKind kind, Map<String, Double> areas, int floors, double span,
-                              RecordBuilder rec) {
+    public LiveFactors reduce(CalcContext ctx, MemberKind kind, Map<String, Double> areas, List<SupportedFloor> byFloor,
+                              int floors, double span, RecordBuilder rec) {
         Edition ed = ctx.edition();
-        double kll = rec.step("K_LL", "Live load element factor, " + kind.title().toLowerCase(), "K_LL",
+        boolean perFloor = SupportedFloor.kllVaries(ed, kind, byFloor);
+        double kll = perFloor ? InfluenceArea.floorFactors(ctx, kind, byFloor, rec)
+                : rec.step("K_LL", "Live load element factor, " + kind.title().toLowerCase(), "K_LL",
                 "Table value", ed.kll(kind), Quantity.RATIO, ed.clause("reduction.kll"));
 
         double total = 0, reducible = 0;
@@ -54,8 +59,13 @@ final class Asce7BasicReduction implements FloorReductionMethod {
             }
         }
 
-        double factor = 1;
-        if (reducible > 0) factor = basicFactor(ctx, kll, reducible, total, floors, rec);
+        double factor = 1, influence = 0;
+        if (reducible > 0) {
+            influence = perFloor
+                    ? InfluenceArea.perFloor(ctx, byFloor, o -> reducible(effectiveRule(ctx, o, null), floors), reducible < total, rec)
+                    : InfluenceArea.single(ctx, kll, reducible, total, rec);
+            factor = basicFactor(ctx, influence, floors, rec);
+        }
 
         Map<String, Double> bySource = new LinkedHashMap<>();
         for (String id : areas.keySet()) {
@@ -68,16 +78,13 @@ final class Asce7BasicReduction implements FloorReductionMethod {
                     ed.clause("reduction.eq"));
             partition(ctx, o, f, bySource, rec);
         }
-        return new LiveFactors(bySource, total, reducible, kll, factor);
+        return new LiveFactors(bySource, total, reducible, influence, kll, factor);
     }
 
-    private double basicFactor(CalcContext ctx, double kll, double reducible, double total, int floors, RecordBuilder rec) {
+    /** The factor of Eq. 4.7-1 with its threshold and lower limit, from the influence area {@code kat}. */
+    private double basicFactor(CalcContext ctx, double kat, int floors, RecordBuilder rec) {
         Edition ed = ctx.edition();
         double threshold = ctx.constant("threshold");
-        String area = reducible < total ? "A_T,r" : "A_T";
-        double kat = rec.step("K_LL·A_T", "Influence area", "K_LL × " + area,
-                rec.fmt(kll) + " × " + rec.num(reducible, Quantity.AREA), kll * reducible, Quantity.AREA,
-                ed.clause("reduction.basic"));
         if (kat < threshold) {
             rec.info("K_LL·A_T = " + rec.show(kat, Quantity.AREA) + " is below " + rec.show(threshold, Quantity.AREA)
                     + ": no reduction.", ed.clause("reduction.basic"));
