@@ -97,7 +97,7 @@ class CalcCommandTest {
                  "customOccupancies": [{"id": "archive", "name": "Archive", "uniform": 90, "rule": "ORDINARY"}],
                  "strips": [{"occupancy": "archive", "width": 10, "from": 0, "to": 20}]}""");
         assertThat(r.exit()).as(r.err()).isZero();
-        assertThat(r.result("L0.R1")).isCloseTo(90 * 10 * 10, within(1e-9));
+        assertThat(r.result("L0.RA")).isCloseTo(90 * 10 * 10, within(1e-9));
     }
 
     @Test

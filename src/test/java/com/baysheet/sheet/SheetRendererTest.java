@@ -57,6 +57,14 @@ class SheetRendererTest {
     }
 
     @Test
+    void reactionsReadRaAndRbInTheTableAndTheDiagram() {
+        // R1, R2 are the roof factors of Eq. 4.8-1; the reactions are R_A (left) and R_B (right)
+        assertThat(text).contains(sq("Left reaction R_A")).contains(sq("Right reaction R_B"))
+                .contains(sq("R_A = ")).contains(sq("R_B = "));
+        assertThat(text).doesNotContain(sq("R1 = ")).doesNotContain(sq("Left reaction R1"));
+    }
+
+    @Test
     void veraPdfFindsItPdfA1b() {
         assertThat(PdfA.failures(issued.bytes())).isEmpty();
     }

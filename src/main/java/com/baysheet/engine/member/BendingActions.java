@@ -21,19 +21,26 @@ import java.util.List;
 final class BendingActions {
     private BendingActions() {}
 
-    /** Effects reported for a support kind: R1, R2, V, M+, M−. */
+    /**
+     * Effects reported for a support kind: the reactions R_A (left, x = 0) and R_B (right, x = span), V, M+, M−.
+     * The reactions are not R1, R2: on roof sheets those are the reduction factors of Eq. 4.8-1.
+     */
     enum Effect {
-        R1("R1", "Left reaction"), R2("R2", "Right reaction"), V("V", "Maximum shear"),
-        MPOS("M+", "Maximum positive moment"), MNEG("M-", "Maximum negative moment");
-        final String key, title, lower;
-        Effect(String key, String title) { this.key = key; this.title = title; this.lower = title.toLowerCase(); }
+        RA("RA", "R_A", "Left reaction R_A"), RB("RB", "R_B", "Right reaction R_B"), V("V", "V", "Maximum shear"),
+        MPOS("M+", "M+", "Maximum positive moment"), MNEG("M-", "M-", "Maximum negative moment");
+        /** key in result keys ("D.RA"), symbol in step symbols ("R_A.D"). */
+        final String key, symbol, title, lower;
+        Effect(String key, String symbol, String title) {
+            this.key = key; this.symbol = symbol; this.title = title;
+            this.lower = Character.toLowerCase(title.charAt(0)) + title.substring(1);
+        }
         Quantity q() { return this == MPOS || this == MNEG ? Quantity.MOMENT : Quantity.FORCE; }
     }
 
     static List<Effect> effects(Support s) {
-        if (s instanceof Support.Cantilever) return List.of(Effect.R1, Effect.V, Effect.MNEG);
-        if (s instanceof Support.Overhang) return List.of(Effect.R1, Effect.R2, Effect.V, Effect.MPOS, Effect.MNEG);
-        return List.of(Effect.R1, Effect.R2, Effect.V, Effect.MPOS);
+        if (s instanceof Support.Cantilever) return List.of(Effect.RA, Effect.V, Effect.MNEG);
+        if (s instanceof Support.Overhang) return List.of(Effect.RA, Effect.RB, Effect.V, Effect.MPOS, Effect.MNEG);
+        return List.of(Effect.RA, Effect.RB, Effect.V, Effect.MPOS);
     }
 
     static void record(CalcContext ctx, MemberInput in, LoadBook book, BeamLoads floor0, BeamLoads floor,
@@ -101,7 +108,7 @@ final class BendingActions {
                 if (e == Effect.MNEG ? v < best : v > best) { best = v; at = position(a, e, s); }
             }
             out[i] = best;
-            rec.step(e.key + "." + c, e.title + ", " + what, formula(e, s), where(rec, e, at, s), best, e.q(), clause);
+            rec.step(e.symbol + "." + c, e.title + ", " + what, formula(e, s), where(rec, e, at, s), best, e.q(), clause);
             rec.result(c + "." + e.key, e.title + ", " + what, best, e.q());
         }
         if (!Double.isNaN(ei) && !c.equals("L0")) {
@@ -114,8 +121,8 @@ final class BendingActions {
 
     static double value(BeamActions a, Effect e, Support s) {
         return switch (e) {
-            case R1 -> a.left();
-            case R2 -> a.right();
+            case RA -> a.left();
+            case RB -> a.right();
             case V -> Math.abs(a.maxShear());
             case MPOS -> Math.max(0, a.maxMoment());
             case MNEG -> Math.min(0, a.minMoment());
@@ -124,8 +131,8 @@ final class BendingActions {
 
     private static double position(BeamActions a, Effect e, Support s) {
         return switch (e) {
-            case R1 -> 0;
-            case R2 -> s.span();
+            case RA -> 0;
+            case RB -> s.span();
             case V -> a.maxShearAt();
             case MPOS -> a.maxMomentAt();
             case MNEG -> a.minMomentAt();
@@ -135,8 +142,8 @@ final class BendingActions {
     private static String formula(Effect e, Support s) {
         boolean cant = s instanceof Support.Cantilever;
         return switch (e) {
-            case R1 -> cant ? "R = W" : "R1 = W − R2";
-            case R2 -> "R2 = Σ(load × x) / ℓ";
+            case RA -> cant ? "R = W" : "R_A = W − R_B";
+            case RB -> "R_B = Σ(load × x) / ℓ";
             case V -> "V_max = max |V(x)|";
             case MPOS -> "M+ = max M(x), at zero shear or under a load";
             case MNEG -> cant ? "M− = −Σ(load × x) at the fixed end" : "M− = min M(x), over the support";
@@ -144,7 +151,7 @@ final class BendingActions {
     }
 
     private static String where(RecordBuilder rec, Effect e, double at, Support s) {
-        if (e == Effect.R1 || e == Effect.R2) return "statics";
+        if (e == Effect.RA || e == Effect.RB) return "statics";
         return "at x = " + rec.show(at, Quantity.LENGTH);
     }
 
@@ -172,19 +179,19 @@ final class BendingActions {
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
             ConcentratedCheck.Effect ce = switch (e) {
-                case R1 -> ConcentratedCheck.Effect.LEFT_REACTION;
-                case R2 -> ConcentratedCheck.Effect.RIGHT_REACTION;
+                case RA -> ConcentratedCheck.Effect.LEFT_REACTION;
+                case RB -> ConcentratedCheck.Effect.RIGHT_REACTION;
                 case V -> ConcentratedCheck.Effect.SHEAR;
                 case MPOS -> ConcentratedCheck.Effect.MAX_MOMENT;
                 case MNEG -> ConcentratedCheck.Effect.MIN_MOMENT;
             };
             ConcentratedCheck.Placement pl = ConcentratedCheck.place(s, p, side, ce);
             double v = e == Effect.MNEG ? Math.min(0, pl.effect()) : e == Effect.MPOS ? Math.max(0, pl.effect()) : Math.abs(pl.effect());
-            rec.step(e.key + ".Lc", e.title + ", concentrated load", "placed for the largest effect",
+            rec.step(e.symbol + ".Lc", e.title + ", concentrated load", "placed for the largest effect",
                     "centre at x = " + rec.show(pl.at(), Quantity.LENGTH), v, e.q(), ed.clause("concentrated"));
             rec.result("Lc." + e.key, e.title + ", concentrated load", v, e.q());
             boolean conc = Math.abs(v) > Math.abs(l[i]);
-            if (conc) design[i] = e == Effect.R1 || e == Effect.R2 ? Math.copySign(v, l[i] == 0 ? 1 : l[i]) : v;
+            if (conc) design[i] = e == Effect.RA || e == Effect.RB ? Math.copySign(v, l[i] == 0 ? 1 : l[i]) : v;
             rec.resultText("gov." + e.key, e.title + ": governing live load", conc ? "concentrated" : "uniform");
         }
         return design;
