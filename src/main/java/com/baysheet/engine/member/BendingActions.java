@@ -44,7 +44,7 @@ final class BendingActions {
     }
 
     static void record(CalcContext ctx, MemberInput in, LoadBook book, BeamLoads floor0, BeamLoads floor,
-                       BeamLoads roof, boolean halfL, RecordBuilder rec) {
+                       BeamLoads roof0, BeamLoads roof, boolean halfL, RecordBuilder rec) {
         Edition ed = ctx.edition();
         Support s = in.support();
         List<Effect> effects = effects(s);
@@ -74,6 +74,8 @@ final class BendingActions {
                .result("ASD." + e.key, e.title + ", service (" + a.combination().name() + ")", a.value(), e.q())
                .governs("LRFD." + e.key);
         }
+        if (s instanceof Support.Overhang o && !(floor0.isEmpty() && roof0.isEmpty()))
+            MinimumReactions.record(ctx, o, book, floor0, roof0, rec);
         if (halfL && !floor0.isEmpty()) rec.info("0.5 L permitted in LRFD 3 (every L0 at most 100 psf, no garage or assembly use).", ed.clause("combo.halfL"));
         if (!Double.isNaN(ei)) {
             BeamLoads total = new BeamLoads().add(book.dead, 1).add(floor, 1).add(roof, 1);
@@ -163,12 +165,7 @@ final class BendingActions {
     private static double[] concentrated(CalcContext ctx, LoadBook book, Support s, List<Effect> effects, double[] l,
                                          RecordBuilder rec) {
         double[] design = l.clone();
-        Occupancy worst = null;
-        for (String id : book.floorAreas.keySet()) {
-            Occupancy o = ctx.catalogue().get(id);
-            if (o.concentrated(ctx.system()) > 0 && (worst == null || o.concentrated(ctx.system()) > worst.concentrated(ctx.system())))
-                worst = o;
-        }
+        Occupancy worst = worstConcentrated(ctx, book);
         if (worst == null) return design;
         Edition ed = ctx.edition();
         double p = worst.concentrated(ctx.system()), side = worst.contactSide(ctx.system());
@@ -195,5 +192,16 @@ final class BendingActions {
             rec.resultText("gov." + e.key, e.title + ": governing live load", conc ? "concentrated" : "uniform");
         }
         return design;
+    }
+
+    /** The floor occupancy on the member with the largest concentrated load (4.4), or null where none has one. */
+    static Occupancy worstConcentrated(CalcContext ctx, LoadBook book) {
+        Occupancy worst = null;
+        for (String id : book.floorAreas.keySet()) {
+            Occupancy o = ctx.catalogue().get(id);
+            if (o.concentrated(ctx.system()) > 0 && (worst == null || o.concentrated(ctx.system()) > worst.concentrated(ctx.system())))
+                worst = o;
+        }
+        return worst;
     }
 }
