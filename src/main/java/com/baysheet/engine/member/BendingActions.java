@@ -99,18 +99,22 @@ final class BendingActions {
         for (BeamLoads p : patterns) acts.add(MemberCalculation.solve(s, p, ei));
         BeamActions full = acts.get(0);
         double w = patterns.get(0).total();
-        rec.step("W." + c, "Total " + what, "W = Σ w·ℓ + Σ P", "sum of loads", w, Quantity.FORCE, clause);
+        rec.step("W." + c, "Total " + what, "W = Σ w·ℓ + Σ P", StaticsText.total(rec, patterns.get(0)), w, Quantity.FORCE, clause);
         double[] out = new double[effects.size()];
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
-            double best = 0, at = position(full, e, s);
-            for (BeamActions a : acts) {
-                double v = value(a, e, s);
+            double best = 0;
+            int k = 0;
+            for (int j = 0; j < acts.size(); j++) {
+                double v = value(acts.get(j), e, s);
                 // M− is the most negative; every other effect the largest (a reaction's uplift is not a gravity design value)
-                if (e == Effect.MNEG ? v < best : v > best) { best = v; at = position(a, e, s); }
+                if (e == Effect.MNEG ? v < best : v > best) { best = v; k = j; }
             }
             out[i] = best;
-            rec.step(e.symbol + "." + c, e.title + ", " + what, formula(e, s), where(rec, e, at, s), best, e.q(), clause);
+            String placed = patterns.size() > 1 && k > 0 ? " (" + PATTERNS[k] + ")" : "";
+            boolean closed = StaticsText.simpleUniform(s, patterns.get(k));
+            rec.step(e.symbol + "." + c, e.title + ", " + what + placed, formula(e, s, closed),
+                    substituted(rec, e, s, patterns.get(k), acts.get(k), closed), best, e.q(), clause);
             rec.result(c + "." + e.key, e.title + ", " + what, best, e.q());
         }
         if (!Double.isNaN(ei) && !c.equals("L0")) {
@@ -120,6 +124,9 @@ final class BendingActions {
         }
         return out;
     }
+
+    /** The placements of {@link #patterns}, as the record names them. */
+    static final String[] PATTERNS = {"live load on the whole member", "live load on the back span only", "live load on the overhang only"};
 
     static double value(BeamActions a, Effect e, Support s) {
         return switch (e) {
@@ -131,30 +138,27 @@ final class BendingActions {
         };
     }
 
-    private static double position(BeamActions a, Effect e, Support s) {
-        return switch (e) {
-            case RA -> 0;
-            case RB -> s.span();
-            case V -> a.maxShearAt();
-            case MPOS -> a.maxMomentAt();
-            case MNEG -> a.minMomentAt();
-        };
-    }
-
-    private static String formula(Effect e, Support s) {
+    private static String formula(Effect e, Support s, boolean closed) {
         boolean cant = s instanceof Support.Cantilever;
         return switch (e) {
-            case RA -> cant ? "R = W" : "R_A = W − R_B";
-            case RB -> "R_B = Σ(load × x) / ℓ";
-            case V -> "V_max = max |V(x)|";
-            case MPOS -> "M+ = max M(x), at zero shear or under a load";
-            case MNEG -> cant ? "M− = −Σ(load × x) at the fixed end" : "M− = min M(x), over the support";
+            case RA -> cant ? "R = W" : closed ? "R_A = wℓ/2" : "ΣM_B = 0: R_A = Σ load × (ℓ − x) / ℓ";
+            case RB -> closed ? "R_B = wℓ/2" : "ΣM_A = 0: R_B = Σ load × x / ℓ";
+            case V -> closed ? "V = wℓ/2" : "V_max = max |V(x)|";
+            case MPOS -> closed ? "M+ = wℓ²/8" : "M+ = max M(x), at zero shear or under a load";
+            case MNEG -> cant ? "M− = −Σ load × x at the fixed end" : "M− = min M(x), over the support";
         };
     }
 
-    private static String where(RecordBuilder rec, Effect e, double at, Support s) {
-        if (e == Effect.RA || e == Effect.RB) return "statics";
-        return "at x = " + rec.show(at, Quantity.LENGTH);
+    /** The numbers put in, from the loads of the pattern that gave the value (x from the left support or fixed end). */
+    private static String substituted(RecordBuilder rec, Effect e, Support s, BeamLoads loads, BeamActions a, boolean closed) {
+        if (closed) return StaticsText.closedForm(rec, e, s, loads);
+        return switch (e) {
+            case RA, RB -> StaticsText.reaction(rec, e, s, loads);
+            case V -> "at x = " + rec.show(a.maxShearAt(), Quantity.LENGTH);
+            case MPOS -> "at x = " + rec.show(a.maxMomentAt(), Quantity.LENGTH);
+            case MNEG -> s instanceof Support.Cantilever ? StaticsText.fixedMoment(rec, loads)
+                    : "at x = " + rec.show(a.minMomentAt(), Quantity.LENGTH);
+        };
     }
 
     /**

@@ -97,11 +97,10 @@ final class MinimumReactions {
     private static Least least(CalcContext ctx, LoadBook book, Support.Overhang s, BeamLoads live,
                                BendingActions.Effect e, boolean floor) {
         List<BeamLoads> ps = BendingActions.patterns(s, live);
-        String[] names = {"live load on the whole member", "live load on the back span only", "live load on the overhang only"};
         Least best = new Least(0, "no live load");
         for (int i = 0; i < ps.size(); i++) {
             double v = BendingActions.value(MemberCalculation.solve(s, ps.get(i), Double.NaN), e, s);
-            if (v < best.value) best = new Least(v, names[i]);
+            if (v < best.value) best = new Least(v, BendingActions.PATTERNS[i]);
         }
         Occupancy o = floor ? BendingActions.worstConcentrated(ctx, book) : null;
         if (o == null) return best;
@@ -136,11 +135,13 @@ final class MinimumReactions {
 
     /** The combination with only the cases the member carries: "1.2D + 1.6L". */
     static String brief(Combination c, boolean hasL, boolean hasLr) {
-        StringBuilder b = new StringBuilder(Display.plain(c.d())).append("D");
-        if (hasL && c.l() != 0) b.append(" + ").append(Display.plain(c.l())).append("L");
-        if (hasLr && c.lr() != 0) b.append(" + ").append(Display.plain(c.lr())).append("Lr");
+        StringBuilder b = new StringBuilder(factor(c.d())).append("D");
+        if (hasL && c.l() != 0) b.append(" + ").append(factor(c.l())).append("L");
+        if (hasLr && c.lr() != 0) b.append(" + ").append(factor(c.lr())).append("Lr");
         return b.toString();
     }
+
+    private static String factor(double f) { return f == 1 ? "" : Display.plain(f); }
 
     private static String substituted(RecordBuilder rec, Combination c, double d, double l, double lr, boolean hasL, boolean hasLr) {
         if (!rec.writesText()) return "";
@@ -152,6 +153,7 @@ final class MinimumReactions {
 
     private static String term(RecordBuilder rec, double factor, double v) {
         String n = rec.num(v, Quantity.FORCE);
-        return Display.plain(factor) + " × " + (v < 0 ? "(" + n + ")" : n);
+        String shown = v < 0 ? "(" + n + ")" : n;
+        return factor == 1 ? shown : Display.plain(factor) + " × " + shown;
     }
 }
