@@ -113,8 +113,9 @@ final class BendingActions {
             out[i] = best;
             String placed = patterns.size() > 1 && k > 0 ? " (" + PATTERNS[k] + ")" : "";
             boolean closed = StaticsText.simpleUniform(s, patterns.get(k));
-            rec.step(e.symbol + "." + c, e.title + ", " + what + placed, formula(e, s, closed),
-                    substituted(rec, e, s, patterns.get(k), acts.get(k), closed), best, e.q(), clause);
+            String sub = substituted(rec, e, s, patterns.get(k), acts.get(k), closed);
+            if ((e == Effect.RA || e == Effect.RB) && value(acts.get(k), e, s) < 0 && rec.writesText()) sub += " < 0, taken as 0 (see the least reactions)";
+            rec.step(e.symbol + "." + c, e.title + ", " + what + placed, formula(e, s, closed), sub, best, e.q(), clause);
             rec.result(c + "." + e.key, e.title + ", " + what, best, e.q());
         }
         if (!Double.isNaN(ei) && !c.equals("L0")) {

@@ -71,9 +71,16 @@ class StaticsTextTest {
         for (String e : List.of("R_A.D", "R_B.D", "R_A.L", "R_B.L", "W.D")) {
             Step st = r.step(e);
             assertThat(st.formula()).as(e).contains(e.startsWith("W") ? "Σ" : e.startsWith("R_A") ? "ΣM_B = 0" : "ΣM_A = 0");
-            // tolerance from the rounding of every number written: 0.5 % of the sum of the absolute terms
-            double v = Expression.eval(st.substituted()), scale = Expression.evalAbsolute(st.substituted());
-            assertThat(v).as("%s: %s = %s", e, st.substituted(), st.shown()).isCloseTo(st.result() / 1000, within(0.015 * scale + 1e-9));
+            // tolerance from the rounding of every number written: 1.5 % of the sum of the absolute terms
+            String clamped = " < 0, taken as 0 (see the least reactions)", text = st.substituted().replace(clamped, "");
+            double v = Expression.eval(text), tol = 0.015 * Expression.evalAbsolute(text) + 1e-9;
+            if (st.substituted().endsWith(clamped)) {
+                // a reaction the loads pull upward is reported as 0 here (uplift is in the least reactions) and says so
+                assertThat(st.result()).as(e).isZero();
+                assertThat(v).as("%s: %s", e, st.substituted()).isLessThan(tol);
+            } else {
+                assertThat(v).as("%s: %s = %s", e, st.substituted(), st.shown()).isCloseTo(st.result() / 1000, within(tol));
+            }
         }
     }
 
