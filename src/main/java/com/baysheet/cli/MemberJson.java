@@ -63,8 +63,9 @@ final class MemberJson {
 
     private static DesignOptions options(Fields top) {
         if (!top.has("options")) return DesignOptions.DEFAULT;
-        Fields o = new Fields(top.node("options"), "options", Set.of("partitionAllowance", "reducePartitions"));
-        return new DesignOptions(o.flag("partitionAllowance", false), o.flag("reducePartitions", false));
+        Fields o = new Fields(top.node("options"), "options", Set.of("partitionAllowance", "reducePartitions", "upliftReducedDead"));
+        return new DesignOptions(o.flag("partitionAllowance", false), o.flag("reducePartitions", false),
+                o.flag("upliftReducedDead", false));
     }
 
     private static Support support(Fields s) {

@@ -7,11 +7,13 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Pattern;
 
 /**
  * What changed between two revisions of a sheet: the inputs and the results whose value or unit differ,
  * and those present in only one, side by side in the order of the later record (then the earlier one's
- * leftovers). Values are compared at full precision; the shown text is what the page prints.
+ * leftovers). Values are compared at full precision; the shown text is what the page prints. An earlier
+ * revision's reactions keyed R1, R2 compare with today's RA, RB (renamed so as not to read as the roof factors).
  */
 public record RevisionComparison(List<Change> inputs, List<Change> results, int unchangedInputs, int unchangedResults) {
     public enum Kind { CHANGED, ADDED, REMOVED }
@@ -26,8 +28,25 @@ public record RevisionComparison(List<Change> inputs, List<Change> results, int 
 
     public static RevisionComparison of(CalcRecord before, CalcRecord after) {
         List<Change> in = diff(before.inputs(), after.inputs());
-        List<Change> out = diff(before.results(), after.results());
+        List<Change> out = diff(current(before.results()), current(after.results()));
         return new RevisionComparison(in, out, unchanged(after.inputs(), in), unchanged(after.results(), out));
+    }
+
+    /** Reaction keys of records written before the reactions became R_A, R_B ("D.R1" reads as "D.RA"). */
+    static String currentKey(String key) {
+        if (!LEGACY_REACTION.matcher(key).matches()) return key;
+        return key.substring(0, key.length() - 1) + (key.endsWith("1") ? "A" : "B");
+    }
+
+    private static final Pattern LEGACY_REACTION = Pattern.compile("[A-Za-z0-9]+\\.R[12]");
+
+    private static List<Entry> current(List<Entry> results) {
+        List<Entry> out = new ArrayList<>(results.size());
+        for (Entry e : results) {
+            String k = currentKey(e.key());
+            out.add(k.equals(e.key()) ? e : new Entry(k, e.label(), e.value(), e.unit(), e.shown(), e.shownUnit()));
+        }
+        return out;
     }
 
     public boolean same() { return inputs.isEmpty() && results.isEmpty(); }

@@ -116,8 +116,8 @@ final class LoadDiagram {
         }
         pin(x(0));
         roller(x(s.span()));
-        reaction(x(0), "R1 = " + force(s.leftReaction()));
-        reaction(x(s.span()), "R2 = " + force(s.rightReaction()));
+        reaction(x(0), "R_A = " + force(s.leftReaction()));
+        reaction(x(s.span()), "R_B = " + force(s.rightReaction()));
     }
 
     private String force(double v) { return Display.of(v, Quantity.FORCE, system); }

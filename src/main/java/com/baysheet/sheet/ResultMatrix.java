@@ -14,7 +14,8 @@ import java.util.Map;
 /**
  * The results as an engineer tabulates them: one row per action (reactions, shear, moments, axial load),
  * one column per load case (dead, live unreduced and reduced, concentrated, design live, roof live, roof
- * concentrated, design roof live, factored, service). A result key reads "case.action" ("D.R1", "LRFD.M+"); the matrix only arranges the
+ * concentrated, design roof live, factored, service). A result key reads "case.action" ("D.RA", "LRFD.M+",
+ * "LRFD.RA,min" for the least reaction of an overhanging beam); the matrix only arranges the
  * record's shown values. Keys of another form are returned for a plain list.
  */
 final class ResultMatrix {
@@ -34,8 +35,10 @@ final class ResultMatrix {
         CASES.put("Lrdes", "Design roof live");
         CASES.put("LRFD", "Factored (LRFD)");
         CASES.put("ASD", "Service (ASD)");
-        ACTIONS.put("R1", "Left reaction R1");
-        ACTIONS.put("R2", "Right reaction R2");
+        ACTIONS.put("RA", "Left reaction R_A");
+        ACTIONS.put("RB", "Right reaction R_B");
+        ACTIONS.put("RA,min", "Least left reaction R_A (uplift where negative)");
+        ACTIONS.put("RB,min", "Least right reaction R_B (uplift where negative)");
         ACTIONS.put("V", "Maximum shear V");
         ACTIONS.put("M+", "Maximum positive moment M+");
         ACTIONS.put("M-", "Maximum negative moment M−");

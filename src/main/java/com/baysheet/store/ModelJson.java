@@ -31,7 +31,7 @@ public final class ModelJson {
     public static ProjectInfo project(JsonNode n, String edition) {
         return new ProjectInfo(text(n, "jobNumber"), text(n, "name"), optText(n, "address"), optText(n, "client"),
                 n.hasNonNull("edition") ? text(n, "edition") : edition, UnitSystem.parse("units", text(n, "units")),
-                flag(n, "partitionAllowance"), flag(n, "reducePartitions"));
+                flag(n, "partitionAllowance"), flag(n, "reducePartitions"), flag(n, "upliftReducedDead"));
     }
 
     public static Grid grid(JsonNode n) {

@@ -11,7 +11,8 @@ import com.baysheet.engine.units.UnitSystem;
  * once levels exist, since every stored length and load is in that system) and the design options.
  */
 public record ProjectInfo(String jobNumber, String name, String address, String client, String edition,
-                          UnitSystem units, boolean partitionAllowance, boolean reducePartitions) {
+                          UnitSystem units, boolean partitionAllowance, boolean reducePartitions,
+                          boolean upliftReducedDead) {
     public ProjectInfo {
         jobNumber = limited("jobNumber", Check.text("jobNumber", jobNumber).strip(), 40);
         name = limited("name", Check.text("name", name).strip(), 200);
@@ -22,7 +23,13 @@ public record ProjectInfo(String jobNumber, String name, String address, String 
         Check.present("units", units);
     }
 
-    public DesignOptions options() { return new DesignOptions(partitionAllowance, reducePartitions); }
+    /** A project with the uplift option off (0.9D + 1.6L not taken for minimum reactions). */
+    public ProjectInfo(String jobNumber, String name, String address, String client, String edition,
+                       UnitSystem units, boolean partitionAllowance, boolean reducePartitions) {
+        this(jobNumber, name, address, client, edition, units, partitionAllowance, reducePartitions, false);
+    }
+
+    public DesignOptions options() { return new DesignOptions(partitionAllowance, reducePartitions, upliftReducedDead); }
 
     private static String limited(String field, String v, int max) {
         if (v.length() > max) throw new InputError(field, v.length() + " characters", "must be at most " + max + " characters");

@@ -17,7 +17,7 @@ import java.util.List;
 /** Projects: listing, creating, settings, and the version that guards every change to a project. */
 public final class ProjectStore {
     private static final String COLUMNS = "id, version, job_number, name, address, client, edition, unit_system, "
-            + "partition_allowance, reduce_partitions";
+            + "partition_allowance, reduce_partitions, uplift_reduced_dead";
 
     private final Sql sql;
 
@@ -47,8 +47,8 @@ public final class ProjectStore {
             requireFreeJobNumber(c, info.jobNumber(), -1);
             long id;
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO project (version, job_number, name, address, "
-                    + "client, edition, unit_system, partition_allowance, reduce_partitions, created_at, updated_at) "
-                    + "VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
+                    + "client, edition, unit_system, partition_allowance, reduce_partitions, uplift_reduced_dead, created_at, "
+                    + "updated_at) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
                 int i = bind(ps, info);
                 ps.setObject(i++, OffsetDateTime.now());
                 ps.setObject(i, OffsetDateTime.now());
@@ -73,7 +73,8 @@ public final class ProjectStore {
                         + "its lengths and loads are stored in " + old.info().units());
             touch(c, id, version);
             try (PreparedStatement ps = c.prepareStatement("UPDATE project SET job_number = ?, name = ?, address = ?, "
-                    + "client = ?, edition = ?, unit_system = ?, partition_allowance = ?, reduce_partitions = ? WHERE id = ?")) {
+                    + "client = ?, edition = ?, unit_system = ?, partition_allowance = ?, reduce_partitions = ?, "
+                    + "uplift_reduced_dead = ? WHERE id = ?")) {
                 int i = bind(ps, info);
                 ps.setLong(i, id);
                 ps.executeUpdate();
@@ -151,13 +152,14 @@ public final class ProjectStore {
         ps.setString(6, p.units().name());
         ps.setBoolean(7, p.partitionAllowance());
         ps.setBoolean(8, p.reducePartitions());
-        return 9;
+        ps.setBoolean(9, p.upliftReducedDead());
+        return 10;
     }
 
     private static Project read(ResultSet rs) throws SQLException {
         return new Project(rs.getLong("id"), rs.getLong("version"), new ProjectInfo(rs.getString("job_number"),
                 rs.getString("name"), rs.getString("address"), rs.getString("client"), rs.getString("edition"),
                 UnitSystem.valueOf(rs.getString("unit_system")), rs.getBoolean("partition_allowance"),
-                rs.getBoolean("reduce_partitions")));
+                rs.getBoolean("reduce_partitions"), rs.getBoolean("uplift_reduced_dead")));
     }
 }

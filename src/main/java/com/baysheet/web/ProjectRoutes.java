@@ -76,7 +76,8 @@ final class ProjectRoutes {
     private static ProjectInfo info(Form f) {
         UnitSystem units = UnitSystem.parse("units", f.text("units"));
         return new ProjectInfo(f.text("jobNumber"), f.text("name"), f.text("address"), f.text("client"),
-                f.text("edition"), units, f.checked("partitionAllowance"), f.checked("reducePartitions"));
+                f.text("edition"), units, f.checked("partitionAllowance"), f.checked("reducePartitions"),
+                f.checked("upliftReducedDead"));
     }
 
     private static Map<String, String> values(Project p) {
@@ -86,6 +87,7 @@ final class ProjectRoutes {
                 "units", i.units().name()));
         if (i.partitionAllowance()) v.put("partitionAllowance", "on");
         if (i.reducePartitions()) v.put("reducePartitions", "on");
+        if (i.upliftReducedDead()) v.put("upliftReducedDead", "on");
         return v;
     }
 }

@@ -97,7 +97,23 @@ class CalcCommandTest {
                  "customOccupancies": [{"id": "archive", "name": "Archive", "uniform": 90, "rule": "ORDINARY"}],
                  "strips": [{"occupancy": "archive", "width": 10, "from": 0, "to": 20}]}""");
         assertThat(r.exit()).as(r.err()).isZero();
-        assertThat(r.result("L0.R1")).isCloseTo(90 * 10 * 10, within(1e-9));
+        assertThat(r.result("L0.RA")).isCloseTo(90 * 10 * 10, within(1e-9));
+    }
+
+    @Test
+    void overhangUpliftAndTheFirmOptionComeThroughTheCommand() throws IOException {
+        // 10 ft + 8 ft, 15 psf dead and 50 psf office on 10 ft: R_A = 1.2 × 270 − 1.6 × 1600 = −2,236 lb (2.3.1
+        // combination 2, live load on the overhang only); with the option, 0.9 × 270 − 1.6 × 1600 = −2,317 lb
+        String beam = """
+                {"units": "US", "subject": "B", "kind": "INTERIOR_BEAM", "support": {"type": "overhang", "span": 10, "overhang": 8},
+                 "strips": [{"occupancy": "office", "width": 10, "from": 0, "to": 18, "deadLoad": 15}] %s}""";
+        Run code = stdin(beam.formatted(""));
+        assertThat(code.exit()).as(code.err()).isZero();
+        assertThat(code.result("LRFD.RA,min")).isCloseTo(-2236, within(1e-9));
+        Run firm = stdin(beam.formatted(", \"options\": {\"upliftReducedDead\": true}"));
+        assertThat(firm.result("LRFD.RA,min")).isCloseTo(-2317, within(1e-9));
+        assertThat(firm.out()).contains("firm practice, not a 2.3.1 combination");
+        assertThat(stdin(beam.formatted(", \"options\": {\"upliftReducedDead\": \"yes\"}")).err()).contains("upliftReducedDead");
     }
 
     @Test

@@ -105,7 +105,7 @@ class DerivationProperties {
             for (String c : List.of("D", "L0", "L", "Lr")) {
                 if (!Loads.hasStep(r, "W." + c)) continue;
                 double w = r.step("W." + c).result();
-                assertThat(r.result(c + ".R1") + r.result(c + ".R2")).as("%s: R1 + R2 for %s", m.name(), c).isCloseTo(w, within(tol(w)));
+                assertThat(r.result(c + ".RA") + r.result(c + ".RB")).as("%s: R_A + R_B for %s", m.name(), c).isCloseTo(w, within(tol(w)));
             }
             // the unreduced load it carries is L0 times the tributary area it lists, and it hands all of it on
             double l0 = floorLive(m.areas());
@@ -150,7 +150,7 @@ class DerivationProperties {
                 CalcRecord p = x.result().record(), q = y.result().record();
                 close(q.result(c + ".M+"), p.result(c + ".M+"), x.name() + " " + c + ".M+");
                 close(q.result(c + ".V"), p.result(c + ".V"), x.name() + " " + c + ".V");
-                double[] rp = sorted(p.result(c + ".R1"), p.result(c + ".R2")), rq = sorted(q.result(c + ".R1"), q.result(c + ".R2"));
+                double[] rp = sorted(p.result(c + ".RA"), p.result(c + ".RB")), rq = sorted(q.result(c + ".RA"), q.result(c + ".RB"));
                 close(rq[0], rp[0], x.name() + " " + c + ".R");
                 close(rq[1], rp[1], x.name() + " " + c + ".R");
             }

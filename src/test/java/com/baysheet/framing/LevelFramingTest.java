@@ -44,7 +44,7 @@ class LevelFramingTest {
         assertThat(r.step("K_LL·A_T").result()).isCloseTo(600.0, within(1e-9));
         assertThat(r.step("f").result()).isCloseTo(0.862372, within(1e-6));
         assertThat(r.result("L.M+")).isCloseTo(48_508.4, within(0.1));
-        assertThat(r.result("L.R1")).isCloseTo(6_467.8, within(0.1));
+        assertThat(r.result("L.RA")).isCloseTo(6_467.8, within(0.1));
         assertThat(r.result("D.M+")).isCloseTo(67_500.0, within(1e-6));
         assertThat(r.result("LRFD.M+")).isCloseTo(158_613.4, within(0.2));
         assertThat(r.entry("LRFD.M+").label()).contains("LRFD 2");
@@ -70,7 +70,7 @@ class LevelFramingTest {
         assertThat(r.result("L0.M+")).isCloseTo(150_000.0, within(1e-6));
         assertThat(r.result("L.M+")).isCloseTo(102_452.0, within(0.5));
         assertThat(r.result("L.M+")).isNotCloseTo(129_356.0, within(100.0));
-        assertThat(r.result("L.R1")).isCloseTo(10_245.2, within(0.1));
+        assertThat(r.result("L.RA")).isCloseTo(10_245.2, within(0.1));
         assertThat(r.result("D.M+")).isCloseTo(180_000.0, within(1e-6));
         assertThat(r.result("LRFD.M+")).isCloseTo(379_923.0, within(1.0));
     }
@@ -89,7 +89,7 @@ class LevelFramingTest {
             assertThat(m.tributaryWidth()).isCloseTo(5.0, within(1e-12));
             assertThat(m.directArea()).isCloseTo(150.0, within(1e-9));
             // K_LL A_T = 300 ft² < 400 ft²: no reduction (4.7.2)
-            assertThat(m.result().record().result("L.R1")).isCloseTo(50 * 5 * 15.0, within(1e-9));
+            assertThat(m.result().record().result("L.RA")).isCloseTo(50 * 5 * 15.0, within(1e-9));
         }
     }
 }

@@ -48,7 +48,7 @@ class TakeDownProperties {
                 full += l0(e.getKey()) * e.getValue();
             }
             if (full == 0) continue;
-            double reduced = m.role() == MemberRole.COLUMN ? r.result("L.P") : r.result("L.R1") + r.result("L.R2");
+            double reduced = m.role() == MemberRole.COLUMN ? r.result("L.P") : r.result("L.RA") + r.result("L.RB");
             assertThat(reduced).as("%s: L against its limit", m.name()).isBetween(lowest * (1 - TOL), full * (1 + TOL));
         }
     }
@@ -61,7 +61,7 @@ class TakeDownProperties {
             CalcRecord r = m.result().record();
             double roofArea = Loads.roofArea(recordAreas(r));
             if (roofArea == 0) {
-                assertThat(m.role() == MemberRole.COLUMN ? r.result("Lr.P") : r.result("Lr.R1")).as(m.name()).isIn(0.0, Double.NaN);
+                assertThat(m.role() == MemberRole.COLUMN ? r.result("Lr.P") : r.result("Lr.RA")).as(m.name()).isIn(0.0, Double.NaN);
                 continue;
             }
             double lr = r.step("Lr").result();

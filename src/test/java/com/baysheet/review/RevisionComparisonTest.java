@@ -44,4 +44,19 @@ class RevisionComparisonTest {
         assertThat(c.inputs().get(1).after()).isEmpty();
         assertThat(c.inputs().get(1).key()).isEqualTo("L0");
     }
+
+    @Test
+    void reactionsKeyedR1R2InAnEarlierRevisionCompareWithRaRb() {
+        CalcRecord a = Sheets.record(20, 40);
+        List<Entry> was = List.of(new Entry("D.R1", "Left reaction, dead load", 2000, "lb", "2.00", "kip"),
+                new Entry("LRFD.R2", "Right reaction, factored (LRFD 2)", 5000, "lb", "5.00", "kip"));
+        List<Entry> now = List.of(new Entry("D.RA", "Left reaction R_A, dead load", 2000, "lb", "2.00", "kip"),
+                new Entry("LRFD.RB", "Right reaction R_B, factored (LRFD 2)", 5200, "lb", "5.20", "kip"));
+        CalcRecord before = new CalcRecord(a.subject(), a.edition(), a.units(), a.inputs(), a.steps(), was, a.governing(), a.notes(), Sketch.NONE);
+        CalcRecord after = new CalcRecord(a.subject(), a.edition(), a.units(), a.inputs(), a.steps(), now, a.governing(), a.notes(), Sketch.NONE);
+        RevisionComparison c = RevisionComparison.of(before, after);
+        assertThat(c.results()).containsExactly(new RevisionComparison.Change("LRFD.RB", "Right reaction R_B, factored (LRFD 2)",
+                "5.00 kip", "5.20 kip", RevisionComparison.Kind.CHANGED));
+        assertThat(RevisionComparison.currentKey("R1")).isEqualTo("R1");   // the roof factor's step symbol is left alone
+    }
 }

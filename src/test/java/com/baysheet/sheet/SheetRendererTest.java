@@ -57,6 +57,25 @@ class SheetRendererTest {
     }
 
     @Test
+    void reactionsReadRaAndRbInTheTableAndTheDiagram() {
+        // R1, R2 are the roof factors of Eq. 4.8-1; the reactions are R_A (left) and R_B (right)
+        assertThat(text).contains(sq("Left reaction R_A")).contains(sq("Right reaction R_B"))
+                .contains(sq("R_A = ")).contains(sq("R_B = "));
+        assertThat(text).doesNotContain(sq("R1 = ")).doesNotContain(sq("Left reaction R1"));
+    }
+
+    @Test
+    void anOverhangSheetTabulatesTheLeastReactionsAndCautionsTheUplift() {
+        // 10 ft + 8 ft, 15 psf dead, 50 psf office on 10 ft: 1.2 × 270 − 1.6 × 1600 = −2,236 lb at support A
+        CalcRecord r = com.baysheet.engine.Fixtures.calc(com.baysheet.engine.Fixtures.US, com.baysheet.engine.Fixtures.beam(
+                new com.baysheet.engine.load.Support.Overhang(10, 8),
+                List.of(new com.baysheet.engine.load.AreaStrip("office", 10, 0, 18, 15)), List.of(), Double.NaN, Double.NaN));
+        String t = sq(SheetFixtures.text(SheetRenderer.issued(MemberSheet.of(SheetFixtures.header("Beam B9"), r)).bytes()));
+        assertThat(t).contains(sq("Least left reaction R_A")).contains(sq("-2.24 kip")).contains(sq("Uplift at support A"))
+                .contains(sq("supporting member"));
+    }
+
+    @Test
     void veraPdfFindsItPdfA1b() {
         assertThat(PdfA.failures(issued.bytes())).isEmpty();
     }

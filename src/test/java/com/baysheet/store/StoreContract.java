@@ -68,6 +68,17 @@ abstract class StoreContract {
     }
 
     @Test
+    void theUpliftOptionIsStoredOffByDefaultAndChangedWithTheSettings() {
+        Project p = store.projects().create(info("24-101"));
+        assertThat(store.projects().find(p.id()).info().upliftReducedDead()).isFalse();
+        ProjectInfo on = new ProjectInfo(p.info().jobNumber(), p.info().name(), p.info().address(), p.info().client(),
+                p.info().edition(), p.info().units(), false, false, true);
+        Project saved = store.projects().update(p.id(), p.version(), on);
+        assertThat(store.projects().find(p.id()).info().upliftReducedDead()).isTrue();
+        assertThat(saved.info().options().upliftReducedDead()).isTrue();
+    }
+
+    @Test
     void jobNumberIsUniqueAcrossProjects() {
         store.projects().create(info("24-100"));
         assertThatThrownBy(() -> store.projects().create(info("24-100")))

@@ -79,6 +79,23 @@ class ApiTest {
     }
 
     @Test
+    void theUpliftOptionIsAProjectFieldOfTheApi() throws Exception {
+        HttpResponse<String> created = server.json("POST", "/api/projects",
+                "{\"jobNumber\": \"25-302\", \"name\": \"Kestrel Dock\", \"units\": \"US\", \"upliftReducedDead\": true}");
+        assertThat(created.statusCode()).isEqualTo(201);
+        assertThat(json(created).get("info").get("upliftReducedDead").asBoolean()).isTrue();
+        long id = json(created).get("id").asLong();
+        HttpResponse<String> off = server.json("PUT", "/api/projects/" + id, "{\"version\": " + json(created).get("version").asLong()
+                + ", \"jobNumber\": \"25-302\", \"name\": \"Kestrel Dock\", \"units\": \"US\"}");
+        assertThat(off.statusCode()).isEqualTo(200);
+        assertThat(json(off).get("info").get("upliftReducedDead").asBoolean()).isFalse();
+        HttpResponse<String> bad = server.json("POST", "/api/projects",
+                "{\"jobNumber\": \"25-303\", \"name\": \"Kestrel Dock 2\", \"units\": \"US\", \"upliftReducedDead\": \"yes\"}");
+        assertThat(bad.statusCode()).isEqualTo(400);
+        assertThat(json(bad).get("field").asText()).isEqualTo("upliftReducedDead");
+    }
+
+    @Test
     void unknownIdsAre404sInJson() throws Exception {
         HttpResponse<String> r = server.get("/api/projects/" + server.alder().id() + "/members/nope");
         assertThat(r.statusCode()).isEqualTo(404);

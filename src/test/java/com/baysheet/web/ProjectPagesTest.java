@@ -72,6 +72,23 @@ class ProjectPagesTest {
     }
 
     @Test
+    void theUpliftOptionIsOfferedOnTheSettingsFormAndSaved() {
+        HttpResponse<String> created = server.post("/projects", List.of(entry("jobNumber", "25-901"), entry("name", "Osprey Pier Shed"),
+                entry("edition", "ASCE 7-16"), entry("units", "US")));
+        String location = created.headers().firstValue("Location").orElseThrow();
+        long id = Long.parseLong(location.substring(location.lastIndexOf('/') + 1));
+        assertThat(server.store.projects().find(id).info().upliftReducedDead()).isFalse();
+        HttpResponse<String> form = server.get(location + "/settings");
+        assertThat(form.body()).contains("name=\"upliftReducedDead\"", "0.9D + 1.6L");
+        HttpResponse<String> r = server.post(location + "/settings", List.of(entry("version", String.valueOf(server.version(id))),
+                entry("jobNumber", "25-901"), entry("name", "Osprey Pier Shed"), entry("edition", "ASCE 7-16"), entry("units", "US"),
+                entry("upliftReducedDead", "on")));
+        assertThat(r.statusCode()).isEqualTo(303);
+        assertThat(server.store.projects().find(id).info().upliftReducedDead()).isTrue();
+        assertThat(server.get(location + "/settings").body()).containsPattern("name=\"upliftReducedDead\"[^>]*checked");
+    }
+
+    @Test
     void unknownIdsGiveANotFoundPageAndNoStackTrace() {
         for (String path : List.of("/projects/9999", "/projects/abc/levels", "/projects/1/members/no-such-member",
                 "/projects/1/takedowns/nowhere", "/projects/1/levels/9999/bays", "/no/such/page")) {

@@ -21,23 +21,30 @@ import java.util.List;
 final class BendingActions {
     private BendingActions() {}
 
-    /** Effects reported for a support kind: R1, R2, V, M+, M−. */
+    /**
+     * Effects reported for a support kind: the reactions R_A (left, x = 0) and R_B (right, x = span), V, M+, M−.
+     * The reactions are not R1, R2: on roof sheets those are the reduction factors of Eq. 4.8-1.
+     */
     enum Effect {
-        R1("R1", "Left reaction"), R2("R2", "Right reaction"), V("V", "Maximum shear"),
-        MPOS("M+", "Maximum positive moment"), MNEG("M-", "Maximum negative moment");
-        final String key, title, lower;
-        Effect(String key, String title) { this.key = key; this.title = title; this.lower = title.toLowerCase(); }
+        RA("RA", "R_A", "Left reaction R_A"), RB("RB", "R_B", "Right reaction R_B"), V("V", "V", "Maximum shear"),
+        MPOS("M+", "M+", "Maximum positive moment"), MNEG("M-", "M-", "Maximum negative moment");
+        /** key in result keys ("D.RA"), symbol in step symbols ("R_A.D"). */
+        final String key, symbol, title, lower;
+        Effect(String key, String symbol, String title) {
+            this.key = key; this.symbol = symbol; this.title = title;
+            this.lower = Character.toLowerCase(title.charAt(0)) + title.substring(1);
+        }
         Quantity q() { return this == MPOS || this == MNEG ? Quantity.MOMENT : Quantity.FORCE; }
     }
 
     static List<Effect> effects(Support s) {
-        if (s instanceof Support.Cantilever) return List.of(Effect.R1, Effect.V, Effect.MNEG);
-        if (s instanceof Support.Overhang) return List.of(Effect.R1, Effect.R2, Effect.V, Effect.MPOS, Effect.MNEG);
-        return List.of(Effect.R1, Effect.R2, Effect.V, Effect.MPOS);
+        if (s instanceof Support.Cantilever) return List.of(Effect.RA, Effect.V, Effect.MNEG);
+        if (s instanceof Support.Overhang) return List.of(Effect.RA, Effect.RB, Effect.V, Effect.MPOS, Effect.MNEG);
+        return List.of(Effect.RA, Effect.RB, Effect.V, Effect.MPOS);
     }
 
     static void record(CalcContext ctx, MemberInput in, LoadBook book, BeamLoads floor0, BeamLoads floor,
-                       BeamLoads roof, boolean halfL, RecordBuilder rec) {
+                       BeamLoads roof0, BeamLoads roof, boolean halfL, RecordBuilder rec) {
         Edition ed = ctx.edition();
         Support s = in.support();
         List<Effect> effects = effects(s);
@@ -68,6 +75,8 @@ final class BendingActions {
                .result("ASD." + e.key, e.title + ", service (" + a.combination().name() + ")", a.value(), e.q())
                .governs("LRFD." + e.key);
         }
+        if (s instanceof Support.Overhang o && !(floor0.isEmpty() && roof0.isEmpty()))
+            MinimumReactions.record(ctx, o, book, floor0, roof0, rec);
         if (halfL && !floor0.isEmpty()) rec.info("0.5 L permitted in LRFD 3 (every L0 at most 100 psf, no garage or assembly use).", ed.clause("combo.halfL"));
         if (!Double.isNaN(ei)) {
             BeamLoads total = new BeamLoads().add(book.dead, 1).add(floor, 1).add(roof, 1);
@@ -91,18 +100,23 @@ final class BendingActions {
         for (BeamLoads p : patterns) acts.add(MemberCalculation.solve(s, p, ei));
         BeamActions full = acts.get(0);
         double w = patterns.get(0).total();
-        rec.step("W." + c, "Total " + what, "W = Σ w·ℓ + Σ P", "sum of loads", w, Quantity.FORCE, clause);
+        rec.step("W." + c, "Total " + what, "W = Σ w·ℓ + Σ P", StaticsText.total(rec, patterns.get(0)), w, Quantity.FORCE, clause);
         double[] out = new double[effects.size()];
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
-            double best = 0, at = position(full, e, s);
-            for (BeamActions a : acts) {
-                double v = value(a, e, s);
+            double best = 0;
+            int k = 0;
+            for (int j = 0; j < acts.size(); j++) {
+                double v = value(acts.get(j), e, s);
                 // M− is the most negative; every other effect the largest (a reaction's uplift is not a gravity design value)
-                if (e == Effect.MNEG ? v < best : v > best) { best = v; at = position(a, e, s); }
+                if (e == Effect.MNEG ? v < best : v > best) { best = v; k = j; }
             }
             out[i] = best;
-            rec.step(e.key + "." + c, e.title + ", " + what, formula(e, s), where(rec, e, at, s), best, e.q(), clause);
+            String placed = patterns.size() > 1 && k > 0 ? " (" + PATTERNS[k] + ")" : "";
+            boolean closed = StaticsText.simpleUniform(s, patterns.get(k));
+            String sub = substituted(rec, e, s, patterns.get(k), acts.get(k), closed);
+            if ((e == Effect.RA || e == Effect.RB) && value(acts.get(k), e, s) < 0 && rec.writesText()) sub += " < 0, taken as 0 (see the least reactions)";
+            rec.step(e.symbol + "." + c, e.title + ", " + what + placed, formula(e, s, closed), sub, best, e.q(), clause);
             rec.result(c + "." + e.key, e.title + ", " + what, best, e.q());
         }
         if (!Double.isNaN(ei) && !c.equals("L0")) {
@@ -113,40 +127,40 @@ final class BendingActions {
         return out;
     }
 
+    /** The placements of {@link #patterns}, as the record names them. */
+    static final String[] PATTERNS = {"live load on the whole member", "live load on the back span only", "live load on the overhang only"};
+
     static double value(BeamActions a, Effect e, Support s) {
         return switch (e) {
-            case R1 -> a.left();
-            case R2 -> a.right();
+            case RA -> a.left();
+            case RB -> a.right();
             case V -> Math.abs(a.maxShear());
             case MPOS -> Math.max(0, a.maxMoment());
             case MNEG -> Math.min(0, a.minMoment());
         };
     }
 
-    private static double position(BeamActions a, Effect e, Support s) {
-        return switch (e) {
-            case R1 -> 0;
-            case R2 -> s.span();
-            case V -> a.maxShearAt();
-            case MPOS -> a.maxMomentAt();
-            case MNEG -> a.minMomentAt();
-        };
-    }
-
-    private static String formula(Effect e, Support s) {
+    private static String formula(Effect e, Support s, boolean closed) {
         boolean cant = s instanceof Support.Cantilever;
         return switch (e) {
-            case R1 -> cant ? "R = W" : "R1 = W − R2";
-            case R2 -> "R2 = Σ(load × x) / ℓ";
-            case V -> "V_max = max |V(x)|";
-            case MPOS -> "M+ = max M(x), at zero shear or under a load";
-            case MNEG -> cant ? "M− = −Σ(load × x) at the fixed end" : "M− = min M(x), over the support";
+            case RA -> cant ? "R = W" : closed ? "R_A = wℓ/2" : "ΣM_B = 0: R_A = Σ load × (ℓ − x) / ℓ";
+            case RB -> closed ? "R_B = wℓ/2" : "ΣM_A = 0: R_B = Σ load × x / ℓ";
+            case V -> closed ? "V = wℓ/2" : "V_max = max |V(x)|";
+            case MPOS -> closed ? "M+ = wℓ²/8" : "M+ = max M(x), at zero shear or under a load";
+            case MNEG -> cant ? "M− = −Σ load × x at the fixed end" : "M− = min M(x), over the support";
         };
     }
 
-    private static String where(RecordBuilder rec, Effect e, double at, Support s) {
-        if (e == Effect.R1 || e == Effect.R2) return "statics";
-        return "at x = " + rec.show(at, Quantity.LENGTH);
+    /** The numbers put in, from the loads of the pattern that gave the value (x from the left support or fixed end). */
+    private static String substituted(RecordBuilder rec, Effect e, Support s, BeamLoads loads, BeamActions a, boolean closed) {
+        if (closed) return StaticsText.closedForm(rec, e, s, loads);
+        return switch (e) {
+            case RA, RB -> StaticsText.reaction(rec, e, s, loads);
+            case V -> "at x = " + rec.show(a.maxShearAt(), Quantity.LENGTH);
+            case MPOS -> "at x = " + rec.show(a.maxMomentAt(), Quantity.LENGTH);
+            case MNEG -> s instanceof Support.Cantilever ? StaticsText.fixedMoment(rec, loads)
+                    : "at x = " + rec.show(a.minMomentAt(), Quantity.LENGTH);
+        };
     }
 
     /**
@@ -168,19 +182,19 @@ final class BendingActions {
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
             ConcentratedCheck.Effect ce = switch (e) {
-                case R1 -> ConcentratedCheck.Effect.LEFT_REACTION;
-                case R2 -> ConcentratedCheck.Effect.RIGHT_REACTION;
+                case RA -> ConcentratedCheck.Effect.LEFT_REACTION;
+                case RB -> ConcentratedCheck.Effect.RIGHT_REACTION;
                 case V -> ConcentratedCheck.Effect.SHEAR;
                 case MPOS -> ConcentratedCheck.Effect.MAX_MOMENT;
                 case MNEG -> ConcentratedCheck.Effect.MIN_MOMENT;
             };
             ConcentratedCheck.Placement pl = ConcentratedCheck.place(s, p, side, ce);
             double v = e == Effect.MNEG ? Math.min(0, pl.effect()) : e == Effect.MPOS ? Math.max(0, pl.effect()) : Math.abs(pl.effect());
-            rec.step(e.key + "." + k.step(), e.title + ", " + k.concentrated(), "placed for the largest effect",
+            rec.step(e.symbol + "." + k.step(), e.title + ", " + k.concentrated(), "placed for the largest effect",
                     "centre at x = " + rec.show(pl.at(), Quantity.LENGTH), v, e.q(), ed.clause("concentrated"));
             rec.result(k.step() + "." + e.key, e.title + ", " + k.concentrated(), v, e.q());
             boolean conc = Math.abs(v) > Math.abs(l[i]);
-            if (conc) design[i] = e == Effect.R1 || e == Effect.R2 ? Math.copySign(v, l[i] == 0 ? 1 : l[i]) : v;
+            if (conc) design[i] = e == Effect.RA || e == Effect.RB ? Math.copySign(v, l[i] == 0 ? 1 : l[i]) : v;
             rec.resultText(k.governs() + "." + e.key, e.title + ": governing " + k.live(), conc ? "concentrated" : "uniform");
             // the floor's design live load is recorded with the combinations, for every member
             if (k == ConcentratedCheck.ROOF) rec.result(k.design() + "." + e.key, e.title + ", design " + k.live(), design[i], e.q());

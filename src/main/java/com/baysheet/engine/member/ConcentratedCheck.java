@@ -61,7 +61,7 @@ final class ConcentratedCheck {
 
     /**
      * The centre position of the worst placement where statics fixes it, NaN where it must be searched.
-     * Reactions are linear in the position (R1 = P(ℓ − x)/ℓ, R2 = Px/ℓ), so they peak at an end of the range.
+     * Reactions are linear in the position (R_A = P(ℓ − x)/ℓ, R_B = Px/ℓ), so they peak at an end of the range.
      * On a simple span the largest shear is the larger reaction and the largest moment, concave in x and
      * symmetric, peaks with the load centred (Pℓ/4 − Pc/8). On a cantilever the shear is P wherever the load
      * is, and the fixed-end moment −Px peaks at the free end. Ties keep the first position, as the scan does.

@@ -22,6 +22,11 @@ public final class LoadCombinations {
             return d * dv + fl * lv + lr * lrv;
         }
 
+        /** The edition's clause key of this combination ("combo.lrfd.2"); the clause numbers are edition data. */
+        String clauseKey() {
+            return (strength ? "combo.lrfd." : "combo.asd.") + name.substring(name.lastIndexOf(' ') + 1);
+        }
+
         String formula(boolean halfAllowed, RecordBuilder rec) {
             if (!rec.writesText()) return "";
             double fl = halfL && halfAllowed ? 0.5 : l;

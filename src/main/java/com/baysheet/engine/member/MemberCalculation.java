@@ -47,7 +47,7 @@ public final class MemberCalculation {
         BeamLoads roof0 = book.combined(null, true), roof = book.combined(factors, true);
         boolean halfL = halfLAllowed(ctx, book);
         if (in.kind().isColumn()) AxialActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, rec);
-        else BendingActions.record(ctx, in, book, floor0, floor, roof, halfL, rec);
+        else BendingActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, rec);
         rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1)));
         Cautions.standard(ctx, book, rec);
         return new Outcome(rec.build(), share(ctx, in, book, true), in.kind().isColumn()

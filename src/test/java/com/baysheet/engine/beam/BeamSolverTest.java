@@ -28,7 +28,7 @@ class BeamSolverTest {
 
     @Test
     void simpleBeamConcentratedLoadAtAnyPoint() {
-        // Table 3-23, simple beam, concentrated load at any point: R1 = Pb/ℓ, R2 = Pa/ℓ, M = Pab/ℓ under the load
+        // Table 3-23, simple beam, concentrated load at any point: R_A = Pb/ℓ, R_B = Pa/ℓ, M = Pab/ℓ under the load
         double p = 10000, l = 20, at = 5, b = l - at;
         BeamActions a = BeamSolver.solve(new Support.Simple(l), new BeamLoads().point(p, at), Double.NaN);
         assertThat(a.left()).isCloseTo(p * b / l, within(1e-9));
@@ -75,7 +75,7 @@ class BeamSolverTest {
     @Test
     void beamOverhangingOneSupportUniformLoadPublishedExample() {
         // Table 3-23, beam overhanging one support, uniformly distributed load; REFERENCES.md example:
-        // w = 1 k/ft, ℓ = 20 ft, a = 5 ft: R1 = 9.375 k, R2 = 15.625 k, M1 = 43.945 k-ft, M2 = −12.5 k-ft
+        // w = 1 k/ft, ℓ = 20 ft, a = 5 ft: R_A = 9.375 k, R_B = 15.625 k, M1 = 43.945 k-ft, M2 = −12.5 k-ft
         BeamActions a = BeamSolver.solve(new Support.Overhang(20, 5), new BeamLoads().distributed(1000, 0, 25), Double.NaN);
         assertThat(a.left()).isCloseTo(9375, within(1e-6));
         assertThat(a.right()).isCloseTo(15625, within(1e-6));
@@ -88,7 +88,7 @@ class BeamSolverTest {
 
     @Test
     void beamOverhangingOneSupportFormulasHoldForOtherProportions() {
-        // same case: R1 = w(ℓ² − a²)/2ℓ, R2 = w(ℓ + a)²/2ℓ, M1 = w(ℓ + a)²(ℓ − a)²/8ℓ², M2 = −wa²/2
+        // same case: R_A = w(ℓ² − a²)/2ℓ, R_B = w(ℓ + a)²/2ℓ, M1 = w(ℓ + a)²(ℓ − a)²/8ℓ², M2 = −wa²/2
         double w = 730, l = 17, o = 6.5;
         BeamActions a = BeamSolver.solve(new Support.Overhang(l, o), new BeamLoads().distributed(w, 0, l + o), Double.NaN);
         assertThat(a.left()).isCloseTo(w * (l * l - o * o) / (2 * l), within(1e-6));

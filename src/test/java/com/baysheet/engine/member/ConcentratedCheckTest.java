@@ -24,7 +24,7 @@ class ConcentratedCheckTest {
 
     @Test
     void simpleSpanShearAndReactionPeakWithTheLoadAgainstASupport() {
-        // R1 = P(1 − c/2ℓ) with the patch's edge at the support
+        // R_A = P(1 − c/2ℓ) with the patch's edge at the support
         double r = P * (1 - C / 40);
         assertThat(ConcentratedCheck.place(new Support.Simple(20), P, C, ConcentratedCheck.Effect.SHEAR).effect()).isCloseTo(r, within(1e-9));
         assertThat(ConcentratedCheck.place(new Support.Simple(20), P, C, ConcentratedCheck.Effect.LEFT_REACTION).effect()).isCloseTo(r, within(1e-9));
@@ -33,8 +33,8 @@ class ConcentratedCheckTest {
 
     @Test
     void overhangReactionsAreTakenEachAtItsOwnWorstPosition() {
-        // beam overhanging one support, ℓ = 20, a = 5: R1 peaks with the load at the left support, P(1 − c/2ℓ);
-        // R2 with the load at the tip, P(ℓ + a − c/2)/ℓ. Each reaction is its own, not the larger of the two.
+        // beam overhanging one support, ℓ = 20, a = 5: R_A peaks with the load at the left support, P(1 − c/2ℓ);
+        // R_B with the load at the tip, P(ℓ + a − c/2)/ℓ. Each reaction is its own, not the larger of the two.
         Support s = new Support.Overhang(20, 5);
         var r1 = ConcentratedCheck.place(s, P, C, ConcentratedCheck.Effect.LEFT_REACTION);
         var r2 = ConcentratedCheck.place(s, P, C, ConcentratedCheck.Effect.RIGHT_REACTION);

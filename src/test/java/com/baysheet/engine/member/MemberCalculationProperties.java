@@ -58,7 +58,7 @@ class MemberCalculationProperties {
         Support s = support(kind, span, share);
         CalcRecord r = Fixtures.calc(Fixtures.US, beam(s, "office", width, dead, 0, s.length()));
         double total = dead * width * s.length();
-        double sum = r.result("D.R1") + (kind == 2 ? 0 : r.result("D.R2"));
+        double sum = r.result("D.RA") + (kind == 2 ? 0 : r.result("D.RB"));
         assertThat(sum).isCloseTo(total, within(1e-9 * total));
         MemberResult m = MemberCalculation.calculate(Fixtures.US, beam(s, "office", width, dead, 0, s.length()));
         assertThat(m.left().dead() + (m.right() == null ? 0 : m.right().dead())).isCloseTo(total, within(1e-9 * total));
@@ -74,7 +74,7 @@ class MemberCalculationProperties {
         CalcRecord b = Fixtures.calc(Fixtures.US, beam(s, "office", w2, 10, x, span));
         CalcRecord ab = Fixtures.calc(Fixtures.US, Fixtures.beam(s, List.of(new AreaStrip("office", w1, 0, x, 10),
                 new AreaStrip("office", w2, x, span, 10)), List.of(), Double.NaN, Double.NaN));
-        for (String k : List.of("L0.R1", "L0.R2", "D.R1", "D.R2")) {
+        for (String k : List.of("L0.RA", "L0.RB", "D.RA", "D.RB")) {
             double sum = a.result(k) + b.result(k);
             assertThat(ab.result(k)).as(k).isCloseTo(sum, within(1e-9 * Math.abs(sum)));
         }

@@ -31,9 +31,9 @@ class MemberCalculationTest {
         CalcRecord r = calc(US, Fixtures.beam(MemberKind.INTERIOR_BEAM, 30, "office", 10, 15));
         double f = 0.25 + 15 / Math.sqrt(600), w = 50 * 10 * f;
         assertThat(r.result("L.M+")).isCloseTo(w * 900 / 8, within(1e-6));
-        assertThat(r.result("L.R1")).isCloseTo(w * 15, within(1e-6));
+        assertThat(r.result("L.RA")).isCloseTo(w * 15, within(1e-6));
         assertThat(r.result("L0.M+")).isCloseTo(500 * 900 / 8.0, within(1e-6));
-        assertThat(r.result("D.R1")).isCloseTo(150 * 15, within(1e-9));
+        assertThat(r.result("D.RA")).isCloseTo(150 * 15, within(1e-9));
         // LRFD 2: 1.2D + 1.6L governs an office floor beam
         assertThat(r.result("LRFD.M+")).isCloseTo(1.2 * 150 * 900 / 8 + 1.6 * w * 900 / 8, within(1e-6));
         assertThat(r.governing()).contains("LRFD.M+");
@@ -71,9 +71,9 @@ class MemberCalculationTest {
         CalcRecord g = calc(US, girder);
         double area = 600, f = 0.25 + 15 / Math.sqrt(2 * area);
         assertThat(Fixtures.step(g, "A_T")).isCloseTo(area, within(1e-9));
-        assertThat(g.result("L.R1")).isCloseTo(f * 2 * 7500, within(1e-6));
+        assertThat(g.result("L.RA")).isCloseTo(f * 2 * 7500, within(1e-6));
         assertThat(g.result("L.M+")).isCloseTo(f * 15000 * 10, within(1e-6)); // two equal loads at third points: M = Pa
-        assertThat(g.result("D.R1")).isCloseTo(2 * 2250, within(1e-9));
+        assertThat(g.result("D.RA")).isCloseTo(2 * 2250, within(1e-9));
     }
 
     @Test
@@ -91,8 +91,8 @@ class MemberCalculationTest {
     void overhangBeamConcentratedReactionsAreEachTheirOwn() {
         CalcRecord r = calc(US, Fixtures.beam(new Support.Overhang(20, 5), List.of(new AreaStrip("office", 1, 0, 25, 0)),
                 List.of(), Double.NaN, Double.NaN));
-        assertThat(r.result("Lc.R1")).isCloseTo(2000 * (1 - 2.5 / 40), within(1e-6));
-        assertThat(r.result("Lc.R2")).isCloseTo(2000 * (25 - 1.25) / 20, within(1e-6));
+        assertThat(r.result("Lc.RA")).isCloseTo(2000 * (1 - 2.5 / 40), within(1e-6));
+        assertThat(r.result("Lc.RB")).isCloseTo(2000 * (25 - 1.25) / 20, within(1e-6));
     }
 
     @Test
@@ -100,13 +100,13 @@ class MemberCalculationTest {
         // AISC Table 3-23 overhang example with w = 1 k/ft of dead load and an unreduced assembly live load
         CalcRecord r = calc(US, Fixtures.beam(new Support.Overhang(20, 5), List.of(new AreaStrip("assembly-other", 10, 0, 25, 100)),
                 List.of(), Double.NaN, Double.NaN));
-        assertThat(r.result("D.R1")).isCloseTo(9375, within(1e-6));
+        assertThat(r.result("D.RA")).isCloseTo(9375, within(1e-6));
         assertThat(r.result("D.M+")).isCloseTo(43945.3125, within(1e-3));
         assertThat(r.result("D.M-")).isCloseTo(-12500, within(1e-6));
-        assertThat(r.result("L.R1")).isCloseTo(10000, within(1e-6));   // back span only: wℓ/2
+        assertThat(r.result("L.RA")).isCloseTo(10000, within(1e-6));   // back span only: wℓ/2
         assertThat(r.result("L.M+")).isCloseTo(50000, within(1e-6));   // back span only: wℓ²/8
         assertThat(r.result("L.M-")).isCloseTo(-12500, within(1e-6));
-        assertThat(r.result("L.R2")).isCloseTo(15625, within(1e-6));   // both spans
+        assertThat(r.result("L.RB")).isCloseTo(15625, within(1e-6));   // both spans
     }
 
     @Test
@@ -118,6 +118,21 @@ class MemberCalculationTest {
         assertThat(r.result("Lr.M+")).isCloseTo(w * 400 / 8, within(1e-6));
         assertThat(r.result("LRFD.M+")).isCloseTo(1.2 * 150 * 400 / 8 + 1.6 * w * 400 / 8, within(1e-6));
         assertThat(r.entry("LRFD.M+").label()).contains("LRFD 3");
+    }
+
+    @Test
+    void onARoofSheetR1AndR2AreOnlyTheRoofFactorsAndTheReactionsAreRaRb() {
+        // 4.8.2, Eq. 4.8-1 uses R1, R2 for the roof factors; the reactions are R_A (x = 0) and R_B (x = span)
+        MemberInput in = Fixtures.beam(new Support.Simple(20), List.of(new AreaStrip("roof-ordinary", 10, 0, 20, 15)), List.of(), 6, Double.NaN);
+        CalcRecord r = calc(US, in);
+        assertThat(r.steps()).filteredOn(s -> s.symbol().matches("R[12](\\..*)?")).extracting(s -> s.symbol())
+                .containsExactly("R1", "R2");
+        assertThat(r.results()).noneMatch(e -> e.key().matches(".*\\.R[12]"));
+        // simple beam, uniform load: R = wℓ/2 = 18 psf × 10 ft × 20 ft / 2 = 1,800 lb at each support
+        assertThat(r.result("Lr.RA")).isCloseTo(1800, within(1e-6));
+        assertThat(r.result("Lr.RB")).isCloseTo(1800, within(1e-6));
+        assertThat(r.step("R_A.Lr").description()).contains("R_A");
+        assertThat(r.governing()).contains("LRFD.RA", "LRFD.RB");
     }
 
     @Test
@@ -133,7 +148,7 @@ class MemberCalculationTest {
     void partitionAllowanceAddsFifteenPsfUnreducedByDefault() {
         CalcRecord without = calc(US, Fixtures.beam(MemberKind.INTERIOR_BEAM, 30, "office", 10, 15));
         CalcRecord with = calc(US.withOptions(new DesignOptions(true, false)), Fixtures.beam(MemberKind.INTERIOR_BEAM, 30, "office", 10, 15));
-        assertThat(with.result("L.R1") - without.result("L.R1")).isCloseTo(15 * 10 * 15, within(1e-6));
+        assertThat(with.result("L.RA") - without.result("L.RA")).isCloseTo(15 * 10 * 15, within(1e-6));
         assertThat(with.inputs()).anyMatch(e -> e.key().equals("partitions") && e.shown().equals("included, not reduced"));
     }
 

@@ -48,7 +48,7 @@ class RoofMemberTest {
     @Test
     void nonOrdinaryRoofNeedsNoSlope() {
         CalcRecord r = calc(FIRM, roofBeam(30, 20, "roof-30", Double.NaN));
-        assertThat(r.result("Lr.R1")).isCloseTo(600 * 15, within(1e-6));
+        assertThat(r.result("Lr.RA")).isCloseTo(600 * 15, within(1e-6));
     }
 
     @Test
@@ -80,7 +80,7 @@ class RoofMemberTest {
         CalcRecord r = calc(US, roofBeam(6, 2, "roof-ordinary", 0));
         assertThat(r.result("Lr.M+")).isCloseTo(180, within(1e-9));
         assertThat(r.result("Lrc.M+")).isCloseTo(356.25, within(1e-6));
-        assertThat(r.result("Lrc.R1")).isCloseTo(237.5, within(1e-6));
+        assertThat(r.result("Lrc.RA")).isCloseTo(237.5, within(1e-6));
         assertThat(r.result("Lrdes.M+")).isCloseTo(356.25, within(1e-6));
         assertThat(r.entry("Lrgov.M+").shown()).isEqualTo("concentrated");
         // ASCE 7-16 2.3.1, LRFD 3: 1.2D + 1.6Lr; D = 15 psf × 2 ft = 30 plf, M_D = 30 × 36/8 = 135 lb·ft

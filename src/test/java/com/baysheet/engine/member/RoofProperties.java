@@ -39,7 +39,7 @@ class RoofProperties {
                                                                         @ForAll @DoubleRange(min = 0, max = 12) double slope) {
         CalcRecord r = Fixtures.calc(Fixtures.US, Fixtures.beam(new Support.Simple(span),
                 List.of(new AreaStrip("roof-ordinary", width, 0, span, 15)), List.of(), slope, Double.NaN));
-        for (String e : List.of("R1", "R2", "V", "M+")) {
+        for (String e : List.of("RA", "RB", "V", "M+")) {
             double lr = r.result("Lr." + e), lrc = r.result("Lrc." + e), des = r.result("Lrdes." + e);
             // ASCE 7-16 4.4: whichever gives the greater effect
             assertThat(des).as(e).isCloseTo(Math.max(lr, lrc), within(1e-9 * Math.max(1, des)));

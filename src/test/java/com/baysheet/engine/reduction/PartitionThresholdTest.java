@@ -30,7 +30,7 @@ class PartitionThresholdTest {
         // 10 ft span, 5 ft wide: K_LL A_T = 2 × 50 = 100 ft² < 400, no reduction; L = 80 psf (+ 15 psf where required)
         // R = wℓ/2 = (80 or 95) × 5 × 10 / 2
         CalcRecord r = corridorBeam(Fixtures.US, edition, 10, 5);
-        assertThat(r.result("L.R1")).isCloseTo((allowance ? 95 : 80) * 5 * 10 / 2.0, within(1e-9));
+        assertThat(r.result("L.RA")).isCloseTo((allowance ? 95 : 80) * 5 * 10 / 2.0, within(1e-9));
         assertThat(r.notes().stream().anyMatch(n -> n.text().startsWith("No partition allowance"))).isEqualTo(!allowance);
     }
 
@@ -39,6 +39,6 @@ class PartitionThresholdTest {
     void threePointEightThreeKilopascalCorridorSI(String edition, boolean allowance) {
         // 3 m span, 1.5 m wide: K_LL A_T = 9 m² < 37.16; L = 3.83 kN/m² (+ 0.72 where required); R = wℓ/2
         CalcRecord r = corridorBeam(Fixtures.SI, edition, 3, 1.5);
-        assertThat(r.result("L.R1")).isCloseTo((allowance ? 3.83 + 0.72 : 3.83) * 1.5 * 3 / 2, within(1e-9));
+        assertThat(r.result("L.RA")).isCloseTo((allowance ? 3.83 + 0.72 : 3.83) * 1.5 * 3 / 2, within(1e-9));
     }
 }
