@@ -11,7 +11,11 @@ public enum Quantity {
     FORCE(Unit.KIP, Unit.KN),
     MOMENT(Unit.KIP_FT, Unit.KN_M),
     STIFFNESS(Unit.KIP_IN2, Unit.KN_M2),
-    SLOPE(Unit.IN_PER_FT, Unit.PERCENT);
+    SLOPE(Unit.IN_PER_FT, Unit.PERCENT),
+    /** Snow density (ASCE 7 Chapter 7). */
+    DENSITY(Unit.PCF, Unit.KN_PER_M3),
+    /** A roof slope in degrees, as the snow chapter states its limits. */
+    ANGLE(Unit.DEG, Unit.DEG);
 
     private final Unit us;
     private final Unit si;
