@@ -115,4 +115,16 @@ class SnowDriftTest {
         Run r = run(SI, unit(pg), flat().withStep(new RoofStep(Convert.toSi(Quantity.LENGTH, 10), lu, lower)));
         assertThat(r.step("hd,lee")).isCloseTo(3.51938 * 0.3048, within(1e-4));
     }
+
+    @Test
+    void recordCarriesEveryStepWithItsClauseAndWritesAsJson() {
+        Run r = drift(10, 100, 50);
+        for (String sym : new String[]{"Ce", "Ct", "Is", "pf", "θ", "Cs", "ps", "pm", "Sb", "γ", "hb", "hc", "hc/hb", "hd,lee", "hd,wind", "hd", "w", "pd"})
+            assertThat(r.record().step(sym).clause().isNone()).as(sym).isFalse();
+        assertThat(r.record().step("γ").unit()).isEqualTo("pcf");
+        assertThat(r.record().step("θ").unit()).isEqualTo("°");
+        assertThat(r.record().step("hd").clause().ref()).isEqualTo("7.7.1, Fig. 7.7-1");
+        String json = com.baysheet.engine.record.RecordJson.write(r.record());
+        assertThat(json).contains("\"snow.drift.pd\"").doesNotContain("Infinity");
+    }
 }
