@@ -33,7 +33,7 @@ final class RainOnSnow {
             return 0;
         }
         String sub = Double.isNaN(eaveToRidge) ? "flat roof" : rec.fmt(deg) + "° < " + rec.num(eaveToRidge, Quantity.LENGTH) + " / " + rec.plain(div);
-        double pr = rec.step("pr", "Rain-on-snow surcharge, balanced case only", "where 0 < p_g ≤ " + rec.num(pgMax, Quantity.PRESSURE)
+        double pr = rec.step("pr", "Rain-on-snow surcharge, balanced case only", "where 0 < p_g ≤ " + rec.show(pgMax, Quantity.PRESSURE)
                 + " and θ < W / " + rec.plain(div), sub, load, Quantity.PRESSURE, c);
         rec.info("The rain-on-snow surcharge is added to the balanced case only, not to the drift, sliding, unbalanced, minimum or partial cases.", c);
         return pr;

@@ -77,9 +77,9 @@ public final class RoofSnow {
         Edition ed = ctx.edition();
         double limit = ctx.constant("snow.minimum.pgLimit"), load = ctx.constant("snow.minimum.load");
         Clause c = ed.clause("snow.minimum");
-        String lim = rec.num(limit, Quantity.PRESSURE);
+        String lim = rec.show(limit, Quantity.PRESSURE);
         double pm = rec.step("pm", "Minimum snow load for a low-slope roof, a separate uniform case",
-                pg <= limit ? "p_m = I_s p_g where p_g ≤ " + lim : "p_m = " + rec.num(load, Quantity.PRESSURE) + " I_s where p_g > " + lim,
+                pg <= limit ? "p_m = I_s p_g where p_g ≤ " + lim : "p_m = " + rec.plain(load) + " I_s where p_g > " + lim,
                 pg <= limit ? rec.fmt(is) + " × " + rec.num(pg, Quantity.PRESSURE) : rec.num(load, Quantity.PRESSURE) + " × " + rec.fmt(is),
                 pg <= limit ? is * pg : load * is, Quantity.PRESSURE, c);
         rec.info("p_m is a separate uniform load case: it is not combined with drift, sliding, unbalanced or partial loads.", c);

@@ -41,6 +41,9 @@ final class SnowDrift {
             }
         } else rec.info("No balanced snow on the lower roof (p_s = 0): the drift is still worked out (conservative).", drift);
 
+        if (sys == UnitSystem.SI)
+            rec.info("Drift heights: the equation of " + ed.clause("snow.driftHeight").label() + " in ft and psf, with ℓ and p_g converted"
+                    + " exactly (NIST SP 811) and h_d converted back to m.", ed.clause("snow.driftHeight"));
         double lee = height(ed, sys, "hd,lee", "Leeward drift height, from the upper roof length", step.upperLength(), pg, 1, rec);
         double windFactor = ed.constant("snow.drift.windward");
         double wind = height(ed, sys, "hd,wind", "Windward drift height, from the lower roof length", step.lowerLength(), pg, windFactor, rec);
