@@ -22,10 +22,18 @@ public final class Edition {
     private final Map<String, Double> constants;
     private final Map<String, Clause> resolved = new HashMap<>();
     private final Map<String, Double> us = new HashMap<>(), si = new HashMap<>();
+    private final SnowData snow;
 
     public Edition(String id, String floorMethod, Map<String, String> clauses, Map<String, String> confidence,
                    Map<MemberKind, Double> kll, Map<String, Double> constants) {
+        this(id, floorMethod, clauses, confidence, kll, constants, null);
+    }
+
+    /** @param snow the roof snow tables, or null where the edition carries none (its clauses and constants are in the maps) */
+    public Edition(String id, String floorMethod, Map<String, String> clauses, Map<String, String> confidence,
+                   Map<MemberKind, Double> kll, Map<String, Double> constants, SnowData snow) {
         this.id = id;
+        this.snow = snow;
         this.floorMethod = floorMethod;
         this.clauses = Map.copyOf(clauses);
         this.confidence = Map.copyOf(confidence);
@@ -59,6 +67,9 @@ public final class Edition {
     }
 
     public double kll(MemberKind kind) { return kll.get(kind); }
+
+    /** The roof snow tables (Chapter 7), empty where the edition has no snow block. */
+    public java.util.Optional<SnowData> snow() { return java.util.Optional.ofNullable(snow); }
 
     public double constant(String key) {
         Double v = constants.get(key);

@@ -40,8 +40,9 @@ public final class Editions {
             if (in == null) throw new IllegalStateException("missing resource " + resource);
             JsonNode root = new ObjectMapper().readTree(in);
             Map<String, Edition> byId = new LinkedHashMap<>();
+            JsonNode snow = root.path("snow");
             for (JsonNode e : root.get("editions")) {
-                Edition ed = parse(e);
+                Edition ed = parse(e, snow.path(e.get("id").asText()));
                 byId.put(ed.id(), ed);
             }
             return new Editions(byId, root.get("default").asText());
@@ -50,20 +51,29 @@ public final class Editions {
         }
     }
 
-    private static Edition parse(JsonNode e) {
+    private static Edition parse(JsonNode e, JsonNode snow) {
         Map<MemberKind, Double> kll = new EnumMap<>(MemberKind.class);
         e.get("kll").fields().forEachRemaining(f -> kll.put(MemberKind.valueOf(f.getKey()), f.getValue().asDouble()));
-        return new Edition(e.get("id").asText(), e.get("floorMethod").asText(),
-                strings(e.get("clauses")), strings(e.get("confidence")), kll, numbers(e.get("constants")));
+        Map<String, String> clauses = strings(e.get("clauses")), confidence = strings(e.get("confidence"));
+        Map<String, Double> constants = numbers(e.get("constants"));
+        SnowData snowData = null;
+        if (snow.has("unsupported")) snowData = SnowData.unsupported(snow.get("unsupported").asText());
+        else if (!snow.isMissingNode()) {
+            clauses.putAll(strings(snow.get("clauses")));
+            confidence.putAll(strings(snow.get("confidence")));
+            constants.putAll(numbers(snow.get("constants")));
+            snowData = SnowReader.tables(snow);
+        }
+        return new Edition(e.get("id").asText(), e.get("floorMethod").asText(), clauses, confidence, kll, constants, snowData);
     }
 
-    private static Map<String, String> strings(JsonNode n) {
+    static Map<String, String> strings(JsonNode n) {
         Map<String, String> m = new LinkedHashMap<>();
         n.fields().forEachRemaining(f -> m.put(f.getKey(), f.getValue().asText()));
         return m;
     }
 
-    private static Map<String, Double> numbers(JsonNode n) {
+    static Map<String, Double> numbers(JsonNode n) {
         Map<String, Double> m = new LinkedHashMap<>();
         n.fields().forEachRemaining(f -> m.put(f.getKey(), f.getValue().asDouble()));
         return m;

@@ -16,6 +16,7 @@ public final class Convert {
     public static final double KN_PER_M_PER_PLF = KN_PER_LB / M_PER_FT;       // 0.014593903 kN/m
     public static final double KNM_PER_LBFT = KN_PER_LB * M_PER_FT;           // 0.0013558179 kN·m
     public static final double KNM2_PER_LBFT2 = KN_PER_LB * SQM_PER_SQFT;
+    public static final double KNM3_PER_PCF = KN_PER_LB / (M_PER_FT * M_PER_FT * M_PER_FT); // 0.157087464 kN/m³
 
     /** Converts a value of the given kind from the US base unit to the SI base unit. */
     public static double toSi(Quantity q, double us) {
@@ -45,6 +46,8 @@ public final class Convert {
             case STIFFNESS -> KNM2_PER_LBFT2;
             // roof slope: rise in inches per foot (US) against percent (SI): 1 in/ft = 100/12 %
             case SLOPE -> 100.0 / 12.0;
+            case DENSITY -> KNM3_PER_PCF;
+            case ANGLE -> 1;
         };
     }
 }

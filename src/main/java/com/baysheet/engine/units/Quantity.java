@@ -15,7 +15,12 @@ public enum Quantity {
     FORCE(Unit.KIP, Unit.KN, Unit.LB, Unit.KN),
     MOMENT(Unit.KIP_FT, Unit.KN_M, Unit.LB_FT, Unit.KN_M),
     STIFFNESS(Unit.KIP_IN2, Unit.KN_M2, Unit.LB_FT2, Unit.KN_M2),
-    SLOPE(Unit.IN_PER_FT, Unit.PERCENT, Unit.IN_PER_FT, Unit.PERCENT);
+    SLOPE(Unit.IN_PER_FT, Unit.PERCENT, Unit.IN_PER_FT, Unit.PERCENT),
+    /** Snow density (ASCE 7 Chapter 7). */
+    DENSITY(Unit.PCF, Unit.KN_PER_M3, Unit.PCF, Unit.KN_PER_M3),
+    /** A roof slope in degrees, as the snow chapter states its limits. */
+    ANGLE(Unit.DEG, Unit.DEG, Unit.DEG, Unit.DEG);
+
 
     private final Unit us;
     private final Unit si;

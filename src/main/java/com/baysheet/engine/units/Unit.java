@@ -14,7 +14,8 @@ public enum Unit {
     LB("lb", 1), KIP("kip", 0.001), KN("kN", 1),
     LB_FT("lb·ft", 1), KIP_FT("kip·ft", 0.001), KN_M("kN·m", 1),
     LB_FT2("lb·ft²", 1), KIP_IN2("kip·in²", 144.0 / 1000.0), KN_M2("kN·m²", 1),
-    IN_PER_FT("in/ft", 1), PERCENT("%", 1);
+    IN_PER_FT("in/ft", 1), PERCENT("%", 1),
+    PCF("pcf", 1), KN_PER_M3("kN/m³", 1), DEG("°", 1);
 
     private final String symbol;
     private final double perBase;
