@@ -14,8 +14,10 @@ import java.util.List;
 import java.util.concurrent.TimeUnit;
 
 /**
- * The office server as a process of its own ({@code java -cp <the test class path> com.baysheet.App}) on a
- * free loopback port over its own data directory, so that it can be killed as a machine dies.
+ * The office server as shipped: the shaded jar ({@code java -jar target/baysheet.jar}) as a process of its own
+ * on a free loopback port over its own data directory, so that what the tests reach is what an office runs
+ * (every template and resource as packaged), and so that it can be killed as a machine dies. These tests run
+ * under Failsafe after {@code package}; without the jar they fail saying so.
  */
 final class ChildServer implements AutoCloseable {
     private static final Duration STARTUP = Duration.ofSeconds(90);
@@ -30,12 +32,21 @@ final class ChildServer implements AutoCloseable {
         this.log = log;
     }
 
+    /** The jar that {@code package} built: Failsafe passes its path; run by hand, target/baysheet.jar. */
+    static Path jar() {
+        Path jar = Path.of(System.getProperty("baysheet.jar", "target/baysheet.jar")).toAbsolutePath();
+        if (!Files.isRegularFile(jar))
+            throw new IllegalStateException(jar + " is missing: the end-to-end tests run against the shaded jar, "
+                    + "after package (mvn -B -ntp verify, or mvn -B -ntp verify -DskipTests -Dit.test=NameIT)");
+        return jar;
+    }
+
     /** Starts the server on this data directory and waits until its health check answers. */
     static ChildServer start(Path dataDir, boolean demo) throws IOException, InterruptedException {
         int port = freePort();
         Path log = dataDir.resolveSibling(dataDir.getFileName() + "-server-" + System.nanoTime() + ".log");
         List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-Xmx512m", "-cp", System.getProperty("java.class.path"), "com.baysheet.App",
+                "-Xmx512m", "-jar", jar().toString(),
                 "--port", String.valueOf(port), "--bind", "127.0.0.1", "--data", dataDir.toString()));
         if (demo) cmd.add("--demo");
         Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile()).start();

@@ -78,6 +78,13 @@ final class OfficeClient {
         return formRaw(path, all.entrySet().stream().map(e -> Map.entry(e.getKey(), e.getValue())).toList());
     }
 
+    /** A form post of these pairs (names may repeat), with the form token added last. */
+    HttpResponse<String> post(String path, List<Map.Entry<String, String>> fields) {
+        List<Map.Entry<String, String>> all = new java.util.ArrayList<>(fields);
+        if (token != null) all.add(Map.entry("_csrf", token));
+        return formRaw(path, all);
+    }
+
     /** A form post of exactly these pairs (names may repeat). */
     HttpResponse<String> formRaw(String path, List<Map.Entry<String, String>> fields) {
         String body = fields.stream().map(e -> enc(e.getKey()) + "=" + enc(e.getValue())).collect(Collectors.joining("&"));
@@ -91,6 +98,17 @@ final class OfficeClient {
                 .method(method, body == null ? HttpRequest.BodyPublishers.noBody() : HttpRequest.BodyPublishers.ofString(body));
         if (token != null) b.header("X-CSRF-Token", token);
         return send(b);
+    }
+
+    /** Uploads one file as multipart/form-data field {@code field}, with the form token, as the verify page does. */
+    HttpResponse<String> upload(String path, String field, String filename, byte[] content) {
+        String boundary = "----baysheet-e2e-boundary";
+        byte[] head = ("--" + boundary + "\r\nContent-Disposition: form-data; name=\"_csrf\"\r\n\r\n" + token + "\r\n--"
+                + boundary + "\r\nContent-Disposition: form-data; name=\"" + field + "\"; filename=\"" + filename
+                + "\"\r\nContent-Type: application/pdf\r\n\r\n").getBytes(StandardCharsets.UTF_8);
+        byte[] tail = ("\r\n--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8);
+        return send(HttpRequest.newBuilder(uri(path)).header("Content-Type", "multipart/form-data; boundary=" + boundary)
+                .POST(HttpRequest.BodyPublishers.ofByteArrays(List.of(head, content, tail))));
     }
 
     /** A request of any kind, with this session's cookies and token. */

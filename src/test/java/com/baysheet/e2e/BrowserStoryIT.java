@@ -1,16 +1,11 @@
 package com.baysheet.e2e;
 
 import com.baysheet.auth.Tokens;
-import com.baysheet.framing.Derivation;
-import com.baysheet.store.Database;
-import com.baysheet.store.Store;
-import com.baysheet.web.Server;
-import com.baysheet.web.review.Signoff;
-import io.javalin.Javalin;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.openqa.selenium.By;
 import org.openqa.selenium.Keys;
 import org.openqa.selenium.WebElement;
@@ -22,30 +17,31 @@ import java.time.Instant;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.UUID;
 import java.util.stream.Collectors;
 import java.util.stream.Stream;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
 /**
- * The whole story of one sheet in a real browser (Debian's Chromium, headless), against the production wiring
- * (full-strength password hashing, the access filter, form tokens): the administrator's set-up, two users,
+ * The whole story of one sheet in a real browser (Debian's Chromium, headless), against the shipped jar as a
+ * process of its own on a new, empty office (full-strength password hashing, the access filter, form tokens,
+ * every template and static file as packaged): the administrator's set-up, two users,
  * an engineer entering a project, its grid, levels and bays, reading members and a take-down, downloading
  * and submitting a sheet; a checker marking up a step and returning it; the engineer answering and
  * resubmitting; the checker approving and issuing; the issued PDF downloaded and verified by upload.
  * Along the way every page is checked for unlabelled form fields, and the set-up and login forms are filled
  * and sent with the keyboard alone.
  */
-class BrowserStoryTest {
+class BrowserStoryIT {
     private static final String ADMIN_PASSWORD = "harbour lights 42";
     private static final String ENGINEER_PASSWORD = "gravel path 1987";
     private static final String CHECKER_PASSWORD = "slate roof 2231";
     private static final String MARKUP = "Is this K_LL right for a girder? <script>alert('x')</script>";
     private static final String REPLY = "Yes: interior girder, K_LL = 2 (Table 4.7-1).";
 
-    static Database db;
-    static Javalin app;
+    @TempDir
+    static Path dir;
+    static ChildServer server;
     static ChromeDriver driver;
     static Path downloads;
     Page page;
@@ -53,12 +49,9 @@ class BrowserStoryTest {
     @BeforeAll
     static void start() throws Exception {
         String missing = Chromium.missing();
-        if (missing != null) System.out.println("BrowserStoryTest skipped: " + missing);
+        if (missing != null) System.out.println("BrowserStoryIT skipped: " + missing);
         Assumptions.assumeTrue(missing == null, "browser tests need Debian's chromium and chromium-driver: " + missing);
-        db = Database.open("jdbc:h2:mem:e2e" + UUID.randomUUID().toString().replace("-", "")
-                + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
-        Store store = Store.on(db.dataSource(), Derivation::derive);
-        app = Server.create(store, Signoff.on(store, db.dataSource())::install).start("127.0.0.1", 0);
+        server = ChildServer.start(dir.resolve("data"), false);
         downloads = Files.createTempDirectory("baysheet-downloads-");
         driver = Chromium.start(downloads);
         driver.executeCdpCommand("Browser.setDownloadBehavior", Map.of("behavior", "allow",
@@ -66,19 +59,19 @@ class BrowserStoryTest {
     }
 
     @AfterAll
-    static void stop() {
+    static void stop() throws InterruptedException {
         if (driver != null) driver.quit();
-        if (app != null) app.stop();
-        if (db != null) db.close();
+        if (server != null) server.close();
     }
 
     @Test
     void oneSheetFromSetUpToIssuedAndVerified() throws Exception {
-        page = new Page(driver, "http://127.0.0.1:" + app.port());
+        page = new Page(driver, server.base());
         try {
             story();
         } catch (Throwable t) {
             Screenshots.save(driver, "story-" + Instant.now().toString().replace(':', '-'));
+            System.out.println("BrowserStoryIT: the server's log follows\n" + server.logText());
             throw t;
         }
         assertThat(page.unlabelled).as("form fields without a label, by page").isEmpty();

@@ -6,6 +6,8 @@ import com.baysheet.store.Demo;
 import com.baysheet.store.ProjectInfo;
 import com.baysheet.store.Store;
 import com.baysheet.engine.units.UnitSystem;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -15,6 +17,9 @@ import java.sql.Connection;
 import java.sql.DriverManager;
 import java.sql.ResultSet;
 import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
 import java.util.zip.ZipEntry;
 import java.util.zip.ZipInputStream;
 
@@ -23,9 +28,12 @@ import static org.assertj.core.api.Assertions.assertThat;
 /**
  * H2's two online backups of the embedded database, taken while the pool is open and in use: {@code BACKUP TO}
  * (a zip of the database file, restored by unzipping it as the data directory's file) and {@code SCRIPT TO}
- * (SQL, restored with {@code RUNSCRIPT FROM} into an empty database). Both give back the state at the backup.
+ * (SQL, restored with {@code RUNSCRIPT FROM} into an empty database). Both give back the state at the backup,
+ * and the shipped jar, started on the restored data directory, serves it without migrating or repairing anything.
  */
-class BackupRestoreTest {
+class BackupRestoreIT {
+    private static final ObjectMapper JSON = new ObjectMapper();
+
     @TempDir
     Path dir;
 
@@ -51,6 +59,7 @@ class BackupRestoreTest {
             long first = store.projects().findAll().get(0).id();
             assertThat(store.results().of(first).derived().members()).as("the restored demo derives its members").isNotEmpty();
         }
+        servedByTheJar(restored, atBackup);
     }
 
     @Test
@@ -72,6 +81,24 @@ class BackupRestoreTest {
         try (Database db = Database.open(Database.h2Url(fresh))) {
             assertThat(db.migrate()).as("the restored schema is up to date").isZero();
             assertThat(projects(db)).isEqualTo(atBackup);
+        }
+        servedByTheJar(fresh, atBackup);
+    }
+
+    /** The shipped server, started on the restored directory, lists the projects as they were at the backup. */
+    private static void servedByTheJar(Path data, String atBackup) throws Exception {
+        try (ChildServer server = ChildServer.start(data, false)) {
+            OfficeClient admin = new OfficeClient(server.base()).setUp("admin", "restored office 2024");
+            List<JsonNode> listed = new ArrayList<>();
+            JSON.readTree(OfficeClient.expect(admin.get("/api/projects"), 200).body()).forEach(listed::add);
+            listed.sort(Comparator.comparingLong(p -> p.path("id").asLong()));
+            StringBuilder b = new StringBuilder();
+            for (JsonNode p : listed)
+                b.append(p.path("id").asLong()).append(' ').append(p.path("info").path("jobNumber").asText()).append(' ')
+                        .append(p.path("version").asLong()).append('\n');
+            assertThat(b.toString()).as("the projects the restored server lists").isEqualTo(atBackup);
+            assertThat(server.logText()).as("the restored schema is current").doesNotContain("Migrating schema")
+                    .doesNotContainIgnoringCase("corrupt");
         }
     }
 

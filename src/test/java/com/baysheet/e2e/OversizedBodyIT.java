@@ -1,51 +1,40 @@
 package com.baysheet.e2e;
 
 import com.baysheet.auth.Role;
-import com.baysheet.framing.Derivation;
-import com.baysheet.store.Database;
-import com.baysheet.store.Demo;
-import com.baysheet.store.Store;
-import com.baysheet.web.Server;
-import com.baysheet.web.TestLogin;
-import com.baysheet.web.review.Signoff;
-import io.javalin.Javalin;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 import java.net.http.HttpResponse;
-import java.time.Clock;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
-import java.util.UUID;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
 /**
- * Bodies far larger than any form or sheet: refused before they are read whole (413), with nothing
- * stored; bodies under the limit but larger than any real form are refused as input, never as a fault.
+ * Bodies far larger than any form or sheet, sent to the shipped jar over the demo: refused before they are
+ * read whole (413), with nothing stored; bodies under the limit but larger than any real form are refused as
+ * input, never as a fault.
  */
-class OversizedBodyTest {
-    static Database db;
-    static Javalin app;
-    static TestLogin.Client engineer;
+class OversizedBodyIT {
+    @TempDir
+    static Path dir;
+    static DemoOffice office;
+    static OfficeClient engineer;
     static long project;
 
     @BeforeAll
-    static void start() {
-        db = Database.open("jdbc:h2:mem:big" + UUID.randomUUID().toString().replace("-", "")
-                + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
-        Store store = Store.on(db.dataSource(), Derivation::derive);
-        project = Demo.loadIfEmpty(store).get(0).id();
-        Signoff signoff = TestLogin.signoff(store, db, Clock.systemUTC());
-        app = Server.create(store, signoff::install).start("127.0.0.1", 0);
-        engineer = TestLogin.as(app, signoff, "erin", Role.ENGINEER);
+    static void start() throws Exception {
+        office = DemoOffice.start(dir.resolve("data"));
+        engineer = office.client(Role.ENGINEER);
+        project = office.project();
     }
 
     @AfterAll
-    static void stop() {
-        app.stop();
-        db.close();
+    static void stop() throws Exception {
+        if (office != null) office.close();
     }
 
     @Test

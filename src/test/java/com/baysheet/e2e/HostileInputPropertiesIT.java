@@ -1,16 +1,6 @@
 package com.baysheet.e2e;
 
 import com.baysheet.auth.Role;
-import com.baysheet.framing.Derivation;
-import com.baysheet.framing.DerivedMember;
-import com.baysheet.store.Database;
-import com.baysheet.store.Demo;
-import com.baysheet.store.Project;
-import com.baysheet.store.Store;
-import com.baysheet.web.Server;
-import com.baysheet.web.TestLogin;
-import com.baysheet.web.review.Signoff;
-import io.javalin.Javalin;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
@@ -23,58 +13,53 @@ import net.jqwik.api.lifecycle.BeforeContainer;
 import java.net.URLEncoder;
 import java.net.http.HttpResponse;
 import java.nio.charset.StandardCharsets;
-import java.time.Clock;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.UUID;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
 /**
- * Every form and API endpoint fed random and extreme values (200 tries a group): the server never answers
- * with a 5xx, and a refused request leaves the project, its bays, the projects, the firm occupancies,
- * users and firm settings exactly as they were (compared through the API and the admin pages).
+ * Every form and API endpoint of the shipped jar (over the demo, as a process of its own) fed random and
+ * extreme values (200 tries a group): the server never answers with a 5xx, and a refused request leaves the
+ * project, its bays, the projects, the firm occupancies, users and firm settings exactly as they were
+ * (compared through the API and the admin pages).
  */
-class HostileInputProperties {
-    static Database db;
-    static Store store;
-    static Javalin app;
-    static TestLogin.Client engineer;
-    static TestLogin.Client admin;
-    static TestLogin.Client anonymous;
+class HostileInputPropertiesIT {
+    static DemoOffice office;
+    static OfficeClient engineer;
+    static OfficeClient admin;
+    static OfficeClient anonymous;
     static long project;
-    static long level;
+    static String level;
     static String member;
 
     @BeforeContainer
-    static void start() {
-        db = Database.open("jdbc:h2:mem:fuzz" + UUID.randomUUID().toString().replace("-", "")
-                + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
-        store = Store.on(db.dataSource(), Derivation::derive);
-        List<Project> demo = Demo.loadIfEmpty(store);
-        Signoff signoff = TestLogin.signoff(store, db, Clock.systemUTC());
-        app = Server.create(store, signoff::install).start("127.0.0.1", 0);
-        engineer = TestLogin.as(app, signoff, "erin", Role.ENGINEER);
-        admin = TestLogin.as(app, signoff, "admin", Role.ADMINISTRATOR);
-        anonymous = TestLogin.anonymous(app);
-        project = demo.get(0).id();
-        level = store.levels().findByProject(project).get(0).id();
-        DerivedMember m = store.results().of(project).derived().members().get(0);
-        member = m.id();
+    static void start() throws Exception {
+        // jqwik has no @TempDir: the data directory goes under target/, as the crash test's does
+        Path data = Files.createDirectories(Path.of("target", "e2e-data", "hostile-" + System.currentTimeMillis())).resolve("data");
+        office = DemoOffice.start(data);
+        engineer = office.client(Role.ENGINEER);
+        admin = office.client(Role.ADMINISTRATOR);
+        anonymous = new OfficeClient(office.server.base());
+        anonymous.get("/login");
+        project = office.project();
+        level = DemoOffice.first(engineer, "/api/projects/" + project + "/levels", "id");
+        member = DemoOffice.first(engineer, "/api/projects/" + project + "/members", "id");
     }
 
     @AfterContainer
-    static void stop() {
-        if (app != null) app.stop();
-        if (db != null) db.close();
+    static void stop() throws Exception {
+        if (office != null) office.close();
     }
 
     // ---- the page forms ----
 
     /** A form: its path, and each field with a value the form accepts ("VERSION" for the project's version). */
-    record FormCase(String name, TestLogin.Client who, String path, Map<String, String> valid) {}
+    record FormCase(String name, OfficeClient who, String path, Map<String, String> valid) {}
 
     static List<FormCase> forms() {
         String p = "/projects/" + project;
@@ -220,9 +205,9 @@ class HostileInputProperties {
     /** What a refused request must not change, read back as users see it. */
     record Snapshot(long version, String projectJson, String bays, String projects, String occupancies, String users, String firm) {
         static Snapshot take() {
-            String p = engineer.get("/api/projects/" + HostileInputProperties.project).body();
+            String p = engineer.get("/api/projects/" + HostileInputPropertiesIT.project).body();
             long version = Long.parseLong(p.replaceAll("(?s).*?\"version\" ?: ?(\\d+).*", "$1"));
-            return new Snapshot(version, p, engineer.get("/api/projects/" + HostileInputProperties.project + "/levels/" + level + "/bays").body(),
+            return new Snapshot(version, p, engineer.get("/api/projects/" + HostileInputPropertiesIT.project + "/levels/" + level + "/bays").body(),
                     engineer.get("/api/projects").body(), engineer.get("/api/occupancies").body(),
                     admin.get("/admin/users").body(), admin.get("/admin/firm").body());
         }

@@ -31,7 +31,7 @@ import static org.assertj.core.api.Assertions.assertThat;
  * Every save that was answered as saved must be there, every answered version must be reached, and the
  * database must open as it is, without any repair.
  */
-class CrashSafetyTest {
+class CrashSafetyIT {
     private static final ObjectMapper JSON = new ObjectMapper();
     private static final int USERS = 8;
     /** Enough acknowledged saves that the kill lands in the middle of the stream, whatever the machine's speed. */
