@@ -59,8 +59,7 @@ public final class IssuedRoutes {
     void checkingPdf(Context ctx) {
         SheetContext.OfMember s = SheetContext.member(store, ctx);
         Reviews.SheetView v = review.reviews().view(s.ref());
-        byte[] pdf = SheetPdfs.checking(review.firm().get(), s, v.current().revision(), v.markups(),
-                Access.user(ctx).initials(), LocalDate.now(clock)).bytes();
+        byte[] pdf = SheetPdfs.checking(review.firm().get(), s, v.current().revision(), v.markups(), LocalDate.now(clock)).bytes();
         pdf(ctx, pdf, s.member().id() + "-checking-copy.pdf");
     }
 
