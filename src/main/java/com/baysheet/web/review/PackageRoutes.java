@@ -89,7 +89,7 @@ public final class PackageRoutes {
         if (job.file == null) throw new NotFound("finished package", job.id);
         ctx.contentType("application/pdf");
         ctx.header("X-Content-SHA256", job.sha256);
-        ctx.header("Content-Disposition", "attachment; filename=\"" + job.title.replaceAll("[^A-Za-z0-9._-]", "_") + "-checking-copy.pdf\"");
+        ctx.header("Content-Disposition", "attachment; filename=\"" + job.fileName.replaceAll("[^A-Za-z0-9._-]", "_") + "\"");
         try (InputStream in = Files.newInputStream(job.file)) {
             ctx.result(in.readAllBytes());
         } catch (IOException e) {
