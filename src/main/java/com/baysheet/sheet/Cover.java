@@ -70,10 +70,15 @@ final class Cover {
         pdf.add(new ClosingBlock(fonts, false).table(null));
     }
 
-    /** The package's own revision and issue: a checking copy is not an issue, whatever revision it shows. */
+    /**
+     * The package's own revision and issue. A checking copy is not an issue, whatever revision it shows; where
+     * that revision was issued before (it is in the log), the cover says when.
+     */
     private String standing(SheetHeader h) {
-        if (checking || !h.isIssued()) return "Revision " + h.revision() + ", not issued: checking copy printed " + h.printedOn();
-        return "Revision " + h.revision() + ", issued " + h.issueDate();
+        if (!checking && h.isIssued()) return "Revision " + h.revision() + ", issued " + h.issueDate();
+        return pkg.revisions().stream().filter(r -> r.label().equals(h.revision())).findFirst()
+                .map(r -> "Revision " + h.revision() + ", issued " + r.date() + "; this checking copy, printed " + h.printedOn() + ", is not an issue")
+                .orElse("Revision " + h.revision() + ", not issued: checking copy printed " + h.printedOn());
     }
 
     private void pair(PdfPTable t, String label, String value) {

@@ -116,6 +116,16 @@ class PackageRendererTest {
     }
 
     @Test
+    void aCheckingCopyOfARevisionIssuedBeforeSaysWhenAndThatItIsNotAnIssue() {
+        CalcPackage level = FramingSheets.level(SheetFixtures.header("Level"), building, "Level 2",
+                List.of(new Revision("A", LocalDate.of(2025, 6, 1), "First issue", "JQR / MKL")));
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        PackageRenderer.checking(level, out, PackageRenderer.Progress.NONE);
+        assertThat(SheetFixtures.pageTexts(out.toByteArray()).get(0))
+                .contains("Revision A, issued 2025-06-01; this checking copy, printed 2025-06-02, is not an issue", "Issue date\nnot issued");
+    }
+
+    @Test
     void eachMemberPageStatesItsOwnHeaderAndTheBandThePackagesIssue() {
         SheetHeader pkg = SheetFixtures.header("Level");
         SheetHeader unchecked = new SheetHeader(pkg.firm(), pkg.project(), pkg.jobNumber(), "x", SheetHeader.NOT_SUBMITTED, null,
