@@ -22,4 +22,9 @@ public record CalcPackage(SheetHeader header, String title, DesignCriteria crite
         if (sheets.isEmpty() && takeDowns.isEmpty())
             throw new InputError("sheets", 0, "a package needs at least one member sheet or take-down");
     }
+
+    /** The same package under another title block of its own (the member sheets keep theirs). */
+    public CalcPackage withHeader(SheetHeader h) {
+        return new CalcPackage(h, title, criteria, sheets, takeDowns, revisions);
+    }
 }

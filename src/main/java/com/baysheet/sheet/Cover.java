@@ -11,11 +11,13 @@ final class Cover {
     private final PdfaDocument pdf;
     private final CalcPackage pkg;
     private final Fonts fonts;
+    private final boolean checking;
 
-    Cover(PdfaDocument pdf, CalcPackage pkg) {
+    Cover(PdfaDocument pdf, CalcPackage pkg, boolean checking) {
         this.pdf = pdf;
         this.pkg = pkg;
         this.fonts = pdf.fonts;
+        this.checking = checking;
     }
 
     void write() {
@@ -32,9 +34,9 @@ final class Cover {
         pair(project, "Project", h.project());
         pair(project, "Job number", h.jobNumber());
         pair(project, "Prepared by", h.firm());
-        pair(project, "Prepared by (engineer)", h.preparedBy() + ", " + h.preparedOn());
+        pair(project, "Prepared by (engineer)", h.isSubmitted() ? h.preparedBy() + ", " + h.preparedOn() : h.preparedBy());
         pair(project, "Checked by", h.isChecked() ? h.checkedBy() + ", " + h.checkedOn() : "not yet checked");
-        pair(project, "Revision and issue date", h.revision() + ", issued " + h.issueDate());
+        pair(project, "Revision and issue date", standing(h));
         pdf.add(project);
 
         DesignCriteria c = pkg.criteria();
@@ -66,6 +68,17 @@ final class Cover {
                 + (levels == 1 ? " level" : " levels") + " and " + pkg.takeDowns().size() + " column take-downs, listed in the index that follows.",
                 fonts.body()));
         pdf.add(new ClosingBlock(fonts, false).table(null));
+    }
+
+    /**
+     * The package's own revision and issue. A checking copy is not an issue, whatever revision it shows; where
+     * that revision was issued before (it is in the log), the cover says when.
+     */
+    private String standing(SheetHeader h) {
+        if (!checking && h.isIssued()) return "Revision " + h.revision() + ", issued " + h.issueDate();
+        return pkg.revisions().stream().filter(r -> r.label().equals(h.revision())).findFirst()
+                .map(r -> "Revision " + h.revision() + ", issued " + r.date() + "; this checking copy, printed " + h.printedOn() + ", is not an issue")
+                .orElse("Revision " + h.revision() + ", not issued: checking copy printed " + h.printedOn());
     }
 
     private void pair(PdfPTable t, String label, String value) {

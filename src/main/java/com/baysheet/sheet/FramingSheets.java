@@ -12,6 +12,7 @@ import com.baysheet.framing.model.Level;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.function.Function;
 
 /**
  * Sheets and packages from a derived framing model: each member's record with a key plan of its level,
@@ -26,28 +27,48 @@ public final class FramingSheets {
         return sheet(base, d, m);
     }
 
-    /** The package of one level: its member sheets and the take-downs of the columns at that level. */
+    /** The package of one level, every member sheet under the package's own title block. */
     public static CalcPackage level(SheetHeader base, Derived d, String level, List<Revision> revisions) {
+        return level(base, d, level, revisions, m -> base);
+    }
+
+    /**
+     * The package of one level: its member sheets and the take-downs of the columns at that level.
+     *
+     * @param members each member's own title block (its preparer, checker and revision); its subject becomes the member's name
+     */
+    public static CalcPackage level(SheetHeader base, Derived d, String level, List<Revision> revisions,
+                                    Function<DerivedMember, SheetHeader> members) {
         List<DerivedMember> on = d.onLevel(level);
         if (on.isEmpty()) throw new InputError("level", level, "has no members in this model");
         List<TakeDownTable> downs = new ArrayList<>();
         for (var t : d.takeDowns())
             if (t.rows().stream().anyMatch(r -> r.level().equals(level))) downs.add(TakeDownTables.of(d, t));
         return new CalcPackage(base.withSubject(level + " package"), level + " package", Criteria.of(d.building()),
-                sheets(base, d, on), downs, revisions);
+                sheets(members, d, on), downs, revisions);
     }
 
-    /** The whole project: every member sheet and every column take-down. */
+    /** The whole project, every member sheet under the package's own title block. */
     public static CalcPackage project(SheetHeader base, Derived d, List<Revision> revisions) {
-        return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
-                sheets(base, d, d.members()), d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions);
+        return project(base, d, revisions, m -> base);
     }
 
-    private static List<MemberSheet> sheets(SheetHeader base, Derived d, List<DerivedMember> members) {
+    /**
+     * The whole project: every member sheet and every column take-down.
+     *
+     * @param members each member's own title block (its preparer, checker and revision); its subject becomes the member's name
+     */
+    public static CalcPackage project(SheetHeader base, Derived d, List<Revision> revisions,
+                                      Function<DerivedMember, SheetHeader> members) {
+        return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
+                sheets(members, d, d.members()), d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions);
+    }
+
+    private static List<MemberSheet> sheets(Function<DerivedMember, SheetHeader> headers, Derived d, List<DerivedMember> members) {
         List<String> levels = members.stream().map(DerivedMember::level).distinct().toList();
         return members.stream()
                 .sorted(Comparator.comparingInt((DerivedMember m) -> levels.indexOf(m.level())).thenComparingInt(m -> rank(m.role())))
-                .map(m -> sheet(base, d, m)).toList();
+                .map(m -> sheet(headers.apply(m), d, m)).toList();
     }
 
     private static MemberSheet sheet(SheetHeader base, Derived d, DerivedMember m) {

@@ -89,24 +89,25 @@ final class LoadDiagram {
         return false;
     }
 
-    private void points() {
-        float top = HEIGHT - 18;
-        float lastX = -1000;
-        int level = 0;
-        for (Sketch.Point p : s.points()) {
-            float xp = x(p.x());
-            String label = "P_D " + Display.sig3(Quantity.FORCE.unit(system).fromBase(p.dead())) + "  P_L "
-                    + Display.of(p.live(), Quantity.FORCE, system);
-            float room = fonts.regular.getWidthPoint(label, 5.5f) + 6;
-            level = xp - lastX < room ? 1 - level : 0;   // alternate label heights where arrows crowd
-            lastX = xp;
-            t.setLineWidth(0.9f);
-            Drawing.arrow(t, xp, top - level * 8, xp, BEAM + 1.5f, 4f);
-            Text.show(t, fonts.regular, 5.5f, Fonts.INK, Element.ALIGN_CENTER, label, clampLabel(xp), top + 2 - level * 8);
-        }
+    /** The point-load labels laid out without overlapping; the sheet lists {@code key()} under the diagram. */
+    static PointLoadLabels.Layout pointLabels(Fonts fonts, UnitSystem system, Sketch s) {
+        return new LoadDiagram(fonts, system, s, null).pointLabels();
     }
 
-    private float clampLabel(float xp) { return Math.max(LEFT + 10, Math.min(RIGHT - 10, xp)); }
+    private PointLoadLabels.Layout pointLabels() {
+        return PointLoadLabels.of(fonts.regular, system, s, HEIGHT - 16, WIDTH, this::x);
+    }
+
+    private void points() {
+        float top = HEIGHT - 18;
+        for (PointLoadLabels.Arrow a : pointLabels().arrows()) {
+            float from = top - a.row() * PointLoadLabels.ROW_PITCH;
+            t.setLineWidth(0.9f);
+            Drawing.arrow(t, a.x(), from, a.x(), BEAM + 1.5f, 4f);
+            if (a.labelled())
+                Text.show(t, fonts.regular, PointLoadLabels.SIZE, Fonts.INK, Element.ALIGN_CENTER, a.text(), (a.x0() + a.x1()) / 2, from + 2);
+        }
+    }
 
     private void supports() {
         if (s.support().equals("cantilever")) {

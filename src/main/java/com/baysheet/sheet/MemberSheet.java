@@ -18,6 +18,11 @@ public record MemberSheet(SheetHeader header, CalcRecord record, KeyPlan keyPlan
         group = group == null ? "" : group;
     }
 
+    /** The same sheet under another title block. */
+    public MemberSheet withHeader(SheetHeader h) {
+        return new MemberSheet(h, record, keyPlan, level, group);
+    }
+
     /** A sheet for a member entered on its own: no key plan, no package grouping. */
     public static MemberSheet of(SheetHeader header, CalcRecord record) {
         return new MemberSheet(header, record, null, "", "");

@@ -92,11 +92,18 @@ final class MemberSheetWriter {
         } else t.addCell(Cells.text("No key plan: this member was entered on its own, not derived from a floor plan.", fonts.smallGrey()));
         t.addCell(caption(r.sketch().support().equals("axial")
                 ? "Axial load at the column head (from the results below)."
-                : "Load diagram: dead (w_D, P_D) and design live loads (w_L, P_L: floor live reduced, roof live included); service reactions D + L + Lr."));
+                : "Load diagram: dead (w_D, P_D) and design live loads (w_L, P_L: floor live reduced, roof live included); service reactions D + L + Lr."
+                + keyed(system)));
         t.addCell(Cells.blank(fonts));
         t.addCell(caption(sheet.keyPlan() == null ? "" : "Key plan, " + sheet.keyPlan().level()
                 + ": member as a heavy line, tributary area shaded."));
         return t;
+    }
+
+    /** The point loads that had no room for their label on the diagram, listed with their positions. */
+    private String keyed(UnitSystem system) {
+        List<String> key = LoadDiagram.pointLabels(fonts, system, r.sketch()).key();
+        return key.isEmpty() ? "" : " Point loads by key: " + String.join("; ", key) + ".";
     }
 
     private PdfPCell figure(PdfTemplate template) {

@@ -23,19 +23,24 @@ public final class PackageRenderer {
         Progress NONE = (done, total) -> {};
     }
 
-    /** The issued package written to {@code out} (left open). The package header must name its checker. */
+    /**
+     * The issued package written to {@code out} (left open). The package header must name its checker and its
+     * issue date. Each member sheet's title block states that member's own check and revision, as given (its own
+     * sheet may be unchecked or unissued: the package's check and issue are on its cover and in every band).
+     */
     public static StreamedPdf render(CalcPackage pkg, OutputStream out, Progress progress) {
-        SheetRenderer.requireChecked(pkg.header());
-        for (MemberSheet s : pkg.sheets()) SheetRenderer.requireChecked(s.header());
+        SheetRenderer.requireIssued(pkg.header());
         return write(pkg, out, progress, Markups.ISSUED);
     }
 
     /**
      * A checking copy of the package, for reading and marking up before anything is issued: the checking mark
-     * on every page, "not yet checked" where no checker has signed, never a copy for submittal.
+     * on every page, "not yet checked" where no checker has signed, never a copy for submittal. The package
+     * itself is not issued by it: its own pages say "not issued" and the date printed, whatever its header says;
+     * each member page states that member's own state as given.
      */
     public static StreamedPdf checking(CalcPackage pkg, OutputStream out, Progress progress) {
-        return write(pkg, out, progress, Markups.checking(List.of()));
+        return write(pkg.withHeader(pkg.header().notIssued()), out, progress, Markups.checking(List.of()));
     }
 
     private static StreamedPdf write(CalcPackage pkg, OutputStream out, Progress progress, Markups markups) {
@@ -43,7 +48,7 @@ public final class PackageRenderer {
         PdfaDocument pdf = PdfaDocument.open(out, pkg.header(), pkg.title() + ", " + pkg.header().project(), id, markups.checking());
         Index index = new Index(pdf, pkg);
         pdf.frame.show(pkg.header(), pkg.title() + " · cover");
-        new Cover(pdf, pkg).write();
+        new Cover(pdf, pkg, markups.checking()).write();
         pdf.newPage();
         pdf.frame.show(pkg.header().withSubject("Index of sheets"), pkg.title() + " · index");
         index.write();
@@ -64,7 +69,7 @@ public final class PackageRenderer {
         pdf.newPage();
         pdf.frame.show(pkg.header().withSubject("Revision log"), pkg.title() + " · revision log");
         index.startsHere(Index.REVISIONS);
-        new RevisionLog(pdf, pkg).write();
+        new RevisionLog(pdf, pkg, markups.checking()).write();
         return pdf.finish();
     }
 

@@ -24,6 +24,8 @@ final class PageFrame extends PdfPageEventHelper {
 
     private final Fonts fonts;
     private final boolean checking;
+    /** The document's own title block: what the band says this copy is. */
+    private final SheetHeader document;
     private SheetHeader header;
     private String context = "";
     private PdfTemplate totalInBlock;
@@ -33,6 +35,7 @@ final class PageFrame extends PdfPageEventHelper {
     PageFrame(Fonts fonts, SheetHeader header, boolean checking) {
         this.fonts = fonts;
         this.header = header;
+        this.document = header;
         this.checking = checking;
     }
 
@@ -56,9 +59,19 @@ final class PageFrame extends PdfPageEventHelper {
         Rectangle page = document.getPageSize();
         PdfContentByte cb = writer.getDirectContent();
         if (checking) watermark(writer.getDirectContentUnder(), page);
-        new TitleBlock(fonts, cb, header, context, checking)
+        new TitleBlock(fonts, cb, header, context, status())
                 .draw(MARGIN, page.getHeight() - MARGIN - BLOCK_HEIGHT, page.getWidth() - 2 * MARGIN, BLOCK_HEIGHT, pages, totalInBlock);
         footer(cb, page);
+    }
+
+    /**
+     * The band's status, about the whole copy: null on a checking copy (the red mark says it), otherwise the
+     * issue; a page of a package about something else (a member, the index) names the package it was issued in.
+     */
+    private String status() {
+        if (checking) return null;
+        String in = header.subject().equals(document.subject()) ? "" : document.subject() + " · ";
+        return "ISSUED · " + in + "Rev " + document.revision() + " · " + document.issueDate();
     }
 
     @Override

@@ -27,7 +27,7 @@ import java.util.TimeZone;
 /**
  * An OpenPDF document set up for PDF/A-1b on US Letter: embedded fonts, an sRGB output intent, XMP
  * metadata, and everything that would otherwise vary from run to run fixed: the creation and modification
- * dates are the issue date, and the file ID and font subset names derive from a digest of the content.
+ * dates are the date of the copy (the issue date of an issued copy), and the file ID and font subset names derive from a digest of the content.
  * The bytes pass through a digest on their way out, so the SHA-256 is known without holding the file.
  */
 final class PdfaDocument {
@@ -52,9 +52,9 @@ final class PdfaDocument {
         }
         writer.setPDFXConformance(PdfWriter.PDFA1B);
         writer.setPageEvent(frame);
-        PdfDate date = new PdfDate(midnightUtc(header.issueDate()));
+        PdfDate date = new PdfDate(midnightUtc(header.printedOn()));
         document.addTitle(title);
-        document.addAuthor(header.firm() + " (prepared by " + header.preparedBy() + ")");
+        document.addAuthor(header.firm() + (header.isSubmitted() ? " (prepared by " + header.preparedBy() + ")" : ""));
         document.addSubject(header.project() + ", job " + header.jobNumber());
         document.addCreator("Baysheet");
         document.addCreationDate(date);

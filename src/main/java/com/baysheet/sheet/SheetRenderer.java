@@ -23,20 +23,26 @@ public final class SheetRenderer {
 
     /** The issued copy, written to {@code out} (left open). */
     public static StreamedPdf issued(MemberSheet sheet, OutputStream out) {
-        requireChecked(sheet.header());
+        requireIssued(sheet.header());
         return write(sheet, Markups.ISSUED, out);
     }
 
-    /** The checking copy with the checker's markups (an empty list prints "No markups yet"). */
+    /**
+     * The checking copy with the checker's markups (an empty list prints "No markups yet"). A checking copy is
+     * never an issue: whatever the header says, it prints "not issued" and the date it was printed.
+     */
     public static RenderedPdf checking(MemberSheet sheet, List<Markup> markups) {
         ByteArrayOutputStream out = new ByteArrayOutputStream(64 * 1024);
-        StreamedPdf s = write(sheet, Markups.checking(markups), out);
+        StreamedPdf s = write(sheet.withHeader(sheet.header().notIssued()), Markups.checking(markups), out);
         return new RenderedPdf(out.toByteArray(), s.sha256(), s.pages());
     }
 
-    static void requireChecked(SheetHeader h) {
+    /** An issued copy names its checker and its issue date. */
+    static void requireIssued(SheetHeader h) {
         if (!h.isChecked())
             throw new InputError("checkedBy", "\"\"", "an issued sheet must name its checker; render a checking copy until it is checked");
+        if (!h.isIssued())
+            throw new InputError("issueDate", "none", "an issued copy needs its issue date; render a checking copy until it is issued");
     }
 
     private static StreamedPdf write(MemberSheet sheet, Markups markups, OutputStream out) {

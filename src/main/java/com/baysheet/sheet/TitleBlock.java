@@ -8,8 +8,9 @@ import java.awt.Color;
 
 /**
  * The title block at the head of each page, drawn as a ruled grid: firm, project, job number and sheet
- * n of N; subject, prepared by, checked by, revision and issue date; then a band with the sheet's place in
- * its package and its status (issued, or a checking copy in red).
+ * n of N; subject, prepared by, checked by, revision and issue date of the sheet on the page ("not issued" where it
+ * has none); then a band with the sheet's place in its package and the status of the whole copy (issued, or a
+ * checking copy in red with the date it was printed).
  */
 final class TitleBlock {
     private static final float LABEL = 5.5f;
@@ -19,14 +20,15 @@ final class TitleBlock {
     private final PdfContentByte cb;
     private final SheetHeader h;
     private final String context;
-    private final boolean checking;
+    private final String status;
 
-    TitleBlock(Fonts fonts, PdfContentByte cb, SheetHeader h, String context, boolean checking) {
+    /** @param status what the band says of the copy ("ISSUED · Rev 2 · date"), or null on a checking copy */
+    TitleBlock(Fonts fonts, PdfContentByte cb, SheetHeader h, String context, String status) {
         this.fonts = fonts;
         this.cb = cb;
         this.h = h;
         this.context = context;
-        this.checking = checking;
+        this.status = status;
     }
 
     void draw(float x, float y, float w, float height, int page, PdfTemplate total) {
@@ -56,10 +58,10 @@ final class TitleBlock {
         cb.addTemplate(total, c + 4 + fonts.bold.getWidthPoint(n, 9f), top - 21);
 
         cell("Subject", h.subject(), x, top - row, a - x);
-        cell("Prepared by", h.preparedBy() + "   " + h.preparedOn(), a, top - row, p - a);
+        cell("Prepared by", h.preparedBy() + (h.isSubmitted() ? "   " + h.preparedOn() : ""), a, top - row, p - a);
         cell("Checked by", h.isChecked() ? h.checkedBy() + "   " + h.checkedOn() : "not yet checked", p, top - row, b - p);
         cell("Revision", h.revision(), b, top - row, c - b);
-        cell("Issue date", h.issueDate().toString(), c, top - row, x + w - c);
+        cell("Issue date", h.isIssued() ? h.issueDate().toString() : SheetHeader.NOT_ISSUED, c, top - row, x + w - c);
         band(x, y, w, height - 2 * row);
     }
 
@@ -77,8 +79,10 @@ final class TitleBlock {
     }
 
     private void band(float x, float y, float w, float height) {
-        Text.show(cb, fonts.regular, 6.5f, Fonts.INK, Element.ALIGN_LEFT, Text.fit(context, fonts.regular, 6.5f, w * 0.55f), x + 4, y + 5);
-        if (checking) {
+        // a checking copy has no issue date: the band says when it was printed instead
+        String line = status == null ? "Printed " + h.printedOn() + " · " + context : context;
+        Text.show(cb, fonts.regular, 6.5f, Fonts.INK, Element.ALIGN_LEFT, Text.fit(line, fonts.regular, 6.5f, w * 0.55f), x + 4, y + 5);
+        if (status == null) {
             float bw = w * 0.4f;
             cb.saveState();
             cb.setColorFill(Fonts.MARK);
@@ -87,7 +91,6 @@ final class TitleBlock {
             cb.restoreState();
             Text.show(cb, fonts.bold, 7.5f, Color.WHITE, Element.ALIGN_CENTER, PageFrame.CHECKING, x + w - bw / 2, y + 5);
         } else {
-            String status = "ISSUED · Rev " + h.revision() + " · " + h.issueDate();
             Text.show(cb, fonts.bold, 7f, Fonts.INK, Element.ALIGN_RIGHT, status, x + w - 4, y + 5);
         }
     }

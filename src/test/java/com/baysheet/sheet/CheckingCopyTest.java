@@ -30,6 +30,22 @@ class CheckingCopyTest {
     }
 
     @Test
+    void checkingCopyHasNoIssueDateOnlyTheDateItWasPrinted() {
+        // the header says 2025-06-02; a checking copy is never an issue, so that date is the printing's
+        String page = SheetFixtures.page(SheetRenderer.checking(MemberSheet.of(SheetFixtures.unchecked("Girder G1"), girder), markups).bytes(), 1);
+        assertThat(page).contains("Issue date\nnot issued", "Printed 2025-06-02").doesNotContain("Issue date\n2025-06-02");
+        String issued = SheetFixtures.page(SheetRenderer.issued(MemberSheet.of(SheetFixtures.header("Girder G1"), girder)).bytes(), 1);
+        assertThat(issued).contains("Issue date\n2025-06-02", "ISSUED · Rev A · 2025-06-02").doesNotContain("Printed", "not issued");
+    }
+
+    @Test
+    void anIssuedCopyNeedsAnIssueDate() {
+        SheetHeader h = SheetFixtures.header("Girder G1").notIssued();
+        assertThatThrownBy(() -> SheetRenderer.issued(MemberSheet.of(h, girder)))
+                .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("issueDate"));
+    }
+
+    @Test
     void issuedCopyCarriesNoCheckingMark() {
         RenderedPdf pdf = SheetRenderer.issued(MemberSheet.of(SheetFixtures.header("Girder G1"), girder));
         assertThat(SheetFixtures.text(pdf.bytes())).doesNotContain(PageFrame.CHECKING).doesNotContain("Checker's markups");

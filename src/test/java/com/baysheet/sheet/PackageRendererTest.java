@@ -102,4 +102,39 @@ class PackageRendererTest {
         assertThatThrownBy(() -> FramingSheets.member(SheetFixtures.header("P"), building, "nope"))
                 .isInstanceOf(InputError.class).satisfies(e -> assertThat(((InputError) e).field()).isEqualTo("member"));
     }
+
+    @Test
+    void aCheckingCopyOfAPackageSaysItIsNotIssuedAndLeavesNoBlankSignature() {
+        CalcPackage level = FramingSheets.level(SheetFixtures.unchecked("Level"), building, "Level 2", List.of());
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        PackageRenderer.checking(level, out, PackageRenderer.Progress.NONE);
+        List<String> copy = SheetFixtures.pageTexts(out.toByteArray());
+        assertThat(copy.get(0)).contains("Revision A, not issued: checking copy printed 2025-06-02", "Issue date\nnot issued")
+                .doesNotContainPattern("issued \\d{4}-");
+        String log = copy.get(copy.size() - 1);
+        assertThat(log).contains("Revision log", "Not issued: checking copy printed on this date").doesNotContainPattern("(?m)/\\s*$");
+    }
+
+    @Test
+    void aCheckingCopyOfARevisionIssuedBeforeSaysWhenAndThatItIsNotAnIssue() {
+        CalcPackage level = FramingSheets.level(SheetFixtures.header("Level"), building, "Level 2",
+                List.of(new Revision("A", LocalDate.of(2025, 6, 1), "First issue", "JQR / MKL")));
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        PackageRenderer.checking(level, out, PackageRenderer.Progress.NONE);
+        assertThat(SheetFixtures.pageTexts(out.toByteArray()).get(0))
+                .contains("Revision A, issued 2025-06-01; this checking copy, printed 2025-06-02, is not an issue", "Issue date\nnot issued");
+    }
+
+    @Test
+    void eachMemberPageStatesItsOwnHeaderAndTheBandThePackagesIssue() {
+        SheetHeader pkg = SheetFixtures.header("Level");
+        SheetHeader unchecked = new SheetHeader(pkg.firm(), pkg.project(), pkg.jobNumber(), "x", SheetHeader.NOT_SUBMITTED, null,
+                "", null, SheetHeader.NOT_ISSUED, null, pkg.printedOn());
+        CalcPackage level = FramingSheets.level(pkg, building, "Level 2", List.of(), m -> unchecked);
+        List<String> issued = SheetFixtures.pageTexts(PackageRenderer.render(level).bytes());
+        String member = issued.stream().filter(p -> p.contains("Subject\n" + level.sheets().get(0).header().subject() + "\n")).findFirst().orElseThrow();
+        assertThat(member).contains("Prepared by\nnot submitted", "Checked by\nnot yet checked", "Revision\nnot issued",
+                "Issue date\nnot issued", "ISSUED · Level 2 package · Rev A · 2025-06-02").doesNotContain("MKL", "JQR");
+        assertThat(issued.get(0)).contains("Revision A, issued 2025-06-02", "MKL");
+    }
 }

@@ -9,9 +9,9 @@ import com.baysheet.store.Store;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.store.review.Reviews;
 import com.baysheet.store.review.StoredRevision;
-import com.baysheet.web.auth.Access;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
+import io.javalin.http.HttpStatus;
 import io.javalin.http.UploadedFile;
 
 import java.io.IOException;
@@ -53,15 +53,14 @@ public final class IssuedRoutes {
         long id = id(ctx.pathParam("revision"), "revision");
         StoredRevision r = review.reviews().revision(id);
         byte[] pdf = review.reviews().issuedPdf(id).orElseThrow(() -> new NotFound("issued copy of revision", id));
-        pdf(ctx, pdf, r.sheet().subject() + "-rev" + r.revision().number() + ".pdf");
+        pdf(ctx, pdf, IssuedMatch.of(store, r).fileName());
     }
 
     void checkingPdf(Context ctx) {
         SheetContext.OfMember s = SheetContext.member(store, ctx);
         Reviews.SheetView v = review.reviews().view(s.ref());
-        byte[] pdf = SheetPdfs.checking(review.firm().get(), s, v.current().revision(), v.markups(),
-                Access.user(ctx).initials(), LocalDate.now(clock)).bytes();
-        pdf(ctx, pdf, s.member().id() + "-checking-copy.pdf");
+        byte[] pdf = SheetPdfs.checking(review.firm().get(), s, v.current().revision(), v.markups(), LocalDate.now(clock)).bytes();
+        pdf(ctx, pdf, s.computed().project().info().jobNumber() + "-" + s.name() + "-checking-copy.pdf");
     }
 
     void compare(Context ctx) {
@@ -80,16 +79,30 @@ public final class IssuedRoutes {
         ctx.render("review/compare", m);
     }
 
+    /** The verdict on an upload: which issued revisions it is, byte for byte, or that it is not a PDF at all. */
     void verify(Context ctx) {
         UploadedFile f = ctx.uploadedFile("pdf");
         if (f == null || f.size() == 0) throw new InputError("pdf", "nothing", "choose the PDF file to verify");
         if (f.size() > MAX_UPLOAD) throw new InputError("pdf", f.size() + " bytes", "is larger than any sheet or package");
-        String sha = Tokens.sha256(read(f));
+        byte[] bytes = read(f);
         Map<String, Object> m = new HashMap<>();
         m.put("filename", f.filename());
+        if (!isPdf(bytes)) {
+            m.put("notPdf", true);
+            ctx.status(HttpStatus.BAD_REQUEST);
+            ctx.render("review/verify", m);
+            return;
+        }
+        String sha = Tokens.sha256(bytes);
         m.put("sha256", sha);
-        m.put("matches", review.reviews().withPdf(sha));
+        m.put("matches", review.reviews().withPdf(sha).stream().map(r -> IssuedMatch.of(store, r)).toList());
         ctx.render("review/verify", m);
+    }
+
+    /** Every PDF begins with "%PDF-" (ISO 32000-1, 7.5.2 File header; clause number from memory). */
+    static boolean isPdf(byte[] b) {
+        byte[] magic = "%PDF-".getBytes(java.nio.charset.StandardCharsets.US_ASCII);
+        return b.length >= magic.length && java.util.Arrays.equals(b, 0, magic.length, magic, 0, magic.length);
     }
 
     /** A revision's record as submitted; a revision not yet submitted compares as the member is now. */
@@ -126,8 +139,10 @@ public final class IssuedRoutes {
         }
     }
 
+    /** A PDF download with its SHA-256 in X-Content-SHA256, as docs/sheets.md promises. */
     private static void pdf(Context ctx, byte[] bytes, String filename) {
         ctx.contentType("application/pdf");
+        ctx.header("X-Content-SHA256", Tokens.sha256(bytes));
         ctx.header("Content-Disposition", "attachment; filename=\"" + filename.replaceAll("[^A-Za-z0-9._-]", "_") + "\"");
         ctx.result(bytes);
     }

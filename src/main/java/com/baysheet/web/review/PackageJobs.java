@@ -24,17 +24,21 @@ import java.util.concurrent.Executors;
 final class PackageJobs {
     static final int KEPT = 20;
 
-    /** A job as the browser sees it. {@code sha256} and {@code file} are set when it is done. */
+    /**
+     * A job as the browser sees it. {@code sha256} and {@code file} are set when it is done; {@code fileName} is
+     * the download's, {@code <job>-<package>-checking-copy.pdf}.
+     */
     static final class Job {
-        final String id, title;
+        final String id, title, fileName;
         final long project;
         volatile int done, total;
         volatile String sha256, error;
         volatile Path file;
 
-        Job(String id, String title, long project) {
+        Job(String id, String title, String fileName, long project) {
             this.id = id;
             this.title = title;
+            this.fileName = fileName;
             this.project = project;
         }
 
@@ -56,7 +60,8 @@ final class PackageJobs {
     private final Map<String, Job> jobs = new LinkedHashMap<>();
 
     synchronized Job start(long project, CalcPackage pkg) {
-        Job job = new Job(UUID.randomUUID().toString(), pkg.title(), project);
+        Job job = new Job(UUID.randomUUID().toString(), pkg.title(),
+                pkg.header().jobNumber() + "-" + pkg.title() + "-checking-copy.pdf", project);
         job.total = pkg.sheets().size();
         jobs.put(job.id, job);
         while (jobs.size() > KEPT) forget(jobs.keySet().iterator().next());

@@ -12,14 +12,18 @@ import com.baysheet.store.review.Firm;
 import com.baysheet.store.review.Reviews;
 import com.baysheet.store.review.StoredRevision;
 
+import com.baysheet.framing.DerivedMember;
+
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Function;
 
 /**
- * The issued copy of a package, rendered from the current derivation under the approved revision's title
- * block (the checker's initials and date on every sheet), with a revision log of the earlier issues and of
- * this one, each saying which sheets it changed.
+ * Packages rendered from the current derivation: the issued copy under the approved revision's title block
+ * (its checker's initials and date on the cover and the package's own pages), the checking copy under the
+ * package's revision under way; in both, each member's page states that member's own check and revision. The
+ * revision log lists the earlier issues and, on the issued copy, this one, each saying which sheets it changed.
  */
 final class PackagePdfs {
     /** A revision log line names at most this many changed sheets, then counts the rest. */
@@ -27,29 +31,42 @@ final class PackagePdfs {
 
     private PackagePdfs() {}
 
-    static byte[] issued(Firm firm, SheetContext.OfPackage s, Reviews.SheetView v, LocalDate today) {
+    /** @param latest the latest revision of every sheet of the project, for each member's own title block */
+    static byte[] issued(Firm firm, SheetContext.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
         SheetRevision r = v.current().revision();
         var info = s.computed().project().info();
-        SheetHeader h = new SheetHeader(firm.name(), info.name(), info.jobNumber(), s.name(), r.preparer().initials(),
-                r.preparer().on(), r.approval().initials(), r.approval().on(), String.valueOf(r.number()), today, firm.logoText());
-        List<Revision> log = log(v.history(), r, s.current(), today);
-        CalcPackage pkg = s.scope().isProject() ? FramingSheets.project(h, s.computed().derived(), log)
-                : FramingSheets.level(h, s.computed().derived(), s.scope().level(), log);
-        return PackageRenderer.render(pkg).bytes();
+        SheetHeader h = TitleBlocks.issuing(firm, info, s.name(), r, today);
+        List<Revision> log = new ArrayList<>();
+        CalcRecord before = earlier(v.history(), r.number(), log);
+        log.add(line(r, today, before, s.current()));
+        return PackageRenderer.render(of(s, h, log, TitleBlocks.members(firm, info, latest, today))).bytes();
     }
 
-    static List<Revision> log(List<StoredRevision> history, SheetRevision now, CalcRecord current, LocalDate today) {
-        List<Revision> out = new ArrayList<>();
+    /** The checking copy of a package: the package's revision under way, not issued; its earlier issues logged. */
+    static CalcPackage checking(Firm firm, SheetContext.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
+        var info = s.computed().project().info();
+        SheetHeader h = TitleBlocks.underCheck(firm, info, s.name(), v.current().revision(), s.current(), today);
+        List<Revision> log = new ArrayList<>();
+        earlier(v.history(), Integer.MAX_VALUE, log);
+        return of(s, h, log, TitleBlocks.members(firm, info, latest, today));
+    }
+
+    private static CalcPackage of(SheetContext.OfPackage s, SheetHeader h, List<Revision> log, Function<DerivedMember, SheetHeader> members) {
+        return s.scope().isProject() ? FramingSheets.project(h, s.computed().derived(), log, members)
+                : FramingSheets.level(h, s.computed().derived(), s.scope().level(), log, members);
+    }
+
+    /** Adds a line for each issued revision numbered below {@code below}; returns the last one's record (null if none). */
+    private static CalcRecord earlier(List<StoredRevision> history, int below, List<Revision> out) {
         CalcRecord before = null;
         for (StoredRevision h : history) {
             SheetRevision x = h.revision();
-            if (x.issue() == null || x.number() >= now.number()) continue;
+            if (x.issue() == null || x.number() >= below) continue;
             CalcRecord rec = h.record().orElseThrow();
             out.add(line(x, x.issue().on(), before, rec));
             before = rec;
         }
-        out.add(line(now, today, before, current));
-        return out;
+        return before;
     }
 
     private static Revision line(SheetRevision x, LocalDate on, CalcRecord before, CalcRecord after) {

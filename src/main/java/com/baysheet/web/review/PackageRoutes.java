@@ -1,15 +1,15 @@
 package com.baysheet.web.review;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.review.PackageManifest;
+import com.baysheet.review.PackageScope;
+import com.baysheet.review.SheetRef;
 import com.baysheet.sheet.CalcPackage;
-import com.baysheet.sheet.FramingSheets;
-import com.baysheet.sheet.SheetHeader;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
 import com.baysheet.store.Store;
 import com.baysheet.store.review.Firm;
 import com.baysheet.store.review.ReviewStore;
-import com.baysheet.web.auth.Access;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -21,7 +21,6 @@ import java.time.Clock;
 import java.time.LocalDate;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
-import java.util.List;
 import java.util.Map;
 
 /**
@@ -57,19 +56,18 @@ public final class PackageRoutes {
         ctx.render("review/packages", m);
     }
 
+    /** Starts a checking copy: the package's own revision under way, and each member's own state, as they are now. */
     void start(Context ctx) {
         long project = SheetContext.project(ctx);
         Results.Computed c = store.results().of(project);
         String scope = ctx.formParam("scope");
         if (scope == null || scope.isBlank()) throw new InputError("scope", "\"\"", "choose the project or one level");
-        var info = c.project().info();
-        LocalDate today = LocalDate.now(clock);
-        String title = scope.equals("project") ? "Calculation package" : "Calculation package, " + scope;
-        Firm firm = review.firm().get();
-        SheetHeader h = new SheetHeader(firm.name(), info.name(), info.jobNumber(), title,
-                Access.user(ctx).initials(), today, "", null, "check", today, firm.logoText());
-        CalcPackage pkg = scope.equals("project") ? FramingSheets.project(h, c.derived(), List.of())
-                : FramingSheets.level(h, c.derived(), scope, List.of());
+        PackageScope ps = scope.equals("project") ? PackageScope.PROJECT : PackageScope.ofLevel(scope);
+        if (ps.members(c.derived()).isEmpty()) throw new InputError("level", scope, "has no members in this model");
+        SheetRef ref = new SheetRef(project, ps.subject());
+        SheetContext.OfPackage s = new SheetContext.OfPackage(c, ps, ref, PackageManifest.of(ps, c.derived()));
+        CalcPackage pkg = PackagePdfs.checking(review.firm().get(), s, review.reviews().view(ref),
+                review.reviews().latestOf(project), LocalDate.now(clock));
         PackageJobs.Job job = jobs.start(project, pkg);
         ctx.redirect("/projects/" + project + "/packages/" + job.id, io.javalin.http.HttpStatus.SEE_OTHER);
     }
@@ -92,7 +90,7 @@ public final class PackageRoutes {
         if (job.file == null) throw new NotFound("finished package", job.id);
         ctx.contentType("application/pdf");
         ctx.header("X-Content-SHA256", job.sha256);
-        ctx.header("Content-Disposition", "attachment; filename=\"" + job.title.replaceAll("[^A-Za-z0-9._-]", "_") + "-checking-copy.pdf\"");
+        ctx.header("Content-Disposition", "attachment; filename=\"" + job.fileName.replaceAll("[^A-Za-z0-9._-]", "_") + "\"");
         try (InputStream in = Files.newInputStream(job.file)) {
             ctx.result(in.readAllBytes());
         } catch (IOException e) {

@@ -15,35 +15,22 @@ import java.util.List;
 
 /**
  * Member sheets for the check, rendered by the sheet renderer from the current derivation: the checking copy
- * (marked as such, with the markups listed) and the issued copy (with the checker's initials and date and
- * the revision number). Nothing here computes; the title block comes from the revision.
+ * (marked as such, with the markups listed, not issued and dated when printed) and the issued copy (with the
+ * checker's initials and date and the revision number). Nothing here computes; the title block comes from the
+ * revision.
  */
 final class SheetPdfs {
     private SheetPdfs() {}
 
     static RenderedPdf issued(Firm firm, SheetContext.OfMember s, SheetRevision approved, LocalDate today) {
-        SheetHeader h = header(firm, s, approved, approved.approval().initials(), approved.approval().on(), today);
+        SheetHeader h = TitleBlocks.issuing(firm, s.computed().project().info(), s.member().name(), approved, today);
         return SheetRenderer.issued(FramingSheets.member(h, s.computed().derived(), s.member().id()));
     }
 
-    static RenderedPdf checking(Firm firm, SheetContext.OfMember s, SheetRevision r, List<MarkupNote> markups, String viewer,
-                                LocalDate today) {
-        String checker = r.approval() == null ? "" : r.approval().initials();
-        LocalDate checkedOn = r.approval() == null ? null : r.approval().on();
-        SheetHeader h = header(firm, s, r, checker, checkedOn, today);
-        if (r.preparer() == null) h = new SheetHeader(h.firm(), h.project(), h.jobNumber(), h.subject(), viewer, today,
-                h.checkedBy(), h.checkedOn(), h.revision(), today, h.logoText());
+    static RenderedPdf checking(Firm firm, SheetContext.OfMember s, SheetRevision r, List<MarkupNote> markups, LocalDate today) {
+        SheetHeader h = TitleBlocks.underCheck(firm, s.computed().project().info(), s.member().name(), r, s.current(), today);
         MemberSheet sheet = FramingSheets.member(h, s.computed().derived(), s.member().id());
         return SheetRenderer.checking(sheet, markups.stream().map(SheetPdfs::markup).toList());
-    }
-
-    private static SheetHeader header(Firm firm, SheetContext.OfMember s, SheetRevision r, String checkedBy, LocalDate checkedOn,
-                                      LocalDate today) {
-        var info = s.computed().project().info();
-        String preparedBy = r.preparer() == null ? "-" : r.preparer().initials();
-        LocalDate preparedOn = r.preparer() == null ? today : r.preparer().on();
-        return new SheetHeader(firm.name(), info.name(), info.jobNumber(), s.member().name(), preparedBy, preparedOn,
-                checkedBy, checkedOn, String.valueOf(r.number()), today, firm.logoText());
     }
 
     private static Markup markup(MarkupNote m) {

@@ -1,0 +1,85 @@
+package com.baysheet.web.review;
+
+import com.baysheet.auth.Role;
+import com.baysheet.auth.Tokens;
+import com.baysheet.framing.DerivedMember;
+import com.baysheet.store.ProjectInfo;
+import com.baysheet.web.TestLogin.Client;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+import java.net.http.HttpResponse;
+import java.nio.charset.StandardCharsets;
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Map;
+
+import static com.baysheet.web.review.Pages.first;
+import static com.baysheet.web.review.Pages.version;
+import static org.assertj.core.api.Assertions.assertThat;
+
+/**
+ * Verifying an upload tells who and what in the office's words (job, project, member by name, revision, preparer,
+ * checker, issue date), never stored ids; a file that is not a PDF is told so; downloads carry their SHA-256 and
+ * the file name docs/sheets.md promises.
+ */
+class VerifyTest {
+    static ReviewServer server;
+
+    @BeforeAll
+    static void start() { server = new ReviewServer(); }
+
+    @AfterAll
+    static void stop() { server.close(); }
+
+    @Test
+    void anIssuedSheetVerifiesByJobProjectNameRevisionAndSignatures() {
+        Client eng = server.as("gideon", Role.ENGINEER);  // GIDE
+        Client chk = server.as("harriet", Role.CHECKER);  // HARR
+        DerivedMember member = server.member();
+        ProjectInfo info = server.store.projects().find(server.project()).info();
+        String issuedAs = member.result().record().subject(); // the member's name and level, as its record names it
+        String sheet = server.sheetPath();
+        String html = eng.get(sheet).body();
+        eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit"))));
+        html = chk.get(sheet).body();
+        chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve"))));
+        html = chk.get(sheet).body();
+        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")))).statusCode()).isEqualTo(303);
+
+        HttpResponse<byte[]> pdf = eng.getBytes(first(eng.get(sheet).body(), "href=\"(/review/revisions/\\d+/issued\\.pdf)\""));
+        assertThat(pdf.headers().firstValue("X-Content-SHA256")).hasValue(Tokens.sha256(pdf.body()));
+        assertThat(pdf.headers().firstValue("Content-Disposition").orElse(""))
+                .isEqualTo("attachment; filename=\"" + safe(info.jobNumber() + "-" + issuedAs + "-rev1.pdf") + "\"");
+
+        String verdict = first(eng.upload("/verify", "pdf", "sheet.pdf", pdf.body()).body(), "(?s)id=\"verdict\">(.*?)</section>");
+        String said = verdict.replaceAll("<[^>]*>", " ").replaceAll("\\s+", " ");
+        assertThat(said).contains("Matches an issued revision", "job " + info.jobNumber() + " , " + info.name(),
+                "member " + issuedAs + " ,", "revision 1", "prepared by GIDE", "checked by HARR",
+                "issued " + LocalDate.now(server.clock), "(now issued )");
+        assertThat(said).as("no stored ids in what the verdict says")
+                .doesNotContain("Project " + server.project(), "member " + member.id() + " ");
+    }
+
+    @Test
+    void aCheckingCopyDownloadCarriesItsHashAndName() {
+        Client eng = server.as("ivo", Role.ENGINEER);
+        ProjectInfo info = server.store.projects().find(server.project()).info();
+        HttpResponse<byte[]> pdf = eng.getBytes(server.sheetPath() + "/checking.pdf");
+        assertThat(pdf.statusCode()).isEqualTo(200);
+        assertThat(pdf.headers().firstValue("X-Content-SHA256")).hasValue(Tokens.sha256(pdf.body()));
+        assertThat(pdf.headers().firstValue("Content-Disposition").orElse(""))
+                .isEqualTo("attachment; filename=\"" + safe(info.jobNumber() + "-" + server.member().name() + "-checking-copy.pdf") + "\"");
+    }
+
+    @Test
+    void aFileThatIsNotAPdfIsToldSo() {
+        Client eng = server.as("jonas", Role.ENGINEER);
+        HttpResponse<String> r = eng.upload("/verify", "pdf", "notes.pdf", "Meeting notes, not a PDF".getBytes(StandardCharsets.UTF_8));
+        assertThat(r.statusCode()).isEqualTo(400);
+        assertThat(r.body()).contains("Not a PDF", "notes.pdf", "%PDF-").doesNotContain("No match");
+    }
+
+    private static String safe(String name) { return name.replaceAll("[^A-Za-z0-9._-]", "_"); }
+}
