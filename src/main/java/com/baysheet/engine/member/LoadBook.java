@@ -92,7 +92,8 @@ final class LoadBook {
     }
 
     private boolean partitioned(Occupancy o) {
-        return ctx.options().partitionAllowance() && !o.isRoof() && o.uniform(ctx.system()) < ctx.constant("partition.exempt");
+        return ctx.options().partitionAllowance() && !o.isRoof() && !o.isBalcony()
+                && o.uniform(ctx.system()) < ctx.constant("partition.exempt");
     }
 
     private double partition() { return ctx.constant("partition"); }

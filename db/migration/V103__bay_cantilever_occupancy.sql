@@ -1,0 +1,3 @@
+-- The occupancy of a bay's cantilever slabs, a catalogue id. NULL (every existing row) means the default:
+-- the balcony or deck serving the bay's occupancy (docs/engine.md). Runs unchanged on H2 2.5 and PostgreSQL 15.
+ALTER TABLE bay ADD COLUMN cantilever_occupancy VARCHAR(60);
