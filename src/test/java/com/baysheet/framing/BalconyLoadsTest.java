@@ -125,7 +125,7 @@ class BalconyLoadsTest {
     private static void assertBalconyNote(CalcRecord r) {
         assertThat(r.notes()).anySatisfy(n -> {
             assertThat(n.level()).isEqualTo(Note.Level.INFO);
-            assertThat(n.text()).contains("Balcony or deck serving Offices").contains("75.0 psf").contains("No partition allowance");
+            assertThat(n.text()).contains("Balcony or deck serving Offices").contains("75.0 psf").contains("no partition allowance");
             assertThat(n.clause().label()).isEqualTo("ASCE 7-16 Table 4.3-1");
         });
     }

@@ -29,9 +29,8 @@ final class BalconyNote {
         double cap = ctx.system() == UnitSystem.US ? rule.capPsf() : rule.capKPa();
         return o.name() + ": L0 = " + rec.plain(rule.factor()) + " × " + rec.show(l0, Quantity.PRESSURE)
                 + " of the area served, need not exceed " + rec.show(cap, Quantity.PRESSURE)
-                + ", and taken not below the L0 of the area served (conservative choice): "
-                + rec.show(o.uniform(ctx.system()), Quantity.PRESSURE) + " (factor and cap: " + rule.confidence() + ")."
-                + " Concentrated load that of the area served. No partition allowance on it."
-                + " Not reduced: a conservative choice, since whether balcony loads may be reduced is not confirmed.";
+                + ", not taken below the area served (conservative choice): " + rec.show(o.uniform(ctx.system()), Quantity.PRESSURE)
+                + " [factor and cap: " + rule.confidence() + "]. Concentrated load of the area served; no partition allowance;"
+                + " not reduced (conservative choice: whether the code permits reducing balcony loads is not confirmed).";
     }
 }
