@@ -152,6 +152,17 @@ abstract class StoreContract {
     }
 
     @Test
+    void theBalconyOfAFirmRowWithTheLongestIdIsStored() {
+        Project p = projectWithLevel();
+        long l = level(p);
+        String id = "r".repeat(60);
+        store.occupancies().add(new FirmOccupancy(id, "Long room", UnitSystem.US, 40, 0, 30, ReductionRule.ORDINARY, false));
+        store.bays().assign(p.id(), p.version(), l, new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60,
+                new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 6.0), "balcony:" + id));
+        assertThat(store.bays().findByLevel(p.id(), l).get(0).cantileverOccupancy()).isEqualTo("balcony:" + id);
+    }
+
+    @Test
     void anUnknownCantileverOccupancyIsRefusedNamingTheFieldAndNothingIsStored() {
         Project p = projectWithLevel();
         long l = level(p);
