@@ -19,7 +19,8 @@
 
   var fields = { occupancy: 'occupancy', deadLoad: 'deadLoad', beams: 'beams', infillBeams: 'infillBeams',
     cantileversNorth: 'cantilevers.north', cantileversSouth: 'cantilevers.south',
-    cantileversEast: 'cantilevers.east', cantileversWest: 'cantilevers.west' };
+    cantileversEast: 'cantilevers.east', cantileversWest: 'cantilevers.west',
+    cantileverOccupancy: 'cantileverOccupancy' };
 
   function fillFromSingle() {
     var on = boxes('all').filter(function (b) { return b.checked; });

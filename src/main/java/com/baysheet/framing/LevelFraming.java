@@ -92,7 +92,8 @@ final class LevelFraming {
             case WEST -> { seg = alongY[b.col()][b.row()]; rect = new PlanRect(x0 - len, y0, x0, y1); }
             default -> { seg = alongY[b.col() + 1][b.row()]; rect = new PlanRect(x1, y0, x1 + len, y1); }
         }
-        seg.strip(b.occupancy(), len, b.deadLoad(), rect, name);
+        // the slab past the edge carries its own occupancy: by default the balcony of the bay's (Table 4.3-1)
+        seg.strip(b.cantileverUse(cache.context().catalogue()), len, b.deadLoad(), rect, name);
         seg.cantilever = true;
     }
 

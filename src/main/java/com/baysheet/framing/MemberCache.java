@@ -20,6 +20,8 @@ final class MemberCache {
 
     MemberCache(CalcContext ctx) { this.ctx = ctx; }
 
+    CalcContext context() { return ctx; }
+
     MemberResult calculate(MemberInput in) {
         MemberResult r = done.computeIfAbsent(in.withSubject(ANY), k -> MemberCalculation.calculate(ctx, k));
         return r.withSubject(in.subject());

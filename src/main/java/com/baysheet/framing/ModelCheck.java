@@ -49,6 +49,7 @@ public final class ModelCheck {
                 throw new InputError(at + ".bays[" + name + "].occupancy", bay.occupancy(), "is not in the occupancy catalogue");
             if (b.context().catalogue().get(bay.occupancy()).isRoof() && Double.isNaN(l.roofSlope()))
                 throw new InputError(at + ".roofSlope", "nothing", "is required: bay " + name + " carries a roof live load");
+            cantileverUse(b, l, bay, at + ".bays[" + name + "]");
         }
         if (!anyFloor) throw new InputError(at + ".bays", l.bays().size(), "level " + l.name() + " has no floor at all");
         LevelPlan plan = new LevelPlan("", l, g);
@@ -59,5 +60,15 @@ public final class ModelCheck {
                             c.getValue(), "a cantilever slab must project past the building edge, not over the next bay");
             }
         }
+    }
+
+    /** The occupancy of a bay's cantilever slabs must be known, and a roof load there needs the level's slope. */
+    private static void cantileverUse(Building b, Level l, Bay bay, String at) {
+        if (bay.cantilevers().isEmpty() && bay.cantileverOccupancy() == null) return;
+        String use = bay.cantileverUse(b.context().catalogue());
+        if (!b.context().catalogue().contains(use))
+            throw new InputError(at + ".cantileverOccupancy", use, "is not in the occupancy catalogue");
+        if (b.context().catalogue().get(use).isRoof() && Double.isNaN(l.roofSlope()))
+            throw new InputError("levels[" + l.name() + "].roofSlope", "nothing", "is required: a cantilever slab carries a roof live load");
     }
 }

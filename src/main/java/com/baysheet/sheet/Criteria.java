@@ -25,7 +25,12 @@ final class Criteria {
         Map<String, TreeSet<Double>> dead = new LinkedHashMap<>();   // dead loads used with each occupancy
         for (Level l : b.levels())
             for (Bay bay : l.bays())
-                if (!bay.opening()) dead.computeIfAbsent(bay.occupancy(), k -> new TreeSet<>()).add(bay.deadLoad());
+                if (!bay.opening()) {
+                    dead.computeIfAbsent(bay.occupancy(), k -> new TreeSet<>()).add(bay.deadLoad());
+                    // cantilever slabs carry their own occupancy (by default the balcony of the bay's)
+                    if (!bay.cantilevers().isEmpty())
+                        dead.computeIfAbsent(bay.cantileverUse(ctx.catalogue()), k -> new TreeSet<>()).add(bay.deadLoad());
+                }
         List<DesignCriteria.LoadRow> rows = new ArrayList<>();
         for (Map.Entry<String, TreeSet<Double>> e : dead.entrySet()) {
             Occupancy o = ctx.catalogue().get(e.getKey());
@@ -52,7 +57,8 @@ final class Criteria {
             case ORDINARY -> "reducible, " + ctx.edition().clause("reduction.basic").ref();
             case HEAVY -> "by at most 20 % on two or more floors, " + ctx.edition().clause("reduction.heavy").ref();
             case GARAGE -> "as heavy live loads, " + ctx.edition().clause("reduction.garage").ref();
-            case NOT_REDUCIBLE -> "not reduced, " + ctx.edition().clause("reduction.assembly").ref();
+            case NOT_REDUCIBLE -> o.isBalcony() ? "not reduced (conservative choice), " + ctx.edition().clause("loads.table").ref()
+                    : "not reduced, " + ctx.edition().clause("reduction.assembly").ref();
             case ROOF -> RoofLiveLoad.isOrdinary(ctx, o) ? "roof live load by R1 and R2, " + ctx.edition().clause("roof.reduction").ref()
                     : "roof live load, not reduced (not an ordinary roof, " + ctx.edition().clause("roof.reduction").ref() + ")";
         };

@@ -10,15 +10,23 @@ import java.util.Map;
 
 /**
  * One action of the bay editor: the selected cells all get the same bay (occupancy, dead load in psf or kPa,
- * framing, cantilevers in ft or m), or all become an opening.
+ * framing, cantilevers in ft or m, the cantilever slabs' occupancy or null for the default balcony), or all
+ * become an opening.
  */
 public record BayAssignment(List<Cell> cells, boolean opening, String occupancy, double deadLoad, Framing framing,
-                            Map<Side, Double> cantilevers) {
+                            Map<Side, Double> cantilevers, String cantileverOccupancy) {
     public BayAssignment {
         cells = List.copyOf(cells);
         if (cells.isEmpty()) throw new InputError("cells", "none", "select at least one bay");
         cantilevers = Map.copyOf(cantilevers);
-        bayAt(cells.get(0), opening, occupancy, deadLoad, framing, cantilevers);
+        if (opening || (cantileverOccupancy != null && cantileverOccupancy.isBlank())) cantileverOccupancy = null;
+        bayAt(cells.get(0), opening, occupancy, deadLoad, framing, cantilevers, cantileverOccupancy);
+    }
+
+    /** An assignment whose cantilever slabs carry the default, the balcony serving the bay's occupancy. */
+    public BayAssignment(List<Cell> cells, boolean opening, String occupancy, double deadLoad, Framing framing,
+                         Map<Side, Double> cantilevers) {
+        this(cells, opening, occupancy, deadLoad, framing, cantilevers, null);
     }
 
     public static BayAssignment opening(List<Cell> cells) {
@@ -26,12 +34,12 @@ public record BayAssignment(List<Cell> cells, boolean opening, String occupancy,
     }
 
     public Bay bayAt(Cell cell) {
-        return bayAt(cell, opening, occupancy, deadLoad, framing, cantilevers);
+        return bayAt(cell, opening, occupancy, deadLoad, framing, cantilevers, cantileverOccupancy);
     }
 
     private static Bay bayAt(Cell cell, boolean opening, String occupancy, double deadLoad, Framing framing,
-                             Map<Side, Double> cantilevers) {
+                             Map<Side, Double> cantilevers, String cantileverOccupancy) {
         return opening ? Bay.opening(cell.col(), cell.row())
-                : new Bay(cell.col(), cell.row(), occupancy, deadLoad, framing, false, cantilevers);
+                : new Bay(cell.col(), cell.row(), occupancy, deadLoad, framing, false, cantilevers, cantileverOccupancy);
     }
 }

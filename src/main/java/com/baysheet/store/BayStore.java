@@ -42,6 +42,7 @@ public final class BayStore {
             Grid g = requireCells(c, projectId, levelId, a.cells());
             if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
                 throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
+            requireCantileverOccupancy(c, a);
             delete(c, levelId, a.cells(), g);
             insert(c, levelId, a, g);
             return null;
@@ -97,7 +98,7 @@ public final class BayStore {
     private static void insert(Connection c, long levelId, BayAssignment a, Grid g) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO bay (level_id, x_line, y_line, is_opening, "
                 + "occupancy, dead_load, beam_direction, infill_beams, cantilever_north, cantilever_south, "
-                + "cantilever_east, cantilever_west) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+                + "cantilever_east, cantilever_west, cantilever_occupancy) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
             for (Cell cell : a.cells()) {
                 Bay b = a.bayAt(cell);
                 ps.setLong(1, levelId);
@@ -110,6 +111,7 @@ public final class BayStore {
                 if (b.opening()) ps.setNull(8, java.sql.Types.INTEGER);
                 else ps.setInt(8, b.framing().infillBeams());
                 for (int i = 0; i < SIDES.length; i++) Sql.setDouble(ps, 9 + i, b.cantilevers().get(SIDES[i]));
+                ps.setString(13, b.cantileverOccupancy());
                 ps.addBatch();
             }
             ps.executeBatch();
@@ -129,6 +131,13 @@ public final class BayStore {
             if (!Double.isNaN(v)) cantilevers.put(s, v);
         }
         Framing f = new Framing(Direction.valueOf(rs.getString("beam_direction")), rs.getInt("infill_beams"));
-        return new Bay(col, row, rs.getString("occupancy"), rs.getDouble("dead_load"), f, false, cantilevers);
+        return new Bay(col, row, rs.getString("occupancy"), rs.getDouble("dead_load"), f, false, cantilevers,
+                rs.getString("cantilever_occupancy"));
+    }
+
+    /** The cantilever slabs' occupancy, where one is given, must be in the catalogue (NULL: the default balcony). */
+    private static void requireCantileverOccupancy(Connection c, BayAssignment a) throws SQLException {
+        if (a.cantileverOccupancy() != null && !OccupancyStore.catalogue(c).contains(a.cantileverOccupancy()))
+            throw new InputError("cantileverOccupancy", a.cantileverOccupancy(), "is not in the occupancy catalogue");
     }
 }

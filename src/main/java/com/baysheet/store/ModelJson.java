@@ -43,7 +43,10 @@ public final class ModelJson {
         return new LevelInfo(text(n, "name"), number(n, "elevation"), roof, roof ? number(n, "roofSlope") : Double.NaN);
     }
 
-    /** A bay assignment: {@code cells} as [[col,row], ...] or the ranges {@code cols} and {@code rows} as [first,last]. */
+    /**
+     * A bay assignment: {@code cells} as [[col,row], ...] or the ranges {@code cols} and {@code rows} as [first,last];
+     * {@code cantileverOccupancy} absent or null for the default balcony of the bay's occupancy.
+     */
     public static BayAssignment bays(JsonNode n) {
         List<Cell> cells = cells(n);
         if (flag(n, "opening")) return BayAssignment.opening(cells);
@@ -54,7 +57,8 @@ public final class ModelJson {
             String key = s.name().toLowerCase();
             if (cn.hasNonNull(key)) cantilevers.put(s, number(cn, key, "cantilevers." + key));
         }
-        return new BayAssignment(cells, false, text(n, "occupancy"), number(n, "deadLoad"), f, cantilevers);
+        return new BayAssignment(cells, false, text(n, "occupancy"), number(n, "deadLoad"), f, cantilevers,
+                n.hasNonNull("cantileverOccupancy") ? text(n, "cantileverOccupancy") : null);
     }
 
     public static List<Cell> cells(JsonNode n) {

@@ -22,15 +22,15 @@ final class ApiViews {
         }
     }
 
-    /** A bay in the same shape the bay assignment takes. */
+    /** A bay in the same shape the bay assignment takes; cantileverOccupancy null for the default balcony. */
     record BayJson(int col, int row, boolean opening, String occupancy, Double deadLoad, String beams, Integer infillBeams,
-                   Map<String, Double> cantilevers) {
+                   Map<String, Double> cantilevers, String cantileverOccupancy) {
         static BayJson of(Bay b) {
-            if (b.opening()) return new BayJson(b.col(), b.row(), true, null, null, null, null, Map.of());
+            if (b.opening()) return new BayJson(b.col(), b.row(), true, null, null, null, null, Map.of(), null);
             Map<String, Double> c = new TreeMap<>();
             b.cantilevers().forEach((s, v) -> c.put(s.name().toLowerCase(), v));
             return new BayJson(b.col(), b.row(), false, b.occupancy(), b.deadLoad(), b.framing().beams().name(),
-                    b.framing().infillBeams(), c);
+                    b.framing().infillBeams(), c, b.cantileverOccupancy());
         }
     }
 

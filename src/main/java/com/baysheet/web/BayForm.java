@@ -14,7 +14,8 @@ import java.util.Map;
 
 /**
  * The bay editor's form: the selected cells (checkboxes "col,row"), then what they get: an occupancy,
- * dead load, framing direction and number of infill beams, and cantilever lengths by side (blank for none).
+ * dead load, framing direction and number of infill beams, cantilever lengths by side (blank for none) and
+ * the cantilever slabs' occupancy (blank for the default, the balcony serving the bay's occupancy).
  */
 final class BayForm {
     static final List<String> SIDES = List.of("north", "south", "east", "west");
@@ -30,6 +31,7 @@ final class BayForm {
         v.put("beams", b.framing().beams().name());
         v.put("infillBeams", String.valueOf(b.framing().infillBeams()));
         b.cantilevers().forEach((s, len) -> v.put("cantilevers." + s.name().toLowerCase(), com.baysheet.engine.units.Display.plain(len)));
+        v.put("cantileverOccupancy", b.cantileverOccupancy() == null ? "" : b.cantileverOccupancy());
         return v;
     }
 
@@ -57,13 +59,15 @@ final class BayForm {
         }
         String beams = f.text("beams");
         if (!beams.equals("X") && !beams.equals("Y")) f.reject("beams", "choose the direction the infill beams span");
-        return new Values(f.text("occupancy"), deadLoad, beams, infill, cantilevers);
+        String cantileverUse = f.text("cantileverOccupancy");
+        return new Values(f.text("occupancy"), deadLoad, beams, infill, cantilevers, cantileverUse.isEmpty() ? null : cantileverUse);
     }
 
-    record Values(String occupancy, double deadLoad, String beams, int infillBeams, Map<Side, Double> cantilevers) {
+    record Values(String occupancy, double deadLoad, String beams, int infillBeams, Map<Side, Double> cantilevers,
+                  String cantileverOccupancy) {
         BayAssignment assignment(List<Cell> cells) {
             return new BayAssignment(cells, false, occupancy, deadLoad,
-                    new Framing(Direction.valueOf(beams), infillBeams), cantilevers);
+                    new Framing(Direction.valueOf(beams), infillBeams), cantilevers, cantileverOccupancy);
         }
     }
 }

@@ -47,6 +47,10 @@ record BayGridView(List<String> columns, List<Row> rows) {
                 + b.framing().beams() + " × " + b.framing().infillBeams());
         for (Side s : Side.values())
             if (b.cantilevers().containsKey(s)) detail.append(" · cantilever ").append(s.name().toLowerCase());
+        if (!b.cantilevers().isEmpty()) {
+            String use = b.cantileverUse(cat);
+            detail.append(" (").append(cat.contains(use) ? cat.get(use).name() : use).append(")");
+        }
         return new CellView(key, name, label, detail.toString(), palette.fill(b.occupancy()), selected, BayForm.values(b));
     }
 }

@@ -67,6 +67,7 @@ final class BayRoutes {
         m.put("units", UnitLabels.of(p.info().units()));
         m.put("sides", BayForm.SIDES);
         m.put("occupancies", catalogue.all());
+        m.put("balconies", catalogue.balconies());
         m.put("table", BayGridView.of(computed.model().building().grid(), bays, catalogue, new HashSet<>(form.values("cells")), UnitLabels.of(p.info().units())));
         ctx.render("bays/edit", m);
     }

@@ -75,7 +75,8 @@ final class Buildings {
             for (Bay bay : l.bays()) {
                 Map<Side, Double> cant = new EnumMap<>(Side.class);
                 bay.cantilevers().forEach((side, len) -> cant.put(side == Side.EAST ? Side.WEST : side == Side.WEST ? Side.EAST : side, len));
-                bays.add(new Bay(nx - 1 - bay.col(), bay.row(), bay.occupancy(), bay.deadLoad(), bay.framing(), bay.opening(), cant));
+                bays.add(new Bay(nx - 1 - bay.col(), bay.row(), bay.occupancy(), bay.deadLoad(), bay.framing(), bay.opening(), cant,
+                        bay.cantileverOccupancy()));
             }
             levels.add(new Level(l.name(), l.elevation(), l.roof(), l.roofSlope(), bays));
         }
@@ -95,24 +96,33 @@ final class Buildings {
         return a;
     }
 
-    /** Floored plan area of a level by occupancy id (ft²). */
+    /** Floored plan area of a level by occupancy id (ft²); cantilever slabs by their own occupancy. */
     static Map<String, Double> areaByUse(Grid g, Level l) {
         Map<String, Double> out = new HashMap<>();
         for (Bay b : l.bays()) {
             if (b.opening()) continue;
             double w = g.x().spacing(b.col()), d = g.y().spacing(b.row());
-            double a = w * d;
+            out.merge(b.occupancy(), w * d, Double::sum);
             for (Map.Entry<Side, Double> c : b.cantilevers().entrySet())
-                a += c.getValue() * (c.getKey() == Side.NORTH || c.getKey() == Side.SOUTH ? w : d);
-            out.merge(b.occupancy(), a, Double::sum);
+                out.merge(cantileverUse(b), c.getValue() * (c.getKey() == Side.NORTH || c.getKey() == Side.SOUTH ? w : d), Double::sum);
         }
         return out;
     }
 
     /**
+     * The occupancy a bay's cantilever slabs carry, stated apart from the code under test: the one given, else the
+     * balcony serving the bay's occupancy (ASCE 7-16 Table 4.3-1), except on a roof row, whose overhang stays roof.
+     */
+    static String cantileverUse(Bay b) {
+        if (b.cantileverOccupancy() != null) return b.cantileverOccupancy();
+        return US.catalogue().get(b.occupancy()).isRoof() ? b.occupancy() : "balcony:" + b.occupancy();
+    }
+
+    /**
      * A random model from a seed: 1 to 4 bays each way at unequal spacings, 1 to 4 levels (the top one a
      * sloped roof half the time), mixed occupancies, both framing directions with 0 to 4 infill beams,
-     * openings, cells left unframed on some levels, and cantilever slabs on true edges of the grid.
+     * openings, cells left unframed on some levels, and cantilever slabs on true edges of the grid (by default
+ * balconies, now and then given a floor occupancy of their own).
      */
     static Building random(long seed) {
         Random rnd = new Random(seed);
@@ -137,6 +147,8 @@ final class Buildings {
                     if (c == xs.length - 1 && rnd.nextDouble() < 0.3) b = b.withCantilever(Side.EAST, 2 + rnd.nextInt(7));
                     if (r == 0 && rnd.nextDouble() < 0.3) b = b.withCantilever(Side.SOUTH, 2 + rnd.nextInt(7));
                     if (r == ys.length - 1 && rnd.nextDouble() < 0.3) b = b.withCantilever(Side.NORTH, 2 + rnd.nextInt(7));
+                    if (!b.cantilevers().isEmpty() && rnd.nextDouble() < 0.3) // an enclosed cantilevered floor, say
+                        b = b.withCantileverOccupancy(roof ? use : FLOOR_USES.get(rnd.nextInt(FLOOR_USES.size())));
                     bays.add(b);
                 }
             if (bays.stream().noneMatch(b -> !b.opening()))

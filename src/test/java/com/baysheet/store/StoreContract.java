@@ -131,6 +131,64 @@ abstract class StoreContract {
     }
 
     @Test
+    void cantileverOccupancyRoundTripsAndNullMeansTheBalconyOfTheBay() {
+        Project p = projectWithLevel();
+        long l = level(p);
+        store.bays().assign(p.id(), p.version(), l, new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60,
+                new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 6.0), "retail-upper"));
+        store.bays().assign(p.id(), p.version() + 1, l, new BayAssignment(List.of(new Cell(1, 0)), false, "office", 60,
+                new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 6.0)));
+        List<Bay> bays = store.bays().findByLevel(p.id(), l);
+        assertThat(bays).extracting(Bay::cantileverOccupancy).containsExactly("retail-upper", null);
+        var members = store.results().of(p.id()).derived().members();
+        // 6 ft × 30 ft slab on each bay: the given occupancy on one, the balcony serving offices on the other
+        assertThat(members.stream().mapToDouble(m -> m.areas().getOrDefault("retail-upper", 0.0)).sum()).isGreaterThan(0);
+        assertThat(members.stream().filter(m -> m.role() == com.baysheet.framing.MemberRole.COLUMN)
+                .mapToDouble(m -> m.areas().getOrDefault("balcony:office", 0.0)).sum()).isCloseTo(180.0, org.assertj.core.api.Assertions.within(1e-9));
+    }
+
+    @Test
+    void aBayStoredBeforeCantileverOccupanciesReadsAsTheDefault() throws java.sql.SQLException {
+        Project p = projectWithLevel();
+        long l = level(p);
+        // a row as written before V103: no cantilever_occupancy column in the INSERT
+        try (var c = db.dataSource().getConnection(); var ps = c.prepareStatement("INSERT INTO bay (level_id, col_index, row_index, "
+                + "is_opening, occupancy, dead_load, beam_direction, infill_beams, cantilever_south) VALUES (?, 0, 0, FALSE, 'office', 60, 'Y', 2, 6)")) {
+            ps.setLong(1, l);
+            ps.executeUpdate();
+        }
+        Bay b = store.bays().findByLevel(p.id(), l).get(0);
+        assertThat(b.cantileverOccupancy()).isNull();
+        assertThat(b.cantileverUse(store.occupancies().catalogue())).isEqualTo("balcony:office");
+    }
+
+    @Test
+    void theBalconyOfAFirmRowWithTheLongestIdIsStored() {
+        Project p = projectWithLevel();
+        long l = level(p);
+        String id = "r".repeat(60);
+        store.occupancies().add(new FirmOccupancy(id, "Long room", UnitSystem.US, 40, 0, 30, ReductionRule.ORDINARY, false));
+        store.bays().assign(p.id(), p.version(), l, new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60,
+                new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 6.0), "balcony:" + id));
+        assertThat(store.bays().findByLevel(p.id(), l).get(0).cantileverOccupancy()).isEqualTo("balcony:" + id);
+    }
+
+    @Test
+    void anUnknownCantileverOccupancyIsRefusedNamingTheFieldAndNothingIsStored() {
+        Project p = projectWithLevel();
+        long l = level(p);
+        BayAssignment bad = new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60, new Framing(Direction.Y, 2),
+                Map.of(Side.SOUTH, 6.0), "ballroom");
+        assertThatThrownBy(() -> store.bays().assign(p.id(), p.version(), l, bad))
+                .isInstanceOfSatisfying(InputError.class, e -> {
+                    assertThat(e.field()).isEqualTo("cantileverOccupancy");
+                    assertThat(e.getMessage()).contains("ballroom");
+                });
+        assertThat(store.bays().findByLevel(p.id(), l)).isEmpty();
+        assertThat(store.projects().find(p.id()).version()).isEqualTo(p.version());
+    }
+
+    @Test
     void aModelTheDerivationRefusesIsRolledBack() {
         Project p = projectWithLevel();
         long l = level(p);

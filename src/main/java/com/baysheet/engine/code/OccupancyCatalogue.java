@@ -13,20 +13,29 @@ import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.util.Collection;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
- * The occupancy catalogue: the built-in rows of engine/occupancies.json plus a firm's own rows.
+ * The occupancy catalogue: the built-in rows of engine/occupancies.json plus a firm's own rows, and the
+ * balcony rows derived from every non-roof row ({@link BalconyRule}; found by id, not listed in {@link #all}).
  * Immutable; {@link #with} returns a new catalogue.
  */
 public final class OccupancyCatalogue {
     private static final OccupancyCatalogue BUILT_IN = load("/engine/occupancies.json");
 
     private final Map<String, Occupancy> byId;
+    private final BalconyRule balcony;
+    private final Map<String, Occupancy> balconies = new LinkedHashMap<>();
 
-    private OccupancyCatalogue(Map<String, Occupancy> byId) {
+    private OccupancyCatalogue(Map<String, Occupancy> byId, BalconyRule balcony) {
         this.byId = Map.copyOf(byId);
         this.order = byId.keySet().toArray(String[]::new);
+        this.balcony = balcony;
+        for (String id : order) {
+            Occupancy b = balcony.serving(byId.get(id));
+            if (b != null) balconies.put(b.id(), b);
+        }
     }
 
     private final String[] order;
@@ -35,12 +44,23 @@ public final class OccupancyCatalogue {
 
     public Occupancy get(String id) {
         // an immutable map throws on a null key: a missing id is the user's error, not ours
-        Occupancy o = id == null ? null : byId.get(id);
+        Occupancy o = id == null ? null : byId.getOrDefault(id, balconies.get(id));
         if (o == null) throw new InputError("occupancy", id, "is not in the occupancy catalogue");
         return o;
     }
 
-    public boolean contains(String id) { return id != null && byId.containsKey(id); }
+    public boolean contains(String id) { return id != null && (byId.containsKey(id) || balconies.containsKey(id)); }
+
+    /** The derived balcony and deck rows, one for each non-roof row, in catalogue order. */
+    public Collection<Occupancy> balconies() { return List.copyOf(balconies.values()); }
+
+    public BalconyRule balconyRule() { return balcony; }
+
+    /** The balcony row serving an occupancy, or the occupancy itself where none derives (a roof). */
+    public String balconyOf(String servedId) {
+        String id = BalconyRule.idFor(servedId);
+        return balconies.containsKey(id) ? id : servedId;
+    }
 
     public Collection<Occupancy> all() {
         return java.util.Arrays.stream(order).map(byId::get).toList();
@@ -51,7 +71,7 @@ public final class OccupancyCatalogue {
         Map<String, Occupancy> m = new LinkedHashMap<>();
         for (String id : order) m.put(id, byId.get(id));
         m.put(o.id(), o);
-        return new OccupancyCatalogue(m);
+        return new OccupancyCatalogue(m, balcony);
     }
 
     /**
@@ -86,6 +106,12 @@ public final class OccupancyCatalogue {
         return new Occupancy(id, name, psf, kpa, lb, kn, in, mm, rule, clause, assembly, "firm");
     }
 
+    private static BalconyRule balconyRule(JsonNode b) {
+        if (b == null) throw new IllegalStateException("occupancies.json has no balcony block");
+        return new BalconyRule(b.get("factor").asDouble(), b.get("capPsf").asDouble(), b.get("capKPa").asDouble(),
+                b.get("confidence").asText());
+    }
+
     static OccupancyCatalogue load(String resource) {
         try (InputStream in = OccupancyCatalogue.class.getResourceAsStream(resource)) {
             if (in == null) throw new IllegalStateException("missing resource " + resource);
@@ -100,7 +126,7 @@ public final class OccupancyCatalogue {
                         r.get("assembly").asBoolean(), r.get("confidence").asText());
                 m.put(o.id(), o);
             }
-            return new OccupancyCatalogue(m);
+            return new OccupancyCatalogue(m, balconyRule(root.get("balcony")));
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

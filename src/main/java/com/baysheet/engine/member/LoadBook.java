@@ -120,7 +120,7 @@ final class LoadBook {
     }
 
     private boolean partitioned(Occupancy o) {
-        return ctx.options().partitionAllowance() && !o.isRoof() && !PartitionAllowance.waived(ctx, o);
+        return ctx.options().partitionAllowance() && !o.isRoof() && !o.isBalcony() && !PartitionAllowance.waived(ctx, o);
     }
 
     private double partition() { return ctx.constant("partition"); }

@@ -49,6 +49,7 @@ public final class MemberCalculation {
         if (in.kind().isColumn()) AxialActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, rec);
         else BendingActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, rec);
         rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1)));
+        BalconyNote.record(ctx, book, rec);
         Cautions.standard(ctx, book, rec);
         return new Outcome(rec.build(), share(ctx, in, book, true), in.kind().isColumn()
                 || in.support() instanceof Support.Cantilever ? null : share(ctx, in, book, false), reduction[0]);

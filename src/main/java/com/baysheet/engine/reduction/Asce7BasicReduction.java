@@ -122,7 +122,8 @@ final class Asce7BasicReduction implements FloorReductionMethod {
                 yield f;
             }
             case NOT_REDUCIBLE -> {
-                String why = o.assembly() ? "assembly use" : "the code does not permit reduction";
+                String why = o.isBalcony() ? "balcony or deck, not reduced by choice (see the balcony note)"
+                        : o.assembly() ? "assembly use" : "the code does not permit reduction";
                 rec.info("Not reduced: " + o.name() + ", " + why + ", " + ed.clause(o.ruleClause().isEmpty() ? "loads.table" : o.ruleClause()).label() + ".",
                         ed.clause(o.ruleClause().isEmpty() ? "loads.table" : o.ruleClause()));
                 yield 1;
@@ -132,7 +133,7 @@ final class Asce7BasicReduction implements FloorReductionMethod {
     }
 
     private void partition(CalcContext ctx, Occupancy o, double f, Map<String, Double> bySource, RecordBuilder rec) {
-        if (!ctx.options().partitionAllowance()) return;
+        if (!ctx.options().partitionAllowance() || o.isBalcony()) return; // balconies: see BalconyNote
         Edition ed = ctx.edition();
         double exempt = ctx.constant("partition.exempt");
         if (PartitionAllowance.waived(ctx, o)) { // at or over the threshold, by edition

@@ -2,6 +2,7 @@ package com.baysheet.framing.model;
 
 import com.baysheet.engine.Check;
 import com.baysheet.engine.InputError;
+import com.baysheet.engine.code.OccupancyCatalogue;
 
 import java.util.EnumMap;
 import java.util.Map;
@@ -14,9 +15,11 @@ import java.util.Map;
  * @param row         cell index along y
  * @param deadLoad    dead load of the floor construction, framing allowance and superimposed dead load, psf or kN/m²
  * @param cantilevers slab projection past the edge by side, ft or m
+ * @param cantileverOccupancy the occupancy of all the bay's cantilever slabs, a catalogue id; null for the
+ *                    default, the balcony or deck serving the bay's occupancy (see {@link #cantileverUse})
  */
 public record Bay(int col, int row, String occupancy, double deadLoad, Framing framing, boolean opening,
-                  Map<Side, Double> cantilevers) {
+                  Map<Side, Double> cantilevers, String cantileverOccupancy) {
     public Bay {
         if (col < 0) throw new InputError("bay.col", col, "must be 0 or more");
         if (row < 0) throw new InputError("bay.row", row, "must be 0 or more");
@@ -30,6 +33,26 @@ public record Bay(int col, int row, String occupancy, double deadLoad, Framing f
         }
         for (Map.Entry<Side, Double> c : cantilevers.entrySet())
             Check.positive("bay.cantilevers." + c.getKey().name().toLowerCase(), c.getValue());
+        if (opening || (cantileverOccupancy != null && cantileverOccupancy.isBlank())) cantileverOccupancy = null;
+    }
+
+    /** A bay whose cantilever slabs, if any, carry the default: the balcony serving its occupancy. */
+    public Bay(int col, int row, String occupancy, double deadLoad, Framing framing, boolean opening,
+               Map<Side, Double> cantilevers) {
+        this(col, row, occupancy, deadLoad, framing, opening, cantilevers, null);
+    }
+
+    /**
+     * The occupancy id the cantilever slabs carry: the one given, or by default the balcony or deck row
+     * serving the bay's occupancy (the conservative choice: 1.5 L0 of the area served), or the bay's own
+     * occupancy where none derives (a roof overhang stays roof).
+     */
+    public String cantileverUse(OccupancyCatalogue catalogue) {
+        return cantileverOccupancy != null ? cantileverOccupancy : catalogue.balconyOf(occupancy);
+    }
+
+    public Bay withCantileverOccupancy(String id) {
+        return new Bay(col, row, occupancy, deadLoad, framing, opening, cantilevers, id);
     }
 
     public static Bay floor(int col, int row, String occupancy, double deadLoad, Framing framing) {
@@ -44,6 +67,6 @@ public record Bay(int col, int row, String occupancy, double deadLoad, Framing f
         Map<Side, Double> m = new EnumMap<>(Side.class);
         m.putAll(cantilevers);
         m.put(side, length);
-        return new Bay(col, row, occupancy, deadLoad, framing, opening, m);
+        return new Bay(col, row, occupancy, deadLoad, framing, opening, m, cantileverOccupancy);
     }
 }

@@ -1,0 +1,115 @@
+package com.baysheet.web;
+
+import com.baysheet.engine.record.RecordJson;
+import com.baysheet.framing.model.Bay;
+import com.baysheet.store.StoredLevel;
+import com.fasterxml.jackson.databind.JsonNode;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+
+import java.net.http.HttpResponse;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+import static java.util.Map.entry;
+import static org.assertj.core.api.Assertions.assertThat;
+
+/**
+ * The occupancy of a bay's cantilever slabs in the bay editor and the API: shown (the default being the
+ * balcony serving the bay's occupancy), editable, and an unknown id refused beside its field with nothing saved.
+ * The demo's Level 3 assembly room has a 6 ft cantilever balcony on its north side (cells 0,2 and 1,2).
+ */
+class BalconyPagesTest {
+    static TestServer server;
+    static long project;
+
+    @BeforeAll
+    static void start() {
+        server = new TestServer();
+        project = server.alder().id();
+    }
+
+    @AfterAll
+    static void stop() { server.close(); }
+
+    static long level(String name) {
+        return server.store.levels().findByProject(project).stream().filter(l -> l.name().equals(name))
+                .findFirst().map(StoredLevel::id).orElseThrow();
+    }
+
+    static String bays(String level) { return "/projects/" + project + "/levels/" + level(level) + "/bays"; }
+
+    static List<Map.Entry<String, String>> assembly(String cantileverOccupancy) {
+        List<Map.Entry<String, String>> f = new ArrayList<>(List.of(entry("version", String.valueOf(server.version(project))),
+                entry("cells", "0,2"), entry("cells", "1,2"), entry("action", "assign"), entry("occupancy", "assembly-movable-seats"),
+                entry("deadLoad", "70"), entry("beams", "Y"), entry("infillBeams", "2"), entry("cantilevers.north", "6")));
+        f.add(entry("cantileverOccupancy", cantileverOccupancy));
+        return f;
+    }
+
+    static JsonNode json(HttpResponse<String> r) throws Exception { return RecordJson.mapper().readTree(r.body()); }
+
+    @Test
+    void theEditorShowsTheCantileverOccupancyWithTheBalconyAsDefault() {
+        String page = server.get(bays("Level 3")).body();
+        assertThat(page).contains("<label for=\"cantileverOccupancy\">Occupancy of the cantilever slabs</label>",
+                "<option value=\"\" selected=\"selected\">Balcony or deck serving the bay", "value=\"balcony:office\"",
+                "Balcony or deck serving Offices — 75.0 psf", "cantilever north (Balcony or deck serving Assembly: movable seats)",
+                "id=\"cantileverOccupancy\"", "licensed engineer").doesNotContain("data-cantilever-occupancy=\"");
+    }
+
+    @Test
+    void anEnclosedCantileverIsGivenItsOwnOccupancyAndAnUnknownOneIsRefused() {
+        long v = server.version(project);
+        HttpResponse<String> bad = server.post(bays("Level 3"), assembly("ballroom"));
+        assertThat(bad.statusCode()).isEqualTo(422);
+        assertThat(bad.body()).contains("id=\"error-cantileverOccupancy\"", "is not in the occupancy catalogue", "Nothing was saved")
+                .doesNotContain("Exception");
+        assertThat(server.version(project)).isEqualTo(v);
+        assertThat(server.store.bays().findByLevel(project, level("Level 3"))).allMatch(b -> b.cantileverOccupancy() == null);
+
+        HttpResponse<String> ok = server.post(bays("Level 3"), assembly("office"));
+        assertThat(ok.statusCode()).as(ok.body()).isEqualTo(303);
+        List<Bay> stored = server.store.bays().findByLevel(project, level("Level 3"));
+        assertThat(stored).filteredOn(b -> !b.cantilevers().isEmpty()).hasSize(2).allMatch(b -> "office".equals(b.cantileverOccupancy()));
+        assertThat(server.get(bays("Level 3")).body()).contains("data-cantilever-occupancy=\"office\"", "cantilever north (Offices)");
+
+        // back to the default: the blank choice stores NULL
+        assertThat(server.post(bays("Level 3"), assembly("")).statusCode()).isEqualTo(303);
+        assertThat(server.store.bays().findByLevel(project, level("Level 3"))).allMatch(b -> b.cantileverOccupancy() == null);
+    }
+
+    @Test
+    void theApiReadsAndWritesTheCantileverOccupancyAndRefusesAnUnknownOne() throws Exception {
+        String at = "/api/projects/" + project + "/levels/" + level("Level 2") + "/bays";
+        String body = ", \"cells\": [[0, 0]], \"occupancy\": \"office\", \"deadLoad\": 65, \"beams\": \"Y\", \"infillBeams\": 2,"
+                + " \"cantilevers\": {\"south\": 5}";
+        long v = server.version(project);
+        HttpResponse<String> bad = server.json("POST", at, "{\"version\": " + v + body + ", \"cantileverOccupancy\": \"ballroom\"}");
+        assertThat(bad.statusCode()).isEqualTo(400);
+        assertThat(json(bad).get("field").asText()).isEqualTo("cantileverOccupancy");
+        assertThat(json(bad).get("value").asText()).isEqualTo("ballroom");
+        assertThat(server.version(project)).isEqualTo(v);
+
+        HttpResponse<String> byDefault = server.json("POST", at, "{\"version\": " + v + body + "}");
+        assertThat(byDefault.statusCode()).isEqualTo(200);
+        JsonNode saved = json(byDefault).get("saved").get(0);
+        assertThat(saved.get("cantileverOccupancy").isNull()).isTrue();
+        // the edge member along the south slab carries balcony area and says so, citing the load table
+        JsonNode members = json(server.get("/api/projects/" + project + "/members?level=Level+2"));
+        String edge = null;
+        for (JsonNode m : members) if (m.get("areas").has("balcony:office")) edge = m.get("id").asText();
+        assertThat(edge).isNotNull();
+        JsonNode notes = json(server.get("/api/projects/" + project + "/members/" + edge)).get("record").get("notes");
+        assertThat(notes.toString()).contains("Balcony or deck serving Offices", "Table 4.3-1");
+
+        HttpResponse<String> given = server.json("POST", at, "{\"version\": " + json(byDefault).get("version").asLong() + body
+                + ", \"cantileverOccupancy\": \"balcony:retail-upper\"}");
+        assertThat(given.statusCode()).isEqualTo(200);
+        assertThat(json(given).get("saved").get(0).get("cantileverOccupancy").asText()).isEqualTo("balcony:retail-upper");
+        JsonNode listed = json(server.get(at));
+        assertThat(listed.toString()).contains("\"cantileverOccupancy\":\"balcony:retail-upper\"");
+    }
+}
