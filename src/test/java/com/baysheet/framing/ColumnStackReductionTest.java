@@ -32,13 +32,17 @@ class ColumnStackReductionTest {
         return Derivation.derive(b).takeDowns().stream().filter(t -> t.gridPoint().equals(point)).findFirst().orElseThrow();
     }
 
-    /** Office floors F1 to F3; on F3 only, the corner bay carries 6 ft cantilever slabs on its south and west sides. */
+    /**
+     * Office floors F1 to F3; on F3 only, the corner bay carries 6 ft cantilever slabs on its south and west sides,
+     * enclosed office floor (not the default balcony load), so that only K_LL differs from floor to floor.
+     */
     private static Building cantileverOnTheTopFloorOnly() {
         List<Level> levels = List.of(
                 Level.floor("F1", 12, Buildings.everyBay(GRID, (c, r) -> Bay.floor(c, r, "office", 60, FRAMING))),
                 Level.floor("F2", 24, Buildings.everyBay(GRID, (c, r) -> Bay.floor(c, r, "office", 60, FRAMING))),
                 Level.floor("F3", 36, Buildings.everyBay(GRID, (c, r) -> c == 0 && r == 0
                         ? Bay.floor(c, r, "office", 60, FRAMING).withCantilever(Side.SOUTH, 6).withCantilever(Side.WEST, 6)
+                                .withCantileverOccupancy("office")
                         : Bay.floor(c, r, "office", 60, FRAMING))));
         return Buildings.building(GRID, levels);
     }

@@ -151,10 +151,17 @@ abstract class StoreContract {
     void aBayStoredBeforeCantileverOccupanciesReadsAsTheDefault() throws java.sql.SQLException {
         Project p = projectWithLevel();
         long l = level(p);
-        // a row as written before V103: no cantilever_occupancy column in the INSERT
-        try (var c = db.dataSource().getConnection(); var ps = c.prepareStatement("INSERT INTO bay (level_id, col_index, row_index, "
-                + "is_opening, occupancy, dead_load, beam_direction, infill_beams, cantilever_south) VALUES (?, 0, 0, FALSE, 'office', 60, 'Y', 2, 6)")) {
+        // a row as written before V103: no cantilever_occupancy column in the INSERT (keyed, since V106, by the
+        // ids of the bay's south-west grid lines)
+        String line = "(SELECT line_id FROM grid_line WHERE project_id = ? AND axis = ? AND seq = 0)";
+        try (var c = db.dataSource().getConnection(); var ps = c.prepareStatement("INSERT INTO bay (level_id, x_line, y_line, "
+                + "is_opening, occupancy, dead_load, beam_direction, infill_beams, cantilever_south) VALUES (?, " + line + ", " + line
+                + ", FALSE, 'office', 60, 'Y', 2, 6)")) {
             ps.setLong(1, l);
+            ps.setLong(2, p.id());
+            ps.setString(3, "x");
+            ps.setLong(4, p.id());
+            ps.setString(5, "y");
             ps.executeUpdate();
         }
         Bay b = store.bays().findByLevel(p.id(), l).get(0);

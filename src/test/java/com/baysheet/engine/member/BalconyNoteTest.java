@@ -25,8 +25,8 @@ class BalconyNoteTest {
         // w_L = 3.60 × 2 = 7.20 kN/m; R_L = 7.20 × 9 / 2 = 32.4 kN
         CalcContext si = Fixtures.SI.withOptions(PARTITIONS);
         CalcRecord r = calc(si, Fixtures.beam(MemberKind.EDGE_BEAM_CANTILEVER, 9, "balcony:office", 2, 3));
-        assertThat(r.result("L.R1")).isCloseTo(32.4, within(1e-9));
-        assertThat(r.result("L0.R1")).isCloseTo(32.4, within(1e-9));
+        assertThat(r.result("L.RA")).isCloseTo(32.4, within(1e-9));
+        assertThat(r.result("L0.RA")).isCloseTo(32.4, within(1e-9));
         assertThat(Fixtures.hasStep(r, "L_p[balcony:office]")).isFalse();
         Note n = r.notes().stream().filter(x -> x.text().startsWith("Balcony or deck")).findFirst().orElseThrow();
         assertThat(n.level()).isEqualTo(Note.Level.INFO);
@@ -50,6 +50,6 @@ class BalconyNoteTest {
         CalcContext old = Fixtures.US.withEdition(Editions.builtIn().get("ASCE 7-10"));
         CalcRecord r = calc(old, Fixtures.beam(MemberKind.EDGE_BEAM_CANTILEVER, 20, "balcony:residential-other", 5, 40));
         assertThat(r.notes()).anyMatch(x -> x.text().startsWith("Balcony or deck") && x.clause().label().equals("ASCE 7-10 Table 4-1"));
-        assertThat(r.result("L0.R1")).isCloseTo(60 * 5 * 10, within(1e-9)); // 1.5 × 40 = 60 psf
+        assertThat(r.result("L0.RA")).isCloseTo(60 * 5 * 10, within(1e-9)); // 1.5 × 40 = 60 psf
     }
 }
