@@ -52,4 +52,15 @@ class DerivationTest {
         assertThat(d.takeDowns()).hasSize(GRID.x().lines() * GRID.y().lines());
         assertThat(d.takeDown(d.takeDowns().get(0).id())).isPresent();
     }
+
+    @Test
+    void aGirderCarryingBeamsSaysItsAreaIncludesTheirsAndABeamDoesNot() {
+        // docs/engine.md, girder tributary area: the beams' delivered areas count toward the girder's own K_LL·A_T
+        Derived d = Derivation.derive(Buildings.building(GRID, Buildings.floors(GRID, 1, "office", 60, new Framing(Direction.X, 2))));
+        String note = "delivered by the members this one carries";
+        List<DerivedMember> girders = d.members().stream().filter(m -> m.role() == MemberRole.GIRDER).toList();
+        assertThat(girders).isNotEmpty().allSatisfy(g -> assertThat(g.result().record().notes()).anyMatch(n -> n.text().contains(note)));
+        DerivedMember beam = d.members().stream().filter(m -> m.role() == MemberRole.INFILL_BEAM).findFirst().orElseThrow();
+        assertThat(beam.result().record().notes()).noneMatch(n -> n.text().contains(note));
+    }
 }

@@ -65,6 +65,10 @@ public final class MemberCalculation {
                     in.floorsSupported(), in.support().span(), rec);
             f.putAll(lf.bySource());
             reduction[0] = lf;
+            if (!in.kind().isColumn() && carriesDeliveredArea(in))
+                rec.info("A_T includes the tributary areas delivered by the members this one carries, each counted once, "
+                        + "and its live load is reduced with its own K_LL·A_T, not taken from their reduced reactions "
+                        + "(common practice).", ctx.edition().clause("reduction.basic"));
         }
         if (!book.roofAreas.isEmpty()) {
             // A_T of 4.8.2 is the ordinary roof area: other roof rows are not reduced and must not lower R1
@@ -83,6 +87,12 @@ public final class MemberCalculation {
         for (String source : book.live.keySet())
             if (!f.containsKey(source)) f.put(source, 1.0); // a partition share handed down with the option now off
         return f;
+    }
+
+    /** A girder's point loads (the beams it carries) bring their tributary areas with them. */
+    private static boolean carriesDeliveredArea(MemberInput in) {
+        for (var p : in.pointLoads()) if (!p.areas().isEmpty()) return true;
+        return false;
     }
 
     /** ASCE 7-16 2.3.1 Exception 1: 0.5 L where every L0 is at most 100 psf, except garages and assembly. */
