@@ -5,6 +5,7 @@ import com.baysheet.auth.Role;
 import com.baysheet.auth.User;
 import com.baysheet.review.AuditCsv;
 import com.baysheet.review.AuditEvent;
+import com.baysheet.engine.InputError;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.auth.Accounts;
 import com.baysheet.store.review.Firm;
@@ -102,7 +103,7 @@ public final class AdminRoutes {
     }
 
     void audit(Context ctx) {
-        int page = Math.max(0, parsePage(ctx.queryParam("page")));
+        int page = parsePage(ctx.queryParam("page"));
         Map<String, Object> m = new HashMap<>();
         m.put("events", review.audit().page(AUDIT_PAGE, page * AUDIT_PAGE));
         m.put("page", page);
@@ -116,12 +117,19 @@ public final class AdminRoutes {
         ctx.result(AuditCsv.of(review.audit().all()));
     }
 
+    /** The furthest page whose offset (page × page size) still fits an int. */
+    static final int MAX_AUDIT_PAGE = Integer.MAX_VALUE / AUDIT_PAGE - 1;
+
+    /** ?page=N, from 0; anything else (text, negative, past {@link #MAX_AUDIT_PAGE}) is the user's mistake: a 400. */
     private static int parsePage(String p) {
+        if (p == null || p.isBlank()) return 0;
         try {
-            return p == null ? 0 : Integer.parseInt(p);
+            int n = Integer.parseInt(p.strip());
+            if (n >= 0 && n <= MAX_AUDIT_PAGE) return n;
         } catch (NumberFormatException e) {
-            return 0;
+            // refused below, naming the text
         }
+        throw new InputError("page", p, "must be a whole number from 0 to " + MAX_AUDIT_PAGE);
     }
 
     private static long userId(Context ctx) {
