@@ -38,6 +38,7 @@ public final class AdminRoutes {
         r.post("/admin/users/{user}/role", this::setRole);
         r.post("/admin/users/{user}/active", this::setActive);
         r.post("/admin/users/{user}/password", this::resetPassword);
+        r.post("/admin/users/{user}/unlock", this::unlock);
         r.get("/admin/firm", ctx -> firm(ctx, null));
         r.post("/admin/firm", this::updateFirm);
         r.get("/admin/audit", this::audit);
@@ -50,6 +51,7 @@ public final class AdminRoutes {
         m.put("users", accounts.users().findAll());
         m.put("roles", Role.values());
         m.put("me", Access.user(ctx));
+        m.put("waiting", accounts.logins().waiting());
         ctx.render("auth/users", m);
     }
 
@@ -71,6 +73,12 @@ public final class AdminRoutes {
 
     void setActive(Context ctx) {
         accounts.admin().setActive(Access.user(ctx), userId(ctx), "true".equals(ctx.formParam("active")), ctx.ip());
+        ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
+    }
+
+    /** Lifts a user's login wait at once (after guessing by someone else, say). */
+    void unlock(Context ctx) {
+        accounts.logins().unlock(Access.user(ctx), accounts.users().find(userId(ctx)), ctx.ip());
         ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
     }
 

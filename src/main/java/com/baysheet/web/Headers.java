@@ -1,0 +1,24 @@
+package com.baysheet.web;
+
+import io.javalin.http.Context;
+
+/**
+ * Headers on every response: no content sniffing, never framed (against clickjacking), and a
+ * Content-Security-Policy that allows scripts, styles, images and form posts from this server only: no
+ * inline script anywhere (page scripts live under static/), no plug-ins, no other base. Style attributes
+ * are allowed ({@code style-src-attr}): the bay grid and plan legends colour cells with them, and a style
+ * attribute cannot run script.
+ */
+final class Headers {
+    static final String CSP = "default-src 'self'; script-src 'self'; style-src 'self'; style-src-attr 'unsafe-inline'; "
+            + "img-src 'self' data:; object-src 'none'; base-uri 'none'; form-action 'self'; frame-ancestors 'none'";
+
+    private Headers() {}
+
+    static void apply(Context ctx) {
+        ctx.header("X-Content-Type-Options", "nosniff");
+        ctx.header("X-Frame-Options", "DENY");
+        ctx.header("Content-Security-Policy", CSP);
+        ctx.header("Referrer-Policy", "same-origin");
+    }
+}
