@@ -21,4 +21,11 @@ final class Headers {
         ctx.header("Content-Security-Policy", CSP);
         ctx.header("Referrer-Policy", "same-origin");
     }
+
+    /** An after-filter: a page rendered as plain "text/html" says its charset, so no browser guesses one. */
+    static void charset(Context ctx) {
+        String type = ctx.res().getContentType();
+        if (type != null && type.startsWith("text/html") && !type.toLowerCase().contains("charset"))
+            ctx.contentType("text/html; charset=utf-8");
+    }
 }

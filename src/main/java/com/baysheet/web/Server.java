@@ -47,6 +47,7 @@ public final class Server {
             });
             // ahead of the access filter, which may halt a request with a redirect that needs them too
             cfg.routes.before(Headers::apply);
+            cfg.routes.after(Headers::charset);
             if (access != null) access.accept(cfg.routes);
             filters(cfg.routes);
             Errors.install(cfg.routes);

@@ -79,8 +79,11 @@ public final class LoginFailures {
         });
     }
 
-    /** The administrator lifts a username's wait; returns the attempts it had made. */
-    public int unlock(String username) {
+    /**
+     * The administrator lifts a username's wait; its attempts are kept, so the user still hears of them at
+     * their next login. Returns those attempts.
+     */
+    public int unlock(String username, Instant now) {
         String u = clip(username);
         return sql.tx(c -> {
             int n = 0;
@@ -91,7 +94,7 @@ public final class LoginFailures {
                     if (rs.next()) n = rs.getInt(1);
                 }
             }
-            delete(c, u);
+            update(c, "failures = 0, refused = 0, wait_until = ?", USER, u, new Instant[]{now});
             return n;
         });
     }

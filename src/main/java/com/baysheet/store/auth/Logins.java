@@ -47,7 +47,8 @@ public final class Logins {
      */
     public SignedIn login(String typedUsername, String password, String address, String oldToken) {
         String name = typedUsername == null ? "" : typedUsername.strip().toLowerCase(Locale.ROOT);
-        Instant now = policy.clock().instant();
+        // to the millisecond, which every database keeps exactly: a wait ending "now" must not round past now
+        Instant now = policy.clock().instant().truncatedTo(java.time.temporal.ChronoUnit.MILLIS);
         LoginFailures.Gate gate = failures.claim(name, address, now, policy.throttle());
         if (gate.endedEpisodeUser() > 0 || gate.endedEpisodeAddress() > 0)
             audit.append(AuditEvent.of(null, name, "login throttled", "user " + name, Math.max(gate.endedEpisodeUser(),
@@ -70,7 +71,7 @@ public final class Logins {
 
     /** The administrator lifts a user's wait at once; the audit trail notes it with the attempts it had. */
     public void unlock(User admin, User who, String address) {
-        int n = failures.unlock(who.username());
+        int n = failures.unlock(who.username(), policy.clock().instant().truncatedTo(java.time.temporal.ChronoUnit.MILLIS));
         audit.append(AuditEvent.of(admin.id(), admin.username(), "login unlocked", "user " + who.username(),
                 n + " failed attempts", address));
     }
