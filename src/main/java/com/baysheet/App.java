@@ -57,7 +57,7 @@ public final class App {
             int loaded = Demo.loadIfEmpty(store).size();
             LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");
         }
-        Javalin app = Server.create(store, Signoff.on(store, db.dataSource())::install).start(o.bind(), o.port());
+        Javalin app = Server.create(store, Signoff.on(store, db.dataSource())::install, o.trustedProxy()).start(o.bind(), o.port());
         Runtime.getRuntime().addShutdownHook(new Thread(() -> {
             app.stop();
             db.close();

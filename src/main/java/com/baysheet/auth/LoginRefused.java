@@ -19,8 +19,10 @@ public final class LoginRefused extends RuntimeException {
         return new LoginRefused("That username and password do not match an active user.", null);
     }
 
-    public static LoginRefused throttled(Instant until) {
-        return new LoginRefused("Too many failed logins: wait a few minutes and try again.", until);
+    /** Refused during a wait, even with the right password: says how long is left, by the store's clock. */
+    public static LoginRefused throttled(Instant until, Instant now) {
+        long s = Math.max(1, (java.time.Duration.between(now, until).toMillis() + 999) / 1000);
+        return new LoginRefused("Too many failed logins: try again in " + s + " s.", until);
     }
 
     public Optional<Instant> retryAfter() { return Optional.ofNullable(retryAfter); }

@@ -1,45 +1,44 @@
 package com.baysheet.auth;
 
 import java.time.Duration;
-import java.time.Instant;
-import java.util.List;
-import java.util.Optional;
 
 /**
- * Slows guessing: after {@code maxFailures} failed logins within {@code window}, further attempts are
- * refused until the oldest of those failures leaves the window. Counted per username and, with a higher
- * limit, per network address (one machine trying many names).
+ * Slows guessing without a lockout anyone can renew: the first {@code freeFailures} failed logins in a row
+ * cost nothing; each further one makes the next attempt wait, starting at {@code firstWait} and doubling
+ * with every failure, up to {@code maxWait}. Attempts made during a wait are refused (even with the right
+ * password) and do not lengthen it. Counted per username and, with more free failures, per client address
+ * (one machine trying many names). A count untouched for {@code forgetAfter} starts again from nothing.
  */
-public record LoginThrottle(int maxFailures, int maxFailuresPerAddress, Duration window) {
-    public static final LoginThrottle OFFICE = new LoginThrottle(5, 20, Duration.ofMinutes(15));
+public record LoginThrottle(int freeFailures, int freeFailuresPerAddress, Duration firstWait, Duration maxWait,
+                            Duration forgetAfter) {
+    public static final LoginThrottle OFFICE = new LoginThrottle(5, 20, Duration.ofSeconds(30), Duration.ofMinutes(15),
+            Duration.ofHours(24));
 
     public LoginThrottle {
-        if (maxFailures < 1) throw new IllegalArgumentException("maxFailures: must be at least 1 (got " + maxFailures + ")");
-        if (maxFailuresPerAddress < maxFailures)
-            throw new IllegalArgumentException("maxFailuresPerAddress: must be at least maxFailures (got " + maxFailuresPerAddress + ")");
-        if (window == null || window.isNegative() || window.isZero())
-            throw new IllegalArgumentException("window: must be a positive duration (got " + window + ")");
+        if (freeFailures < 1) throw new IllegalArgumentException("freeFailures: must be at least 1 (got " + freeFailures + ")");
+        if (freeFailuresPerAddress < freeFailures)
+            throw new IllegalArgumentException("freeFailuresPerAddress: must be at least freeFailures (got " + freeFailuresPerAddress + ")");
+        positive("firstWait", firstWait);
+        positive("maxWait", maxWait);
+        positive("forgetAfter", forgetAfter);
+        if (maxWait.compareTo(firstWait) < 0) throw new IllegalArgumentException("maxWait: must be at least firstWait (got " + maxWait + ")");
     }
 
-    /** Failures to look at: those since this instant. */
-    public Instant since(Instant now) { return now.minus(window); }
+    /** The wait a username must sit out after this many failures in a row. */
+    public Duration waitForUser(int failures) { return waitAfter(failures, freeFailures); }
 
-    /**
-     * Until when attempts are refused, given the failure times (any order) for one username and for one
-     * address; empty when an attempt may go ahead.
-     */
-    public Optional<Instant> lockedUntil(List<Instant> byUsername, List<Instant> byAddress, Instant now) {
-        Optional<Instant> a = until(byUsername, maxFailures, now);
-        Optional<Instant> b = until(byAddress, maxFailuresPerAddress, now);
-        if (a.isEmpty()) return b;
-        if (b.isEmpty()) return a;
-        return Optional.of(a.get().isAfter(b.get()) ? a.get() : b.get());
+    /** The wait a client address must sit out after this many failures in a row. */
+    public Duration waitForAddress(int failures) { return waitAfter(failures, freeFailuresPerAddress); }
+
+    private Duration waitAfter(int failures, int free) {
+        if (failures < free) return Duration.ZERO;
+        int doublings = Math.min(failures - free, 30); // 2^30 × any wait is past every cap: no overflow
+        Duration w = firstWait.multipliedBy(1L << doublings);
+        return w.compareTo(maxWait) > 0 ? maxWait : w;
     }
 
-    private Optional<Instant> until(List<Instant> failures, int max, Instant now) {
-        List<Instant> recent = failures.stream().filter(t -> t.isAfter(since(now))).sorted().toList();
-        if (recent.size() < max) return Optional.empty();
-        // The attempt is allowed again once enough failures have aged out to leave max - 1 in the window.
-        return Optional.of(recent.get(recent.size() - max).plus(window));
+    private static void positive(String field, Duration d) {
+        if (d == null || d.isNegative() || d.isZero())
+            throw new IllegalArgumentException(field + ": must be a positive duration (got " + d + ")");
     }
 }

@@ -3,6 +3,7 @@ package com.baysheet.store;
 import com.baysheet.engine.InputError;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Framing;
+import com.baysheet.framing.model.Limits;
 import com.baysheet.framing.model.Side;
 
 import java.util.List;
@@ -16,7 +17,9 @@ import java.util.Map;
 public record BayAssignment(List<Cell> cells, boolean opening, String occupancy, double deadLoad, Framing framing,
                             Map<Side, Double> cantilevers, String cantileverOccupancy) {
     public BayAssignment {
-        cells = List.copyOf(cells);
+        // a cell named twice is one cell (else the second insert breaks the bay's key)
+        cells = List.copyOf(new java.util.LinkedHashSet<>(cells));
+        Limits.count("cells", cells.size(), Limits.MAX_CELLS_PER_REQUEST, "cells in one request");
         if (cells.isEmpty()) throw new InputError("cells", "none", "select at least one bay");
         cantilevers = Map.copyOf(cantilevers);
         if (opening || (cantileverOccupancy != null && cantileverOccupancy.isBlank())) cantileverOccupancy = null;

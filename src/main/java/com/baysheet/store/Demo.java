@@ -34,7 +34,7 @@ public final class Demo {
         store.grids().save(id, version(store, id), ModelJson.grid(p.path("grid")));
         for (JsonNode l : p.path("levels")) {
             long levelId = store.levels().add(id, version(store, id), ModelJson.level(l)).id();
-            for (JsonNode b : l.path("bays")) store.bays().assign(id, version(store, id), levelId, ModelJson.bays(b));
+            for (JsonNode b : l.path("bays")) store.bays().assign(id, version(store, id), levelId, ModelJson.bays(b, store.grids().find(id)));
         }
         return store.projects().find(id);
     }

@@ -8,6 +8,7 @@ import com.baysheet.framing.model.Direction;
 import com.baysheet.framing.model.Framing;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
+import com.baysheet.framing.model.Limits;
 import com.baysheet.framing.model.Side;
 import com.fasterxml.jackson.databind.JsonNode;
 
@@ -44,11 +45,12 @@ public final class ModelJson {
     }
 
     /**
-     * A bay assignment: {@code cells} as [[col,row], ...] or the ranges {@code cols} and {@code rows} as [first,last];
-     * {@code cantileverOccupancy} absent or null for the default balcony of the bay's occupancy.
+     * A bay assignment: {@code cells} as [[col,row], ...] or the ranges {@code cols} and {@code rows} as
+     * [first,last], checked against this grid before any cell is listed; {@code cantileverOccupancy} absent or
+     * null for the default balcony of the bay's occupancy.
      */
-    public static BayAssignment bays(JsonNode n) {
-        List<Cell> cells = cells(n);
+    public static BayAssignment bays(JsonNode n, Grid grid) {
+        List<Cell> cells = cells(n, grid);
         if (flag(n, "opening")) return BayAssignment.opening(cells);
         Framing f = new Framing(Direction.valueOf(choice(n, "beams", "X", "Y")), integer(n, "infillBeams"));
         Map<Side, Double> cantilevers = new EnumMap<>(Side.class);
@@ -61,17 +63,19 @@ public final class ModelJson {
                 n.hasNonNull("cantileverOccupancy") ? text(n, "cantileverOccupancy") : null);
     }
 
-    public static List<Cell> cells(JsonNode n) {
+    /** The selected cells; a range reaching past the grid is refused before it is expanded. */
+    public static List<Cell> cells(JsonNode n, Grid grid) {
         List<Cell> cells = new ArrayList<>();
         if (n.has("cells")) {
+            Limits.count("cells", n.get("cells").size(), Limits.MAX_CELLS_PER_REQUEST, "cells in one request");
             for (JsonNode c : n.get("cells")) {
-                if (!c.isArray() || c.size() != 2 || !c.get(0).canConvertToInt() || !c.get(1).canConvertToInt())
+                if (!c.isArray() || c.size() != 2 || !whole(c.get(0)) || !whole(c.get(1)))
                     throw new InputError("cells", c, "a cell is given as [column, row]");
                 cells.add(new Cell(c.get(0).asInt(), c.get(1).asInt()));
             }
         } else {
-            int[] cols = range(n, "cols");
-            int[] rows = range(n, "rows");
+            int[] cols = range(n, "cols", grid.x().cells());
+            int[] rows = range(n, "rows", grid.y().cells());
             for (int r = rows[0]; r <= rows[1]; r++)
                 for (int c = cols[0]; c <= cols[1]; c++) cells.add(new Cell(c, r));
         }
@@ -85,7 +89,7 @@ public final class ModelJson {
     }
 
     public static long version(JsonNode n) {
-        if (!n.path("version").canConvertToLong())
+        if (!n.path("version").isIntegralNumber() || !n.path("version").canConvertToLong())
             throw new InputError("version", n.path("version"), "give the version of the project this change is based on");
         return n.get("version").asLong();
     }
@@ -104,12 +108,21 @@ public final class ModelJson {
         return new GridAxis(axis, names, spacings);
     }
 
-    private static int[] range(JsonNode n, String field) {
+    /** [first, last] within the grid's {@code cells} along that axis. */
+    private static int[] range(JsonNode n, String field, int cells) {
         JsonNode r = n.path(field);
-        if (!r.isArray() || r.size() != 2 || !r.get(0).canConvertToInt() || !r.get(1).canConvertToInt()
+        if (!r.isArray() || r.size() != 2 || !whole(r.get(0)) || !whole(r.get(1))
                 || r.get(0).asInt() > r.get(1).asInt())
             throw new InputError(field, r, "give [first, last] indices, or cells as [[column, row], ...]");
-        return new int[]{r.get(0).asInt(), r.get(1).asInt()};
+        int first = r.get(0).asInt(), last = r.get(1).asInt();
+        if (first < 0 || last >= cells)
+            throw new InputError(field, r, "must lie within the grid: indices 0 to " + (cells - 1));
+        return new int[]{first, last};
+    }
+
+    /** A whole number that fits an int: not 1.5, not 2^40 (which asInt would wrap). */
+    private static boolean whole(JsonNode v) {
+        return v.isIntegralNumber() && v.canConvertToInt();
     }
 
     private static String text(JsonNode n, String field) {
@@ -147,7 +160,8 @@ public final class ModelJson {
 
     private static int integer(JsonNode n, String field) {
         JsonNode v = n.path(field);
-        if (!v.isIntegralNumber()) throw new InputError(field, v.isMissingNode() ? "nothing" : v, "must be a whole number");
+        if (!v.isIntegralNumber() || !v.canConvertToInt())
+            throw new InputError(field, v.isMissingNode() ? "nothing" : v, "must be a whole number");
         return v.asInt();
     }
 }

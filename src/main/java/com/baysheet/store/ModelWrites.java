@@ -2,6 +2,7 @@ package com.baysheet.store;
 
 import com.baysheet.framing.Derived;
 import com.baysheet.framing.model.Building;
+import com.baysheet.framing.model.Limits;
 
 import java.util.function.Function;
 
@@ -9,7 +10,7 @@ import java.util.function.Function;
  * The one way a project's framing model (grid, levels, bays) changes: in one transaction, claim the next
  * version (refusing a stale one), apply the change, then derive the changed building so that a model the
  * derivation refuses (a bay outside the grid, a cantilever on an interior edge) is rolled back with the
- * derivation's error and nothing is saved.
+ * derivation's error and nothing is saved. The model's bounds ({@link Limits}) are checked the same way.
  */
 public final class ModelWrites {
     private final Sql sql;
@@ -25,7 +26,12 @@ public final class ModelWrites {
             ProjectStore.touch(c, projectId, version);
             T result = work.run(c);
             Model m = BuildingMapper.load(c, projectId);
-            if (!m.building().levels().isEmpty()) derive.apply(m.building());
+            Limits.check(m.building());
+            Limits.count("levels", m.levels().size(), Limits.MAX_LEVELS, "levels in a project");
+            for (StoredLevel l : m.levels())
+                Limits.level(m.project().info().units(), l.info().elevation(), l.info().roof(), l.info().roofSlope());
+            if (!m.building().levels().isEmpty())
+                Limits.count("members", derive.apply(m.building()).members().size(), Limits.MAX_MEMBERS, "members in a project");
             return result;
         });
     }

@@ -38,7 +38,7 @@ public final class OccupancyStore {
             if (OccupancyCatalogue.builtIn().contains(o.id()))
                 throw new InputError("id", o.id(), "is a built-in occupancy; choose another id");
             for (FirmOccupancy other : findAll(c))
-                if (other.id().equals(o.id())) throw new InputError("id", o.id(), "is already one of the firm's occupancies");
+                if (other.id().equals(o.id())) throw new Duplicate("id", o.id(), "is already one of the firm's occupancies");
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO firm_occupancy (id, name, unit_system, "
                     + "uniform_load, concentrated_load, contact_side, reduction_rule, assembly, created_at) "
                     + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)")) {

@@ -123,7 +123,7 @@ public final class ProjectStore {
             ps.setString(1, jobNumber);
             ps.setLong(2, self);
             try (ResultSet rs = ps.executeQuery()) {
-                if (rs.next()) throw new InputError("jobNumber", jobNumber, "is already the job number of " + rs.getString(1));
+                if (rs.next()) throw new Duplicate("jobNumber", jobNumber, "is already the job number of " + rs.getString(1));
             }
         }
     }

@@ -6,7 +6,10 @@ import java.sql.PreparedStatement;
 import java.sql.SQLException;
 import java.sql.Types;
 
-/** Transactions over the pool; a database fault becomes {@link StoreFailure}, a user's mistake passes through. */
+/**
+ * Transactions over the pool; a database fault becomes {@link StoreFailure}, a user's mistake passes through,
+ * and a unique constraint refusing a second save of the same value becomes {@link Duplicate} (a 409).
+ */
 public final class Sql {
     /** Work done on one connection. */
     @FunctionalInterface
@@ -33,6 +36,7 @@ public final class Sql {
                 throw e;
             }
         } catch (SQLException e) {
+            if (Duplicate.is(e)) throw Duplicate.of(e);
             throw new StoreFailure(e);
         }
     }

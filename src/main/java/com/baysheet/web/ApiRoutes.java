@@ -94,14 +94,14 @@ final class ApiRoutes {
     void assignBays(Context ctx) {
         JsonNode body = Json.body(ctx);
         long id = Ids.project(ctx);
-        store.bays().assign(id, ModelJson.version(body), Ids.level(ctx), ModelJson.bays(body));
+        store.bays().assign(id, ModelJson.version(body), Ids.level(ctx), ModelJson.bays(body, store.grids().find(id)));
         saved(ctx, 200, id, store.bays().findByLevel(id, Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList());
     }
 
     void clearBays(Context ctx) {
         JsonNode body = Json.body(ctx);
         long id = Ids.project(ctx);
-        store.bays().clear(id, ModelJson.version(body), Ids.level(ctx), ModelJson.cells(body));
+        store.bays().clear(id, ModelJson.version(body), Ids.level(ctx), ModelJson.cells(body, store.grids().find(id)));
         saved(ctx, 200, id, store.bays().findByLevel(id, Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList());
     }
 

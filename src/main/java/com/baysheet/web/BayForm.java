@@ -3,6 +3,7 @@ package com.baysheet.web;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Direction;
 import com.baysheet.framing.model.Framing;
+import com.baysheet.framing.model.Limits;
 import com.baysheet.framing.model.Side;
 import com.baysheet.store.BayAssignment;
 import com.baysheet.store.Cell;
@@ -37,6 +38,10 @@ final class BayForm {
 
     static List<Cell> cells(Form f) {
         List<Cell> cells = new ArrayList<>();
+        if (f.values("cells").size() > Limits.MAX_CELLS_PER_REQUEST) {
+            f.reject("cells", "select at most " + Limits.MAX_CELLS_PER_REQUEST + " bays at once (limit cells)");
+            return cells;
+        }
         for (String key : f.values("cells")) {
             try {
                 cells.add(Cell.parse(key));

@@ -1,6 +1,7 @@
 package com.baysheet.web;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.store.Duplicate;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.StaleVersion;
 import io.javalin.config.RoutesConfig;
@@ -33,6 +34,12 @@ final class Errors {
         routes.exception(NotFound.class, (e, ctx) -> notFound(ctx, e.getMessage()));
         routes.exception(InputError.class, (e, ctx) -> respond(ctx, 400, "errors/bad-input",
                 new ApiError(400, e.getMessage(), e.field(), e.value(), e.problem())));
+        routes.exception(Duplicate.class, (e, ctx) -> respond(ctx, 409, "errors/bad-input",
+                new ApiError(409, e.getMessage(), e.field(), e.value(), e.problem())));
+        routes.exception(TooBusy.class, (e, ctx) -> {
+            ctx.header("Retry-After", String.valueOf(e.retryAfterSeconds()));
+            respond(ctx, 429, "errors/bad-input", new ApiError(429, e.getMessage(), e.limit(), null, e.getMessage()));
+        });
         routes.exception(StaleVersion.class, (e, ctx) -> respond(ctx, 409, "errors/conflict",
                 new ApiError(409, e.getMessage(), "version", String.valueOf(e.given()), "stale version; now " + e.current())));
         routes.exception(Exception.class, (e, ctx) -> {

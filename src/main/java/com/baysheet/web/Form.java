@@ -1,6 +1,7 @@
 package com.baysheet.web;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.store.Duplicate;
 import com.baysheet.store.StaleVersion;
 import io.javalin.http.Context;
 
@@ -25,6 +26,7 @@ public final class Form {
     private final Map<String, String> values = new LinkedHashMap<>();
     private final Map<String, List<String>> lists = new LinkedHashMap<>();
     private final Map<String, String> errors = new LinkedHashMap<>();
+    private boolean conflict;
 
     private Form() {}
 
@@ -110,14 +112,16 @@ public final class Form {
             reject(fieldFor(e.field()), fieldFor(e.field()).equals(GENERAL) ? e.getMessage() : e.problem());
         } catch (StaleVersion e) {
             reject(GENERAL, "Not saved: " + e.getMessage() + ".");
+            conflict = true;
+        } catch (Duplicate e) {
+            reject(fieldFor(e.field()), fieldFor(e.field()).equals(GENERAL) ? "Not saved: " + e.getMessage() + "." : e.problem());
+            conflict = true;
         }
         return Optional.empty();
     }
 
-    public boolean stale() {
-        String g = errors.get(GENERAL);
-        return g != null && g.startsWith("Not saved:");
-    }
+    /** Whether the save lost to another one (a stale version, a job number just taken): answered 409, not 422. */
+    public boolean stale() { return conflict; }
 
     /** The form field a domain field names: the longest field of this form that it ends with, ignoring [..] parts. */
     private String fieldFor(String domainField) {

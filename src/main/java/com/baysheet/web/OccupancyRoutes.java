@@ -37,7 +37,7 @@ final class OccupancyRoutes {
                     uniform, concentrated, contactSide, ReductionRule.parse("rule", form.text("rule")), form.checked("assembly"));
             store.occupancies().add(o);
             return o;
-        }).ifPresentOrElse(o -> Pages.seeOther(ctx, "/occupancies"), () -> render(ctx.status(422), form));
+        }).ifPresentOrElse(o -> Pages.seeOther(ctx, "/occupancies"), () -> render(ctx.status(form.stale() ? 409 : 422), form));
     }
 
     private void render(Context ctx, Form form) {

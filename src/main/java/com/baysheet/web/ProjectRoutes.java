@@ -41,7 +41,7 @@ final class ProjectRoutes {
         Form form = Form.of(ctx);
         form.attempt(() -> store.projects().create(info(form)))
                 .ifPresentOrElse(p -> Pages.seeOther(ctx, "/projects/" + p.id()),
-                        () -> renderForm(ctx.status(422), "projects/new", null, form));
+                        () -> renderForm(ctx.status(form.stale() ? 409 : 422), "projects/new", null, form));
     }
 
     void show(Context ctx) {

@@ -23,8 +23,17 @@ public final class Server {
 
     /** The same with access control (issue 6: login, roles, the sheet check) installed ahead of every route. */
     public static Javalin create(Store store, Consumer<RoutesConfig> access) {
+        return create(store, access, null);
+    }
+
+    /**
+     * The same, believing X-Forwarded-For only on requests from {@code trustedProxy} (null: from nobody), so
+     * the address the throttle counts and the audit trail records cannot be chosen by the client.
+     */
+    public static Javalin create(Store store, Consumer<RoutesConfig> access, String trustedProxy) {
         return Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
+            cfg.contextResolver.ip = ctx -> ClientAddress.of(ctx.req().getRemoteAddr(), ctx.header("X-Forwarded-For"), trustedProxy);
             // request-size limits: a form or JSON body is a few kilobytes (a 413 past 1 MB, before it is read
             // whole); the only upload is a PDF to verify, and no sheet or package comes near 50 MB
             cfg.http.maxRequestSize = 1_000_000L;
@@ -36,6 +45,9 @@ public final class Server {
                 sf.directory = "/static";
                 sf.location = Location.CLASSPATH;
             });
+            // ahead of the access filter, which may halt a request with a redirect that needs them too
+            cfg.routes.before(Headers::apply);
+            cfg.routes.after(Headers::charset);
             if (access != null) access.accept(cfg.routes);
             filters(cfg.routes);
             Errors.install(cfg.routes);
@@ -57,6 +69,7 @@ public final class Server {
         routes.before(ctx -> {
             if (!ctx.path().startsWith("/static/")) ctx.header("Cache-Control", "no-store");
         });
+
         routes.before(Saved::onRequest);
     }
 }

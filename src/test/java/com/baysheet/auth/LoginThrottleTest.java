@@ -3,46 +3,37 @@ package com.baysheet.auth;
 import org.junit.jupiter.api.Test;
 
 import java.time.Duration;
-import java.time.Instant;
-import java.util.ArrayList;
-import java.util.List;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 class LoginThrottleTest {
-    private static final Instant NOW = Instant.parse("2026-03-02T08:00:00Z");
-    private final LoginThrottle throttle = new LoginThrottle(3, 5, Duration.ofMinutes(15));
+    private final LoginThrottle throttle = new LoginThrottle(3, 5, Duration.ofSeconds(30), Duration.ofMinutes(15), Duration.ofHours(24));
 
     @Test
-    void allowsUpToTheLimitLessOne() {
-        assertThat(throttle.lockedUntil(minutesAgo(1, 2), List.of(), NOW)).isEmpty();
+    void theFirstFailuresCostNothing() {
+        assertThat(throttle.waitForUser(1)).isZero();
+        assertThat(throttle.waitForUser(2)).isZero();
+        assertThat(throttle.waitForAddress(4)).isZero();
     }
 
     @Test
-    void locksAtTheLimitUntilTheOldestFailureAgesOut() {
-        assertThat(throttle.lockedUntil(minutesAgo(1, 2, 10), List.of(), NOW)).contains(NOW.plus(Duration.ofMinutes(5)));
+    void eachFurtherFailureDoublesTheWaitUpToTheCap() {
+        assertThat(throttle.waitForUser(3)).isEqualTo(Duration.ofSeconds(30));
+        assertThat(throttle.waitForUser(4)).isEqualTo(Duration.ofSeconds(60));
+        assertThat(throttle.waitForUser(5)).isEqualTo(Duration.ofSeconds(120));
+        assertThat(throttle.waitForUser(9)).isEqualTo(Duration.ofMinutes(15)); // 30 s × 64 = 32 min, capped
+        assertThat(throttle.waitForUser(Integer.MAX_VALUE)).isEqualTo(Duration.ofMinutes(15));
+        assertThat(throttle.waitForAddress(5)).isEqualTo(Duration.ofSeconds(30));
     }
 
     @Test
-    void failuresOutsideTheWindowDoNotCount() {
-        assertThat(throttle.lockedUntil(minutesAgo(1, 2, 16, 30), List.of(), NOW)).isEmpty();
-    }
-
-    @Test
-    void oneAddressTryingManyNamesIsLockedToo() {
-        assertThat(throttle.lockedUntil(List.of(), minutesAgo(1, 2, 3, 4), NOW)).isEmpty();
-        assertThat(throttle.lockedUntil(List.of(), minutesAgo(1, 2, 3, 4, 5), NOW)).contains(NOW.plus(Duration.ofMinutes(10)));
-    }
-
-    @Test
-    void theLaterOfTwoLocksHolds() {
-        assertThat(throttle.lockedUntil(minutesAgo(1, 2, 3), minutesAgo(1, 2, 3, 4, 14), NOW))
-                .contains(NOW.plus(Duration.ofMinutes(12)));
-    }
-
-    private static List<Instant> minutesAgo(int... m) {
-        List<Instant> out = new ArrayList<>();
-        for (int x : m) out.add(NOW.minus(Duration.ofMinutes(x)));
-        return out;
+    void refusesNonsense() {
+        assertThatThrownBy(() -> new LoginThrottle(0, 5, Duration.ofSeconds(1), Duration.ofSeconds(2), Duration.ofHours(1)))
+                .hasMessageStartingWith("freeFailures:");
+        assertThatThrownBy(() -> new LoginThrottle(3, 2, Duration.ofSeconds(1), Duration.ofSeconds(2), Duration.ofHours(1)))
+                .hasMessageStartingWith("freeFailuresPerAddress:");
+        assertThatThrownBy(() -> new LoginThrottle(3, 5, Duration.ofSeconds(3), Duration.ofSeconds(2), Duration.ofHours(1)))
+                .hasMessageStartingWith("maxWait:");
     }
 }

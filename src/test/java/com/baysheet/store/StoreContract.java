@@ -82,7 +82,27 @@ abstract class StoreContract {
     void jobNumberIsUniqueAcrossProjects() {
         store.projects().create(info("24-100"));
         assertThatThrownBy(() -> store.projects().create(info("24-100")))
-                .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("jobNumber"));
+                .isInstanceOfSatisfying(Duplicate.class, e -> assertThat(e.field()).isEqualTo("jobNumber"));
+        assertThat(store.projects().findAll()).hasSize(1);
+    }
+
+    @Test
+    void concurrentCreatesOfOneJobNumberLeaveOneProjectAndRefuseTheRestAsDuplicates() throws Exception {
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(6);
+        java.util.List<java.util.concurrent.Future<String>> answers = new java.util.ArrayList<>();
+        for (int i = 0; i < 6; i++)
+            answers.add(pool.submit(() -> {
+                try {
+                    store.projects().create(info("24-200"));
+                    return "created";
+                } catch (Duplicate e) {
+                    return e.field();
+                }
+            }));
+        java.util.List<String> got = new java.util.ArrayList<>();
+        for (var a : answers) got.add(a.get());
+        pool.shutdown();
+        assertThat(got).containsOnly("created", "jobNumber").filteredOn("created"::equals).hasSize(1);
         assertThat(store.projects().findAll()).hasSize(1);
     }
 

@@ -51,7 +51,7 @@ class ProjectPagesTest {
         int before = server.store.projects().findAll().size();
         HttpResponse<String> r = server.post("/projects", List.of(entry("jobNumber", "24-031"), entry("name", "Copy of Alder"),
                 entry("edition", "ASCE 7-16"), entry("units", "US")));
-        assertThat(r.statusCode()).isEqualTo(422);
+        assertThat(r.statusCode()).isEqualTo(409);
         assertThat(r.body()).contains("id=\"error-jobNumber\"", "is already the job number of Alder Street Commons",
                 "value=\"Copy of Alder\"", "Nothing was saved");
         assertThat(server.store.projects().findAll()).hasSize(before);

@@ -23,6 +23,8 @@ public record GridAxis(String axis, List<String> names, List<Double> spacings, L
     }
 
     public GridAxis {
+        // counted before anything else looks at the lines: matching a changed grid is quadratic in its lines
+        Limits.count("grid." + axis + ".names", names.size(), Limits.MAX_GRID_LINES, "grid lines along " + axis);
         names = List.copyOf(names);
         spacings = List.copyOf(spacings);
         ids = List.copyOf(ids);
@@ -36,6 +38,8 @@ public record GridAxis(String axis, List<String> names, List<Double> spacings, L
         Set<String> seen = new HashSet<>();
         for (String n : names) {
             if (n == null || n.isBlank()) throw new InputError("grid." + axis + ".names", "\"\"", "a grid line needs a name");
+            if (n.length() > Limits.MAX_LINE_NAME)
+                throw new InputError("grid." + axis + ".names", n.length() + " characters", "a grid line name must be at most " + Limits.MAX_LINE_NAME + " characters");
             if (!seen.add(n)) throw new InputError("grid." + axis + ".names", n, "grid line named twice");
         }
         for (int i = 0; i < spacings.size(); i++) {

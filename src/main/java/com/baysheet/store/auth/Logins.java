@@ -40,27 +40,45 @@ public final class Logins {
         this.policy = policy;
     }
 
+    /**
+     * Checks a password, counted by the throttle before the check (so concurrent guesses are each counted);
+     * during a wait even the right password is refused with the time left. A login after failed attempts
+     * says how many there were ({@link SignedIn#failedAttempts()}).
+     */
     public SignedIn login(String typedUsername, String password, String address, String oldToken) {
         String name = typedUsername == null ? "" : typedUsername.strip().toLowerCase(Locale.ROOT);
-        Instant now = policy.clock().instant();
-        Optional<Instant> locked = policy.throttle().lockedUntil(failures.byUsername(name, policy.throttle().since(now)),
-                failures.byAddress(address, policy.throttle().since(now)), now);
-        if (locked.isPresent()) {
-            audit.append(AuditEvent.of(null, name, "login throttled", "user " + name, "", address));
-            throw LoginRefused.throttled(locked.get());
-        }
+        // to the millisecond, which every database keeps exactly: a wait ending "now" must not round past now
+        Instant now = policy.clock().instant().truncatedTo(java.time.temporal.ChronoUnit.MILLIS);
+        LoginFailures.Gate gate = failures.claim(name, address, now, policy.throttle());
+        if (gate.endedEpisodeUser() > 0 || gate.endedEpisodeAddress() > 0)
+            audit.append(AuditEvent.of(null, name, "login throttled", "user " + name, Math.max(gate.endedEpisodeUser(),
+                    gate.endedEpisodeAddress()) + " attempts refused while waiting", address));
+        if (gate.waitUntil().isPresent()) throw LoginRefused.throttled(gate.waitUntil().get(), now);
         Optional<UserStore.WithHash> found = users.findByUsername(name);
         boolean ok = policy.passwords().matches(password, found.map(UserStore.WithHash::passwordHash).orElse(null));
         if (!ok || !found.get().user().active()) {
-            failures.record(name, address, now);
             audit.append(AuditEvent.of(null, name, "login failed", "user " + name, "", address));
             throw LoginRefused.badCredentials();
         }
         if (oldToken != null) sessions.delete(Tokens.sha256(oldToken));
-        failures.clear(name, policy.throttle().since(now));
+        int before = failures.succeeded(name, address);
+        failures.prune(now, policy.throttle());
         User u = found.get().user();
-        audit.append(AuditEvent.of(u.id(), u.username(), "login", "user " + u.username(), "", address));
-        return start(u, now);
+        audit.append(AuditEvent.of(u.id(), u.username(), "login", "user " + u.username(),
+                before > 0 ? before + " failed attempts before this login" : "", address));
+        return start(u, now).withFailedAttempts(before);
+    }
+
+    /** The administrator lifts a user's wait at once; the audit trail notes it with the attempts it had. */
+    public void unlock(User admin, User who, String address) {
+        int n = failures.unlock(who.username(), policy.clock().instant().truncatedTo(java.time.temporal.ChronoUnit.MILLIS));
+        audit.append(AuditEvent.of(admin.id(), admin.username(), "login unlocked", "user " + who.username(),
+                n + " failed attempts", address));
+    }
+
+    /** Usernames that must wait now, with their attempts, for the users page. */
+    public java.util.Map<String, LoginFailures.Waiting> waiting() {
+        return failures.waiting(policy.clock().instant());
     }
 
     /** The smallest slide of a session's expiry worth writing. */

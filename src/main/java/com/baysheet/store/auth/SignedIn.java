@@ -8,4 +8,11 @@ import java.time.Instant;
  * A request's login: the user, the session's form token and when it lapses. {@code token} is the cookie
  * value, known only on the request that presented it (or on the login that created it).
  */
-public record SignedIn(User user, String token, String csrfToken, Instant expiresAt) {}
+public record SignedIn(User user, String token, String csrfToken, Instant expiresAt, int failedAttempts) {
+    public SignedIn(User user, String token, String csrfToken, Instant expiresAt) {
+        this(user, token, csrfToken, expiresAt, 0);
+    }
+
+    /** The same login, telling how many failed or refused attempts were made on the username before it. */
+    public SignedIn withFailedAttempts(int n) { return new SignedIn(user, token, csrfToken, expiresAt, n); }
+}

@@ -5,6 +5,7 @@ import com.baysheet.auth.Role;
 import com.baysheet.auth.User;
 import com.baysheet.review.AuditCsv;
 import com.baysheet.review.AuditEvent;
+import com.baysheet.engine.InputError;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.auth.Accounts;
 import com.baysheet.store.review.Firm;
@@ -37,6 +38,7 @@ public final class AdminRoutes {
         r.post("/admin/users/{user}/role", this::setRole);
         r.post("/admin/users/{user}/active", this::setActive);
         r.post("/admin/users/{user}/password", this::resetPassword);
+        r.post("/admin/users/{user}/unlock", this::unlock);
         r.get("/admin/firm", ctx -> firm(ctx, null));
         r.post("/admin/firm", this::updateFirm);
         r.get("/admin/audit", this::audit);
@@ -49,6 +51,7 @@ public final class AdminRoutes {
         m.put("users", accounts.users().findAll());
         m.put("roles", Role.values());
         m.put("me", Access.user(ctx));
+        m.put("waiting", accounts.logins().waiting());
         ctx.render("auth/users", m);
     }
 
@@ -70,6 +73,12 @@ public final class AdminRoutes {
 
     void setActive(Context ctx) {
         accounts.admin().setActive(Access.user(ctx), userId(ctx), "true".equals(ctx.formParam("active")), ctx.ip());
+        ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
+    }
+
+    /** Lifts a user's login wait at once (after guessing by someone else, say). */
+    void unlock(Context ctx) {
+        accounts.logins().unlock(Access.user(ctx), accounts.users().find(userId(ctx)), ctx.ip());
         ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
     }
 
@@ -102,7 +111,7 @@ public final class AdminRoutes {
     }
 
     void audit(Context ctx) {
-        int page = Math.max(0, parsePage(ctx.queryParam("page")));
+        int page = parsePage(ctx.queryParam("page"));
         Map<String, Object> m = new HashMap<>();
         m.put("events", review.audit().page(AUDIT_PAGE, page * AUDIT_PAGE));
         m.put("page", page);
@@ -116,12 +125,19 @@ public final class AdminRoutes {
         ctx.result(AuditCsv.of(review.audit().all()));
     }
 
+    /** The furthest page whose offset (page × page size) still fits an int. */
+    static final int MAX_AUDIT_PAGE = Integer.MAX_VALUE / AUDIT_PAGE - 1;
+
+    /** ?page=N, from 0; anything else (text, negative, past {@link #MAX_AUDIT_PAGE}) is the user's mistake: a 400. */
     private static int parsePage(String p) {
+        if (p == null || p.isBlank()) return 0;
         try {
-            return p == null ? 0 : Integer.parseInt(p);
+            int n = Integer.parseInt(p.strip());
+            if (n >= 0 && n <= MAX_AUDIT_PAGE) return n;
         } catch (NumberFormatException e) {
-            return 0;
+            // refused below, naming the text
         }
+        throw new InputError("page", p, "must be a whole number from 0 to " + MAX_AUDIT_PAGE);
     }
 
     private static long userId(Context ctx) {

@@ -43,7 +43,13 @@ public final class AuthRoutes {
         Form f = Form.of(ctx);
         SignedIn s = logins.login(f.text("username"), f.value("password"), ctx.ip(), Cookies.token(ctx, Cookies.SESSION));
         startSession(ctx, s);
-        ctx.redirect(safeNext(f.text("next")), HttpStatus.SEE_OTHER);
+        String next = safeNext(f.text("next"));
+        if (s.failedAttempts() == 0) {
+            ctx.redirect(next, HttpStatus.SEE_OTHER);
+            return;
+        }
+        // the user is told before going on: someone may have been guessing their password
+        ctx.render("auth/login-notice", Map.of("attempts", s.failedAttempts(), "next", next));
     }
 
     void logout(Context ctx) {
@@ -101,10 +107,17 @@ public final class AuthRoutes {
         ctx.attribute(Access.CSRF, s.csrfToken());
     }
 
-    /** Only a path of this server: never another site (an open redirect), never the login page again. */
+    /** The sections of this server a login may return to. */
+    private static final java.util.regex.Pattern OWN_PATH = java.util.regex.Pattern.compile(
+            "/(projects|review|admin|account|occupancies|verify)(/[A-Za-z0-9._~%/-]*)?(\\?[A-Za-z0-9._~%&=+-]*)?");
+
+    /**
+     * Only an absolute path into one of this server's own sections, in plain URL characters: never another
+     * site ({@code //host}, {@code /\\host}, a tab or other control character that a browser drops), never
+     * the login page again. Anything else is {@code /}.
+     */
     static String safeNext(String next) {
-        if (next == null || !next.startsWith("/") || next.startsWith("//") || next.startsWith("/\\")
-                || next.startsWith("/login") || next.contains("\r") || next.contains("\n")) return "/projects";
+        if (next == null || !OWN_PATH.matcher(next).matches() || next.contains("//")) return "/";
         return next;
     }
 }

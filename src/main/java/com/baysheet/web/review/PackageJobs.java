@@ -1,8 +1,10 @@
 package com.baysheet.web.review;
 
+import com.baysheet.framing.model.Limits;
 import com.baysheet.sheet.CalcPackage;
 import com.baysheet.sheet.PackageRenderer;
 import com.baysheet.sheet.StreamedPdf;
+import com.baysheet.web.TooBusy;
 
 import java.io.IOException;
 import java.io.OutputStream;
@@ -60,6 +62,11 @@ final class PackageJobs {
     private final Map<String, Job> jobs = new LinkedHashMap<>();
 
     synchronized Job start(long project, CalcPackage pkg) {
+        Limits.count("package", pkg.sheets().size(), Limits.MAX_PACKAGE_SHEETS, "member sheets in one package");
+        long waiting = jobs.values().stream().filter(j -> !j.finished()).count();
+        if (waiting >= Limits.MAX_QUEUED_PACKAGES)
+            throw new TooBusy("packageQueue", "at most " + Limits.MAX_QUEUED_PACKAGES
+                    + " packages are rendered or waiting at once (limit packageQueue); try again in a minute", 60);
         Job job = new Job(UUID.randomUUID().toString(), pkg.title(),
                 pkg.header().jobNumber() + "-" + pkg.title() + "-checking-copy.pdf", project);
         job.total = pkg.sheets().size();

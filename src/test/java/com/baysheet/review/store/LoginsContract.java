@@ -39,7 +39,7 @@ abstract class LoginsContract {
         Sql sql = new Sql(db.dataSource());
         audit = new AuditTrail(sql);
         accounts = Accounts.on(sql, audit, new Logins.Policy(new Passwords(4),
-                new SessionPolicy(Duration.ofHours(2), Duration.ofHours(12)), new LoginThrottle(3, 10, Duration.ofMinutes(15)), clock));
+                new SessionPolicy(Duration.ofHours(2), Duration.ofHours(12)), new LoginThrottle(3, 10, Duration.ofMinutes(1), Duration.ofMinutes(15), Duration.ofHours(24)), clock));
     }
 
     @AfterEach
@@ -88,6 +88,61 @@ abstract class LoginsContract {
                 .hasMessageContaining("Too many").matches(e -> ((LoginRefused) e).retryAfter().isPresent());
         clock.advance(Duration.ofMinutes(16));
         assertThat(logins().login("ada", PASSWORD, "10.0.0.2", null).user().username()).isEqualTo("ada");
+    }
+
+    @Test
+    void fortyConcurrentWrongGuessesAreFortyCountedAndNoneSlipsPast() throws Exception {
+        admin();
+        int n = 40;
+        java.util.concurrent.ExecutorService pool = java.util.concurrent.Executors.newFixedThreadPool(8);
+        java.util.List<java.util.concurrent.Future<String>> answers = new java.util.ArrayList<>();
+        for (int i = 0; i < n; i++) answers.add(pool.submit(() -> messageOf(() -> logins().login("ada", "wrong password!", "10.0.0.9", null))));
+        int throttled = 0;
+        for (var a : answers) if (a.get().startsWith("Too many")) throttled++;
+        pool.shutdown();
+        // the clock stands still: only the 3 free failures check a password, every other guess waits
+        assertThat(n - throttled).isEqualTo(3);
+        assertThat(audit.all().stream().filter(e -> e.action().equals("login failed"))).hasSize(3);
+        clock.advance(Duration.ofMinutes(1));
+        SignedIn in = logins().login("ada", PASSWORD, "10.0.0.9", null);
+        assertThat(in.failedAttempts()).isEqualTo(n);
+    }
+
+    @Test
+    void eachFurtherFailureDoublesTheWaitAndTheRightPasswordWaitsToo() {
+        admin();
+        for (int i = 0; i < 3; i++) messageOf(() -> logins().login("ada", "wrong password!", "10.0.0.2", null));
+        assertThat(messageOf(() -> logins().login("ada", PASSWORD, "10.0.0.2", null))).contains("try again in 60 s");
+        clock.advance(Duration.ofSeconds(60));
+        messageOf(() -> logins().login("ada", "wrong password!", "10.0.0.2", null));
+        assertThat(messageOf(() -> logins().login("ada", PASSWORD, "10.0.0.2", null))).contains("try again in 120 s");
+        clock.advance(Duration.ofSeconds(119));
+        assertThat(messageOf(() -> logins().login("ada", PASSWORD, "10.0.0.2", null))).contains("try again in 1 s");
+        clock.advance(Duration.ofSeconds(1));
+        assertThat(logins().login("ada", PASSWORD, "10.0.0.2", null).failedAttempts()).isEqualTo(7);
+    }
+
+    @Test
+    void refusedAttemptsOfOneWaitWriteOneAuditRowWithTheirCount() {
+        admin();
+        for (int i = 0; i < 3; i++) messageOf(() -> logins().login("ada", "wrong password!", "10.0.0.2", null));
+        for (int i = 0; i < 7; i++) messageOf(() -> logins().login("ada", "wrong password!", "10.0.0.2", null));
+        assertThat(audit.all().stream().filter(e -> e.action().startsWith("login throttled"))).isEmpty();
+        clock.advance(Duration.ofMinutes(1));
+        logins().login("ada", PASSWORD, "10.0.0.2", null);
+        assertThat(audit.all().stream().filter(e -> e.action().equals("login throttled")))
+                .singleElement().satisfies(e -> assertThat(e.detail()).contains("7 attempts"));
+    }
+
+    @Test
+    void theAdministratorUnlocksAWaitingUser() {
+        SignedIn a = admin();
+        for (int i = 0; i < 4; i++) messageOf(() -> logins().login("ada", "wrong password!", "10.0.0.2", null));
+        assertThat(logins().waiting()).containsKey("ada");
+        logins().unlock(a.user(), a.user(), "10.0.0.1");
+        assertThat(logins().waiting()).isEmpty();
+        assertThat(logins().login("ada", PASSWORD, "10.0.0.3", null).user().username()).isEqualTo("ada");
+        assertThat(audit.all()).extracting(e -> e.action()).contains("login unlocked");
     }
 
     @Test
