@@ -3,9 +3,9 @@ package com.baysheet.web.review;
 import com.baysheet.auth.Role;
 import com.baysheet.web.TestLogin;
 import com.baysheet.web.TestLogin.Client;
-import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.ArrayList;
@@ -25,20 +25,17 @@ class AccessMatrixTest {
     record Route(String method, String path, List<Map.Entry<String, String>> form, Out anon, Out eng, Out chk, Out adm) {}
 
     static final Out P = Out.PASS, L = Out.LOGIN, F = Out.FORBID;
-    static ReviewServer server;
+    @RegisterExtension
+    static final ReviewServer server = ReviewServer.perClass();
     static Client anon, eng, chk, adm;
 
     @BeforeAll
     static void start() {
-        server = new ReviewServer();
         anon = TestLogin.anonymous(server.app);
         eng = server.as("eve", Role.ENGINEER);
         chk = server.as("carl", Role.CHECKER);
         adm = server.as("admin", Role.ADMINISTRATOR);
     }
-
-    @AfterAll
-    static void stop() { server.close(); }
 
     static List<Route> routes() {
         long p = server.project();

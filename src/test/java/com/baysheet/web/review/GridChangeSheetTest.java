@@ -5,9 +5,8 @@ import com.baysheet.engine.record.RecordJson;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.review.SheetRef;
 import com.baysheet.web.TestLogin.Client;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.List;
@@ -24,13 +23,8 @@ import static org.assertj.core.api.Assertions.assertThat;
  * naming them by grid lines.
  */
 class GridChangeSheetTest {
-    static ReviewServer server;
-
-    @BeforeAll
-    static void start() { server = new ReviewServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final ReviewServer server = ReviewServer.perClass();
 
     @Test
     void aLineInsertedAndRemovedLeavesOtherMembersAndTheirSheetsAsTheyWere() {

@@ -2,9 +2,8 @@ package com.baysheet.web.review;
 
 import com.baysheet.auth.Role;
 import com.baysheet.web.TestLogin;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.List;
@@ -14,13 +13,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /** Headers on every response, the redirect after login, query numbers out of range, and the unlock on the users page. */
 class HardeningTest {
-    static ReviewServer server;
-
-    @BeforeAll
-    static void start() { server = new ReviewServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final ReviewServer server = ReviewServer.perClass();
 
     private static void hasSecurityHeaders(HttpResponse<?> r) {
         assertThat(r.headers().firstValue("X-Content-Type-Options")).contains("nosniff");

@@ -13,9 +13,8 @@ import com.baysheet.web.TestLogin.Client;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.io.IOException;
 import java.net.http.HttpResponse;
@@ -33,13 +32,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /** A level's package checked and issued as a whole, verified by upload, then superseded by a change to one bay. */
 class PackageFlowTest {
-    static ReviewServer server;
-
-    @BeforeAll
-    static void start() { server = new ReviewServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final ReviewServer server = ReviewServer.perClass();
 
     @Test
     void aLevelPackageIsCheckedIssuedVerifiedAndRevisedWhenOneOfItsSheetsChanges() throws IOException {

@@ -6,9 +6,8 @@ import com.baysheet.web.TestLogin.Client;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.List;
@@ -18,13 +17,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /** Level and project packages from the browser: started, followed, downloaded; bad requests refused clearly. */
 class PackageRoutesTest {
-    static ReviewServer server;
-
-    @BeforeAll
-    static void start() { server = new ReviewServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final ReviewServer server = ReviewServer.perClass();
 
     @Test
     void aLevelPackageRendersInTheBackgroundAndDownloadsWithItsHash() throws Exception {

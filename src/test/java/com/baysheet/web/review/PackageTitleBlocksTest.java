@@ -7,9 +7,8 @@ import com.baysheet.web.TestLogin.Client;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.io.IOException;
 import java.time.LocalDate;
@@ -28,13 +27,8 @@ import static org.assertj.core.api.Assertions.assertThat;
  * else; a package never issued never says "issued".
  */
 class PackageTitleBlocksTest {
-    static ReviewServer server;
-
-    @BeforeAll
-    static void start() { server = new ReviewServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final ReviewServer server = ReviewServer.perClass();
 
     @Test
     void eachPageStatesItsOwnSheetsCheckAndRevision() throws Exception {

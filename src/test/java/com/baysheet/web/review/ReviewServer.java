@@ -16,21 +16,41 @@ import com.baysheet.store.Store;
 import com.baysheet.web.Server;
 import com.baysheet.web.TestLogin;
 import io.javalin.Javalin;
+import org.junit.jupiter.api.extension.AfterAllCallback;
+import org.junit.jupiter.api.extension.BeforeAllCallback;
+import org.junit.jupiter.api.extension.ExtensionContext;
 
 import java.time.Instant;
 import java.util.List;
 import java.util.UUID;
 
-/** The whole office server with sign-off on a random port, over a fresh H2 database with the demo loaded. */
-final class ReviewServer implements AutoCloseable {
-    final Database db;
-    final Store store;
-    final List<Project> demo;
+/**
+ * The whole office server with sign-off on a random port, over a fresh H2 database with the demo loaded.
+ * {@code new ReviewServer()} starts one at once; as a JUnit extension ({@code @RegisterExtension static final
+ * ReviewServer server = ReviewServer.perClass();}) it starts before a class's first test and stops after its last.
+ */
+final class ReviewServer implements AutoCloseable, BeforeAllCallback, AfterAllCallback {
+    Database db;
+    Store store;
+    List<Project> demo;
     final TestClock clock = new TestClock(Instant.now());
-    final Signoff signoff;
-    final Javalin app;
+    Signoff signoff;
+    Javalin app;
 
-    ReviewServer() {
+    ReviewServer() { start(); }
+
+    private ReviewServer(boolean later) {}
+
+    /** A server for one test class, started by JUnit. */
+    static ReviewServer perClass() { return new ReviewServer(true); }
+
+    @Override
+    public void beforeAll(ExtensionContext c) { if (app == null) start(); }
+
+    @Override
+    public void afterAll(ExtensionContext c) { close(); }
+
+    private void start() {
         db = Database.open("jdbc:h2:mem:v" + UUID.randomUUID().toString().replace("-", "")
                 + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
         store = Store.on(db.dataSource(), Derivation::derive);

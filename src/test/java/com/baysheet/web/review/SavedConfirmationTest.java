@@ -3,9 +3,8 @@ package com.baysheet.web.review;
 import com.baysheet.auth.Role;
 import com.baysheet.web.TestLogin;
 import com.baysheet.web.TestLogin.Client;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.List;
@@ -15,13 +14,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /** Every settings save redirects (post-redirect-get) to a page that says it was saved. */
 class SavedConfirmationTest {
-    static ReviewServer server;
-
-    @BeforeAll
-    static void start() { server = new ReviewServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final ReviewServer server = ReviewServer.perClass();
 
     /** The page the save redirected to, as the browser then fetches it. */
     static String followed(Client c, HttpResponse<String> r) {

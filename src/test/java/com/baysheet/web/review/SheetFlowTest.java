@@ -3,9 +3,8 @@ package com.baysheet.web.review;
 import com.baysheet.auth.Role;
 import com.baysheet.auth.Tokens;
 import com.baysheet.web.TestLogin.Client;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.List;
@@ -18,13 +17,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /** The check of one sheet in the browser's terms, from submission to a verified issued PDF and revision 2. */
 class SheetFlowTest {
-    static ReviewServer server;
-
-    @BeforeAll
-    static void start() { server = new ReviewServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final ReviewServer server = ReviewServer.perClass();
 
     @Test
     void preparedCheckedIssuedVerifiedAndRevised() {

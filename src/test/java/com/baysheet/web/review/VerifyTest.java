@@ -5,9 +5,8 @@ import com.baysheet.auth.Tokens;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.store.ProjectInfo;
 import com.baysheet.web.TestLogin.Client;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.nio.charset.StandardCharsets;
@@ -25,13 +24,8 @@ import static org.assertj.core.api.Assertions.assertThat;
  * the file name docs/sheets.md promises.
  */
 class VerifyTest {
-    static ReviewServer server;
-
-    @BeforeAll
-    static void start() { server = new ReviewServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final ReviewServer server = ReviewServer.perClass();
 
     @Test
     void anIssuedSheetVerifiesByJobProjectNameRevisionAndSignatures() {
