@@ -9,6 +9,7 @@ import com.baysheet.engine.member.MemberResult;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.reduction.CalcContext;
 import com.baysheet.engine.reduction.LiveFactors;
+import com.baysheet.framing.model.SelfWeights;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -25,8 +26,11 @@ final class ColumnTakeDown {
     private final List<LevelPlan> plans;        // top down
     private final List<LevelFraming> framings;  // same order
 
-    ColumnTakeDown(CalcContext ctx, MemberCache cache, List<LevelPlan> plans, List<LevelFraming> framings) {
+    private final SelfWeights weights;
+
+    ColumnTakeDown(CalcContext ctx, MemberCache cache, List<LevelPlan> plans, List<LevelFraming> framings, SelfWeights weights) {
         this.ctx = ctx;
+        this.weights = weights;
         this.cache = cache;
         this.plans = plans;
         this.framings = framings;
@@ -58,13 +62,17 @@ final class ColumnTakeDown {
             MemberKind kind = cls.kind(cant);
             if (floorHere > 0) supported.add(new SupportedFloor(p.level.name(), kind, floorShares(here)));
             String name = "Column " + point + " below " + p.level.name();
+            double height = storeyBelow(k), own = weights.column() * height;
             MemberInput in = new MemberInput(name + " (" + cls.label() + ")", kind, new Support.Axial(), Math.max(1, floors), List.of(),
-                    List.of(), List.of(total.asPointLoad()), 0, slope, Double.NaN, false, supported);
+                    List.of(), List.of(total.asPointLoad()), 0, slope, Double.NaN, false, supported)
+                    .withSelfWeight(weights.column(), weights.origin() + " for columns", height);
             MemberResult res = cache.calculate(in);
+            total.dead += own; // the column below this level weighs on every level beneath it
+            here.dead += own;
             String id = p.id + "-c" + p.at(i, j);
             out.add(new DerivedMember(id, name, p.level.name(), MemberRole.COLUMN, kind,
                     new PlanLine(p.x(i), p.y(j), p.x(i), p.y(j)), 0, 0, here.areas, 0, bays(p, i, j), outline(p, i, j), res));
-            rows.add(row(p, id, res, areaHere, floorArea, kind, floors, here.dead));
+            rows.add(row(p, id, res, areaHere, floorArea, kind, floors, here.dead, own));
             records.add(res);
         }
         if (rows.isEmpty()) return null;
@@ -73,14 +81,23 @@ final class ColumnTakeDown {
                 () -> TakeDownRecord.write(c, "Column " + point + " take-down", rows, records));
     }
 
+    /**
+     * The length of column below level k: down to the next level below, or from the lowest level down to
+     * elevation 0, the base (none where the lowest level is at or below 0: a slab on grade has no column below).
+     */
+    private double storeyBelow(int k) {
+        double top = plans.get(k).level.elevation();
+        return k + 1 < plans.size() ? top - plans.get(k + 1).level.elevation() : Math.max(0, top);
+    }
+
     /** This level's row: the reduction's areas and factor as the column's own record states them. */
     private TakeDown.Row row(LevelPlan p, String id, MemberResult r, double areaHere, double cumArea, MemberKind kind,
-                             int floors, double deadHere) {
+                             int floors, double deadHere, double selfWeight) {
         var lf = r.floorReduction();
         double reducible = lf.map(LiveFactors::reducibleArea).orElse(0.0), influence = lf.map(LiveFactors::influenceArea).orElse(0.0);
         return new TakeDown.Row(p.level.name(), id, areaHere, cumArea, reducible, ctx.edition().kll(kind), influence, floors,
                 lf.map(LiveFactors::factor).orElse(1.0),
-                deadHere, r.value("D.P"), r.value("L0.P"), r.value("L.P"), r.value("Lr.P"),
+                deadHere, selfWeight, r.value("D.P"), r.value("L0.P"), r.value("L.P"), r.value("Lr.P"),
                 r.value("LRFD.P"), combo(r, "LRFD.P"), r.value("ASD.P"), combo(r, "ASD.P"));
     }
 

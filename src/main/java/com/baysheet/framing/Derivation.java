@@ -17,6 +17,9 @@ public final class Derivation {
     /** @throws com.baysheet.engine.InputError naming the level, grid line or bay where the model is wrong */
     public static Derived derive(Building b) {
         ModelCheck.validate(b);
+        for (var l : b.lineLoads())
+            if (b.levels().stream().noneMatch(v -> v.name().equals(l.level())))
+                throw new com.baysheet.engine.InputError("lineLoads[" + l.label() + "].level", l.level(), "is not a framed level of the building");
         List<Integer> order = new ArrayList<>();
         for (int k = 0; k < b.levels().size(); k++) order.add(k);
         order.sort(Comparator.comparingDouble((Integer k) -> b.levels().get(k).elevation()).reversed());
@@ -28,12 +31,13 @@ public final class Derivation {
         for (int k : order) {
             Level l = b.levels().get(k);
             LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid());
-            LevelFraming f = new LevelFraming(cache, plan).derive();
+            LevelFraming f = new LevelFraming(cache, plan, b.selfWeights(),
+                    b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList()).derive();
             plans.add(plan);
             framings.add(f);
             members.addAll(f.members);
         }
-        ColumnTakeDown down = new ColumnTakeDown(b.context(), cache, plans, framings);
+        ColumnTakeDown down = new ColumnTakeDown(b.context(), cache, plans, framings, b.selfWeights());
         List<TakeDown> takeDowns = new ArrayList<>();
         for (int i = 0; i < b.grid().x().lines(); i++)
             for (int j = 0; j < b.grid().y().lines(); j++) {

@@ -8,6 +8,8 @@ import com.baysheet.engine.member.EndShare;
 import com.baysheet.engine.member.MemberResult;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Direction;
+import com.baysheet.framing.model.GridLineLoad;
+import com.baysheet.framing.model.SelfWeights;
 import com.baysheet.framing.model.Side;
 
 import java.util.ArrayList;
@@ -27,11 +29,19 @@ final class LevelFraming {
     private final MemberCache cache;
     private final LevelPlan plan;
     private final Segment[][] alongX, alongY;
+    private final SelfWeights weights;
+    private final List<GridLineLoad> lineLoads;
 
     @SuppressWarnings("unchecked")
     LevelFraming(MemberCache cache, LevelPlan plan) {
+        this(cache, plan, SelfWeights.NONE, List.of());
+    }
+
+    LevelFraming(MemberCache cache, LevelPlan plan, SelfWeights weights, List<GridLineLoad> lineLoads) {
         this.cache = cache;
         this.plan = plan;
+        this.weights = weights;
+        this.lineLoads = lineLoads;
         int nx = plan.xCells(), ny = plan.yCells();
         atPoint = new List[nx + 1][ny + 1];
         alongX = new Segment[nx][ny + 1];
@@ -46,6 +56,7 @@ final class LevelFraming {
                 Bay b = plan.floored(c, r);
                 if (b != null) bay(b);
             }
+        for (GridLineLoad l : lineLoads) LineLoads.place(plan, l, alongX, alongY, cache.context().catalogue());
         for (Segment[] row : alongX) for (Segment s : row) if (s.loaded()) gridMember(s);
         for (Segment[] row : alongY) for (Segment s : row) if (s.loaded()) gridMember(s);
         return this;
@@ -110,7 +121,9 @@ final class LevelFraming {
         String title = (girder ? "Girder " : "Beam ") + line + "/" + between;
         String id = plan.id + (s.alongX ? "-h" : "-v") + plan.at(i, j);
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(s.length), 1, s.strips,
-                List.of(), s.points, 0, roofSlope(), Double.NaN, plan.level.roof());
+                List.of(), s.points, 0, roofSlope(), Double.NaN, plan.level.roof())
+                .withSelfWeight(girder ? weights.girder() : weights.gridBeam(), source(girder ? "girders" : "grid beams"), 0)
+                .withLineLoads(s.lineLoads);
         MemberResult res = cache.calculate(in);
         PlanLine pl = s.alongX ? new PlanLine(plan.x(i), plan.y(j), plan.x(i + 1), plan.y(j))
                 : new PlanLine(plan.x(i), plan.y(j), plan.x(i), plan.y(j + 1));
@@ -127,9 +140,12 @@ final class LevelFraming {
 
     private MemberResult calc(String title, MemberKind kind, double span, List<AreaStrip> strips) {
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(span), 1, strips, List.of(),
-                List.of(), 0, roofSlope(), Double.NaN, plan.level.roof());
+                List.of(), 0, roofSlope(), Double.NaN, plan.level.roof())
+                .withSelfWeight(weights.infillBeam(), source("infill beams"), 0);
         return cache.calculate(in);
     }
+
+    private String source(String role) { return weights.origin() + " for " + role; }
 
     private double roofSlope() { return plan.level.roofSlope(); }
 

@@ -1,6 +1,7 @@
 package com.baysheet.framing;
 
 import com.baysheet.engine.load.AreaStrip;
+import com.baysheet.engine.load.LineLoad;
 import com.baysheet.engine.load.PointLoad;
 
 import java.util.ArrayList;
@@ -16,6 +17,8 @@ final class Segment {
     final double length;
     final List<AreaStrip> strips = new ArrayList<>();
     final List<PointLoad> points = new ArrayList<>();
+    /** Line loads along the member (cladding, walls): they load it but make it no member where there is none. */
+    final List<LineLoad> lineLoads = new ArrayList<>();
     final List<PlanRect> outline = new ArrayList<>();
     final List<String> bays = new ArrayList<>();
     boolean cantilever;

@@ -41,10 +41,7 @@ final class StackLoad {
 
     PointLoad asPointLoad() {
         List<LiveShare> l = new ArrayList<>();
-        live.forEach((src, v) -> {
-            int k = src.indexOf('#');
-            l.add(new LiveShare(k < 0 ? src : src.substring(0, k), k >= 0, Math.max(0, v)));
-        });
+        live.forEach((src, v) -> l.add(LiveShare.ofSource(src, Math.max(0, v))));
         List<AreaShare> a = new ArrayList<>();
         areas.forEach((id, v) -> a.add(new AreaShare(id, v)));
         return new PointLoad(0, Math.max(0, dead), l, a);

@@ -51,9 +51,11 @@ public final class TakeDown {
      * @param influenceArea  the K_LL·A_T that gave f: Σ K_LL,i × reducible A_T,i over the floors supported; 0 where
      *                       nothing is reducible
      * @param factor         f of Eq. 4.7-1 with its limit, as it applies to ordinary floor live load
+     * @param deadAtLevel    the dead load this level adds: its members' reactions and the self weight of the column below it
+     * @param selfWeightAtLevel the self weight of the column below this level (part of deadAtLevel)
      */
     public record Row(String level, String member, double areaAtLevel, double cumulativeArea, double reducibleArea,
-                      double kll, double influenceArea, int floorsSupported, double factor, double deadAtLevel, double dead,
+                      double kll, double influenceArea, int floorsSupported, double factor, double deadAtLevel, double selfWeightAtLevel, double dead,
                       double liveUnreduced, double liveReduced, double roofLive, double lrfd, String lrfdCombination,
                       double asd, String asdCombination) {}
 }

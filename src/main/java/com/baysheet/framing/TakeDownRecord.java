@@ -38,7 +38,9 @@ final class TakeDownRecord {
                     w.influenceArea(), Quantity.AREA, ed.clause("reduction.basic"));
             rec.step("f" + at, lv + "reduction factor on ordinary floor live load", formula(ctx, rec),
                     factorWorking(ctx, rec, r, w), w.factor(), Quantity.RATIO, ed.clause("reduction.eq"));
-            rec.step("P_D" + at, lv + "dead load", "Σ D", "level adds " + rec.show(w.deadAtLevel(), Quantity.FORCE), w.dead(), Quantity.FORCE,
+            rec.step("P_sw" + at, lv + "self weight of the column below this level", "P_sw = w_sw × h",
+                    "see the column record " + w.member(), w.selfWeightAtLevel(), Quantity.FORCE, Clause.NONE);
+            rec.step("P_D" + at, lv + "dead load", "Σ D", "level adds " + rec.show(w.deadAtLevel(), Quantity.FORCE) + ", column self weight included", w.dead(), Quantity.FORCE,
                     Clause.NONE);
             rec.step("P_L" + at, lv + "floor live load, reduced (unreduced " + rec.show(w.liveUnreduced(), Quantity.FORCE) + ")", "Σ f_i L0 A_i",
                     "see the column record " + w.member(), w.liveReduced(), Quantity.FORCE, ed.clause("reduction.eq"));

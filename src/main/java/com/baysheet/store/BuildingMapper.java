@@ -7,7 +7,13 @@ import com.baysheet.framing.model.Building;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.Level;
 
+import com.baysheet.engine.units.Convert;
+import com.baysheet.engine.units.UnitSystem;
+import com.baysheet.framing.model.SelfWeights;
+
 import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.ArrayList;
 import java.util.List;
@@ -32,8 +38,21 @@ final class BuildingMapper {
             if (bays.stream().allMatch(Bay::opening)) unframed.add(s.name());
             else levels.add(level(s.info(), bays).withKey("L" + s.id()));
         }
-        Building b = new Building(p.info().name(), ctx, grid, levels);
-        return new Model(p, OccupancyStore.catalogueVersion(c), b, stored, unframed);
+        Building b = new Building(p.info().name(), ctx, grid, levels).withSelfWeights(selfWeights(c, p.info().units()));
+        return new Model(p, OccupancyStore.catalogueVersion(c), b, stored, unframed, Results.firmVersion(c));
+    }
+
+    /** The firm's self weights by role (plf), converted exactly for an SI project; all 0: not included, and said so. */
+    static SelfWeights selfWeights(Connection c, UnitSystem units) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(
+                "SELECT sw_infill_beam, sw_grid_beam, sw_girder, sw_column FROM firm_setting WHERE id = 1");
+             ResultSet rs = ps.executeQuery()) {
+            if (!rs.next()) return SelfWeights.NONE;
+            double k = units == UnitSystem.SI ? Convert.KN_PER_M_PER_PLF : 1;
+            double i = rs.getDouble(1), g = rs.getDouble(2), gi = rs.getDouble(3), col = rs.getDouble(4);
+            if (i == 0 && g == 0 && gi == 0 && col == 0) return SelfWeights.NONE;
+            return new SelfWeights(i * k, g * k, gi * k, col * k, "firm default");
+        }
     }
 
     private static Level level(LevelInfo l, List<Bay> bays) {

@@ -23,7 +23,8 @@ public final class Results {
     /** A model read races a concurrent save at most this often before we derive without caching. */
     private static final int READ_ATTEMPTS = 3;
 
-    private record Key(long project, long version, long catalogue) {}
+    /** The firm's settings version is part of the key: the firm's self weights load every project. */
+    private record Key(long project, long version, long catalogue, long firm) {}
 
     /** A project's model and what was derived from it. */
     public record Computed(Model model, Derived derived) {
@@ -47,13 +48,20 @@ public final class Results {
             Computed hit = cached(sql.tx(c -> key(c, projectId)));
             if (hit != null) return hit;
             Model m = sql.tx(c -> BuildingMapper.load(c, projectId));
-            Key read = new Key(projectId, m.project().version(), m.catalogueVersion());
+            Key read = new Key(projectId, m.project().version(), m.catalogueVersion(), m.firmVersion());
             Computed computed = new Computed(m, derive(m.building()));
             if (read.equals(sql.tx(c -> key(c, projectId)))) {
                 synchronized (cache) { cache.put(read, computed); }
                 return computed;
             }
             if (attempt == READ_ATTEMPTS) return computed;
+        }
+    }
+
+    static long firmVersion(Connection c) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT version FROM firm_setting WHERE id = 1");
+             ResultSet rs = ps.executeQuery()) {
+            return rs.next() ? rs.getLong(1) : 0;
         }
     }
 
@@ -75,7 +83,7 @@ public final class Results {
             ps.setLong(1, projectId);
             try (ResultSet rs = ps.executeQuery()) {
                 if (!rs.next()) throw new NotFound("project", projectId);
-                return new Key(projectId, rs.getLong(1), OccupancyStore.catalogueVersion(c));
+                return new Key(projectId, rs.getLong(1), OccupancyStore.catalogueVersion(c), firmVersion(c));
             }
         }
     }

@@ -13,17 +13,22 @@ import java.util.List;
  * @param strips          floor area tributary to a beam, giving line loads (beams only)
  * @param areas           area tributary to an axial member (columns only)
  * @param pointLoads      concentrated loads (beam reactions on a girder, loads from above on a column)
- * @param selfWeight      dead line load of the member itself, plf or kN/m (0 for columns)
+ * @param selfWeight      dead load of the member itself per length, plf or kN/m; for a column, of the column below the
+ *                        level, whose weight is selfWeight × columnHeight
  * @param roofSlope       roof slope, in/ft (US) or percent (SI); NaN where no roof live load acts
  * @param stiffness       EI, lb·ft² (US) or kN·m² (SI); NaN for no deflection
  * @param onRoof          the member is at a roof level (occupiable roof rules, 4.8.3)
  * @param floors          columns only, optional: each floor supported with the column's kind there and its floor areas,
  *                        adding up, occupancy by occupancy, to the floor areas carried; empty for one K_LL throughout
+ * @param selfWeightSource where the self weight comes from, printed beside it ("firm default for girders"); empty: not stated
+ * @param columnHeight    columns only: the length of column whose self weight this member adds, ft or m; 0 for beams
+ * @param lineLoads       beams only: uniform line loads along part of the span (cladding, walls), not areas
  */
 public record MemberInput(String subject, MemberKind kind, Support support, int floorsSupported,
                           List<AreaStrip> strips, List<AreaLoad> areas, List<PointLoad> pointLoads,
                           double selfWeight, double roofSlope, double stiffness, boolean onRoof,
-                          List<SupportedFloor> floors) {
+                          List<SupportedFloor> floors, String selfWeightSource, double columnHeight,
+                          List<LineLoad> lineLoads) {
     public MemberInput {
         Check.text("subject", subject);
         Check.present("kind", kind);
@@ -50,7 +55,15 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
             for (int i = 0; i < pointLoads.size(); i++)
                 if (pointLoads.get(i).x() > length * (1 + 1e-9))
                     throw new InputError("pointLoads[" + i + "].x", pointLoads.get(i).x(), "lies off the member (length " + length + ")");
-        if (strips.isEmpty() && areas.isEmpty() && pointLoads.isEmpty())
+        selfWeightSource = selfWeightSource == null ? "" : selfWeightSource.strip();
+        Check.nonNegative("columnHeight", columnHeight);
+        if (!axial && columnHeight != 0) throw new InputError("columnHeight", columnHeight, "only a column has a column height");
+        lineLoads = List.copyOf(Check.present("lineLoads", lineLoads));
+        if (axial && !lineLoads.isEmpty()) throw new InputError("lineLoads", lineLoads.size(), "a column takes point loads, not line loads");
+        for (int i = 0; i < lineLoads.size(); i++)
+            if (lineLoads.get(i).to() > length * (1 + 1e-9))
+                throw new InputError("lineLoads[" + i + "].to", lineLoads.get(i).to(), "lies past the end of the member (" + length + ")");
+        if (strips.isEmpty() && areas.isEmpty() && pointLoads.isEmpty() && lineLoads.isEmpty())
             throw new InputError("loads", "none", "a member needs at least one strip, area or point load");
         floors = List.copyOf(Check.present("floors", floors));
         if (!floors.isEmpty()) {
@@ -61,6 +74,14 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
             for (int i = 0; i < floors.size(); i++)
                 if (!names.add(floors.get(i).name())) throw new InputError("floors[" + i + "].name", floors.get(i).name(), "two floors have this name");
         }
+    }
+
+    /** No self weight source stated, no column height, no line loads. */
+    public MemberInput(String subject, MemberKind kind, Support support, int floorsSupported, List<AreaStrip> strips,
+                       List<AreaLoad> areas, List<PointLoad> pointLoads, double selfWeight, double roofSlope,
+                       double stiffness, boolean onRoof, List<SupportedFloor> floors) {
+        this(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors,
+                "", 0, List.of());
     }
 
     /** One K_LL throughout: the member's own. */
@@ -81,19 +102,33 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
     }
 
     public MemberInput withSubject(String s) {
-        return new MemberInput(s, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors);
+        return new MemberInput(s, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors,
+                selfWeightSource, columnHeight, lineLoads);
     }
 
     public MemberInput withRoofSlope(double slope) {
-        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, slope, stiffness, onRoof, floors);
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, slope, stiffness, onRoof, floors,
+                selfWeightSource, columnHeight, lineLoads);
     }
 
     public MemberInput withFloors(List<SupportedFloor> f) {
         return new MemberInput(subject, kind, support, f.isEmpty() ? floorsSupported : f.size(), strips, areas, pointLoads,
-                selfWeight, roofSlope, stiffness, onRoof, f);
+                selfWeight, roofSlope, stiffness, onRoof, f, selfWeightSource, columnHeight, lineLoads);
+    }
+
+    /** The member's own weight per length and where that figure comes from; for a column, over {@code height}. */
+    public MemberInput withSelfWeight(double perLength, String source, double height) {
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, perLength, roofSlope, stiffness,
+                onRoof, floors, source, height, lineLoads);
+    }
+
+    public MemberInput withLineLoads(List<LineLoad> loads) {
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness,
+                onRoof, floors, selfWeightSource, columnHeight, loads);
     }
 
     public MemberInput withPointLoads(List<PointLoad> loads) {
-        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, loads, selfWeight, roofSlope, stiffness, onRoof, floors);
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, loads, selfWeight, roofSlope, stiffness, onRoof, floors,
+                selfWeightSource, columnHeight, lineLoads);
     }
 }

@@ -44,7 +44,9 @@ final class Inputs {
         book.floorAreas.forEach((id, a) -> occupancy(ctx, ctx.catalogue().get(id), a, rec));
         book.roofAreas.forEach((id, a) -> occupancy(ctx, ctx.catalogue().get(id), a, rec));
         loads(ctx, in, rec);
-        if (in.selfWeight() > 0) rec.input("selfWeight", "Member self weight", in.selfWeight(), Quantity.LINE_LOAD);
+        if (in.selfWeight() > 0) rec.input("selfWeight", in.kind().isColumn() ? "Column self weight per length" : "Member self weight",
+                in.selfWeight(), Quantity.LINE_LOAD);
+        if (in.columnHeight() > 0) rec.input("columnHeight", "Column height below this level", in.columnHeight(), Quantity.LENGTH);
         if (!Double.isNaN(in.roofSlope())) rec.input("roofSlope", "Roof slope", in.roofSlope(), Quantity.SLOPE);
         if (!Double.isNaN(in.stiffness())) rec.input("EI", "Stiffness EI", in.stiffness(), Quantity.STIFFNESS);
         rec.inputText("partitions", "Partition allowance", !ctx.options().partitionAllowance() ? "not included"

@@ -5,6 +5,7 @@ import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.load.AreaLoad;
 import com.baysheet.engine.load.AreaShare;
 import com.baysheet.engine.load.AreaStrip;
+import com.baysheet.engine.load.LineLoad;
 import com.baysheet.engine.load.LiveShare;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.PointLoad;
@@ -17,7 +18,8 @@ import java.util.Map;
 /**
  * A member's loads sorted by source: the dead load, and the unreduced live load of each source (an
  * occupancy, or the partition allowance on it), with the tributary area of each occupancy.
- * Axial members keep their loads as point loads at x = 0.
+ * Axial members keep their loads as point loads at x = 0. Line loads are dead, and live under their own
+ * source ("office#line") which no reduction factor reaches.
  */
 final class LoadBook {
     final BeamLoads dead = new BeamLoads();
@@ -35,7 +37,17 @@ final class LoadBook {
     static LoadBook of(CalcContext ctx, MemberInput in) {
         LoadBook b = new LoadBook(ctx, in);
         double length = in.support().length();
-        if (in.selfWeight() > 0) b.dead.distributed(in.selfWeight(), 0, length);
+        if (in.kind().isColumn()) b.dead.point(in.selfWeight() * in.columnHeight(), 0);
+        else if (in.selfWeight() > 0) b.dead.distributed(in.selfWeight(), 0, length);
+        for (int i = 0; i < in.lineLoads().size(); i++) {
+            LineLoad l = in.lineLoads().get(i);
+            b.dead.distributed(l.dead(), l.from(), l.to());
+            if (l.live() > 0) {
+                b.occupancy("lineLoads[" + i + "].liveOccupancy", l.liveOccupancy());
+                // no tributary area: the live part is never reduced and adds to no A_T (our choice, stated on the sheet)
+                b.source(l.liveOccupancy() + LiveShare.LINE).distributed(l.live(), l.from(), l.to());
+            }
+        }
         for (int i = 0; i < in.strips().size(); i++) {
             AreaStrip s = in.strips().get(i);
             Occupancy o = b.occupancy("strips[" + i + "].occupancy", s.occupancy());

@@ -41,6 +41,7 @@ public final class MemberCalculation {
     private static Outcome run(CalcContext ctx, MemberInput in, RecordBuilder rec) {
         LoadBook book = LoadBook.of(ctx, in);
         Inputs.record(ctx, in, book, rec);
+        OwnWeight.record(ctx, in, rec);
         LiveFactors[] reduction = new LiveFactors[1];
         Map<String, Double> factors = factors(ctx, in, book, rec, reduction);
         BeamLoads floor0 = book.combined(null, false), floor = book.combined(factors, false);
@@ -85,7 +86,7 @@ public final class MemberCalculation {
             }
         }
         for (String source : book.live.keySet())
-            if (!f.containsKey(source)) f.put(source, 1.0); // a partition share handed down with the option now off
+            if (!f.containsKey(source)) f.put(source, 1.0); // a line load's live (never reduced), or a partition share handed down with the option now off
         return f;
     }
 
@@ -113,7 +114,7 @@ public final class MemberCalculation {
         List<LiveShare> live = new ArrayList<>();
         for (Map.Entry<String, BeamLoads> e : book.live.entrySet()) {
             String src = e.getKey();
-            live.add(new LiveShare(LoadBook.occupancyOf(src), src.endsWith("#partitions"), Math.max(0, end(s, e.getValue(), left))));
+            live.add(LiveShare.ofSource(src, Math.max(0, end(s, e.getValue(), left))));
         }
         List<AreaShare> areas = new ArrayList<>();
         (left ? book.leftAreas : book.rightAreas).forEach((id, a) -> areas.add(new AreaShare(id, a)));

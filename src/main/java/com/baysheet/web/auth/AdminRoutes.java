@@ -90,7 +90,9 @@ public final class AdminRoutes {
     void firm(Context ctx, Form f) {
         Firm firm = review.firm().get();
         Form shown = f != null ? f : Form.filled(Map.of("firmName", firm.name(), "logoText", firm.logoText(),
-                "defaultEdition", firm.defaultEdition(), "version", String.valueOf(firm.version())));
+                "defaultEdition", firm.defaultEdition(), "version", String.valueOf(firm.version()),
+                "infillBeamWeight", plain(firm.infillBeamWeight()), "gridBeamWeight", plain(firm.gridBeamWeight()),
+                "girderWeight", plain(firm.girderWeight()), "columnWeight", plain(firm.columnWeight())));
         ctx.render("auth/firm", Map.of("form", shown, "editions", Editions.builtIn().ids()));
     }
 
@@ -99,7 +101,9 @@ public final class AdminRoutes {
         User u = Access.user(ctx);
         long version = f.version();
         if (f.attempt(() -> {
-            review.firm().update(new Firm(f.text("firmName"), f.text("logoText"), f.text("defaultEdition"), version),
+            review.firm().update(new Firm(f.text("firmName"), f.text("logoText"), f.text("defaultEdition"),
+                            weight(f, "infillBeamWeight"), weight(f, "gridBeamWeight"), weight(f, "girderWeight"),
+                            weight(f, "columnWeight"), version),
                     AuditEvent.of(u.id(), u.username(), "firm settings", "firm", f.text("firmName"), ctx.ip()));
             return true;
         }).isPresent()) {
@@ -109,6 +113,13 @@ public final class AdminRoutes {
             firm(ctx, f);
         }
     }
+
+    /** A self weight field: blank is 0 (not included, and every sheet says so). */
+    private static double weight(Form f, String field) {
+        return f.text(field).isEmpty() ? 0 : f.number(field);
+    }
+
+    private static String plain(double v) { return com.baysheet.engine.units.Display.plain(v); }
 
     void audit(Context ctx) {
         int page = parsePage(ctx.queryParam("page"));

@@ -60,6 +60,25 @@ class FirmSettingsTest {
         assertThat(bad.body()).contains("Nothing was saved").doesNotContain("Saved:");
     }
 
+    HttpResponse<String> saveWeights(String girder) {
+        String page = admin.get("/admin/firm").body();
+        return admin.post("/admin/firm", List.of(Map.entry("firmName", NAME), Map.entry("logoText", LOGO),
+                Map.entry("defaultEdition", "ASCE 7-16"), Map.entry("infillBeamWeight", "30"), Map.entry("gridBeamWeight", ""),
+                Map.entry("girderWeight", girder), Map.entry("columnWeight", "50"), Map.entry("version", Pages.version(page, "/admin/firm"))));
+    }
+
+    @Test
+    void selfWeightDefaultsAreSavedAndABadOneIsRefusedNamingTheField() {
+        assertThat(saveWeights("-5").statusCode()).isEqualTo(400);
+        assertThat(saveWeights("x").statusCode()).isEqualTo(400);
+        assertThat(admin.get("/admin/firm").body()).contains("name=\"columnWeight\" inputmode=\"decimal\" value=\"0\"");
+        assertThat(saveWeights("75").statusCode()).isEqualTo(303);
+        String page = admin.get("/admin/firm").body();
+        assertThat(page).contains("name=\"girderWeight\" inputmode=\"decimal\" value=\"75\"")
+                .contains("name=\"columnWeight\" inputmode=\"decimal\" value=\"50\"")
+                .contains("name=\"gridBeamWeight\" inputmode=\"decimal\" value=\"0\"");
+    }
+
     @Test
     void theEditionFormListsTheEditionsWithTheFirmsSelected() {
         saveFirm("ASCE 7-10");
