@@ -68,8 +68,8 @@ public final class Lengths {
         if (m.matches()) return inUnit(0, Numbers.read(m.group(1)), field.us());
         m = DASHED.matcher(t);
         if (m.matches()) {
-            if (field.signed()) throw new EntryRefused(field.label(), typed,
-                    "write feet and inches with marks, as -12'-6\" or 12'-6\" (12-6 could be read as a subtraction)");
+            if (field.signed()) throw new EntryRefused(field.label(), typed, "write " + (typed.strip().startsWith("-") ? "-" : "")
+                    + m.group(1) + "'-" + m.group(2) + "\" for feet and inches (without the marks it could be read as a subtraction)");
             return inUnit(Double.parseDouble(m.group(1)), inches(m.group(2), field, typed), field.us());
         }
         Double bare = t.matches(N) ? Numbers.read(t) : null;
