@@ -54,12 +54,13 @@ final class BayForm {
     }
 
     /** Reads the numbers, recording errors; the assignment is built later, inside {@link Form#attempt}. */
-    static Values read(Form f) {
+    static Values read(Form f, com.baysheet.engine.units.UnitSystem units) {
         double deadLoad = f.number("deadLoad");
         int infill = f.integer("infillBeams");
         Map<Side, Double> cantilevers = new EnumMap<>(Side.class);
         for (String s : SIDES) {
-            double len = f.optionalNumber("cantilevers." + s);
+            double len = f.optionalLength("cantilevers." + s,
+                    com.baysheet.web.entry.LengthField.span("Cantilever past the " + s + " edge"), units);
             if (!Double.isNaN(len)) cantilevers.put(Side.valueOf(s.toUpperCase()), len);
         }
         String beams = f.text("beams");

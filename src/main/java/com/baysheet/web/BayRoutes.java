@@ -47,7 +47,7 @@ final class BayRoutes {
             case "clear" -> form.attempt(() -> { store.bays().clear(p.id(), version, l.id(), cells); return action; });
             case "opening" -> form.attempt(() -> { store.bays().assign(p.id(), version, l.id(), BayAssignment.opening(cells)); return action; });
             default -> {
-                BayForm.Values v = BayForm.read(form);
+                BayForm.Values v = BayForm.read(form, p.info().units());
                 yield form.attempt(() -> { store.bays().assign(p.id(), version, l.id(), v.assignment(cells)); return action; });
             }
         };

@@ -2,9 +2,18 @@ package com.baysheet.web;
 
 import com.baysheet.engine.InputError;
 import com.baysheet.store.Duplicate;
+import com.baysheet.engine.units.Unit;
+import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.store.StaleVersion;
+import com.baysheet.web.entry.EntryRefused;
+import com.baysheet.web.entry.LengthField;
+import com.baysheet.web.entry.LengthList;
+import com.baysheet.web.entry.Lengths;
+import com.baysheet.web.entry.Shown;
+import com.baysheet.web.entry.Slopes;
 import io.javalin.http.Context;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -27,6 +36,8 @@ public final class Form {
     private final Map<String, List<String>> lists = new LinkedHashMap<>();
     private final Map<String, String> errors = new LinkedHashMap<>();
     private boolean conflict;
+    /** What each length or slope field was read as ("= 25.5 ft"), shown beside it when the form comes back. */
+    private final Map<String, String> readings = new LinkedHashMap<>();
 
     private Form() {}
 
@@ -53,6 +64,9 @@ public final class Form {
     public String error(String field) { return errors.get(field); }
 
     public boolean hasError(String field) { return errors.containsKey(field); }
+
+    /** The value a length or slope field was read as, or null when it was not read or was refused. */
+    public String reading(String field) { return hasError(field) ? null : readings.get(field); }
 
     public Map<String, String> errors() { return errors; }
 
@@ -88,6 +102,70 @@ public final class Form {
             reject(field, t.isEmpty() ? "is required" : "must be a whole number (got \"" + t + "\")");
             return 0;
         }
+    }
+
+    /** A length as engineers write it (see {@link Lengths}), in the field's unit for the system; NaN after an error. */
+    public double length(String field, LengthField spec, UnitSystem system) {
+        try {
+            double v = Lengths.read(text(field), spec, system);
+            readings.put(field, Shown.of(v, unit(spec, system)));
+            return v;
+        } catch (EntryRefused e) {
+            reject(field, e.getMessage());
+            return Double.NaN;
+        }
+    }
+
+    /** A length that may be left blank (NaN when blank). */
+    public double optionalLength(String field, LengthField spec, UnitSystem system) {
+        return text(field).isEmpty() ? Double.NaN : length(field, spec, system);
+    }
+
+    /** A list of lengths in one field ("25'-6\" 30' 24'"), each read as {@link #length}; errors name the item. */
+    public List<Double> lengths(String field, LengthField spec, UnitSystem system) {
+        List<Double> out = new ArrayList<>();
+        try {
+            List<String> items = LengthList.split(text(field), spec.label());
+            List<String> shown = new ArrayList<>();
+            for (int i = 0; i < items.size(); i++) {
+                LengthField item = new LengthField(spec.label() + " (number " + (i + 1) + ")", spec.signed(), spec.us(), spec.si());
+                double v = Lengths.read(items.get(i), item, system);
+                out.add(v);
+                shown.add(Shown.of(v, unit(spec, system)).substring(2));
+            }
+            readings.put(field, "= " + String.join(", ", shown));
+        } catch (EntryRefused e) {
+            reject(field, e.getMessage());
+        }
+        return out;
+    }
+
+    /** A roof slope (see {@link Slopes}) in in/ft or %; NaN after an error. */
+    public double slope(String field, String label, UnitSystem system) {
+        try {
+            double v = Slopes.read(text(field), label, system);
+            readings.put(field, Shown.of(v, system == UnitSystem.US ? Unit.IN_PER_FT : Unit.PERCENT));
+            return v;
+        } catch (EntryRefused e) {
+            reject(field, e.getMessage());
+            return Double.NaN;
+        }
+    }
+
+    /**
+     * Runs the domain's own check of one field now, before the store is called, so that every field's
+     * refusal is shown at once; a refusal lands on this field unless it already has one.
+     */
+    public void check(String field, Runnable domainCheck) {
+        try {
+            domainCheck.run();
+        } catch (InputError e) {
+            reject(field, e.problem());
+        }
+    }
+
+    private static Unit unit(LengthField spec, UnitSystem system) {
+        return system == UnitSystem.US ? spec.us() : spec.si();
     }
 
     /** The version the form was opened at; a form without one cannot be saved safely. */
@@ -130,11 +208,6 @@ public final class Form {
         for (String f : values.keySet())
             if ((plain.equals(f) || plain.endsWith("." + f)) && f.length() > best.length()) best = f;
         return best;
-    }
-
-    /** Whether text is a plain finite decimal number as people type one. */
-    static boolean isDecimal(String t) {
-        return DECIMAL.matcher(t).matches() && Double.isFinite(Double.parseDouble(t));
     }
 
     private double parse(String field, String t) {

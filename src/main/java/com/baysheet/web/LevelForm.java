@@ -3,6 +3,8 @@ package com.baysheet.web;
 import com.baysheet.engine.units.Display;
 import com.baysheet.store.LevelInfo;
 import com.baysheet.store.StoredLevel;
+import com.baysheet.engine.units.UnitSystem;
+import com.baysheet.web.entry.LengthField;
 
 import java.util.HashMap;
 import java.util.Map;
@@ -21,12 +23,16 @@ final class LevelForm {
         return v;
     }
 
-    /** Reads the numbers (recording errors on the form); the record's own checks run inside {@link Form#attempt}. */
-    static Values read(Form f) {
+    /** Reads every field (recording all errors on the form at once); the record is checked again inside {@link Form#attempt}. */
+    static Values read(Form f, UnitSystem units) {
         boolean roof = f.checked("roof");
-        double elevation = f.number("elevation");
-        double slope = roof ? f.number("roofSlope") : Double.NaN;
-        return new Values(f.text("name"), elevation, roof, slope);
+        String name = f.text("name");
+        // the level's own check of the name, run now so that its refusal shows beside the others
+        f.check("name", () -> new LevelInfo(name, 0, false, Double.NaN));
+        double elevation = f.length("elevation", LengthField.elevation("Elevation"), units);
+        double slope = roof ? f.slope("roofSlope", "Roof slope", units) : Double.NaN;
+        if (roof && !Double.isNaN(slope)) f.check("roofSlope", () -> new LevelInfo("slope", 0, true, slope));
+        return new Values(name, elevation, roof, slope);
     }
 
     record Values(String name, double elevation, boolean roof, double roofSlope) {

@@ -35,9 +35,9 @@ final class LevelRoutes {
         Project p = store.projects().find(Ids.project(ctx));
         Form form = Form.of(ctx);
         long version = form.version();
-        GridForm.check(form);
+        var grid = GridForm.read(form, p.info().units());
         form.attempt(() -> {
-            store.grids().save(p.id(), version, GridForm.read(form));
+            store.grids().save(p.id(), version, grid.get());
             return p;
         }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
                 () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, form, Form.filled(Map.of("version", String.valueOf(p.version())))));
@@ -47,7 +47,7 @@ final class LevelRoutes {
         Project p = store.projects().find(Ids.project(ctx));
         Form form = Form.of(ctx);
         long version = form.version();
-        LevelForm.Values v = LevelForm.read(form);
+        LevelForm.Values v = LevelForm.read(form, p.info().units());
         form.attempt(() -> store.levels().add(p.id(), version, v.info()))
                 .ifPresentOrElse(l -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
                         () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, Form.filled(gridValues(p)), form));
@@ -64,7 +64,7 @@ final class LevelRoutes {
         StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
         Form form = Form.of(ctx);
         long version = form.version();
-        LevelForm.Values v = LevelForm.read(form);
+        LevelForm.Values v = LevelForm.read(form, p.info().units());
         form.attempt(() -> {
             store.levels().update(p.id(), version, l.id(), v.info());
             return l;

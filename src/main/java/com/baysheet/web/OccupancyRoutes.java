@@ -5,6 +5,7 @@ import com.baysheet.engine.code.ReductionRule;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.store.FirmOccupancy;
 import com.baysheet.store.Store;
+import com.baysheet.web.entry.LengthField;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -31,7 +32,11 @@ final class OccupancyRoutes {
         Form form = Form.of(ctx);
         double uniform = form.number("uniform");
         double concentrated = form.number("concentrated");
-        double contactSide = form.number("contactSide");
+        UnitSystem units = form.text("units").equals("SI") ? UnitSystem.SI : UnitSystem.US;
+        double contactSide = form.length("contactSide", LengthField.small("Contact area side"), units);
+        // the occupancy's own checks of its id and name, run now so that every refusal shows at once
+        form.check("id", () -> new FirmOccupancy(form.text("id"), "name", units, 1, 0, 1, ReductionRule.ORDINARY, false));
+        form.check("name", () -> new FirmOccupancy("id", form.text("name"), units, 1, 0, 1, ReductionRule.ORDINARY, false));
         form.attempt(() -> {
             FirmOccupancy o = new FirmOccupancy(form.text("id"), form.text("name"), UnitSystem.parse("units", form.text("units")),
                     uniform, concentrated, contactSide, ReductionRule.parse("rule", form.text("rule")), form.checked("assembly"));
