@@ -19,11 +19,13 @@ import java.util.List;
  * @param onRoof          the member is at a roof level (occupiable roof rules, 4.8.3)
  * @param floors          columns only, optional: each floor supported with the column's kind there and its floor areas,
  *                        adding up, occupancy by occupancy, to the floor areas carried; empty for one K_LL throughout
+ * @param snow            the roof whose snow load the member's strips carry (with the project's snow site of the
+ *                        context), or null: no snow on the strips (snow in point loads is carried either way)
  */
 public record MemberInput(String subject, MemberKind kind, Support support, int floorsSupported,
                           List<AreaStrip> strips, List<AreaLoad> areas, List<PointLoad> pointLoads,
                           double selfWeight, double roofSlope, double stiffness, boolean onRoof,
-                          List<SupportedFloor> floors) {
+                          List<SupportedFloor> floors, SnowOnRoof snow) {
     public MemberInput {
         Check.text("subject", subject);
         Check.present("kind", kind);
@@ -63,6 +65,13 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
         }
     }
 
+    /** No snow on the strips. */
+    public MemberInput(String subject, MemberKind kind, Support support, int floorsSupported, List<AreaStrip> strips,
+                       List<AreaLoad> areas, List<PointLoad> pointLoads, double selfWeight, double roofSlope,
+                       double stiffness, boolean onRoof, List<SupportedFloor> floors) {
+        this(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors, null);
+    }
+
     /** One K_LL throughout: the member's own. */
     public MemberInput(String subject, MemberKind kind, Support support, int floorsSupported, List<AreaStrip> strips,
                        List<AreaLoad> areas, List<PointLoad> pointLoads, double selfWeight, double roofSlope,
@@ -81,19 +90,23 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
     }
 
     public MemberInput withSubject(String s) {
-        return new MemberInput(s, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors);
+        return new MemberInput(s, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors, snow);
     }
 
     public MemberInput withRoofSlope(double slope) {
-        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, slope, stiffness, onRoof, floors);
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, slope, stiffness, onRoof, floors, snow);
     }
 
     public MemberInput withFloors(List<SupportedFloor> f) {
         return new MemberInput(subject, kind, support, f.isEmpty() ? floorsSupported : f.size(), strips, areas, pointLoads,
-                selfWeight, roofSlope, stiffness, onRoof, f);
+                selfWeight, roofSlope, stiffness, onRoof, f, snow);
+    }
+
+    public MemberInput withSnow(SnowOnRoof s) {
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors, s);
     }
 
     public MemberInput withPointLoads(List<PointLoad> loads) {
-        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, loads, selfWeight, roofSlope, stiffness, onRoof, floors);
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, loads, selfWeight, roofSlope, stiffness, onRoof, floors, snow);
     }
 }
