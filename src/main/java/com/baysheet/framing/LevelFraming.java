@@ -3,7 +3,9 @@ package com.baysheet.framing;
 import com.baysheet.engine.code.MemberKind;
 import com.baysheet.engine.load.AreaStrip;
 import com.baysheet.engine.load.MemberInput;
+import com.baysheet.engine.load.SnowOnRoof;
 import com.baysheet.engine.load.Support;
+import com.baysheet.framing.model.Level;
 import com.baysheet.engine.member.EndShare;
 import com.baysheet.engine.member.MemberResult;
 import com.baysheet.framing.model.Bay;
@@ -111,7 +113,7 @@ final class LevelFraming {
         String id = plan.id + (s.alongX ? "-h" : "-v") + plan.at(i, j);
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(s.length), 1, s.strips,
                 List.of(), s.points, 0, roofSlope(), Double.NaN, plan.level.roof());
-        MemberResult res = cache.calculate(in);
+        MemberResult res = cache.calculate(in.withSnow(snow()));
         PlanLine pl = s.alongX ? new PlanLine(plan.x(i), plan.y(j), plan.x(i + 1), plan.y(j))
                 : new PlanLine(plan.x(i), plan.y(j), plan.x(i), plan.y(j + 1));
         Map<String, Double> areas = new java.util.LinkedHashMap<>();
@@ -128,7 +130,13 @@ final class LevelFraming {
     private MemberResult calc(String title, MemberKind kind, double span, List<AreaStrip> strips) {
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(span), 1, strips, List.of(),
                 List.of(), 0, roofSlope(), Double.NaN, plan.level.roof());
-        return cache.calculate(in);
+        return cache.calculate(in.withSnow(snow()));
+    }
+
+    /** A roof level's snow on its members' strips (the snow site itself is the project's, in the context). */
+    private SnowOnRoof snow() {
+        Level l = plan.level;
+        return l.roof() ? new SnowOnRoof(l.surface().roof(l.roofSlope()), plan.belowAnother) : null;
     }
 
     private double roofSlope() { return plan.level.roofSlope(); }

@@ -51,9 +51,11 @@ public final class TakeDown {
      * @param influenceArea  the K_LL·A_T that gave f: Σ K_LL,i × reducible A_T,i over the floors supported; 0 where
      *                       nothing is reducible
      * @param factor         f of Eq. 4.7-1 with its limit, as it applies to ordinary floor live load
+     * @param snow           the roof snow load S at and above this level, unfactored and not reduced (only roof
+     *                       levels add to it; 0 without a snow site)
      */
     public record Row(String level, String member, double areaAtLevel, double cumulativeArea, double reducibleArea,
                       double kll, double influenceArea, int floorsSupported, double factor, double deadAtLevel, double dead,
-                      double liveUnreduced, double liveReduced, double roofLive, double lrfd, String lrfdCombination,
+                      double liveUnreduced, double liveReduced, double roofLive, double snow, double lrfd, String lrfdCombination,
                       double asd, String asdCombination) {}
 }

@@ -90,7 +90,8 @@ public final class LoadCombinations {
             if (fl != 0) sub += " + " + Display.sig3(fl) + " × " + rec.num(l, q);
             if (best.lr != 0) sub += " + " + Display.sig3(best.lr) + " × " + rec.num(bestRoof, q);
         }
-        String formula = snow ? brief(best, fl, term) : "";
+        // the label leaves out L on a member that carries none (a roof member): the value is the same either way
+        String formula = snow ? brief(best, l == 0 ? 0 : fl, term) : "";
         rec.step(key, (strength ? "Factored " : "Service ") + what + ", " + best.name + " governs"
                         + (snow && best.lr != 0 ? " (" + term + " as the roof load)" : ""),
                 snow ? formula : best.formula(halfAllowed, rec), sub, bestV, q, strength ? lrfd : asd);

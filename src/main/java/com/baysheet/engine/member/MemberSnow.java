@@ -35,11 +35,11 @@ final class MemberSnow {
                 rec.info("The balanced and minimum cases load the whole tributary area alike, so the larger pressure gives the"
                         + " larger of their effects; p_m is a separate case and is not combined with drifts.", ed.clause("snow.minimum"));
             book.snowOnStrips(s);
-            if (on.stepAbove() && on.roof().step() == null)
+        }
+        if (on != null && ctx.snow() != null && on.stepAbove() && on.roof().step() == null)
                 rec.caution("This roof is lower than another level of the building: drifts at the roof step ("
                         + ed.clause("snow.drift").label() + ") are not computed. Investigate the drift surcharge on members near the step.",
                         ed.clause("snow.drift"));
-        }
         if (book.snow.isEmpty()) return false;
         rec.info("Snow load S is not reduced.", ed.clause("snow.sloped"));
         return true;
