@@ -30,7 +30,7 @@ final class MemberSnow {
                     : rec.num(l.balanced(), Quantity.PRESSURE);
             double s = rec.step("S_u", "Uniform snow load on this member, " + (minimum ? "the minimum p_m governs" : "the balanced load governs"),
                     formula, sub, l.uniform(), Quantity.PRESSURE, ed.clause(minimum ? "snow.minimum" : "snow.sloped"));
-            rec.resultText("S.case", "Governing uniform snow case", minimum ? "minimum p_m" : "balanced");
+            rec.resultText("snow.case", "Governing uniform snow case", minimum ? "minimum p_m" : "balanced");
             if (l.minimumApplies())
                 rec.info("The balanced and minimum cases load the whole tributary area alike, so the larger pressure gives the"
                         + " larger of their effects; p_m is a separate case and is not combined with drifts.", ed.clause("snow.minimum"));
