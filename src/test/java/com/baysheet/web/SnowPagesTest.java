@@ -128,4 +128,24 @@ class SnowPagesTest {
         if (!anyRoof) assertThat(page).contains("no level is a roof");
         else assertThat(page).doesNotContain("no level is a roof");
     }
+
+    @Test
+    void aRoofLevelKeepsItsShapeSurfaceAndEaveToRidge() {
+        Project p = server.deck();
+        long v = server.version(p.id());
+        List<Map.Entry<String, String>> bad = List.of(entry("version", String.valueOf(v)), entry("name", "Canopy"), entry("elevation", "31"),
+                entry("roof", "on"), entry("roofSlope", "20"), entry("roofShape", "HIP_OR_GABLE"), entry("slippery", "on"), entry("eaveToRidge", "-3"));
+        HttpResponse<String> r = server.post("/projects/" + p.id() + "/levels", bad);
+        assertThat(r.statusCode()).isEqualTo(422);
+        assertThat(r.body()).contains("id=\"error-eaveToRidge\"");
+        assertThat(server.version(p.id())).isEqualTo(v);
+        List<Map.Entry<String, String>> good = new ArrayList<>(bad);
+        good.set(7, entry("eaveToRidge", "4.5"));
+        assertThat(server.post("/projects/" + p.id() + "/levels", good).statusCode()).isIn(302, 303);
+        var level = server.store.levels().findByProject(p.id()).stream().filter(l -> l.name().equals("Canopy")).findFirst().orElseThrow();
+        assertThat(level.info().surface()).isEqualTo(new com.baysheet.framing.model.RoofSurface(
+                com.baysheet.engine.snow.SnowRoof.Shape.HIP_OR_GABLE, true, 4.5));
+        String edit = server.get("/projects/" + p.id() + "/levels/" + level.id() + "/edit").body();
+        assertThat(edit).contains("value=\"4.5\"", "value=\"HIP_OR_GABLE\" selected");
+    }
 }

@@ -22,6 +22,7 @@ final class MemberSnow {
     static boolean record(CalcContext ctx, MemberInput in, LoadBook book, RecordBuilder rec) {
         SnowOnRoof on = in.snow();
         Edition ed = ctx.edition();
+        boolean computed = false;
         if (on != null && ctx.snow() != null && !in.strips().isEmpty()) {
             SnowLoads l = RoofSnow.calculate(ctx, ctx.snow(), on.roof(), rec);
             boolean minimum = l.minimumApplies() && l.minimum() > l.balanced();
@@ -35,12 +36,13 @@ final class MemberSnow {
                 rec.info("The balanced and minimum cases load the whole tributary area alike, so the larger pressure gives the"
                         + " larger of their effects; p_m is a separate case and is not combined with drifts.", ed.clause("snow.minimum"));
             book.snowOnStrips(s);
+            computed = true; // S is shown even where it is 0 (p_g = 0, or a steep slippery roof)
         }
         if (on != null && ctx.snow() != null && on.stepAbove() && on.roof().step() == null)
                 rec.caution("This roof is lower than another level of the building: drifts at the roof step ("
                         + ed.clause("snow.drift").label() + ") are not computed. Investigate the drift surcharge on members near the step.",
                         ed.clause("snow.drift"));
-        if (book.snow.isEmpty()) return false;
+        if (!computed && book.snow.isEmpty()) return false;
         rec.info("Snow load S is not reduced.", ed.clause("snow.sloped"));
         return true;
     }
