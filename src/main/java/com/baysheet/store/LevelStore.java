@@ -36,6 +36,7 @@ public final class LevelStore {
     public StoredLevel add(long projectId, long version, LevelInfo info) {
         return writes.change(projectId, version, c -> {
             requireUnique(c, projectId, info, -1);
+            SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO building_level (project_id, name, elevation, "
                     + "is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge) VALUES (?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
                 ps.setLong(1, projectId);
@@ -53,6 +54,7 @@ public final class LevelStore {
         writes.change(projectId, version, c -> {
             find(c, projectId, levelId);
             requireUnique(c, projectId, info, levelId);
+            SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
             try (PreparedStatement ps = c.prepareStatement(
                     "UPDATE building_level SET name = ?, elevation = ?, is_roof = ?, roof_slope = ?, roof_shape = ?, "
                     + "roof_slippery = ?, eave_to_ridge = ? WHERE id = ?")) {

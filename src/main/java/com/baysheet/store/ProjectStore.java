@@ -71,6 +71,7 @@ public final class ProjectStore {
             if (old.info().units() != info.units() && !LevelStore.findByProject(c, id).isEmpty())
                 throw new InputError("units", info.units(), "cannot change once the project has levels: "
                         + "its lengths and loads are stored in " + old.info().units());
+            for (StoredLevel l : LevelStore.findByProject(c, id)) SnowInput.checkRoof(info, l.info(), "groundSnow");
             touch(c, id, version);
             try (PreparedStatement ps = c.prepareStatement("UPDATE project SET job_number = ?, name = ?, address = ?, "
                     + "client = ?, edition = ?, unit_system = ?, partition_allowance = ?, reduce_partitions = ?, "

@@ -57,6 +57,23 @@ public final class SnowInput {
         return m;
     }
 
+    /**
+     * Works a roof level's snow out with the project's site, so that a W missing where rain-on-snow needs it is
+     * refused when the level or the project is saved rather than when the members are derived.
+     *
+     * @param field the field the refusal is shown beside: "eaveToRidge" on the level form, "groundSnow" on the project's
+     */
+    static void checkRoof(ProjectInfo p, LevelInfo level, String field) {
+        if (p.snow() == null || !level.roof()) return;
+        Edition ed = com.baysheet.engine.code.Editions.builtIn().get(p.edition());
+        try {
+            RoofSnow.calculate(CalcContext.of(p.units()).withEdition(ed), p.snow(), level.surface().roof(level.roofSlope()),
+                    RecordBuilder.numbersOnly("snow", ed.id(), p.units()));
+        } catch (InputError e) {
+            throw new InputError(field, e.value(), "roof level " + level.name() + ": " + e.getMessage());
+        }
+    }
+
     /** Works the site out on a flat roof: an edition without snow (ASCE 7-22) or an impossible table cell is refused now. */
     static void check(Edition edition, UnitSystem units, SnowSite site) {
         try {

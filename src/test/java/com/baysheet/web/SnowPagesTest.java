@@ -148,4 +148,20 @@ class SnowPagesTest {
         String edit = server.get("/projects/" + p.id() + "/levels/" + level.id() + "/edit").body();
         assertThat(edit).contains("value=\"4.5\"", "value=\"HIP_OR_GABLE\" selected");
     }
+
+    @Test
+    void aSlopedRoofNeedingWForRainOnSnowIsRefusedWhenSavedWithoutIt() {
+        // ASCE 7-16 7.10: p_g = 15 psf (0 < p_g ≤ 20) on a 6 in/ft roof (26.6°): rain-on-snow depends on W, so W is required
+        Project p = server.store.projects().create(new com.baysheet.store.ProjectInfo("25-420", "Rain Shed", "", "", "ASCE 7-16",
+                com.baysheet.engine.units.UnitSystem.US, false, false, false, null));
+        long v = server.version(p.id());
+        List<Map.Entry<String, String>> level = new ArrayList<>(List.of(entry("version", String.valueOf(v)), entry("name", "Roof"),
+                entry("elevation", "14"), entry("roof", "on"), entry("roofSlope", "6"), entry("roofShape", "MONOSLOPE"), entry("eaveToRidge", "")));
+        assertThat(server.post("/projects/" + p.id() + "/levels", level).statusCode()).isIn(302, 303);
+        HttpResponse<String> r = server.post("/projects/" + p.id() + "/settings",
+                settings(server.store.projects().find(p.id()), Map.of("groundSnow", "15")));
+        assertThat(r.statusCode()).isEqualTo(422);
+        assertThat(r.body()).contains("id=\"error-groundSnow\"", "eaveToRidge");
+        assertThat(server.store.projects().find(p.id()).info().snow()).isNull();
+    }
 }
