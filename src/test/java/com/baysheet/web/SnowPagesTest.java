@@ -105,6 +105,7 @@ class SnowPagesTest {
         assertThat(info.get("exposureFactor").asDouble()).isEqualTo(1.1);
         assertThat(info.get("thermalCondition").asText()).isEqualTo("UNHEATED");
         assertThat(info.has("snowTerrain")).isFalse();
+        assertThat(info.has("snow")).as("the engine site is not written as such").isFalse();
         HttpResponse<String> bad = server.json("POST", "/api/projects", "{\"jobNumber\": \"25-411\", \"name\": \"Snow Shed 2\", \"units\": \"US\","
                 + " \"groundSnow\": -1, \"snowTerrain\": \"C\", \"snowExposure\": \"FULLY\", \"thermalCondition\": \"HEATED\", \"riskCategory\": \"II\"}");
         assertThat(bad.statusCode()).isEqualTo(400);
