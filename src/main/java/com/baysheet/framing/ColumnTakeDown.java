@@ -97,8 +97,14 @@ final class ColumnTakeDown {
         double reducible = lf.map(LiveFactors::reducibleArea).orElse(0.0), influence = lf.map(LiveFactors::influenceArea).orElse(0.0);
         return new TakeDown.Row(p.level.name(), id, areaHere, cumArea, reducible, ctx.edition().kll(kind), influence, floors,
                 lf.map(LiveFactors::factor).orElse(1.0),
-                deadHere, selfWeight, r.value("D.P"), r.value("L0.P"), r.value("L.P"), r.value("Lr.P"),
+                deadHere, selfWeight, r.value("D.P"), r.value("L0.P"), r.value("L.P"), r.value("Lr.P"), snowOf(r),
                 r.value("LRFD.P"), combo(r, "LRFD.P"), r.value("ASD.P"), combo(r, "ASD.P"));
+    }
+
+    /** The column's unfactored S (0 where it carries no snow). */
+    private static double snowOf(MemberResult r) {
+        double s = r.value("S.P");
+        return Double.isNaN(s) ? 0 : s;
     }
 
     /** The floor (not roof) areas of one level, by occupancy. */

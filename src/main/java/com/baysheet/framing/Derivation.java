@@ -30,7 +30,8 @@ public final class Derivation {
         MemberCache cache = new MemberCache(b.context());
         for (int k : order) {
             Level l = b.levels().get(k);
-            LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid());
+            boolean below = l.elevation() < b.levels().get(order.get(0)).elevation();
+            LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid(), below);
             LevelFraming f = new LevelFraming(cache, plan, b.selfWeights(),
                     b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList()).derive();
             plans.add(plan);

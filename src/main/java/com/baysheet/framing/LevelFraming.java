@@ -3,7 +3,9 @@ package com.baysheet.framing;
 import com.baysheet.engine.code.MemberKind;
 import com.baysheet.engine.load.AreaStrip;
 import com.baysheet.engine.load.MemberInput;
+import com.baysheet.engine.load.SnowOnRoof;
 import com.baysheet.engine.load.Support;
+import com.baysheet.framing.model.Level;
 import com.baysheet.engine.member.EndShare;
 import com.baysheet.engine.member.MemberResult;
 import com.baysheet.framing.model.Bay;
@@ -124,7 +126,7 @@ final class LevelFraming {
                 List.of(), s.points, 0, roofSlope(), Double.NaN, plan.level.roof())
                 .withSelfWeight(girder ? weights.girder() : weights.gridBeam(), source(girder ? "girders" : "grid beams"), 0)
                 .withLineLoads(s.lineLoads);
-        MemberResult res = cache.calculate(in);
+        MemberResult res = cache.calculate(in.withSnow(snow()));
         PlanLine pl = s.alongX ? new PlanLine(plan.x(i), plan.y(j), plan.x(i + 1), plan.y(j))
                 : new PlanLine(plan.x(i), plan.y(j), plan.x(i), plan.y(j + 1));
         Map<String, Double> areas = new java.util.LinkedHashMap<>();
@@ -142,7 +144,13 @@ final class LevelFraming {
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(span), 1, strips, List.of(),
                 List.of(), 0, roofSlope(), Double.NaN, plan.level.roof())
                 .withSelfWeight(weights.infillBeam(), source("infill beams"), 0);
-        return cache.calculate(in);
+        return cache.calculate(in.withSnow(snow()));
+    }
+
+    /** A roof level's snow on its members' strips (the snow site itself is the project's, in the context). */
+    private SnowOnRoof snow() {
+        Level l = plan.level;
+        return l.roof() ? new SnowOnRoof(l.surface().roof(l.roofSlope()), plan.belowAnother) : null;
     }
 
     private String source(String role) { return weights.origin() + " for " + role; }

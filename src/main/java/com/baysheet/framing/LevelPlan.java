@@ -12,7 +12,13 @@ final class LevelPlan {
     final String id;
     private final Bay[][] cells;
 
-    LevelPlan(String id, Level level, Grid grid) {
+    /** Another level of the building is higher than this one (a roof here has a step up to it). */
+    final boolean belowAnother;
+
+    LevelPlan(String id, Level level, Grid grid) { this(id, level, grid, false); }
+
+    LevelPlan(String id, Level level, Grid grid, boolean belowAnother) {
+        this.belowAnother = belowAnother;
         this.id = id;
         this.level = level;
         this.grid = grid;

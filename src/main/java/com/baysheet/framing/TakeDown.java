@@ -53,9 +53,11 @@ public final class TakeDown {
      * @param factor         f of Eq. 4.7-1 with its limit, as it applies to ordinary floor live load
      * @param deadAtLevel    the dead load this level adds: its members' reactions and the self weight of the column below it
      * @param selfWeightAtLevel the self weight of the column below this level (part of deadAtLevel)
+ * @param snow           the roof snow load S at and above this level, unfactored and not reduced (only roof
+ *                       levels add to it; 0 without a snow site)
      */
     public record Row(String level, String member, double areaAtLevel, double cumulativeArea, double reducibleArea,
                       double kll, double influenceArea, int floorsSupported, double factor, double deadAtLevel, double selfWeightAtLevel, double dead,
-                      double liveUnreduced, double liveReduced, double roofLive, double lrfd, String lrfdCombination,
+                      double liveUnreduced, double liveReduced, double roofLive, double snow, double lrfd, String lrfdCombination,
                       double asd, String asdCombination) {}
 }

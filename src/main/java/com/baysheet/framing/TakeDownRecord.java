@@ -47,6 +47,10 @@ final class TakeDownRecord {
             if (w.roofLive() > 0)
                 rec.step("P_Lr" + at, lv + "roof live load", "Σ Lr A_i", "see the column record " + w.member(), w.roofLive(), Quantity.FORCE,
                         ed.clause("roof.reduction"));
+            if (w.snow() > 0)
+                rec.step("P_S" + at, lv + "snow load, not reduced" + (k > 0 && w.snow() > rows.get(k - 1).snow() ? " (this roof adds "
+                        + rec.show(w.snow() - rows.get(k - 1).snow(), Quantity.FORCE) + ")" : ""), "Σ S",
+                        "see the column record " + w.member(), w.snow(), Quantity.FORCE, ed.clause("snow.sloped"));
             rec.step("P_u" + at, lv + "factored axial load", r.step("P_u").formula(), r.step("P_u").substituted(), w.lrfd(), Quantity.FORCE,
                     ed.clause("combo.lrfd"));
             rec.step("P_a" + at, lv + "service axial load", r.step("P_a").formula(), r.step("P_a").substituted(), w.asd(), Quantity.FORCE,
@@ -56,6 +60,7 @@ final class TakeDownRecord {
         rec.result("D.P", "Dead load at the base", base.dead(), Quantity.FORCE)
            .result("L.P", "Floor live load at the base, reduced", base.liveReduced(), Quantity.FORCE)
            .result("Lr.P", "Roof live load at the base", base.roofLive(), Quantity.FORCE)
+           .result("S.P", "Snow load at the base, not reduced", base.snow(), Quantity.FORCE)
            .result("LRFD.P", "Factored axial load at the base (" + base.lrfdCombination() + ")", base.lrfd(), Quantity.FORCE)
            .result("ASD.P", "Service axial load at the base (" + base.asdCombination() + ")", base.asd(), Quantity.FORCE)
            .governs("LRFD.P").governs("ASD.P");

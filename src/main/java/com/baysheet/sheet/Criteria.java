@@ -40,14 +40,15 @@ final class Criteria {
                     String.join(", ", d), reduction(ctx, o)));
         }
         DesignOptions opt = ctx.options();
-        List<String> options = List.of(
+        List<String> options = new ArrayList<>(List.of(
                 "Partition allowance: " + (!opt.partitionAllowance() ? "not included"
                         : opt.reducePartitions() ? "included, reduced with the live load" : "included, not reduced"),
                 "Live load reduction: by occupancy, as listed below (" + ctx.edition().clause("reduction.kll").label() + " for K_LL)",
                 "Load combinations: strength (LRFD) and allowable stress (ASD), gravity combinations only",
                 "Minimum reactions of overhanging beams: " + (opt.upliftReducedDead()
                         ? "the code combinations, and also 0.9D + 1.6L (firm practice, not a " + ctx.edition().clause("combo.lrfd").ref() + " combination)"
-                        : "the code combinations (" + ctx.edition().clause("combo.lrfd").ref() + ", " + ctx.edition().clause("combo.asd").ref() + ")"));
+                        : "the code combinations (" + ctx.edition().clause("combo.lrfd").ref() + ", " + ctx.edition().clause("combo.asd").ref() + ")")));
+        options.add(SnowCriteria.line(ctx));
         return new DesignCriteria(ctx.edition().id(), ctx.system() == com.baysheet.engine.units.UnitSystem.US
                 ? "US customary (ft, psf, plf, kip, kip·ft)" : "SI (m, kPa, kN/m, kN, kN·m)", rows, options);
     }

@@ -14,7 +14,7 @@ import java.util.Map;
 /**
  * The results as an engineer tabulates them: one row per action (reactions, shear, moments, axial load),
  * one column per load case (dead, live unreduced and reduced, concentrated, design live, roof live, roof
- * concentrated, design roof live, factored, service). A result key reads "case.action" ("D.RA", "LRFD.M+",
+ * concentrated, design roof live, snow, factored, service). A result key reads "case.action" ("D.RA", "LRFD.M+",
  * "LRFD.RA,min" for the least reaction of an overhanging beam); the matrix only arranges the
  * record's shown values. Keys of another form are returned for a plain list.
  */
@@ -33,6 +33,7 @@ final class ResultMatrix {
         CASES.put("Lrc", "Roof point Lrc");
         CASES.put("Lrgov", "Roof live governing");
         CASES.put("Lrdes", "Design roof live");
+        CASES.put("S", "Snow S (not reduced)");
         CASES.put("LRFD", "Factored (LRFD)");
         CASES.put("ASD", "Service (ASD)");
         ACTIONS.put("RA", "Left reaction R_A");

@@ -23,7 +23,7 @@ final class TakeDownTables {
         String a = Quantity.AREA.unit(sys).symbol(), f = Quantity.FORCE.unit(sys).symbol();
         List<String> head = List.of("Level", "Column", "Area at this level (" + a + ")", "A_T supported, cumulative (" + a + ")",
                 "Reducible A_T, cumulative (" + a + ")", "K_LL at this level", "Influence area Σ K_LL,i A_T,r,i (" + a + ")",
-                "Floors", "f", "D at level (" + f + ")", "Column self weight (" + f + ")", "ΣD (" + f + ")", "L0 (" + f + ")", "L (" + f + ")", "Lr (" + f + ")",
+                "Floors", "f", "D at level (" + f + ")", "Column self weight (" + f + ")", "ΣD (" + f + ")", "L0 (" + f + ")", "L (" + f + ")", "Lr (" + f + ")", "S (" + f + ")",
                 "LRFD (" + f + ")", "ASD (" + f + ")");
         List<List<String>> rows = new ArrayList<>();
         for (TakeDown.Row r : t.rows()) {
@@ -32,7 +32,7 @@ final class TakeDownTables {
                     n(r.reducibleArea(), Quantity.AREA, sys), Display.sig3(r.kll()), n(r.influenceArea(), Quantity.AREA, sys), Integer.toString(r.floorsSupported()),
                     Display.sig3(r.factor()), n(r.deadAtLevel(), Quantity.FORCE, sys),
                     n(r.selfWeightAtLevel(), Quantity.FORCE, sys), n(r.dead(), Quantity.FORCE, sys),
-                    n(r.liveUnreduced(), Quantity.FORCE, sys), n(r.liveReduced(), Quantity.FORCE, sys), n(r.roofLive(), Quantity.FORCE, sys),
+                    n(r.liveUnreduced(), Quantity.FORCE, sys), n(r.liveReduced(), Quantity.FORCE, sys), n(r.roofLive(), Quantity.FORCE, sys), n(r.snow(), Quantity.FORCE, sys),
                     n(r.lrfd(), Quantity.FORCE, sys) + "\n" + r.lrfdCombination(), n(r.asd(), Quantity.FORCE, sys) + "\n" + r.asdCombination()));
         }
         CalcRecord rec = t.record();

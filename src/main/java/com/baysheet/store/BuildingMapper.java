@@ -28,7 +28,7 @@ final class BuildingMapper {
     static Model load(Connection c, long projectId) throws SQLException {
         Project p = ProjectStore.find(c, projectId);
         CalcContext ctx = new CalcContext(Editions.builtIn().get(p.info().edition()), p.info().units(),
-                OccupancyStore.catalogue(c), p.info().options());
+                OccupancyStore.catalogue(c), p.info().options(), p.info().snow());
         List<StoredLevel> stored = LevelStore.findByProject(c, projectId);
         List<Level> levels = new ArrayList<>();
         List<String> unframed = new ArrayList<>();
@@ -56,7 +56,7 @@ final class BuildingMapper {
     }
 
     private static Level level(LevelInfo l, List<Bay> bays) {
-        return l.roof() ? Level.roof(l.name(), l.elevation(), l.roofSlope(), bays)
+        return l.roof() ? Level.roof(l.name(), l.elevation(), l.roofSlope(), bays).withSurface(l.surface())
                 : Level.floor(l.name(), l.elevation(), bays);
     }
 }

@@ -2,12 +2,19 @@ package com.baysheet.store;
 
 import com.baysheet.engine.Check;
 import com.baysheet.engine.InputError;
+import com.baysheet.framing.model.RoofSurface;
 
 /**
  * A level as entered: name, elevation (ft or m, may be below grade), whether it is a roof, and the roof
- * slope for Lr (in/ft or percent; NaN for a floor).
+ * slope for Lr (in/ft or percent; NaN for a floor), and a roof's shape, surface and W for its snow load (the
+ * defaults on a floor).
  */
-public record LevelInfo(String name, double elevation, boolean roof, double roofSlope) {
+public record LevelInfo(String name, double elevation, boolean roof, double roofSlope, RoofSurface surface) {
+    /** Monoslope, not slippery, no W. */
+    public LevelInfo(String name, double elevation, boolean roof, double roofSlope) {
+        this(name, elevation, roof, roofSlope, RoofSurface.DEFAULT);
+    }
+
     /** A slope steeper than this (in/ft or %) is a typo rather than a roof; 4.8.2 stops mattering well before. */
     public static final double MAX_SLOPE = 100;
 
@@ -17,5 +24,6 @@ public record LevelInfo(String name, double elevation, boolean roof, double roof
         Check.finite("elevation", elevation);
         if (roof) Check.within("roofSlope", roofSlope, 0, MAX_SLOPE);
         else roofSlope = Double.NaN;
+        if (surface == null || !roof) surface = RoofSurface.DEFAULT;
     }
 }

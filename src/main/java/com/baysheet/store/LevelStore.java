@@ -2,6 +2,9 @@ package com.baysheet.store;
 
 import com.baysheet.engine.InputError;
 
+import com.baysheet.engine.snow.SnowRoof;
+import com.baysheet.framing.model.RoofSurface;
+
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
@@ -33,8 +36,9 @@ public final class LevelStore {
     public StoredLevel add(long projectId, long version, LevelInfo info) {
         return writes.change(projectId, version, c -> {
             requireUnique(c, projectId, info, -1);
+            SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO building_level (project_id, name, elevation, "
-                    + "is_roof, roof_slope) VALUES (?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
+                    + "is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge) VALUES (?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
                 ps.setLong(1, projectId);
                 bind(ps, 2, info);
                 ps.executeUpdate();
@@ -50,10 +54,12 @@ public final class LevelStore {
         writes.change(projectId, version, c -> {
             find(c, projectId, levelId);
             requireUnique(c, projectId, info, levelId);
+            SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
             try (PreparedStatement ps = c.prepareStatement(
-                    "UPDATE building_level SET name = ?, elevation = ?, is_roof = ?, roof_slope = ? WHERE id = ?")) {
+                    "UPDATE building_level SET name = ?, elevation = ?, is_roof = ?, roof_slope = ?, roof_shape = ?, "
+                    + "roof_slippery = ?, eave_to_ridge = ? WHERE id = ?")) {
                 bind(ps, 1, info);
-                ps.setLong(5, levelId);
+                ps.setLong(8, levelId);
                 return ps.executeUpdate();
             }
         });
@@ -71,7 +77,7 @@ public final class LevelStore {
     }
 
     static List<StoredLevel> findByProject(Connection c, long projectId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT id, project_id, name, elevation, is_roof, roof_slope "
+        try (PreparedStatement ps = c.prepareStatement("SELECT id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge "
                 + "FROM building_level WHERE project_id = ? ORDER BY elevation, id")) {
             ps.setLong(1, projectId);
             List<StoredLevel> out = new ArrayList<>();
@@ -83,7 +89,7 @@ public final class LevelStore {
     }
 
     static StoredLevel find(Connection c, long projectId, long levelId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT id, project_id, name, elevation, is_roof, roof_slope "
+        try (PreparedStatement ps = c.prepareStatement("SELECT id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge "
                 + "FROM building_level WHERE id = ? AND project_id = ?")) {
             ps.setLong(1, levelId);
             ps.setLong(2, projectId);
@@ -110,10 +116,16 @@ public final class LevelStore {
         ps.setDouble(i + 1, info.elevation());
         ps.setBoolean(i + 2, info.roof());
         Sql.setDouble(ps, i + 3, info.roofSlope());
+        RoofSurface r = info.surface();
+        ps.setString(i + 4, r.shape() == SnowRoof.Shape.MONOSLOPE ? null : r.shape().name());
+        ps.setBoolean(i + 5, r.slippery());
+        Sql.setDouble(ps, i + 6, r.eaveToRidge());
     }
 
     private static StoredLevel read(ResultSet rs) throws SQLException {
         return new StoredLevel(rs.getLong("id"), rs.getLong("project_id"), new LevelInfo(rs.getString("name"),
-                rs.getDouble("elevation"), rs.getBoolean("is_roof"), Sql.getDouble(rs, "roof_slope")));
+                rs.getDouble("elevation"), rs.getBoolean("is_roof"), Sql.getDouble(rs, "roof_slope"),
+                new RoofSurface(rs.getString("roof_shape") == null ? SnowRoof.Shape.MONOSLOPE : SnowRoof.Shape.valueOf(rs.getString("roof_shape")),
+                        rs.getBoolean("roof_slippery"), Sql.getDouble(rs, "eave_to_ridge"))));
     }
 }

@@ -9,7 +9,10 @@ import com.baysheet.framing.model.Framing;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
 import com.baysheet.framing.model.Limits;
+import com.baysheet.framing.model.RoofSurface;
 import com.baysheet.framing.model.Side;
+import com.baysheet.engine.snow.Choices;
+import com.baysheet.engine.snow.SnowRoof;
 import com.fasterxml.jackson.databind.JsonNode;
 
 import java.util.ArrayList;
@@ -32,8 +35,17 @@ public final class ModelJson {
     public static ProjectInfo project(JsonNode n, String edition) {
         return new ProjectInfo(text(n, "jobNumber"), text(n, "name"), optText(n, "address"), optText(n, "client"),
                 n.hasNonNull("edition") ? text(n, "edition") : edition, UnitSystem.parse("units", text(n, "units")),
-                flag(n, "partitionAllowance"), flag(n, "reducePartitions"), flag(n, "upliftReducedDead"));
+                flag(n, "partitionAllowance"), flag(n, "reducePartitions"), flag(n, "upliftReducedDead"), snow(n));
     }
+
+    /** The optional snow fields of a project (see {@link SnowInput}); no groundSnow, no snow. */
+    static com.baysheet.engine.snow.SnowSite snow(JsonNode n) {
+        if (!n.hasNonNull("groundSnow")) return null;
+        return SnowInput.of(number(n, "groundSnow"), optText(n, "snowTerrain"), optText(n, "snowExposure"), optNumber(n, "exposureFactor"),
+                optText(n, "thermalCondition"), optNumber(n, "thermalFactor"), optText(n, "riskCategory"));
+    }
+
+    private static double optNumber(JsonNode n, String field) { return n.hasNonNull(field) ? number(n, field) : Double.NaN; }
 
     public static Grid grid(JsonNode n) {
         return new Grid(axis(n, "x"), axis(n, "y"));
@@ -41,7 +53,13 @@ public final class ModelJson {
 
     public static LevelInfo level(JsonNode n) {
         boolean roof = flag(n, "roof");
-        return new LevelInfo(text(n, "name"), number(n, "elevation"), roof, roof ? number(n, "roofSlope") : Double.NaN);
+        return new LevelInfo(text(n, "name"), number(n, "elevation"), roof, roof ? number(n, "roofSlope") : Double.NaN, surface(n));
+    }
+
+    /** A roof's snow surface: {@code roofShape} MONOSLOPE (default) or HIP_OR_GABLE, {@code slippery}, {@code eaveToRidge}. */
+    static RoofSurface surface(JsonNode n) {
+        var shape = n.hasNonNull("roofShape") ? Choices.parse(SnowRoof.Shape.class, "roofShape", text(n, "roofShape")) : SnowRoof.Shape.MONOSLOPE;
+        return new RoofSurface(shape, flag(n, "slippery"), optNumber(n, "eaveToRidge"));
     }
 
     /**

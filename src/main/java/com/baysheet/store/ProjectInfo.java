@@ -1,26 +1,39 @@
 package com.baysheet.store;
 
 import com.baysheet.engine.Check;
+import com.fasterxml.jackson.annotation.JsonAnyGetter;
+import com.fasterxml.jackson.annotation.JsonIgnore;
 import com.baysheet.engine.InputError;
+import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.code.Editions;
+import com.baysheet.engine.snow.SnowSite;
 import com.baysheet.engine.load.DesignOptions;
 import com.baysheet.engine.units.UnitSystem;
 
 /**
  * What a project is: the job and its people, the code edition, the unit system its numbers are in (fixed
- * once levels exist, since every stored length and load is in that system) and the design options.
+ * once levels exist, since every stored length and load is in that system), the design options and the snow site
+ * (null: no ground snow load given, so no member carries snow).
  */
 public record ProjectInfo(String jobNumber, String name, String address, String client, String edition,
                           UnitSystem units, boolean partitionAllowance, boolean reducePartitions,
-                          boolean upliftReducedDead) {
+                          boolean upliftReducedDead, @JsonIgnore SnowSite snow) {
+    /** No snow site. */
+    public ProjectInfo(String jobNumber, String name, String address, String client, String edition,
+                       UnitSystem units, boolean partitionAllowance, boolean reducePartitions, boolean upliftReducedDead) {
+        this(jobNumber, name, address, client, edition, units, partitionAllowance, reducePartitions, upliftReducedDead, null);
+    }
+
     public ProjectInfo {
         jobNumber = limited("jobNumber", Check.text("jobNumber", jobNumber).strip(), 40);
         name = limited("name", Check.text("name", name).strip(), 200);
         address = limited("address", address == null ? "" : address.strip(), 400);
         client = limited("client", client == null ? "" : client.strip(), 200);
         Check.text("edition", edition);
-        Editions.builtIn().get(edition);
+        Edition ed = Editions.builtIn().get(edition);
         Check.present("units", units);
+        // the engine has no roof snow for some editions (ASCE 7-22): refused here, beside the ground snow load
+        if (snow != null) SnowInput.check(ed, units, snow);
     }
 
     /** A project with the uplift option off (0.9D + 1.6L not taken for minimum reactions). */
@@ -28,6 +41,10 @@ public record ProjectInfo(String jobNumber, String name, String address, String 
                        UnitSystem units, boolean partitionAllowance, boolean reducePartitions) {
         this(jobNumber, name, address, client, edition, units, partitionAllowance, reducePartitions, false);
     }
+
+    /** The snow inputs in the API's flat shape (the fields it reads, {@link SnowInput}); none without a snow site. */
+    @JsonAnyGetter
+    public java.util.Map<String, Object> snowFields() { return SnowInput.fields(snow); }
 
     public DesignOptions options() { return new DesignOptions(partitionAllowance, reducePartitions, upliftReducedDead); }
 

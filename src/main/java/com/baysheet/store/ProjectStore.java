@@ -17,7 +17,7 @@ import java.util.List;
 /** Projects: listing, creating, settings, and the version that guards every change to a project. */
 public final class ProjectStore {
     private static final String COLUMNS = "id, version, job_number, name, address, client, edition, unit_system, "
-            + "partition_allowance, reduce_partitions, uplift_reduced_dead";
+            + "partition_allowance, reduce_partitions, uplift_reduced_dead, " + SnowColumns.NAMES;
 
     private final Sql sql;
 
@@ -47,8 +47,8 @@ public final class ProjectStore {
             requireFreeJobNumber(c, info.jobNumber(), -1);
             long id;
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO project (version, job_number, name, address, "
-                    + "client, edition, unit_system, partition_allowance, reduce_partitions, uplift_reduced_dead, created_at, "
-                    + "updated_at) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
+                    + "client, edition, unit_system, partition_allowance, reduce_partitions, uplift_reduced_dead, "
+                    + SnowColumns.NAMES + ", created_at, updated_at) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
                 int i = bind(ps, info);
                 ps.setObject(i++, OffsetDateTime.now());
                 ps.setObject(i, OffsetDateTime.now());
@@ -71,10 +71,11 @@ public final class ProjectStore {
             if (old.info().units() != info.units() && !LevelStore.findByProject(c, id).isEmpty())
                 throw new InputError("units", info.units(), "cannot change once the project has levels: "
                         + "its lengths and loads are stored in " + old.info().units());
+            for (StoredLevel l : LevelStore.findByProject(c, id)) SnowInput.checkRoof(info, l.info(), "groundSnow");
             touch(c, id, version);
             try (PreparedStatement ps = c.prepareStatement("UPDATE project SET job_number = ?, name = ?, address = ?, "
                     + "client = ?, edition = ?, unit_system = ?, partition_allowance = ?, reduce_partitions = ?, "
-                    + "uplift_reduced_dead = ? WHERE id = ?")) {
+                    + "uplift_reduced_dead = ?, " + SnowColumns.SETS + " WHERE id = ?")) {
                 int i = bind(ps, info);
                 ps.setLong(i, id);
                 ps.executeUpdate();
@@ -153,13 +154,14 @@ public final class ProjectStore {
         ps.setBoolean(7, p.partitionAllowance());
         ps.setBoolean(8, p.reducePartitions());
         ps.setBoolean(9, p.upliftReducedDead());
-        return 10;
+        return SnowColumns.bind(ps, 10, p.snow());
     }
 
     private static Project read(ResultSet rs) throws SQLException {
         return new Project(rs.getLong("id"), rs.getLong("version"), new ProjectInfo(rs.getString("job_number"),
                 rs.getString("name"), rs.getString("address"), rs.getString("client"), rs.getString("edition"),
                 UnitSystem.valueOf(rs.getString("unit_system")), rs.getBoolean("partition_allowance"),
-                rs.getBoolean("reduce_partitions"), rs.getBoolean("uplift_reduced_dead")));
+                rs.getBoolean("reduce_partitions"), rs.getBoolean("uplift_reduced_dead"),
+                SnowColumns.read(rs)));
     }
 }

@@ -15,10 +15,15 @@ import java.util.TreeMap;
 final class ApiViews {
     private ApiViews() {}
 
-    record LevelJson(long id, String name, double elevation, boolean roof, Double roofSlope) {
+    /** roofShape, slippery and eaveToRidge (null where not given) only on a roof. */
+    record LevelJson(long id, String name, double elevation, boolean roof, Double roofSlope, String roofShape, Boolean slippery,
+                     Double eaveToRidge) {
         static LevelJson of(StoredLevel l) {
-            return new LevelJson(l.id(), l.name(), l.info().elevation(), l.info().roof(),
-                    l.info().roof() ? l.info().roofSlope() : null);
+            var i = l.info();
+            var s = i.surface();
+            return new LevelJson(l.id(), l.name(), i.elevation(), i.roof(), i.roof() ? i.roofSlope() : null,
+                    i.roof() ? s.shape().name() : null, i.roof() ? s.slippery() : null,
+                    i.roof() && !Double.isNaN(s.eaveToRidge()) ? s.eaveToRidge() : null);
         }
     }
 

@@ -1,6 +1,9 @@
 package com.baysheet.web;
 
+import com.baysheet.engine.snow.Choices;
+import com.baysheet.engine.snow.SnowRoof;
 import com.baysheet.engine.units.Display;
+import com.baysheet.framing.model.RoofSurface;
 import com.baysheet.store.LevelInfo;
 import com.baysheet.store.StoredLevel;
 import com.baysheet.engine.units.UnitSystem;
@@ -9,7 +12,10 @@ import com.baysheet.web.entry.LengthField;
 import java.util.HashMap;
 import java.util.Map;
 
-/** A level as a form: name, elevation, roof and roof slope (required for a roof, ignored for a floor). */
+/**
+ * A level as a form: name, elevation, roof and roof slope (required for a roof, ignored for a floor), and for a roof its
+ * snow surface (shape, slippery, eave-to-ridge W).
+ */
 final class LevelForm {
     private LevelForm() {}
 
@@ -19,6 +25,10 @@ final class LevelForm {
         if (l.info().roof()) {
             v.put("roof", "on");
             v.put("roofSlope", Display.plain(l.info().roofSlope()));
+            RoofSurface r = l.info().surface();
+            v.put("roofShape", r.shape().name());
+            if (r.slippery()) v.put("slippery", "on");
+            if (!Double.isNaN(r.eaveToRidge())) v.put("eaveToRidge", Display.plain(r.eaveToRidge()));
         }
         return v;
     }
@@ -32,10 +42,17 @@ final class LevelForm {
         double elevation = f.length("elevation", LengthField.elevation("Elevation"), units);
         double slope = roof ? f.slope("roofSlope", "Roof slope", units) : Double.NaN;
         if (roof && !Double.isNaN(slope)) f.check("roofSlope", () -> new LevelInfo("slope", 0, true, slope));
-        return new Values(name, elevation, roof, slope);
+        double w = roof ? f.optionalLength("eaveToRidge", LengthField.span("Eave to ridge"), units) : Double.NaN;
+        String shape = f.text("roofShape");
+        return new Values(name, elevation, roof, slope, shape.isEmpty() ? "MONOSLOPE" : shape, f.checked("slippery"), w);
     }
 
-    record Values(String name, double elevation, boolean roof, double roofSlope) {
-        LevelInfo info() { return new LevelInfo(name, elevation, roof, roofSlope); }
+    /** The roof's snow surface: shape (default monoslope), slippery (default not), W (blank: not given). */
+    record Values(String name, double elevation, boolean roof, double roofSlope, String roofShape, boolean slippery, double eaveToRidge) {
+        LevelInfo info() {
+            RoofSurface s = roof ? new RoofSurface(Choices.parse(SnowRoof.Shape.class, "roofShape", roofShape), slippery, eaveToRidge)
+                    : RoofSurface.DEFAULT;
+            return new LevelInfo(name, elevation, roof, roofSlope, s);
+        }
     }
 }

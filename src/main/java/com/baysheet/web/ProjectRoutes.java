@@ -4,6 +4,9 @@ import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.store.Project;
 import com.baysheet.store.ProjectInfo;
+import com.baysheet.store.SnowInput;
+import com.baysheet.engine.snow.SnowSite;
+import com.baysheet.engine.units.Display;
 import com.baysheet.store.Store;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
@@ -47,7 +50,8 @@ final class ProjectRoutes {
     void show(Context ctx) {
         var computed = store.results().of(Ids.project(ctx));
         ctx.render("projects/show", Map.of("project", computed.project(), "model", computed.model(),
-                "derived", computed.derived(), "units", UnitLabels.of(computed.project().info().units())));
+                "derived", computed.derived(), "units", UnitLabels.of(computed.project().info().units()),
+                "noRoof", computed.model().levels().stream().noneMatch(l -> l.info().roof())));
     }
 
     void settingsForm(Context ctx) {
@@ -69,6 +73,10 @@ final class ProjectRoutes {
         m.put("form", form);
         m.put("editions", Editions.builtIn().ids());
         m.put("unitSystems", UnitSystem.values());
+        m.put("snowTerrains", com.baysheet.engine.snow.Exposure.Terrain.values());
+        m.put("snowExposures", com.baysheet.engine.snow.Exposure.Shelter.values());
+        m.put("thermalConditions", com.baysheet.engine.snow.Thermal.Condition.values());
+        m.put("riskCategories", com.baysheet.engine.snow.Importance.RiskCategory.values());
         if (p != null) m.put("project", p);
         ctx.render(template, m);
     }
@@ -77,7 +85,16 @@ final class ProjectRoutes {
         UnitSystem units = UnitSystem.parse("units", f.text("units"));
         return new ProjectInfo(f.text("jobNumber"), f.text("name"), f.text("address"), f.text("client"),
                 f.text("edition"), units, f.checked("partitionAllowance"), f.checked("reducePartitions"),
-                f.checked("upliftReducedDead"));
+                f.checked("upliftReducedDead"), snow(f));
+    }
+
+    /** The snow fields (all ignored where groundSnow is blank: no snow); numbers read with the form's own parsing. */
+    private static SnowSite snow(Form f) {
+        double pg = f.optionalNumber("groundSnow"), ce = f.optionalNumber("exposureFactor"), ct = f.optionalNumber("thermalFactor");
+        // a number that did not parse is already on the form: refuse the whole save rather than store no snow
+        for (String field : new String[] {"groundSnow", "exposureFactor", "thermalFactor"})
+            if (f.hasError(field)) throw new com.baysheet.engine.InputError(field, f.text(field), f.error(field));
+        return SnowInput.of(pg, f.text("snowTerrain"), f.text("snowExposure"), ce, f.text("thermalCondition"), ct, f.text("riskCategory"));
     }
 
     private static Map<String, String> values(Project p) {
@@ -88,6 +105,7 @@ final class ProjectRoutes {
         if (i.partitionAllowance()) v.put("partitionAllowance", "on");
         if (i.reducePartitions()) v.put("reducePartitions", "on");
         if (i.upliftReducedDead()) v.put("upliftReducedDead", "on");
+        SnowInput.fields(i.snow()).forEach((k, x) -> v.put(k, x instanceof Double d ? Display.plain(d) : String.valueOf(x)));
         return v;
     }
 }

@@ -23,12 +23,14 @@ import java.util.List;
  * @param selfWeightSource where the self weight comes from, printed beside it ("firm default for girders"); empty: not stated
  * @param columnHeight    columns only: the length of column whose self weight this member adds, ft or m; 0 for beams
  * @param lineLoads       beams only: uniform line loads along part of the span (cladding, walls), not areas
+ * @param snow            the roof whose snow load the member's strips carry (with the project's snow site of the
+ *                        context), or null: no snow on the strips (snow in point loads is carried either way)
  */
 public record MemberInput(String subject, MemberKind kind, Support support, int floorsSupported,
                           List<AreaStrip> strips, List<AreaLoad> areas, List<PointLoad> pointLoads,
                           double selfWeight, double roofSlope, double stiffness, boolean onRoof,
                           List<SupportedFloor> floors, String selfWeightSource, double columnHeight,
-                          List<LineLoad> lineLoads) {
+                          List<LineLoad> lineLoads, SnowOnRoof snow) {
     public MemberInput {
         Check.text("subject", subject);
         Check.present("kind", kind);
@@ -76,12 +78,29 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
         }
     }
 
-    /** No self weight source stated, no column height, no line loads. */
+    /** No self weight source stated, no column height, no line loads, no snow on the strips. */
     public MemberInput(String subject, MemberKind kind, Support support, int floorsSupported, List<AreaStrip> strips,
                        List<AreaLoad> areas, List<PointLoad> pointLoads, double selfWeight, double roofSlope,
                        double stiffness, boolean onRoof, List<SupportedFloor> floors) {
         this(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors,
-                "", 0, List.of());
+                "", 0, List.of(), null);
+    }
+
+    /** No snow on the strips. */
+    public MemberInput(String subject, MemberKind kind, Support support, int floorsSupported, List<AreaStrip> strips,
+                       List<AreaLoad> areas, List<PointLoad> pointLoads, double selfWeight, double roofSlope,
+                       double stiffness, boolean onRoof, List<SupportedFloor> floors, String selfWeightSource,
+                       double columnHeight, List<LineLoad> lineLoads) {
+        this(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors,
+                selfWeightSource, columnHeight, lineLoads, null);
+    }
+
+    /** No self weight source stated, no column height, no line loads. */
+    public MemberInput(String subject, MemberKind kind, Support support, int floorsSupported, List<AreaStrip> strips,
+                       List<AreaLoad> areas, List<PointLoad> pointLoads, double selfWeight, double roofSlope,
+                       double stiffness, boolean onRoof, List<SupportedFloor> floors, SnowOnRoof snow) {
+        this(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors,
+                "", 0, List.of(), snow);
     }
 
     /** One K_LL throughout: the member's own. */
@@ -103,32 +122,37 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
 
     public MemberInput withSubject(String s) {
         return new MemberInput(s, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors,
-                selfWeightSource, columnHeight, lineLoads);
+                selfWeightSource, columnHeight, lineLoads, snow);
     }
 
     public MemberInput withRoofSlope(double slope) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, slope, stiffness, onRoof, floors,
-                selfWeightSource, columnHeight, lineLoads);
+                selfWeightSource, columnHeight, lineLoads, snow);
     }
 
     public MemberInput withFloors(List<SupportedFloor> f) {
         return new MemberInput(subject, kind, support, f.isEmpty() ? floorsSupported : f.size(), strips, areas, pointLoads,
-                selfWeight, roofSlope, stiffness, onRoof, f, selfWeightSource, columnHeight, lineLoads);
+                selfWeight, roofSlope, stiffness, onRoof, f, selfWeightSource, columnHeight, lineLoads, snow);
     }
 
     /** The member's own weight per length and where that figure comes from; for a column, over {@code height}. */
     public MemberInput withSelfWeight(double perLength, String source, double height) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, perLength, roofSlope, stiffness,
-                onRoof, floors, source, height, lineLoads);
+                onRoof, floors, source, height, lineLoads, snow);
     }
 
     public MemberInput withLineLoads(List<LineLoad> loads) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness,
-                onRoof, floors, selfWeightSource, columnHeight, loads);
+                onRoof, floors, selfWeightSource, columnHeight, loads, snow);
+    }
+
+    public MemberInput withSnow(SnowOnRoof s) {
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness,
+                onRoof, floors, selfWeightSource, columnHeight, lineLoads, s);
     }
 
     public MemberInput withPointLoads(List<PointLoad> loads) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, loads, selfWeight, roofSlope, stiffness, onRoof, floors,
-                selfWeightSource, columnHeight, lineLoads);
+                selfWeightSource, columnHeight, lineLoads, snow);
     }
 }

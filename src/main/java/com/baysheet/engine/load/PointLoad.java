@@ -10,14 +10,19 @@ import java.util.List;
  * receiving member's own A_T.
  *
  * @param dead lb or kN
+ * @param snow the roof snow load S it carries, lb or kN, unfactored and never reduced (0 for none)
  */
-public record PointLoad(double x, double dead, List<LiveShare> live, List<AreaShare> areas) {
+public record PointLoad(double x, double dead, List<LiveShare> live, List<AreaShare> areas, double snow) {
     public PointLoad {
         Check.nonNegative("x", x);
         Check.nonNegative("dead", dead);
         live = List.copyOf(live);
         areas = List.copyOf(areas);
+        Check.nonNegative("snow", snow);
     }
+
+    /** No snow. */
+    public PointLoad(double x, double dead, List<LiveShare> live, List<AreaShare> areas) { this(x, dead, live, areas, 0); }
 
     public double liveTotal() {
         double s = 0;

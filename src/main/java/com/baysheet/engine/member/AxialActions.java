@@ -12,7 +12,7 @@ final class AxialActions {
     private AxialActions() {}
 
     static void record(CalcContext ctx, MemberInput in, LoadBook book, BeamLoads floor0, BeamLoads floor,
-                       BeamLoads roof0, BeamLoads roof, boolean halfL, RecordBuilder rec) {
+                       BeamLoads roof0, BeamLoads roof, boolean halfL, boolean snow, RecordBuilder rec) {
         var ed = ctx.edition();
         double d = rec.step("P_D", "Axial dead load", "P_D = Σ D", "sum of dead loads", book.dead.total(), Quantity.FORCE, com.baysheet.engine.record.Clause.NONE);
         double l0 = floor0.total(), l = floor.total();
@@ -36,8 +36,10 @@ final class AxialActions {
             }
         }
         double lrdes = roofConcentrated(ctx, book, roof0.total(), lr, rec);
-        var lrfd = LoadCombinations.govern(true, "P_u", "axial load", d, ldes, lrdes, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
-        var asd = LoadCombinations.govern(false, "P_a", "axial load", d, ldes, lrdes, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
+        double s = snow ? rec.step("P_S", "Axial snow load, not reduced", "P_S = Σ S", "sum of the roofs' snow loads carried",
+                book.snow.total(), Quantity.FORCE, ed.clause("snow.sloped")) : Double.NaN;
+        var lrfd = LoadCombinations.govern(true, "P_u", "axial load", d, ldes, lrdes, s, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
+        var asd = LoadCombinations.govern(false, "P_a", "axial load", d, ldes, lrdes, s, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
         if (halfL && lrfd.combination().halfL()) rec.info("0.5 L used in " + lrfd.combination().name() + ".", ed.clause("combo.halfL"));
 
         rec.result("D.P", "Dead load P_D", d, Quantity.FORCE)
@@ -47,9 +49,10 @@ final class AxialActions {
            .result("Ldes.P", "Design live load", ldes, Quantity.FORCE)
            .result("Lr0.P", "Roof live load, unreduced", roof0.total(), Quantity.FORCE)
            .result("Lr.P", "Roof live load Lr", lr, Quantity.FORCE)
-           .result("LRFD.P", "Factored axial load P_u (" + lrfd.combination().name() + ")", lrfd.value(), Quantity.FORCE)
-           .result("ASD.P", "Service axial load P_a (" + asd.combination().name() + ")", asd.value(), Quantity.FORCE)
+           .result("LRFD.P", "Factored axial load P_u (" + lrfd.label() + ")", lrfd.value(), Quantity.FORCE)
+           .result("ASD.P", "Service axial load P_a (" + asd.label() + ")", asd.value(), Quantity.FORCE)
            .governs("LRFD.P").governs("ASD.P");
+        if (snow) rec.result("S.P", "Snow load S, not reduced", s, Quantity.FORCE);
     }
 
     /**

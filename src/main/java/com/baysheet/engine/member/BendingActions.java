@@ -15,7 +15,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Reactions, shears, moments and deflections of a beam or girder for D, L and Lr, the concentrated-load
+ * Reactions, shears, moments and deflections of a beam or girder for D, L, Lr and S, the concentrated-load
  * check against L, and the gravity combinations of the governing effects.
  */
 final class BendingActions {
@@ -44,7 +44,7 @@ final class BendingActions {
     }
 
     static void record(CalcContext ctx, MemberInput in, LoadBook book, BeamLoads floor0, BeamLoads floor,
-                       BeamLoads roof0, BeamLoads roof, boolean halfL, RecordBuilder rec) {
+                       BeamLoads roof0, BeamLoads roof, boolean halfL, boolean snow, RecordBuilder rec) {
         Edition ed = ctx.edition();
         Support s = in.support();
         List<Effect> effects = effects(s);
@@ -58,6 +58,8 @@ final class BendingActions {
         }
         double[] lr = new double[effects.size()];
         if (!roof.isEmpty()) lr = caseEffects(rec, "Lr", "roof live load", s, patterns(s, roof), effects, ei, ed.clause("roof.reduction"));
+        double[] sn = new double[effects.size()];
+        if (snow) sn = caseEffects(rec, "S", "snow load, not reduced", s, patterns(s, book.snow), effects, ei, ed.clause("snow.sloped"));
         if (s instanceof Support.Overhang && !(floor.isEmpty() && roof.isEmpty()))
             rec.info("Live load placed on the back span, on the overhang and on both; the worst of the three is used for each effect.",
                     ed.clause("reduction.basic"));
@@ -66,13 +68,14 @@ final class BendingActions {
         double[] lrDesign = concentrated(ctx, book.roofAreas.keySet(), s, effects, lr, ConcentratedCheck.ROOF, rec);
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
-            var u = LoadCombinations.govern(true, "LRFD." + e.key, e.lower, d[i], design[i], lrDesign[i], halfL, e.q(),
+            double si = snow ? sn[i] : Double.NaN;
+            var u = LoadCombinations.govern(true, "LRFD." + e.key, e.lower, d[i], design[i], lrDesign[i], si, halfL, e.q(),
                     ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
-            var a = LoadCombinations.govern(false, "ASD." + e.key, e.lower, d[i], design[i], lrDesign[i], halfL, e.q(),
+            var a = LoadCombinations.govern(false, "ASD." + e.key, e.lower, d[i], design[i], lrDesign[i], si, halfL, e.q(),
                     ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
             rec.result("Ldes." + e.key, e.title + ", design live load", design[i], e.q())
-               .result("LRFD." + e.key, e.title + ", factored (" + u.combination().name() + ")", u.value(), e.q())
-               .result("ASD." + e.key, e.title + ", service (" + a.combination().name() + ")", a.value(), e.q())
+               .result("LRFD." + e.key, e.title + ", factored (" + u.label() + ")", u.value(), e.q())
+               .result("ASD." + e.key, e.title + ", service (" + a.label() + ")", a.value(), e.q())
                .governs("LRFD." + e.key);
         }
         if (s instanceof Support.Overhang o && !(floor0.isEmpty() && roof0.isEmpty()))

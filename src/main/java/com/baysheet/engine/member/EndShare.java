@@ -9,15 +9,19 @@ import java.util.List;
 /**
  * What one end of a member hands to the member that carries it: its dead reaction, its unreduced live
  * reaction by source, and the tributary area that reaction represents. The carrying member reduces the
- * live load again with its own K_LL·A_T.
+ * live load again with its own K_LL·A_T. The snow reaction S (lb or kN, unfactored) is handed on as it is: snow
+ * is not reduced.
  */
-public record EndShare(double dead, List<LiveShare> live, List<AreaShare> areas) {
+public record EndShare(double dead, List<LiveShare> live, List<AreaShare> areas, double snow) {
     public EndShare {
         live = List.copyOf(live);
         areas = List.copyOf(areas);
     }
 
-    public PointLoad at(double x) { return new PointLoad(x, Math.max(0, dead), positive(live), areas); }
+    /** No snow. */
+    public EndShare(double dead, List<LiveShare> live, List<AreaShare> areas) { this(dead, live, areas, 0); }
+
+    public PointLoad at(double x) { return new PointLoad(x, Math.max(0, dead), positive(live), areas, Math.max(0, snow)); }
 
     public double liveTotal() {
         double s = 0;

@@ -23,6 +23,8 @@ import java.util.Map;
  */
 final class LoadBook {
     final BeamLoads dead = new BeamLoads();
+    /** The roof snow load S, unfactored and not reduced: on the strips (see {@link #snowOnStrips}) and in point loads. */
+    final BeamLoads snow = new BeamLoads();
     final Map<String, BeamLoads> live = new LinkedHashMap<>();
     final Map<String, Double> floorAreas = new LinkedHashMap<>();
     final Map<String, Double> roofAreas = new LinkedHashMap<>();
@@ -72,6 +74,7 @@ final class LoadBook {
                 b.occupancy("pointLoads[" + i + "].live.occupancy", l.occupancy());
                 b.source(l.source()).point(l.amount(), x);
             }
+            if (p.snow() > 0) b.snow.point(p.snow(), x);
             for (AreaShare a : p.areas()) b.area(b.occupancy("pointLoads[" + i + "].areas.occupancy", a.occupancy()), a.area(), x);
         }
         b.checkFloors();
@@ -102,6 +105,11 @@ final class LoadBook {
                 throw new com.baysheet.engine.InputError("floors", id + " " + given, "the floors listed must add up to the floor area of "
                         + id + " the member carries (" + carried + ")");
         }
+    }
+
+    /** The uniform snow load (psf or kN/m²) on every strip of the member: a line load of pressure × width. */
+    void snowOnStrips(double pressure) {
+        for (AreaStrip s : in.strips()) snow.distributed(pressure * s.width(), s.from(), s.to());
     }
 
     boolean isRoofSource(String source) {

@@ -8,8 +8,9 @@ import com.baysheet.engine.units.Quantity;
 import java.util.List;
 
 /**
- * The gravity combinations of D, L and Lr of ASCE 7-16 2.3.1 (LRFD) and 2.4.1 (ASD); those with W, S, R or E
- * are outside this engine. Effects are combined as the sum of each case's largest effect, which is exact
+ * The gravity combinations of D, L, Lr and S of ASCE 7-16 2.3.1 (LRFD) and 2.4.1 (ASD), S taking the place of Lr
+ * in the "(Lr or S or R)" terms; those with W, R or E are outside this engine (with no wind, "(L or 0.5W)" of
+ * combination 3 is L, or 0.5 L by Exception 1). Effects are combined as the sum of each case's largest effect, which is exact
  * where the cases peak together and conservative where they do not.
  */
 public final class LoadCombinations {
@@ -46,27 +47,63 @@ public final class LoadCombinations {
             new Combination("ASD 3", 1.0, 0, 1.0, false, false),
             new Combination("ASD 4", 1.0, 0.75, 0.75, false, false));
 
-    /** The governing strength or service value of one effect, recorded as a step. */
-    public record Governing(double value, Combination combination) {}
+    /**
+     * The governing strength or service value of one effect, recorded as a step.
+     *
+     * @param roofTerm the roof load that took the combination's "(Lr or S or R)" place: "Lr" or "S"
+     */
+    public record Governing(double value, Combination combination, String roofTerm, String formula) {
+        /** The combination as named in result labels: "LRFD 3", or with snow on the member "LRFD 3: 1.2D + 1.6S + 0.5L". */
+        public String label() { return formula.isEmpty() ? combination.name() : combination.name() + ": " + formula; }
+    }
 
+    /** D, L and Lr only (no snow on the member). */
     public static Governing govern(boolean strength, String key, String what, double d, double l, double lr, boolean halfAllowed,
                                    Quantity q, Clause lrfd, Clause asd, RecordBuilder rec) {
+        return govern(strength, key, what, d, l, lr, Double.NaN, halfAllowed, q, lrfd, asd, rec);
+    }
+
+    /**
+     * As above with the snow effect {@code s} (NaN where the member carries no snow): each combination whose roof term
+     * is "(Lr or S or R)" is evaluated with Lr and with S, and the larger taken (ASCE 7-16 2.3.1, 2.4.1); rain R is not
+     * computed. On a tie Lr is named.
+     */
+    public static Governing govern(boolean strength, String key, String what, double d, double l, double lr, double s,
+                                   boolean halfAllowed, Quantity q, Clause lrfd, Clause asd, RecordBuilder rec) {
+        boolean snow = !Double.isNaN(s);
         Combination best = null;
-        double bestV = 0;
+        double bestV = 0, bestRoof = 0;
+        String term = "Lr";
         for (Combination c : GRAVITY) {
             if (c.strength() != strength) continue;
             double v = c.apply(d, l, lr, halfAllowed);
-            if (best == null || Math.abs(v) > Math.abs(bestV)) { best = c; bestV = v; }
+            if (best == null || Math.abs(v) > Math.abs(bestV)) { best = c; bestV = v; bestRoof = lr; term = "Lr"; }
+            if (snow && c.lr != 0) {
+                double vs = c.apply(d, l, s, halfAllowed);
+                if (Math.abs(vs) > Math.abs(bestV)) { best = c; bestV = vs; bestRoof = s; term = "S"; }
+            }
         }
         String sub = "";
+        double fl = best.halfL && halfAllowed ? 0.5 : best.l;
         if (rec.writesText()) {
-            double fl = best.halfL && halfAllowed ? 0.5 : best.l;
             sub = Display.sig3(best.d) + " × " + rec.num(d, q);
             if (fl != 0) sub += " + " + Display.sig3(fl) + " × " + rec.num(l, q);
-            if (best.lr != 0) sub += " + " + Display.sig3(best.lr) + " × " + rec.num(lr, q);
+            if (best.lr != 0) sub += " + " + Display.sig3(best.lr) + " × " + rec.num(bestRoof, q);
         }
-        rec.step(key, (strength ? "Factored " : "Service ") + what + ", " + best.name + " governs", best.formula(halfAllowed, rec), sub,
-                bestV, q, strength ? lrfd : asd);
-        return new Governing(bestV, best);
+        // the label leaves out L on a member that carries none (a roof member): the value is the same either way
+        String formula = snow ? brief(best, l == 0 ? 0 : fl, term) : "";
+        rec.step(key, (strength ? "Factored " : "Service ") + what + ", " + best.name + " governs"
+                        + (snow && best.lr != 0 ? " (" + term + " as the roof load)" : ""),
+                snow ? formula : best.formula(halfAllowed, rec), sub, bestV, q, strength ? lrfd : asd);
+        return new Governing(bestV, best, term, formula);
     }
+
+    /** "1.2D + 1.6S + 0.5L": the roof term first where its factor leads, as the standard writes combination 3. */
+    static String brief(Combination c, double fl, String term) {
+        StringBuilder b = new StringBuilder(factor(c.d)).append("D");
+        String lt = fl != 0 ? " + " + factor(fl) + "L" : "", rt = c.lr != 0 ? " + " + factor(c.lr) + term : "";
+        return b.append(c.lr > fl ? rt + lt : lt + rt).toString();
+    }
+
+    private static String factor(double f) { return f == 1 ? "" : Display.plain(f); }
 }

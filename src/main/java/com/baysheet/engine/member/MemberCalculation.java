@@ -23,7 +23,7 @@ import java.util.Map;
 
 /**
  * One member, from its input to its calculation record: live loads from the catalogue, the floor
- * reduction and roof live load, the member actions for D, L and Lr, the concentrated-load check, and the
+ * reduction and roof live load, the roof snow load S, the member actions for D, L, Lr and S, the concentrated-load check, and the
  * gravity load combinations. The entry point of the engine.
  */
 public final class MemberCalculation {
@@ -42,13 +42,14 @@ public final class MemberCalculation {
         LoadBook book = LoadBook.of(ctx, in);
         Inputs.record(ctx, in, book, rec);
         OwnWeight.record(ctx, in, rec);
+        boolean snow = MemberSnow.record(ctx, in, book, rec);
         LiveFactors[] reduction = new LiveFactors[1];
         Map<String, Double> factors = factors(ctx, in, book, rec, reduction);
         BeamLoads floor0 = book.combined(null, false), floor = book.combined(factors, false);
         BeamLoads roof0 = book.combined(null, true), roof = book.combined(factors, true);
         boolean halfL = halfLAllowed(ctx, book);
-        if (in.kind().isColumn()) AxialActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, rec);
-        else BendingActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, rec);
+        if (in.kind().isColumn()) AxialActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, snow, rec);
+        else BendingActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, snow, rec);
         rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1)));
         BalconyNote.record(ctx, book, rec);
         Cautions.standard(ctx, book, rec);
@@ -118,7 +119,7 @@ public final class MemberCalculation {
         }
         List<AreaShare> areas = new ArrayList<>();
         (left ? book.leftAreas : book.rightAreas).forEach((id, a) -> areas.add(new AreaShare(id, a)));
-        return new EndShare(dead, live, areas);
+        return new EndShare(dead, live, areas, book.snow.isEmpty() ? 0 : Math.max(0, end(s, book.snow, left)));
     }
 
     private static double end(Support s, BeamLoads loads, boolean left) {

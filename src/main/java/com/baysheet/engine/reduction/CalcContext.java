@@ -4,10 +4,19 @@ import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.code.OccupancyCatalogue;
 import com.baysheet.engine.load.DesignOptions;
+import com.baysheet.engine.snow.SnowSite;
 import com.baysheet.engine.units.UnitSystem;
 
-/** The project-level setting of a calculation: edition, unit system, catalogue (with the firm's rows), options. */
-public record CalcContext(Edition edition, UnitSystem system, OccupancyCatalogue catalogue, DesignOptions options) {
+/**
+ * The project-level setting of a calculation: edition, unit system, catalogue (with the firm's rows), options, and
+ * the project's snow site (null where the project gives no ground snow load: then no member carries snow).
+ */
+public record CalcContext(Edition edition, UnitSystem system, OccupancyCatalogue catalogue, DesignOptions options, SnowSite snow) {
+    /** No snow site. */
+    public CalcContext(Edition edition, UnitSystem system, OccupancyCatalogue catalogue, DesignOptions options) {
+        this(edition, system, catalogue, options, null);
+    }
+
     public CalcContext {
         com.baysheet.engine.Check.present("edition", edition);
         com.baysheet.engine.Check.present("units", system);
@@ -20,11 +29,13 @@ public record CalcContext(Edition edition, UnitSystem system, OccupancyCatalogue
         return new CalcContext(Editions.builtIn().byDefault(), system, OccupancyCatalogue.builtIn(), DesignOptions.DEFAULT);
     }
 
-    public CalcContext withOptions(DesignOptions o) { return new CalcContext(edition, system, catalogue, o); }
+    public CalcContext withOptions(DesignOptions o) { return new CalcContext(edition, system, catalogue, o, snow); }
 
-    public CalcContext withEdition(Edition e) { return new CalcContext(e, system, catalogue, options); }
+    public CalcContext withEdition(Edition e) { return new CalcContext(e, system, catalogue, options, snow); }
 
-    public CalcContext withCatalogue(OccupancyCatalogue c) { return new CalcContext(edition, system, c, options); }
+    public CalcContext withCatalogue(OccupancyCatalogue c) { return new CalcContext(edition, system, c, options, snow); }
+
+    public CalcContext withSnow(SnowSite s) { return new CalcContext(edition, system, catalogue, options, s); }
 
     /** An edition constant for this unit system: key.us or key.si. */
     public double constant(String key) {

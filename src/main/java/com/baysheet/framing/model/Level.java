@@ -11,10 +11,15 @@ import java.util.List;
  *
  * @param key the level's stable key in member ids (the store gives "L" and the level's row id; null: the
  *            derivation numbers the level by its place in the building, "L0", "L1", ...). URL-safe.
+ * @param surface a roof's shape, surface and W for its snow load ({@link RoofSurface#DEFAULT} on floors)
  */
-public record Level(String name, double elevation, boolean roof, double roofSlope, List<Bay> bays, String key) {
+public record Level(String name, double elevation, boolean roof, double roofSlope, List<Bay> bays, String key, RoofSurface surface) {
     public Level(String name, double elevation, boolean roof, double roofSlope, List<Bay> bays) {
         this(name, elevation, roof, roofSlope, bays, null);
+    }
+
+    public Level(String name, double elevation, boolean roof, double roofSlope, List<Bay> bays, String key) {
+        this(name, elevation, roof, roofSlope, bays, key, RoofSurface.DEFAULT);
     }
 
     public Level {
@@ -24,10 +29,15 @@ public record Level(String name, double elevation, boolean roof, double roofSlop
         // the field names the level, so that a form or the API can show the error beside it
         if (roof) Check.nonNegative("levels[" + name + "].roofSlope", roofSlope);
         bays = List.copyOf(bays);
+        if (surface == null) surface = RoofSurface.DEFAULT;
     }
 
     public Level withKey(String levelKey) {
-        return new Level(name, elevation, roof, roofSlope, bays, levelKey);
+        return new Level(name, elevation, roof, roofSlope, bays, levelKey, surface);
+    }
+
+    public Level withSurface(RoofSurface s) {
+        return new Level(name, elevation, roof, roofSlope, bays, key, s);
     }
 
     public static Level floor(String name, double elevation, List<Bay> bays) {
