@@ -13,8 +13,8 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.util.Arrays;
+import java.util.function.Consumer;
 
 /** Entry point: {@code calc ...} runs the command-line calculation; anything else starts the office server. */
 public final class App {
@@ -34,7 +34,8 @@ public final class App {
             return;
         }
         try {
-            start(options);
+            Running running = start(options, LOG::info);
+            Runtime.getRuntime().addShutdownHook(new Thread(running::close));
         } catch (RuntimeException e) {
             // a database that is locked by another server, unreachable or refusing the login: say so in one line
             System.err.println("baysheet: could not start: " + rootCause(e));
@@ -48,22 +49,38 @@ public final class App {
         return t.getMessage() == null ? t.toString() : t.getMessage();
     }
 
-    /** Opens (and migrates) the database, loads the demo if asked, and starts serving. */
-    static Javalin start(ServerOptions o) throws IOException {
-        if (o.embedded()) Files.createDirectories(o.dataDir());
-        Database db = Database.open(o.dbUrl());
+    /** A started server and its database, which stopping closes. */
+    record Running(Javalin app, Database db, Signoff signoff) implements AutoCloseable {
+        @Override
+        public void close() {
+            app.stop();
+            db.close();
+        }
+    }
+
+    /**
+     * Opens (and migrates) the database, loads the demo if asked, and starts serving. {@code console} takes
+     * the lines meant for whoever started the server (the set-up code, the demo accounts' passwords).
+     */
+    static Running start(ServerOptions o, Consumer<String> console) throws IOException {
+        if (o.embedded()) Database.prepareDataDir(o.dataDir());
+        Database db = Database.open(o.dbUrl(), o.dbPassword());
+        if (o.embedded()) Database.restrictFiles(o.dataDir());
         Store store = Store.on(db.dataSource(), Derivation::derive);
+        Signoff signoff = Signoff.on(store, db.dataSource());
         if (o.demo()) {
             int loaded = Demo.loadIfEmpty(store).size();
             LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");
+            DemoAccounts.add(signoff.accounts().admin(), console);
         }
-        Javalin app = Server.create(store, Signoff.on(store, db.dataSource())::install, o.trustedProxy()).start(o.bind(), o.port());
-        Runtime.getRuntime().addShutdownHook(new Thread(() -> {
-            app.stop();
-            db.close();
-        }));
-        LOG.info("Baysheet serving http://{}:{}/ (database {})", o.bind().equals("0.0.0.0") ? "localhost" : o.bind(),
-                app.port(), o.embedded() ? o.dataDir() : "by JDBC URL");
-        return app;
+        Javalin app = Server.create(store, signoff::install, o.trustedProxy(), o.behindTls()).start(o.bind(), o.port());
+        Running running = new Running(app, db, signoff);
+        console.accept("listening on " + o.bind() + ":" + app.port() + (o.bind().equals("127.0.0.1") || o.bind().equals("localhost")
+                ? " (this machine only; --bind 0.0.0.0 for the office network)" : " (the office network)") + ", database "
+                + (o.embedded() ? o.dataDir() : "by JDBC URL") + (o.behindTls() ? ", behind a TLS proxy" : ""));
+        if (!signoff.accounts().logins().setupDone())
+            console.accept("set-up code: " + signoff.setupCode().code() + " (asked for once, by the set-up page at /setup, "
+                    + "to make the first administrator)");
+        return running;
     }
 }

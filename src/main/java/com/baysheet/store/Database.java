@@ -5,7 +5,14 @@ import com.zaxxer.hikari.HikariDataSource;
 import org.flywaydb.core.Flyway;
 
 import javax.sql.DataSource;
+import java.io.IOException;
+import java.nio.file.FileSystems;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
+import java.util.stream.Stream;
 
 /**
  * The connection pool and the schema. The same migrations (classpath:db/migration) run on the embedded
@@ -20,8 +27,17 @@ public final class Database implements AutoCloseable {
 
     /** Opens a pool on a JDBC URL (user and password may be in the URL) and brings the schema up to date. */
     public static Database open(String jdbcUrl) {
+        return open(jdbcUrl, null);
+    }
+
+    /**
+     * The same with the password given apart from the URL (null: none, or the URL's own), as it comes from
+     * an environment variable or a file rather than the command line, where every user of the machine sees it.
+     */
+    public static Database open(String jdbcUrl, String password) {
         HikariConfig c = new HikariConfig();
         c.setJdbcUrl(jdbcUrl);
+        if (password != null) c.setPassword(password);
         c.setMaximumPoolSize(8);
         c.setPoolName("baysheet");
         Database db = new Database(new HikariDataSource(c));
@@ -38,6 +54,35 @@ public final class Database implements AutoCloseable {
     public static String h2Url(Path dataDir) {
         Path file = dataDir.toAbsolutePath().normalize().resolve("baysheet");
         return "jdbc:h2:file:" + file + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;WRITE_DELAY=0";
+    }
+
+    private static final Set<PosixFilePermission> OWNER_DIR = PosixFilePermissions.fromString("rwx------");
+    private static final Set<PosixFilePermission> OWNER_FILE = PosixFilePermissions.fromString("rw-------");
+
+    /**
+     * Creates the data directory if needed and makes it, and the database files already in it, the owner's
+     * alone (rwx------ and rw-------): the file holds every project and the password hashes. On a file system
+     * without POSIX permissions (Windows) the folder is only created; its access is the system's to set.
+     */
+    public static void prepareDataDir(Path dir) throws IOException {
+        boolean posix = FileSystems.getDefault().supportedFileAttributeViews().contains("posix");
+        if (!posix) {
+            Files.createDirectories(dir);
+            return;
+        }
+        if (!Files.isDirectory(dir)) Files.createDirectories(dir, PosixFilePermissions.asFileAttribute(OWNER_DIR));
+        Files.setPosixFilePermissions(dir, OWNER_DIR); // a folder made by hand, or by an older version, too
+        restrictFiles(dir);
+    }
+
+    /** The database files under the data directory: the owner's alone (after H2 made them with the umask's bits). */
+    public static void restrictFiles(Path dir) throws IOException {
+        if (!FileSystems.getDefault().supportedFileAttributeViews().contains("posix") || !Files.isDirectory(dir)) return;
+        try (Stream<Path> files = Files.list(dir)) {
+            for (Path f : (Iterable<Path>) files::iterator)
+                if (Files.isRegularFile(f) && f.getFileName().toString().startsWith("baysheet."))
+                    Files.setPosixFilePermissions(f, OWNER_FILE);
+        }
     }
 
     /** Applies pending migrations; returns how many ran. Safe to call again. */

@@ -31,6 +31,14 @@ public final class Server {
      * the address the throttle counts and the audit trail records cannot be chosen by the client.
      */
     public static Javalin create(Store store, Consumer<RoutesConfig> access, String trustedProxy) {
+        return create(store, access, trustedProxy, false);
+    }
+
+    /**
+     * The same, {@code behindTls} when browsers reach it through an HTTPS proxy: cookies Secure and
+     * Strict-Transport-Security on every response ({@link Headers}).
+     */
+    public static Javalin create(Store store, Consumer<RoutesConfig> access, String trustedProxy, boolean behindTls) {
         return Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
             cfg.contextResolver.ip = ctx -> ClientAddress.of(ctx.req().getRemoteAddr(), ctx.header("X-Forwarded-For"), trustedProxy);
@@ -46,7 +54,7 @@ public final class Server {
                 sf.location = Location.CLASSPATH;
             });
             // ahead of the access filter, which may halt a request with a redirect that needs them too
-            cfg.routes.before(Headers::apply);
+            cfg.routes.before(ctx -> Headers.apply(ctx, behindTls));
             cfg.routes.after(Headers::charset);
             if (access != null) access.accept(cfg.routes);
             filters(cfg.routes);

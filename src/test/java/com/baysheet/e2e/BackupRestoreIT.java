@@ -88,7 +88,7 @@ class BackupRestoreIT {
     /** The shipped server, started on the restored directory, lists the projects as they were at the backup. */
     private static void servedByTheJar(Path data, String atBackup) throws Exception {
         try (ChildServer server = ChildServer.start(data, false)) {
-            OfficeClient admin = new OfficeClient(server.base()).setUp("admin", "restored office 2024");
+            OfficeClient admin = new OfficeClient(server.base()).setUp("admin", "restored office 2024", server.setupCode());
             List<JsonNode> listed = new ArrayList<>();
             JSON.readTree(OfficeClient.expect(admin.get("/api/projects"), 200).body()).forEach(listed::add);
             listed.sort(Comparator.comparingLong(p -> p.path("id").asLong()));

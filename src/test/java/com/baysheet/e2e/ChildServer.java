@@ -57,6 +57,22 @@ final class ChildServer implements AutoCloseable {
 
     String base() { return "http://127.0.0.1:" + port; }
 
+    private static final java.util.regex.Pattern SETUP_CODE = java.util.regex.Pattern.compile("set-up code: ([A-Z0-9]{8})");
+
+    /**
+     * The one-time set-up code this server printed in its console (here, its log file), as the person who
+     * started it reads it; the line follows the health check's first answer closely, so it is waited for.
+     */
+    String setupCode() throws InterruptedException {
+        long deadline = System.nanoTime() + Duration.ofSeconds(30).toNanos();
+        while (System.nanoTime() < deadline) {
+            java.util.regex.Matcher m = SETUP_CODE.matcher(logText());
+            if (m.find()) return m.group(1);
+            Thread.sleep(50);
+        }
+        throw new IllegalStateException("the server printed no set-up code:\n" + logText());
+    }
+
     /** SIGKILL: no shutdown hook runs, nothing is flushed or closed. */
     void kill() throws InterruptedException {
         process.destroyForcibly();

@@ -50,7 +50,7 @@ class CrashSafetyIT {
         ChildServer first = ChildServer.start(data, true);
         OfficeClient eng;
         try {
-            OfficeClient admin = new OfficeClient(first.base()).setUp("admin", PASSWORD);
+            OfficeClient admin = new OfficeClient(first.base()).setUp("admin", PASSWORD, first.setupCode());
             admin.addUser("erin", "engineer", PASSWORD);
             eng = new OfficeClient(first.base()).logIn("erin", PASSWORD);
             List<Long> own = new ArrayList<>();

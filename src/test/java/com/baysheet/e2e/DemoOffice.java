@@ -15,7 +15,7 @@ import java.util.regex.Pattern;
 
 /**
  * The shipped jar over the demo, set up as an office would be on its first day: the administrator through
- * the one-time set-up page, an engineer and a checker added on the users page, each logged in with a
+ * the one-time set-up page (with the code the server printed in its console), an engineer and a checker added on the users page, each logged in with a
  * client of their own. Then one sheet goes through the check (submitted, marked up, resolved, approved,
  * issued) and a package is rendered, so that every kind of id a route takes exists: {@link #ids} holds one
  * value for each path parameter, read from the demo's own pages and API.
@@ -73,8 +73,8 @@ final class DemoOffice implements AutoCloseable {
         clients.put(role, new OfficeClient(server.base()).logIn(usernames.get(role), PASSWORD));
     }
 
-    private void setUpUsers() {
-        OfficeClient admin = new OfficeClient(server.base()).setUp(usernames.get(Role.ADMINISTRATOR), PASSWORD);
+    private void setUpUsers() throws InterruptedException {
+        OfficeClient admin = new OfficeClient(server.base()).setUp(usernames.get(Role.ADMINISTRATOR), PASSWORD, server.setupCode());
         admin.addUser(usernames.get(Role.ENGINEER), "engineer", PASSWORD);
         admin.addUser(usernames.get(Role.CHECKER), "checker", PASSWORD);
         clients.put(Role.ADMINISTRATOR, admin);

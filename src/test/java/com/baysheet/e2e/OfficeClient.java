@@ -36,10 +36,10 @@ final class OfficeClient {
                 .connectTimeout(Duration.ofSeconds(5)).build();
     }
 
-    /** Sets up the first administrator (on a new office) and is logged in as them. */
-    OfficeClient setUp(String username, String password) {
+    /** Sets up the first administrator (on a new office, with the code its console shows) and is logged in as them. */
+    OfficeClient setUp(String username, String password, String setupCode) {
         get("/setup");
-        expect(form("/setup", Map.of("username", username, "fullName", "Administrator " + username, "initials", "AD",
+        expect(form("/setup", Map.of("setupCode", setupCode, "username", username, "fullName", "Administrator " + username, "initials", "AD",
                 "password", password, "confirmPassword", password)), 303);
         get("/admin/users");
         return this;

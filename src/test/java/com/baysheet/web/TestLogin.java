@@ -5,6 +5,7 @@ import com.baysheet.auth.NewUser;
 import com.baysheet.auth.Passwords;
 import com.baysheet.auth.Role;
 import com.baysheet.auth.SessionPolicy;
+import com.baysheet.auth.SetupCode;
 import com.baysheet.auth.User;
 import com.baysheet.store.Database;
 import com.baysheet.store.Sql;
@@ -39,6 +40,8 @@ import java.util.stream.Collectors;
  */
 public final class TestLogin {
     public static final String PASSWORD = "test password 123";
+    /** The set-up code of the test wiring (the server's is random and printed in its console). */
+    public static final String SETUP_CODE = "TEST2345";
 
     private TestLogin() {}
 
@@ -47,7 +50,8 @@ public final class TestLogin {
         Sql sql = new Sql(db.dataSource());
         ReviewStore review = ReviewStore.on(sql);
         Logins.Policy policy = new Logins.Policy(new Passwords(4), SessionPolicy.OFFICE, LoginThrottle.OFFICE, clock);
-        return new Signoff(store, Accounts.on(sql, review.audit(), policy), review, clock);
+        return new Signoff(store, Accounts.on(sql, review.audit(), policy), review, clock,
+                new SetupCode(() -> SETUP_CODE), db.dataSource());
     }
 
     /** A user of this role (set-up done first if nobody exists), logged in: a client with their session. */

@@ -57,6 +57,18 @@ public final class UserAdmin {
         log(admin, "password reset", u, "", address);
     }
 
+    /**
+     * For {@code --demo} only: a user with a password the server prints in its console, added unless the
+     * username is taken (a second start with the demo keeps the first one's users); empty then.
+     */
+    public java.util.Optional<User> addDemo(NewUser u, String password) {
+        if (users.findByUsername(u.username()).isPresent()) return java.util.Optional.empty();
+        User made = users.create(u, passwords.hash(Passwords.acceptable("password", password)));
+        audit.append(AuditEvent.of(null, "demo", "user added", "user " + made.username(), made.role().label()
+                + " (demo account, password printed in the console)", "server"));
+        return java.util.Optional.of(made);
+    }
+
     private void log(User admin, String action, User u, String detail, String address) {
         audit.append(AuditEvent.of(admin.id(), admin.username(), action, "user " + u.username(), detail, address));
     }

@@ -3,6 +3,7 @@ package com.baysheet.web.auth;
 import com.baysheet.auth.NewUser;
 import com.baysheet.auth.Role;
 import com.baysheet.auth.SessionPolicy;
+import com.baysheet.auth.SetupCode;
 import com.baysheet.store.auth.Logins;
 import com.baysheet.store.auth.SignedIn;
 import com.baysheet.web.Form;
@@ -15,16 +16,20 @@ import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
 
-/** Logging in and out, the one-time set-up of the first administrator, a password change, and the health check. */
+/**
+ * Logging in and out, the one-time set-up of the first administrator (which asks for the code the server
+ * printed in its console), and a password change.
+ */
 public final class AuthRoutes {
     private final Logins logins;
+    private final SetupCode setupCode;
 
-    public AuthRoutes(Logins logins) {
+    public AuthRoutes(Logins logins, SetupCode setupCode) {
         this.logins = logins;
+        this.setupCode = setupCode;
     }
 
     public void install(RoutesConfig r) {
-        r.get("/health", ctx -> ctx.json(Map.of("status", "ok")));
         r.get("/login", this::loginForm);
         r.post("/login", this::login);
         r.post("/logout", this::logout);
@@ -64,8 +69,11 @@ public final class AuthRoutes {
 
     void setup(Context ctx) {
         Form f = Form.of(ctx);
-        Optional<Optional<SignedIn>> done = f.attempt(() -> logins.setUp(new NewUser(f.text("username"), f.text("fullName"),
-                f.text("initials"), Role.ADMINISTRATOR), f.value("password"), f.value("confirmPassword"), ctx.ip()));
+        Optional<Optional<SignedIn>> done = f.attempt(() -> {
+            setupCode.check("setupCode", f.text("setupCode"));
+            return logins.setUp(new NewUser(f.text("username"), f.text("fullName"),
+                f.text("initials"), Role.ADMINISTRATOR), f.value("password"), f.value("confirmPassword"), ctx.ip());
+        });
         if (done.isEmpty()) {
             ctx.status(HttpStatus.BAD_REQUEST);
             ctx.render("auth/setup", model(f));

@@ -1,5 +1,6 @@
 package com.baysheet.web.auth;
 
+import com.baysheet.web.Tls;
 import io.javalin.http.Context;
 
 import java.time.Duration;
@@ -7,7 +8,7 @@ import java.time.Duration;
 /**
  * The two cookies of a login: the session, and before login the token that the login and set-up forms
  * echo. Both HttpOnly (no script reads them) and SameSite=Lax (not sent on another site's form posts);
- * Secure when the request came over HTTPS. Written as headers so that every attribute is visible here.
+ * Secure when the request came over HTTPS, directly or through the TLS proxy ({@code --behind-tls}). Written as headers so that every attribute is visible here.
  */
 final class Cookies {
     static final String SESSION = "bs_session";
@@ -16,13 +17,16 @@ final class Cookies {
     private Cookies() {}
 
     static void set(Context ctx, String name, String value, Duration maxAge) {
-        String secure = ctx.req().isSecure() ? "; Secure" : "";
         ctx.res().addHeader("Set-Cookie", name + "=" + value + "; Path=/; Max-Age=" + maxAge.toSeconds()
-                + "; HttpOnly; SameSite=Lax" + secure);
+                + "; HttpOnly; SameSite=Lax" + secure(ctx));
     }
 
     static void clear(Context ctx, String name) {
-        ctx.res().addHeader("Set-Cookie", name + "=; Path=/; Max-Age=0; HttpOnly; SameSite=Lax");
+        ctx.res().addHeader("Set-Cookie", name + "=; Path=/; Max-Age=0; HttpOnly; SameSite=Lax" + secure(ctx));
+    }
+
+    private static String secure(Context ctx) {
+        return Tls.secure(ctx) ? "; Secure" : "";
     }
 
     /** A cookie value we could have issued (URL-safe base64 of 32 bytes), or null. */

@@ -4,6 +4,7 @@ import com.baysheet.auth.LoginRefused;
 import com.baysheet.auth.LoginThrottle;
 import com.baysheet.auth.Passwords;
 import com.baysheet.auth.SessionPolicy;
+import com.baysheet.auth.SetupCode;
 import com.baysheet.review.ReviewRefused;
 import com.baysheet.store.Sql;
 import com.baysheet.store.Store;
@@ -12,6 +13,7 @@ import com.baysheet.store.auth.Logins;
 import com.baysheet.store.review.ConcurrentChange;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.web.FirmOnPage;
+import com.baysheet.web.Health;
 import com.baysheet.web.auth.Access;
 import com.baysheet.web.auth.AccessRefused;
 import com.baysheet.web.auth.AdminRoutes;
@@ -32,12 +34,20 @@ public final class Signoff {
     private final Accounts accounts;
     private final ReviewStore review;
     private final Clock clock;
+    private final SetupCode setupCode;
+    private final Health health;
 
-    public Signoff(Store store, Accounts accounts, ReviewStore review, Clock clock) {
+    /**
+     * {@code setupCode} is the one the first-start set-up asks for (printed in the console by the server;
+     * a test passes one it knows); {@code ds} is what {@code /health} asks whether the database answers.
+     */
+    public Signoff(Store store, Accounts accounts, ReviewStore review, Clock clock, SetupCode setupCode, DataSource ds) {
         this.store = store;
         this.accounts = accounts;
         this.review = review;
         this.clock = clock;
+        this.setupCode = setupCode;
+        this.health = new Health(ds);
     }
 
     /** The office's production wiring: bcrypt at full strength, working-day sessions, the office throttle. */
@@ -46,18 +56,22 @@ public final class Signoff {
         ReviewStore review = ReviewStore.on(sql);
         Logins.Policy policy = new Logins.Policy(new Passwords(Passwords.DEFAULT_STRENGTH), SessionPolicy.OFFICE,
                 LoginThrottle.OFFICE, Clock.systemDefaultZone());
-        return new Signoff(store, Accounts.on(sql, review.audit(), policy), review, Clock.systemDefaultZone());
+        return new Signoff(store, Accounts.on(sql, review.audit(), policy), review, Clock.systemDefaultZone(),
+                SetupCode.random(), ds);
     }
 
     public Accounts accounts() { return accounts; }
 
     public ReviewStore review() { return review; }
 
+    /** The code the set-up form asks for while no administrator exists: for the console, never a page. */
+    public SetupCode setupCode() { return setupCode; }
+
     public void install(RoutesConfig r) {
         Access access = new Access(accounts.logins());
         r.before(access::before);
         r.before(ctx -> {
-            if (!ctx.path().startsWith("/static/")) FirmOnPage.put(ctx, review.firm().get());
+            if (!ctx.path().startsWith("/static/") && !ctx.path().equals("/health")) FirmOnPage.put(ctx, review.firm().get());
         });
         r.after(CsrfForms::after);
         r.after(new EditTrail(store, review)::after);
@@ -65,7 +79,8 @@ public final class Signoff {
         r.exception(LoginRefused.class, Refusals::login);
         r.exception(ReviewRefused.class, Refusals::review);
         r.exception(ConcurrentChange.class, Refusals::conflict);
-        new AuthRoutes(accounts.logins()).install(r);
+        health.install(r);
+        new AuthRoutes(accounts.logins(), setupCode).install(r);
         new AdminRoutes(accounts, review).install(r);
         new ReviewRoutes(store, review, clock).install(r);
         new MarkupRoutes(store, review.markups()).install(r);

@@ -36,11 +36,14 @@ class AuthPagesTest {
         assertThat(b.get("/health").statusCode()).isEqualTo(200);
         String form = b.get("/setup").body();
         assertThat(form).contains("no default password");
-        HttpResponse<String> bad = b.postRaw("/setup", List.of(Map.entry("_csrf", token(form)), Map.entry("username", "ada"),
+        assertThat(form).contains("name=\"setupCode\"").doesNotContain(TestLogin.SETUP_CODE);
+        HttpResponse<String> bad = b.postRaw("/setup", List.of(Map.entry("_csrf", token(form)),
+                Map.entry("setupCode", TestLogin.SETUP_CODE), Map.entry("username", "ada"),
                 Map.entry("fullName", "Ada"), Map.entry("initials", "AA"), Map.entry("password", "short"), Map.entry("confirmPassword", "short")));
         assertThat(bad.statusCode()).isEqualTo(400);
         assertThat(bad.body()).contains("at least 10 characters").contains("value=\"ada\"");
-        HttpResponse<String> ok = b.postRaw("/setup", List.of(Map.entry("_csrf", token(form)), Map.entry("username", "ada"),
+        HttpResponse<String> ok = b.postRaw("/setup", List.of(Map.entry("_csrf", token(form)),
+                Map.entry("setupCode", TestLogin.SETUP_CODE.toLowerCase()), Map.entry("username", "ada"),
                 Map.entry("fullName", "Ada"), Map.entry("initials", "AA"), Map.entry("password", TestLogin.PASSWORD),
                 Map.entry("confirmPassword", TestLogin.PASSWORD)));
         assertThat(ok.statusCode()).isEqualTo(303);
@@ -49,6 +52,23 @@ class AuthPagesTest {
         assertThat(other.get("/setup").headers().firstValue("Location")).as("set-up is closed")
                 .hasValueSatisfying(l -> assertThat(l).startsWith("/login"));
         assertThat(server.signoff.accounts().users().count()).isEqualTo(1);
+    }
+
+    @Test
+    void theSetUpRefusesAWrongOrMissingConsoleCodeAndStoresNobody() {
+        Client b = TestLogin.anonymous(server.app);
+        String form = b.get("/setup").body();
+        for (String code : List.of("WRONG234", "")) {
+            HttpResponse<String> r = b.postRaw("/setup", List.of(Map.entry("_csrf", token(form)), Map.entry("setupCode", code),
+                    Map.entry("username", "mallory"), Map.entry("fullName", "Mallory"), Map.entry("initials", "MM"),
+                    Map.entry("password", TestLogin.PASSWORD), Map.entry("confirmPassword", TestLogin.PASSWORD)));
+            assertThat(r.statusCode()).as("code " + code).isEqualTo(400);
+            assertThat(r.body()).contains("printed in the server's console").contains("value=\"mallory\"")
+                    .doesNotContain(TestLogin.SETUP_CODE);
+            assertThat(r.headers().allValues("Set-Cookie")).noneSatisfy(c -> assertThat(c).startsWith("bs_session="));
+        }
+        assertThat(server.signoff.accounts().users().count()).as("nobody stored").isZero();
+        assertThat(server.signoff.accounts().logins().setupDone()).isFalse();
     }
 
     @Test

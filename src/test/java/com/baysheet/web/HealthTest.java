@@ -1,0 +1,43 @@
+package com.baysheet.web;
+
+import com.baysheet.framing.Derivation;
+import com.baysheet.store.Database;
+import com.baysheet.store.Store;
+import com.baysheet.web.review.Signoff;
+import io.javalin.Javalin;
+import org.junit.jupiter.api.Test;
+
+import java.net.http.HttpResponse;
+import java.time.Clock;
+import java.util.UUID;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** {@code /health} says whether the database answers, not only whether the process does. */
+class HealthTest {
+    static String memUrl() {
+        return "jdbc:h2:mem:h" + UUID.randomUUID().toString().replace("-", "")
+                + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1";
+    }
+
+    @Test
+    void upWhileTheDatabaseAnswersAnd503WithTheDatabaseDownOnceItsPoolIsClosed() {
+        Database db = Database.open(memUrl());
+        Store store = Store.on(db.dataSource(), Derivation::derive);
+        Signoff s = TestLogin.signoff(store, db, Clock.systemUTC());
+        Javalin app = Server.create(store, s::install).start("127.0.0.1", 0);
+        try {
+            TestLogin.Client anyone = TestLogin.anonymous(app);
+            HttpResponse<String> up = anyone.get("/health");
+            assertThat(up.statusCode()).isEqualTo(200);
+            assertThat(up.body()).contains("\"status\":\"up\"").contains("\"database\":\"up\"");
+            db.close();
+            HttpResponse<String> down = anyone.get("/health");
+            assertThat(down.statusCode()).isEqualTo(503);
+            assertThat(down.body()).contains("\"database\":\"down\"").contains("\"status\":\"down\"");
+        } finally {
+            app.stop();
+            db.close();
+        }
+    }
+}

@@ -1,0 +1,55 @@
+package com.baysheet.web;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Map;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+/** The server's flags: a safe default bind, a database password kept off the command line, the TLS proxy flag. */
+class ServerOptionsTest {
+    private static final String[] NONE = {};
+
+    @Test
+    void bindsToThisMachineOnlyUnlessTheOfficeNetworkIsAskedFor() throws Exception {
+        assertThat(ServerOptions.parse(NONE, Map.of()).bind()).isEqualTo("127.0.0.1");
+        assertThat(ServerOptions.parse(new String[]{"--bind", "0.0.0.0"}, Map.of()).bind()).isEqualTo("0.0.0.0");
+        assertThat(ServerOptions.parse(NONE, Map.of("BAYSHEET_BIND", "0.0.0.0")).bind()).isEqualTo("0.0.0.0");
+    }
+
+    @Test
+    void theDatabasePasswordComesFromAFileOrTheEnvironmentAndIsNeverPrinted(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("db-password");
+        Files.writeString(file, "s3cret from file\n");
+        String[] args = {"--db-url", "jdbc:postgresql://db/baysheet?user=baysheet", "--db-password-file", file.toString()};
+        ServerOptions fromFile = ServerOptions.parse(args, Map.of());
+        assertThat(fromFile.dbPassword()).as("the first line, without its newline").isEqualTo("s3cret from file");
+        assertThat(String.join(" ", args)).as("what ps shows").doesNotContain("s3cret");
+        assertThat(fromFile.toString()).doesNotContain("s3cret");
+
+        ServerOptions fromEnv = ServerOptions.parse(new String[]{"--db-url", "jdbc:postgresql://db/baysheet?user=baysheet"},
+                Map.of("BAYSHEET_DB_PASSWORD", "env s3cret"));
+        assertThat(fromEnv.dbPassword()).isEqualTo("env s3cret");
+        assertThat(fromEnv.toString()).doesNotContain("s3cret");
+        assertThat(ServerOptions.parse(NONE, Map.of("BAYSHEET_DB_PASSWORD_FILE", file.toString())).dbPassword())
+                .isEqualTo("s3cret from file");
+        assertThat(ServerOptions.parse(NONE, Map.of()).dbPassword()).isNull();
+
+        assertThatThrownBy(() -> ServerOptions.parse(new String[]{"--db-password-file", dir.resolve("missing").toString()}, Map.of()))
+                .isInstanceOf(ServerOptions.BadOption.class).hasMessageContaining("--db-password-file").hasMessageContaining("cannot be read");
+        Files.writeString(file, "\n");
+        assertThatThrownBy(() -> ServerOptions.parse(new String[]{"--db-password-file", file.toString()}, Map.of()))
+                .isInstanceOf(ServerOptions.BadOption.class).hasMessageContaining("is empty");
+    }
+
+    @Test
+    void behindTlsByFlagOrEnvironmentAndOffByDefault() throws Exception {
+        assertThat(ServerOptions.parse(NONE, Map.of()).behindTls()).isFalse();
+        assertThat(ServerOptions.parse(new String[]{"--behind-tls"}, Map.of()).behindTls()).isTrue();
+        assertThat(ServerOptions.parse(NONE, Map.of("BAYSHEET_BEHIND_TLS", "true")).behindTls()).isTrue();
+    }
+}
