@@ -14,6 +14,7 @@ import org.slf4j.LoggerFactory;
 
 import java.io.IOException;
 import java.nio.file.Files;
+import java.time.Clock;
 import java.util.Arrays;
 
 /** Entry point: {@code calc ...} runs the command-line calculation; anything else starts the office server. */
@@ -52,7 +53,7 @@ public final class App {
     static Javalin start(ServerOptions o) throws IOException {
         if (o.embedded()) Files.createDirectories(o.dataDir());
         Database db = Database.open(o.dbUrl());
-        Store store = Store.on(db.dataSource(), Derivation::derive);
+        Store store = Store.on(db.dataSource(), Derivation::derive, Clock.systemUTC());
         if (o.demo()) {
             int loaded = Demo.loadIfEmpty(store).size();
             LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");

@@ -60,7 +60,6 @@ public final class Signoff {
             if (!ctx.path().startsWith("/static/")) FirmOnPage.put(ctx, review.firm().get());
         });
         r.after(CsrfForms::after);
-        r.after(new EditTrail(store, review)::after);
         r.exception(AccessRefused.class, Refusals::access);
         r.exception(LoginRefused.class, Refusals::login);
         r.exception(ReviewRefused.class, Refusals::review);
