@@ -34,7 +34,8 @@ public final class Supersession {
     public static List<String> apply(Connection c, long projectId, Derived derived, By who, Instant at) throws SQLException {
         List<String> out = new ArrayList<>();
         for (StoredRevision r : Revisions.latestOf(c, projectId)) {
-            if (r.revision().state() != SheetState.ISSUED) continue;
+            // a row with no fingerprint (written by hand or by an old version) cannot be compared: left as it is
+            if (r.revision().state() != SheetState.ISSUED || r.revision().fingerprint() == null) continue;
             Optional<CalcRecord> now = current(derived, r.sheet());
             if (now.isPresent() && supersede(c, r, now.get(), who, at)) out.add(r.sheet().label());
         }
