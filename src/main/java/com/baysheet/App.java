@@ -13,6 +13,7 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 import java.io.IOException;
+import java.time.Clock;
 import java.util.Arrays;
 import java.util.function.Consumer;
 
@@ -66,7 +67,7 @@ public final class App {
         if (o.embedded()) Database.prepareDataDir(o.dataDir());
         Database db = Database.open(o.dbUrl(), o.dbPassword());
         if (o.embedded()) Database.restrictFiles(o.dataDir());
-        Store store = Store.on(db.dataSource(), Derivation::derive);
+        Store store = Store.on(db.dataSource(), Derivation::derive, Clock.systemUTC());
         Signoff signoff = Signoff.on(store, db.dataSource());
         if (o.demo()) {
             int loaded = Demo.loadIfEmpty(store).size();

@@ -37,8 +37,8 @@ public final class BayStore {
     }
 
     /** Gives every selected cell the assignment's bay, replacing what was there. */
-    public void assign(long projectId, long version, long levelId, BayAssignment a) {
-        writes.change(projectId, version, c -> {
+    public void assign(Editor who, long projectId, long version, long levelId, BayAssignment a) {
+        writes.change(who, c -> BayText.assigned(c, projectId, levelId, a), projectId, version, c -> {
             Grid g = requireCells(c, projectId, levelId, a.cells());
             if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
                 throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
@@ -50,8 +50,8 @@ public final class BayStore {
     }
 
     /** Leaves the selected cells unframed at this level (no bay at all, unlike an opening). */
-    public void clear(long projectId, long version, long levelId, List<Cell> cells) {
-        writes.change(projectId, version, c -> {
+    public void clear(Editor who, long projectId, long version, long levelId, List<Cell> cells) {
+        writes.change(who, c -> BayText.cleared(c, projectId, levelId, cells), projectId, version, c -> {
             delete(c, levelId, cells, requireCells(c, projectId, levelId, cells));
             return null;
         });

@@ -23,18 +23,18 @@ public final class Demo {
     public static List<Project> loadIfEmpty(Store store) {
         if (!store.projects().findAll().isEmpty()) return List.of();
         JsonNode index = read("demo-data/index.json");
-        for (JsonNode o : index.path("firmOccupancies")) store.occupancies().add(ModelJson.firmOccupancy(o));
+        for (JsonNode o : index.path("firmOccupancies")) store.occupancies().add(Editor.DEMO, ModelJson.firmOccupancy(o));
         List<Project> out = new ArrayList<>();
         for (JsonNode file : index.path("projects")) out.add(loadProject(store, read("demo-data/" + file.asText())));
         return out;
     }
 
     static Project loadProject(Store store, JsonNode p) {
-        long id = store.projects().create(ModelJson.project(p.path("project"))).id();
-        store.grids().save(id, version(store, id), ModelJson.grid(p.path("grid")));
+        long id = store.projects().create(Editor.DEMO, ModelJson.project(p.path("project"))).id();
+        store.grids().save(Editor.DEMO, id, version(store, id), ModelJson.grid(p.path("grid")));
         for (JsonNode l : p.path("levels")) {
-            long levelId = store.levels().add(id, version(store, id), ModelJson.level(l)).id();
-            for (JsonNode b : l.path("bays")) store.bays().assign(id, version(store, id), levelId, ModelJson.bays(b, store.grids().find(id)));
+            long levelId = store.levels().add(Editor.DEMO, id, version(store, id), ModelJson.level(l)).id();
+            for (JsonNode b : l.path("bays")) store.bays().assign(Editor.DEMO, id, version(store, id), levelId, ModelJson.bays(b, store.grids().find(id)));
         }
         return store.projects().find(id);
     }

@@ -1,5 +1,6 @@
 package com.baysheet.store;
 
+import com.baysheet.engine.units.Display;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
 
@@ -33,14 +34,25 @@ public final class GridStore {
      * Replaces the grid, keeping each line's id where {@link LineMatch} finds the line again: bays split at an
      * inserted line and merge at a removed one ({@link BayRegrid}), or the change is refused naming the bays.
      */
-    public void save(long projectId, long version, Grid grid) {
-        writes.change(projectId, version, c -> {
+    public void save(Editor who, long projectId, long version, Grid grid) {
+        writes.change(who, c -> "grid saved: " + describe(grid) + "; was: " + describe(find(c, projectId)), projectId, version, c -> {
             Grid before = find(c, projectId);
             Grid after = withIds(c, projectId, grid, LineMatch.ids(before.x(), grid.x()), LineMatch.ids(before.y(), grid.y()));
             BayRegrid.apply(c, projectId, before, after);
             write(c, projectId, after);
             return null;
         });
+    }
+
+    /** The grid as a line of text: the line names with the spacings between them, x then y. */
+    static String describe(Grid g) {
+        return describe(g.x()) + "; " + describe(g.y());
+    }
+
+    private static String describe(GridAxis a) {
+        StringBuilder b = new StringBuilder(a.axis()).append(": ").append(a.name(0));
+        for (int i = 0; i < a.cells(); i++) b.append(" ").append(Display.plain(a.spacing(i))).append(" ").append(a.name(i + 1));
+        return b.toString();
     }
 
     /** A new project's first grid: every line gets a fresh id. */

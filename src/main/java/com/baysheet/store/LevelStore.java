@@ -1,6 +1,7 @@
 package com.baysheet.store;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.engine.units.Display;
 
 import com.baysheet.engine.snow.SnowRoof;
 import com.baysheet.framing.model.RoofSurface;
@@ -33,8 +34,8 @@ public final class LevelStore {
         return writes.sql().tx(c -> find(c, projectId, levelId));
     }
 
-    public StoredLevel add(long projectId, long version, LevelInfo info) {
-        return writes.change(projectId, version, c -> {
+    public StoredLevel add(Editor who, long projectId, long version, LevelInfo info) {
+        return writes.change(who, "level added: " + describe(info), projectId, version, c -> {
             requireUnique(c, projectId, info, -1);
             SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO building_level (project_id, name, elevation, "
@@ -50,8 +51,8 @@ public final class LevelStore {
         });
     }
 
-    public void update(long projectId, long version, long levelId, LevelInfo info) {
-        writes.change(projectId, version, c -> {
+    public void update(Editor who, long projectId, long version, long levelId, LevelInfo info) {
+        writes.change(who, c -> "level saved: " + describe(info) + "; was: " + describe(find(c, projectId, levelId).info()), projectId, version, c -> {
             find(c, projectId, levelId);
             requireUnique(c, projectId, info, levelId);
             SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
@@ -66,14 +67,20 @@ public final class LevelStore {
     }
 
     /** Removes a level with all its bays. */
-    public void delete(long projectId, long version, long levelId) {
-        writes.change(projectId, version, c -> {
+    public void delete(Editor who, long projectId, long version, long levelId) {
+        writes.change(who, c -> "level deleted: " + describe(find(c, projectId, levelId).info()), projectId, version, c -> {
             find(c, projectId, levelId);
             try (PreparedStatement ps = c.prepareStatement("DELETE FROM building_level WHERE id = ?")) {
                 ps.setLong(1, levelId);
                 return ps.executeUpdate();
             }
         });
+    }
+
+    /** A level as a line of text for its audit entry. */
+    static String describe(LevelInfo i) {
+        return i.name() + " at " + Display.plain(i.elevation())
+                + (i.roof() ? ", roof" + (Double.isNaN(i.roofSlope()) ? "" : " sloped " + Display.plain(i.roofSlope())) : "");
     }
 
     static List<StoredLevel> findByProject(Connection c, long projectId) throws SQLException {

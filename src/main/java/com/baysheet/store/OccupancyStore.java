@@ -9,7 +9,7 @@ import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.time.OffsetDateTime;
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -33,8 +33,9 @@ public final class OccupancyStore {
         return sql.tx(OccupancyStore::catalogue);
     }
 
-    public void add(FirmOccupancy o) {
+    public void add(Editor who, FirmOccupancy o) {
         sql.tx(c -> {
+            Instant at = sql.now();
             if (OccupancyCatalogue.builtIn().contains(o.id()))
                 throw new InputError("id", o.id(), "is a built-in occupancy; choose another id");
             for (FirmOccupancy other : findAll(c))
@@ -50,13 +51,16 @@ public final class OccupancyStore {
                 ps.setDouble(6, o.contactSide());
                 ps.setString(7, o.rule().name());
                 ps.setBoolean(8, o.assembly());
-                ps.setObject(9, OffsetDateTime.now());
+                ps.setObject(9, Sql.stamp(at));
                 ps.executeUpdate();
             }
             try (PreparedStatement ps = c.prepareStatement(
                     "UPDATE firm_state SET catalogue_version = catalogue_version + 1 WHERE id = 1")) {
-                return ps.executeUpdate();
+                ps.executeUpdate();
             }
+            // a new id changes no existing bay's load, so nothing issued is superseded
+            ModelWrites.append(c, who, "occupancy catalogue", "occupancy added: " + o.id() + " " + o.name(), at);
+            return null;
         });
     }
 

@@ -10,6 +10,7 @@ import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
+import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.util.ArrayList;
 import java.util.List;
@@ -20,9 +21,11 @@ public final class ProjectStore {
             + "partition_allowance, reduce_partitions, uplift_reduced_dead, " + SnowColumns.NAMES;
 
     private final Sql sql;
+    private final ModelWrites writes;
 
-    public ProjectStore(Sql sql) {
-        this.sql = sql;
+    public ProjectStore(ModelWrites writes) {
+        this.sql = writes.sql();
+        this.writes = writes;
     }
 
     public List<Project> findAll() {
@@ -42,16 +45,17 @@ public final class ProjectStore {
     }
 
     /** Creates a project with a starting grid (three lines each way), so that bays can be laid out at once. */
-    public Project create(ProjectInfo info) {
+    public Project create(Editor who, ProjectInfo info) {
         return sql.tx(c -> {
+            OffsetDateTime now = sql.stamp();
             requireFreeJobNumber(c, info.jobNumber(), -1);
             long id;
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO project (version, job_number, name, address, "
                     + "client, edition, unit_system, partition_allowance, reduce_partitions, uplift_reduced_dead, "
                     + SnowColumns.NAMES + ", created_at, updated_at) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
                 int i = bind(ps, info);
-                ps.setObject(i++, OffsetDateTime.now());
-                ps.setObject(i, OffsetDateTime.now());
+                ps.setObject(i++, now);
+                ps.setObject(i, now);
                 ps.executeUpdate();
                 try (ResultSet keys = ps.getGeneratedKeys()) {
                     keys.next();
@@ -59,20 +63,26 @@ public final class ProjectStore {
                 }
             }
             GridStore.create(c, id, startingGrid(info.units()));
-            return find(c, id);
+            Project p = find(c, id);
+            ModelWrites.append(c, who, ModelWrites.subject(p), "project created: " + info.name(), now.toInstant());
+            return p;
         });
     }
 
+    /** Supersedes, project by project, the issued sheets a change to the firm's settings altered (see ModelWrites). */
+    public void firmChanged(Editor who, String action) {
+        writes.firmChanged(who, action, findAll().stream().map(Project::id).toList());
+    }
+
     /** Saves new settings over {@code version}; the unit system cannot change once the project has levels. */
-    public Project update(long id, long version, ProjectInfo info) {
-        return sql.tx(c -> {
+    public Project update(Editor who, long id, long version, ProjectInfo info) {
+        return writes.change(who, c -> "project settings saved: " + settings(info) + "; was: " + settings(find(c, id).info()), id, version, c -> {
             Project old = find(c, id);
             requireFreeJobNumber(c, info.jobNumber(), id);
             if (old.info().units() != info.units() && !LevelStore.findByProject(c, id).isEmpty())
                 throw new InputError("units", info.units(), "cannot change once the project has levels: "
                         + "its lengths and loads are stored in " + old.info().units());
             for (StoredLevel l : LevelStore.findByProject(c, id)) SnowInput.checkRoof(info, l.info(), "groundSnow");
-            touch(c, id, version);
             try (PreparedStatement ps = c.prepareStatement("UPDATE project SET job_number = ?, name = ?, address = ?, "
                     + "client = ?, edition = ?, unit_system = ?, partition_allowance = ?, reduce_partitions = ?, "
                     + "uplift_reduced_dead = ?, " + SnowColumns.SETS + " WHERE id = ?")) {
@@ -84,9 +94,10 @@ public final class ProjectStore {
         });
     }
 
-    public void delete(long id, long version) {
+    public void delete(Editor who, long id, long version) {
         sql.tx(c -> {
-            touch(c, id, version);
+            touch(c, id, version, sql.now());
+            ModelWrites.append(c, who, ModelWrites.subject(find(c, id)), "project deleted at version " + version, sql.now());
             try (PreparedStatement ps = c.prepareStatement("DELETE FROM project WHERE id = ?")) {
                 ps.setLong(1, id);
                 return ps.executeUpdate();
@@ -98,10 +109,10 @@ public final class ProjectStore {
      * Claims the next version of a project for a change in this transaction, or refuses a change based on
      * an old version. Every write to a project or anything in it goes through here.
      */
-    static long touch(Connection c, long id, long version) throws SQLException {
+    static long touch(Connection c, long id, long version, Instant at) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement(
                 "UPDATE project SET version = version + 1, updated_at = ? WHERE id = ? AND version = ?")) {
-            ps.setObject(1, OffsetDateTime.now());
+            ps.setObject(1, Sql.stamp(at));
             ps.setLong(2, id);
             ps.setLong(3, version);
             if (ps.executeUpdate() == 1) return version + 1;
@@ -142,6 +153,12 @@ public final class ProjectStore {
     private static Grid startingGrid(UnitSystem units) {
         double spacing = units == UnitSystem.US ? 30 : 9;
         return new Grid(axis("x", "1", 3, spacing), axis("y", "A", 3, spacing));
+    }
+
+    /** The settings that change a calculation, as the audit entry records them before and after. */
+    static String settings(ProjectInfo i) {
+        return i.jobNumber() + " " + i.name() + ", " + i.edition() + ", " + i.units() + (i.partitionAllowance() ? ", partitions" : "")
+                + (i.reducePartitions() ? " reduced" : "") + (i.upliftReducedDead() ? ", uplift with reduced dead" : "");
     }
 
     private static int bind(PreparedStatement ps, ProjectInfo p) throws SQLException {

@@ -5,6 +5,10 @@ import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.SQLException;
 import java.sql.Types;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
 
 /**
  * Transactions over the pool; a database fault becomes {@link StoreFailure}, a user's mistake passes through,
@@ -18,9 +22,34 @@ public final class Sql {
     }
 
     private final DataSource ds;
+    private final Clock clock;
 
+    /** Over the system clock in UTC; tests pass their own clock. */
     public Sql(DataSource ds) {
+        this(ds, Clock.systemUTC());
+    }
+
+    public Sql(DataSource ds, Clock clock) {
         this.ds = ds;
+        this.clock = clock;
+    }
+
+    /** The one reading of the time a write stamps on its rows. */
+    public Instant now() {
+        return clock.instant();
+    }
+
+    /** {@link #now()} as the TIMESTAMP WITH TIME ZONE columns take it. */
+    public OffsetDateTime stamp() {
+        return stamp(now());
+    }
+
+    public static OffsetDateTime stamp(Instant at) {
+        return OffsetDateTime.ofInstant(at, ZoneOffset.UTC);
+    }
+
+    public Clock clock() {
+        return clock;
     }
 
     /** Runs work in one transaction: committed when it returns, rolled back when it throws. */

@@ -4,18 +4,23 @@ import com.baysheet.framing.Derived;
 import com.baysheet.framing.model.Building;
 
 import javax.sql.DataSource;
+import java.time.Clock;
 import java.util.function.Function;
 
 /** All of the store over one database, wired once. */
 public record Store(ProjectStore projects, GridStore grids, LevelStore levels, BayStore bays,
                     OccupancyStore occupancies, Results results) {
 
-    /** @param derive the framing derivation, run to validate each model change and to compute results */
-    public static Store on(DataSource ds, Function<Building, Derived> derive) {
-        Sql sql = new Sql(ds);
+    /**
+     * @param derive the framing derivation, run to validate each model change, to supersede what it changes
+     *               and to compute results
+     * @param clock  the time every row the store writes is stamped with
+     */
+    public static Store on(DataSource ds, Function<Building, Derived> derive, Clock clock) {
+        Sql sql = new Sql(ds, clock);
         ModelWrites writes = new ModelWrites(sql, derive);
         OccupancyStore occupancies = new OccupancyStore(sql);
-        return new Store(new ProjectStore(sql), new GridStore(writes), new LevelStore(writes),
+        return new Store(new ProjectStore(writes), new GridStore(writes), new LevelStore(writes),
                 new BayStore(writes, occupancies), occupancies, new Results(sql, derive));
     }
 }

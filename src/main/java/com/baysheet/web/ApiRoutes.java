@@ -35,13 +35,13 @@ final class ApiRoutes {
         r.post("/api/projects/{project}/levels/{level}/bays/clear", this::clearBays);
         r.get("/api/occupancies", ctx -> Json.send(ctx, store.occupancies().findAll()));
         r.post("/api/occupancies", ctx -> {
-            store.occupancies().add(ModelJson.firmOccupancy(Json.body(ctx)));
+            store.occupancies().add(Editors.of(ctx), ModelJson.firmOccupancy(Json.body(ctx)));
             Json.send(ctx, 201, store.occupancies().findAll());
         });
     }
 
     void createProject(Context ctx) {
-        Project p = store.projects().create(ModelJson.project(Json.body(ctx), FirmOnPage.defaultEdition(ctx)));
+        Project p = store.projects().create(Editors.of(ctx), ModelJson.project(Json.body(ctx), FirmOnPage.defaultEdition(ctx)));
         ctx.header("Location", "/api/projects/" + p.id());
         Json.send(ctx, 201, p);
     }
@@ -58,20 +58,20 @@ final class ApiRoutes {
         long id = Ids.project(ctx);
         // a change that names no edition keeps the project's own
         String edition = store.projects().find(id).info().edition();
-        Json.send(ctx, store.projects().update(id, ModelJson.version(body), ModelJson.project(body, edition)));
+        Json.send(ctx, store.projects().update(Editors.of(ctx), id, ModelJson.version(body), ModelJson.project(body, edition)));
     }
 
     void updateGrid(Context ctx) {
         JsonNode body = Json.body(ctx);
         long id = Ids.project(ctx);
-        store.grids().save(id, ModelJson.version(body), ModelJson.grid(body));
+        store.grids().save(Editors.of(ctx), id, ModelJson.version(body), ModelJson.grid(body));
         saved(ctx, 200, id, store.grids().find(id));
     }
 
     void createLevel(Context ctx) {
         JsonNode body = Json.body(ctx);
         long id = Ids.project(ctx);
-        var level = store.levels().add(id, ModelJson.version(body), ModelJson.level(body));
+        var level = store.levels().add(Editors.of(ctx), id, ModelJson.version(body), ModelJson.level(body));
         ctx.header("Location", "/api/projects/" + id + "/levels/" + level.id());
         saved(ctx, 201, id, ApiViews.LevelJson.of(level));
     }
@@ -79,7 +79,7 @@ final class ApiRoutes {
     void updateLevel(Context ctx) {
         JsonNode body = Json.body(ctx);
         long id = Ids.project(ctx);
-        store.levels().update(id, ModelJson.version(body), Ids.level(ctx), ModelJson.level(body));
+        store.levels().update(Editors.of(ctx), id, ModelJson.version(body), Ids.level(ctx), ModelJson.level(body));
         saved(ctx, 200, id, ApiViews.LevelJson.of(store.levels().find(id, Ids.level(ctx))));
     }
 
@@ -87,21 +87,21 @@ final class ApiRoutes {
     void deleteLevel(Context ctx) {
         long id = Ids.project(ctx);
         long version = queryVersion(ctx.queryParam("version"));
-        store.levels().delete(id, version, Ids.level(ctx));
+        store.levels().delete(Editors.of(ctx), id, version, Ids.level(ctx));
         saved(ctx, 200, id, Map.of("deleted", Ids.level(ctx)));
     }
 
     void assignBays(Context ctx) {
         JsonNode body = Json.body(ctx);
         long id = Ids.project(ctx);
-        store.bays().assign(id, ModelJson.version(body), Ids.level(ctx), ModelJson.bays(body, store.grids().find(id)));
+        store.bays().assign(Editors.of(ctx), id, ModelJson.version(body), Ids.level(ctx), ModelJson.bays(body, store.grids().find(id)));
         saved(ctx, 200, id, store.bays().findByLevel(id, Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList());
     }
 
     void clearBays(Context ctx) {
         JsonNode body = Json.body(ctx);
         long id = Ids.project(ctx);
-        store.bays().clear(id, ModelJson.version(body), Ids.level(ctx), ModelJson.cells(body, store.grids().find(id)));
+        store.bays().clear(Editors.of(ctx), id, ModelJson.version(body), Ids.level(ctx), ModelJson.cells(body, store.grids().find(id)));
         saved(ctx, 200, id, store.bays().findByLevel(id, Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList());
     }
 

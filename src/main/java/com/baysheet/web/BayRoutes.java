@@ -44,11 +44,11 @@ final class BayRoutes {
         List<Cell> cells = BayForm.cells(form);
         String action = form.text("action");
         Optional<Object> done = switch (action) {
-            case "clear" -> form.attempt(() -> { store.bays().clear(p.id(), version, l.id(), cells); return action; });
-            case "opening" -> form.attempt(() -> { store.bays().assign(p.id(), version, l.id(), BayAssignment.opening(cells)); return action; });
+            case "clear" -> form.attempt(() -> { store.bays().clear(Editors.of(ctx), p.id(), version, l.id(), cells); return action; });
+            case "opening" -> form.attempt(() -> { store.bays().assign(Editors.of(ctx), p.id(), version, l.id(), BayAssignment.opening(cells)); return action; });
             default -> {
                 BayForm.Values v = BayForm.read(form, p.info().units());
-                yield form.attempt(() -> { store.bays().assign(p.id(), version, l.id(), v.assignment(cells)); return action; });
+                yield form.attempt(() -> { store.bays().assign(Editors.of(ctx), p.id(), version, l.id(), v.assignment(cells)); return action; });
             }
         };
         done.ifPresentOrElse(a -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels/" + l.id() + "/bays"),

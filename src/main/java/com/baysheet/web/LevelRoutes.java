@@ -37,7 +37,7 @@ final class LevelRoutes {
         long version = form.version();
         var grid = GridForm.read(form, p.info().units());
         form.attempt(() -> {
-            store.grids().save(p.id(), version, grid.get());
+            store.grids().save(Editors.of(ctx), p.id(), version, grid.get());
             return p;
         }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
                 () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, form, Form.filled(Map.of("version", String.valueOf(p.version())))));
@@ -48,7 +48,7 @@ final class LevelRoutes {
         Form form = Form.of(ctx);
         long version = form.version();
         LevelForm.Values v = LevelForm.read(form, p.info().units());
-        form.attempt(() -> store.levels().add(p.id(), version, v.info()))
+        form.attempt(() -> store.levels().add(Editors.of(ctx), p.id(), version, v.info()))
                 .ifPresentOrElse(l -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
                         () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, Form.filled(gridValues(p)), form));
     }
@@ -66,7 +66,7 @@ final class LevelRoutes {
         long version = form.version();
         LevelForm.Values v = LevelForm.read(form, p.info().units());
         form.attempt(() -> {
-            store.levels().update(p.id(), version, l.id(), v.info());
+            store.levels().update(Editors.of(ctx), p.id(), version, l.id(), v.info());
             return l;
         }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
                 () -> renderEdit(ctx.status(form.stale() ? 409 : 422), p, l, form));
@@ -78,7 +78,7 @@ final class LevelRoutes {
         Form form = Form.of(ctx);
         long version = form.version();
         form.attempt(() -> {
-            store.levels().delete(p.id(), version, l.id());
+            store.levels().delete(Editors.of(ctx), p.id(), version, l.id());
             return l;
         }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
                 () -> renderEdit(ctx.status(form.stale() ? 409 : 422), p, l, form));

@@ -40,7 +40,7 @@ final class OccupancyRoutes {
         form.attempt(() -> {
             FirmOccupancy o = new FirmOccupancy(form.text("id"), form.text("name"), UnitSystem.parse("units", form.text("units")),
                     uniform, concentrated, contactSide, ReductionRule.parse("rule", form.text("rule")), form.checked("assembly"));
-            store.occupancies().add(o);
+            store.occupancies().add(Editors.of(ctx), o);
             return o;
         }).ifPresentOrElse(o -> Pages.seeOther(ctx, "/occupancies"), () -> render(ctx.status(form.stale() ? 409 : 422), form));
     }

@@ -42,7 +42,7 @@ final class ProjectRoutes {
 
     void create(Context ctx) {
         Form form = Form.of(ctx);
-        form.attempt(() -> store.projects().create(info(form)))
+        form.attempt(() -> store.projects().create(Editors.of(ctx), info(form)))
                 .ifPresentOrElse(p -> Pages.seeOther(ctx, "/projects/" + p.id()),
                         () -> renderForm(ctx.status(form.stale() ? 409 : 422), "projects/new", null, form));
     }
@@ -63,7 +63,7 @@ final class ProjectRoutes {
         Project p = store.projects().find(Ids.project(ctx));
         Form form = Form.of(ctx);
         long version = form.version();
-        form.attempt(() -> store.projects().update(p.id(), version, info(form)))
+        form.attempt(() -> store.projects().update(Editors.of(ctx), p.id(), version, info(form)))
                 .ifPresentOrElse(saved -> Pages.seeOther(ctx, Saved.PROJECT.after("/projects/" + p.id())),
                         () -> renderForm(ctx.status(form.stale() ? 409 : 422), "projects/settings", p, form));
     }

@@ -1,5 +1,7 @@
 package com.baysheet.e2e;
 
+import com.baysheet.store.Editor;
+
 import com.baysheet.framing.Derivation;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
@@ -44,18 +46,18 @@ class BackupRestoreIT {
         Path zip = dir.resolve("baysheet-backup.zip");
         String atBackup;
         try (Database db = Database.open(Database.h2Url(data))) {
-            Store store = Store.on(db.dataSource(), Derivation::derive);
+            Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
             Demo.loadIfEmpty(store);
             atBackup = projects(db);
             sql(db, "BACKUP TO '" + zip.toAbsolutePath() + "'");
-            store.projects().create(new ProjectInfo("AFTER-1", "Saved after the backup", "", "", "ASCE 7-16", UnitSystem.US, false, false));
+            store.projects().create(Editor.DEMO, new ProjectInfo("AFTER-1", "Saved after the backup", "", "", "ASCE 7-16", UnitSystem.US, false, false));
             assertThat(projects(db)).isNotEqualTo(atBackup);
         }
         Path restored = dir.resolve("restored");
         unzip(zip, restored);
         try (Database db = Database.open(Database.h2Url(restored))) {
             assertThat(projects(db)).isEqualTo(atBackup);
-            Store store = Store.on(db.dataSource(), Derivation::derive);
+            Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
             long first = store.projects().findAll().get(0).id();
             assertThat(store.results().of(first).derived().members()).as("the restored demo derives its members").isNotEmpty();
         }
@@ -69,7 +71,7 @@ class BackupRestoreIT {
         Path script = dir.resolve("baysheet-backup.sql");
         String atBackup;
         try (Database db = Database.open(Database.h2Url(data))) {
-            Demo.loadIfEmpty(Store.on(db.dataSource(), Derivation::derive));
+            Demo.loadIfEmpty(Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC()));
             atBackup = projects(db);
             sql(db, "SCRIPT TO '" + script.toAbsolutePath() + "'");
         }

@@ -48,7 +48,7 @@ final class RouteTable {
     static List<Route> all() {
         try (Database db = Database.open("jdbc:h2:mem:routes" + UUID.randomUUID().toString().replace("-", "")
                 + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1")) {
-            Store store = Store.on(db.dataSource(), Derivation::derive);
+            Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
             Javalin app = Server.create(store, Signoff.on(store, db.dataSource())::install);
             return app.unsafe.internalRouter.allHttpHandlers().stream().map(p -> p.endpoint)
                     .filter(e -> METHODS.contains(e.method)).map(RouteTable::route).distinct()

@@ -75,7 +75,7 @@ class GridLineIdsMigrationTest {
         }
 
         try (Database db = Database.open(url)) {
-            Store store = Store.on(db.dataSource(), Derivation::derive);
+            Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
             List<Bay> bays = store.bays().findByLevel(7, 12);
             assertThat(bays).extracting(b -> b.col() + "," + b.row()).containsExactly("0,0", "1,0", "0,1", "1,1");
             assertThat(bays).extracting(Bay::deadLoad).containsExactly(60.0, 70.0, 60.0, 70.0);
@@ -98,7 +98,7 @@ class GridLineIdsMigrationTest {
 
             // lines inserted later never take an id the migration gave out
             var g = store.grids().find(7);
-            store.grids().save(7, store.projects().find(7).version(), new com.baysheet.framing.model.Grid(
+            store.grids().save(Editor.DEMO, 7, store.projects().find(7).version(), new com.baysheet.framing.model.Grid(
                     new com.baysheet.framing.model.GridAxis("x", List.of("1", "2", "3", "4"), List.of(30.0, 25.0, 10.0)), g.y()));
             assertThat(store.grids().find(7).x().ids()).containsExactly(1, 2, 3, 7);
         }

@@ -25,7 +25,7 @@ class MigrationTest {
         int members;
         try (Database db = Database.open(Database.h2Url(dir))) {
             assertThat(db.migrate()).isZero();
-            Store store = Store.on(db.dataSource(), Derivation::derive);
+            Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
             Demo.loadIfEmpty(store);
             before = counts(db);
             members = store.results().of(store.projects().findAll().get(0).id()).derived().members().size();
@@ -33,7 +33,7 @@ class MigrationTest {
         try (Database db = Database.open(Database.h2Url(dir))) {
             assertThat(db.migrate()).isZero();
             assertThat(counts(db)).isEqualTo(before);
-            Store store = Store.on(db.dataSource(), Derivation::derive);
+            Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
             assertThat(Demo.loadIfEmpty(store)).isEmpty();
             assertThat(store.results().of(store.projects().findAll().get(0).id()).derived().members()).hasSize(members);
         }
@@ -49,7 +49,7 @@ class MigrationTest {
         String url = TestDatabases.postgresSchema(server);
         Map<String, Long> before;
         try (Database db = Database.open(url)) {
-            Demo.loadIfEmpty(Store.on(db.dataSource(), Derivation::derive));
+            Demo.loadIfEmpty(Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC()));
             before = counts(db);
         }
         try (Database db = Database.open(url)) {

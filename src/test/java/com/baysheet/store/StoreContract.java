@@ -10,6 +10,8 @@ import com.baysheet.framing.model.Framing;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
 import com.baysheet.framing.model.Side;
+import com.baysheet.review.AuditEvent;
+import com.baysheet.store.review.AuditTrail;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -31,7 +33,7 @@ abstract class StoreContract {
     @BeforeEach
     void open() {
         db = Database.open(freshUrl());
-        store = Store.on(db.dataSource(), Derivation::derive);
+        store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
     }
 
     @AfterEach
@@ -48,8 +50,8 @@ abstract class StoreContract {
     }
 
     Project projectWithLevel() {
-        Project p = store.projects().create(info("T-1"));
-        store.levels().add(p.id(), p.version(), new LevelInfo("Level 2", 12, false, Double.NaN));
+        Project p = store.projects().create(Editor.DEMO, info("T-1"));
+        store.levels().add(Editor.DEMO, p.id(), p.version(), new LevelInfo("Level 2", 12, false, Double.NaN));
         return store.projects().find(p.id());
     }
 
@@ -59,7 +61,7 @@ abstract class StoreContract {
 
     @Test
     void createdProjectHasItsInfoVersionOneAndAStartingGrid() {
-        Project p = store.projects().create(info("24-100"));
+        Project p = store.projects().create(Editor.DEMO, info("24-100"));
         assertThat(store.projects().find(p.id())).isEqualTo(p);
         assertThat(p.version()).isEqualTo(1);
         Grid g = store.grids().find(p.id());
@@ -69,19 +71,19 @@ abstract class StoreContract {
 
     @Test
     void theUpliftOptionIsStoredOffByDefaultAndChangedWithTheSettings() {
-        Project p = store.projects().create(info("24-101"));
+        Project p = store.projects().create(Editor.DEMO, info("24-101"));
         assertThat(store.projects().find(p.id()).info().upliftReducedDead()).isFalse();
         ProjectInfo on = new ProjectInfo(p.info().jobNumber(), p.info().name(), p.info().address(), p.info().client(),
                 p.info().edition(), p.info().units(), false, false, true);
-        Project saved = store.projects().update(p.id(), p.version(), on);
+        Project saved = store.projects().update(Editor.DEMO, p.id(), p.version(), on);
         assertThat(store.projects().find(p.id()).info().upliftReducedDead()).isTrue();
         assertThat(saved.info().options().upliftReducedDead()).isTrue();
     }
 
     @Test
     void jobNumberIsUniqueAcrossProjects() {
-        store.projects().create(info("24-100"));
-        assertThatThrownBy(() -> store.projects().create(info("24-100")))
+        store.projects().create(Editor.DEMO, info("24-100"));
+        assertThatThrownBy(() -> store.projects().create(Editor.DEMO, info("24-100")))
                 .isInstanceOfSatisfying(Duplicate.class, e -> assertThat(e.field()).isEqualTo("jobNumber"));
         assertThat(store.projects().findAll()).hasSize(1);
     }
@@ -93,7 +95,7 @@ abstract class StoreContract {
         for (int i = 0; i < 6; i++)
             answers.add(pool.submit(() -> {
                 try {
-                    store.projects().create(info("24-200"));
+                    store.projects().create(Editor.DEMO, info("24-200"));
                     return "created";
                 } catch (Duplicate e) {
                     return e.field();
@@ -108,14 +110,14 @@ abstract class StoreContract {
 
     @Test
     void aChangeBasedOnAnOldVersionIsRefusedAndNothingIsOverwritten() {
-        Project p = store.projects().create(info("24-100"));
-        store.projects().update(p.id(), p.version(), info("24-101"));
-        assertThatThrownBy(() -> store.projects().update(p.id(), p.version(), info("24-999")))
+        Project p = store.projects().create(Editor.DEMO, info("24-100"));
+        store.projects().update(Editor.DEMO, p.id(), p.version(), info("24-101"));
+        assertThatThrownBy(() -> store.projects().update(Editor.DEMO, p.id(), p.version(), info("24-999")))
                 .isInstanceOfSatisfying(StaleVersion.class, e -> {
                     assertThat(e.given()).isEqualTo(1);
                     assertThat(e.current()).isEqualTo(2);
                 });
-        assertThatThrownBy(() -> store.levels().add(p.id(), p.version(), new LevelInfo("L", 1, false, Double.NaN)))
+        assertThatThrownBy(() -> store.levels().add(Editor.DEMO, p.id(), p.version(), new LevelInfo("L", 1, false, Double.NaN)))
                 .isInstanceOf(StaleVersion.class);
         assertThat(store.projects().find(p.id()).info().jobNumber()).isEqualTo("24-101");
         assertThat(store.levels().findByProject(p.id())).isEmpty();
@@ -123,11 +125,11 @@ abstract class StoreContract {
 
     @Test
     void levelsComeLowestFirstAndShareNeitherNameNorElevation() {
-        Project p = store.projects().create(info("24-100"));
-        store.levels().add(p.id(), 1, new LevelInfo("Roof", 30, true, 0.25));
-        store.levels().add(p.id(), 2, new LevelInfo("Level 2", 12, false, Double.NaN));
+        Project p = store.projects().create(Editor.DEMO, info("24-100"));
+        store.levels().add(Editor.DEMO, p.id(), 1, new LevelInfo("Roof", 30, true, 0.25));
+        store.levels().add(Editor.DEMO, p.id(), 2, new LevelInfo("Level 2", 12, false, Double.NaN));
         assertThat(store.levels().findByProject(p.id())).extracting(StoredLevel::name).containsExactly("Level 2", "Roof");
-        assertThatThrownBy(() -> store.levels().add(p.id(), 3, new LevelInfo("Mezzanine", 12, false, Double.NaN)))
+        assertThatThrownBy(() -> store.levels().add(Editor.DEMO, p.id(), 3, new LevelInfo("Mezzanine", 12, false, Double.NaN)))
                 .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("elevation"));
         assertThat(store.levels().findByProject(p.id()).get(1).info().roofSlope()).isEqualTo(0.25);
     }
@@ -136,9 +138,9 @@ abstract class StoreContract {
     void baysRoundTripWithFramingCantileversAndOpenings() {
         Project p = projectWithLevel();
         long l = level(p);
-        store.bays().assign(p.id(), p.version(), l, new BayAssignment(List.of(new Cell(0, 1), new Cell(1, 1)), false,
+        store.bays().assign(Editor.DEMO, p.id(), p.version(), l, new BayAssignment(List.of(new Cell(0, 1), new Cell(1, 1)), false,
                 "office", 62.5, new Framing(Direction.X, 3), Map.of(Side.NORTH, 5.5)));
-        store.bays().assign(p.id(), p.version() + 1, l, BayAssignment.opening(List.of(new Cell(0, 0))));
+        store.bays().assign(Editor.DEMO, p.id(), p.version() + 1, l, BayAssignment.opening(List.of(new Cell(0, 0))));
         List<Bay> bays = store.bays().findByLevel(p.id(), l);
         assertThat(bays).hasSize(3);
         assertThat(bays.get(0).opening()).isTrue();
@@ -146,7 +148,7 @@ abstract class StoreContract {
         assertThat(b.deadLoad()).isEqualTo(62.5);
         assertThat(b.framing()).isEqualTo(new Framing(Direction.X, 3));
         assertThat(b.cantilevers()).isEqualTo(Map.of(Side.NORTH, 5.5));
-        store.bays().clear(p.id(), p.version() + 2, l, List.of(new Cell(0, 0)));
+        store.bays().clear(Editor.DEMO, p.id(), p.version() + 2, l, List.of(new Cell(0, 0)));
         assertThat(store.bays().findByLevel(p.id(), l)).hasSize(2);
     }
 
@@ -154,9 +156,9 @@ abstract class StoreContract {
     void cantileverOccupancyRoundTripsAndNullMeansTheBalconyOfTheBay() {
         Project p = projectWithLevel();
         long l = level(p);
-        store.bays().assign(p.id(), p.version(), l, new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60,
+        store.bays().assign(Editor.DEMO, p.id(), p.version(), l, new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60,
                 new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 6.0), "retail-upper"));
-        store.bays().assign(p.id(), p.version() + 1, l, new BayAssignment(List.of(new Cell(1, 0)), false, "office", 60,
+        store.bays().assign(Editor.DEMO, p.id(), p.version() + 1, l, new BayAssignment(List.of(new Cell(1, 0)), false, "office", 60,
                 new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 6.0)));
         List<Bay> bays = store.bays().findByLevel(p.id(), l);
         assertThat(bays).extracting(Bay::cantileverOccupancy).containsExactly("retail-upper", null);
@@ -194,8 +196,8 @@ abstract class StoreContract {
         Project p = projectWithLevel();
         long l = level(p);
         String id = "r".repeat(60);
-        store.occupancies().add(new FirmOccupancy(id, "Long room", UnitSystem.US, 40, 0, 30, ReductionRule.ORDINARY, false));
-        store.bays().assign(p.id(), p.version(), l, new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60,
+        store.occupancies().add(Editor.DEMO, new FirmOccupancy(id, "Long room", UnitSystem.US, 40, 0, 30, ReductionRule.ORDINARY, false));
+        store.bays().assign(Editor.DEMO, p.id(), p.version(), l, new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60,
                 new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 6.0), "balcony:" + id));
         assertThat(store.bays().findByLevel(p.id(), l).get(0).cantileverOccupancy()).isEqualTo("balcony:" + id);
     }
@@ -206,7 +208,7 @@ abstract class StoreContract {
         long l = level(p);
         BayAssignment bad = new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60, new Framing(Direction.Y, 2),
                 Map.of(Side.SOUTH, 6.0), "ballroom");
-        assertThatThrownBy(() -> store.bays().assign(p.id(), p.version(), l, bad))
+        assertThatThrownBy(() -> store.bays().assign(Editor.DEMO, p.id(), p.version(), l, bad))
                 .isInstanceOfSatisfying(InputError.class, e -> {
                     assertThat(e.field()).isEqualTo("cantileverOccupancy");
                     assertThat(e.getMessage()).contains("ballroom");
@@ -219,11 +221,11 @@ abstract class StoreContract {
     void aModelTheDerivationRefusesIsRolledBack() {
         Project p = projectWithLevel();
         long l = level(p);
-        store.bays().assign(p.id(), p.version(), l, office(new Cell(0, 0), new Cell(0, 1)));
+        store.bays().assign(Editor.DEMO, p.id(), p.version(), l, office(new Cell(0, 0), new Cell(0, 1)));
         // a cantilever on the north side of (0,0) would project over bay (0,1)
         BayAssignment over = new BayAssignment(List.of(new Cell(0, 0)), false, "office", 60,
                 new Framing(Direction.Y, 2), Map.of(Side.NORTH, 4.0));
-        assertThatThrownBy(() -> store.bays().assign(p.id(), p.version() + 1, l, over))
+        assertThatThrownBy(() -> store.bays().assign(Editor.DEMO, p.id(), p.version() + 1, l, over))
                 .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).contains("cantilevers.north"));
         assertThat(store.bays().findByLevel(p.id(), l)).allSatisfy(b -> assertThat(b.cantilevers()).isEmpty());
         assertThat(store.projects().find(p.id()).version()).isEqualTo(p.version() + 1);
@@ -233,11 +235,11 @@ abstract class StoreContract {
     void baysOutsideTheGridAndGridsThatWouldStrandBaysAreRefused() {
         Project p = projectWithLevel();
         long l = level(p);
-        assertThatThrownBy(() -> store.bays().assign(p.id(), p.version(), l, office(new Cell(2, 0))))
+        assertThatThrownBy(() -> store.bays().assign(Editor.DEMO, p.id(), p.version(), l, office(new Cell(2, 0))))
                 .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("cells"));
-        store.bays().assign(p.id(), p.version(), l, office(new Cell(1, 1)));
+        store.bays().assign(Editor.DEMO, p.id(), p.version(), l, office(new Cell(1, 1)));
         Grid smaller = new Grid(new GridAxis("x", List.of("1", "2"), List.of(30.0)), new GridAxis("y", List.of("A", "B", "C"), List.of(30.0, 30.0)));
-        assertThatThrownBy(() -> store.grids().save(p.id(), p.version() + 1, smaller)).isInstanceOf(InputError.class);
+        assertThatThrownBy(() -> store.grids().save(Editor.DEMO, p.id(), p.version() + 1, smaller)).isInstanceOf(InputError.class);
         assertThat(store.grids().find(p.id()).x().lines()).isEqualTo(3);
     }
 
@@ -246,12 +248,12 @@ abstract class StoreContract {
         Project p = projectWithLevel();
         long l = level(p);
         BayAssignment lab = new BayAssignment(List.of(new Cell(0, 0)), false, "print-room", 50, new Framing(Direction.Y, 1), Map.of());
-        assertThatThrownBy(() -> store.bays().assign(p.id(), p.version(), l, lab))
+        assertThatThrownBy(() -> store.bays().assign(Editor.DEMO, p.id(), p.version(), l, lab))
                 .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("occupancy"));
-        store.occupancies().add(new FirmOccupancy("print-room", "Print room", UnitSystem.US, 150, 0, 30, ReductionRule.HEAVY, false));
-        store.bays().assign(p.id(), p.version(), l, lab);
+        store.occupancies().add(Editor.DEMO, new FirmOccupancy("print-room", "Print room", UnitSystem.US, 150, 0, 30, ReductionRule.HEAVY, false));
+        store.bays().assign(Editor.DEMO, p.id(), p.version(), l, lab);
         assertThat(store.results().of(p.id()).derived().members()).isNotEmpty();
-        assertThatThrownBy(() -> store.occupancies().add(new FirmOccupancy("office", "Mine", UnitSystem.US, 50, 0, 30, ReductionRule.ORDINARY, false)))
+        assertThatThrownBy(() -> store.occupancies().add(Editor.DEMO, new FirmOccupancy("office", "Mine", UnitSystem.US, 50, 0, 30, ReductionRule.ORDINARY, false)))
                 .isInstanceOf(InputError.class);
     }
 
@@ -259,14 +261,14 @@ abstract class StoreContract {
     void resultsAreCachedPerVersionAndRecomputedAfterAChange() {
         Project p = projectWithLevel();
         long l = level(p);
-        store.bays().assign(p.id(), p.version(), l, office(new Cell(0, 0)));
+        store.bays().assign(Editor.DEMO, p.id(), p.version(), l, office(new Cell(0, 0)));
         Results.Computed first = store.results().of(p.id());
         assertThat(store.results().of(p.id())).isSameAs(first);
-        store.bays().assign(p.id(), p.version() + 1, l, office(new Cell(0, 0), new Cell(1, 0)));
+        store.bays().assign(Editor.DEMO, p.id(), p.version() + 1, l, office(new Cell(0, 0), new Cell(1, 0)));
         Results.Computed second = store.results().of(p.id());
         assertThat(second).isNotSameAs(first);
         assertThat(second.derived().members().size()).isGreaterThan(first.derived().members().size());
-        store.occupancies().add(new FirmOccupancy("loft", "Loft", UnitSystem.US, 50, 0, 30, ReductionRule.ORDINARY, false));
+        store.occupancies().add(Editor.DEMO, new FirmOccupancy("loft", "Loft", UnitSystem.US, 50, 0, 30, ReductionRule.ORDINARY, false));
         assertThat(store.results().of(p.id())).isNotSameAs(second);
     }
 
@@ -281,7 +283,7 @@ abstract class StoreContract {
     @Test
     void unknownIdsAreNotFound() {
         Project p = projectWithLevel();
-        Project other = store.projects().create(info("T-2"));
+        Project other = store.projects().create(Editor.DEMO, info("T-2"));
         assertThatThrownBy(() -> store.projects().find(9999)).isInstanceOf(NotFound.class);
         assertThatThrownBy(() -> store.levels().find(other.id(), level(p))).isInstanceOf(NotFound.class);
         assertThatThrownBy(() -> store.results().of(9999)).isInstanceOf(NotFound.class);
@@ -291,7 +293,7 @@ abstract class StoreContract {
     void unitSystemIsFixedOnceTheProjectHasLevels() {
         Project p = projectWithLevel();
         ProjectInfo si = new ProjectInfo("T-1", "x", "", "", "ASCE 7-16", UnitSystem.SI, false, false);
-        assertThatThrownBy(() -> store.projects().update(p.id(), p.version(), si))
+        assertThatThrownBy(() -> store.projects().update(Editor.DEMO, p.id(), p.version(), si))
                 .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("units"));
     }
 
@@ -324,9 +326,9 @@ abstract class StoreContract {
     /** Level 2: office 1-2 (cantilever south), office 2-3 (cantilevers south and east), both in row A-B. */
     private Project twoOfficeBays() {
         Project p = projectWithLevel();
-        store.bays().assign(p.id(), p.version(), level(p), new BayAssignment(List.of(new Cell(0, 0), new Cell(1, 0)), false,
+        store.bays().assign(Editor.DEMO, p.id(), p.version(), level(p), new BayAssignment(List.of(new Cell(0, 0), new Cell(1, 0)), false,
                 "office", 60, new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 4.0)));
-        store.bays().assign(p.id(), p.version() + 1, level(p), new BayAssignment(List.of(new Cell(1, 0)), false,
+        store.bays().assign(Editor.DEMO, p.id(), p.version() + 1, level(p), new BayAssignment(List.of(new Cell(1, 0)), false,
                 "office", 60, new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 4.0, Side.EAST, 3.0)));
         return store.projects().find(p.id());
     }
@@ -337,7 +339,7 @@ abstract class StoreContract {
         Map<String, String> before = records(p);
         var untouched = store.results().of(p.id()).derived().members().stream()
                 .filter(m -> !m.bays().contains("A-B/2-3")).map(m -> m.id()).toList();
-        store.grids().save(p.id(), p.version(), grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
+        store.grids().save(Editor.DEMO, p.id(), p.version(), grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
         List<Bay> bays = store.bays().findByLevel(p.id(), level(p));
         assertThat(bays).extracting(Bay::col).containsExactly(0, 1, 2);
         assertThat(bays).allSatisfy(b -> assertThat(b.occupancy()).isEqualTo("office"));
@@ -355,8 +357,8 @@ abstract class StoreContract {
         Project p = twoOfficeBays();
         List<Bay> bays = store.bays().findByLevel(p.id(), level(p));
         Map<String, String> before = records(p);
-        store.grids().save(p.id(), p.version(), grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
-        store.grids().save(p.id(), p.version() + 1, grid("1 2 3", List.of(30.0, 30.0)));
+        store.grids().save(Editor.DEMO, p.id(), p.version(), grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
+        store.grids().save(Editor.DEMO, p.id(), p.version() + 1, grid("1 2 3", List.of(30.0, 30.0)));
         assertThat(store.bays().findByLevel(p.id(), level(p))).isEqualTo(bays);
         assertThat(records(p)).isEqualTo(before);
     }
@@ -364,10 +366,10 @@ abstract class StoreContract {
     @Test
     void aLineInsertedAgainIsANewLineWhoseMembersAreNew() {
         Project p = twoOfficeBays();
-        store.grids().save(p.id(), p.version(), grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
+        store.grids().save(Editor.DEMO, p.id(), p.version(), grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
         int first = store.grids().find(p.id()).x().id(2);
-        store.grids().save(p.id(), p.version() + 1, grid("1 2 3", List.of(30.0, 30.0)));
-        store.grids().save(p.id(), p.version() + 2, grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
+        store.grids().save(Editor.DEMO, p.id(), p.version() + 1, grid("1 2 3", List.of(30.0, 30.0)));
+        store.grids().save(Editor.DEMO, p.id(), p.version() + 2, grid("1 2 2A 3", List.of(30.0, 12.0, 18.0)));
         int second = store.grids().find(p.id()).x().id(2);
         assertThat(second).isNotEqualTo(first);
         assertThat(store.results().of(p.id()).derived().members()).extracting(m -> m.id())
@@ -378,7 +380,7 @@ abstract class StoreContract {
     void renamingLinesKeepsEveryMemberId() {
         Project p = twoOfficeBays();
         Map<String, String> before = records(p);
-        store.grids().save(p.id(), p.version(), grid("4 5 6", List.of(30.0, 30.0)));
+        store.grids().save(Editor.DEMO, p.id(), p.version(), grid("4 5 6", List.of(30.0, 30.0)));
         assertThat(records(p).keySet()).isEqualTo(before.keySet());
         assertThat(store.results().of(p.id()).derived().members()).anySatisfy(m -> assertThat(m.name()).contains("4-5"));
     }
@@ -386,19 +388,50 @@ abstract class StoreContract {
     @Test
     void removingALineBetweenBaysThatDifferIsRefusedNamingThemByGridLines() {
         Project p = twoOfficeBays();
-        store.bays().assign(p.id(), p.version(), level(p), new BayAssignment(List.of(new Cell(1, 0)), false,
+        store.bays().assign(Editor.DEMO, p.id(), p.version(), level(p), new BayAssignment(List.of(new Cell(1, 0)), false,
                 "office", 80, new Framing(Direction.Y, 2), Map.of(Side.SOUTH, 4.0)));
         long v = p.version() + 1;
         List<Bay> bays = store.bays().findByLevel(p.id(), level(p));
-        assertThatThrownBy(() -> store.grids().save(p.id(), v, grid("1 3", List.of(60.0))))
+        assertThatThrownBy(() -> store.grids().save(Editor.DEMO, p.id(), v, grid("1 3", List.of(60.0))))
                 .isInstanceOfSatisfying(InputError.class, e -> {
                     assertThat(e.field()).isEqualTo("grid.x.names");
                     assertThat(e.problem()).contains("grid line 2", "on Level 2 A-B/1-2 and A-B/2-3", "dead load 60 / 80")
                             .doesNotContain("[");
                 });
-        assertThatThrownBy(() -> store.grids().save(p.id(), v, grid("1 2", List.of(30.0))))
+        assertThatThrownBy(() -> store.grids().save(Editor.DEMO, p.id(), v, grid("1 2", List.of(30.0))))
                 .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.problem()).contains("grid line 3", "edge", "A-B/2-3"));
         assertThat(store.bays().findByLevel(p.id(), level(p))).isEqualTo(bays);
         assertThat(store.projects().find(p.id()).version()).isEqualTo(v);
+    }
+
+    @Test
+    void aModelChangeIsAuditedInItsOwnTransactionWithTheEditorAndWhatChanged() {
+        Project p = projectWithLevel();
+        long level = level(p);
+        Editor who = new Editor(7L, "erin", "10.0.0.9");
+        store.bays().assign(who, p.id(), p.version(), level, office(new Cell(0, 0)));
+        AuditEvent e = new AuditTrail(new Sql(db.dataSource())).page(1, 0).get(0);
+        assertThat(e.actorId()).isEqualTo(7L);
+        assertThat(e.actorUsername()).isEqualTo("erin");
+        assertThat(e.address()).isEqualTo("10.0.0.9");
+        assertThat(e.subject()).isEqualTo("project T-1");
+        assertThat(e.detail()).isEqualTo("bays assigned on Level 2: 1-2/A-B: office, dead 60, beams Y + 2; was: 1-2/A-B unframed; "
+                + "model version " + p.version() + " → " + (p.version() + 1));
+    }
+
+    @Test
+    void aChangeWhoseAuditEntryCannotBeWrittenLeavesTheModelAsItWas() {
+        Project p = projectWithLevel();
+        long level = level(p);
+        Sql sql = new Sql(db.dataSource());
+        sql.tx(c -> c.createStatement().executeUpdate("ALTER TABLE audit_event RENAME TO audit_event_away"));
+        try {
+            assertThatThrownBy(() -> store.bays().assign(Editor.DEMO, p.id(), p.version(), level, office(new Cell(0, 0))))
+                    .isInstanceOf(StoreFailure.class);
+        } finally {
+            sql.tx(c -> c.createStatement().executeUpdate("ALTER TABLE audit_event_away RENAME TO audit_event"));
+        }
+        assertThat(store.bays().findByLevel(p.id(), level)).isEmpty();
+        assertThat(store.projects().find(p.id()).version()).isEqualTo(p.version());
     }
 }

@@ -48,7 +48,7 @@ class BehindTlsTest {
     /** The login page and a login through it, on a server started with or without the flag. */
     private static Exchange loginOn(boolean behindTls) {
         Database db = Database.open(HealthTest.memUrl());
-        Store store = Store.on(db.dataSource(), Derivation::derive);
+        Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
         Signoff s = TestLogin.signoff(store, db, Clock.systemUTC());
         Javalin app = Server.create(store, s::install, null, behindTls).start("127.0.0.1", 0);
         try {

@@ -1,5 +1,7 @@
 package com.baysheet.web;
 
+import com.baysheet.store.Editor;
+
 import com.baysheet.engine.record.RecordJson;
 import com.baysheet.framing.model.Limits;
 import com.baysheet.engine.units.UnitSystem;
@@ -69,7 +71,7 @@ class BoundsTest {
     }
 
     private static long freshProject(String job) {
-        return server.store.projects().create(new ProjectInfo(job, "Bounds " + job, "", "", "ASCE 7-16", UnitSystem.US, false, false)).id();
+        return server.store.projects().create(Editor.DEMO, new ProjectInfo(job, "Bounds " + job, "", "", "ASCE 7-16", UnitSystem.US, false, false)).id();
     }
 
     @Test
@@ -137,7 +139,7 @@ class BoundsTest {
     void aProjectTakesNoMoreLevelsThanTheLimit() throws Exception {
         long p = freshProject("B-LEVELS");
         for (int i = 0; i < Limits.MAX_LEVELS; i++)
-            server.store.levels().add(p, server.version(p), new LevelInfo("L" + i, i * 10, false, Double.NaN));
+            server.store.levels().add(Editor.DEMO, p, server.version(p), new LevelInfo("L" + i, i * 10, false, Double.NaN));
         HttpResponse<String> r = server.json("POST", "/api/projects/" + p + "/levels",
                 "{\"version\": " + server.version(p) + ", \"name\": \"One more\", \"elevation\": 5000}");
         assertThat(r.statusCode()).isEqualTo(400);

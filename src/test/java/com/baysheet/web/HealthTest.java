@@ -23,7 +23,7 @@ class HealthTest {
     @Test
     void upWhileTheDatabaseAnswersAnd503WithTheDatabaseDownOnceItsPoolIsClosed() {
         Database db = Database.open(memUrl());
-        Store store = Store.on(db.dataSource(), Derivation::derive);
+        Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
         Signoff s = TestLogin.signoff(store, db, Clock.systemUTC());
         Javalin app = Server.create(store, s::install).start("127.0.0.1", 0);
         try {

@@ -30,7 +30,7 @@ final class TestServer implements AutoCloseable {
     TestServer() {
         db = Database.open("jdbc:h2:mem:w" + UUID.randomUUID().toString().replace("-", "")
                 + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
-        store = Store.on(db.dataSource(), Derivation::derive);
+        store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
         demo = Demo.loadIfEmpty(store);
         app = Server.create(store).start("127.0.0.1", 0);
     }

@@ -10,7 +10,6 @@ import java.sql.SQLException;
 import java.sql.Types;
 import java.time.Instant;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -27,16 +26,16 @@ public final class AuditTrail {
 
     public void append(AuditEvent e) {
         sql.tx(c -> {
-            append(c, e);
+            append(c, e, sql.now());
             return null;
         });
     }
 
     /** Appends within the caller's transaction, so the entry stands or falls with the action it records. */
-    public static void append(Connection c, AuditEvent e) throws SQLException {
+    public static void append(Connection c, AuditEvent e, Instant at) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO audit_event (occurred_at, actor_id, actor_username, "
                 + "action, subject, detail, address) VALUES (?, ?, ?, ?, ?, ?, ?)")) {
-            ps.setObject(1, OffsetDateTime.now(ZoneOffset.UTC));
+            ps.setObject(1, Sql.stamp(at));
             if (e.actorId() == null) ps.setNull(2, Types.BIGINT);
             else ps.setLong(2, e.actorId());
             ps.setString(3, e.actorUsername());

@@ -42,7 +42,7 @@ public final class FirmStore {
                 ps.setLong(8, f.version());
                 if (ps.executeUpdate() == 0) throw new ConcurrentChange("The firm's settings");
             }
-            AuditTrail.append(c, event);
+            AuditTrail.append(c, event, sql.now());
             return null;
         });
     }

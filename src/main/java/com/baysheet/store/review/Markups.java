@@ -3,13 +3,14 @@ package com.baysheet.store.review;
 import com.baysheet.review.Actor;
 import com.baysheet.review.MarkupNote;
 import com.baysheet.review.MarkupTarget;
+import com.baysheet.store.Sql;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
-import java.time.OffsetDateTime;
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -23,7 +24,7 @@ final class Markups {
 
     private Markups() {}
 
-    static long add(Connection c, long revisionId, MarkupTarget target, Actor a, String text) throws SQLException {
+    static long add(Connection c, long revisionId, MarkupTarget target, Actor a, String text, Instant at) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO markup (revision_id, target, author_id, author_initials, "
                 + "body, resolved, version, created_at) VALUES (?, ?, ?, ?, ?, FALSE, 1, ?)", Statement.RETURN_GENERATED_KEYS)) {
             ps.setLong(1, revisionId);
@@ -31,7 +32,7 @@ final class Markups {
             ps.setLong(3, a.userId());
             ps.setString(4, a.initials());
             ps.setString(5, text);
-            ps.setObject(6, OffsetDateTime.now());
+            ps.setObject(6, Sql.stamp(at));
             ps.executeUpdate();
             try (ResultSet keys = ps.getGeneratedKeys()) {
                 keys.next();
@@ -40,14 +41,14 @@ final class Markups {
         }
     }
 
-    static void reply(Connection c, long markupId, Actor a, String text) throws SQLException {
+    static void reply(Connection c, long markupId, Actor a, String text, Instant at) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO markup_reply (markup_id, author_id, author_initials, body, "
                 + "created_at) VALUES (?, ?, ?, ?, ?)")) {
             ps.setLong(1, markupId);
             ps.setLong(2, a.userId());
             ps.setString(3, a.initials());
             ps.setString(4, text);
-            ps.setObject(5, OffsetDateTime.now());
+            ps.setObject(5, Sql.stamp(at));
             ps.executeUpdate();
         }
     }

@@ -33,8 +33,8 @@ public final class ReviewMarkups {
             MarkupTarget t = MarkupTarget.parse("target", target, cur.record().orElseThrow());
             String body = MarkupNote.text("text", text);
             claim(c, cur);
-            long id = Markups.add(c, cur.id(), t, who.actor(), body);
-            AuditTrail.append(c, event(who, "markup", ref, "markup " + id + " on " + t.code() + ": " + body));
+            long id = Markups.add(c, cur.id(), t, who.actor(), body, sql.now());
+            AuditTrail.append(c, event(who, "markup", ref, "markup " + id + " on " + t.code() + ": " + body), sql.now());
             return id;
         });
     }
@@ -46,8 +46,8 @@ public final class ReviewMarkups {
             MarkupRules.reply(cur.revision(), who.actor());
             String body = MarkupNote.text("text", text);
             claim(c, cur);
-            Markups.reply(c, m.id(), who.actor(), body);
-            AuditTrail.append(c, event(who, "reply", ref, "reply to markup " + m.id() + ": " + body));
+            Markups.reply(c, m.id(), who.actor(), body, sql.now());
+            AuditTrail.append(c, event(who, "reply", ref, "reply to markup " + m.id() + ": " + body), sql.now());
             return null;
         });
     }
@@ -62,7 +62,7 @@ public final class ReviewMarkups {
             if (m.version() != version || !Markups.setResolved(c, m.id(), version, resolved))
                 throw new ConcurrentChange("Markup " + m.id());
             claim(c, cur);
-            AuditTrail.append(c, event(who, resolved ? "resolve" : "reopen", ref, "markup " + m.id()));
+            AuditTrail.append(c, event(who, resolved ? "resolve" : "reopen", ref, "markup " + m.id()), sql.now());
             return null;
         });
     }

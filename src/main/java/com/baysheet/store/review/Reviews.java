@@ -14,6 +14,7 @@ import com.baysheet.store.Sql;
 
 import java.sql.Connection;
 import java.sql.SQLException;
+import java.time.Instant;
 import java.time.LocalDate;
 import java.util.List;
 import java.util.Optional;
@@ -74,7 +75,7 @@ public final class Reviews {
         sql.tx(c -> {
             StoredRevision cur = current(c, ref);
             int open = cur.stored() ? Markups.openCount(c, cur.id()) : 0;
-            return apply(c, cur, version, who, "return", r -> r.returnWithMarkups(who.actor(), open), cur.recordJson(), null);
+            return apply(c, cur, version, who, "return", r -> r.returnWithMarkups(who.actor(), open), cur.recordJson(), null, sql.now());
         });
     }
 
@@ -83,7 +84,7 @@ public final class Reviews {
         sql.tx(c -> {
             StoredRevision cur = current(c, ref);
             int open = cur.stored() ? Markups.openCount(c, cur.id()) : 0;
-            return apply(c, cur, version, who, "approve", r -> r.approve(who.actor(), today, open, fp), cur.recordJson(), null);
+            return apply(c, cur, version, who, "approve", r -> r.approve(who.actor(), today, open, fp), cur.recordJson(), null, sql.now());
         });
     }
 
@@ -96,35 +97,27 @@ public final class Reviews {
 
     /**
      * Marks the issued revision superseded and opens the next one when the member's inputs changed since
-     * it was issued; returns whether it did. Called whenever the sheet is looked at or its project changes.
+     * it was issued; returns whether it did. A change to the project does this itself, in its own transaction
+     * ({@link Supersession}); this is for a change the project's model does not see.
      */
     public boolean supersedeIfChanged(SheetRef ref, CalcRecord current, Caller who) {
-        String fp = CalcFingerprint.of(current);
-        return sql.tx(c -> {
-            StoredRevision cur = current(c, ref);
-            if (!cur.revision().outdatedBy(fp) || !Revisions.claim(c, cur.id(), cur.version())) return false;
-            SheetRevision gone = cur.revision().supersede(fp);
-            Revisions.write(c, cur.id(), gone, cur.recordJson(), null);
-            Revisions.insertNext(c, cur.id(), gone.next());
-            AuditTrail.append(c, event(who, "supersede", ref, "revision " + gone.number() + " superseded; revision "
-                    + (gone.number() + 1) + " opened because the member's inputs changed"));
-            return true;
-        });
+        return sql.tx(c -> Supersession.supersede(c, current(c, ref), current,
+                new Supersession.By(who.actor().userId(), who.username(), who.address()), sql.now()));
     }
 
     private void step(SheetRef ref, long version, Caller who, String action, UnaryOperator<SheetRevision> rule,
                       String recordJson, byte[] pdf) {
-        sql.tx(c -> apply(c, current(c, ref), version, who, action, rule, recordJson, pdf));
+        sql.tx(c -> apply(c, current(c, ref), version, who, action, rule, recordJson, pdf, sql.now()));
     }
 
     private static Void apply(Connection c, StoredRevision cur, long version, Caller who, String action,
-                              UnaryOperator<SheetRevision> rule, String recordJson, byte[] pdf) throws SQLException {
+                              UnaryOperator<SheetRevision> rule, String recordJson, byte[] pdf, Instant at) throws SQLException {
         if (cur.version() != version) throw new ConcurrentChange("The sheet " + cur.sheet().subject());
         SheetRevision next = rule.apply(cur.revision());
-        if (!cur.stored()) Revisions.insertFirst(c, cur.sheet(), next, recordJson);
+        if (!cur.stored()) Revisions.insertFirst(c, cur.sheet(), next, recordJson, at);
         else if (!Revisions.claim(c, cur.id(), version)) throw new ConcurrentChange("The sheet " + cur.sheet().subject());
-        else Revisions.write(c, cur.id(), next, recordJson, pdf);
-        AuditTrail.append(c, event(who, action, cur.sheet(), "revision " + next.number() + " now " + next.state().label()));
+        else Revisions.write(c, cur.id(), next, recordJson, pdf, at);
+        AuditTrail.append(c, event(who, action, cur.sheet(), "revision " + next.number() + " now " + next.state().label()), at);
         return null;
     }
 

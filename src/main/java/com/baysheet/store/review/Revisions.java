@@ -2,13 +2,15 @@ package com.baysheet.store.review;
 
 import com.baysheet.review.SheetRef;
 import com.baysheet.review.SheetRevision;
+import com.baysheet.store.Sql;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
-import java.time.OffsetDateTime;
+
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -58,7 +60,7 @@ final class Revisions {
     }
 
     /** Creates the sheet and its first revision; a sheet created by someone else meanwhile is a conflict. */
-    static long insertFirst(Connection c, SheetRef ref, SheetRevision r, String recordJson) throws SQLException {
+    static long insertFirst(Connection c, SheetRef ref, SheetRevision r, String recordJson, Instant at) throws SQLException {
         long sheetId;
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO review_sheet (project_id, subject) VALUES (?, ?)",
                 Statement.RETURN_GENERATED_KEYS)) {
@@ -70,11 +72,11 @@ final class Revisions {
             if (UNIQUE_VIOLATION.equals(e.getSQLState())) throw new ConcurrentChange("The sheet " + ref.subject());
             throw e;
         }
-        return insert(c, sheetId, r, recordJson);
+        return insert(c, sheetId, r, recordJson, at);
     }
 
     /** Adds the next revision of the sheet the given revision belongs to. */
-    static long insertNext(Connection c, long afterRevisionId, SheetRevision r) throws SQLException {
+    static long insertNext(Connection c, long afterRevisionId, SheetRevision r, Instant at) throws SQLException {
         long sheetId;
         try (PreparedStatement ps = c.prepareStatement("SELECT sheet_id FROM sheet_revision WHERE id = ?")) {
             ps.setLong(1, afterRevisionId);
@@ -83,7 +85,7 @@ final class Revisions {
                 sheetId = rs.getLong(1);
             }
         }
-        return insert(c, sheetId, r, null);
+        return insert(c, sheetId, r, null, at);
     }
 
     /** Takes the revision for this transaction if it is still at the version the user saw; false if not. */
@@ -97,20 +99,20 @@ final class Revisions {
     }
 
     /** Writes a revision's new state; the PDF is written only when given (once, at issue). */
-    static void write(Connection c, long id, SheetRevision r, String recordJson, byte[] pdf) throws SQLException {
+    static void write(Connection c, long id, SheetRevision r, String recordJson, byte[] pdf, Instant at) throws SQLException {
         String q = "UPDATE sheet_revision SET " + RevisionColumns.ASSIGN + ", record_json = ?, updated_at = ?"
                 + (pdf == null ? "" : ", pdf = ?") + " WHERE id = ?";
         try (PreparedStatement ps = c.prepareStatement(q)) {
             int i = RevisionColumns.bind(ps, 1, r);
             ps.setString(i++, recordJson);
-            ps.setObject(i++, OffsetDateTime.now());
+            ps.setObject(i++, Sql.stamp(at));
             if (pdf != null) ps.setBytes(i++, pdf);
             ps.setLong(i, id);
             ps.executeUpdate();
         }
     }
 
-    private static long insert(Connection c, long sheetId, SheetRevision r, String recordJson) throws SQLException {
+    private static long insert(Connection c, long sheetId, SheetRevision r, String recordJson, Instant at) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO sheet_revision (sheet_id, revision_no, version, "
                 + RevisionColumns.NAMES + ", record_json, updated_at) VALUES (?, ?, 1, " + RevisionColumns.MARKS + ", ?, ?)",
                 Statement.RETURN_GENERATED_KEYS)) {
@@ -118,7 +120,7 @@ final class Revisions {
             ps.setInt(2, r.number());
             int i = RevisionColumns.bind(ps, 3, r);
             ps.setString(i++, recordJson);
-            ps.setObject(i, OffsetDateTime.now());
+            ps.setObject(i, Sql.stamp(at));
             ps.executeUpdate();
             return key(ps);
         }

@@ -18,7 +18,7 @@ import java.util.Optional;
  * Handlers read the login with {@link #user(Context)}.
  */
 public final class Access {
-    static final String SIGNED_IN = "signedIn";
+    public static final String SIGNED_IN = "signedIn";
     static final String CSRF = "csrf";
     static final String CSRF_FIELD = "_csrf";
     static final String CSRF_HEADER = "X-CSRF-Token";

@@ -6,11 +6,13 @@ import com.baysheet.auth.User;
 import com.baysheet.review.AuditCsv;
 import com.baysheet.review.AuditEvent;
 import com.baysheet.engine.InputError;
+import com.baysheet.store.Editor;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.auth.Accounts;
 import com.baysheet.store.review.Firm;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.engine.code.Editions;
+import com.baysheet.web.Editors;
 import com.baysheet.web.Form;
 import com.baysheet.web.Saved;
 import io.javalin.config.RoutesConfig;
@@ -19,6 +21,7 @@ import io.javalin.http.HttpStatus;
 
 import java.util.HashMap;
 import java.util.Map;
+import java.util.function.Consumer;
 
 /** The administrator's pages (all under /admin, which the access rules keep to administrators). */
 public final class AdminRoutes {
@@ -26,8 +29,11 @@ public final class AdminRoutes {
 
     private final Accounts accounts;
     private final ReviewStore review;
+    private final Consumer<Editor> firmChanged;
 
-    public AdminRoutes(Accounts accounts, ReviewStore review) {
+    /** @param firmChanged run after the firm's settings are saved (supersedes what they changed in every project) */
+    public AdminRoutes(Accounts accounts, ReviewStore review, Consumer<Editor> firmChanged) {
+        this.firmChanged = firmChanged;
         this.accounts = accounts;
         this.review = review;
     }
@@ -105,6 +111,8 @@ public final class AdminRoutes {
                             weight(f, "infillBeamWeight"), weight(f, "gridBeamWeight"), weight(f, "girderWeight"),
                             weight(f, "columnWeight"), version),
                     AuditEvent.of(u.id(), u.username(), "firm settings", "firm", f.text("firmName"), ctx.ip()));
+            // the self weights enter every project's calculation: what they change is superseded now, not on a later GET
+            firmChanged.accept(Editors.of(ctx));
             return true;
         }).isPresent()) {
             ctx.redirect(Saved.FIRM.after("/admin/firm"), HttpStatus.SEE_OTHER);

@@ -68,7 +68,6 @@ public final class ReviewRoutes {
 
     void show(Context ctx) {
         SheetContext.OfMember s = SheetContext.member(store, ctx);
-        reviews().supersedeIfChanged(s.ref(), s.current(), caller(ctx));
         Map<String, Object> m = new HashMap<>();
         m.put("project", s.computed().project());
         m.put("member", s.member());
@@ -80,7 +79,6 @@ public final class ReviewRoutes {
     /** A package's page: its manifest (each sheet with its own state), markups and the same actions. */
     void showPackage(Context ctx) {
         SheetContext.OfPackage s = SheetContext.pkg(store, ctx);
-        reviews().supersedeIfChanged(s.ref(), s.current(), caller(ctx));
         Map<String, Object> m = new HashMap<>();
         m.put("project", s.computed().project());
         m.put("scope", s.scope());

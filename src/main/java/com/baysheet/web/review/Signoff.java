@@ -74,14 +74,13 @@ public final class Signoff {
             if (!ctx.path().startsWith("/static/") && !ctx.path().equals("/health")) FirmOnPage.put(ctx, review.firm().get());
         });
         r.after(CsrfForms::after);
-        r.after(new EditTrail(store, review)::after);
         r.exception(AccessRefused.class, Refusals::access);
         r.exception(LoginRefused.class, Refusals::login);
         r.exception(ReviewRefused.class, Refusals::review);
         r.exception(ConcurrentChange.class, Refusals::conflict);
         health.install(r);
         new AuthRoutes(accounts.logins(), setupCode).install(r);
-        new AdminRoutes(accounts, review).install(r);
+        new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
         new ReviewRoutes(store, review, clock).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
         new IssuedRoutes(store, review, clock).install(r);

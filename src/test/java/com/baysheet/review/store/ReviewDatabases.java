@@ -6,6 +6,9 @@ import com.baysheet.auth.User;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.store.Database;
 import com.baysheet.store.ProjectInfo;
+import com.baysheet.framing.Derivation;
+import com.baysheet.store.Editor;
+import com.baysheet.store.ModelWrites;
 import com.baysheet.store.ProjectStore;
 import com.baysheet.store.Sql;
 import com.baysheet.store.auth.UserStore;
@@ -49,7 +52,7 @@ public final class ReviewDatabases {
     }
 
     public static long project(Database db, String jobNumber) {
-        return new ProjectStore(new Sql(db.dataSource())).create(new ProjectInfo(jobNumber, "Test job " + jobNumber, "",
+        return new ProjectStore(new ModelWrites(new Sql(db.dataSource()), Derivation::derive)).create(Editor.DEMO, new ProjectInfo(jobNumber, "Test job " + jobNumber, "",
                 "", "ASCE 7-16", UnitSystem.US, false, false)).id();
     }
 

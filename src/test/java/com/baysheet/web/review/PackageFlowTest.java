@@ -1,5 +1,7 @@
 package com.baysheet.web.review;
 
+import com.baysheet.store.Editor;
+
 import com.baysheet.auth.Role;
 import com.baysheet.auth.Tokens;
 import com.baysheet.framing.DerivedMember;
@@ -162,7 +164,7 @@ class PackageFlowTest {
         var store = server.store;
         StoredLevel l = store.levels().findByProject(p).stream().filter(x -> x.info().name().equals(level)).findFirst().orElseThrow();
         Bay b = store.bays().findByLevel(p, l.id()).stream().filter(x -> !x.opening()).findFirst().orElseThrow();
-        store.bays().assign(p, store.projects().find(p).version(), l.id(), new BayAssignment(List.of(new Cell(b.col(), b.row())),
+        store.bays().assign(Editor.DEMO, p, store.projects().find(p).version(), l.id(), new BayAssignment(List.of(new Cell(b.col(), b.row())),
                 false, b.occupancy(), b.deadLoad() + more, b.framing(), b.cantilevers()));
     }
 }

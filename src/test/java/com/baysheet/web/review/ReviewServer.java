@@ -1,5 +1,7 @@
 package com.baysheet.web.review;
 
+import com.baysheet.store.Editor;
+
 import com.baysheet.auth.Role;
 import com.baysheet.framing.Derivation;
 import com.baysheet.framing.DerivedMember;
@@ -53,7 +55,7 @@ final class ReviewServer implements AutoCloseable, BeforeAllCallback, AfterAllCa
     private void start() {
         db = Database.open("jdbc:h2:mem:v" + UUID.randomUUID().toString().replace("-", "")
                 + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
-        store = Store.on(db.dataSource(), Derivation::derive);
+        store = Store.on(db.dataSource(), Derivation::derive, clock);
         demo = Demo.loadIfEmpty(store);
         signoff = TestLogin.signoff(store, db, clock);
         app = Server.create(store, signoff::install).start("127.0.0.1", 0);
@@ -80,7 +82,7 @@ final class ReviewServer implements AutoCloseable, BeforeAllCallback, AfterAllCa
         StoredLevel l = store.levels().findByProject(p).stream().filter(x -> x.info().name().equals(level)).findFirst().orElseThrow();
         for (Bay b : store.bays().findByLevel(p, l.id())) {
             if (b.opening()) continue;
-            store.bays().assign(p, store.projects().find(p).version(), l.id(), new BayAssignment(List.of(new Cell(b.col(), b.row())),
+            store.bays().assign(Editor.DEMO, p, store.projects().find(p).version(), l.id(), new BayAssignment(List.of(new Cell(b.col(), b.row())),
                     false, b.occupancy(), b.deadLoad() + more, b.framing(), b.cantilevers()));
         }
     }
