@@ -30,7 +30,7 @@ public final class ModelWrites {
             Limits.count("levels", m.levels().size(), Limits.MAX_LEVELS, "levels in a project");
             for (StoredLevel l : m.levels())
                 Limits.level(m.project().info().units(), l.info().elevation(), l.info().roof(), l.info().roofSlope());
-            if (!m.building().levels().isEmpty())
+            if (!m.building().levels().isEmpty() || !m.building().lineLoads().isEmpty())
                 Limits.count("members", derive.apply(m.building()).members().size(), Limits.MAX_MEMBERS, "members in a project");
             return result;
         });
