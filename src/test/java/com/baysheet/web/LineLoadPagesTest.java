@@ -60,6 +60,13 @@ class LineLoadPagesTest {
     }
 
     @Test
+    void theFramingPlanDrawsTheCladdingAlongItsLineWithItsLabel() {
+        String plan = server.get("/projects/" + project + "/plan?level=" + level("Level 2")).body();
+        assertThat(plan).contains("<g class=\"line-load\"><title>line load: South cladding</title>", ">South cladding</text>");
+        assertThat(server.get("/projects/" + project + "/plan?level=" + level("Level 3")).body()).doesNotContain("South cladding");
+    }
+
+    @Test
     void aWallAddedOnTheFormIsStoredAndCarriedByTheMembersBeneath() throws Exception {
         long before = server.version(project);
         HttpResponse<String> r = server.post(page("Level 3"), wall("3", "A", "B", "400"));
