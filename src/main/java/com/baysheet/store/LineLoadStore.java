@@ -62,6 +62,9 @@ public final class LineLoadStore {
         LevelStore.find(c, projectId, levelId);
         Grid g = GridStore.find(c, projectId);
         LineRef ref = LineRef.resolve(g, e);
+        // checked here as well as by the derivation: an unknown id must not reach the column (80 characters)
+        if (e.liveOccupancy() != null && !OccupancyStore.catalogue(c).contains(e.liveOccupancy()))
+            throw new InputError("liveOccupancy", e.liveOccupancy(), "is not in the occupancy catalogue");
         for (StoredLineLoad other : findByLevel(c, levelId, g))
             if (other.label().equalsIgnoreCase(e.label()))
                 throw new InputError("label", e.label(), "is already the label of a line load on this level");

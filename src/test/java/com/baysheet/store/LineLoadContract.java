@@ -104,6 +104,10 @@ interface LineLoadContract {
         for (var e : refused.entrySet())
             assertThatThrownBy(() -> store().lineLoads().add(p.id(), v, level, e.getValue()))
                     .as(e.getKey()).isInstanceOfSatisfying(InputError.class, err -> assertThat(err.field()).isEqualTo(e.getKey()));
+        // an id longer than its column: refused as unknown before the insert, never a database fault
+        assertThatThrownBy(() -> store().lineLoads().add(p.id(), v, level, new LineLoadEntry(null, "1", "A", "B", "x", 100,
+                Double.NaN, Double.NaN, 50, "u".repeat(200), false)))
+                .isInstanceOfSatisfying(InputError.class, err -> assertThat(err.field()).isEqualTo("liveOccupancy"));
         // line 3 from A to B: the bay 2-3/A-B is not framed, so no member lies beneath
         assertThatThrownBy(() -> store().lineLoads().add(p.id(), v, level, cladding("3", "A", "B", "east")))
                 .isInstanceOfSatisfying(InputError.class, err -> {
