@@ -16,10 +16,12 @@ public final class Derivation {
 
     /** @throws com.baysheet.engine.InputError naming the level, grid line or bay where the model is wrong */
     public static Derived derive(Building b) {
-        ModelCheck.validate(b);
+        // before the model check, so that clearing the last bays beneath a line load names the load
         for (var l : b.lineLoads())
             if (b.levels().stream().noneMatch(v -> v.name().equals(l.level())))
-                throw new com.baysheet.engine.InputError("lineLoads[" + l.label() + "].level", l.level(), "is not a framed level of the building");
+                throw new com.baysheet.engine.InputError("lineLoads[" + l.label() + "].level", l.level(),
+                        "is not a framed level of the building: the line load \"" + l.label() + "\" needs a member beneath it");
+        ModelCheck.validate(b);
         List<Integer> order = new ArrayList<>();
         for (int k = 0; k < b.levels().size(); k++) order.add(k);
         order.sort(Comparator.comparingDouble((Integer k) -> b.levels().get(k).elevation()).reversed());

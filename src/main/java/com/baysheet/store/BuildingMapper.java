@@ -20,7 +20,8 @@ import java.util.List;
 
 /**
  * Builds a project's {@link Building} from the store: context, grid (with its stable line ids) and the levels
- * that have a floor, each keyed "L" + its row id, so member ids follow the level and the lines, not their places.
+ * that have a floor, each keyed "L" + its row id, so member ids follow the level and the lines, not their places,
+ * and the line loads, their stable line ids turned into the grid's positions.
  */
 final class BuildingMapper {
     private BuildingMapper() {}
@@ -38,7 +39,10 @@ final class BuildingMapper {
             if (bays.stream().allMatch(Bay::opening)) unframed.add(s.name());
             else levels.add(level(s.info(), bays).withKey("L" + s.id()));
         }
-        Building b = new Building(p.info().name(), ctx, grid, levels).withSelfWeights(selfWeights(c, p.info().units()));
+        // every level's line loads, an unframed level's too: the derivation refuses those, so clearing the bays
+        // beneath a load is refused rather than leaving the load carried by nothing
+        Building b = new Building(p.info().name(), ctx, grid, levels).withSelfWeights(selfWeights(c, p.info().units()))
+                .withLineLoads(LineLoadStore.forBuilding(c, grid, stored));
         return new Model(p, OccupancyStore.catalogueVersion(c), b, stored, unframed, Results.firmVersion(c));
     }
 

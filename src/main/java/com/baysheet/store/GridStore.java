@@ -32,12 +32,14 @@ public final class GridStore {
 
     /**
      * Replaces the grid, keeping each line's id where {@link LineMatch} finds the line again: bays split at an
-     * inserted line and merge at a removed one ({@link BayRegrid}), or the change is refused naming the bays.
+     * inserted line and merge at a removed one ({@link BayRegrid}), or the change is refused naming the bays; a
+     * line a line load runs along or ends at is not removed ({@link LineLoadStore#requireLines}).
      */
     public void save(Editor who, long projectId, long version, Grid grid) {
         writes.change(who, c -> "grid saved: " + describe(grid) + "; was: " + describe(find(c, projectId)), projectId, version, c -> {
             Grid before = find(c, projectId);
             Grid after = withIds(c, projectId, grid, LineMatch.ids(before.x(), grid.x()), LineMatch.ids(before.y(), grid.y()));
+            LineLoadStore.requireLines(c, projectId, before, after);
             BayRegrid.apply(c, projectId, before, after);
             write(c, projectId, after);
             return null;

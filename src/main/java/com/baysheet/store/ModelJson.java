@@ -100,6 +100,18 @@ public final class ModelJson {
         return cells;
     }
 
+    /**
+     * A line load: {@code line}, {@code from} and {@code to} by grid line name (a whole number such as 2 is read as
+     * the name "2"), {@code axis} only where a name is on both axes; {@code dead}, or {@code deadPressure} and
+     * {@code height}; {@code live} (default 0) with {@code liveOccupancy}; {@code partitionWall} (default false).
+     */
+    public static LineLoadEntry lineLoad(JsonNode n) {
+        return new LineLoadEntry(n.hasNonNull("axis") ? choice(n, "axis", "X", "Y").toLowerCase() : null,
+                lineName(n, "line"), lineName(n, "from"), lineName(n, "to"), text(n, "label"), optNumber(n, "dead"),
+                optNumber(n, "deadPressure"), optNumber(n, "height"), n.hasNonNull("live") ? number(n, "live") : 0,
+                n.hasNonNull("liveOccupancy") ? text(n, "liveOccupancy") : null, flag(n, "partitionWall"));
+    }
+
     public static FirmOccupancy firmOccupancy(JsonNode n) {
         return new FirmOccupancy(text(n, "id"), text(n, "name"), UnitSystem.parse("units", text(n, "units")),
                 number(n, "uniform"), n.has("concentrated") ? number(n, "concentrated") : 0, number(n, "contactSide"),
@@ -174,6 +186,11 @@ public final class ModelJson {
         JsonNode v = n.path(key);
         if (!v.isNumber()) throw new InputError(field, v.isMissingNode() ? "nothing" : v, "must be a number");
         return v.asDouble();
+    }
+
+    private static String lineName(JsonNode n, String field) {
+        JsonNode v = n.path(field);
+        return v.isIntegralNumber() && v.canConvertToInt() ? v.asText() : text(n, field);
     }
 
     private static int integer(JsonNode n, String field) {

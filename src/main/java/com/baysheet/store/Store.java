@@ -9,7 +9,7 @@ import java.util.function.Function;
 
 /** All of the store over one database, wired once. */
 public record Store(ProjectStore projects, GridStore grids, LevelStore levels, BayStore bays,
-                    OccupancyStore occupancies, Results results) {
+                    OccupancyStore occupancies, Results results, LineLoadStore lineLoads) {
 
     /**
      * @param derive the framing derivation, run to validate each model change, to supersede what it changes
@@ -21,6 +21,7 @@ public record Store(ProjectStore projects, GridStore grids, LevelStore levels, B
         ModelWrites writes = new ModelWrites(sql, derive);
         OccupancyStore occupancies = new OccupancyStore(sql);
         return new Store(new ProjectStore(writes), new GridStore(writes), new LevelStore(writes),
-                new BayStore(writes, occupancies), occupancies, new Results(sql, derive));
+                new BayStore(writes, occupancies), occupancies, new Results(sql, derive),
+                new LineLoadStore(writes));
     }
 }

@@ -10,7 +10,7 @@ import io.javalin.http.Context;
 
 import java.util.Map;
 
-/** The JSON API for the model: projects, grid, levels, bays and the firm's occupancies. See docs/api.md. */
+/** The JSON API for the model: projects, grid, levels, bays, line loads and the firm's occupancies. See docs/api.md. */
 final class ApiRoutes {
     private final Store store;
 
@@ -33,6 +33,10 @@ final class ApiRoutes {
                 store.bays().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList()));
         r.post("/api/projects/{project}/levels/{level}/bays", this::assignBays);
         r.post("/api/projects/{project}/levels/{level}/bays/clear", this::clearBays);
+        r.get("/api/projects/{project}/levels/{level}/line-loads", ctx -> Json.send(ctx,
+                store.lineLoads().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.LineLoadJson::of).toList()));
+        r.post("/api/projects/{project}/levels/{level}/line-loads", this::addLineLoad);
+        r.delete("/api/projects/{project}/levels/{level}/line-loads/{lineLoad}", this::deleteLineLoad);
         r.get("/api/occupancies", ctx -> Json.send(ctx, store.occupancies().findAll()));
         r.post("/api/occupancies", ctx -> {
             store.occupancies().add(Editors.of(ctx), ModelJson.firmOccupancy(Json.body(ctx)));
@@ -103,6 +107,20 @@ final class ApiRoutes {
         long id = Ids.project(ctx);
         store.bays().clear(Editors.of(ctx), id, ModelJson.version(body), Ids.level(ctx), ModelJson.cells(body, store.grids().find(id)));
         saved(ctx, 200, id, store.bays().findByLevel(id, Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList());
+    }
+
+    void addLineLoad(Context ctx) {
+        JsonNode body = Json.body(ctx);
+        long id = Ids.project(ctx);
+        var saved = store.lineLoads().add(Editors.of(ctx), id, ModelJson.version(body), Ids.level(ctx), ModelJson.lineLoad(body));
+        ctx.header("Location", "/api/projects/" + id + "/levels/" + Ids.level(ctx) + "/line-loads/" + saved.id());
+        saved(ctx, 201, id, ApiViews.LineLoadJson.of(saved));
+    }
+
+    void deleteLineLoad(Context ctx) {
+        long id = Ids.project(ctx);
+        store.lineLoads().delete(Editors.of(ctx), id, queryVersion(ctx.queryParam("version")), Ids.level(ctx), Ids.lineLoad(ctx));
+        saved(ctx, 200, id, Map.of("deleted", Ids.lineLoad(ctx)));
     }
 
     /** Answers a model change with the project's new version, which the next change must carry. */

@@ -6,6 +6,7 @@ import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.TakeDown;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.store.StoredLevel;
+import com.baysheet.store.StoredLineLoad;
 
 import java.util.List;
 import java.util.Map;
@@ -36,6 +37,16 @@ final class ApiViews {
             b.cantilevers().forEach((s, v) -> c.put(s.name().toLowerCase(), v));
             return new BayJson(b.col(), b.row(), false, b.occupancy(), b.deadLoad(), b.framing().beams().name(),
                     b.framing().infillBeams(), c, b.cantileverOccupancy());
+        }
+    }
+
+    /** A line load by its grid line names; deadPressure and height null unless the dead load was entered as cladding. */
+    record LineLoadJson(long id, String axis, String line, String from, String to, String label, double dead,
+                        Double deadPressure, Double height, double live, String liveOccupancy, boolean partitionWall) {
+        static LineLoadJson of(StoredLineLoad l) {
+            return new LineLoadJson(l.id(), l.axis(), l.line(), l.from(), l.to(), l.label(), l.dead(),
+                    l.cladding() ? l.deadPressure() : null, l.cladding() ? l.height() : null, l.live(), l.liveOccupancy(),
+                    l.partitionWall());
         }
     }
 

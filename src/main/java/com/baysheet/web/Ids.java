@@ -11,6 +11,8 @@ final class Ids {
 
     static long level(Context ctx) { return id(ctx, "level"); }
 
+    static long lineLoad(Context ctx) { return id(ctx, "lineLoad"); }
+
     private static long id(Context ctx, String name) {
         String text = ctx.pathParam(name);
         try {

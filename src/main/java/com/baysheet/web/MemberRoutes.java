@@ -57,7 +57,7 @@ final class MemberRoutes {
         m.put("supportedArea", member.role() != MemberRole.COLUMN ? null
                 : member.result().floorReduction().map(lf -> units.area(lf.tributaryArea())).orElse(null));
         m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), member,
-                c.model().building().context().catalogue(), href));
+                c.model().building().context().catalogue(), href, c.model().building().lineLoads()));
         ctx.render("members/show", m);
     }
 

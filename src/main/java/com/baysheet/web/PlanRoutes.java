@@ -36,7 +36,8 @@ final class PlanRoutes {
                 .filter(l -> l.name().equals(stored.name())).findFirst().orElse(null);
         if (level != null)
             m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), null,
-                    c.model().building().context().catalogue(), "/projects/" + c.project().id() + "/members/{id}"));
+                    c.model().building().context().catalogue(), "/projects/" + c.project().id() + "/members/{id}",
+                    c.model().building().lineLoads()));
         ctx.render("plan/show", m);
     }
 }

@@ -22,6 +22,14 @@ final class PlanSvg {
              .append("<text x=\"").append(n(t.x())).append("\" y=\"").append(n(t.y() + 4)).append("\" text-anchor=\"middle\">")
              .append(esc(t.title())).append("</text></g>");
         }
+        for (PlanView.Shape l : p.lineLoads()) {
+            double mx = (l.x() + l.x2()) / 2, my = (l.y() + l.y2()) / 2;
+            boolean vertical = l.x() == l.x2();
+            s.append("<g class=\"line-load\"><title>").append(esc("line load: " + l.title())).append("</title>");
+            line(s, l, "line-load").append("/>");
+            s.append("<text x=\"").append(n(vertical ? mx + 8 : mx)).append("\" y=\"").append(n(vertical ? my : my - 8))
+             .append(vertical ? "\" text-anchor=\"start\">" : "\" text-anchor=\"middle\">").append(esc(l.title())).append("</text></g>");
+        }
         for (PlanView.Shape t : p.tributary()) rect(s, t, "tributary").append("><title>tributary area</title></rect>");
         for (PlanView.Shape m : p.members()) {
             s.append("<a href=\"").append(esc(m.href())).append("\"><title>").append(esc(m.title())).append("</title>");

@@ -7,6 +7,7 @@ import com.baysheet.framing.PlanLine;
 import com.baysheet.framing.PlanRect;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.GridLineLoad;
 import com.baysheet.framing.model.Level;
 import com.baysheet.framing.model.Side;
 
@@ -18,12 +19,18 @@ import java.util.Map;
 /**
  * A level's framing plan as SVG shapes, in screen units: grid lines with their names, bays shaded by
  * occupancy (with a legend), cantilever slabs, openings, members (each a link to its page) and the
- * selected member's tributary outline. Plan y (north) points up.
+ * selected member's tributary outline, and the level's line loads as thick labelled lines. Plan y (north) points up.
  */
 record PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
-                List<Shape> members, List<Shape> tributary, Map<String, String> legend) {
+                List<Shape> members, List<Shape> tributary, Map<String, String> legend, List<Shape> lineLoads) {
     /** One drawn thing: a rectangle (x, y, w, h) or a line (x, y to x2, y2), with its class, fill, link and tooltip. */
     record Shape(double x, double y, double w, double h, double x2, double y2, String cls, String fill, String href, String title) {}
+
+    /** A plan without line loads. */
+    PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
+             List<Shape> members, List<Shape> tributary, Map<String, String> legend) {
+        this(width, height, bays, gridLines, gridLabels, members, tributary, legend, List.of());
+    }
 
     private static final double MAX_W = 760, MAX_H = 560, PAD = 36;
 
@@ -31,7 +38,7 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
     public String svg() { return PlanSvg.of(this); }
 
     static PlanView of(Grid g, Level level, List<DerivedMember> members, DerivedMember selected,
-                       OccupancyCatalogue cat, String memberHref) {
+                       OccupancyCatalogue cat, String memberHref, List<GridLineLoad> lineLoads) {
         Frame f = Frame.of(g, level);
         Palette palette = new Palette(cat);
         Map<String, String> legend = new LinkedHashMap<>();
@@ -73,7 +80,9 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
         for (DerivedMember m : members) drawn.add(f.member(m, selected, memberHref.replace("{id}", m.id())));
         List<Shape> trib = new ArrayList<>();
         if (selected != null) for (PlanRect r : selected.tributary()) trib.add(f.rect(r.x1(), r.y1(), r.x2(), r.y2(), "tributary", "none", null, "tributary area"));
-        return new PlanView(f.width(), f.height(), bays, lines, labels, drawn, trib, legend);
+        List<Shape> loads = new ArrayList<>();
+        for (GridLineLoad l : lineLoads) if (l.level().equals(level.name())) loads.add(f.lineLoad(g, l));
+        return new PlanView(f.width(), f.height(), bays, lines, labels, drawn, trib, legend, loads);
     }
 
     /** Plan coordinates to screen coordinates: one scale, y flipped, a margin for the grid names. */
@@ -107,6 +116,16 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
 
         Shape line(double x1, double y1, double x2, double y2, String cls, String href, String title) {
             return new Shape(sx(x1), sy(y1), 0, 0, sx(x2), sy(y2), cls, "none", href, title);
+        }
+
+        /** A thick line along the load's grid line from one bounding line to the other; its title is the label. */
+        Shape lineLoad(Grid g, GridLineLoad l) {
+            if (l.onXLine()) {
+                double x = g.x().position(l.line());
+                return line(x, g.y().position(l.from()), x, g.y().position(l.to()), "line-load", null, l.label());
+            }
+            double y = g.y().position(l.line());
+            return line(g.x().position(l.from()), y, g.x().position(l.to()), y, "line-load", null, l.label());
         }
 
         Shape label(double x, double y, double dx, double dy, String text) {

@@ -62,6 +62,7 @@ public final class Server {
             new ProjectRoutes(store).install(cfg.routes);
             new LevelRoutes(store).install(cfg.routes);
             new BayRoutes(store).install(cfg.routes);
+            new LineLoadRoutes(store).install(cfg.routes);
             new PlanRoutes(store).install(cfg.routes);
             new MemberRoutes(store).install(cfg.routes);
             new TakeDownRoutes(store).install(cfg.routes);

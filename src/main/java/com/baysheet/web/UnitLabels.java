@@ -22,5 +22,10 @@ public record UnitLabels(UnitSystem system, String length, String area, String p
 
     public String pressure(double base) { return Display.of(base, Quantity.PRESSURE, system); }
 
+    /** The unit of a load per length (plf or kN/m). */
+    public String perLength() { return Quantity.LINE_LOAD.unit(system).symbol(); }
+
+    public String lineLoad(double base) { return Display.of(base, Quantity.LINE_LOAD, system); }
+
     public String number(double v) { return Display.sig3(v); }
 }

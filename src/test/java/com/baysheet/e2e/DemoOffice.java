@@ -89,6 +89,7 @@ final class DemoOffice implements AutoCloseable {
         ids.put("project", project);
         String p = "/projects/" + project;
         ids.put("level", first(eng, "/api" + p + "/levels", "id"));
+        ids.put("lineLoad", firstLineLoad(eng, "/api" + p));
         String member = first(eng, "/api" + p + "/members", "id");
         ids.put("member", member);
         ids.put("stack", first(eng, "/api" + p + "/takedowns", "id"));
@@ -145,6 +146,15 @@ final class DemoOffice implements AutoCloseable {
     }
 
     /** A field of the first element of the JSON list at this path. */
+    /** The demo's first line load, on whichever level carries one. */
+    private static String firstLineLoad(OfficeClient c, String project) throws IOException {
+        for (JsonNode level : JSON.readTree(OfficeClient.expect(c.get(project + "/levels"), 200).body())) {
+            JsonNode loads = JSON.readTree(OfficeClient.expect(c.get(project + "/levels/" + level.path("id").asText() + "/line-loads"), 200).body());
+            if (!loads.isEmpty()) return loads.get(0).path("id").asText();
+        }
+        throw new IllegalStateException(project + " has no line load in the demo");
+    }
+
     static String first(OfficeClient c, String path, String field) throws IOException {
         JsonNode list = JSON.readTree(OfficeClient.expect(c.get(path), 200).body());
         if (!list.isArray() || list.isEmpty()) throw new IllegalStateException(path + " lists nothing in the demo");

@@ -23,9 +23,12 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 /** The store's behaviour, run against each database with the real migrations. */
-abstract class StoreContract {
+abstract class StoreContract implements LineLoadContract {
     protected Database db;
     protected Store store;
+
+    @Override
+    public Store store() { return store; }
 
     /** A URL of an empty database for one test. */
     protected abstract String freshUrl();

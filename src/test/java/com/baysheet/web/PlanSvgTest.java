@@ -37,4 +37,12 @@ class PlanSvgTest {
         assertThat(svg).contains("<rect x=\"1\" y=\"1\" width=\"4\" height=\"4\" class=\"member column\"/>")
                 .contains("<line x1=\"0\" y1=\"0\" x2=\"9\" y2=\"0\" class=\"member beam\"/>");
     }
+
+    @Test
+    void aLineLoadIsAThickLineWithItsLabelEscaped() {
+        PlanView.Shape wall = new PlanView.Shape(10, 20, 0, 0, 10, 60, "line-load", "none", null, "Wall <A&B>");
+        String svg = new PlanView(100, 80, List.of(), List.of(), List.of(), List.of(), List.of(), Map.of(), List.of(wall)).svg();
+        assertThat(svg).contains("<line x1=\"10\" y1=\"20\" x2=\"10\" y2=\"60\" class=\"line-load\"/>")
+                .contains("<text x=\"18\" y=\"40\" text-anchor=\"start\">Wall &lt;A&amp;B&gt;</text>").doesNotContain("<A&B>");
+    }
 }

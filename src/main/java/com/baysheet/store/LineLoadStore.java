@@ -1,0 +1,156 @@
+package com.baysheet.store;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.GridAxis;
+import com.baysheet.framing.model.GridLineLoad;
+
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The line loads of a level, stored by the stable ids of their grid lines. Adding one derives the building
+ * like every model change, so a load with no member beneath it is refused and nothing is saved; the grid
+ * store refuses to remove a line a load runs along or ends at ({@link #requireLines}).
+ */
+public final class LineLoadStore {
+    private final ModelWrites writes;
+
+    public LineLoadStore(ModelWrites writes) {
+        this.writes = writes;
+    }
+
+    public List<StoredLineLoad> findByLevel(long projectId, long levelId) {
+        return writes.sql().tx(c -> {
+            LevelStore.find(c, projectId, levelId);
+            return findByLevel(c, levelId, GridStore.find(c, projectId));
+        });
+    }
+
+    public StoredLineLoad add(Editor who, long projectId, long version, long levelId, LineLoadEntry e) {
+        try {
+            long id = change(who, "line load added: " + e.label(), projectId, version, c -> insert(c, projectId, levelId, e));
+            return findByLevel(projectId, levelId).stream().filter(l -> l.id() == id).findFirst().orElseThrow();
+        } catch (InputError err) {
+            throw LineLoadRefusal.asEntryField(err, e.label());
+        }
+    }
+
+    public void delete(Editor who, long projectId, long version, long levelId, long id) {
+        change(who, "line load " + id + " deleted", projectId, version, c -> {
+            LevelStore.find(c, projectId, levelId);
+            try (PreparedStatement ps = c.prepareStatement("DELETE FROM line_load WHERE id = ? AND level_id = ?")) {
+                ps.setLong(1, id);
+                ps.setLong(2, levelId);
+                if (ps.executeUpdate() == 0) throw new NotFound("line load", id);
+            }
+            return id;
+        });
+    }
+
+    /** The one place this store changes the model (the project's version is claimed there). */
+    private <T> T change(Editor who, String action, long projectId, long version, Sql.Work<T> work) {
+        return writes.change(who, action, projectId, version, work);
+    }
+
+    private static long insert(Connection c, long projectId, long levelId, LineLoadEntry e) throws SQLException {
+        LevelStore.find(c, projectId, levelId);
+        Grid g = GridStore.find(c, projectId);
+        LineRef ref = LineRef.resolve(g, e);
+        // checked here as well as by the derivation: an unknown id must not reach the column (80 characters)
+        if (e.liveOccupancy() != null && !OccupancyStore.catalogue(c).contains(e.liveOccupancy()))
+            throw new InputError("liveOccupancy", e.liveOccupancy(), "is not in the occupancy catalogue");
+        for (StoredLineLoad other : findByLevel(c, levelId, g))
+            if (other.label().equalsIgnoreCase(e.label()))
+                throw new InputError("label", e.label(), "is already the label of a line load on this level");
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO line_load (level_id, axis, line_id, from_line_id, "
+                + "to_line_id, label, dead_load, dead_pressure, height, live_load, live_occupancy, partition_wall) "
+                + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
+            ps.setLong(1, levelId);
+            ps.setString(2, ref.axis());
+            ps.setInt(3, ref.line());
+            ps.setInt(4, ref.from());
+            ps.setInt(5, ref.to());
+            ps.setString(6, e.label());
+            ps.setDouble(7, e.deadLoad());
+            Sql.setDouble(ps, 8, e.deadPressure());
+            Sql.setDouble(ps, 9, e.height());
+            ps.setDouble(10, e.live());
+            ps.setString(11, e.liveOccupancy());
+            ps.setBoolean(12, e.partitionWall());
+            ps.executeUpdate();
+            try (ResultSet keys = ps.getGeneratedKeys()) {
+                keys.next();
+                return keys.getLong(1);
+            }
+        }
+    }
+
+    static List<StoredLineLoad> findByLevel(Connection c, long levelId, Grid g) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT * FROM line_load WHERE level_id = ? ORDER BY id")) {
+            ps.setLong(1, levelId);
+            List<StoredLineLoad> out = new ArrayList<>();
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) out.add(read(rs, g));
+            }
+            return out;
+        }
+    }
+
+    /** The building's line loads on these levels, by line position (levels named as the building names them). */
+    static List<GridLineLoad> forBuilding(Connection c, Grid g, List<StoredLevel> levels) throws SQLException {
+        List<GridLineLoad> out = new ArrayList<>();
+        for (StoredLevel level : levels) {
+            try (PreparedStatement ps = c.prepareStatement("SELECT * FROM line_load WHERE level_id = ? ORDER BY id")) {
+                ps.setLong(1, level.id());
+                try (ResultSet rs = ps.executeQuery()) {
+                    while (rs.next()) out.add(LineRef.of(rs).onGrid(g, level.name(), rs));
+                }
+            }
+        }
+        return out;
+    }
+
+    /**
+     * Refuses a grid change that would remove a line a load runs along or ends at, naming the load: the
+     * engineer deletes the load first, so nothing is dropped silently.
+     */
+    static void requireLines(Connection c, long projectId, Grid before, Grid after) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT b.name AS level_name, ll.label, ll.axis, ll.line_id, "
+                + "ll.from_line_id, ll.to_line_id FROM line_load ll JOIN building_level b ON b.id = ll.level_id "
+                + "WHERE b.project_id = ? ORDER BY ll.id")) {
+            ps.setLong(1, projectId);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    boolean onX = rs.getString("axis").equals("x");
+                    GridAxis own = onX ? before.x() : before.y(), across = onX ? before.y() : before.x();
+                    GridAxis ownAfter = onX ? after.x() : after.y(), acrossAfter = onX ? after.y() : after.x();
+                    String where = "line load \"" + rs.getString("label") + "\" on " + rs.getString("level_name");
+                    if (ownAfter.indexOf(rs.getInt("line_id")) < 0) throw kept(own, rs.getInt("line_id"), "runs along it", where);
+                    for (String end : List.of("from_line_id", "to_line_id"))
+                        if (acrossAfter.indexOf(rs.getInt(end)) < 0) throw kept(across, rs.getInt(end), "ends at it", where);
+                }
+            }
+        }
+    }
+
+    private static InputError kept(GridAxis a, int lineId, String how, String load) {
+        String name = a.name(a.indexOf(lineId));
+        return new InputError("grid." + a.axis() + ".names", name, "grid line " + name + " cannot be removed: the "
+                + load + " " + how + ". Delete that line load first (the level's line loads page)");
+    }
+
+    private static StoredLineLoad read(ResultSet rs, Grid g) throws SQLException {
+        LineRef ref = LineRef.of(rs);
+        GridAxis own = ref.onX() ? g.x() : g.y(), across = ref.onX() ? g.y() : g.x();
+        return new StoredLineLoad(rs.getLong("id"), rs.getLong("level_id"), ref.axis(), ref.name(own, ref.line()),
+                ref.name(across, ref.from()), ref.name(across, ref.to()), rs.getString("label"), rs.getDouble("dead_load"),
+                Sql.getDouble(rs, "dead_pressure"), Sql.getDouble(rs, "height"), rs.getDouble("live_load"),
+                rs.getString("live_occupancy"), rs.getBoolean("partition_wall"));
+    }
+}
