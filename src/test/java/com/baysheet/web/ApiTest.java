@@ -2,9 +2,8 @@ package com.baysheet.web;
 
 import com.baysheet.engine.record.RecordJson;
 import com.fasterxml.jackson.databind.JsonNode;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 
@@ -12,13 +11,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /** The JSON API: a project entered from nothing to member records, with the same validation as the forms. */
 class ApiTest {
-    static TestServer server;
-
-    @BeforeAll
-    static void start() { server = new TestServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
 
     static JsonNode json(HttpResponse<String> r) throws Exception { return RecordJson.mapper().readTree(r.body()); }
 

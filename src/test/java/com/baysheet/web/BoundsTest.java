@@ -9,9 +9,8 @@ import com.baysheet.store.LevelInfo;
 import com.baysheet.store.ProjectInfo;
 import com.baysheet.store.StoredLevel;
 import com.fasterxml.jackson.databind.JsonNode;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.ArrayList;
@@ -26,13 +25,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /** Bounded work: a request that asks for too much, or for an absurd number, is refused naming the field. */
 class BoundsTest {
-    static TestServer server;
-
-    @BeforeAll
-    static void start() { server = new TestServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
 
     static JsonNode json(HttpResponse<String> r) throws Exception { return RecordJson.mapper().readTree(r.body()); }
 

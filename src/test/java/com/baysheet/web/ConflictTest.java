@@ -1,9 +1,8 @@
 package com.baysheet.web;
 
 import com.baysheet.store.StoredLevel;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.List;
@@ -13,13 +12,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /** Two people editing the same project: the second save, based on the old version, is refused and overwrites nothing. */
 class ConflictTest {
-    static TestServer server;
-
-    @BeforeAll
-    static void start() { server = new TestServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
 
     @Test
     void aFormPostedOverAStaleVersionIsRefusedWithAClearMessage() {

@@ -1,9 +1,8 @@
 package com.baysheet.web;
 
 import com.baysheet.store.StoredLevel;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.List;
@@ -13,13 +12,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /** A person enters a new project through the forms alone, from nothing to member calculations. */
 class EntryFlowTest {
-    static TestServer server;
-
-    @BeforeAll
-    static void start() { server = new TestServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
 
     static HttpResponse<String> saved(HttpResponse<String> r) {
         assertThat(r.statusCode()).as(r.body()).isEqualTo(303);

@@ -1,9 +1,9 @@
 package com.baysheet.web;
 
 import com.baysheet.framing.model.Grid;
-import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.List;
@@ -17,17 +17,14 @@ import static org.assertj.core.api.Assertions.assertThat;
  * and shown back, and a form with several bad fields shows every refusal at once with the text as typed.
  */
 class LengthEntryTest {
-    static TestServer server;
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
     static long project;
 
     @BeforeAll
     static void start() {
-        server = new TestServer();
         project = server.alder().id();
     }
-
-    @AfterAll
-    static void stop() { server.close(); }
 
     @Test
     void aGridInFeetAndInchesIsStoredInFeetAndShownBack() {

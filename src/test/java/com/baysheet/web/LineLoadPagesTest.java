@@ -4,9 +4,9 @@ import com.baysheet.engine.record.RecordJson;
 import com.baysheet.store.StoredLevel;
 import com.baysheet.store.StoredLineLoad;
 import com.fasterxml.jackson.databind.JsonNode;
-import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.ArrayList;
@@ -22,17 +22,14 @@ import static org.assertj.core.api.Assertions.assertThat;
  * that needs its confirmation.
  */
 class LineLoadPagesTest {
-    static TestServer server;
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
     static long project;
 
     @BeforeAll
     static void start() {
-        server = new TestServer();
         project = server.alder().id();
     }
-
-    @AfterAll
-    static void stop() { server.close(); }
 
     static long level(String name) {
         return server.store.levels().findByProject(project).stream().filter(l -> l.name().equals(name))

@@ -1,8 +1,7 @@
 package com.baysheet.web;
 
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 import java.util.List;
@@ -11,13 +10,8 @@ import static java.util.Map.entry;
 import static org.assertj.core.api.Assertions.assertThat;
 
 class ProjectPagesTest {
-    static TestServer server;
-
-    @BeforeAll
-    static void start() { server = new TestServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
 
     @Test
     void projectListShowsTheDemoProjects() {

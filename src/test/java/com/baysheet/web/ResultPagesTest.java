@@ -5,9 +5,9 @@ import com.baysheet.engine.record.Step;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.TakeDown;
 import com.baysheet.store.Results;
-import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 import java.net.http.HttpResponse;
 
@@ -16,17 +16,14 @@ import static org.assertj.core.api.Assertions.assertThat;
 /** The result pages of the demo, checked against the records they render. */
 class ResultPagesTest {
     static final String CAUTION = "for review by a licensed engineer";
-    static TestServer server;
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
     static Results.Computed alder;
 
     @BeforeAll
     static void start() {
-        server = new TestServer();
         alder = server.store.results().of(server.alder().id());
     }
-
-    @AfterAll
-    static void stop() { server.close(); }
 
     static String html(String s) {
         return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;").replace("'", "&#39;");

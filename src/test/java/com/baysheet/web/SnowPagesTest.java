@@ -5,9 +5,8 @@ import com.baysheet.framing.MemberRole;
 import com.baysheet.store.Project;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
@@ -22,13 +21,8 @@ import static org.assertj.core.api.Assertions.within;
 
 /** The project's snow inputs on the settings form and the API, and the snow they put on roof members. */
 class SnowPagesTest {
-    static TestServer server;
-
-    @BeforeAll
-    static void start() { server = new TestServer(); }
-
-    @AfterAll
-    static void stop() { server.close(); }
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
 
     static List<Map.Entry<String, String>> settings(Project p, Map<String, String> snow) {
         var i = p.info();

@@ -6,6 +6,10 @@ import com.baysheet.store.Demo;
 import com.baysheet.store.Project;
 import com.baysheet.store.Store;
 import io.javalin.Javalin;
+import org.junit.jupiter.api.extension.RegisterExtension;
+import org.junit.jupiter.api.extension.AfterAllCallback;
+import org.junit.jupiter.api.extension.BeforeAllCallback;
+import org.junit.jupiter.api.extension.ExtensionContext;
 
 import java.io.IOException;
 import java.net.URI;
@@ -19,15 +23,32 @@ import java.util.Map;
 import java.util.UUID;
 import java.util.stream.Collectors;
 
-/** A real server on a random port over a fresh H2 memory database with the demo loaded, and a client for it. */
-final class TestServer implements AutoCloseable {
-    final Database db;
-    final Store store;
-    final Javalin app;
-    final List<Project> demo;
+/**
+ * A real server on a random port over a fresh H2 memory database with the demo loaded, and a client for it.
+ * {@code new TestServer()} starts one at once; as a JUnit extension ({@code @RegisterExtension static final
+ * TestServer server = TestServer.perClass();}) it starts before a class's first test and stops after its last.
+ */
+final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCallback {
+    Database db;
+    Store store;
+    Javalin app;
+    List<Project> demo;
     private final HttpClient client = HttpClient.newBuilder().followRedirects(HttpClient.Redirect.NEVER).build();
 
-    TestServer() {
+    TestServer() { start(); }
+
+    private TestServer(boolean later) {}
+
+    /** A server for one test class, started by JUnit. */
+    static TestServer perClass() { return new TestServer(true); }
+
+    @Override
+    public void beforeAll(ExtensionContext c) { if (app == null) start(); }
+
+    @Override
+    public void afterAll(ExtensionContext c) { close(); }
+
+    private void start() {
         db = Database.open("jdbc:h2:mem:w" + UUID.randomUUID().toString().replace("-", "")
                 + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
         store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());

@@ -1,7 +1,7 @@
 package com.baysheet.web;
 
 import com.baysheet.store.StoredLevel;
-import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.extension.RegisterExtension;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
@@ -21,20 +21,17 @@ import static org.assertj.core.api.Assertions.assertThat;
  * beside that field, the value as typed is shown again, and nothing is saved (the version is unchanged).
  */
 class ValidationTest {
-    static TestServer server;
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
     static long project;
     static long level;
 
     @BeforeAll
     static void start() {
-        server = new TestServer();
         project = server.alder().id();
         StoredLevel l2 = server.store.levels().findByProject(project).stream().filter(l -> l.name().equals("Level 2")).findFirst().orElseThrow();
         level = l2.id();
     }
-
-    @AfterAll
-    static void stop() { server.close(); }
 
     /** A form, its valid values, the numeric field under test and a value it must refuse. */
     static Stream<Arguments> refusals() {

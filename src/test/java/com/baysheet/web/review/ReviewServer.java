@@ -18,6 +18,7 @@ import com.baysheet.store.Store;
 import com.baysheet.web.Server;
 import com.baysheet.web.TestLogin;
 import io.javalin.Javalin;
+import org.junit.jupiter.api.extension.RegisterExtension;
 import org.junit.jupiter.api.extension.AfterAllCallback;
 import org.junit.jupiter.api.extension.BeforeAllCallback;
 import org.junit.jupiter.api.extension.ExtensionContext;
