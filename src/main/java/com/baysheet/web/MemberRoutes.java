@@ -38,6 +38,7 @@ final class MemberRoutes {
         m.put("filter", filter);
         m.put("roles", MemberRole.values());
         m.put("kinds", MemberKind.values());
+        m.put("kllClause", kllClause(c));
         ctx.render("members/list", m);
     }
 
@@ -52,13 +53,18 @@ final class MemberRoutes {
         m.put("record", member.result().record());
         UnitLabels units = UnitLabels.of(c.project().info().units());
         m.put("row", MemberRow.of(member, "", units));
-        m.put("kllClause", c.model().building().context().edition().clause("reduction.kll").label());
+        m.put("kllClause", kllClause(c));
         // a column's area is this level's; the A_T it is reduced with is cumulative over the floors it supports
         m.put("supportedArea", member.role() != MemberRole.COLUMN ? null
                 : member.result().floorReduction().map(lf -> units.area(lf.tributaryArea())).orElse(null));
         m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), member,
                 c.model().building().context().catalogue(), href, c.model().building().lineLoads()));
         ctx.render("members/show", m);
+    }
+
+    /** The project's edition numbers its K_LL table (ASCE 7-16 Table 4.7-1, ASCE 7-10 Table 4-2): the label is data. */
+    private static String kllClause(Results.Computed c) {
+        return c.model().building().context().edition().clause("reduction.kll").label();
     }
 
     static Map<String, Object> base(Results.Computed c) {

@@ -70,6 +70,17 @@ class ResultPagesTest {
     }
 
     @Test
+    void memberListNamesTheKllTableAsTheProjectsEditionNumbersIt() {
+        assertThat(server.get(base() + "/members").body()).contains("Kind (<span>ASCE 7-16 Table 4.7-1</span>)");
+        HttpResponse<String> made = server.json("POST", "/api/projects",
+                "{\"jobNumber\": \"26-710\", \"name\": \"Older Code Shed\", \"units\": \"US\", \"edition\": \"ASCE 7-10\"}");
+        assertThat(made.statusCode()).isEqualTo(201);
+        String path = made.headers().firstValue("Location").orElseThrow().replace("/api", "");
+        // ASCE 7-10 numbers its live load element factor table 4-2
+        assertThat(server.get(path + "/members").body()).contains("Kind (<span>ASCE 7-10 Table 4-2</span>)").doesNotContain("4.7-1");
+    }
+
+    @Test
     void takeDownPageTabulatesEveryLevelFromTheTop() {
         TakeDown t = alder.derived().takeDowns().stream().filter(s -> s.gridPoint().equals("C/2")).findFirst().orElseThrow();
         String body = server.get(base() + "/takedowns/" + t.id()).body();

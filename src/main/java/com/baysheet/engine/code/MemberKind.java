@@ -31,6 +31,6 @@ public enum MemberKind {
 
     public static MemberKind parse(String field, String text) {
         for (MemberKind k : values()) if (k.name().equalsIgnoreCase(text)) return k;
-        throw new com.baysheet.engine.InputError(field, text, "is not a member kind of Table 4.7-1");
+        throw new com.baysheet.engine.InputError(field, text, "is not a member kind of the live load element factor table");
     }
 }
