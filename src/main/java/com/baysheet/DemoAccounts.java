@@ -10,8 +10,8 @@ import java.util.function.Consumer;
 
 /**
  * With {@code --demo} only: an invented engineer and checker, so that a trial office can go through the check
- * at once. Their passwords are random and printed in the console; the program has no forced change at first
- * login, so the console says plainly that these are demo accounts (to be made inactive before real work).
+ * at once. Their passwords are random and printed in the console, so each must be changed at its first login;
+ * the console says plainly that these are demo accounts (to be made inactive before real work).
  */
 final class DemoAccounts {
     static final List<NewUser> PEOPLE = List.of(

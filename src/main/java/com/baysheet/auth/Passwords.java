@@ -3,12 +3,22 @@ package com.baysheet.auth;
 import com.baysheet.engine.InputError;
 import org.springframework.security.crypto.bcrypt.BCryptPasswordEncoder;
 
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import java.util.HashSet;
+import java.util.Locale;
+import java.util.Set;
 
 /**
  * Password hashing with bcrypt. The policy is length, not character classes: at least 10 characters, and
  * at most 72 bytes in UTF-8 because bcrypt ignores anything after the 72nd byte (a longer password would
- * silently match any password sharing its first 72 bytes).
+ * silently match any password sharing its first 72 bytes). Beyond length, a password on the shipped list of
+ * the commonest ones ({@code auth/common-passwords.txt}, compared without regard to case) is refused, and so
+ * is one equal to the username or the firm's name: those are the first guesses anyone makes.
  */
 public final class Passwords {
     /** The office default: about a quarter of a second per hash on the machines we run on. */
@@ -34,7 +44,46 @@ public final class Passwords {
         if (password.getBytes(StandardCharsets.UTF_8).length > MAX_BYTES)
             throw new InputError(field, "a longer one", "must be at most " + MAX_BYTES + " bytes (about 72 letters)");
         if (password.isBlank()) throw new InputError(field, "only spaces", "must not be only spaces");
+        if (Common.LIST.contains(password.strip().toLowerCase(Locale.ROOT)))
+            throw new InputError(field, "a common one", "is one of the most common passwords; choose another");
         return password;
+    }
+
+    /** As {@link #acceptable(String, String)}, and refused when it is the username or the firm's name. */
+    public static String acceptable(String field, String password, String username, String firmName) {
+        acceptable(field, password);
+        String p = plain(password);
+        if (!p.isEmpty() && p.equals(plain(username)))
+            throw new InputError(field, "the username", "must not be the username; choose another");
+        if (!p.isEmpty() && p.equals(plain(firmName)))
+            throw new InputError(field, "the firm's name", "must not be the firm's name; choose another");
+        return password;
+    }
+
+    /** Letters and digits only, in lower case: "Our Office" and "ouroffice" are one guess. */
+    private static String plain(String s) {
+        return s == null ? "" : s.toLowerCase(Locale.ROOT).replaceAll("[^\\p{L}\\p{N}]", "");
+    }
+
+    /** The shipped list, read once on first use. */
+    private static final class Common {
+        static final Set<String> LIST = load("/auth/common-passwords.txt");
+
+        private static Set<String> load(String resource) {
+            try (InputStream in = Passwords.class.getResourceAsStream(resource)) {
+                if (in == null) throw new IllegalStateException("missing resource " + resource);
+                Set<String> out = new HashSet<>();
+                try (BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8))) {
+                    for (String line; (line = r.readLine()) != null; ) {
+                        String w = line.strip().toLowerCase(Locale.ROOT);
+                        if (!w.isEmpty() && !w.startsWith("#")) out.add(w);
+                    }
+                }
+                return Set.copyOf(out);
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+        }
     }
 
     public String hash(String password) {

@@ -40,4 +40,22 @@ class PasswordsTest {
         String h = passwords.hash("y".repeat(72));
         assertThat(passwords.matches("y".repeat(72) + "extra", h)).isFalse();
     }
+
+    @Test
+    void refusesTheCommonestPasswordsWhateverTheirCase() {
+        for (String common : new String[] {"1234567890", "Password123", "QWERTYUIOP", " iloveyou1 "})
+            assertThatThrownBy(() -> Passwords.acceptable("password", common)).as(common).isInstanceOf(InputError.class)
+                    .hasMessageStartingWith("password: is one of the most common passwords; choose another");
+        assertThat(Passwords.acceptable("password", "tern street clinic roof")).isEqualTo("tern street clinic roof");
+    }
+
+    @Test
+    void refusesTheUsernameAndTheFirmsName() {
+        assertThatThrownBy(() -> Passwords.acceptable("newPassword", "Marisol.Quenby", "marisol.quenby", "Quenby Structures"))
+                .isInstanceOf(InputError.class).hasMessageStartingWith("newPassword:").hasMessageContaining("username");
+        assertThatThrownBy(() -> Passwords.acceptable("password", "quenbystructures", "mquenby", "Quenby Structures"))
+                .isInstanceOf(InputError.class).hasMessageStartingWith("password:").hasMessageContaining("firm's name");
+        assertThat(Passwords.acceptable("password", "quenby structures 7", "mquenby", "Quenby Structures"))
+                .isEqualTo("quenby structures 7");
+    }
 }

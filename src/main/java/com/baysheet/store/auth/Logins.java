@@ -66,7 +66,7 @@ public final class Logins {
         User u = found.get().user();
         audit.append(AuditEvent.of(u.id(), u.username(), "login", "user " + u.username(),
                 before > 0 ? before + " failed attempts before this login" : "", address));
-        return start(u, now).withFailedAttempts(before);
+        return start(u, now).withFailedAttempts(before).withMustChangePassword(found.get().mustChangePassword());
     }
 
     /** The administrator lifts a user's wait at once; the audit trail notes it with the attempts it had. */
@@ -95,7 +95,8 @@ public final class Logins {
             sessions.delete(hash);
             return Optional.empty();
         }
-        User u = users.find(s.get().userId());
+        UserStore.WithHash w = users.findById(s.get().userId());
+        User u = w.user();
         if (!u.active()) {
             sessions.deleteAll(u.id());
             return Optional.empty();
@@ -104,7 +105,7 @@ public final class Logins {
         // slide the expiry at most once a minute: a page view should not cost a database write
         if (expires.isAfter(s.get().expiresAt().plus(EXTEND_STEP))) sessions.extend(hash, expires);
         else expires = s.get().expiresAt();
-        return Optional.of(new SignedIn(u, token, s.get().csrfToken(), expires));
+        return Optional.of(new SignedIn(u, token, s.get().csrfToken(), expires).withMustChangePassword(w.mustChangePassword()));
     }
 
     public void logout(SignedIn s, String address) {
@@ -117,15 +118,20 @@ public final class Logins {
         UserStore.WithHash w = users.findByUsername(s.user().username()).orElseThrow();
         if (!policy.passwords().matches(current, w.passwordHash()))
             throw new InputError("currentPassword", "(hidden)", "is not your current password");
-        String hash = policy.passwords().hash(Passwords.acceptable("newPassword", confirmed(replacement, confirm)));
-        users.setPassword(s.user().id(), hash);
+        Passwords.acceptable("newPassword", confirmed(replacement, confirm), s.user().username(), users.firmName());
+        // a password someone else set stays known to them: keeping it would defeat the forced change
+        if (policy.passwords().matches(replacement, w.passwordHash()))
+            throw new InputError("newPassword", "(hidden)", "must differ from the current password");
+        String hash = policy.passwords().hash(replacement);
+        users.setPassword(s.user().id(), hash, false); // chosen by the person themselves
         sessions.deleteOthers(s.user().id(), Tokens.sha256(s.token()));
         audit.append(AuditEvent.of(s.user().id(), s.user().username(), "password changed", "user " + s.user().username(), "", address));
     }
 
     /** The one-time set-up: creates the first administrator and logs them in; empty once set-up is done. */
     public Optional<SignedIn> setUp(NewUser admin, String password, String confirm, String address) {
-        String hash = policy.passwords().hash(Passwords.acceptable("password", confirmed(password, confirm)));
+        String hash = policy.passwords().hash(Passwords.acceptable("password", confirmed(password, confirm),
+                admin.username(), users.firmName()));
         Optional<User> u = users.createFirstAdministrator(admin, hash);
         u.ifPresent(x -> audit.append(AuditEvent.of(x.id(), x.username(), "set-up", "user " + x.username(),
                 "first administrator created", address)));

@@ -11,7 +11,8 @@ import com.baysheet.store.review.AuditTrail;
 /**
  * What the administrator does to users: add one with a starting password, change a role, make a user
  * inactive or active again. An administrator cannot demote or deactivate themselves (the office would be
- * left with nobody to manage users). Every change goes to the audit trail.
+ * left with nobody to manage users). Every change goes to the audit trail. A password the administrator
+ * sets must be changed by its owner at the next login.
  */
 public final class UserAdmin {
     private final UserStore users;
@@ -27,7 +28,8 @@ public final class UserAdmin {
     }
 
     public User add(User admin, NewUser u, String password, String address) {
-        User made = users.create(u, passwords.hash(Passwords.acceptable("password", password)));
+        // the administrator knows this password: the person chooses their own at the first login
+        User made = users.create(u, passwords.hash(Passwords.acceptable("password", password, u.username(), users.firmName())), true);
         log(admin, "user added", made, made.role().label(), address);
         return made;
     }
@@ -52,7 +54,7 @@ public final class UserAdmin {
     /** The administrator sets a new password for someone who forgot theirs; their sessions end. */
     public void resetPassword(User admin, long userId, String password, String address) {
         User u = users.find(userId);
-        users.setPassword(userId, passwords.hash(Passwords.acceptable("password", password)));
+        users.setPassword(userId, passwords.hash(Passwords.acceptable("password", password, u.username(), users.firmName())), true);
         sessions.deleteAll(userId);
         log(admin, "password reset", u, "", address);
     }
@@ -63,7 +65,8 @@ public final class UserAdmin {
      */
     public java.util.Optional<User> addDemo(NewUser u, String password) {
         if (users.findByUsername(u.username()).isPresent()) return java.util.Optional.empty();
-        User made = users.create(u, passwords.hash(Passwords.acceptable("password", password)));
+        // printed in the console, so known to whoever reads it: changed at the first login
+        User made = users.create(u, passwords.hash(Passwords.acceptable("password", password, u.username(), users.firmName())), true);
         audit.append(AuditEvent.of(null, "demo", "user added", "user " + made.username(), made.role().label()
                 + " (demo account, password printed in the console)", "server"));
         return java.util.Optional.of(made);

@@ -19,10 +19,10 @@ import java.util.Optional;
 
 /** Users and their password hashes. Users are made inactive, never deleted. */
 public final class UserStore {
-    private static final String COLUMNS = "id, username, full_name, initials, role, active, password_hash";
+    private static final String COLUMNS = "id, username, full_name, initials, role, active, password_hash, must_change_password";
 
-    /** A user with the stored hash, for checking a login. */
-    public record WithHash(User user, String passwordHash) {}
+    /** A user with the stored hash, for checking a login, and whether someone else set that password. */
+    public record WithHash(User user, String passwordHash, boolean mustChangePassword) {}
 
     private final Sql sql;
 
@@ -41,7 +41,26 @@ public final class UserStore {
     }
 
     public User create(NewUser u, String passwordHash) {
-        return sql.tx(c -> insert(c, u, passwordHash));
+        return create(u, passwordHash, false);
+    }
+
+    /** @param mustChange the password was set by someone else, to be changed at the next login */
+    public User create(NewUser u, String passwordHash, boolean mustChange) {
+        return sql.tx(c -> {
+            User made = insert(c, u, passwordHash);
+            if (mustChange) setPassword(c, made.id(), passwordHash, true);
+            return made;
+        });
+    }
+
+    /** The firm's name as its sheets print it: a password may not be that. */
+    public String firmName() {
+        return sql.tx(c -> {
+            try (PreparedStatement ps = c.prepareStatement("SELECT firm_name FROM firm_setting WHERE id = 1");
+                 ResultSet rs = ps.executeQuery()) {
+                return rs.next() ? rs.getString(1) : "";
+            }
+        });
     }
 
     /**
@@ -72,6 +91,10 @@ public final class UserStore {
         return sql.tx(c -> one(c, "username = ?", username));
     }
 
+    public WithHash findById(long id) {
+        return sql.tx(c -> one(c, "id = ?", id)).orElseThrow(() -> new NotFound("user", id));
+    }
+
     public User find(long id) {
         return sql.tx(c -> one(c, "id = ?", id)).map(WithHash::user).orElseThrow(() -> new NotFound("user", id));
     }
@@ -87,8 +110,27 @@ public final class UserStore {
         });
     }
 
-    public void setPassword(long id, String passwordHash) {
-        update(id, "password_hash = ?", passwordHash);
+    /** @param mustChange true when someone other than the user set it (the administrator) */
+    public void setPassword(long id, String passwordHash, boolean mustChange) {
+        sql.tx(c -> {
+            setPassword(c, id, passwordHash, mustChange);
+            return null;
+        });
+    }
+
+    private static void setPassword(Connection c, long id, String hash, boolean mustChange) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("UPDATE app_user SET password_hash = ?, "
+                + "must_change_password = ?, version = version + 1 WHERE id = ?")) {
+            ps.setString(1, hash);
+            ps.setBoolean(2, mustChange);
+            ps.setLong(3, id);
+            if (ps.executeUpdate() == 0) throw new NotFound("user", id);
+        }
+    }
+
+    /** Whether the user's password was set by someone else and must be changed before going on. */
+    public boolean mustChangePassword(long id) {
+        return sql.tx(c -> one(c, "id = ?", id)).map(WithHash::mustChangePassword).orElse(false);
     }
 
     public void setRole(long id, Role role) {
@@ -142,6 +184,6 @@ public final class UserStore {
     private static WithHash read(ResultSet rs) throws SQLException {
         User u = new User(rs.getLong("id"), rs.getString("username"), rs.getString("full_name"), rs.getString("initials"),
                 Role.valueOf(rs.getString("role")), rs.getBoolean("active"));
-        return new WithHash(u, rs.getString("password_hash"));
+        return new WithHash(u, rs.getString("password_hash"), rs.getBoolean("must_change_password"));
     }
 }

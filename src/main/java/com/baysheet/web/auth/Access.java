@@ -15,7 +15,8 @@ import java.util.Optional;
  * The before-filter of every request: finds the login from the session cookie, applies {@link AccessRules},
  * and refuses any state-changing request whose form token (field {@code _csrf}, or header
  * {@code X-CSRF-Token} for the API) is not the session's, or before login the one of the form cookie.
- * Handlers read the login with {@link #user(Context)}.
+ * A login whose password was set by someone else (the administrator, or the demo console) reaches only the
+ * password change, logout and static files until it is changed. Handlers read the login with {@link #user(Context)}.
  */
 public final class Access {
     public static final String SIGNED_IN = "signedIn";
@@ -24,6 +25,8 @@ public final class Access {
     static final String CSRF_HEADER = "X-CSRF-Token";
     static final String HEALTH = "/health";
     private static final Duration FORM_COOKIE_AGE = Duration.ofHours(12);
+    public static final String CHANGE_PASSWORD_PAGE = "/account/password";
+    public static final String CHANGE_FIRST = "Your password was set by someone else: choose your own password before going on.";
 
     private final Logins logins;
     /** Set-up is done once and never undone, so after the first yes we stop asking the database. */
@@ -44,7 +47,11 @@ public final class Access {
         if (s.isEmpty()) ctx.attribute(CSRF, formToken(ctx));
         Role role = s.map(x -> x.user().role()).orElse(null);
         switch (AccessRules.decide(ctx.method().name(), ctx.path(), role, setupDone())) {
-            case ALLOW -> checkFormToken(ctx);
+            case ALLOW -> {
+                checkFormToken(ctx);
+                if (s.isPresent() && s.get().mustChangePassword() && !mayBeforeChange(ctx.path()))
+                    throw new AccessRefused(Why.CHANGE_PASSWORD, CHANGE_FIRST);
+            }
             case LOGIN -> throw new AccessRefused(Why.LOGIN, "Please log in to continue.");
             case SET_UP -> throw new AccessRefused(Why.SET_UP, "Baysheet has no administrator yet: set it up first.");
             case FORBIDDEN -> throw new AccessRefused(Why.FORBIDDEN,
@@ -61,6 +68,11 @@ public final class Access {
         SignedIn s = ctx.attribute(SIGNED_IN);
         if (s == null) throw new AccessRefused(Why.LOGIN, "Please log in to continue.");
         return s;
+    }
+
+    /** What a login with a password set by someone else may still reach: the change itself, logout, static files. */
+    private static boolean mayBeforeChange(String path) {
+        return path.equals(CHANGE_PASSWORD_PAGE) || path.equals("/logout") || path.equals("/login") || AccessRules.isOpen(path);
     }
 
     private boolean setupDone() {

@@ -1,8 +1,9 @@
 package com.baysheet.web.auth;
 
-/** A request the access filter stops: nobody logged in, a role that may not, or a form without its token. */
+/** A request the access filter stops: nobody logged in, a role that may not, a form without its token,
+ * or a password set by someone else not yet changed. */
 public final class AccessRefused extends RuntimeException {
-    public enum Why { LOGIN, FORBIDDEN, FORM_TOKEN, SET_UP }
+    public enum Why { LOGIN, FORBIDDEN, FORM_TOKEN, SET_UP, CHANGE_PASSWORD }
 
     private final Why why;
 
@@ -16,7 +17,7 @@ public final class AccessRefused extends RuntimeException {
     public int status() {
         return switch (why) {
             case LOGIN -> 401;
-            case FORBIDDEN, FORM_TOKEN -> 403;
+            case FORBIDDEN, FORM_TOKEN, CHANGE_PASSWORD -> 403;
             case SET_UP -> 503;
         };
     }

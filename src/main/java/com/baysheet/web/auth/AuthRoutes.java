@@ -48,7 +48,7 @@ public final class AuthRoutes {
         Form f = Form.of(ctx);
         SignedIn s = logins.login(f.text("username"), f.value("password"), ctx.ip(), Cookies.token(ctx, Cookies.SESSION));
         startSession(ctx, s);
-        String next = safeNext(f.text("next"));
+        String next = s.mustChangePassword() ? Access.CHANGE_PASSWORD_PAGE : safeNext(f.text("next"));
         if (s.failedAttempts() == 0) {
             ctx.redirect(next, HttpStatus.SEE_OTHER);
             return;
@@ -86,7 +86,14 @@ public final class AuthRoutes {
     }
 
     void passwordForm(Context ctx) {
-        ctx.render("auth/password", model(Form.filled(Map.of())));
+        ctx.render("auth/password", passwordModel(ctx, Form.filled(Map.of())));
+    }
+
+    /** The form, with the notice when the password was set by someone else and must be changed first. */
+    private static Map<String, Object> passwordModel(Context ctx, Form f) {
+        Map<String, Object> m = model(f);
+        if (Access.signedIn(ctx).mustChangePassword()) m.put("mustChange", Access.CHANGE_FIRST);
+        return m;
     }
 
     void changePassword(Context ctx) {
@@ -99,7 +106,7 @@ public final class AuthRoutes {
             ctx.redirect(Saved.PASSWORD.after("/account/password"), HttpStatus.SEE_OTHER);
         } else {
             ctx.status(HttpStatus.BAD_REQUEST);
-            ctx.render("auth/password", model(f));
+            ctx.render("auth/password", passwordModel(ctx, f));
         }
     }
 

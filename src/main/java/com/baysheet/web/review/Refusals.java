@@ -4,6 +4,7 @@ import com.baysheet.auth.LoginRefused;
 import com.baysheet.review.ReviewRefused;
 import com.baysheet.store.review.ConcurrentChange;
 import com.baysheet.web.Form;
+import com.baysheet.web.auth.Access;
 import com.baysheet.web.auth.AccessRefused;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
@@ -25,6 +26,8 @@ final class Refusals {
         if (page && e.why() == AccessRefused.Why.LOGIN) {
             String next = ctx.path() + (ctx.queryString() == null ? "" : "?" + ctx.queryString());
             ctx.redirect("/login?next=" + URLEncoder.encode(next, StandardCharsets.UTF_8), HttpStatus.SEE_OTHER);
+        } else if (!api(ctx) && e.why() == AccessRefused.Why.CHANGE_PASSWORD) {
+            ctx.redirect(Access.CHANGE_PASSWORD_PAGE, HttpStatus.SEE_OTHER);
         } else if (!api(ctx) && e.why() == AccessRefused.Why.SET_UP) {
             ctx.redirect("/setup", HttpStatus.SEE_OTHER);
         } else {

@@ -215,4 +215,29 @@ abstract class LoginsContract {
             return e.getMessage();
         }
     }
+
+    @Test
+    void aPasswordTheAdministratorSetsMustBeChangedAndARefusedOneStoresNothing() {
+        SignedIn admin = admin();
+        assertThat(admin.mustChangePassword()).as("the administrator chose their own at set-up").isFalse();
+        NewUser eve = new NewUser("eve.engineer", "Eve Engineer", "EE", Role.ENGINEER);
+        for (String bad : new String[] {"short", "qwerty1234", "EVE.ENGINEER", "Our structural office"}) {
+            assertThatThrownBy(() -> accounts.admin().add(admin.user(), eve, bad, "x"))
+                    .as(bad).isInstanceOf(InputError.class).hasMessageStartingWith("password:");
+        }
+        assertThat(accounts.users().findByUsername("eve.engineer")).as("nothing stored").isEmpty();
+        var made = accounts.admin().add(admin.user(), eve, PASSWORD, "x");
+        SignedIn in = logins().login("eve.engineer", PASSWORD, "x", null);
+        assertThat(in.mustChangePassword()).isTrue();
+        assertThat(logins().session(in.token()).orElseThrow().mustChangePassword()).isTrue();
+        assertThatThrownBy(() -> logins().changePassword(in, PASSWORD, "Password123", "Password123", "x"))
+                .isInstanceOf(InputError.class).hasMessageStartingWith("newPassword: is one of the most common passwords; choose another");
+        assertThatThrownBy(() -> logins().changePassword(in, PASSWORD, PASSWORD, PASSWORD, "x"))
+                .isInstanceOf(InputError.class).hasMessageContaining("differ");
+        assertThat(accounts.users().mustChangePassword(made.id())).as("still flagged after refusals").isTrue();
+        logins().changePassword(in, PASSWORD, "eve's own chosen words", "eve's own chosen words", "x");
+        assertThat(logins().session(in.token()).orElseThrow().mustChangePassword()).isFalse();
+        accounts.admin().resetPassword(admin.user(), made.id(), "a reset by ada 42", "x");
+        assertThat(logins().login("eve.engineer", "a reset by ada 42", "x", null).mustChangePassword()).as("after a reset").isTrue();
+    }
 }
