@@ -45,11 +45,24 @@ final class OfficeClient {
         return this;
     }
 
-    /** As an administrator: adds a user of this role. */
+    /**
+     * As an administrator: adds a user of this role with a first password of the administrator's, which the
+     * person then replaces with {@code password} at their first login (a password set by someone else must be
+     * changed before anything else is reached).
+     */
     void addUser(String username, String role, String password) {
+        String first = password + " (set by the administrator)";
         get("/admin/users");
         expect(form("/admin/users", Map.of("username", username, "fullName", "User " + username,
-                "initials", username.substring(0, 2).toUpperCase(), "role", role, "password", password)), 303);
+                "initials", username.substring(0, 2).toUpperCase(), "role", role, "password", first)), 303);
+        OfficeClient person = new OfficeClient(base);
+        person.get("/login");
+        HttpResponse<String> in = expect(person.form("/login", Map.of("username", username, "password", first, "next", "/projects")), 303);
+        if (!in.headers().firstValue("Location").orElse("").startsWith("/account/password"))
+            throw new IllegalStateException("a first login was not sent to choose a password: " + in.headers().map());
+        person.get("/account/password");
+        expect(person.form("/account/password", Map.of("currentPassword", first, "newPassword", password,
+                "confirmPassword", password)), 303);
     }
 
     /** Logs in (a fresh cookie jar's worth), and reads the session's form token from a page. */
