@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# Office load (issue 7; a benchmark, never part of the tests): builds the jar, starts the server on the demo
+# Office load (a benchmark, never part of the tests): builds the jar, starts the server on the demo
 # project on loopback over a throw-away data directory, and drives it with OfficeLoad (32 users by default).
 # Extra arguments go to OfficeLoad, e.g. --requests 20000 --rounds 3 --rate 500 --mix 80:10:8:2.
 # SERVER_JAVA_OPTS sets the server JVM's options (default -Xmx1g); PORT its port (default 7091).

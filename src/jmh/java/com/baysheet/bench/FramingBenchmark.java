@@ -29,7 +29,7 @@ import java.util.List;
 import java.util.concurrent.TimeUnit;
 
 /**
- * Full recompute of a 24 × 24-bay building, 6 to 60 levels (issue 3). Two plans:
+ * Full recompute of a 24 × 24-bay building, 6 to 60 levels (the framing figures of docs/benchmarks.md). Two plans:
  * <ul>
  * <li>{@code uniform}: equal 30 ft × 25 ft bays, office floors, slab spanning between grid beams (no infill
  * beams): about 600 beams a level, the issue's "35,000 beams and girders" at 60 levels;</li>

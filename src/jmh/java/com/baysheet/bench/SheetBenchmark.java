@@ -36,7 +36,7 @@ import java.util.List;
 import java.util.concurrent.TimeUnit;
 
 /**
- * Issue 5's budgets: one member sheet warm (at most 50 ms) and a 500-member project package streamed to a
+ * The sheet budgets of docs/benchmarks.md: one member sheet warm (at most 50 ms) and a 500-member project package streamed to a
  * discarding stream (at most 10 s) in a JVM capped at 512 MB of heap, so that holding the package whole
  * would show as an OutOfMemoryError. The building: 6 × 5 bays of 30 ft × 25 ft, two infill beams a bay,
  * three office floors under a roof, trimmed to 500 member sheets.

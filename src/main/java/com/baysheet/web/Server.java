@@ -21,7 +21,7 @@ public final class Server {
         return create(store, null);
     }
 
-    /** The same with access control (issue 6: login, roles, the sheet check) installed ahead of every route. */
+    /** The same with access control (login, roles, the sheet check) installed ahead of every route. */
     public static Javalin create(Store store, Consumer<RoutesConfig> access) {
         return create(store, access, null);
     }
@@ -72,7 +72,7 @@ public final class Server {
         });
     }
 
-    /** Before-filters, in order. An access filter (issue 6) goes first here and may halt a request. */
+    /** Before-filters, in order. An access filter goes first here and may halt a request. */
     private static void filters(RoutesConfig routes) {
         // pages show live project state: never let a browser or proxy reuse an old copy
         routes.before(ctx -> {
