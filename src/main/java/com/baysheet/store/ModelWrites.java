@@ -26,11 +26,16 @@ public final class ModelWrites {
 
     private final Sql sql;
     private final Function<Building, Derived> derive;
+    private final Results results;
 
-    public ModelWrites(Sql sql, Function<Building, Derived> derive) {
+    /** @param results where a change's derived building goes once committed (null: kept nowhere) */
+    public ModelWrites(Sql sql, Function<Building, Derived> derive, Results results) {
         this.sql = sql;
         this.derive = derive;
+        this.results = results;
     }
+
+    public ModelWrites(Sql sql, Function<Building, Derived> derive) { this(sql, derive, null); }
 
     /**
      * @param who    who asks for the change, as the audit entry names them
@@ -45,19 +50,24 @@ public final class ModelWrites {
      * of the work, so that it can say what the model held before ("... was: unframed").
      */
     public <T> T change(Editor who, Sql.Work<String> action, long projectId, long version, Sql.Work<T> work) {
-        return sql.tx(c -> {
+        Results.Computed[] done = new Results.Computed[1];
+        T out = sql.tx(c -> {
             Instant at = sql.now();
             long next = ProjectStore.touch(c, projectId, version, at);
             String said = action.run(c);
             T result = work.run(c);
             Model m = BuildingMapper.load(c, projectId);
             Derived d = checked(m);
+            done[0] = new Results.Computed(m, d);
             List<String> superseded = Supersession.apply(c, projectId, d, by(who), at);
             append(c, who, subject(m.project()), said
                     + "; model version " + version + " → " + next
                     + (superseded.isEmpty() ? "" : "; superseded: " + String.join(", ", superseded)), at);
             return result;
         });
+        // the building this change derived is the next page's: committed, it need not be derived again on read
+        if (results != null) results.offer(done[0]);
+        return out;
     }
 
     /**

@@ -58,6 +58,12 @@ public final class Results {
         }
     }
 
+    /** Keeps a building derived from a committed model (by a model write), so that reading it does not derive it again. */
+    void offer(Computed c) {
+        Model m = c.model();
+        synchronized (cache) { cache.put(new Key(m.project().id(), m.project().version(), m.catalogueVersion(), m.firmVersion()), c); }
+    }
+
     static long firmVersion(Connection c) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("SELECT version FROM firm_setting WHERE id = 1");
              ResultSet rs = ps.executeQuery()) {

@@ -18,10 +18,11 @@ public record Store(ProjectStore projects, GridStore grids, LevelStore levels, B
      */
     public static Store on(DataSource ds, Function<Building, Derived> derive, Clock clock) {
         Sql sql = new Sql(ds, clock);
-        ModelWrites writes = new ModelWrites(sql, derive);
+        Results results = new Results(sql, derive);
+        ModelWrites writes = new ModelWrites(sql, derive, results);
         OccupancyStore occupancies = new OccupancyStore(sql);
         return new Store(new ProjectStore(writes), new GridStore(writes), new LevelStore(writes),
-                new BayStore(writes, occupancies), occupancies, new Results(sql, derive),
+                new BayStore(writes, occupancies), occupancies, results,
                 new LineLoadStore(writes));
     }
 }

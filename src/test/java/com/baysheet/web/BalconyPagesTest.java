@@ -2,7 +2,6 @@ package com.baysheet.web;
 
 import com.baysheet.engine.record.RecordJson;
 import com.baysheet.framing.model.Bay;
-import com.baysheet.store.StoredLevel;
 import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -31,10 +30,7 @@ class BalconyPagesTest {
         project = server.alder().id();
     }
 
-    static long level(String name) {
-        return server.store.levels().findByProject(project).stream().filter(l -> l.name().equals(name))
-                .findFirst().map(StoredLevel::id).orElseThrow();
-    }
+    static long level(String name) { return server.levelId(project, name); }
 
     static String bays(String level) { return "/projects/" + project + "/levels/" + level(level) + "/bays"; }
 

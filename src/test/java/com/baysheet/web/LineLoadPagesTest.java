@@ -1,7 +1,6 @@
 package com.baysheet.web;
 
 import com.baysheet.engine.record.RecordJson;
-import com.baysheet.store.StoredLevel;
 import com.baysheet.store.StoredLineLoad;
 import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.BeforeAll;
@@ -31,10 +30,7 @@ class LineLoadPagesTest {
         project = server.alder().id();
     }
 
-    static long level(String name) {
-        return server.store.levels().findByProject(project).stream().filter(l -> l.name().equals(name))
-                .findFirst().map(StoredLevel::id).orElseThrow();
-    }
+    static long level(String name) { return server.levelId(project, name); }
 
     static String page(String level) { return "/projects/" + project + "/levels/" + level(level) + "/line-loads"; }
 

@@ -62,6 +62,12 @@ final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCall
 
     long version(long projectId) { return store.projects().find(projectId).version(); }
 
+    /** The id of the project's level of this name. */
+    long levelId(long projectId, String name) {
+        return store.levels().findByProject(projectId).stream().filter(l -> l.name().equals(name))
+                .findFirst().map(com.baysheet.store.StoredLevel::id).orElseThrow();
+    }
+
     HttpResponse<String> get(String path) {
         return send(HttpRequest.newBuilder(uri(path)).GET().build());
     }
