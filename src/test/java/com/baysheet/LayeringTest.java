@@ -24,6 +24,7 @@ class LayeringTest {
     private static final String JAVALIN = "io.javalin..", SQL = "java.sql..", JDBC = "javax.sql..", PDF = "com.lowagie..",
             TEMPLATES = "org.thymeleaf..", MIGRATIONS = "org.flywaydb..", POOL = "com.zaxxer..";
     private static final String ENGINE = "com.baysheet.engine..", FRAMING = "com.baysheet.framing..",
+            PROJECT = "com.baysheet.project..",
             SHEET = "com.baysheet.sheet..", REVIEW = "com.baysheet.review..", AUTH = "com.baysheet.auth..",
             STORE = "com.baysheet.store..", WEB = "com.baysheet.web..", CLI = "com.baysheet.cli..";
 
@@ -36,13 +37,14 @@ class LayeringTest {
     }
 
     static final List<Layer> TABLE = List.of(
-            new Layer(ENGINE, FRAMING, SHEET, REVIEW, AUTH, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
-            new Layer(FRAMING, SHEET, REVIEW, AUTH, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
-            new Layer(SHEET, REVIEW, AUTH, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, TEMPLATES, MIGRATIONS, POOL),
-            new Layer(REVIEW, SHEET, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
-            new Layer(AUTH, FRAMING, SHEET, REVIEW, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(ENGINE, FRAMING, PROJECT, SHEET, REVIEW, AUTH, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(FRAMING, PROJECT, SHEET, REVIEW, AUTH, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(PROJECT, SHEET, REVIEW, AUTH, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(SHEET, PROJECT, REVIEW, AUTH, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(REVIEW, PROJECT, SHEET, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(AUTH, FRAMING, PROJECT, SHEET, REVIEW, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
             new Layer(STORE, SHEET, WEB, CLI, "com.baysheet", JAVALIN, PDF, TEMPLATES),
-            new Layer(CLI, FRAMING, SHEET, REVIEW, AUTH, STORE, WEB, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES),
+            new Layer(CLI, FRAMING, PROJECT, SHEET, REVIEW, AUTH, STORE, WEB, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES),
             new Layer(WEB, CLI, "com.baysheet"));
 
     private static JavaClasses main;
@@ -69,6 +71,16 @@ class LayeringTest {
         // a class of the test tree that sits in the engine and reaches up into the store (see layering/planted)
         JavaClasses planted = new ClassFileImporter().importClasses(com.baysheet.engine.planted.ReachesIntoTheStore.class);
         EvaluationResult r = TABLE.get(0).rule().evaluate(planted);
+        assertThat(r.hasViolation()).isTrue();
+        assertThat(r.getFailureReport().getDetails()).anyMatch(d -> d.contains("com.baysheet.store"));
+    }
+
+    @Test
+    void aPlantedBackImportFromTheProjectModelFailsItsRow() {
+        // the project model sits left of the store: a class of it that reaches into the store breaks its row
+        JavaClasses planted = new ClassFileImporter().importClasses(com.baysheet.project.planted.ProjectReachesIntoTheStore.class);
+        Layer project = TABLE.stream().filter(l -> l.pkg().equals(PROJECT)).findFirst().orElseThrow();
+        EvaluationResult r = project.rule().evaluate(planted);
         assertThat(r.hasViolation()).isTrue();
         assertThat(r.getFailureReport().getDetails()).anyMatch(d -> d.contains("com.baysheet.store"));
     }

@@ -7,7 +7,7 @@ import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.member.MemberCalculation;
 import com.baysheet.engine.member.MemberResult;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.UnitSystem;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;

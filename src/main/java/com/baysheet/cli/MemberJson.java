@@ -15,7 +15,7 @@ import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.PointLoad;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.load.SupportedFloor;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Quantity;
 import com.baysheet.engine.units.UnitSystem;
 import com.fasterxml.jackson.databind.JsonNode;

@@ -7,7 +7,7 @@ import com.baysheet.engine.load.Support;
 import com.baysheet.engine.load.SupportedFloor;
 import com.baysheet.engine.member.MemberResult;
 import com.baysheet.engine.record.CalcRecord;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.reduction.LiveFactors;
 import com.baysheet.framing.model.SelfWeights;
 

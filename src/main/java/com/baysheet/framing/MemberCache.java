@@ -3,7 +3,7 @@ package com.baysheet.framing;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.member.MemberCalculation;
 import com.baysheet.engine.member.MemberResult;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 
 import java.util.HashMap;
 import java.util.Map;

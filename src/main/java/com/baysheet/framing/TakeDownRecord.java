@@ -5,7 +5,7 @@ import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.record.Step;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Quantity;
 
 import java.util.List;

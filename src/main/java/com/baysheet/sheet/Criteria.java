@@ -2,7 +2,7 @@ package com.baysheet.sheet;
 
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.load.DesignOptions;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.reduction.RoofLiveLoad;
 import com.baysheet.engine.units.Display;
 import com.baysheet.engine.units.Quantity;

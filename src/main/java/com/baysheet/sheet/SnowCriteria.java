@@ -1,7 +1,7 @@
 package com.baysheet.sheet;
 
 import com.baysheet.engine.code.Edition;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.snow.SnowSite;
 import com.baysheet.engine.units.Display;
 import com.baysheet.engine.units.Quantity;

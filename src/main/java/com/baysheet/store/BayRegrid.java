@@ -3,6 +3,7 @@ package com.baysheet.store;
 import com.baysheet.engine.InputError;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
+import com.baysheet.project.StoredLevel;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;

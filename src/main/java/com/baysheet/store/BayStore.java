@@ -6,6 +6,8 @@ import com.baysheet.framing.model.Direction;
 import com.baysheet.framing.model.Framing;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.Side;
+import com.baysheet.project.BayAssignment;
+import com.baysheet.project.Cell;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;

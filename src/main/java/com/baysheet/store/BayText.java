@@ -3,6 +3,8 @@ package com.baysheet.store;
 import com.baysheet.engine.units.Display;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Grid;
+import com.baysheet.project.BayAssignment;
+import com.baysheet.project.Cell;
 
 import java.sql.Connection;
 import java.sql.SQLException;

@@ -1,7 +1,7 @@
 package com.baysheet.store;
 
 import com.baysheet.engine.code.Editions;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Building;
 import com.baysheet.framing.model.Grid;
@@ -10,6 +10,10 @@ import com.baysheet.framing.model.Level;
 import com.baysheet.engine.units.Convert;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.model.SelfWeights;
+import com.baysheet.project.LevelInfo;
+import com.baysheet.project.Model;
+import com.baysheet.project.Project;
+import com.baysheet.project.StoredLevel;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;

@@ -1,5 +1,6 @@
 package com.baysheet.store;
 
+import com.baysheet.project.Project;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 

@@ -5,6 +5,9 @@ import com.baysheet.engine.units.Display;
 
 import com.baysheet.engine.snow.SnowRoof;
 import com.baysheet.framing.model.RoofSurface;
+import com.baysheet.project.LevelInfo;
+import com.baysheet.project.SnowInput;
+import com.baysheet.project.StoredLevel;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;

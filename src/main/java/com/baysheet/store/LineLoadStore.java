@@ -4,6 +4,9 @@ import com.baysheet.engine.InputError;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
 import com.baysheet.framing.model.GridLineLoad;
+import com.baysheet.project.LineLoadEntry;
+import com.baysheet.project.StoredLevel;
+import com.baysheet.project.StoredLineLoad;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;

@@ -4,6 +4,7 @@ import com.baysheet.engine.InputError;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
 import com.baysheet.framing.model.GridLineLoad;
+import com.baysheet.project.LineLoadEntry;
 
 import java.sql.ResultSet;
 import java.sql.SQLException;

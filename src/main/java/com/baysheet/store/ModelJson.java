@@ -13,6 +13,13 @@ import com.baysheet.framing.model.RoofSurface;
 import com.baysheet.framing.model.Side;
 import com.baysheet.engine.snow.Choices;
 import com.baysheet.engine.snow.SnowRoof;
+import com.baysheet.project.BayAssignment;
+import com.baysheet.project.Cell;
+import com.baysheet.project.FirmOccupancy;
+import com.baysheet.project.LevelInfo;
+import com.baysheet.project.LineLoadEntry;
+import com.baysheet.project.ProjectInfo;
+import com.baysheet.project.SnowInput;
 import com.fasterxml.jackson.databind.JsonNode;
 
 import java.util.ArrayList;

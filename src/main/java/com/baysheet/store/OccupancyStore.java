@@ -4,6 +4,7 @@ import com.baysheet.engine.InputError;
 import com.baysheet.engine.code.OccupancyCatalogue;
 import com.baysheet.engine.code.ReductionRule;
 import com.baysheet.engine.units.UnitSystem;
+import com.baysheet.project.FirmOccupancy;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;

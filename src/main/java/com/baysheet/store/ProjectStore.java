@@ -4,6 +4,10 @@ import com.baysheet.engine.InputError;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
+import com.baysheet.project.Project;
+import com.baysheet.project.ProjectInfo;
+import com.baysheet.project.SnowInput;
+import com.baysheet.project.StoredLevel;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;

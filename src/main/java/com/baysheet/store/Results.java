@@ -2,6 +2,8 @@ package com.baysheet.store;
 
 import com.baysheet.framing.Derived;
 import com.baysheet.framing.model.Building;
+import com.baysheet.project.Model;
+import com.baysheet.project.Project;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;

@@ -2,7 +2,7 @@ package com.baysheet.web;
 
 import com.baysheet.engine.InputError;
 import com.baysheet.store.ModelJson;
-import com.baysheet.store.Project;
+import com.baysheet.project.Project;
 import com.baysheet.store.Store;
 import com.fasterxml.jackson.databind.JsonNode;
 import io.javalin.config.RoutesConfig;

@@ -5,8 +5,8 @@ import com.baysheet.engine.record.Entry;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.TakeDown;
 import com.baysheet.framing.model.Bay;
-import com.baysheet.store.StoredLevel;
-import com.baysheet.store.StoredLineLoad;
+import com.baysheet.project.StoredLevel;
+import com.baysheet.project.StoredLineLoad;
 
 import java.util.List;
 import java.util.Map;

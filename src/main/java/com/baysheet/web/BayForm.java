@@ -5,8 +5,8 @@ import com.baysheet.framing.model.Direction;
 import com.baysheet.framing.model.Framing;
 import com.baysheet.framing.model.Limits;
 import com.baysheet.framing.model.Side;
-import com.baysheet.store.BayAssignment;
-import com.baysheet.store.Cell;
+import com.baysheet.project.BayAssignment;
+import com.baysheet.project.Cell;
 
 import java.util.ArrayList;
 import java.util.EnumMap;

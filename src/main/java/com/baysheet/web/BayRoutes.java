@@ -1,10 +1,10 @@
 package com.baysheet.web;
 
 import com.baysheet.framing.model.Bay;
-import com.baysheet.store.BayAssignment;
-import com.baysheet.store.Cell;
-import com.baysheet.store.Project;
-import com.baysheet.store.StoredLevel;
+import com.baysheet.project.BayAssignment;
+import com.baysheet.project.Cell;
+import com.baysheet.project.Project;
+import com.baysheet.project.StoredLevel;
 import com.baysheet.store.Store;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;

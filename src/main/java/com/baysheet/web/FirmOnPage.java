@@ -1,7 +1,7 @@
 package com.baysheet.web;
 
 import com.baysheet.engine.code.Editions;
-import com.baysheet.store.review.Firm;
+import com.baysheet.project.Firm;
 import io.javalin.http.Context;
 
 /**

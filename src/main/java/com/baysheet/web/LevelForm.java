@@ -4,8 +4,8 @@ import com.baysheet.engine.snow.Choices;
 import com.baysheet.engine.snow.SnowRoof;
 import com.baysheet.engine.units.Display;
 import com.baysheet.framing.model.RoofSurface;
-import com.baysheet.store.LevelInfo;
-import com.baysheet.store.StoredLevel;
+import com.baysheet.project.LevelInfo;
+import com.baysheet.project.StoredLevel;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.web.entry.LengthField;
 

@@ -1,7 +1,7 @@
 package com.baysheet.web;
 
-import com.baysheet.store.Project;
-import com.baysheet.store.StoredLevel;
+import com.baysheet.project.Project;
+import com.baysheet.project.StoredLevel;
 import com.baysheet.store.Store;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;

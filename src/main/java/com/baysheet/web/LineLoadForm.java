@@ -1,7 +1,7 @@
 package com.baysheet.web;
 
 import com.baysheet.engine.InputError;
-import com.baysheet.store.LineLoadEntry;
+import com.baysheet.project.LineLoadEntry;
 
 /**
  * Reads the line load form: the line and its bounds by grid line name, the dead load per length or, for

@@ -1,8 +1,8 @@
 package com.baysheet.web;
 
-import com.baysheet.store.LineLoadEntry;
-import com.baysheet.store.Project;
-import com.baysheet.store.StoredLevel;
+import com.baysheet.project.LineLoadEntry;
+import com.baysheet.project.Project;
+import com.baysheet.project.StoredLevel;
 import com.baysheet.store.Store;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;

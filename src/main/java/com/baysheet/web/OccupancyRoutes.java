@@ -3,7 +3,7 @@ package com.baysheet.web;
 import com.baysheet.engine.code.OccupancyCatalogue;
 import com.baysheet.engine.code.ReductionRule;
 import com.baysheet.engine.units.UnitSystem;
-import com.baysheet.store.FirmOccupancy;
+import com.baysheet.project.FirmOccupancy;
 import com.baysheet.store.Store;
 import com.baysheet.web.entry.LengthField;
 import io.javalin.config.RoutesConfig;

@@ -3,7 +3,7 @@ package com.baysheet.web;
 import com.baysheet.framing.model.Level;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
-import com.baysheet.store.StoredLevel;
+import com.baysheet.project.StoredLevel;
 import com.baysheet.store.Store;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;

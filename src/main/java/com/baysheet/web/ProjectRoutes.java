@@ -2,9 +2,9 @@ package com.baysheet.web;
 
 import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.units.UnitSystem;
-import com.baysheet.store.Project;
-import com.baysheet.store.ProjectInfo;
-import com.baysheet.store.SnowInput;
+import com.baysheet.project.Project;
+import com.baysheet.project.ProjectInfo;
+import com.baysheet.project.SnowInput;
 import com.baysheet.engine.snow.SnowSite;
 import com.baysheet.engine.units.Display;
 import com.baysheet.store.Store;

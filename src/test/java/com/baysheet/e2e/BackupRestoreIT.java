@@ -5,7 +5,7 @@ import com.baysheet.store.Editor;
 import com.baysheet.framing.Derivation;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
-import com.baysheet.store.ProjectInfo;
+import com.baysheet.project.ProjectInfo;
 import com.baysheet.store.Store;
 import com.baysheet.engine.units.UnitSystem;
 import com.fasterxml.jackson.databind.JsonNode;

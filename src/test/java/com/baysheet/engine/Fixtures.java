@@ -8,7 +8,6 @@ import com.baysheet.engine.load.PointLoad;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.member.MemberCalculation;
 import com.baysheet.engine.record.CalcRecord;
-import com.baysheet.engine.reduction.CalcContext;
 import com.baysheet.engine.units.UnitSystem;
 
 import java.util.List;

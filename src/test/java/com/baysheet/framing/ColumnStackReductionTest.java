@@ -2,7 +2,7 @@ package com.baysheet.framing;
 
 import com.baysheet.engine.code.MemberKind;
 import com.baysheet.engine.record.CalcRecord;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Building;

@@ -1,7 +1,7 @@
 package com.baysheet.framing;
 
 import com.baysheet.engine.record.Note;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.snow.Exposure;
 import com.baysheet.engine.snow.Importance;
 import com.baysheet.engine.snow.SnowSite;

@@ -3,7 +3,7 @@ package com.baysheet.review;
 import com.baysheet.engine.InputError;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Entry;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.Derivation;
 import com.baysheet.framing.Derived;

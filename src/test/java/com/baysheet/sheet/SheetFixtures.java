@@ -9,7 +9,7 @@ import com.baysheet.engine.load.PointLoad;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.member.MemberCalculation;
 import com.baysheet.engine.record.CalcRecord;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.Derivation;
 import com.baysheet.framing.Derived;

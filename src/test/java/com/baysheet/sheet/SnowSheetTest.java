@@ -7,7 +7,7 @@ import com.baysheet.engine.load.SnowOnRoof;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.member.MemberCalculation;
 import com.baysheet.engine.record.CalcRecord;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.snow.Exposure;
 import com.baysheet.engine.snow.Importance;
 import com.baysheet.engine.snow.SnowRoof;

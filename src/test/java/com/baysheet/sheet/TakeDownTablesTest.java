@@ -1,6 +1,6 @@
 package com.baysheet.sheet;
 
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.Derivation;
 import com.baysheet.framing.Derived;

@@ -6,6 +6,13 @@ import com.baysheet.framing.model.Framing;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
 import com.baysheet.framing.model.GridLineLoad;
+import com.baysheet.project.BayAssignment;
+import com.baysheet.project.Cell;
+import com.baysheet.project.LevelInfo;
+import com.baysheet.project.LineLoadEntry;
+import com.baysheet.project.Project;
+import com.baysheet.project.StoredLevel;
+import com.baysheet.project.StoredLineLoad;
 import org.junit.jupiter.api.Test;
 
 import java.util.List;

@@ -1,7 +1,7 @@
 package com.baysheet.web;
 
 import com.baysheet.engine.record.RecordJson;
-import com.baysheet.store.StoredLineLoad;
+import com.baysheet.project.StoredLineLoad;
 import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;

@@ -2,7 +2,7 @@ package com.baysheet.web;
 
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.MemberRole;
-import com.baysheet.store.Project;
+import com.baysheet.project.Project;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import org.junit.jupiter.api.Test;
@@ -147,7 +147,7 @@ class SnowPagesTest {
     @Test
     void aSlopedRoofNeedingWForRainOnSnowIsRefusedWhenSavedWithoutIt() {
         // ASCE 7-16 7.10: p_g = 15 psf (0 < p_g ≤ 20) on a 6 in/ft roof (26.6°): rain-on-snow depends on W, so W is required
-        Project p = server.store.projects().create(com.baysheet.store.Editor.DEMO, new com.baysheet.store.ProjectInfo("25-420", "Rain Shed", "", "", "ASCE 7-16",
+        Project p = server.store.projects().create(com.baysheet.store.Editor.DEMO, new com.baysheet.project.ProjectInfo("25-420", "Rain Shed", "", "", "ASCE 7-16",
                 com.baysheet.engine.units.UnitSystem.US, false, false, false, null));
         long v = server.version(p.id());
         List<Map.Entry<String, String>> level = new ArrayList<>(List.of(entry("version", String.valueOf(v)), entry("name", "Roof"),

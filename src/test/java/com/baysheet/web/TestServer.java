@@ -3,7 +3,7 @@ package com.baysheet.web;
 import com.baysheet.framing.Derivation;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
-import com.baysheet.store.Project;
+import com.baysheet.project.Project;
 import com.baysheet.store.Store;
 import io.javalin.Javalin;
 import org.junit.jupiter.api.extension.RegisterExtension;
@@ -65,7 +65,7 @@ final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCall
     /** The id of the project's level of this name. */
     long levelId(long projectId, String name) {
         return store.levels().findByProject(projectId).stream().filter(l -> l.name().equals(name))
-                .findFirst().map(com.baysheet.store.StoredLevel::id).orElseThrow();
+                .findFirst().map(com.baysheet.project.StoredLevel::id).orElseThrow();
     }
 
     HttpResponse<String> get(String path) {

@@ -1,6 +1,6 @@
 package com.baysheet.web;
 
-import com.baysheet.store.StoredLevel;
+import com.baysheet.project.StoredLevel;
 import org.junit.jupiter.api.extension.RegisterExtension;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.params.ParameterizedTest;

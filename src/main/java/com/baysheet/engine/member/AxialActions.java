@@ -4,7 +4,7 @@ import com.baysheet.engine.beam.BeamLoads;
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.record.RecordBuilder;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Quantity;
 
 /** Axial load on a column: dead, live unreduced and reduced, roof live, concentrated check, combinations. */

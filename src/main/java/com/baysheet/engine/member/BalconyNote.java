@@ -3,7 +3,7 @@ package com.baysheet.engine.member;
 import com.baysheet.engine.code.BalconyRule;
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.record.RecordBuilder;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Quantity;
 import com.baysheet.engine.units.UnitSystem;
 

@@ -8,7 +8,7 @@ import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Quantity;
 
 import java.util.ArrayList;

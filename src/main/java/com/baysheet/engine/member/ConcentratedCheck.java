@@ -5,7 +5,7 @@ import com.baysheet.engine.beam.BeamLoads;
 import com.baysheet.engine.beam.BeamSolver;
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.load.Support;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 
 import java.util.Collection;
 

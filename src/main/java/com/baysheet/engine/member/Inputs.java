@@ -8,7 +8,7 @@ import com.baysheet.engine.load.PointLoad;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.load.SupportedFloor;
 import com.baysheet.engine.record.RecordBuilder;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Quantity;
 
 /** The inputs block of a member record: geometry, occupancies with L0 and area, options, edition. */

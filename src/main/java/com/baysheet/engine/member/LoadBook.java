@@ -9,7 +9,7 @@ import com.baysheet.engine.load.LineLoad;
 import com.baysheet.engine.load.LiveShare;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.PointLoad;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.reduction.PartitionAllowance;
 
 import java.util.LinkedHashMap;

@@ -11,7 +11,7 @@ import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.RecordBuilder;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.reduction.LiveFactors;
 import com.baysheet.engine.reduction.ReductionMethods;
 import com.baysheet.engine.reduction.RoofLiveLoad;

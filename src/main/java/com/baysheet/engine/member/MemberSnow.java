@@ -4,7 +4,7 @@ import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.SnowOnRoof;
 import com.baysheet.engine.record.RecordBuilder;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.snow.RoofSnow;
 import com.baysheet.engine.snow.SnowLoads;
 import com.baysheet.engine.units.Quantity;

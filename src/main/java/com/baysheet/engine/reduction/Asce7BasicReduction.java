@@ -1,5 +1,6 @@
 package com.baysheet.engine.reduction;
 
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.code.MemberKind;
 import com.baysheet.engine.code.Occupancy;

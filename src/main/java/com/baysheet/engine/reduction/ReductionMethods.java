@@ -1,5 +1,6 @@
 package com.baysheet.engine.reduction;
 
+import com.baysheet.engine.CalcContext;
 import java.util.Map;
 
 /** The floor reduction methods by the id an edition names. */

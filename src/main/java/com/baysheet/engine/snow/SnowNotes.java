@@ -3,7 +3,7 @@ package com.baysheet.engine.snow;
 import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Quantity;
 
 /**

@@ -1,7 +1,7 @@
 package com.baysheet.framing.model;
 
 import com.baysheet.engine.Check;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 
 import java.util.List;
 

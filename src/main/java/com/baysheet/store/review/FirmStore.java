@@ -1,5 +1,6 @@
 package com.baysheet.store.review;
 
+import com.baysheet.project.Firm;
 import com.baysheet.review.AuditEvent;
 import com.baysheet.store.Sql;
 

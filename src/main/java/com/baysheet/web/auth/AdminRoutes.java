@@ -9,7 +9,7 @@ import com.baysheet.engine.InputError;
 import com.baysheet.store.Editor;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.auth.Accounts;
-import com.baysheet.store.review.Firm;
+import com.baysheet.project.Firm;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.engine.code.Editions;
 import com.baysheet.web.Editors;

@@ -8,7 +8,7 @@ import com.baysheet.sheet.CalcPackage;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
 import com.baysheet.store.Store;
-import com.baysheet.store.review.Firm;
+import com.baysheet.project.Firm;
 import com.baysheet.store.review.ReviewStore;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;

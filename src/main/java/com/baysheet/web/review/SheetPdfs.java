@@ -8,7 +8,7 @@ import com.baysheet.sheet.MemberSheet;
 import com.baysheet.sheet.RenderedPdf;
 import com.baysheet.sheet.SheetHeader;
 import com.baysheet.sheet.SheetRenderer;
-import com.baysheet.store.review.Firm;
+import com.baysheet.project.Firm;
 
 import java.time.LocalDate;
 import java.util.List;

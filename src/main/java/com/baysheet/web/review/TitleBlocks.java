@@ -6,8 +6,8 @@ import com.baysheet.review.CalcFingerprint;
 import com.baysheet.review.SheetRevision;
 import com.baysheet.review.SheetState;
 import com.baysheet.sheet.SheetHeader;
-import com.baysheet.store.ProjectInfo;
-import com.baysheet.store.review.Firm;
+import com.baysheet.project.ProjectInfo;
+import com.baysheet.project.Firm;
 import com.baysheet.store.review.StoredRevision;
 
 import java.time.LocalDate;

@@ -7,7 +7,7 @@ import com.baysheet.engine.load.AreaLoad;
 import com.baysheet.engine.load.DesignOptions;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Note;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import org.junit.jupiter.api.Test;
 
 import static com.baysheet.engine.Fixtures.calc;

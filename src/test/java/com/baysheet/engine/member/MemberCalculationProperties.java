@@ -9,7 +9,7 @@ import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.RecordJson;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Convert;
 import com.baysheet.engine.units.Quantity;
 import com.baysheet.engine.units.UnitSystem;

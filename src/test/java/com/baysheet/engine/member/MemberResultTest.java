@@ -6,7 +6,7 @@ import com.baysheet.engine.load.AreaStrip;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.record.Entry;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.UnitSystem;
 import org.junit.jupiter.api.Test;
 

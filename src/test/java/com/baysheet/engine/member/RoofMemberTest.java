@@ -10,7 +10,7 @@ import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Note;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.UnitSystem;
 import org.junit.jupiter.api.Test;
 

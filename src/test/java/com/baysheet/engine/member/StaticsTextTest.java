@@ -96,7 +96,7 @@ class StaticsTextTest {
         assertThat(r.step("M-.D").result()).isCloseTo(-8700, within(1e-9));
     }
 
-    private static double shown(com.baysheet.engine.reduction.CalcContext ctx, Step s, String e) {
+    private static double shown(com.baysheet.engine.CalcContext ctx, Step s, String e) {
         Quantity q = e.equals("M+") ? Quantity.MOMENT : Quantity.FORCE;
         return q.unit(ctx.system()).fromBase(s.result());
     }

@@ -1,5 +1,6 @@
 package com.baysheet.engine.reduction;
 
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.Fixtures;
 import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.code.MemberKind;

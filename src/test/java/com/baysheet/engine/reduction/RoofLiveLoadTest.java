@@ -1,5 +1,6 @@
 package com.baysheet.engine.reduction;
 
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.Fixtures;
 import com.baysheet.engine.InputError;
 import com.baysheet.engine.code.Occupancy;

@@ -4,7 +4,7 @@ import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Note;
 import com.baysheet.engine.record.RecordBuilder;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.UnitSystem;
 
 /** Builders for the snow tests: a site with C_e = C_t = I_s = 1.0 from the tables, a roof by its slope. */

@@ -3,7 +3,7 @@ package com.baysheet.engine.snow;
 import com.baysheet.engine.InputError;
 import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.code.SnowData;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;

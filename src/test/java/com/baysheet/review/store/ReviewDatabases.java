@@ -5,7 +5,7 @@ import com.baysheet.auth.NewUser;
 import com.baysheet.auth.User;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.store.Database;
-import com.baysheet.store.ProjectInfo;
+import com.baysheet.project.ProjectInfo;
 import com.baysheet.framing.Derivation;
 import com.baysheet.store.Editor;
 import com.baysheet.store.ModelWrites;

@@ -3,7 +3,7 @@ package com.baysheet.web.review;
 import com.baysheet.auth.Role;
 import com.baysheet.auth.Tokens;
 import com.baysheet.framing.DerivedMember;
-import com.baysheet.store.ProjectInfo;
+import com.baysheet.project.ProjectInfo;
 import com.baysheet.web.TestLogin.Client;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;

@@ -1,4 +1,4 @@
-package com.baysheet.store;
+package com.baysheet.project;
 
 /**
  * A line load as stored, its lines named as the grid names them now (they follow the lines' stable ids).

@@ -1,4 +1,4 @@
-package com.baysheet.store;
+package com.baysheet.project;
 
 /** A level as stored, with its id. */
 public record StoredLevel(long id, long projectId, LevelInfo info) {

@@ -1,9 +1,9 @@
-package com.baysheet.store;
+package com.baysheet.project;
 
 import com.baysheet.engine.InputError;
 import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.record.RecordBuilder;
-import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.snow.Choices;
 import com.baysheet.engine.snow.Exposure;
 import com.baysheet.engine.snow.Importance;
@@ -63,7 +63,7 @@ public final class SnowInput {
      *
      * @param field the field the refusal is shown beside: "eaveToRidge" on the level form, "groundSnow" on the project's
      */
-    static void checkRoof(ProjectInfo p, LevelInfo level, String field) {
+    public static void checkRoof(ProjectInfo p, LevelInfo level, String field) {
         if (p.snow() == null || !level.roof()) return;
         Edition ed = com.baysheet.engine.code.Editions.builtIn().get(p.edition());
         try {
@@ -75,7 +75,7 @@ public final class SnowInput {
     }
 
     /** Works the site out on a flat roof: an edition without snow (ASCE 7-22) or an impossible table cell is refused now. */
-    static void check(Edition edition, UnitSystem units, SnowSite site) {
+    public static void check(Edition edition, UnitSystem units, SnowSite site) {
         try {
             RoofSnow.calculate(CalcContext.of(units).withEdition(edition), site, SnowRoof.of(SnowRoof.Shape.MONOSLOPE, 0, false, Double.NaN),
                     RecordBuilder.numbersOnly("snow", edition.id(), units));

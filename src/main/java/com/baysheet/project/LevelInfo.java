@@ -1,4 +1,4 @@
-package com.baysheet.store;
+package com.baysheet.project;
 
 import com.baysheet.engine.Check;
 import com.baysheet.engine.InputError;

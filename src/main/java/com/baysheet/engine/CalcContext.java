@@ -1,4 +1,4 @@
-package com.baysheet.engine.reduction;
+package com.baysheet.engine;
 
 import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.code.Editions;
