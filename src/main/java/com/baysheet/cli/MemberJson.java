@@ -2,6 +2,7 @@ package com.baysheet.cli;
 
 import com.baysheet.engine.Check;
 import com.baysheet.engine.InputError;
+import com.baysheet.engine.JsonFields;
 import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.code.MemberKind;
 import com.baysheet.engine.code.OccupancyCatalogue;
@@ -39,7 +40,7 @@ final class MemberJson {
             "areas", "pointLoads", "selfWeight", "roofSlope", "EI", "onRoof", "options", "customOccupancies", "floors");
 
     static Parsed parse(JsonNode root) {
-        Fields f = new Fields(root, "", TOP);
+        JsonFields f = JsonFields.strict(root, "", TOP);
         UnitSystem units = UnitSystem.parse("units", f.text("units"));
         String edition = f.text("edition", Editions.builtIn().byDefault().id());
         OccupancyCatalogue catalogue = OccupancyCatalogue.builtIn();
@@ -48,29 +49,29 @@ final class MemberJson {
         CalcContext ctx = new CalcContext(Editions.builtIn().get(edition), units, catalogue, options(f));
         String subject = f.text("subject");
         MemberKind kind = MemberKind.parse("kind", f.text("kind"));
-        Support support = support(new Fields(f.node("support"), "support", Set.of("type", "span", "overhang", "length")));
+        Support support = support(JsonFields.strict(f.node("support"), "support", Set.of("type", "span", "overhang", "length")));
         // EI as a section designer states it: kip·in² (US) or kN·m² (SI), into lb·ft² or kN·m²
         double ei = f.has("EI") ? Quantity.STIFFNESS.unit(units).toBase(Check.positive("EI", f.number("EI"))) : Double.NaN;
-        List<AreaStrip> strips = list(f, "strips", (n, p) -> strip(new Fields(n, p, Set.of("occupancy", "width", "from", "to", "deadLoad")), p));
-        List<AreaLoad> areas = list(f, "areas", (n, p) -> area(new Fields(n, p, Set.of("occupancy", "area", "deadLoad")), p));
-        List<PointLoad> points = list(f, "pointLoads", (n, p) -> point(new Fields(n, p, Set.of("x", "dead", "live", "areas")), p, kind.isColumn()));
-        List<SupportedFloor> floors = list(f, "floors", (n, p) -> floor(new Fields(n, p, Set.of("name", "kind", "areas")), p));
+        List<AreaStrip> strips = list(f, "strips", (n, p) -> strip(JsonFields.strict(n, p, Set.of("occupancy", "width", "from", "to", "deadLoad")), p));
+        List<AreaLoad> areas = list(f, "areas", (n, p) -> area(JsonFields.strict(n, p, Set.of("occupancy", "area", "deadLoad")), p));
+        List<PointLoad> points = list(f, "pointLoads", (n, p) -> point(JsonFields.strict(n, p, Set.of("x", "dead", "live", "areas")), p, kind.isColumn()));
+        List<SupportedFloor> floors = list(f, "floors", (n, p) -> floor(JsonFields.strict(n, p, Set.of("name", "kind", "areas")), p));
         int floorsSupported = f.integer("floorsSupported", floors.isEmpty() ? 1 : floors.size());
-        MemberInput in = Fields.at("", () -> new MemberInput(subject, kind, support, floorsSupported, strips, areas, points,
+        MemberInput in = JsonFields.at("", () -> new MemberInput(subject, kind, support, floorsSupported, strips, areas, points,
                 f.number("selfWeight", 0), f.number("roofSlope", Double.NaN), ei, f.flag("onRoof", false), floors));
         return new Parsed(ctx, in);
     }
 
-    private static DesignOptions options(Fields top) {
+    private static DesignOptions options(JsonFields top) {
         if (!top.has("options")) return DesignOptions.DEFAULT;
-        Fields o = new Fields(top.node("options"), "options", Set.of("partitionAllowance", "reducePartitions", "upliftReducedDead"));
+        JsonFields o = JsonFields.strict(top.node("options"), "options", Set.of("partitionAllowance", "reducePartitions", "upliftReducedDead"));
         return new DesignOptions(o.flag("partitionAllowance", false), o.flag("reducePartitions", false),
                 o.flag("upliftReducedDead", false));
     }
 
-    private static Support support(Fields s) {
+    private static Support support(JsonFields s) {
         String type = s.text("type");
-        return Fields.at("support", () -> switch (type) {
+        return JsonFields.at("support", () -> switch (type) {
             case "simple" -> new Support.Simple(s.number("span"));
             case "overhang" -> new Support.Overhang(s.number("span"), s.number("overhang"));
             case "cantilever" -> new Support.Cantilever(s.number("length"));
@@ -79,52 +80,52 @@ final class MemberJson {
         });
     }
 
-    private static AreaStrip strip(Fields s, String p) {
+    private static AreaStrip strip(JsonFields s, String p) {
         double dead = Check.nonNegative(s.child("deadLoad"), s.number("deadLoad", 0));
-        return Fields.at(p, () -> new AreaStrip(s.text("occupancy"), s.number("width"), s.number("from"), s.number("to"), dead));
+        return JsonFields.at(p, () -> new AreaStrip(s.text("occupancy"), s.number("width"), s.number("from"), s.number("to"), dead));
     }
 
-    private static AreaLoad area(Fields a, String p) {
+    private static AreaLoad area(JsonFields a, String p) {
         double dead = Check.nonNegative(a.child("deadLoad"), a.number("deadLoad", 0));
-        return Fields.at(p, () -> new AreaLoad(a.text("occupancy"), a.number("area"), dead));
+        return JsonFields.at(p, () -> new AreaLoad(a.text("occupancy"), a.number("area"), dead));
     }
 
     /** A column's floor supported: its name, the column's kind on it (so its K_LL) and its floor areas. */
-    private static SupportedFloor floor(Fields fl, String p) {
+    private static SupportedFloor floor(JsonFields fl, String p) {
         MemberKind kind = MemberKind.parse(fl.child("kind"), fl.text("kind"));
         List<AreaShare> areas = list(fl, "areas", (n, q) -> {
-            Fields a = new Fields(n, q, Set.of("occupancy", "area"));
-            return Fields.at(q, () -> new AreaShare(a.text("occupancy"), a.number("area")));
+            JsonFields a = JsonFields.strict(n, q, Set.of("occupancy", "area"));
+            return JsonFields.at(q, () -> new AreaShare(a.text("occupancy"), a.number("area")));
         });
-        return Fields.at(p, () -> new SupportedFloor(fl.text("name"), kind, areas));
+        return JsonFields.at(p, () -> new SupportedFloor(fl.text("name"), kind, areas));
     }
 
     /** A beam's point load needs its position; a column's loads are axial, so x may be left out. */
-    private static PointLoad point(Fields pl, String p, boolean column) {
+    private static PointLoad point(JsonFields pl, String p, boolean column) {
         List<LiveShare> live = list(pl, "live", (n, q) -> {
-            Fields l = new Fields(n, q, Set.of("occupancy", "load", "partition"));
+            JsonFields l = JsonFields.strict(n, q, Set.of("occupancy", "load", "partition"));
             double load = Check.nonNegative(l.child("load"), l.number("load"));
-            return Fields.at(q, () -> new LiveShare(l.text("occupancy"), l.flag("partition", false), load));
+            return JsonFields.at(q, () -> new LiveShare(l.text("occupancy"), l.flag("partition", false), load));
         });
         List<AreaShare> areas = list(pl, "areas", (n, q) -> {
-            Fields a = new Fields(n, q, Set.of("occupancy", "area"));
-            return Fields.at(q, () -> new AreaShare(a.text("occupancy"), a.number("area")));
+            JsonFields a = JsonFields.strict(n, q, Set.of("occupancy", "area"));
+            return JsonFields.at(q, () -> new AreaShare(a.text("occupancy"), a.number("area")));
         });
         double x = column ? pl.number("x", 0) : pl.number("x");
-        return Fields.at(p, () -> new PointLoad(x, pl.number("dead", 0), live, areas));
+        return JsonFields.at(p, () -> new PointLoad(x, pl.number("dead", 0), live, areas));
     }
 
     private static com.baysheet.engine.code.Occupancy custom(JsonNode n, String p, UnitSystem units) {
-        Fields c = new Fields(n, p, Set.of("id", "name", "uniform", "concentrated", "contactSide", "rule", "assembly"));
+        JsonFields c = JsonFields.strict(n, p, Set.of("id", "name", "uniform", "concentrated", "contactSide", "rule", "assembly"));
         ReductionRule rule = ReductionRule.parse(c.child("rule"), c.text("rule"));
         double side = c.number("contactSide", units == UnitSystem.US ? 30 : 762);
-        return Fields.at(p, () -> OccupancyCatalogue.custom(c.text("id"), c.text("name"), units, c.number("uniform"),
+        return JsonFields.at(p, () -> OccupancyCatalogue.custom(c.text("id"), c.text("name"), units, c.number("uniform"),
                 c.number("concentrated", 0), side, rule, c.flag("assembly", false)));
     }
 
     private interface Reader<T> { T read(JsonNode n, String path); }
 
-    private static <T> List<T> list(Fields f, String field, Reader<T> r) {
+    private static <T> List<T> list(JsonFields f, String field, Reader<T> r) {
         List<T> out = new ArrayList<>();
         int i = 0;
         for (JsonNode n : f.array(field)) out.add(r.read(n, f.child(field) + "[" + i++ + "]"));

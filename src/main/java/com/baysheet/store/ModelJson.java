@@ -1,6 +1,7 @@
 package com.baysheet.store;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.engine.JsonFields;
 import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.code.ReductionRule;
 import com.baysheet.engine.units.UnitSystem;
@@ -29,7 +30,8 @@ import java.util.Map;
 
 /**
  * Reads the model from JSON, for the API and the demo data alike, so that both are validated the same
- * way: a missing or mistyped value is an {@link InputError} naming the field.
+ * way: a missing or mistyped value is an {@link InputError} naming the field. The values are read by
+ * {@link JsonFields}, as the command line reads a member; fields the model does not know are ignored.
  */
 public final class ModelJson {
     private ModelJson() {}
@@ -39,34 +41,34 @@ public final class ModelJson {
     }
 
     /** @param edition the edition when the body names none (a firm's default for a new project, a project's own on a change) */
-    public static ProjectInfo project(JsonNode n, String edition) {
-        return new ProjectInfo(text(n, "jobNumber"), text(n, "name"), optText(n, "address"), optText(n, "client"),
-                n.hasNonNull("edition") ? text(n, "edition") : edition, UnitSystem.parse("units", text(n, "units")),
-                flag(n, "partitionAllowance"), flag(n, "reducePartitions"), flag(n, "upliftReducedDead"), snow(n));
+    public static ProjectInfo project(JsonNode node, String edition) {
+        JsonFields n = JsonFields.of(node);
+        return new ProjectInfo(n.text("jobNumber"), n.text("name"), n.text("address", ""), n.text("client", ""),
+                n.has("edition") ? n.text("edition") : edition, UnitSystem.parse("units", n.text("units")),
+                n.flag("partitionAllowance", false), n.flag("reducePartitions", false), n.flag("upliftReducedDead", false), snow(n));
     }
 
     /** The optional snow fields of a project (see {@link SnowInput}); no groundSnow, no snow. */
-    static com.baysheet.engine.snow.SnowSite snow(JsonNode n) {
-        if (!n.hasNonNull("groundSnow")) return null;
-        return SnowInput.of(number(n, "groundSnow"), optText(n, "snowTerrain"), optText(n, "snowExposure"), optNumber(n, "exposureFactor"),
-                optText(n, "thermalCondition"), optNumber(n, "thermalFactor"), optText(n, "riskCategory"));
+    static com.baysheet.engine.snow.SnowSite snow(JsonFields n) {
+        if (!n.has("groundSnow")) return null;
+        return SnowInput.of(n.number("groundSnow"), n.text("snowTerrain", ""), n.text("snowExposure", ""), n.number("exposureFactor", Double.NaN),
+                n.text("thermalCondition", ""), n.number("thermalFactor", Double.NaN), n.text("riskCategory", ""));
     }
-
-    private static double optNumber(JsonNode n, String field) { return n.hasNonNull(field) ? number(n, field) : Double.NaN; }
 
     public static Grid grid(JsonNode n) {
         return new Grid(axis(n, "x"), axis(n, "y"));
     }
 
-    public static LevelInfo level(JsonNode n) {
-        boolean roof = flag(n, "roof");
-        return new LevelInfo(text(n, "name"), number(n, "elevation"), roof, roof ? number(n, "roofSlope") : Double.NaN, surface(n));
+    public static LevelInfo level(JsonNode node) {
+        JsonFields n = JsonFields.of(node);
+        boolean roof = n.flag("roof", false);
+        return new LevelInfo(n.text("name"), n.number("elevation"), roof, roof ? n.number("roofSlope") : Double.NaN, surface(n));
     }
 
     /** A roof's snow surface: {@code roofShape} MONOSLOPE (default) or HIP_OR_GABLE, {@code slippery}, {@code eaveToRidge}. */
-    static RoofSurface surface(JsonNode n) {
-        var shape = n.hasNonNull("roofShape") ? Choices.parse(SnowRoof.Shape.class, "roofShape", text(n, "roofShape")) : SnowRoof.Shape.MONOSLOPE;
-        return new RoofSurface(shape, flag(n, "slippery"), optNumber(n, "eaveToRidge"));
+    static RoofSurface surface(JsonFields n) {
+        var shape = n.has("roofShape") ? Choices.parse(SnowRoof.Shape.class, "roofShape", n.text("roofShape")) : SnowRoof.Shape.MONOSLOPE;
+        return new RoofSurface(shape, n.flag("slippery", false), n.number("eaveToRidge", Double.NaN));
     }
 
     /**
@@ -74,18 +76,21 @@ public final class ModelJson {
      * [first,last], checked against this grid before any cell is listed; {@code cantileverOccupancy} absent or
      * null for the default balcony of the bay's occupancy.
      */
-    public static BayAssignment bays(JsonNode n, Grid grid) {
-        List<Cell> cells = cells(n, grid);
-        if (flag(n, "opening")) return BayAssignment.opening(cells);
-        Framing f = new Framing(Direction.valueOf(choice(n, "beams", "X", "Y")), integer(n, "infillBeams"));
+    public static BayAssignment bays(JsonNode node, Grid grid) {
+        JsonFields n = JsonFields.of(node);
+        List<Cell> cells = cells(node, grid);
+        if (n.flag("opening", false)) return BayAssignment.opening(cells);
+        Framing f = new Framing(Direction.valueOf(choice(n, "beams", "X", "Y")), n.integer("infillBeams"));
         Map<Side, Double> cantilevers = new EnumMap<>(Side.class);
-        JsonNode cn = n.path("cantilevers");
-        for (Side s : Side.values()) {
-            String key = s.name().toLowerCase();
-            if (cn.hasNonNull(key)) cantilevers.put(s, number(cn, key, "cantilevers." + key));
+        if (n.has("cantilevers")) {
+            JsonFields cn = n.object("cantilevers");
+            for (Side s : Side.values()) {
+                String key = s.name().toLowerCase();
+                if (cn.has(key)) cantilevers.put(s, cn.number(key));
+            }
         }
-        return new BayAssignment(cells, false, text(n, "occupancy"), number(n, "deadLoad"), f, cantilevers,
-                n.hasNonNull("cantileverOccupancy") ? text(n, "cantileverOccupancy") : null);
+        return new BayAssignment(cells, false, n.text("occupancy"), n.number("deadLoad"), f, cantilevers,
+                n.has("cantileverOccupancy") ? n.text("cantileverOccupancy") : null);
     }
 
     /** The selected cells; a range reaching past the grid is refused before it is expanded. */
@@ -112,17 +117,19 @@ public final class ModelJson {
      * the name "2"), {@code axis} only where a name is on both axes; {@code dead}, or {@code deadPressure} and
      * {@code height}; {@code live} (default 0) with {@code liveOccupancy}; {@code partitionWall} (default false).
      */
-    public static LineLoadEntry lineLoad(JsonNode n) {
-        return new LineLoadEntry(n.hasNonNull("axis") ? choice(n, "axis", "X", "Y").toLowerCase() : null,
-                lineName(n, "line"), lineName(n, "from"), lineName(n, "to"), text(n, "label"), optNumber(n, "dead"),
-                optNumber(n, "deadPressure"), optNumber(n, "height"), n.hasNonNull("live") ? number(n, "live") : 0,
-                n.hasNonNull("liveOccupancy") ? text(n, "liveOccupancy") : null, flag(n, "partitionWall"));
+    public static LineLoadEntry lineLoad(JsonNode node) {
+        JsonFields n = JsonFields.of(node);
+        return new LineLoadEntry(n.has("axis") ? choice(n, "axis", "X", "Y").toLowerCase() : null,
+                lineName(n, "line"), lineName(n, "from"), lineName(n, "to"), n.text("label"), n.number("dead", Double.NaN),
+                n.number("deadPressure", Double.NaN), n.number("height", Double.NaN), n.number("live", 0),
+                n.has("liveOccupancy") ? n.text("liveOccupancy") : null, n.flag("partitionWall", false));
     }
 
-    public static FirmOccupancy firmOccupancy(JsonNode n) {
-        return new FirmOccupancy(text(n, "id"), text(n, "name"), UnitSystem.parse("units", text(n, "units")),
-                number(n, "uniform"), n.has("concentrated") ? number(n, "concentrated") : 0, number(n, "contactSide"),
-                ReductionRule.parse("rule", text(n, "rule")), flag(n, "assembly"));
+    public static FirmOccupancy firmOccupancy(JsonNode node) {
+        JsonFields n = JsonFields.of(node);
+        return new FirmOccupancy(n.text("id"), n.text("name"), UnitSystem.parse("units", n.text("units")),
+                n.number("uniform"), n.number("concentrated", 0), n.number("contactSide"),
+                ReductionRule.parse("rule", n.text("rule")), n.flag("assembly", false));
     }
 
     public static long version(JsonNode n) {
@@ -162,48 +169,15 @@ public final class ModelJson {
         return v.isIntegralNumber() && v.canConvertToInt();
     }
 
-    private static String text(JsonNode n, String field) {
-        JsonNode v = n.path(field);
-        if (!v.isTextual() || v.asText().isBlank()) throw new InputError(field, v, "is required (text)");
-        return v.asText();
-    }
-
-    private static String optText(JsonNode n, String field) {
-        return n.hasNonNull(field) ? n.get(field).asText() : "";
-    }
-
-    private static String choice(JsonNode n, String field, String... allowed) {
-        String v = text(n, field).toUpperCase();
+    private static String choice(JsonFields n, String field, String... allowed) {
+        String v = n.text(field).toUpperCase();
         for (String a : allowed) if (a.equals(v)) return v;
         throw new InputError(field, v, "must be one of " + String.join(", ", allowed));
     }
 
-    private static boolean flag(JsonNode n, String field) {
-        JsonNode v = n.path(field);
-        if (v.isMissingNode() || v.isNull()) return false;
-        if (!v.isBoolean()) throw new InputError(field, v, "must be true or false");
-        return v.asBoolean();
-    }
-
-    private static double number(JsonNode n, String field) {
-        return number(n, field, field);
-    }
-
-    private static double number(JsonNode n, String key, String field) {
-        JsonNode v = n.path(key);
-        if (!v.isNumber()) throw new InputError(field, v.isMissingNode() ? "nothing" : v, "must be a number");
-        return v.asDouble();
-    }
-
-    private static String lineName(JsonNode n, String field) {
-        JsonNode v = n.path(field);
-        return v.isIntegralNumber() && v.canConvertToInt() ? v.asText() : text(n, field);
-    }
-
-    private static int integer(JsonNode n, String field) {
-        JsonNode v = n.path(field);
-        if (!v.isIntegralNumber() || !v.canConvertToInt())
-            throw new InputError(field, v.isMissingNode() ? "nothing" : v, "must be a whole number");
-        return v.asInt();
+    /** A grid line's name, where a whole number such as 2 stands for the name "2". */
+    private static String lineName(JsonFields n, String field) {
+        JsonNode v = n.node(field);
+        return v != null && v.isIntegralNumber() && v.canConvertToInt() ? v.asText() : n.text(field);
     }
 }
