@@ -1,5 +1,6 @@
 package com.baysheet.framing;
 
+import com.baysheet.engine.Tolerances;
 import com.baysheet.engine.member.MemberResult;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Clause;
@@ -16,9 +17,6 @@ import java.util.List;
  */
 final class TakeDownRecord {
     private TakeDownRecord() {}
-
-    /** Relative difference below which the reducible area is taken as the whole A_T (nothing to print apart). */
-    private static final double SAME_AREA = 1e-9;
 
     static CalcRecord write(CalcContext ctx, String title, List<TakeDown.Row> rows, List<MemberResult> columns) {
         var ed = ctx.edition();
@@ -72,7 +70,7 @@ final class TakeDownRecord {
     private static void areas(RecordBuilder rec, CalcContext ctx, TakeDown.Row w, double above, boolean top, String lv, String at) {
         var ed = ctx.edition();
         double floorHere = w.cumulativeArea() - above, roofHere = w.areaAtLevel() - floorHere;
-        String roof = roofHere > SAME_AREA * Math.max(1, w.areaAtLevel()) ? "; roof area at this level " + rec.show(roofHere, Quantity.AREA) + ", carried as Lr" : "";
+        String roof = roofHere > Tolerances.SAME_AREA * Math.max(1, w.areaAtLevel()) ? "; roof area at this level " + rec.show(roofHere, Quantity.AREA) + ", carried as Lr" : "";
         rec.step("ΣA_T" + at, lv + "A_T supported, cumulative (" + w.floorsSupported() + " floor" + (w.floorsSupported() == 1 ? "" : "s") + roof + ")",
                 top ? "ΣA_T = floor area at this level" : "ΣA_T = ΣA_T above + floor area at this level",
                 top ? rec.num(floorHere, Quantity.AREA) : rec.num(above, Quantity.AREA) + " + " + rec.num(floorHere, Quantity.AREA),
@@ -84,7 +82,7 @@ final class TakeDownRecord {
 
     /** Some of the A_T supported is not reducible (mixed occupancy), so f comes from the reducible part. */
     private static boolean reducedInPart(TakeDown.Row w) {
-        return w.cumulativeArea() - w.reducibleArea() > SAME_AREA * Math.max(1, w.cumulativeArea());
+        return w.cumulativeArea() - w.reducibleArea() > Tolerances.SAME_AREA * Math.max(1, w.cumulativeArea());
     }
 
     /** Eq. 4.7-1 with the constant of the project's unit system, from the edition. */

@@ -1,6 +1,7 @@
 package com.baysheet.engine.beam;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.engine.Tolerances;
 import com.baysheet.engine.load.Support;
 
 import java.util.Arrays;
@@ -14,8 +15,6 @@ import java.util.Arrays;
 public final class BeamSolver {
     private BeamSolver() {}
 
-    /** Relative tolerance for positions that coincide. */
-    static final double SAME_POSITION = 1e-12;
     /** Sub-intervals searched per segment for a zero slope, and bisection steps on each. */
     static final int SLOPE_SAMPLES = 8;
     static final int BISECTIONS = 60;
@@ -40,7 +39,7 @@ public final class BeamSolver {
         double[] mStart = new double[n], vStart = new double[n], wSeg = new double[n];
         double v = 0, m = fixed;
         double maxV = 0, maxVAt = 0, maxM = Double.NEGATIVE_INFINITY, maxMAt = 0, minM = Double.POSITIVE_INFINITY, minMAt = 0;
-        double tol = SAME_POSITION * length;
+        double tol = Tolerances.SAME_POSITION * length;
         for (int i = 0; i < n; i++) {
             double xi = xs[i];
             if (Math.abs(xi) <= tol) v += left;
@@ -64,8 +63,8 @@ public final class BeamSolver {
             v = v - w * s;
             if (Math.abs(v) > Math.abs(maxV)) { maxV = v; maxVAt = xs[i + 1]; }
         }
-        if (Math.abs(maxM) < 1e-12 * Math.max(1, Math.abs(total) * length)) maxM = 0;
-        if (Math.abs(minM) < 1e-12 * Math.max(1, Math.abs(total) * length)) minM = 0;
+        if (Math.abs(maxM) < Tolerances.ZERO_MOMENT * Math.max(1, Math.abs(total) * length)) maxM = 0;
+        if (Math.abs(minM) < Tolerances.ZERO_MOMENT * Math.max(1, Math.abs(total) * length)) minM = 0;
 
         double dMax = Double.NaN, dAt = Double.NaN, tip = Double.NaN;
         if (!Double.isNaN(stiffness)) {
@@ -76,7 +75,7 @@ public final class BeamSolver {
     }
 
     private static void checkWithin(BeamLoads loads, double length) {
-        double tol = SAME_POSITION * length;
+        double tol = Tolerances.SAME_POSITION * length;
         for (int i = 0; i < loads.pointCount(); i++)
             if (loads.x(i) < -tol || loads.x(i) > length + tol)
                 throw new InputError("pointLoads[" + i + "].x", loads.x(i), "lies off the member (length " + length + ")");
@@ -94,7 +93,7 @@ public final class BeamSolver {
         for (int i = 0; i < loads.pointCount(); i++) xs[k++] = loads.x(i);
         for (int i = 0; i < loads.distributedCount(); i++) { xs[k++] = loads.a(i); xs[k++] = loads.b(i); }
         Arrays.sort(xs, 0, k);
-        double tol = SAME_POSITION * length;
+        double tol = Tolerances.SAME_POSITION * length;
         int u = 0;
         for (int i = 0; i < k; i++) if (u == 0 || xs[i] - xs[u - 1] > tol) xs[u++] = xs[i];
         return Arrays.copyOf(xs, u);

@@ -2,6 +2,7 @@ package com.baysheet.engine.load;
 
 import com.baysheet.engine.Check;
 import com.baysheet.engine.InputError;
+import com.baysheet.engine.Tolerances;
 import com.baysheet.engine.code.MemberKind;
 
 import java.util.List;
@@ -51,11 +52,11 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
         if (!axial && floorsSupported != 1) throw new InputError("floorsSupported", floorsSupported, "a beam supports one floor");
         double length = support.length();
         for (int i = 0; i < strips.size(); i++)
-            if (strips.get(i).to() > length * (1 + 1e-9))
+            if (strips.get(i).to() > length * (1 + Tolerances.WITHIN_LENGTH))
                 throw new InputError("strips[" + i + "].to", strips.get(i).to(), "lies past the end of the member (" + length + ")");
         if (!axial)
             for (int i = 0; i < pointLoads.size(); i++)
-                if (pointLoads.get(i).x() > length * (1 + 1e-9))
+                if (pointLoads.get(i).x() > length * (1 + Tolerances.WITHIN_LENGTH))
                     throw new InputError("pointLoads[" + i + "].x", pointLoads.get(i).x(), "lies off the member (length " + length + ")");
         selfWeightSource = selfWeightSource == null ? "" : selfWeightSource.strip();
         Check.nonNegative("columnHeight", columnHeight);
@@ -63,7 +64,7 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
         lineLoads = List.copyOf(Check.present("lineLoads", lineLoads));
         if (axial && !lineLoads.isEmpty()) throw new InputError("lineLoads", lineLoads.size(), "a column takes point loads, not line loads");
         for (int i = 0; i < lineLoads.size(); i++)
-            if (lineLoads.get(i).to() > length * (1 + 1e-9))
+            if (lineLoads.get(i).to() > length * (1 + Tolerances.WITHIN_LENGTH))
                 throw new InputError("lineLoads[" + i + "].to", lineLoads.get(i).to(), "lies past the end of the member (" + length + ")");
         if (strips.isEmpty() && areas.isEmpty() && pointLoads.isEmpty() && lineLoads.isEmpty())
             throw new InputError("loads", "none", "a member needs at least one strip, area or point load");

@@ -1,5 +1,6 @@
 package com.baysheet.engine.member;
 
+import com.baysheet.engine.Tolerances;
 import com.baysheet.engine.beam.BeamActions;
 import com.baysheet.engine.beam.BeamLoads;
 import com.baysheet.engine.beam.BeamSolver;
@@ -23,9 +24,8 @@ final class ConcentratedCheck {
 
     /** Coarse positions scanned along the member. */
     static final int SCAN_POSITIONS = 41;
-    /** Golden-section steps around the best coarse position, and the position tolerance as a share of length. */
+    /** Golden-section steps around the best coarse position (they stop early at {@link Tolerances#LOAD_POSITION}). */
     static final int REFINE_STEPS = 40;
-    static final double POSITION_TOLERANCE = 1e-9;
 
     enum Effect { MAX_MOMENT, MIN_MOMENT, SHEAR, LEFT_REACTION, RIGHT_REACTION }
 
@@ -53,7 +53,7 @@ final class ConcentratedCheck {
         double length = support.length();
         double patch = Math.min(side, length);
         double lo = patch / 2, hi = length - patch / 2;
-        if (hi - lo <= POSITION_TOLERANCE * length) return new Placement(value(support, load, patch, lo, effect), lo);
+        if (hi - lo <= Tolerances.LOAD_POSITION * length) return new Placement(value(support, load, patch, lo, effect), lo);
         double known = worstPosition(support, lo, hi, effect);
         if (!Double.isNaN(known)) return new Placement(value(support, load, patch, known, effect), known);
         return scan(support, load, patch, lo, hi, effect);
@@ -87,7 +87,7 @@ final class ConcentratedCheck {
         double g = (Math.sqrt(5) - 1) / 2;
         double c = b - g * (b - a), d = a + g * (b - a);
         double fc = score(support, load, patch, c, effect), fd = score(support, load, patch, d, effect);
-        for (int i = 0; i < REFINE_STEPS && b - a > POSITION_TOLERANCE * length; i++) {
+        for (int i = 0; i < REFINE_STEPS && b - a > Tolerances.LOAD_POSITION * length; i++) {
             if (fc >= fd) { b = d; d = c; fd = fc; c = b - g * (b - a); fc = score(support, load, patch, c, effect); }
             else { a = c; c = d; fc = fd; d = a + g * (b - a); fd = score(support, load, patch, d, effect); }
         }

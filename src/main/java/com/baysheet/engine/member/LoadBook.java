@@ -1,5 +1,6 @@
 package com.baysheet.engine.member;
 
+import com.baysheet.engine.Tolerances;
 import com.baysheet.engine.beam.BeamLoads;
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.load.AreaLoad;
@@ -81,9 +82,6 @@ final class LoadBook {
         return b;
     }
 
-    /** Relative difference allowed between the floors' areas and the areas carried (rounding of sums in another order). */
-    static final double FLOOR_AREA_TOLERANCE = 1e-9;
-
     /** The floors listed must hold, occupancy by occupancy, exactly the floor areas the loads carry. */
     private void checkFloors() {
         if (in.floors().isEmpty()) return;
@@ -101,7 +99,7 @@ final class LoadBook {
         ids.addAll(listed.keySet());
         for (String id : ids) {
             double carried = floorAreas.getOrDefault(id, 0.0), given = listed.getOrDefault(id, 0.0);
-            if (Math.abs(carried - given) > FLOOR_AREA_TOLERANCE * Math.max(1, Math.max(carried, given)))
+            if (Math.abs(carried - given) > Tolerances.SAME_AREA * Math.max(1, Math.max(carried, given)))
                 throw new com.baysheet.engine.InputError("floors", id + " " + given, "the floors listed must add up to the floor area of "
                         + id + " the member carries (" + carried + ")");
         }

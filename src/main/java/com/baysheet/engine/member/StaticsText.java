@@ -1,5 +1,6 @@
 package com.baysheet.engine.member;
 
+import com.baysheet.engine.Tolerances;
 import com.baysheet.engine.beam.BeamLoads;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.record.RecordBuilder;
@@ -42,7 +43,7 @@ final class StaticsText {
         if (!(s instanceof Support.Simple)) return false;
         List<Part> parts = parts(loads);
         if (parts.size() != 1 || parts.get(0).point) return false;
-        double tol = 1e-9 * s.span();
+        double tol = Tolerances.FULL_SPAN * s.span();
         return Math.abs(parts.get(0).a) <= tol && Math.abs(parts.get(0).b - s.span()) <= tol;
     }
 

@@ -2,6 +2,7 @@ package com.baysheet.engine.reduction;
 
 import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.InputError;
+import com.baysheet.engine.Tolerances;
 import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.record.RecordBuilder;
@@ -20,12 +21,6 @@ import com.baysheet.engine.units.UnitSystem;
  */
 public final class RoofLiveLoad {
     private RoofLiveLoad() {}
-
-    /**
-     * Relative tolerance on L0 when telling the ordinary roof: the code's SI value 0.96 kN/m² is 20.05 psf, and
-     * 20 psf is 0.9576 kN/m², so a firm row entered in either system stays ordinary in both (0.25 % apart).
-     */
-    public static final double ORDINARY_TOLERANCE = 0.005;
 
     /** Largest slope accepted: 24 in/ft (about 63°) or 200 %. */
     public static final double MAX_SLOPE_US = 24, MAX_SLOPE_SI = 200;
@@ -83,7 +78,7 @@ public final class RoofLiveLoad {
     /** A roof row (rule ROOF) is the ordinary roof of 4.8.2 where its L0 is the edition's ordinary roof load. */
     public static boolean isOrdinary(CalcContext ctx, Occupancy o) {
         double ordinary = ctx.constant("roof.ordinary");
-        return o.isRoof() && Math.abs(o.uniform(ctx.system()) - ordinary) <= ORDINARY_TOLERANCE * ordinary;
+        return o.isRoof() && Math.abs(o.uniform(ctx.system()) - ordinary) <= Tolerances.ORDINARY_ROOF * ordinary;
     }
 
     /** Any other roof row: no R1, R2 or bounds; Lr = L0. Below the ordinary roof load the firm must confirm its row. */
@@ -95,7 +90,7 @@ public final class RoofLiveLoad {
         rec.info(roof.name() + ": not reduced and not bounded; R1, R2 and the bounds of " + ed.clause("roof.reduction").label()
                 + " apply to ordinary flat, pitched and curved roofs (L0 = " + rec.show(ordinary, Quantity.PRESSURE) + ") only.",
                 ed.clause("roof.reduction"));
-        if (l0 < ordinary * (1 - ORDINARY_TOLERANCE))
+        if (l0 < ordinary * (1 - Tolerances.ORDINARY_ROOF))
             rec.caution(roof.name() + ": L0 of " + rec.show(l0, Quantity.PRESSURE) + " is below the ordinary roof live load of "
                     + rec.show(ordinary, Quantity.PRESSURE) + " (" + ed.clause("loads.table").label() + "); confirm the row against the adopted code.",
                     ed.clause("loads.table"));

@@ -26,7 +26,7 @@ class RoofProperties {
     void roofRowOtherThanTheOrdinaryIsNeverReducedNorCapped(@ForAll @DoubleRange(min = 1, max = 200) double l0,
                                                             @ForAll @DoubleRange(min = 1, max = 5000) double area,
                                                             @ForAll @DoubleRange(min = 0, max = 24) double slope) {
-        Assume.that(Math.abs(l0 - 20) > 20 * RoofLiveLoad.ORDINARY_TOLERANCE);
+        Assume.that(Math.abs(l0 - 20) > 20 * com.baysheet.engine.Tolerances.ORDINARY_ROOF);
         Occupancy row = OccupancyCatalogue.custom("roof-x", "Firm roof", UnitSystem.US, l0, 0, 30, ReductionRule.ROOF, false);
         RecordBuilder rec = new RecordBuilder("P", "ASCE 7-16", UnitSystem.US);
         // ASCE 7-16 4.8.2 covers ordinary roofs (L0 = 20 psf) only: Lr = L0
