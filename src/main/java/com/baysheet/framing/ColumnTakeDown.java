@@ -7,6 +7,7 @@ import com.baysheet.engine.load.Support;
 import com.baysheet.engine.load.SupportedFloor;
 import com.baysheet.engine.member.MemberResult;
 import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.record.ResultKey;
 import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.reduction.LiveFactors;
 import com.baysheet.framing.model.SelfWeights;
@@ -97,13 +98,14 @@ final class ColumnTakeDown {
         double reducible = lf.map(LiveFactors::reducibleArea).orElse(0.0), influence = lf.map(LiveFactors::influenceArea).orElse(0.0);
         return new TakeDown.Row(p.level.name(), id, areaHere, cumArea, reducible, ctx.edition().kll(kind), influence, floors,
                 lf.map(LiveFactors::factor).orElse(1.0),
-                deadHere, selfWeight, r.value("D.P"), r.value("L0.P"), r.value("L.P"), r.value("Lr.P"), snowOf(r),
-                r.value("LRFD.P"), combo(r, "LRFD.P"), r.value("ASD.P"), combo(r, "ASD.P"));
+                deadHere, selfWeight, r.value(ResultKey.axial("D")), r.value(ResultKey.axial("L0")), r.value(ResultKey.axial("L")),
+                r.value(ResultKey.axial("Lr")), snowOf(r), r.value(ResultKey.axial("LRFD")), combo(r, ResultKey.axial("LRFD")),
+                r.value(ResultKey.axial("ASD")), combo(r, ResultKey.axial("ASD")));
     }
 
     /** The column's unfactored S (0 where it carries no snow). */
     private static double snowOf(MemberResult r) {
-        double s = r.value("S.P");
+        double s = r.value(ResultKey.axial("S"));
         return Double.isNaN(s) ? 0 : s;
     }
 
@@ -120,7 +122,7 @@ final class ColumnTakeDown {
         return a;
     }
 
-    private static String combo(MemberResult r, String key) {
+    private static String combo(MemberResult r, ResultKey key) {
         String label = r.label(key);
         int a = label.lastIndexOf('('), b = label.lastIndexOf(')');
         return a >= 0 && b > a ? label.substring(a + 1, b) : "";

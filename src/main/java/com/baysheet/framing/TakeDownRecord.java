@@ -5,6 +5,7 @@ import com.baysheet.engine.member.MemberResult;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
+import com.baysheet.engine.record.ResultKey;
 import com.baysheet.engine.record.Step;
 import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Quantity;
@@ -55,13 +56,13 @@ final class TakeDownRecord {
                     ed.clause("combo.asd"));
         }
         TakeDown.Row base = rows.get(rows.size() - 1);
-        rec.result("D.P", "Dead load at the base", base.dead(), Quantity.FORCE)
-           .result("L.P", "Floor live load at the base, reduced", base.liveReduced(), Quantity.FORCE)
-           .result("Lr.P", "Roof live load at the base", base.roofLive(), Quantity.FORCE)
-           .result("S.P", "Snow load at the base, not reduced", base.snow(), Quantity.FORCE)
-           .result("LRFD.P", "Factored axial load at the base (" + base.lrfdCombination() + ")", base.lrfd(), Quantity.FORCE)
-           .result("ASD.P", "Service axial load at the base (" + base.asdCombination() + ")", base.asd(), Quantity.FORCE)
-           .governs("LRFD.P").governs("ASD.P");
+        rec.result(ResultKey.axial("D"), "Dead load at the base", base.dead(), Quantity.FORCE)
+           .result(ResultKey.axial("L"), "Floor live load at the base, reduced", base.liveReduced(), Quantity.FORCE)
+           .result(ResultKey.axial("Lr"), "Roof live load at the base", base.roofLive(), Quantity.FORCE)
+           .result(ResultKey.axial("S"), "Snow load at the base, not reduced", base.snow(), Quantity.FORCE)
+           .result(ResultKey.axial("LRFD"), "Factored axial load at the base (" + base.lrfdCombination() + ")", base.lrfd(), Quantity.FORCE)
+           .result(ResultKey.axial("ASD"), "Service axial load at the base (" + base.asdCombination() + ")", base.asd(), Quantity.FORCE)
+           .governs(ResultKey.axial("LRFD")).governs(ResultKey.axial("ASD"));
         notes(rec, ctx);
         return rec.build();
     }

@@ -2,19 +2,21 @@ package com.baysheet.sheet;
 
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Entry;
+import com.baysheet.engine.record.ResultKey;
 import com.lowagie.text.Element;
 import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfTemplate;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.stream.Stream;
 
 /**
  * An axial member sketched as a column in elevation with the load arriving at its head, labelled with the
  * record's own axial results (dead, design live, roof live, factored and service), as shown.
  */
 final class ColumnDiagram {
-    private static final String[] KEYS = {"D.P", "Ldes.P", "Lr.P", "LRFD.P", "ASD.P"};
+    private static final List<ResultKey> KEYS = Stream.of("D", "Ldes", "Lr", "LRFD", "ASD").map(ResultKey::axial).toList();
 
     private ColumnDiagram() {}
 
@@ -44,8 +46,8 @@ final class ColumnDiagram {
 
     private static List<Entry> present(CalcRecord r) {
         List<Entry> out = new ArrayList<>();
-        for (String k : KEYS)
-            for (Entry e : r.results()) if (e.key().equals(k)) out.add(e);
+        for (ResultKey k : KEYS)
+            for (Entry e : r.results()) if (e.key().equals(k.text())) out.add(e);
         return out;
     }
 }

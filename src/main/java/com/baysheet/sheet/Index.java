@@ -1,6 +1,7 @@
 package com.baysheet.sheet;
 
 import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.record.ResultKey;
 import com.lowagie.text.BadElementException;
 import com.lowagie.text.Element;
 import com.lowagie.text.Image;
@@ -82,7 +83,7 @@ final class Index {
     private static String governing(CalcRecord r) {
         StringJoiner j = new StringJoiner("; ");
         for (String k : r.governing()) {
-            String label = r.entry(k).label(), action = k.substring(k.indexOf('.') + 1);
+            String label = r.entry(k).label(), action = ResultKey.parse(k).action();
             int open = label.lastIndexOf('(');
             j.add(action + (open >= 0 && label.endsWith(")") ? " " + label.substring(open) : "") + " " + r.entry(k).shown());
         }

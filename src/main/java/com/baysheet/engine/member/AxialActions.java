@@ -4,6 +4,7 @@ import com.baysheet.engine.beam.BeamLoads;
 import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.record.RecordBuilder;
+import com.baysheet.engine.record.ResultKey;
 import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Quantity;
 
@@ -38,21 +39,22 @@ final class AxialActions {
         double lrdes = roofConcentrated(ctx, book, roof0.total(), lr, rec);
         double s = snow ? rec.step("P_S", "Axial snow load, not reduced", "P_S = Σ S", "sum of the roofs' snow loads carried",
                 book.snow.total(), Quantity.FORCE, ed.clause("snow.sloped")) : Double.NaN;
-        var lrfd = LoadCombinations.govern(true, "P_u", "axial load", d, ldes, lrdes, s, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
-        var asd = LoadCombinations.govern(false, "P_a", "axial load", d, ldes, lrdes, s, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
+        var axial = new LoadCombinations.Unfactored("axial load", d, ldes, lrdes, s, halfL, Quantity.FORCE, ed.clause("combo.lrfd"), ed.clause("combo.asd"));
+        var lrfd = LoadCombinations.govern(true, "P_u", axial, rec);
+        var asd = LoadCombinations.govern(false, "P_a", axial, rec);
         if (halfL && lrfd.combination().halfL()) rec.info("0.5 L used in " + lrfd.combination().name() + ".", ed.clause("combo.halfL"));
 
-        rec.result("D.P", "Dead load P_D", d, Quantity.FORCE)
-           .result("L0.P", "Live load, unreduced", l0, Quantity.FORCE)
-           .result("L.P", "Live load, reduced", l, Quantity.FORCE)
-           .result("Lc.P", "Concentrated live load", lc, Quantity.FORCE)
-           .result("Ldes.P", "Design live load", ldes, Quantity.FORCE)
-           .result("Lr0.P", "Roof live load, unreduced", roof0.total(), Quantity.FORCE)
-           .result("Lr.P", "Roof live load Lr", lr, Quantity.FORCE)
-           .result("LRFD.P", "Factored axial load P_u (" + lrfd.label() + ")", lrfd.value(), Quantity.FORCE)
-           .result("ASD.P", "Service axial load P_a (" + asd.label() + ")", asd.value(), Quantity.FORCE)
-           .governs("LRFD.P").governs("ASD.P");
-        if (snow) rec.result("S.P", "Snow load S, not reduced", s, Quantity.FORCE);
+        rec.result(ResultKey.axial("D"), "Dead load P_D", d, Quantity.FORCE)
+           .result(ResultKey.axial("L0"), "Live load, unreduced", l0, Quantity.FORCE)
+           .result(ResultKey.axial("L"), "Live load, reduced", l, Quantity.FORCE)
+           .result(ResultKey.axial("Lc"), "Concentrated live load", lc, Quantity.FORCE)
+           .result(ResultKey.axial("Ldes"), "Design live load", ldes, Quantity.FORCE)
+           .result(ResultKey.axial("Lr0"), "Roof live load, unreduced", roof0.total(), Quantity.FORCE)
+           .result(ResultKey.axial("Lr"), "Roof live load Lr", lr, Quantity.FORCE)
+           .result(ResultKey.axial("LRFD"), "Factored axial load P_u (" + lrfd.label() + ")", lrfd.value(), Quantity.FORCE)
+           .result(ResultKey.axial("ASD"), "Service axial load P_a (" + asd.label() + ")", asd.value(), Quantity.FORCE)
+           .governs(ResultKey.axial("LRFD")).governs(ResultKey.axial("ASD"));
+        if (snow) rec.result(ResultKey.axial("S"), "Snow load S, not reduced", s, Quantity.FORCE);
     }
 
     /**
@@ -68,8 +70,8 @@ final class AxialActions {
         rec.info(p > lr ? "The concentrated roof load governs the axial roof live load (used alone, never added to the uniform roof load)."
                 : "The uniform roof live load governs the axial roof live load; the concentrated roof load is not added.", ed.clause("concentrated"));
         double design = Math.max(p, lr);
-        rec.result("Lrc.P", "Concentrated roof live load", p, Quantity.FORCE)
-           .result("Lrdes.P", "Design roof live load", design, Quantity.FORCE);
+        rec.result(ResultKey.axial("Lrc"), "Concentrated roof live load", p, Quantity.FORCE)
+           .result(ResultKey.axial("Lrdes"), "Design roof live load", design, Quantity.FORCE);
         return design;
     }
 

@@ -8,6 +8,7 @@ import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
+import com.baysheet.engine.record.ResultKey;
 import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Quantity;
 
@@ -69,14 +70,15 @@ final class BendingActions {
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
             double si = snow ? sn[i] : Double.NaN;
-            var u = LoadCombinations.govern(true, "LRFD." + e.key, e.lower, d[i], design[i], lrDesign[i], si, halfL, e.q(),
-                    ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
-            var a = LoadCombinations.govern(false, "ASD." + e.key, e.lower, d[i], design[i], lrDesign[i], si, halfL, e.q(),
-                    ed.clause("combo.lrfd"), ed.clause("combo.asd"), rec);
-            rec.result("Ldes." + e.key, e.title + ", design live load", design[i], e.q())
-               .result("LRFD." + e.key, e.title + ", factored (" + u.label() + ")", u.value(), e.q())
-               .result("ASD." + e.key, e.title + ", service (" + a.label() + ")", a.value(), e.q())
-               .governs("LRFD." + e.key);
+            var cases = new LoadCombinations.Unfactored(e.lower, d[i], design[i], lrDesign[i], si, halfL, e.q(),
+                    ed.clause("combo.lrfd"), ed.clause("combo.asd"));
+            ResultKey factored = ResultKey.of("LRFD", e.key), service = ResultKey.of("ASD", e.key);
+            var u = LoadCombinations.govern(true, factored.text(), cases, rec);
+            var a = LoadCombinations.govern(false, service.text(), cases, rec);
+            rec.result(ResultKey.of("Ldes", e.key), e.title + ", design live load", design[i], e.q())
+               .result(factored, e.title + ", factored (" + u.label() + ")", u.value(), e.q())
+               .result(service, e.title + ", service (" + a.label() + ")", a.value(), e.q())
+               .governs(factored);
         }
         if (s instanceof Support.Overhang o && !(floor0.isEmpty() && roof0.isEmpty()))
             MinimumReactions.record(ctx, o, book, floor0, roof0, rec);
@@ -120,12 +122,12 @@ final class BendingActions {
             String sub = substituted(rec, e, s, patterns.get(k), acts.get(k), closed);
             if ((e == Effect.RA || e == Effect.RB) && value(acts.get(k), e, s) < 0 && rec.writesText()) sub += " < 0, taken as 0 (see the least reactions)";
             rec.step(e.symbol + "." + c, e.title + ", " + what + placed, formula(e, s, closed), sub, best, e.q(), clause);
-            rec.result(c + "." + e.key, e.title + ", " + what, best, e.q());
+            rec.result(ResultKey.of(c, e.key), e.title + ", " + what, best, e.q());
         }
         if (!Double.isNaN(ei) && !c.equals("L0")) {
             rec.step("Δ." + c, "Deflection, " + what, "Δ from ∫∫ M/EI", "at x = " + rec.show(full.maxDeflectionAt(), Quantity.LENGTH),
                     full.maxDeflection(), Quantity.SMALL_LENGTH, clause);
-            rec.result(c + ".Δ", "Deflection, " + what, full.maxDeflection(), Quantity.SMALL_LENGTH);
+            rec.result(ResultKey.of(c, "Δ"), "Deflection, " + what, full.maxDeflection(), Quantity.SMALL_LENGTH);
         }
         return out;
     }
@@ -195,12 +197,12 @@ final class BendingActions {
             double v = e == Effect.MNEG ? Math.min(0, pl.effect()) : e == Effect.MPOS ? Math.max(0, pl.effect()) : Math.abs(pl.effect());
             rec.step(e.symbol + "." + k.step(), e.title + ", " + k.concentrated(), "placed for the largest effect",
                     "centre at x = " + rec.show(pl.at(), Quantity.LENGTH), v, e.q(), ed.clause("concentrated"));
-            rec.result(k.step() + "." + e.key, e.title + ", " + k.concentrated(), v, e.q());
+            rec.result(ResultKey.of(k.step(), e.key), e.title + ", " + k.concentrated(), v, e.q());
             boolean conc = Math.abs(v) > Math.abs(l[i]);
             if (conc) design[i] = e == Effect.RA || e == Effect.RB ? Math.copySign(v, l[i] == 0 ? 1 : l[i]) : v;
-            rec.resultText(k.governs() + "." + e.key, e.title + ": governing " + k.live(), conc ? "concentrated" : "uniform");
+            rec.resultText(ResultKey.of(k.governs(), e.key), e.title + ": governing " + k.live(), conc ? "concentrated" : "uniform");
             // the floor's design live load is recorded with the combinations, for every member
-            if (k == ConcentratedCheck.ROOF) rec.result(k.design() + "." + e.key, e.title + ", design " + k.live(), design[i], e.q());
+            if (k == ConcentratedCheck.ROOF) rec.result(ResultKey.of(k.design(), e.key), e.title + ", design " + k.live(), design[i], e.q());
         }
         return design;
     }

@@ -1,5 +1,6 @@
 package com.baysheet.engine.member;
 
+import com.baysheet.engine.Check;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.units.Display;
@@ -57,19 +58,36 @@ public final class LoadCombinations {
         public String label() { return formula.isEmpty() ? combination.name() : combination.name() + ": " + formula; }
     }
 
-    /** D, L and Lr only (no snow on the member). */
-    public static Governing govern(boolean strength, String key, String what, double d, double l, double lr, boolean halfAllowed,
-                                   Quantity q, Clause lrfd, Clause asd, RecordBuilder rec) {
-        return govern(strength, key, what, d, l, lr, Double.NaN, halfAllowed, q, lrfd, asd, rec);
+    /**
+     * One effect of a member by load case, unfactored, as the combinations take it: what it is ("moment", "axial
+     * load"), the largest effect of D, of L (the design live load), of Lr and of S (NaN where the member carries no
+     * snow), all in the unit of {@code q}; whether L may take 0.5 (2.3.1 Exception 1); and the edition's clauses of
+     * the strength and the service combinations. The strength and the service value are governed from the same one.
+     */
+    public record Unfactored(String what, double d, double l, double lr, double s, boolean halfAllowed, Quantity q,
+                             Clause lrfd, Clause asd) {
+        public Unfactored {
+            Check.present("what", what);
+            Check.present("q", q);
+            Check.present("lrfd", lrfd);
+            Check.present("asd", asd);
+        }
+
+        /** D, L and Lr only (no snow on the member). */
+        public Unfactored(String what, double d, double l, double lr, boolean halfAllowed, Quantity q, Clause lrfd, Clause asd) {
+            this(what, d, l, lr, Double.NaN, halfAllowed, q, lrfd, asd);
+        }
     }
 
     /**
-     * As above with the snow effect {@code s} (NaN where the member carries no snow): each combination whose roof term
-     * is "(Lr or S or R)" is evaluated with Lr and with S, and the larger taken (ASCE 7-16 2.3.1, 2.4.1); rain R is not
-     * computed. On a tie Lr is named.
+     * The governing strength or service value of one effect, recorded as the step {@code symbol}. With a snow effect,
+     * each combination whose roof term is "(Lr or S or R)" is evaluated with Lr and with S, and the larger taken
+     * (ASCE 7-16 2.3.1, 2.4.1); rain R is not computed. On a tie Lr is named.
      */
-    public static Governing govern(boolean strength, String key, String what, double d, double l, double lr, double s,
-                                   boolean halfAllowed, Quantity q, Clause lrfd, Clause asd, RecordBuilder rec) {
+    public static Governing govern(boolean strength, String symbol, Unfactored e, RecordBuilder rec) {
+        double d = e.d(), l = e.l(), lr = e.lr(), s = e.s();
+        boolean halfAllowed = e.halfAllowed();
+        Quantity q = e.q();
         boolean snow = !Double.isNaN(s);
         Combination best = null;
         double bestV = 0, bestRoof = 0;
@@ -92,9 +110,9 @@ public final class LoadCombinations {
         }
         // the label leaves out L on a member that carries none (a roof member): the value is the same either way
         String formula = snow ? brief(best, l == 0 ? 0 : fl, term) : "";
-        rec.step(key, (strength ? "Factored " : "Service ") + what + ", " + best.name + " governs"
+        rec.step(symbol, (strength ? "Factored " : "Service ") + e.what() + ", " + best.name + " governs"
                         + (snow && best.lr != 0 ? " (" + term + " as the roof load)" : ""),
-                snow ? formula : best.formula(halfAllowed, rec), sub, bestV, q, strength ? lrfd : asd);
+                snow ? formula : best.formula(halfAllowed, rec), sub, bestV, q, strength ? e.lrfd() : e.asd());
         return new Governing(bestV, best, term, formula);
     }
 

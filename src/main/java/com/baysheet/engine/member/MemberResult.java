@@ -1,6 +1,7 @@
 package com.baysheet.engine.member;
 
 import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.record.ResultKey;
 import com.baysheet.engine.reduction.LiveFactors;
 
 import java.util.Optional;
@@ -58,7 +59,11 @@ public final class MemberResult {
     /** A result by key without writing the record's text; NaN when absent. */
     public double value(String key) { return numbers.result(key); }
 
+    public double value(ResultKey key) { return numbers.result(key); }
+
     /** The label of a result (it names the governing combination), or "" when absent. */
+    public String label(ResultKey key) { return label(key.text()); }
+
     public String label(String key) {
         for (var e : numbers.results()) if (e.key().equals(key)) return e.label();
         return "";

@@ -8,6 +8,7 @@ import com.baysheet.engine.load.Support;
 import com.baysheet.engine.member.LoadCombinations.Combination;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
+import com.baysheet.engine.record.ResultKey;
 import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.units.Display;
 import com.baysheet.engine.units.Quantity;
@@ -61,8 +62,8 @@ final class MinimumReactions {
                     substituted(rec, u.c, d, l.value, lr.value, hasL, hasLr), u.value, Quantity.FORCE, uc);
             rec.step("ASD." + key, title + ", service, " + a.c.name() + " governs", brief(a.c, hasL, hasLr),
                     substituted(rec, a.c, d, l.value, lr.value, hasL, hasLr), a.value, Quantity.FORCE, ac);
-            rec.result("LRFD." + key, title + ", factored (" + u.c.name() + ")", u.value, Quantity.FORCE)
-               .result("ASD." + key, title + ", service (" + a.c.name() + ")", a.value, Quantity.FORCE);
+            rec.result(ResultKey.of("LRFD", key), title + ", factored (" + u.c.name() + ")", u.value, Quantity.FORCE)
+               .result(ResultKey.of("ASD", key), title + ", service (" + a.c.name() + ")", a.value, Quantity.FORCE);
             if (e == BendingActions.Effect.RA) {   // the note names the code's case at the back-span support
                 Combination code = firm ? pick(true, d, l.value, lr.value, false).c : u.c;
                 noteCombination = brief(code, hasL, hasLr);
@@ -118,7 +119,7 @@ final class MinimumReactions {
 
     private static void liveStep(RecordBuilder rec, String symbol, String key, String c, String what, Least l, Clause clause) {
         rec.step(symbol, what, "least of the live load patterns and none", l.placement, l.value, Quantity.FORCE, clause);
-        rec.result(c + "." + key, what, l.value, Quantity.FORCE);
+        rec.result(ResultKey.of(c, key), what, l.value, Quantity.FORCE);
     }
 
     private static void uplift(RecordBuilder rec, End end, Pick u, Pick a, Clause clause) {

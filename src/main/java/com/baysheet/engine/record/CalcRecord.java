@@ -30,6 +30,10 @@ public record CalcRecord(String subject, String edition, String units, List<Entr
         return Double.NaN;
     }
 
+    public double result(ResultKey key) { return result(key.text()); }
+
+    public Entry entry(ResultKey key) { return entry(key.text()); }
+
     public Entry entry(String key) {
         for (Entry e : results) if (e.key().equals(key)) return e;
         throw new IllegalArgumentException("no result " + key + " on " + subject);

@@ -79,6 +79,14 @@ public final class RecordBuilder {
         return this;
     }
 
+    public RecordBuilder result(ResultKey key, String label, double base, Quantity q) {
+        return result(key.text(), label, base, q);
+    }
+
+    public RecordBuilder resultText(ResultKey key, String label, String text) {
+        return resultText(key.text(), label, text);
+    }
+
     public RecordBuilder resultText(String key, String label, String text) {
         results.add(Entry.unitless(key, label, Double.NaN, text));
         return this;
@@ -87,6 +95,10 @@ public final class RecordBuilder {
     /** The value stays in the base unit and says so; only the shown text is in the sheet unit. */
     private Entry entry(String key, String label, double base, Quantity q) {
         return new Entry(key, label, base, q.base(system).symbol(), show(base, q), q.unit(system).symbol());
+    }
+
+    public RecordBuilder governs(ResultKey key) {
+        return governs(key.text());
     }
 
     public RecordBuilder governs(String key) {

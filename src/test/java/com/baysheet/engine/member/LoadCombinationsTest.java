@@ -14,11 +14,11 @@ class LoadCombinationsTest {
     final RecordBuilder rec = new RecordBuilder("T", "ASCE 7-16", UnitSystem.US);
 
     LoadCombinations.Governing lrfd(double d, double l, double lr, boolean half) {
-        return LoadCombinations.govern(true, "U", "moment", d, l, lr, half, Quantity.MOMENT, Clause.NONE, Clause.NONE, rec);
+        return LoadCombinations.govern(true, "U", new LoadCombinations.Unfactored("moment", d, l, lr, half, Quantity.MOMENT, Clause.NONE, Clause.NONE), rec);
     }
 
     LoadCombinations.Governing asd(double d, double l, double lr) {
-        return LoadCombinations.govern(false, "A", "moment", d, l, lr, false, Quantity.MOMENT, Clause.NONE, Clause.NONE, rec);
+        return LoadCombinations.govern(false, "A", new LoadCombinations.Unfactored("moment", d, l, lr, false, Quantity.MOMENT, Clause.NONE, Clause.NONE), rec);
     }
 
     @Test

@@ -14,11 +14,11 @@ class SnowCombinationsTest {
     final RecordBuilder rec = new RecordBuilder("T", "ASCE 7-16", UnitSystem.US);
 
     LoadCombinations.Governing lrfd(double d, double l, double lr, double s, boolean half) {
-        return LoadCombinations.govern(true, "U", "moment", d, l, lr, s, half, Quantity.MOMENT, Clause.NONE, Clause.NONE, rec);
+        return LoadCombinations.govern(true, "U", new LoadCombinations.Unfactored("moment", d, l, lr, s, half, Quantity.MOMENT, Clause.NONE, Clause.NONE), rec);
     }
 
     LoadCombinations.Governing asd(double d, double l, double lr, double s) {
-        return LoadCombinations.govern(false, "A", "moment", d, l, lr, s, false, Quantity.MOMENT, Clause.NONE, Clause.NONE, rec);
+        return LoadCombinations.govern(false, "A", new LoadCombinations.Unfactored("moment", d, l, lr, s, false, Quantity.MOMENT, Clause.NONE, Clause.NONE), rec);
     }
 
     @Test
@@ -79,7 +79,7 @@ class SnowCombinationsTest {
 
     @Test
     void withoutSnowTheCombinationsAreThoseOfDLAndLr() {
-        var g = LoadCombinations.govern(true, "U", "moment", 100, 100, 10, false, Quantity.MOMENT, Clause.NONE, Clause.NONE, rec);
+        var g = LoadCombinations.govern(true, "U", new LoadCombinations.Unfactored("moment", 100, 100, 10, false, Quantity.MOMENT, Clause.NONE, Clause.NONE), rec);
         assertThat(g.label()).isEqualTo("LRFD 2");
         assertThat(rec.build().step("U").formula()).isEqualTo("1.20D + 1.60L + 0.500Lr");
     }
