@@ -9,12 +9,13 @@ import com.baysheet.project.LevelInfo;
 import com.baysheet.project.SnowInput;
 import com.baysheet.project.StoredLevel;
 
+import org.jdbi.v3.core.Handle;
+import org.jdbi.v3.core.statement.StatementContext;
+import org.jdbi.v3.core.statement.Update;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Statement;
-import java.util.ArrayList;
 import java.util.List;
 
 /** A project's levels, lowest first. */
@@ -41,15 +42,13 @@ public final class LevelStore {
         return writes.change(who, "level added: " + describe(info), projectId, version, c -> {
             requireUnique(c, projectId, info, -1);
             SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO building_level (project_id, name, elevation, "
-                    + "is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge) VALUES (?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
-                ps.setLong(1, projectId);
-                bind(ps, 2, info);
-                ps.executeUpdate();
-                try (ResultSet keys = ps.getGeneratedKeys()) {
-                    keys.next();
-                    return new StoredLevel(keys.getLong(1), projectId, info);
-                }
+            try (Handle h = Sql.on(c)) {
+                long id = bind(h.createUpdate("INSERT INTO building_level (project_id, name, elevation, is_roof, roof_slope, roof_shape, "
+                                + "roof_slippery, eave_to_ridge) VALUES (:project, :name, :elevation, :roof, :roofSlope, :roofShape, "
+                                + ":slippery, :eaveToRidge)"), info)
+                        .bind("project", projectId)
+                        .executeAndReturnGeneratedKeys("id").mapTo(Long.class).one();
+                return new StoredLevel(id, projectId, info);
             }
         });
     }
@@ -59,12 +58,10 @@ public final class LevelStore {
             find(c, projectId, levelId);
             requireUnique(c, projectId, info, levelId);
             SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
-            try (PreparedStatement ps = c.prepareStatement(
-                    "UPDATE building_level SET name = ?, elevation = ?, is_roof = ?, roof_slope = ?, roof_shape = ?, "
-                    + "roof_slippery = ?, eave_to_ridge = ? WHERE id = ?")) {
-                bind(ps, 1, info);
-                ps.setLong(8, levelId);
-                return ps.executeUpdate();
+            try (Handle h = Sql.on(c)) {
+                return bind(h.createUpdate("UPDATE building_level SET name = :name, elevation = :elevation, is_roof = :roof, "
+                        + "roof_slope = :roofSlope, roof_shape = :roofShape, roof_slippery = :slippery, eave_to_ridge = :eaveToRidge "
+                        + "WHERE id = :id"), info).bind("id", levelId).execute();
             }
         });
     }
@@ -73,9 +70,8 @@ public final class LevelStore {
     public void delete(Editor who, long projectId, long version, long levelId) {
         writes.change(who, c -> "level deleted: " + describe(find(c, projectId, levelId).info()), projectId, version, c -> {
             find(c, projectId, levelId);
-            try (PreparedStatement ps = c.prepareStatement("DELETE FROM building_level WHERE id = ?")) {
-                ps.setLong(1, levelId);
-                return ps.executeUpdate();
+            try (Handle h = Sql.on(c)) {
+                return h.createUpdate("DELETE FROM building_level WHERE id = :id").bind("id", levelId).execute();
             }
         });
     }
@@ -86,32 +82,25 @@ public final class LevelStore {
                 + (i.roof() ? ", roof" + (Double.isNaN(i.roofSlope()) ? "" : " sloped " + Display.plain(i.roofSlope())) : "");
     }
 
-    static List<StoredLevel> findByProject(Connection c, long projectId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge "
-                + "FROM building_level WHERE project_id = ? ORDER BY elevation, id")) {
-            ps.setLong(1, projectId);
-            List<StoredLevel> out = new ArrayList<>();
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) out.add(read(rs));
-            }
-            return out;
+    private static final String COLUMNS = "id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge";
+
+    static List<StoredLevel> findByProject(Connection c, long projectId) {
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT " + COLUMNS + " FROM building_level WHERE project_id = :project ORDER BY elevation, id")
+                    .bind("project", projectId).map(LevelStore::read).list();
         }
     }
 
-    static StoredLevel find(Connection c, long projectId, long levelId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge "
-                + "FROM building_level WHERE id = ? AND project_id = ?")) {
-            ps.setLong(1, levelId);
-            ps.setLong(2, projectId);
-            try (ResultSet rs = ps.executeQuery()) {
-                if (!rs.next()) throw new NotFound("level", levelId);
-                return read(rs);
-            }
+    static StoredLevel find(Connection c, long projectId, long levelId) {
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT " + COLUMNS + " FROM building_level WHERE id = :id AND project_id = :project")
+                    .bind("id", levelId).bind("project", projectId).map(LevelStore::read).findOne()
+                    .orElseThrow(() -> new NotFound("level", levelId));
         }
     }
 
     /** Two levels may share neither a name nor an elevation: the take-down orders them by elevation. */
-    private static void requireUnique(Connection c, long projectId, LevelInfo info, long self) throws SQLException {
+    private static void requireUnique(Connection c, long projectId, LevelInfo info, long self) {
         for (StoredLevel other : findByProject(c, projectId)) {
             if (other.id() == self) continue;
             if (other.name().equalsIgnoreCase(info.name()))
@@ -121,18 +110,15 @@ public final class LevelStore {
         }
     }
 
-    private static void bind(PreparedStatement ps, int i, LevelInfo info) throws SQLException {
-        ps.setString(i, info.name());
-        ps.setDouble(i + 1, info.elevation());
-        ps.setBoolean(i + 2, info.roof());
-        Sql.setDouble(ps, i + 3, info.roofSlope());
+    private static Update bind(Update u, LevelInfo info) {
         RoofSurface r = info.surface();
-        ps.setString(i + 4, r.shape() == SnowRoof.Shape.MONOSLOPE ? null : r.shape().name());
-        ps.setBoolean(i + 5, r.slippery());
-        Sql.setDouble(ps, i + 6, r.eaveToRidge());
+        return u.bind("name", info.name()).bind("elevation", info.elevation()).bind("roof", info.roof())
+                .bind("roofSlope", Sql.orNull(info.roofSlope()))
+                .bind("roofShape", r.shape() == SnowRoof.Shape.MONOSLOPE ? null : r.shape().name())
+                .bind("slippery", r.slippery()).bind("eaveToRidge", Sql.orNull(r.eaveToRidge()));
     }
 
-    private static StoredLevel read(ResultSet rs) throws SQLException {
+    private static StoredLevel read(ResultSet rs, StatementContext ctx) throws SQLException {
         return new StoredLevel(rs.getLong("id"), rs.getLong("project_id"), new LevelInfo(rs.getString("name"),
                 rs.getDouble("elevation"), rs.getBoolean("is_roof"), Sql.getDouble(rs, "roof_slope"),
                 new RoofSurface(rs.getString("roof_shape") == null ? SnowRoof.Shape.MONOSLOPE : SnowRoof.Shape.valueOf(rs.getString("roof_shape")),

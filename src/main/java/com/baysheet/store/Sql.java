@@ -1,5 +1,11 @@
 package com.baysheet.store;
 
+import org.jdbi.v3.core.ConnectionFactory;
+import org.jdbi.v3.core.Handle;
+import org.jdbi.v3.core.Handles;
+import org.jdbi.v3.core.Jdbi;
+import org.jdbi.v3.core.JdbiException;
+
 import javax.sql.DataSource;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
@@ -19,6 +25,26 @@ public final class Sql {
     @FunctionalInterface
     public interface Work<T> {
         T run(Connection c) throws SQLException;
+    }
+
+    /**
+     * Statements with named binds and row mappers, run on a connection the store already holds: {@link #tx} owns the
+     * connection and its one transaction (commit, rollback, close), so a handle neither closes the connection nor
+     * ends the transaction. The factory hands Jdbi the connection being wrapped, only while {@link #on} opens it.
+     */
+    private static final ThreadLocal<Connection> OPENING = new ThreadLocal<>();
+    private static final Jdbi JDBI = Jdbi.create(new ConnectionFactory() {
+        @Override
+        public Connection openConnection() { return OPENING.get(); }
+
+        @Override
+        public void closeConnection(Connection c) {
+            // the transaction's connection: Sql.tx closes it
+        }
+    });
+
+    static {
+        JDBI.getConfig(Handles.class).setForceEndTransactions(false);
     }
 
     private final DataSource ds;
@@ -65,9 +91,34 @@ public final class Sql {
                 throw e;
             }
         } catch (SQLException e) {
-            if (Duplicate.is(e)) throw Duplicate.of(e);
-            throw new StoreFailure(e);
+            throw failure(e);
+        } catch (JdbiException e) {
+            // a statement run through a handle: the database's refusal is inside
+            if (e.getCause() instanceof SQLException s) throw failure(s);
+            throw e;
         }
+    }
+
+    private static RuntimeException failure(SQLException e) {
+        return Duplicate.is(e) ? Duplicate.of(e) : new StoreFailure(e);
+    }
+
+    /**
+     * A Jdbi handle on a connection of {@link #tx}: its statements run in that transaction. Closing the handle
+     * (try-with-resources) releases its statements and leaves the connection and the transaction as they are.
+     */
+    static Handle on(Connection c) {
+        OPENING.set(c);
+        try {
+            return JDBI.open();
+        } finally {
+            OPENING.remove();
+        }
+    }
+
+    /** A value that may be absent as a bind: NaN becomes SQL NULL. */
+    static Double orNull(double v) {
+        return Double.isNaN(v) ? null : v;
     }
 
     /** Sets a parameter that may be absent (NaN or null becomes SQL NULL). */
