@@ -9,8 +9,10 @@ import com.baysheet.framing.model.Side;
 import com.baysheet.project.BayAssignment;
 import com.baysheet.project.Cell;
 
+import org.jdbi.v3.core.Handle;
+import org.jdbi.v3.core.statement.PreparedBatch;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.ArrayList;
@@ -63,13 +65,10 @@ public final class BayStore {
      * A level's bays with their cell indices in this grid (south row first); rows are keyed by the ids of the
      * lines at the bay's south-west corner.
      */
-    static List<Bay> findByLevel(Connection c, long levelId, Grid g) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT * FROM bay WHERE level_id = ?")) {
-            ps.setLong(1, levelId);
-            List<Bay> out = new ArrayList<>();
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) out.add(read(rs, g));
-            }
+    static List<Bay> findByLevel(Connection c, long levelId, Grid g) {
+        try (Handle h = Sql.on(c)) {
+            List<Bay> out = new ArrayList<>(h.createQuery("SELECT * FROM bay WHERE level_id = :level").bind("level", levelId)
+                    .map((rs, ctx) -> read(rs, g)).list());
             out.sort(Comparator.comparingInt(Bay::row).thenComparingInt(Bay::col));
             return out;
         }
@@ -85,39 +84,39 @@ public final class BayStore {
         return g;
     }
 
-    private static void delete(Connection c, long levelId, List<Cell> cells, Grid g) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("DELETE FROM bay WHERE level_id = ? AND x_line = ? AND y_line = ?")) {
-            for (Cell cell : cells) {
-                ps.setLong(1, levelId);
-                ps.setInt(2, g.x().id(cell.col()));
-                ps.setInt(3, g.y().id(cell.row()));
-                ps.addBatch();
-            }
-            ps.executeBatch();
+    private static void delete(Connection c, long levelId, List<Cell> cells, Grid g) {
+        try (Handle h = Sql.on(c)) {
+            PreparedBatch batch = h.prepareBatch("DELETE FROM bay WHERE level_id = :level AND x_line = :xLine AND y_line = :yLine");
+            for (Cell cell : cells)
+                batch.bind("level", levelId).bind("xLine", g.x().id(cell.col())).bind("yLine", g.y().id(cell.row())).add();
+            batch.execute();
         }
     }
 
-    private static void insert(Connection c, long levelId, BayAssignment a, Grid g) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("INSERT INTO bay (level_id, x_line, y_line, is_opening, "
-                + "occupancy, dead_load, beam_direction, infill_beams, cantilever_north, cantilever_south, "
-                + "cantilever_east, cantilever_west, cantilever_occupancy) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+    private static void insert(Connection c, long levelId, BayAssignment a, Grid g) {
+        try (Handle h = Sql.on(c)) {
+            PreparedBatch batch = h.prepareBatch("INSERT INTO bay (level_id, x_line, y_line, is_opening, occupancy, dead_load, "
+                    + "beam_direction, infill_beams, cantilever_north, cantilever_south, cantilever_east, cantilever_west, "
+                    + "cantilever_occupancy) VALUES (:level, :xLine, :yLine, :opening, :occupancy, :deadLoad, :beams, :infillBeams, "
+                    + ":cantilever_north, :cantilever_south, :cantilever_east, :cantilever_west, :cantileverOccupancy)");
             for (Cell cell : a.cells()) {
                 Bay b = a.bayAt(cell);
-                ps.setLong(1, levelId);
-                ps.setInt(2, g.x().id(b.col()));
-                ps.setInt(3, g.y().id(b.row()));
-                ps.setBoolean(4, b.opening());
-                ps.setString(5, b.occupancy());
-                Sql.setDouble(ps, 6, b.opening() ? null : b.deadLoad());
-                ps.setString(7, b.opening() ? null : b.framing().beams().name());
-                if (b.opening()) ps.setNull(8, java.sql.Types.INTEGER);
-                else ps.setInt(8, b.framing().infillBeams());
-                for (int i = 0; i < SIDES.length; i++) Sql.setDouble(ps, 9 + i, b.cantilevers().get(SIDES[i]));
-                ps.setString(13, b.cantileverOccupancy());
-                ps.addBatch();
+                batch.bind("level", levelId).bind("xLine", g.x().id(b.col())).bind("yLine", g.y().id(b.row()))
+                        .bind("opening", b.opening()).bind("occupancy", b.occupancy())
+                        .bind("deadLoad", b.opening() ? null : Sql.orNull(b.deadLoad()))
+                        .bind("beams", b.opening() ? null : b.framing().beams().name())
+                        .bind("infillBeams", b.opening() ? null : (Integer) b.framing().infillBeams())
+                        .bind("cantileverOccupancy", b.cantileverOccupancy());
+                for (Side side : SIDES) batch.bind(cantileverColumn(side), Sql.orNull(b.cantilevers().get(side)));
+                batch.add();
             }
-            ps.executeBatch();
+            batch.execute();
         }
+    }
+
+    /** The column (and bind name) of a side's cantilever: cantilever_north, ... */
+    private static String cantileverColumn(Side s) {
+        return "cantilever_" + s.name().toLowerCase();
     }
 
     private static Bay read(ResultSet rs, Grid g) throws SQLException {
@@ -129,7 +128,7 @@ public final class BayStore {
         if (rs.getBoolean("is_opening")) return Bay.opening(col, row);
         Map<Side, Double> cantilevers = new EnumMap<>(Side.class);
         for (Side s : SIDES) {
-            double v = Sql.getDouble(rs, "cantilever_" + s.name().toLowerCase());
+            double v = Sql.getDouble(rs, cantileverColumn(s));
             if (!Double.isNaN(v)) cantilevers.put(s, v);
         }
         Framing f = new Framing(Direction.valueOf(rs.getString("beam_direction")), rs.getInt("infill_beams"));

@@ -116,9 +116,9 @@ public final class Sql {
         }
     }
 
-    /** A value that may be absent as a bind: NaN becomes SQL NULL. */
-    static Double orNull(double v) {
-        return Double.isNaN(v) ? null : v;
+    /** A value that may be absent as a bind: NaN or null becomes SQL NULL. */
+    static Double orNull(Double v) {
+        return v == null || v.isNaN() ? null : v;
     }
 
     /** Sets a parameter that may be absent (NaN or null becomes SQL NULL). */
