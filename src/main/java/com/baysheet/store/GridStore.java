@@ -4,10 +4,10 @@ import com.baysheet.engine.units.Display;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
 
+import org.jdbi.v3.core.Handle;
+import org.jdbi.v3.core.statement.PreparedBatch;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
-import java.sql.SQLException;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -58,57 +58,39 @@ public final class GridStore {
     }
 
     /** A new project's first grid: every line gets a fresh id. */
-    static void create(Connection c, long projectId, Grid grid) throws SQLException {
+    static void create(Connection c, long projectId, Grid grid) {
         write(c, projectId, withIds(c, projectId, grid, fresh(grid.x()), fresh(grid.y())));
     }
 
-    static Grid find(Connection c, long projectId) throws SQLException {
-        return new Grid(axis(c, projectId, "x"), axis(c, projectId, "y"));
+    static Grid find(Connection c, long projectId) {
+        try (Handle h = Sql.on(c)) {
+            return new Grid(axis(h, projectId, "x"), axis(h, projectId, "y"));
+        }
     }
 
-    private static void write(Connection c, long projectId, Grid grid) throws SQLException {
-        try (PreparedStatement del = c.prepareStatement("DELETE FROM grid_line WHERE project_id = ?")) {
-            del.setLong(1, projectId);
-            del.executeUpdate();
-        }
-        try (PreparedStatement ps = c.prepareStatement(
-                "INSERT INTO grid_line (project_id, axis, seq, name, spacing_after, line_id) VALUES (?, ?, ?, ?, ?, ?)")) {
-            for (GridAxis a : List.of(grid.x(), grid.y())) {
-                for (int i = 0; i < a.lines(); i++) {
-                    ps.setLong(1, projectId);
-                    ps.setString(2, a.axis());
-                    ps.setInt(3, i);
-                    ps.setString(4, a.name(i));
-                    Sql.setDouble(ps, 5, i < a.cells() ? a.spacing(i) : null);
-                    ps.setInt(6, a.id(i));
-                    ps.addBatch();
-                }
-            }
-            ps.executeBatch();
+    private static void write(Connection c, long projectId, Grid grid) {
+        try (Handle h = Sql.on(c)) {
+            h.createUpdate("DELETE FROM grid_line WHERE project_id = :project").bind("project", projectId).execute();
+            PreparedBatch batch = h.prepareBatch("INSERT INTO grid_line (project_id, axis, seq, name, spacing_after, line_id) "
+                    + "VALUES (:project, :axis, :seq, :name, :spacingAfter, :lineId)");
+            for (GridAxis a : List.of(grid.x(), grid.y()))
+                for (int i = 0; i < a.lines(); i++)
+                    batch.bind("project", projectId).bind("axis", a.axis()).bind("seq", i).bind("name", a.name(i))
+                            .bind("spacingAfter", i < a.cells() ? Sql.orNull(a.spacing(i)) : null).bind("lineId", a.id(i)).add();
+            batch.execute();
         }
     }
 
     /** The grid with these ids, where {@link LineMatch#NEW} takes the project's next unused id. */
-    private static Grid withIds(Connection c, long projectId, Grid g, List<Integer> xs, List<Integer> ys) throws SQLException {
-        int next = nextLineId(c, projectId);
-        List<Integer> x = new ArrayList<>(), y = new ArrayList<>();
-        for (int id : xs) x.add(id == LineMatch.NEW ? next++ : id);
-        for (int id : ys) y.add(id == LineMatch.NEW ? next++ : id);
-        try (PreparedStatement ps = c.prepareStatement("UPDATE project SET next_line_id = ? WHERE id = ?")) {
-            ps.setInt(1, next);
-            ps.setLong(2, projectId);
-            ps.executeUpdate();
-        }
-        return new Grid(g.x().withIds(x), g.y().withIds(y));
-    }
-
-    private static int nextLineId(Connection c, long projectId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT next_line_id FROM project WHERE id = ?")) {
-            ps.setLong(1, projectId);
-            try (ResultSet rs = ps.executeQuery()) {
-                if (!rs.next()) throw new NotFound("project", projectId);
-                return rs.getInt(1);
-            }
+    private static Grid withIds(Connection c, long projectId, Grid g, List<Integer> xs, List<Integer> ys) {
+        try (Handle h = Sql.on(c)) {
+            int next = h.createQuery("SELECT next_line_id FROM project WHERE id = :id").bind("id", projectId)
+                    .mapTo(Integer.class).findOne().orElseThrow(() -> new NotFound("project", projectId));
+            List<Integer> x = new ArrayList<>(), y = new ArrayList<>();
+            for (int id : xs) x.add(id == LineMatch.NEW ? next++ : id);
+            for (int id : ys) y.add(id == LineMatch.NEW ? next++ : id);
+            h.createUpdate("UPDATE project SET next_line_id = :next WHERE id = :id").bind("next", next).bind("id", projectId).execute();
+            return new Grid(g.x().withIds(x), g.y().withIds(y));
         }
     }
 
@@ -118,22 +100,20 @@ public final class GridStore {
         return out;
     }
 
-    private static GridAxis axis(Connection c, long projectId, String axis) throws SQLException {
+    /** A grid line row: its name, the spacing to the next line (NaN for the last) and its stable id. */
+    private record Line(String name, double spacingAfter, int id) {}
+
+    private static GridAxis axis(Handle h, long projectId, String axis) {
+        List<Line> lines = h.createQuery("SELECT name, spacing_after, line_id FROM grid_line WHERE project_id = :project AND axis = :axis ORDER BY seq")
+                .bind("project", projectId).bind("axis", axis)
+                .map((rs, ctx) -> new Line(rs.getString("name"), Sql.getDouble(rs, "spacing_after"), rs.getInt("line_id"))).list();
         List<String> names = new ArrayList<>();
         List<Double> spacings = new ArrayList<>();
         List<Integer> ids = new ArrayList<>();
-        try (PreparedStatement ps = c.prepareStatement(
-                "SELECT name, spacing_after, line_id FROM grid_line WHERE project_id = ? AND axis = ? ORDER BY seq")) {
-            ps.setLong(1, projectId);
-            ps.setString(2, axis);
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) {
-                    names.add(rs.getString(1));
-                    double s = Sql.getDouble(rs, "spacing_after");
-                    if (!Double.isNaN(s)) spacings.add(s);
-                    ids.add(rs.getInt(3));
-                }
-            }
+        for (Line l : lines) {
+            names.add(l.name());
+            if (!Double.isNaN(l.spacingAfter())) spacings.add(l.spacingAfter());
+            ids.add(l.id());
         }
         return new GridAxis(axis, names, spacings, ids);
     }
