@@ -6,12 +6,10 @@ import com.baysheet.engine.code.ReductionRule;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.project.FirmOccupancy;
 
+import org.jdbi.v3.core.Handle;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
-import java.sql.SQLException;
 import java.time.Instant;
-import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -41,23 +39,15 @@ public final class OccupancyStore {
                 throw new InputError("id", o.id(), "is a built-in occupancy; choose another id");
             for (FirmOccupancy other : findAll(c))
                 if (other.id().equals(o.id())) throw new Duplicate("id", o.id(), "is already one of the firm's occupancies");
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO firm_occupancy (id, name, unit_system, "
-                    + "uniform_load, concentrated_load, contact_side, reduction_rule, assembly, created_at) "
-                    + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
-                ps.setString(1, o.id());
-                ps.setString(2, o.name());
-                ps.setString(3, o.units().name());
-                ps.setDouble(4, o.uniform());
-                ps.setDouble(5, o.concentrated());
-                ps.setDouble(6, o.contactSide());
-                ps.setString(7, o.rule().name());
-                ps.setBoolean(8, o.assembly());
-                ps.setObject(9, Sql.stamp(at));
-                ps.executeUpdate();
-            }
-            try (PreparedStatement ps = c.prepareStatement(
-                    "UPDATE firm_state SET catalogue_version = catalogue_version + 1 WHERE id = 1")) {
-                ps.executeUpdate();
+            try (Handle h = Sql.on(c)) {
+                h.createUpdate("INSERT INTO firm_occupancy (id, name, unit_system, uniform_load, concentrated_load, contact_side, "
+                                + "reduction_rule, assembly, created_at) VALUES (:id, :name, :units, :uniform, :concentrated, :contactSide, "
+                                + ":rule, :assembly, :createdAt)")
+                        .bind("id", o.id()).bind("name", o.name()).bind("units", o.units().name()).bind("uniform", o.uniform())
+                        .bind("concentrated", o.concentrated()).bind("contactSide", o.contactSide()).bind("rule", o.rule().name())
+                        .bind("assembly", o.assembly()).bind("createdAt", Sql.stampOf(at))
+                        .execute();
+                h.createUpdate("UPDATE firm_state SET catalogue_version = catalogue_version + 1 WHERE id = 1").execute();
             }
             // a new id changes no existing bay's load, so nothing issued is superseded
             ModelWrites.append(c, who, "occupancy catalogue", "occupancy added: " + o.id() + " " + o.name(), at);
@@ -65,30 +55,24 @@ public final class OccupancyStore {
         });
     }
 
-    static OccupancyCatalogue catalogue(Connection c) throws SQLException {
+    static OccupancyCatalogue catalogue(Connection c) {
         OccupancyCatalogue cat = OccupancyCatalogue.builtIn();
         for (FirmOccupancy o : findAll(c)) cat = cat.with(o.occupancy());
         return cat;
     }
 
-    static long catalogueVersion(Connection c) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT catalogue_version FROM firm_state WHERE id = 1");
-             ResultSet rs = ps.executeQuery()) {
-            rs.next();
-            return rs.getLong(1);
+    static long catalogueVersion(Connection c) {
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT catalogue_version FROM firm_state WHERE id = 1").mapTo(Long.class).one();
         }
     }
 
-    private static List<FirmOccupancy> findAll(Connection c) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT * FROM firm_occupancy ORDER BY id");
-             ResultSet rs = ps.executeQuery()) {
-            List<FirmOccupancy> out = new ArrayList<>();
-            while (rs.next())
-                out.add(new FirmOccupancy(rs.getString("id"), rs.getString("name"),
-                        UnitSystem.valueOf(rs.getString("unit_system")), rs.getDouble("uniform_load"),
-                        rs.getDouble("concentrated_load"), rs.getDouble("contact_side"),
-                        ReductionRule.valueOf(rs.getString("reduction_rule")), rs.getBoolean("assembly")));
-            return out;
+    private static List<FirmOccupancy> findAll(Connection c) {
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT * FROM firm_occupancy ORDER BY id").map((rs, ctx) -> new FirmOccupancy(rs.getString("id"),
+                    rs.getString("name"), UnitSystem.valueOf(rs.getString("unit_system")), rs.getDouble("uniform_load"),
+                    rs.getDouble("concentrated_load"), rs.getDouble("contact_side"),
+                    ReductionRule.valueOf(rs.getString("reduction_rule")), rs.getBoolean("assembly"))).list();
         }
     }
 }
