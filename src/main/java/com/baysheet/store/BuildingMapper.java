@@ -15,9 +15,9 @@ import com.baysheet.project.Model;
 import com.baysheet.project.Project;
 import com.baysheet.project.StoredLevel;
 
+import org.jdbi.v3.core.Handle;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.ArrayList;
 import java.util.List;
@@ -51,15 +51,17 @@ final class BuildingMapper {
     }
 
     /** The firm's self weights by role (plf), converted exactly for an SI project; all 0: not included, and said so. */
-    static SelfWeights selfWeights(Connection c, UnitSystem units) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(
-                "SELECT sw_infill_beam, sw_grid_beam, sw_girder, sw_column FROM firm_setting WHERE id = 1");
-             ResultSet rs = ps.executeQuery()) {
-            if (!rs.next()) return SelfWeights.NONE;
-            double k = units == UnitSystem.SI ? Convert.KN_PER_M_PER_PLF : 1;
-            double i = rs.getDouble(1), g = rs.getDouble(2), gi = rs.getDouble(3), col = rs.getDouble(4);
-            if (i == 0 && g == 0 && gi == 0 && col == 0) return SelfWeights.NONE;
-            return new SelfWeights(i * k, g * k, gi * k, col * k, "firm default");
+    static SelfWeights selfWeights(Connection c, UnitSystem units) {
+        double k = units == UnitSystem.SI ? Convert.KN_PER_M_PER_PLF : 1;
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT sw_infill_beam, sw_grid_beam, sw_girder, sw_column FROM firm_setting WHERE id = 1")
+                    .map((rs, ctx) -> {
+                        double i = rs.getDouble("sw_infill_beam"), g = rs.getDouble("sw_grid_beam"),
+                                gi = rs.getDouble("sw_girder"), col = rs.getDouble("sw_column");
+                        if (i == 0 && g == 0 && gi == 0 && col == 0) return SelfWeights.NONE;
+                        return new SelfWeights(i * k, g * k, gi * k, col * k, "firm default");
+                    })
+                    .findFirst().orElse(SelfWeights.NONE);
         }
     }
 
