@@ -5,10 +5,9 @@ import com.baysheet.framing.model.Building;
 import com.baysheet.project.Model;
 import com.baysheet.project.Project;
 
+import org.jdbi.v3.core.Handle;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
-import java.sql.SQLException;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -66,10 +65,9 @@ public final class Results {
         synchronized (cache) { cache.put(new Key(m.project().id(), m.project().version(), m.catalogueVersion(), m.firmVersion()), c); }
     }
 
-    static long firmVersion(Connection c) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT version FROM firm_setting WHERE id = 1");
-             ResultSet rs = ps.executeQuery()) {
-            return rs.next() ? rs.getLong(1) : 0;
+    static long firmVersion(Connection c) {
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT version FROM firm_setting WHERE id = 1").mapTo(Long.class).findFirst().orElse(0L);
         }
     }
 
@@ -86,13 +84,12 @@ public final class Results {
         synchronized (cache) { return cache.get(k); }
     }
 
-    private static Key key(Connection c, long projectId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT version FROM project WHERE id = ?")) {
-            ps.setLong(1, projectId);
-            try (ResultSet rs = ps.executeQuery()) {
-                if (!rs.next()) throw new NotFound("project", projectId);
-                return new Key(projectId, rs.getLong(1), OccupancyStore.catalogueVersion(c), firmVersion(c));
-            }
+    private static Key key(Connection c, long projectId) {
+        long version;
+        try (Handle h = Sql.on(c)) {
+            version = h.createQuery("SELECT version FROM project WHERE id = :id").bind("id", projectId).mapTo(Long.class)
+                    .findOne().orElseThrow(() -> new NotFound("project", projectId));
         }
+        return new Key(projectId, version, OccupancyStore.catalogueVersion(c), firmVersion(c));
     }
 }
