@@ -25,7 +25,7 @@ class LayeringTest {
             TEMPLATES = "org.thymeleaf..", MIGRATIONS = "org.flywaydb..", POOL = "com.zaxxer..";
     private static final String ENGINE = "com.baysheet.engine..", FRAMING = "com.baysheet.framing..",
             SHEET = "com.baysheet.sheet..", REVIEW = "com.baysheet.review..", AUTH = "com.baysheet.auth..",
-            STORE = "com.baysheet.store..", WEB = "com.baysheet.web..", CLI = "com.baysheet.cli..";
+            STORE = "com.baysheet.store..", ISSUE = "com.baysheet.issue..", WEB = "com.baysheet.web..", CLI = "com.baysheet.cli..";
 
     /** One row of the table: the package and what it may not depend on. */
     record Layer(String pkg, String... forbidden) {
@@ -36,13 +36,14 @@ class LayeringTest {
     }
 
     static final List<Layer> TABLE = List.of(
-            new Layer(ENGINE, FRAMING, SHEET, REVIEW, AUTH, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
-            new Layer(FRAMING, SHEET, REVIEW, AUTH, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
-            new Layer(SHEET, REVIEW, AUTH, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, TEMPLATES, MIGRATIONS, POOL),
-            new Layer(REVIEW, SHEET, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
-            new Layer(AUTH, FRAMING, SHEET, REVIEW, STORE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
-            new Layer(STORE, SHEET, WEB, CLI, "com.baysheet", JAVALIN, PDF, TEMPLATES),
-            new Layer(CLI, FRAMING, SHEET, REVIEW, AUTH, STORE, WEB, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES),
+            new Layer(ENGINE, FRAMING, SHEET, REVIEW, AUTH, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(FRAMING, SHEET, REVIEW, AUTH, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(SHEET, REVIEW, AUTH, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(REVIEW, SHEET, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(AUTH, FRAMING, SHEET, REVIEW, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(STORE, SHEET, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, PDF, TEMPLATES),
+            new Layer(ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(CLI, FRAMING, SHEET, REVIEW, AUTH, STORE, ISSUE, WEB, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES),
             new Layer(WEB, CLI, "com.baysheet"));
 
     private static JavaClasses main;

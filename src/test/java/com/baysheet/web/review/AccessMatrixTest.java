@@ -113,18 +113,30 @@ class AccessMatrixTest {
     }
 
     @Test
+    void aPathNoRouteMatchesIsAnOfficePageToStrangersAndNotFoundToTheOffice() {
+        assertThat(anon.get("/no/such/page").headers().firstValue("Location")).hasValueSatisfying(l -> assertThat(l).startsWith("/login"));
+        assertThat(anon.post("/no/such/page", List.of()).statusCode()).isEqualTo(401);
+        assertThat(anon.json("POST", "/api/no/such", "{}").statusCode()).isEqualTo(401);
+        assertThat(eng.get("/no/such/page").statusCode()).isEqualTo(404);
+        assertThat(adm.json("GET", "/api/no/such", null).statusCode()).isEqualTo(404);
+        // the static files are anyone's: a missing one is simply not there
+        assertThat(anon.get("/static/no-such-file.css").statusCode()).isEqualTo(404);
+        assertThat(anon.get("/static/baysheet.css").statusCode()).isEqualTo(200);
+    }
+
+    @Test
     void aPostWithoutTheFormTokenIsRefusedAndChangesNothing() {
         Client tokenless = server.as("otto", Role.ENGINEER);
         tokenless.csrf = null;
-        long before = server.signoff.review().audit().count();
+        long before = server.office.review().audit().count();
         HttpResponse<String> res = tokenless.post(server.sheetPath() + "/submit", List.of(Map.entry("version", "0")));
         assertThat(res.statusCode()).isEqualTo(403);
         assertThat(res.body()).contains("Reload the page");
         assertThat(tokenless.postRaw(server.sheetPath() + "/submit", List.of(Map.entry("version", "0"),
                 Map.entry("_csrf", "A".repeat(43)))).statusCode()).isEqualTo(403);
         assertThat(tokenless.json("POST", "/api/projects", "{}").statusCode()).isEqualTo(403);
-        assertThat(server.signoff.review().reviews().view(server.ref()).current().stored()).isFalse();
-        assertThat(server.signoff.review().audit().count()).isEqualTo(before);
+        assertThat(server.office.review().reviews().view(server.ref()).current().stored()).isFalse();
+        assertThat(server.office.review().audit().count()).isEqualTo(before);
     }
 
     @Test

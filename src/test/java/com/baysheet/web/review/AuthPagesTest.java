@@ -51,7 +51,7 @@ class AuthPagesTest {
         Client other = TestLogin.anonymous(server.app);
         assertThat(other.get("/setup").headers().firstValue("Location")).as("set-up is closed")
                 .hasValueSatisfying(l -> assertThat(l).startsWith("/login"));
-        assertThat(server.signoff.accounts().users().count()).isEqualTo(1);
+        assertThat(server.office.accounts().users().count()).isEqualTo(1);
     }
 
     @Test
@@ -67,13 +67,13 @@ class AuthPagesTest {
                     .doesNotContain(TestLogin.SETUP_CODE);
             assertThat(r.headers().allValues("Set-Cookie")).noneSatisfy(c -> assertThat(c).startsWith("bs_session="));
         }
-        assertThat(server.signoff.accounts().users().count()).as("nobody stored").isZero();
-        assertThat(server.signoff.accounts().logins().setupDone()).isFalse();
+        assertThat(server.office.accounts().users().count()).as("nobody stored").isZero();
+        assertThat(server.office.accounts().logins().setupDone()).isFalse();
     }
 
     @Test
     void loggingInThroughTheFormRenewsTheSessionAndLoggingOutEndsIt() {
-        TestLogin.user(server.signoff, "eve", Role.ENGINEER);
+        TestLogin.user(server.office, "eve", Role.ENGINEER);
         Client b = TestLogin.anonymous(server.app);
         HttpResponse<String> page = b.get("/login");
         assertThat(page.headers().allValues("Set-Cookie")).anySatisfy(c -> assertThat(c).startsWith("bs_form=")
@@ -96,7 +96,7 @@ class AuthPagesTest {
         String html = b.get("/account/password").body();
         b.postRaw("/login", List.of(Map.entry("_csrf", token(html)), Map.entry("username", "eve"), Map.entry("password", TestLogin.PASSWORD)));
         assertThat(b.cookie("bs_session")).as("a new session at each login").isNotEqualTo(first);
-        assertThat(server.signoff.accounts().logins().session(first)).isEmpty();
+        assertThat(server.office.accounts().logins().session(first)).isEmpty();
         html = b.get("/account/password").body();
         assertThat(b.postRaw("/logout", List.of(Map.entry("_csrf", token(html)))).statusCode()).isEqualTo(303);
         assertThat(b.get("/projects").headers().firstValue("Location")).hasValueSatisfying(l -> assertThat(l).startsWith("/login"));
@@ -114,7 +114,7 @@ class AuthPagesTest {
 
     @Test
     void repeatedFailedLoginsAreThrottledAndRecorded() {
-        TestLogin.user(server.signoff, "eve", Role.ENGINEER);
+        TestLogin.user(server.office, "eve", Role.ENGINEER);
         Client b = TestLogin.anonymous(server.app);
         String t = token(b.get("/login").body());
         int last = 0;
@@ -136,12 +136,12 @@ class AuthPagesTest {
         String firm = adm.get("/admin/firm").body();
         adm.post("/admin/firm", List.of(Map.entry("firmName", sql + script), Map.entry("logoText", sql),
                 Map.entry("defaultEdition", "ASCE 7-16"), Map.entry("version", Pages.version(firm, "/admin/firm"))));
-        assertThat(server.signoff.review().firm().get().name()).isEqualTo(sql + script);
+        assertThat(server.office.review().firm().get().name()).isEqualTo(sql + script);
         adm.post("/admin/users", List.of(Map.entry("username", "eve"), Map.entry("fullName", script + sql),
                 Map.entry("initials", "EV"), Map.entry("role", "engineer"), Map.entry("password", TestLogin.PASSWORD)));
         String users = adm.get("/admin/users").body();
         assertThat(users).contains("&lt;img src=x onerror=alert(1)&gt;").doesNotContain(script);
-        assertThat(server.signoff.accounts().users().count()).isEqualTo(2);
+        assertThat(server.office.accounts().users().count()).isEqualTo(2);
         Client anon = TestLogin.anonymous(server.app);
         String t = token(anon.get("/login").body());
         assertThat(anon.postRaw("/login", List.of(Map.entry("_csrf", t), Map.entry("username", "admin' --"),

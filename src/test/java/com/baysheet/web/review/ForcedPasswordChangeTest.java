@@ -28,13 +28,13 @@ class ForcedPasswordChangeTest {
 
     @Test
     void aUserTheAdministratorAddedChangesThePasswordBeforeReachingAnyPage() {
-        Client admin = TestLogin.as(server.app, server.signoff, "admin", Role.ADMINISTRATOR);
+        Client admin = TestLogin.as(server.app, server.office, "admin", Role.ADMINISTRATOR);
         assertThat(admin.get("/projects").statusCode()).as("the administrator's own password is not flagged").isEqualTo(200);
         HttpResponse<String> common = admin.post("/admin/users", List.of(Map.entry("username", "eve"), Map.entry("fullName", "Eve"),
                 Map.entry("initials", "EV"), Map.entry("role", "engineer"), Map.entry("password", "1234567890")));
         assertThat(common.statusCode()).isEqualTo(400);
         assertThat(common.body()).contains("is one of the most common passwords; choose another");
-        assertThat(server.signoff.accounts().users().findByUsername("eve")).as("nothing stored").isEmpty();
+        assertThat(server.office.accounts().users().findByUsername("eve")).as("nothing stored").isEmpty();
         assertThat(admin.post("/admin/users", List.of(Map.entry("username", "eve"), Map.entry("fullName", "Eve"),
                 Map.entry("initials", "EV"), Map.entry("role", "engineer"), Map.entry("password", STARTING))).statusCode()).isEqualTo(303);
 

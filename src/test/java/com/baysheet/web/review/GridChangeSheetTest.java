@@ -51,7 +51,7 @@ class GridChangeSheetTest {
         assertThat(before).doesNotContainKey(onNewLine.id());
         for (String id : inserted.keySet())
             if (!before.containsKey(id))
-                assertThat(server.signoff.review().reviews().view(new SheetRef(p, id)).history()).as(id).isEmpty();
+                assertThat(server.office.review().reviews().view(new SheetRef(p, id)).history()).as(id).isEmpty();
 
         assertThat(saveGrid(eng, "1 2 3 4 5", "30 30 30 30").statusCode()).isEqualTo(303);
         assertThat(records()).isEqualTo(before);

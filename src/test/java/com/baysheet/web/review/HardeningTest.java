@@ -52,7 +52,7 @@ class HardeningTest {
 
     @Test
     void aLoginOnlyReturnsToOurOwnPages() {
-        TestLogin.user(server.signoff, "hop", Role.ENGINEER);
+        TestLogin.user(server.office, "hop", Role.ENGINEER);
         for (String next : List.of("/\t/evil.example", "//evil.example", "/\\evil.example", "https://evil.example",
                 "/login", "/%09/evil.example", "/projects//evil.example", "javascript:alert(1)")) {
             HttpResponse<String> r = atLogin().post("/login",
@@ -75,7 +75,7 @@ class HardeningTest {
 
     @Test
     void theAdministratorSeesAWaitingUserAndUnlocksThem() {
-        TestLogin.user(server.signoff, "guessed", Role.ENGINEER);
+        TestLogin.user(server.office, "guessed", Role.ENGINEER);
         for (int i = 0; i < 7; i++)
             atLogin().post("/login", List.of(entry("username", "guessed"), entry("password", "wrong guess " + i)));
         HttpResponse<String> refused = atLogin().post("/login",
@@ -85,7 +85,7 @@ class HardeningTest {
         TestLogin.Client admin = server.as("admin", Role.ADMINISTRATOR);
         String users = admin.get("/admin/users").body();
         assertThat(users).contains("waiting until", "Unlock");
-        long id = server.signoff.accounts().users().findByUsername("guessed").orElseThrow().user().id();
+        long id = server.office.accounts().users().findByUsername("guessed").orElseThrow().user().id();
         assertThat(admin.post("/admin/users/" + id + "/unlock", List.of()).statusCode()).isEqualTo(303);
         HttpResponse<String> in = atLogin().post("/login",
                 List.of(entry("username", "guessed"), entry("password", TestLogin.PASSWORD), entry("next", "/projects")));
