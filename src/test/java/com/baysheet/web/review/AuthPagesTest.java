@@ -26,7 +26,7 @@ class AuthPagesTest {
     void stop() { server.close(); }
 
     /** The form token the page put into its form, as a browser would post it back. */
-    static String token(String html) { return first(html, "name=\"_csrf\" value=\"([A-Za-z0-9_-]+)\""); }
+    static String token(String html) { return Pages.token(html); }
 
     @Test
     void withNobodyYetEveryPageLeadsToTheOneTimeSetUp() {

@@ -26,7 +26,7 @@ class HardeningTest {
     /** A browser at the login page: it holds the page's form token, as the login form posts it. */
     private static TestLogin.Client atLogin() {
         TestLogin.Client c = TestLogin.anonymous(server.app);
-        c.csrf = Pages.first(c.get("/login").body(), "name=\"_csrf\" value=\"([A-Za-z0-9_-]+)\"");
+        c.csrf = Pages.token(c.get("/login").body());
         return c;
     }
 
