@@ -23,7 +23,7 @@ import java.util.HashMap;
 import java.util.Map;
 import java.util.function.Consumer;
 
-/** The administrator's pages (all under /admin, which the access rules keep to administrators). */
+/** The administrator's pages, all under /admin, each declared for the administrator alone. */
 public final class AdminRoutes {
     private static final int AUDIT_PAGE = 100;
 

@@ -1,6 +1,7 @@
 package com.baysheet.web.review;
 
 import com.baysheet.auth.Role;
+import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin;
 import com.baysheet.web.TestLogin.Client;
 import org.junit.jupiter.api.Test;
@@ -20,7 +21,7 @@ class SavedConfirmationTest {
     /** The page the save redirected to, as the browser then fetches it. */
     static String followed(Client c, HttpResponse<String> r) {
         assertThat(r.statusCode()).as("a save redirects").isEqualTo(303);
-        return c.get(r.headers().firstValue("Location").orElseThrow()).body();
+        return Html.shown(c.get(r.headers().firstValue("Location").orElseThrow()).body());
     }
 
     @Test
