@@ -5,9 +5,8 @@ import com.baysheet.framing.Derivation;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
 import com.baysheet.store.Store;
-import com.baysheet.web.Server;
+import com.baysheet.web.Office;
 import com.baysheet.web.ServerOptions;
-import com.baysheet.web.review.Signoff;
 import io.javalin.Javalin;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
@@ -51,7 +50,7 @@ public final class App {
     }
 
     /** A started server and its database, which stopping closes. */
-    record Running(Javalin app, Database db, Signoff signoff) implements AutoCloseable {
+    record Running(Javalin app, Database db, Office office) implements AutoCloseable {
         @Override
         public void close() {
             app.stop();
@@ -67,20 +66,22 @@ public final class App {
         if (o.embedded()) Database.prepareDataDir(o.dataDir());
         Database db = Database.open(o.dbUrl(), o.dbPassword());
         if (o.embedded()) Database.restrictFiles(o.dataDir());
-        Store store = Store.on(db.dataSource(), Derivation::derive, Clock.systemUTC());
-        Signoff signoff = Signoff.on(store, db.dataSource());
+        // one clock for the whole office: the store stamps its rows in UTC from it, sheets are dated in its zone
+        Clock clock = Clock.systemDefaultZone();
+        Store store = Store.on(db.dataSource(), Derivation::derive, clock);
+        Office office = Office.on(store, db.dataSource(), clock);
         if (o.demo()) {
             int loaded = Demo.loadIfEmpty(store).size();
             LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");
-            DemoAccounts.add(signoff.accounts().admin(), console);
+            DemoAccounts.add(office.accounts().admin(), console);
         }
-        Javalin app = Server.create(store, signoff::install, o.trustedProxy(), o.behindTls()).start(o.bind(), o.port());
-        Running running = new Running(app, db, signoff);
+        Javalin app = office.server(o.trustedProxy(), o.behindTls()).start(o.bind(), o.port());
+        Running running = new Running(app, db, office);
         console.accept("listening on " + o.bind() + ":" + app.port() + (o.bind().equals("127.0.0.1") || o.bind().equals("localhost")
                 ? " (this machine only; --bind 0.0.0.0 for the office network)" : " (the office network)") + ", database "
                 + (o.embedded() ? o.dataDir() : "by JDBC URL") + (o.behindTls() ? ", behind a TLS proxy" : ""));
-        if (!signoff.accounts().logins().setupDone())
-            console.accept("set-up code: " + signoff.setupCode().code() + " (asked for once, by the set-up page at /setup, "
+        if (!office.accounts().logins().setupDone())
+            console.accept("set-up code: " + office.setupCode().code() + " (asked for once, by the set-up page at /setup, "
                     + "to make the first administrator)");
         return running;
     }

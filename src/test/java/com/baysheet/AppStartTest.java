@@ -32,7 +32,7 @@ class AppStartTest {
             assertThat(PosixFilePermissions.toString(Files.getPosixFilePermissions(data.resolve("baysheet.mv.db")))).isEqualTo("rw-------");
             assertThat(console).contains("listening on 127.0.0.1:" + r.app().port()
                     + " (this machine only; --bind 0.0.0.0 for the office network), database " + data);
-            String code = r.signoff().setupCode().code();
+            String code = r.office().setupCode().code();
             assertThat(console).filteredOn(l -> l.startsWith("set-up code: ")).singleElement().asString().contains(code);
             assertThat(code).hasSize(8).matches("[23456789ABCDEFGHJKMNPQRSTUVWXYZ]{8}");
         }
@@ -58,7 +58,7 @@ class AppStartTest {
         String[] args = {"--port", "0", "--data", dir.resolve("pw").toString(), "--db-url", url, "--db-password-file", file.toString()};
         List<String> console = new ArrayList<>();
         try (App.Running r = App.start(ServerOptions.parse(args, Map.of()), console::add)) {
-            assertThat(r.signoff().accounts().logins().setupDone()).as("the database answered").isFalse();
+            assertThat(r.office().accounts().logins().setupDone()).as("the database answered").isFalse();
         }
         assertThat(String.join(" ", args)).doesNotContain(secret);
         assertThat(String.join("\n", console)).doesNotContain(secret);
@@ -73,7 +73,7 @@ class AppStartTest {
                 Matcher m = Pattern.compile("demo account .* " + who + " password ([A-Z0-9]{12})$").matcher(
                         console.stream().filter(l -> l.contains(" " + who + " ")).findFirst().orElse(""));
                 assertThat(m.find()).as(who + " printed in " + console).isTrue();
-                SignedIn in = r.signoff().accounts().logins().login(who, m.group(1), "127.0.0.1", null);
+                SignedIn in = r.office().accounts().logins().login(who, m.group(1), "127.0.0.1", null);
                 assertThat(in.user().username()).isEqualTo(who);
             }
             assertThat(console).anySatisfy(l -> assertThat(l).contains("demo account (invented"));

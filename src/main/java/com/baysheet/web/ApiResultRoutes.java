@@ -6,6 +6,7 @@ import com.baysheet.engine.record.RecordJson;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
 import com.baysheet.store.Store;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -18,15 +19,15 @@ final class ApiResultRoutes {
     }
 
     void install(RoutesConfig r) {
-        r.get("/api/projects/{project}/members", this::members);
+        r.get("/api/projects/{project}/members", this::members, Admit.OFFICE);
         r.get("/api/projects/{project}/members/{member}", ctx -> {
             DerivedMember m = member(ctx);
             Json.send(ctx, new ApiViews.MemberDetail(ApiViews.MemberJson.of(m), m.result().record()));
-        });
+        }, Admit.OFFICE);
         r.get("/api/projects/{project}/members/{member}/record", ctx ->
-                ctx.contentType("application/json; charset=utf-8").result(RecordJson.write(member(ctx).result().record())));
-        r.get("/api/projects/{project}/takedowns", ctx -> Json.send(ctx, results(ctx).derived().takeDowns().stream().map(ApiViews.TakeDownJson::of).toList()));
-        r.get("/api/projects/{project}/takedowns/{stack}", ctx -> Json.send(ctx, ApiViews.TakeDownJson.of(takeDown(ctx))));
+                ctx.contentType("application/json; charset=utf-8").result(RecordJson.write(member(ctx).result().record())), Admit.OFFICE);
+        r.get("/api/projects/{project}/takedowns", ctx -> Json.send(ctx, results(ctx).derived().takeDowns().stream().map(ApiViews.TakeDownJson::of).toList()), Admit.OFFICE);
+        r.get("/api/projects/{project}/takedowns/{stack}", ctx -> Json.send(ctx, ApiViews.TakeDownJson.of(takeDown(ctx))), Admit.OFFICE);
     }
 
     void members(Context ctx) {

@@ -5,6 +5,7 @@ import com.baysheet.store.ModelJson;
 import com.baysheet.project.Project;
 import com.baysheet.store.Store;
 import com.fasterxml.jackson.databind.JsonNode;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -19,29 +20,29 @@ final class ApiRoutes {
     }
 
     void install(RoutesConfig r) {
-        r.get("/api/projects", ctx -> Json.send(ctx, store.projects().findAll()));
-        r.post("/api/projects", this::createProject);
-        r.get("/api/projects/{project}", this::showProject);
-        r.put("/api/projects/{project}", this::updateProject);
-        r.put("/api/projects/{project}/grid", this::updateGrid);
+        r.get("/api/projects", ctx -> Json.send(ctx, store.projects().findAll()), Admit.OFFICE);
+        r.post("/api/projects", this::createProject, Admit.PREPARER);
+        r.get("/api/projects/{project}", this::showProject, Admit.OFFICE);
+        r.put("/api/projects/{project}", this::updateProject, Admit.PREPARER);
+        r.put("/api/projects/{project}/grid", this::updateGrid, Admit.PREPARER);
         r.get("/api/projects/{project}/levels", ctx -> Json.send(ctx,
-                store.levels().findByProject(Ids.project(ctx)).stream().map(ApiViews.LevelJson::of).toList()));
-        r.post("/api/projects/{project}/levels", this::createLevel);
-        r.put("/api/projects/{project}/levels/{level}", this::updateLevel);
-        r.delete("/api/projects/{project}/levels/{level}", this::deleteLevel);
+                store.levels().findByProject(Ids.project(ctx)).stream().map(ApiViews.LevelJson::of).toList()), Admit.OFFICE);
+        r.post("/api/projects/{project}/levels", this::createLevel, Admit.PREPARER);
+        r.put("/api/projects/{project}/levels/{level}", this::updateLevel, Admit.PREPARER);
+        r.delete("/api/projects/{project}/levels/{level}", this::deleteLevel, Admit.PREPARER);
         r.get("/api/projects/{project}/levels/{level}/bays", ctx -> Json.send(ctx,
-                store.bays().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList()));
-        r.post("/api/projects/{project}/levels/{level}/bays", this::assignBays);
-        r.post("/api/projects/{project}/levels/{level}/bays/clear", this::clearBays);
+                store.bays().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.BayJson::of).toList()), Admit.OFFICE);
+        r.post("/api/projects/{project}/levels/{level}/bays", this::assignBays, Admit.PREPARER);
+        r.post("/api/projects/{project}/levels/{level}/bays/clear", this::clearBays, Admit.PREPARER);
         r.get("/api/projects/{project}/levels/{level}/line-loads", ctx -> Json.send(ctx,
-                store.lineLoads().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.LineLoadJson::of).toList()));
-        r.post("/api/projects/{project}/levels/{level}/line-loads", this::addLineLoad);
-        r.delete("/api/projects/{project}/levels/{level}/line-loads/{lineLoad}", this::deleteLineLoad);
-        r.get("/api/occupancies", ctx -> Json.send(ctx, store.occupancies().findAll()));
+                store.lineLoads().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.LineLoadJson::of).toList()), Admit.OFFICE);
+        r.post("/api/projects/{project}/levels/{level}/line-loads", this::addLineLoad, Admit.PREPARER);
+        r.delete("/api/projects/{project}/levels/{level}/line-loads/{lineLoad}", this::deleteLineLoad, Admit.PREPARER);
+        r.get("/api/occupancies", ctx -> Json.send(ctx, store.occupancies().findAll()), Admit.OFFICE);
         r.post("/api/occupancies", ctx -> {
             store.occupancies().add(Editors.of(ctx), ModelJson.firmOccupancy(Json.body(ctx)));
             Json.send(ctx, 201, store.occupancies().findAll());
-        });
+        }, Admit.PREPARER);
     }
 
     void createProject(Context ctx) {

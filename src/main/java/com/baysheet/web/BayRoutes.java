@@ -6,6 +6,7 @@ import com.baysheet.project.Cell;
 import com.baysheet.project.Project;
 import com.baysheet.project.StoredLevel;
 import com.baysheet.store.Store;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -24,8 +25,8 @@ final class BayRoutes {
     }
 
     void install(RoutesConfig r) {
-        r.get("/projects/{project}/levels/{level}/bays", this::edit);
-        r.post("/projects/{project}/levels/{level}/bays", this::apply);
+        r.get("/projects/{project}/levels/{level}/bays", this::edit, Admit.OFFICE);
+        r.post("/projects/{project}/levels/{level}/bays", this::apply, Admit.PREPARER);
     }
 
     void edit(Context ctx) {

@@ -1,6 +1,7 @@
 package com.baysheet.web;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.issue.TooBusy;
 import com.baysheet.store.Duplicate;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.StaleVersion;
@@ -54,10 +55,11 @@ final class Errors {
             LOG.error("fault {} on {} {}", ref, ctx.method(), ctx.path(), e);
             respond(ctx, 500, "errors/fault", new ApiError(500, "internal fault, reference " + ref, null, null, null));
         });
-        // no route matched (Javalin's own 404): the same page as an unknown id
-        routes.error(404, ctx -> {
-            if (ctx.attribute(ANSWERED) == null) notFound(ctx, "no page at " + ctx.path());
-        });
+    }
+
+    /** Whether this class has answered the request already (a 404 for an unknown id, say). */
+    static boolean answered(Context ctx) {
+        return ctx.attribute(ANSWERED) != null;
     }
 
     /**
@@ -71,7 +73,7 @@ final class Errors {
         return code;
     }
 
-    private static void notFound(Context ctx, String message) {
+    static void notFound(Context ctx, String message) {
         respond(ctx, 404, "errors/not-found", new ApiError(404, message, null, null, null));
     }
 

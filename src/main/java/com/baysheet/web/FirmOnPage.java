@@ -5,9 +5,9 @@ import com.baysheet.project.Firm;
 import io.javalin.http.Context;
 
 /**
- * The firm's settings for this request: put on each request by the sign-off wiring (which owns them), read by
- * the page header (name and logo text) and by a new project (the default code edition). A server without
- * sign-off has no firm settings; new projects then start with the built-in default edition.
+ * The firm's settings for this request: put on each request the access check lets through, read by the page
+ * header (name and logo text) and by a new project (the default code edition). A request without them (an
+ * open route) starts new projects with the built-in default edition.
  */
 public final class FirmOnPage {
     /** The request attribute, and the name the page layout reads it by. */

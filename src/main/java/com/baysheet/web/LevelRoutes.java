@@ -3,6 +3,7 @@ package com.baysheet.web;
 import com.baysheet.project.Project;
 import com.baysheet.project.StoredLevel;
 import com.baysheet.store.Store;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -18,12 +19,12 @@ final class LevelRoutes {
     }
 
     void install(RoutesConfig r) {
-        r.get("/projects/{project}/levels", this::show);
-        r.post("/projects/{project}/grid", this::updateGrid);
-        r.post("/projects/{project}/levels", this::create);
-        r.get("/projects/{project}/levels/{level}/edit", this::editForm);
-        r.post("/projects/{project}/levels/{level}", this::update);
-        r.post("/projects/{project}/levels/{level}/delete", this::delete);
+        r.get("/projects/{project}/levels", this::show, Admit.OFFICE);
+        r.post("/projects/{project}/grid", this::updateGrid, Admit.PREPARER);
+        r.post("/projects/{project}/levels", this::create, Admit.PREPARER);
+        r.get("/projects/{project}/levels/{level}/edit", this::editForm, Admit.OFFICE);
+        r.post("/projects/{project}/levels/{level}", this::update, Admit.PREPARER);
+        r.post("/projects/{project}/levels/{level}/delete", this::delete, Admit.PREPARER);
     }
 
     void show(Context ctx) {

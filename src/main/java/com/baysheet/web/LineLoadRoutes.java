@@ -4,6 +4,7 @@ import com.baysheet.project.LineLoadEntry;
 import com.baysheet.project.Project;
 import com.baysheet.project.StoredLevel;
 import com.baysheet.store.Store;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -19,9 +20,9 @@ final class LineLoadRoutes {
     }
 
     void install(RoutesConfig r) {
-        r.get("/projects/{project}/levels/{level}/line-loads", this::list);
-        r.post("/projects/{project}/levels/{level}/line-loads", this::add);
-        r.post("/projects/{project}/levels/{level}/line-loads/{lineLoad}/delete", this::delete);
+        r.get("/projects/{project}/levels/{level}/line-loads", this::list, Admit.OFFICE);
+        r.post("/projects/{project}/levels/{level}/line-loads", this::add, Admit.PREPARER);
+        r.post("/projects/{project}/levels/{level}/line-loads/{lineLoad}/delete", this::delete, Admit.PREPARER);
     }
 
     void list(Context ctx) {

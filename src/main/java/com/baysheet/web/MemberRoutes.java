@@ -7,6 +7,7 @@ import com.baysheet.framing.model.Level;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
 import com.baysheet.store.Store;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -23,8 +24,8 @@ final class MemberRoutes {
     }
 
     void install(RoutesConfig r) {
-        r.get("/projects/{project}/members", this::list);
-        r.get("/projects/{project}/members/{member}", this::show);
+        r.get("/projects/{project}/members", this::list, Admit.OFFICE);
+        r.get("/projects/{project}/members/{member}", this::show, Admit.OFFICE);
     }
 
     void list(Context ctx) {

@@ -6,6 +6,7 @@ import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.project.FirmOccupancy;
 import com.baysheet.store.Store;
 import com.baysheet.web.entry.LengthField;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -20,8 +21,8 @@ final class OccupancyRoutes {
     }
 
     void install(RoutesConfig r) {
-        r.get("/occupancies", this::list);
-        r.post("/occupancies", this::create);
+        r.get("/occupancies", this::list, Admit.OFFICE);
+        r.post("/occupancies", this::create, Admit.PREPARER);
     }
 
     void list(Context ctx) {

@@ -5,6 +5,7 @@ import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
 import com.baysheet.project.StoredLevel;
 import com.baysheet.store.Store;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -19,7 +20,7 @@ final class PlanRoutes {
     }
 
     void install(RoutesConfig r) {
-        r.get("/projects/{project}/plan", this::show);
+        r.get("/projects/{project}/plan", this::show, Admit.OFFICE);
     }
 
     /** ?level=ID picks the level; without it, the lowest level that has a floor. */

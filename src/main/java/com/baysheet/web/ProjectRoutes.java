@@ -8,6 +8,7 @@ import com.baysheet.project.SnowInput;
 import com.baysheet.engine.snow.SnowSite;
 import com.baysheet.engine.units.Display;
 import com.baysheet.store.Store;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -23,13 +24,13 @@ final class ProjectRoutes {
     }
 
     void install(RoutesConfig r) {
-        r.get("/", ctx -> ctx.redirect("/projects"));
-        r.get("/projects", this::list);
-        r.get("/projects/new", this::newForm);
-        r.post("/projects", this::create);
-        r.get("/projects/{project}", this::show);
-        r.get("/projects/{project}/settings", this::settingsForm);
-        r.post("/projects/{project}/settings", this::updateSettings);
+        r.get("/", ctx -> ctx.redirect("/projects"), Admit.OFFICE);
+        r.get("/projects", this::list, Admit.OFFICE);
+        r.get("/projects/new", this::newForm, Admit.OFFICE);
+        r.post("/projects", this::create, Admit.PREPARER);
+        r.get("/projects/{project}", this::show, Admit.OFFICE);
+        r.get("/projects/{project}/settings", this::settingsForm, Admit.OFFICE);
+        r.post("/projects/{project}/settings", this::updateSettings, Admit.PREPARER);
     }
 
     void list(Context ctx) {

@@ -4,6 +4,7 @@ import com.baysheet.framing.TakeDown;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
 import com.baysheet.store.Store;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -18,8 +19,8 @@ final class TakeDownRoutes {
     }
 
     void install(RoutesConfig r) {
-        r.get("/projects/{project}/takedowns", this::list);
-        r.get("/projects/{project}/takedowns/{stack}", this::show);
+        r.get("/projects/{project}/takedowns", this::list, Admit.OFFICE);
+        r.get("/projects/{project}/takedowns/{stack}", this::show, Admit.OFFICE);
     }
 
     void list(Context ctx) {

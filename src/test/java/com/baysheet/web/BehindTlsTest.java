@@ -4,7 +4,6 @@ import com.baysheet.auth.Role;
 import com.baysheet.framing.Derivation;
 import com.baysheet.store.Database;
 import com.baysheet.store.Store;
-import com.baysheet.web.review.Signoff;
 import io.javalin.Javalin;
 import org.junit.jupiter.api.Test;
 
@@ -49,8 +48,8 @@ class BehindTlsTest {
     private static Exchange loginOn(boolean behindTls) {
         Database db = Database.open(HealthTest.memUrl());
         Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
-        Signoff s = TestLogin.signoff(store, db, Clock.systemUTC());
-        Javalin app = Server.create(store, s::install, null, behindTls).start("127.0.0.1", 0);
+        Office s = TestLogin.office(store, db, Clock.systemUTC());
+        Javalin app = s.server(null, behindTls).start("127.0.0.1", 0);
         try {
             TestLogin.user(s, "eve", Role.ENGINEER);
             TestLogin.Client b = TestLogin.anonymous(app);

@@ -3,7 +3,6 @@ package com.baysheet.web;
 import com.baysheet.framing.Derivation;
 import com.baysheet.store.Database;
 import com.baysheet.store.Store;
-import com.baysheet.web.review.Signoff;
 import io.javalin.Javalin;
 import org.junit.jupiter.api.Test;
 
@@ -24,8 +23,7 @@ class HealthTest {
     void upWhileTheDatabaseAnswersAnd503WithTheDatabaseDownOnceItsPoolIsClosed() {
         Database db = Database.open(memUrl());
         Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
-        Signoff s = TestLogin.signoff(store, db, Clock.systemUTC());
-        Javalin app = Server.create(store, s::install).start("127.0.0.1", 0);
+        Javalin app = TestLogin.office(store, db, Clock.systemUTC()).server(null, false).start("127.0.0.1", 0);
         try {
             TestLogin.Client anyone = TestLogin.anonymous(app);
             HttpResponse<String> up = anyone.get("/health");

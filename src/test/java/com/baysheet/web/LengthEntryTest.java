@@ -38,7 +38,7 @@ class LengthEntryTest {
         Grid after = server.store.grids().find(project);
         assertThat(after.x().spacings().get(0)).isEqualTo(25.5);
         assertThat(after.y().spacings().get(0)).isEqualTo(28 + 6.5 / 12);
-        assertThat(server.get("/projects/" + project + "/levels").body()).contains("value=\"25.5 30");
+        assertThat(Html.field(server.get("/projects/" + project + "/levels").body(), "x.spacings")).startsWith("25.5 30");
     }
 
     /** 28'-6 1/2", then 10' spacings, for a y axis of n spacings. */
@@ -52,10 +52,11 @@ class LengthEntryTest {
         HttpResponse<String> r = server.post("/projects/" + project + "/levels", List.of(entry("version", String.valueOf(version)),
                 entry("name", ""), entry("elevation", "-12-6"), entry("roof", "on"), entry("roofSlope", "6:0")));
         assertThat(r.statusCode()).isEqualTo(422);
-        assertThat(r.body()).contains("id=\"error-name\"", "id=\"error-elevation\"", "id=\"error-roofSlope\"")
-                .contains("value=\"-12-6\"", "value=\"6:0\"")
-                .contains(ResultPagesTest.html("write -12'-6\""))
-                .doesNotContain("Exception");
+        for (String f : List.of("name", "elevation", "roofSlope")) assertThat(Html.text(r.body(), "#error-" + f)).as(f).isNotBlank();
+        assertThat(Html.field(r.body(), "elevation")).isEqualTo("-12-6");
+        assertThat(Html.field(r.body(), "roofSlope")).isEqualTo("6:0");
+        assertThat(Html.text(r.body(), "#error-elevation")).contains("write -12'-6\"");
+        assertThat(r.body()).doesNotContain("Exception");
         assertThat(server.version(project)).isEqualTo(version);
     }
 
@@ -64,8 +65,10 @@ class LengthEntryTest {
         HttpResponse<String> r = server.post("/projects/" + project + "/levels", List.of(entry("version", String.valueOf(server.version(project))),
                 entry("name", ""), entry("elevation", "-12'-6\""), entry("roof", "on"), entry("roofSlope", "6:12")));
         assertThat(r.statusCode()).isEqualTo(422);
-        assertThat(r.body()).contains("id=\"error-name\"", "id=\"reading-elevation\"", "= -12.5 ft", "= 6 in/ft")
-                .contains("value=\"" + ResultPagesTest.html("-12'-6\"") + "\"");
+        assertThat(Html.text(r.body(), "#error-name")).isNotBlank();
+        assertThat(Html.text(r.body(), "#reading-elevation")).contains("= -12.5 ft");
+        assertThat(Html.shown(r.body())).contains("= 6 in/ft");
+        assertThat(Html.field(r.body(), "elevation")).isEqualTo("-12'-6\"");
     }
 
     @Test
@@ -74,8 +77,11 @@ class LengthEntryTest {
         HttpResponse<String> r = server.post("/projects/" + project + "/grid", List.of(entry("version", String.valueOf(version)),
                 entry("x.names", "1 1 2"), entry("x.spacings", "25'-13\" 30"), entry("y.names", "A B"), entry("y.spacings", "-10")));
         assertThat(r.statusCode()).isEqualTo(422);
-        assertThat(r.body()).contains("id=\"error-x.names\"", "id=\"error-x.spacings\"", "id=\"error-y.spacings\"")
-                .contains("value=\"1 1 2\"", "value=\"" + ResultPagesTest.html("25'-13\" 30") + "\"", "value=\"-10\"");
+        for (String f : List.of("x.names", "x.spacings", "y.spacings"))
+            assertThat(Html.one(r.body(), "[id=\"error-" + f + "\"]").text()).as(f).isNotBlank();
+        assertThat(Html.field(r.body(), "x.names")).isEqualTo("1 1 2");
+        assertThat(Html.field(r.body(), "x.spacings")).isEqualTo("25'-13\" 30");
+        assertThat(Html.field(r.body(), "y.spacings")).isEqualTo("-10");
         assertThat(server.version(project)).isEqualTo(version);
     }
 

@@ -8,13 +8,10 @@ import com.baysheet.auth.SessionPolicy;
 import com.baysheet.auth.SetupCode;
 import com.baysheet.auth.User;
 import com.baysheet.store.Database;
-import com.baysheet.store.Sql;
 import com.baysheet.store.Store;
 import com.baysheet.store.auth.Accounts;
 import com.baysheet.store.auth.Logins;
 import com.baysheet.store.auth.SignedIn;
-import com.baysheet.store.review.ReviewStore;
-import com.baysheet.web.review.Signoff;
 import io.javalin.Javalin;
 
 import java.io.IOException;
@@ -34,7 +31,7 @@ import java.util.Map;
 import java.util.stream.Collectors;
 
 /**
- * Logging in from HTTP tests: the sign-off wiring with a cheap password hash, users made directly in the
+ * Logging in from HTTP tests: the office's own wiring with a cheap password hash, users made directly in the
  * store, and clients that carry a session cookie and add the form token to every post (as a browser does
  * with the hidden field of every form).
  */
@@ -45,17 +42,14 @@ public final class TestLogin {
 
     private TestLogin() {}
 
-    /** Users, access and review over this database, with bcrypt at its cheapest and the given clock. */
-    public static Signoff signoff(Store store, Database db, Clock clock) {
-        Sql sql = new Sql(db.dataSource());
-        ReviewStore review = ReviewStore.on(sql);
+    /** The whole office over this database (the same wiring as the server's), with bcrypt at its cheapest and the given clock. */
+    public static Office office(Store store, Database db, Clock clock) {
         Logins.Policy policy = new Logins.Policy(new Passwords(4), SessionPolicy.OFFICE, LoginThrottle.OFFICE, clock);
-        return new Signoff(store, Accounts.on(sql, review.audit(), policy), review, clock,
-                new SetupCode(() -> SETUP_CODE), db.dataSource());
+        return Office.on(store, db.dataSource(), clock, policy, new SetupCode(() -> SETUP_CODE));
     }
 
     /** A user of this role (set-up done first if nobody exists), logged in: a client with their session. */
-    public static Client as(Javalin app, Signoff s, String username, Role role) {
+    public static Client as(Javalin app, Office s, String username, Role role) {
         User u = user(s, username, role);
         SignedIn in = s.accounts().logins().login(u.username(), PASSWORD, "127.0.0.1", null);
         Client c = anonymous(app);
@@ -65,7 +59,7 @@ public final class TestLogin {
         return c;
     }
 
-    public static User user(Signoff s, String username, Role role) {
+    public static User user(Office s, String username, Role role) {
         Accounts a = s.accounts();
         String hash = new Passwords(4).hash(PASSWORD);
         if (!a.users().setupDone())

@@ -1,39 +1,37 @@
 package com.baysheet.web;
 
+import com.baysheet.auth.Role;
 import com.baysheet.framing.Derivation;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
 import com.baysheet.project.Project;
 import com.baysheet.store.Store;
 import io.javalin.Javalin;
-import org.junit.jupiter.api.extension.RegisterExtension;
 import org.junit.jupiter.api.extension.AfterAllCallback;
 import org.junit.jupiter.api.extension.BeforeAllCallback;
 import org.junit.jupiter.api.extension.ExtensionContext;
 
-import java.io.IOException;
-import java.net.URI;
-import java.net.URLEncoder;
-import java.net.http.HttpClient;
-import java.net.http.HttpRequest;
 import java.net.http.HttpResponse;
-import java.nio.charset.StandardCharsets;
+import java.time.Clock;
 import java.util.List;
 import java.util.Map;
 import java.util.UUID;
-import java.util.stream.Collectors;
 
 /**
- * A real server on a random port over a fresh H2 memory database with the demo loaded, and a client for it.
+ * The office's own server ({@link Office}, access check and all) on a random port over a fresh H2 memory
+ * database with the demo loaded, and a client for it logged in as an engineer (who may prepare): its posts
+ * carry the form token as a browser's do.
  * {@code new TestServer()} starts one at once; as a JUnit extension ({@code @RegisterExtension static final
  * TestServer server = TestServer.perClass();}) it starts before a class's first test and stops after its last.
  */
 final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCallback {
     Database db;
     Store store;
+    Office office;
     Javalin app;
     List<Project> demo;
-    private final HttpClient client = HttpClient.newBuilder().followRedirects(HttpClient.Redirect.NEVER).build();
+    /** The engineer every request of {@link #get}, {@link #post} and {@link #json} is sent as. */
+    TestLogin.Client engineer;
 
     TestServer() { start(); }
 
@@ -51,9 +49,12 @@ final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCall
     private void start() {
         db = Database.open("jdbc:h2:mem:w" + UUID.randomUUID().toString().replace("-", "")
                 + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
-        store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
+        Clock clock = Clock.systemUTC();
+        store = Store.on(db.dataSource(), Derivation::derive, clock);
         demo = Demo.loadIfEmpty(store);
-        app = Server.create(store).start("127.0.0.1", 0);
+        office = TestLogin.office(store, db, clock);
+        app = office.server(null, false).start("127.0.0.1", 0);
+        engineer = TestLogin.as(app, office, "tess", Role.ENGINEER);
     }
 
     Project alder() { return demo.get(0); }
@@ -69,35 +70,17 @@ final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCall
     }
 
     HttpResponse<String> get(String path) {
-        return send(HttpRequest.newBuilder(uri(path)).GET().build());
+        return engineer.get(path);
     }
 
     /** Posts a form; pairs keep their order and may repeat a name (checkboxes). */
     HttpResponse<String> post(String path, List<Map.Entry<String, String>> fields) {
-        String body = fields.stream().map(e -> enc(e.getKey()) + "=" + enc(e.getValue())).collect(Collectors.joining("&"));
-        return send(HttpRequest.newBuilder(uri(path)).header("Content-Type", "application/x-www-form-urlencoded")
-                .POST(HttpRequest.BodyPublishers.ofString(body)).build());
+        return engineer.post(path, fields);
     }
 
     HttpResponse<String> json(String method, String path, String json) {
-        return send(HttpRequest.newBuilder(uri(path)).header("Content-Type", "application/json")
-                .method(method, json == null ? HttpRequest.BodyPublishers.noBody() : HttpRequest.BodyPublishers.ofString(json)).build());
+        return engineer.json(method, path, json);
     }
-
-    private URI uri(String path) { return URI.create("http://127.0.0.1:" + app.port() + path); }
-
-    private HttpResponse<String> send(HttpRequest r) {
-        try {
-            return client.send(r, HttpResponse.BodyHandlers.ofString());
-        } catch (IOException e) {
-            throw new IllegalStateException(e);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException(e);
-        }
-    }
-
-    private static String enc(String s) { return URLEncoder.encode(s, StandardCharsets.UTF_8); }
 
     @Override
     public void close() {

@@ -24,7 +24,12 @@ import java.util.Optional;
  */
 public final class Logins {
     /** Ready-made pieces, so that tests can give a cheap hash strength and their own clock. */
-    public record Policy(Passwords passwords, SessionPolicy sessions, LoginThrottle throttle, Clock clock) {}
+    public record Policy(Passwords passwords, SessionPolicy sessions, LoginThrottle throttle, Clock clock) {
+        /** The office's own: bcrypt at full strength, working-day sessions, the office throttle, on this clock. */
+        public static Policy office(Clock clock) {
+            return new Policy(new Passwords(Passwords.DEFAULT_STRENGTH), SessionPolicy.OFFICE, LoginThrottle.OFFICE, clock);
+        }
+    }
 
     private final UserStore users;
     private final SessionStore sessions;

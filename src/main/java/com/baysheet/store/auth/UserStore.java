@@ -47,7 +47,7 @@ public final class UserStore {
     /** @param mustChange the password was set by someone else, to be changed at the next login */
     public User create(NewUser u, String passwordHash, boolean mustChange) {
         return sql.tx(c -> {
-            User made = insert(c, u, passwordHash);
+            User made = insert(c, u, passwordHash, sql.stamp());
             if (mustChange) setPassword(c, made.id(), passwordHash, true);
             return made;
         });
@@ -74,7 +74,7 @@ public final class UserStore {
                     "UPDATE firm_setting SET setup_done = TRUE, version = version + 1 WHERE id = 1 AND setup_done = FALSE")) {
                 if (ps.executeUpdate() == 0) return Optional.empty();
             }
-            return Optional.of(insert(c, u, passwordHash));
+            return Optional.of(insert(c, u, passwordHash, sql.stamp()));
         });
     }
 
@@ -153,7 +153,7 @@ public final class UserStore {
         });
     }
 
-    private static User insert(Connection c, NewUser u, String hash) throws SQLException {
+    private static User insert(Connection c, NewUser u, String hash, OffsetDateTime at) throws SQLException {
         if (one(c, "username = ?", u.username()).isPresent())
             throw new InputError("username", "\"" + u.username() + "\"", "is taken by another user");
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO app_user (username, full_name, initials, role, "
@@ -163,7 +163,7 @@ public final class UserStore {
             ps.setString(3, u.initials());
             ps.setString(4, u.role().name());
             ps.setString(5, hash);
-            ps.setObject(6, OffsetDateTime.now());
+            ps.setObject(6, at);
             ps.executeUpdate();
             try (ResultSet keys = ps.getGeneratedKeys()) {
                 keys.next();

@@ -5,61 +5,112 @@ import com.baysheet.auth.Tokens;
 import com.baysheet.auth.User;
 import com.baysheet.store.auth.Logins;
 import com.baysheet.store.auth.SignedIn;
+import com.baysheet.project.Firm;
+import com.baysheet.web.FirmOnPage;
 import com.baysheet.web.auth.AccessRefused.Why;
 import io.javalin.http.Context;
+import io.javalin.security.RouteRole;
 
 import java.time.Duration;
 import java.util.Optional;
+import java.util.Set;
+import java.util.function.Supplier;
 
 /**
- * The before-filter of every request: finds the login from the session cookie, applies {@link AccessRules},
- * and refuses any state-changing request whose form token (field {@code _csrf}, or header
+ * The check run before every matched route and static file ({@code beforeMatched}): finds the login from the
+ * session cookie, lets the request through only if one of the roles its route declares ({@link Admit})
+ * admits it, and refuses any state-changing request whose form token (field {@code _csrf}, or header
  * {@code X-CSRF-Token} for the API) is not the session's, or before login the one of the form cookie.
- * A login whose password was set by someone else (the administrator, or the demo console) reaches only the
- * password change, logout and static files until it is changed. Handlers read the login with {@link #user(Context)}.
+ * A login whose password was set by someone else reaches only routes that admit {@link Admit#ACCOUNT} or
+ * anyone until it is changed. Handlers read the login with {@link #user(Context)}.
  */
 public final class Access {
     public static final String SIGNED_IN = "signedIn";
     static final String CSRF = "csrf";
     static final String CSRF_FIELD = "_csrf";
     static final String CSRF_HEADER = "X-CSRF-Token";
-    static final String HEALTH = "/health";
     private static final Duration FORM_COOKIE_AGE = Duration.ofHours(12);
     public static final String CHANGE_PASSWORD_PAGE = "/account/password";
     public static final String CHANGE_FIRST = "Your password was set by someone else: choose your own password before going on.";
+    /** What a page no route matches is treated as: an office page, so a stranger learns nothing of which paths exist. */
+    private static final Set<RouteRole> UNKNOWN_PATH = Set.of(Admit.OFFICE);
 
     private final Logins logins;
+    private final Supplier<Firm> firm;
     /** Set-up is done once and never undone, so after the first yes we stop asking the database. */
     private volatile boolean setupDone;
 
-    public Access(Logins logins) {
+    /** @param firm the firm's settings, put on every request let through for the page header and new projects */
+    public Access(Logins logins, Supplier<Firm> firm) {
         this.logins = logins;
+        this.firm = firm;
     }
 
-    public void before(Context ctx) {
+    /** The {@code beforeMatched} check: returns when the route's roles admit the request, throws otherwise. */
+    public void check(Context ctx) {
+        Set<RouteRole> admits = ctx.routeRoles();
         // the health check asks the database itself: it must answer (503) when the session lookup would fail
-        if (ctx.path().equals(HEALTH)) return;
+        if (admits.contains(Admit.OPEN)) return;
+        admit(ctx, admits);
+        checkFormToken(ctx);
+    }
+
+    /** A request no route matched: refused as a stranger's request for an office page would be, else not found. */
+    public Optional<AccessRefused> unmatched(Context ctx) {
+        try {
+            admit(ctx, UNKNOWN_PATH);
+            return Optional.empty();
+        } catch (AccessRefused e) {
+            return Optional.of(e);
+        }
+    }
+
+    private void admit(Context ctx, Set<RouteRole> admits) {
+        Optional<SignedIn> s = identify(ctx);
+        Role role = s.map(x -> x.user().role()).orElse(null);
+        Optional<Why> refused = decide(admits, role, s.map(SignedIn::mustChangePassword).orElse(false), setupDone());
+        if (refused.isPresent()) throw refusal(refused.get(), role);
+        FirmOnPage.put(ctx, firm.get());
+    }
+
+    /**
+     * Whether a route declaring {@code admits} lets in a user of {@code role} (null: nobody signed in), the one
+     * rule every route follows: empty when let through, else why not. A route that declares no role admits nobody.
+     */
+    public static Optional<Why> decide(Set<? extends RouteRole> admits, Role role, boolean mustChangePassword, boolean setupDone) {
+        if (admits.isEmpty()) return Optional.of(Why.FORBIDDEN);
+        if (admits.contains(Admit.OPEN)) return Optional.empty();
+        if (admits.contains(Admit.FIRST_START)) return setupDone ? Optional.of(Why.LOGIN) : Optional.empty();
+        if (!setupDone) return Optional.of(Why.SET_UP);
+        if (admits.contains(Admit.ANYONE)) return Optional.empty();
+        if (role == null) return Optional.of(Why.LOGIN);
+        if (admits.stream().noneMatch(a -> a instanceof Admit x && x.lets(role))) return Optional.of(Why.FORBIDDEN);
+        if (mustChangePassword && !admits.contains(Admit.ACCOUNT)) return Optional.of(Why.CHANGE_PASSWORD);
+        return Optional.empty();
+    }
+
+    private static AccessRefused refusal(Why why, Role role) {
+        return new AccessRefused(why, switch (why) {
+            case LOGIN -> "Please log in to continue.";
+            case SET_UP -> "Baysheet has no administrator yet: set it up first.";
+            case CHANGE_PASSWORD -> CHANGE_FIRST;
+            case FORBIDDEN, FORM_TOKEN -> role == null ? "Nobody is let in here."
+                    : "Your role (" + role.label() + ") does not allow this. Ask your administrator if you need it.";
+        });
+    }
+
+    /** The login of the session cookie on the request, and the form token its forms carry. */
+    private Optional<SignedIn> identify(Context ctx) {
         Optional<SignedIn> s = logins.session(Cookies.token(ctx, Cookies.SESSION));
         s.ifPresent(x -> {
             ctx.attribute(SIGNED_IN, x);
             ctx.attribute(CSRF, x.csrfToken());
         });
         if (s.isEmpty()) ctx.attribute(CSRF, formToken(ctx));
-        Role role = s.map(x -> x.user().role()).orElse(null);
-        switch (AccessRules.decide(ctx.method().name(), ctx.path(), role, setupDone())) {
-            case ALLOW -> {
-                checkFormToken(ctx);
-                if (s.isPresent() && s.get().mustChangePassword() && !mayBeforeChange(ctx.path()))
-                    throw new AccessRefused(Why.CHANGE_PASSWORD, CHANGE_FIRST);
-            }
-            case LOGIN -> throw new AccessRefused(Why.LOGIN, "Please log in to continue.");
-            case SET_UP -> throw new AccessRefused(Why.SET_UP, "Baysheet has no administrator yet: set it up first.");
-            case FORBIDDEN -> throw new AccessRefused(Why.FORBIDDEN,
-                    "Your role (" + role.label() + ") does not allow this. Ask your administrator if you need it.");
-        }
+        return s;
     }
 
-    /** The logged-in user of a request that passed the filter on a route that needs one. */
+    /** The logged-in user of a request that passed the check on a route that needs one. */
     public static User user(Context ctx) {
         return signedIn(ctx).user();
     }
@@ -70,16 +121,12 @@ public final class Access {
         return s;
     }
 
-    /** What a login with a password set by someone else may still reach: the change itself, logout, static files. */
-    private static boolean mayBeforeChange(String path) {
-        return path.equals(CHANGE_PASSWORD_PAGE) || path.equals("/logout") || path.equals("/login") || AccessRules.isOpen(path);
-    }
-
     private boolean setupDone() {
         if (!setupDone) setupDone = logins.setupDone();
         return setupDone;
     }
 
+    /** GET, HEAD and OPTIONS change nothing (no route of ours writes on them); everything else carries the token. */
     private static void checkFormToken(Context ctx) {
         String m = ctx.method().name();
         if (m.equals("GET") || m.equals("HEAD") || m.equals("OPTIONS")) return;

@@ -23,7 +23,7 @@ import java.util.HashMap;
 import java.util.Map;
 import java.util.function.Consumer;
 
-/** The administrator's pages (all under /admin, which the access rules keep to administrators). */
+/** The administrator's pages, all under /admin, each declared for the administrator alone. */
 public final class AdminRoutes {
     private static final int AUDIT_PAGE = 100;
 
@@ -39,16 +39,16 @@ public final class AdminRoutes {
     }
 
     public void install(RoutesConfig r) {
-        r.get("/admin/users", ctx -> users(ctx, Form.filled(Map.of("role", "engineer"))));
-        r.post("/admin/users", this::addUser);
-        r.post("/admin/users/{user}/role", this::setRole);
-        r.post("/admin/users/{user}/active", this::setActive);
-        r.post("/admin/users/{user}/password", this::resetPassword);
-        r.post("/admin/users/{user}/unlock", this::unlock);
-        r.get("/admin/firm", ctx -> firm(ctx, null));
-        r.post("/admin/firm", this::updateFirm);
-        r.get("/admin/audit", this::audit);
-        r.get("/admin/audit.csv", this::auditCsv);
+        r.get("/admin/users", ctx -> users(ctx, Form.filled(Map.of("role", "engineer"))), Admit.ADMINISTRATOR);
+        r.post("/admin/users", this::addUser, Admit.ADMINISTRATOR);
+        r.post("/admin/users/{user}/role", this::setRole, Admit.ADMINISTRATOR);
+        r.post("/admin/users/{user}/active", this::setActive, Admit.ADMINISTRATOR);
+        r.post("/admin/users/{user}/password", this::resetPassword, Admit.ADMINISTRATOR);
+        r.post("/admin/users/{user}/unlock", this::unlock, Admit.ADMINISTRATOR);
+        r.get("/admin/firm", ctx -> firm(ctx, null), Admit.ADMINISTRATOR);
+        r.post("/admin/firm", this::updateFirm, Admit.ADMINISTRATOR);
+        r.get("/admin/audit", this::audit, Admit.ADMINISTRATOR);
+        r.get("/admin/audit.csv", this::auditCsv, Admit.ADMINISTRATOR);
     }
 
     void users(Context ctx, Form f) {

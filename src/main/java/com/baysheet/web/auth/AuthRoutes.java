@@ -30,13 +30,13 @@ public final class AuthRoutes {
     }
 
     public void install(RoutesConfig r) {
-        r.get("/login", this::loginForm);
-        r.post("/login", this::login);
-        r.post("/logout", this::logout);
-        r.get("/setup", this::setupForm);
-        r.post("/setup", this::setup);
-        r.get("/account/password", this::passwordForm);
-        r.post("/account/password", this::changePassword);
+        r.get("/login", this::loginForm, Admit.ANYONE);
+        r.post("/login", this::login, Admit.ANYONE);
+        r.post("/logout", this::logout, Admit.ACCOUNT);
+        r.get("/setup", this::setupForm, Admit.FIRST_START);
+        r.post("/setup", this::setup, Admit.FIRST_START);
+        r.get("/account/password", this::passwordForm, Admit.ACCOUNT);
+        r.post("/account/password", this::changePassword, Admit.ACCOUNT);
     }
 
     void loginForm(Context ctx) {

@@ -3,12 +3,14 @@ package com.baysheet.web.review;
 import com.baysheet.auth.Tokens;
 import com.baysheet.engine.InputError;
 import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.issue.Issuing;
+import com.baysheet.issue.SheetSubject;
 import com.baysheet.review.RevisionComparison;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Store;
 import com.baysheet.store.review.ReviewStore;
-import com.baysheet.store.review.Reviews;
 import com.baysheet.store.review.StoredRevision;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
@@ -17,8 +19,6 @@ import io.javalin.http.UploadedFile;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import java.time.Clock;
-import java.time.LocalDate;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -33,20 +33,20 @@ public final class IssuedRoutes {
 
     private final Store store;
     private final ReviewStore review;
-    private final Clock clock;
+    private final Issuing issuing;
 
-    public IssuedRoutes(Store store, ReviewStore review, Clock clock) {
+    public IssuedRoutes(Store store, ReviewStore review, Issuing issuing) {
         this.store = store;
         this.review = review;
-        this.clock = clock;
+        this.issuing = issuing;
     }
 
     public void install(RoutesConfig r) {
-        r.get("/review/revisions/{revision}/issued.pdf", this::issuedPdf);
-        r.get(SHEET + "/checking.pdf", this::checkingPdf);
-        for (String base : SHEETS) r.get(base + "/compare", this::compare);
-        r.get("/verify", ctx -> ctx.render("review/verify", new HashMap<>()));
-        r.post("/verify", this::verify);
+        r.get("/review/revisions/{revision}/issued.pdf", this::issuedPdf, Admit.OFFICE);
+        r.get(SHEET + "/checking.pdf", this::checkingPdf, Admit.OFFICE);
+        for (String base : SHEETS) r.get(base + "/compare", this::compare, Admit.OFFICE);
+        r.get("/verify", ctx -> ctx.render("review/verify", new HashMap<>()), Admit.OFFICE);
+        r.post("/verify", this::verify, Admit.OFFICE);
     }
 
     void issuedPdf(Context ctx) {
@@ -57,14 +57,12 @@ public final class IssuedRoutes {
     }
 
     void checkingPdf(Context ctx) {
-        SheetContext.OfMember s = SheetContext.member(store, ctx);
-        Reviews.SheetView v = review.reviews().view(s.ref());
-        byte[] pdf = SheetPdfs.checking(review.firm().get(), s, v.current().revision(), v.markups(), LocalDate.now(clock)).bytes();
-        pdf(ctx, pdf, s.computed().project().info().jobNumber() + "-" + s.name() + "-checking-copy.pdf");
+        SheetSubject.OfMember s = SheetContext.member(store, ctx);
+        pdf(ctx, issuing.checkingCopy(s), s.computed().project().info().jobNumber() + "-" + s.name() + "-checking-copy.pdf");
     }
 
     void compare(Context ctx) {
-        SheetContext s = SheetContext.of(store, ctx);
+        SheetSubject s = SheetContext.of(store, ctx);
         List<StoredRevision> h = review.reviews().view(s.ref()).history();
         int to = number(ctx, "to", h.isEmpty() ? 1 : h.get(h.size() - 1).revision().number());
         int from = number(ctx, "from", Math.max(1, to - 1));
@@ -106,7 +104,7 @@ public final class IssuedRoutes {
     }
 
     /** A revision's record as submitted; a revision not yet submitted compares as the member is now. */
-    private static CalcRecord record(List<StoredRevision> h, int number, SheetContext s) {
+    private static CalcRecord record(List<StoredRevision> h, int number, SheetSubject s) {
         for (StoredRevision r : h)
             if (r.revision().number() == number) return r.record().orElse(s.current());
         if (h.isEmpty() && number == 1) return s.current();

@@ -1,8 +1,10 @@
 package com.baysheet.web.review;
 
+import com.baysheet.issue.SheetSubject;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Store;
 import com.baysheet.store.review.ReviewMarkups;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
@@ -26,27 +28,27 @@ public final class MarkupRoutes {
 
     public void install(RoutesConfig r) {
         for (String base : SHEETS) {
-            r.post(base + "/markups", this::add);
-            r.post(base + "/markups/{markup}/reply", this::reply);
-            r.post(base + "/markups/{markup}/resolve", ctx -> resolve(ctx, true));
-            r.post(base + "/markups/{markup}/reopen", ctx -> resolve(ctx, false));
+            r.post(base + "/markups", this::add, Admit.PREPARER);
+            r.post(base + "/markups/{markup}/reply", this::reply, Admit.PREPARER);
+            r.post(base + "/markups/{markup}/resolve", ctx -> resolve(ctx, true), Admit.PREPARER);
+            r.post(base + "/markups/{markup}/reopen", ctx -> resolve(ctx, false), Admit.PREPARER);
         }
     }
 
     void add(Context ctx) {
-        SheetContext s = SheetContext.of(store, ctx);
+        SheetSubject s = SheetContext.of(store, ctx);
         long id = markups.add(s.ref(), caller(ctx), ctx.formParam("target"), ctx.formParam("text"));
         ctx.redirect(s.path() + "#markup-" + id, HttpStatus.SEE_OTHER);
     }
 
     void reply(Context ctx) {
-        SheetContext s = SheetContext.of(store, ctx);
+        SheetSubject s = SheetContext.of(store, ctx);
         markups.reply(s.ref(), markup(ctx), caller(ctx), ctx.formParam("text"));
         ctx.redirect(s.path() + "#markup-" + markup(ctx), HttpStatus.SEE_OTHER);
     }
 
     void resolve(Context ctx, boolean resolved) {
-        SheetContext s = SheetContext.of(store, ctx);
+        SheetSubject s = SheetContext.of(store, ctx);
         markups.resolve(s.ref(), markup(ctx), version(ctx), caller(ctx), resolved);
         ctx.redirect(s.path() + "#markup-" + markup(ctx), HttpStatus.SEE_OTHER);
     }

@@ -1,24 +1,24 @@
 package com.baysheet.web.review;
 
 import com.baysheet.engine.InputError;
-import com.baysheet.review.PackageManifest;
+import com.baysheet.issue.Issuing;
+import com.baysheet.issue.PackageJobs;
 import com.baysheet.review.PackageScope;
-import com.baysheet.review.SheetRef;
-import com.baysheet.sheet.CalcPackage;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
 import com.baysheet.store.Store;
 import com.baysheet.project.Firm;
 import com.baysheet.store.review.ReviewStore;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
+import io.javalin.http.HttpStatus;
 
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
-import java.time.Clock;
-import java.time.LocalDate;
+import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.LinkedHashSet;
 import java.util.Map;
@@ -31,21 +31,18 @@ public final class PackageRoutes {
     private static final String BASE = "/projects/{project}/packages";
 
     private final Store store;
-    private final ReviewStore review;
-    private final Clock clock;
-    private final PackageJobs jobs = new PackageJobs();
+    private final Issuing issuing;
 
-    public PackageRoutes(Store store, ReviewStore review, Clock clock) {
+    public PackageRoutes(Store store, Issuing issuing) {
         this.store = store;
-        this.review = review;
-        this.clock = clock;
+        this.issuing = issuing;
     }
 
     public void install(RoutesConfig r) {
-        r.get(BASE, this::list);
-        r.post(BASE, this::start);
-        r.get(BASE + "/{job}", this::progress);
-        r.get(BASE + "/{job}/file", this::file);
+        r.get(BASE, this::list, Admit.OFFICE);
+        r.post(BASE, this::start, Admit.PREPARER);
+        r.get(BASE + "/{job}", this::progress, Admit.OFFICE);
+        r.get(BASE + "/{job}/file", this::file, Admit.OFFICE);
     }
 
     void list(Context ctx) {
@@ -56,42 +53,36 @@ public final class PackageRoutes {
         ctx.render("review/packages", m);
     }
 
-    /** Starts a checking copy: the package's own revision under way, and each member's own state, as they are now. */
+    /** Starts a checking copy of the project or of one level, then follows its progress. */
     void start(Context ctx) {
-        long project = SheetContext.project(ctx);
-        Results.Computed c = store.results().of(project);
+        Results.Computed c = store.results().of(SheetContext.project(ctx));
         String scope = ctx.formParam("scope");
         if (scope == null || scope.isBlank()) throw new InputError("scope", "\"\"", "choose the project or one level");
-        PackageScope ps = scope.equals("project") ? PackageScope.PROJECT : PackageScope.ofLevel(scope);
-        if (ps.members(c.derived()).isEmpty()) throw new InputError("level", scope, "has no members in this model");
-        SheetRef ref = new SheetRef(project, ps.subject());
-        SheetContext.OfPackage s = new SheetContext.OfPackage(c, ps, ref, PackageManifest.of(ps, c.derived()));
-        CalcPackage pkg = PackagePdfs.checking(review.firm().get(), s, review.reviews().view(ref),
-                review.reviews().latestOf(project), LocalDate.now(clock));
-        PackageJobs.Job job = jobs.start(project, pkg);
-        ctx.redirect("/projects/" + project + "/packages/" + job.id, io.javalin.http.HttpStatus.SEE_OTHER);
+        PackageJobs.Job job = issuing.startPackage(c, scope.equals("project") ? PackageScope.PROJECT : PackageScope.ofLevel(scope));
+        ctx.redirect("/projects/" + job.project() + "/packages/" + job.id(), HttpStatus.SEE_OTHER);
     }
 
     void progress(Context ctx) {
         PackageJobs.Job job = job(ctx);
+        PackageJobs.View v = job.view();
         if ("json".equals(ctx.queryParam("format"))) {
-            ctx.json(Map.of("done", job.done, "total", job.total, "finished", job.finished(),
-                    "error", job.error == null ? "" : job.error));
+            ctx.json(Map.of("done", v.done(), "total", v.total(), "finished", v.finished(),
+                    "error", v.error() == null ? "" : v.error()));
             return;
         }
         Map<String, Object> m = new HashMap<>();
-        m.put("project", store.results().of(job.project).project());
-        m.put("job", job.view());
+        m.put("project", store.results().of(job.project()).project());
+        m.put("job", v);
         ctx.render("review/package-job", m);
     }
 
     void file(Context ctx) {
         PackageJobs.Job job = job(ctx);
-        if (job.file == null) throw new NotFound("finished package", job.id);
+        Path file = job.file().orElseThrow(() -> new NotFound("finished package", job.id()));
         ctx.contentType("application/pdf");
-        ctx.header("X-Content-SHA256", job.sha256);
-        ctx.header("Content-Disposition", "attachment; filename=\"" + job.fileName.replaceAll("[^A-Za-z0-9._-]", "_") + "\"");
-        try (InputStream in = Files.newInputStream(job.file)) {
+        ctx.header("X-Content-SHA256", job.sha256());
+        ctx.header("Content-Disposition", "attachment; filename=\"" + job.fileName().replaceAll("[^A-Za-z0-9._-]", "_") + "\"");
+        try (InputStream in = Files.newInputStream(file)) {
             ctx.result(in.readAllBytes());
         } catch (IOException e) {
             throw new UncheckedIOException(e);
@@ -99,10 +90,7 @@ public final class PackageRoutes {
     }
 
     private PackageJobs.Job job(Context ctx) {
-        long project = SheetContext.project(ctx);
         String id = ctx.pathParam("job");
-        PackageJobs.Job job = jobs.find(id).orElseThrow(() -> new NotFound("package", id));
-        if (job.project != project) throw new NotFound("package", id);
-        return job;
+        return issuing.job(SheetContext.project(ctx), id).orElseThrow(() -> new NotFound("package", id));
     }
 }

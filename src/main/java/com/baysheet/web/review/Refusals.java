@@ -18,10 +18,10 @@ import java.util.Map;
  * The refusals of login, access and review as responses, in one place: a page saying what was refused and
  * why, JSON under /api, and for a page that needs a login a redirect to it that comes back afterwards.
  */
-final class Refusals {
+public final class Refusals {
     private Refusals() {}
 
-    static void access(AccessRefused e, Context ctx) {
+    public static void access(AccessRefused e, Context ctx) {
         boolean page = !api(ctx) && ctx.method().name().equals("GET");
         if (page && e.why() == AccessRefused.Why.LOGIN) {
             String next = ctx.path() + (ctx.queryString() == null ? "" : "?" + ctx.queryString());
@@ -35,7 +35,7 @@ final class Refusals {
         }
     }
 
-    static void login(LoginRefused e, Context ctx) {
+    public static void login(LoginRefused e, Context ctx) {
         Form f = Form.filled(Map.of("username", value(ctx, "username"), "next", value(ctx, "next")));
         f.reject(Form.GENERAL, e.getMessage());
         ctx.status(e.retryAfter().isPresent() ? HttpStatus.TOO_MANY_REQUESTS : HttpStatus.UNAUTHORIZED);
@@ -44,12 +44,12 @@ final class Refusals {
         ctx.render("auth/login", m);
     }
 
-    static void review(ReviewRefused e, Context ctx) {
+    public static void review(ReviewRefused e, Context ctx) {
         boolean rights = e instanceof ReviewRefused.NotPermitted || e instanceof ReviewRefused.FourEyes;
         respond(ctx, rights ? 403 : 409, "Not done", e.getMessage());
     }
 
-    static void conflict(ConcurrentChange e, Context ctx) {
+    public static void conflict(ConcurrentChange e, Context ctx) {
         respond(ctx, 409, "Changed meanwhile", e.getMessage());
     }
 

@@ -1,22 +1,20 @@
 package com.baysheet.web.review;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.issue.Issuing;
+import com.baysheet.issue.SheetSubject;
 import com.baysheet.review.Caller;
 import com.baysheet.review.PackageScope;
-import com.baysheet.review.ReviewAction;
-import com.baysheet.review.ReviewRefused;
-import com.baysheet.review.SheetState;
 import com.baysheet.store.Store;
-import com.baysheet.store.review.ConcurrentChange;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.store.review.Reviews;
 import com.baysheet.store.review.StoredRevision;
 import com.baysheet.web.auth.Access;
+import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
 
-import java.time.Clock;
 import java.time.LocalDate;
 import java.util.HashMap;
 import java.util.List;
@@ -34,24 +32,24 @@ public final class ReviewRoutes {
 
     private final Store store;
     private final ReviewStore review;
-    private final Clock clock;
+    private final Issuing issuing;
 
-    public ReviewRoutes(Store store, ReviewStore review, Clock clock) {
+    public ReviewRoutes(Store store, ReviewStore review, Issuing issuing) {
         this.store = store;
         this.review = review;
-        this.clock = clock;
+        this.issuing = issuing;
     }
 
     public void install(RoutesConfig r) {
-        r.get("/review/projects/{project}", this::list);
-        r.get(SHEET, this::show);
-        r.get(PACKAGE, this::showPackage);
+        r.get("/review/projects/{project}", this::list, Admit.OFFICE);
+        r.get(SHEET, this::show, Admit.OFFICE);
+        r.get(PACKAGE, this::showPackage, Admit.OFFICE);
         for (String base : SHEETS) {
-            r.post(base + "/submit", ctx -> act(ctx, (s, v) -> reviews().submit(s.ref(), v, caller(ctx), today(), s.current())));
-            r.post(base + "/resubmit", ctx -> act(ctx, (s, v) -> reviews().resubmit(s.ref(), v, caller(ctx), today(), s.current())));
-            r.post(base + "/return", ctx -> act(ctx, (s, v) -> reviews().returnWithMarkups(s.ref(), v, caller(ctx))));
-            r.post(base + "/approve", ctx -> act(ctx, (s, v) -> reviews().approve(s.ref(), v, caller(ctx), today(), s.current())));
-            r.post(base + "/issue", this::issue);
+            r.post(base + "/submit", ctx -> act(ctx, (s, v) -> reviews().submit(s.ref(), v, caller(ctx), today(), s.current())), Admit.PREPARER);
+            r.post(base + "/resubmit", ctx -> act(ctx, (s, v) -> reviews().resubmit(s.ref(), v, caller(ctx), today(), s.current())), Admit.PREPARER);
+            r.post(base + "/return", ctx -> act(ctx, (s, v) -> reviews().returnWithMarkups(s.ref(), v, caller(ctx))), Admit.PREPARER);
+            r.post(base + "/approve", ctx -> act(ctx, (s, v) -> reviews().approve(s.ref(), v, caller(ctx), today(), s.current())), Admit.PREPARER);
+            r.post(base + "/issue", this::issue, Admit.PREPARER);
         }
     }
 
@@ -67,7 +65,7 @@ public final class ReviewRoutes {
     }
 
     void show(Context ctx) {
-        SheetContext.OfMember s = SheetContext.member(store, ctx);
+        SheetSubject.OfMember s = SheetContext.member(store, ctx);
         Map<String, Object> m = new HashMap<>();
         m.put("project", s.computed().project());
         m.put("member", s.member());
@@ -78,7 +76,7 @@ public final class ReviewRoutes {
 
     /** A package's page: its manifest (each sheet with its own state), markups and the same actions. */
     void showPackage(Context ctx) {
-        SheetContext.OfPackage s = SheetContext.pkg(store, ctx);
+        SheetSubject.OfPackage s = SheetContext.pkg(store, ctx);
         Map<String, Object> m = new HashMap<>();
         m.put("project", s.computed().project());
         m.put("scope", s.scope());
@@ -89,31 +87,23 @@ public final class ReviewRoutes {
         ctx.render("review/package", m);
     }
 
+    /** Renders the issued copy and issues it: the issuing service checks the version and state first. */
     void issue(Context ctx) {
-        SheetContext s = SheetContext.of(store, ctx);
-        long version = version(ctx);
-        Reviews.SheetView v = reviews().view(s.ref());
-        StoredRevision cur = v.current();
-        // checked before rendering the PDF; the review rules check everything again when issuing
-        if (cur.version() != version) throw new ConcurrentChange("The sheet " + s.name());
-        if (cur.revision().state() != SheetState.APPROVED)
-            throw new ReviewRefused.WrongState(ReviewAction.ISSUE, cur.revision().state(), "only an approved sheet is issued");
-        byte[] pdf = s instanceof SheetContext.OfMember m ? SheetPdfs.issued(review.firm().get(), m, cur.revision(), today()).bytes()
-                : PackagePdfs.issued(review.firm().get(), (SheetContext.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today());
-        reviews().issue(s.ref(), version, caller(ctx), today(), s.current(), pdf);
+        SheetSubject s = SheetContext.of(store, ctx);
+        issuing.issue(s, version(ctx), caller(ctx));
         ctx.redirect(s.path(), HttpStatus.SEE_OTHER);
     }
 
     /** An action on the sheet at the version the page showed, then back to the sheet page. */
     private void act(Context ctx, Action a) {
-        SheetContext s = SheetContext.of(store, ctx);
+        SheetSubject s = SheetContext.of(store, ctx);
         a.run(s, version(ctx));
         ctx.redirect(s.path(), HttpStatus.SEE_OTHER);
     }
 
     @FunctionalInterface
     interface Action {
-        void run(SheetContext s, long version);
+        void run(SheetSubject s, long version);
     }
 
     private Map<String, StoredRevision> latestBySubject(long project) {
@@ -124,7 +114,7 @@ public final class ReviewRoutes {
 
     private Reviews reviews() { return review.reviews(); }
 
-    private LocalDate today() { return LocalDate.now(clock); }
+    private LocalDate today() { return issuing.today(); }
 
     static Caller caller(Context ctx) {
         return Caller.of(Access.user(ctx), ctx.ip());

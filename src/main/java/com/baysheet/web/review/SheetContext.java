@@ -1,66 +1,27 @@
 package com.baysheet.web.review;
 
-import com.baysheet.engine.record.CalcRecord;
-import com.baysheet.framing.DerivedMember;
-import com.baysheet.review.PackageManifest;
-import com.baysheet.review.PackageScope;
-import com.baysheet.review.SheetRef;
+import com.baysheet.issue.SheetSubject;
 import com.baysheet.store.NotFound;
-import com.baysheet.store.Results;
 import com.baysheet.store.Store;
 import io.javalin.http.Context;
 
 /**
- * The sheet a check request names, as the current derivation gives it: a member's sheet (path parameter
- * {@code member}) or a package ({@code package}), with the record its check is about. The lifecycle and
- * markup routes take either; only the pages and PDFs tell them apart.
+ * The sheet a check request names in its path: a member's sheet (path parameter {@code member}) or a package
+ * ({@code package}) of the project {@code project}, read from the project's current derivation.
  */
-sealed interface SheetContext permits SheetContext.OfMember, SheetContext.OfPackage {
-    Results.Computed computed();
+final class SheetContext {
+    private SheetContext() {}
 
-    SheetRef ref();
-
-    /** What the check is about now: the member's record, or the package's manifest. */
-    CalcRecord current();
-
-    /** The sheet's name in messages and headings. */
-    String name();
-
-    /** The sheet page's path, for redirects after each action. */
-    String path();
-
-    record OfMember(Results.Computed computed, DerivedMember member, SheetRef ref) implements SheetContext {
-        public CalcRecord current() { return member.result().record(); }
-
-        public String name() { return member.name(); }
-
-        public String path() { return "/review/projects/" + ref.projectId() + "/members/" + ref.subject(); }
-    }
-
-    record OfPackage(Results.Computed computed, PackageScope scope, SheetRef ref, CalcRecord current) implements SheetContext {
-        public String name() { return scope.title(); }
-
-        public String path() { return "/review/projects/" + ref.projectId() + "/packages/" + scope.key(); }
-    }
-
-    static SheetContext of(Store store, Context ctx) {
+    static SheetSubject of(Store store, Context ctx) {
         return ctx.pathParamMap().containsKey("package") ? pkg(store, ctx) : member(store, ctx);
     }
 
-    static OfMember member(Store store, Context ctx) {
-        long project = project(ctx);
-        Results.Computed c = store.results().of(project);
-        String id = ctx.pathParam("member");
-        DerivedMember m = c.derived().member(id).orElseThrow(() -> new NotFound("member", id));
-        return new OfMember(c, m, new SheetRef(project, id));
+    static SheetSubject.OfMember member(Store store, Context ctx) {
+        return SheetSubject.member(store.results().of(project(ctx)), ctx.pathParam("member"));
     }
 
-    static OfPackage pkg(Store store, Context ctx) {
-        long project = project(ctx);
-        Results.Computed c = store.results().of(project);
-        String key = ctx.pathParam("package");
-        PackageScope s = PackageScope.find(c.derived(), key).orElseThrow(() -> new NotFound("package", key));
-        return new OfPackage(c, s, new SheetRef(project, s.subject()), PackageManifest.of(s, c.derived()));
+    static SheetSubject.OfPackage pkg(Store store, Context ctx) {
+        return SheetSubject.pkg(store.results().of(project(ctx)), ctx.pathParam("package"));
     }
 
     static long project(Context ctx) {

@@ -1,6 +1,7 @@
 package com.baysheet.web.review;
 
 import com.baysheet.auth.Role;
+import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin;
 import com.baysheet.web.TestLogin.Client;
 import org.junit.jupiter.api.BeforeAll;
@@ -113,33 +114,51 @@ class AccessMatrixTest {
     }
 
     @Test
+    void aPathNoRouteMatchesIsAnOfficePageToStrangersAndNotFoundToTheOffice() {
+        assertThat(anon.get("/no/such/page").headers().firstValue("Location")).hasValueSatisfying(l -> assertThat(l).startsWith("/login"));
+        assertThat(anon.post("/no/such/page", List.of()).statusCode()).isEqualTo(401);
+        assertThat(anon.json("POST", "/api/no/such", "{}").statusCode()).isEqualTo(401);
+        assertThat(eng.get("/no/such/page").statusCode()).isEqualTo(404);
+        assertThat(adm.json("GET", "/api/no/such", null).statusCode()).isEqualTo(404);
+        // the static files are anyone's: a missing one is simply not there
+        assertThat(anon.get("/static/no-such-file.css").statusCode()).isEqualTo(404);
+        assertThat(anon.get("/static/baysheet.css").statusCode()).isEqualTo(200);
+    }
+
+    @Test
     void aPostWithoutTheFormTokenIsRefusedAndChangesNothing() {
         Client tokenless = server.as("otto", Role.ENGINEER);
         tokenless.csrf = null;
-        long before = server.signoff.review().audit().count();
+        long before = server.office.review().audit().count();
         HttpResponse<String> res = tokenless.post(server.sheetPath() + "/submit", List.of(Map.entry("version", "0")));
         assertThat(res.statusCode()).isEqualTo(403);
-        assertThat(res.body()).contains("Reload the page");
+        assertThat(Html.shown(res.body())).contains("Reload the page");
         assertThat(tokenless.postRaw(server.sheetPath() + "/submit", List.of(Map.entry("version", "0"),
                 Map.entry("_csrf", "A".repeat(43)))).statusCode()).isEqualTo(403);
         assertThat(tokenless.json("POST", "/api/projects", "{}").statusCode()).isEqualTo(403);
-        assertThat(server.signoff.review().reviews().view(server.ref()).current().stored()).isFalse();
-        assertThat(server.signoff.review().audit().count()).isEqualTo(before);
+        assertThat(server.office.review().reviews().view(server.ref()).current().stored()).isFalse();
+        assertThat(server.office.review().audit().count()).isEqualTo(before);
     }
 
     @Test
     void everyPostFormOfAPageCarriesTheToken() {
         String html = chk.get("/projects/" + server.project() + "/settings").body();
-        assertThat(html).contains("<form method=\"post\"");
-        assertThat(html.split("<form method=\"post\"", -1).length - 1)
-                .isEqualTo(html.split("name=\"_csrf\" value=\"" + chk.csrf + "\"", -1).length - 1);
+        var forms = Html.all(html, "form[method=post]");
+        assertThat(forms).isNotEmpty();
+        // each post form carries the token once, as its own field (not merely somewhere on the page)
+        assertThat(forms).allSatisfy(f -> assertThat(f.select("input[type=hidden][name=_csrf]").eachAttr("value")).containsExactly(chk.csrf));
     }
 
     @Test
     void theHeaderOffersEachRoleItsOwnLinks() {
         String e = eng.get("/projects/" + server.project()).body();
-        assertThat(e).contains("Log out").contains("Verify a PDF").contains("Sheets and check").doesNotContain("Audit trail");
-        assertThat(adm.get("/projects").body()).contains("Audit trail").contains("Users");
-        assertThat(TestLogin.anonymous(server.app).get("/login").body()).doesNotContain("Log out");
+        assertThat(header(e)).contains("Log out", "Verify a PDF", "Sheets and check").doesNotContain("Audit trail");
+        assertThat(header(adm.get("/projects").body())).contains("Audit trail", "Users");
+        assertThat(header(TestLogin.anonymous(server.app).get("/login").body())).doesNotContain("Log out");
+    }
+
+    /** The links and buttons of the page header. */
+    private static List<String> header(String html) {
+        return Html.texts(html, "header a, header button");
     }
 }

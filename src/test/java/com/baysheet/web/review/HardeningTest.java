@@ -1,6 +1,7 @@
 package com.baysheet.web.review;
 
 import com.baysheet.auth.Role;
+import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
@@ -26,7 +27,7 @@ class HardeningTest {
     /** A browser at the login page: it holds the page's form token, as the login form posts it. */
     private static TestLogin.Client atLogin() {
         TestLogin.Client c = TestLogin.anonymous(server.app);
-        c.csrf = Pages.first(c.get("/login").body(), "name=\"_csrf\" value=\"([A-Za-z0-9_-]+)\"");
+        c.csrf = Pages.token(c.get("/login").body());
         return c;
     }
 
@@ -52,7 +53,7 @@ class HardeningTest {
 
     @Test
     void aLoginOnlyReturnsToOurOwnPages() {
-        TestLogin.user(server.signoff, "hop", Role.ENGINEER);
+        TestLogin.user(server.office, "hop", Role.ENGINEER);
         for (String next : List.of("/\t/evil.example", "//evil.example", "/\\evil.example", "https://evil.example",
                 "/login", "/%09/evil.example", "/projects//evil.example", "javascript:alert(1)")) {
             HttpResponse<String> r = atLogin().post("/login",
@@ -75,21 +76,22 @@ class HardeningTest {
 
     @Test
     void theAdministratorSeesAWaitingUserAndUnlocksThem() {
-        TestLogin.user(server.signoff, "guessed", Role.ENGINEER);
+        TestLogin.user(server.office, "guessed", Role.ENGINEER);
         for (int i = 0; i < 7; i++)
             atLogin().post("/login", List.of(entry("username", "guessed"), entry("password", "wrong guess " + i)));
         HttpResponse<String> refused = atLogin().post("/login",
                 List.of(entry("username", "guessed"), entry("password", TestLogin.PASSWORD)));
         assertThat(refused.statusCode()).isEqualTo(429);
-        assertThat(refused.body()).contains("try again in");
+        assertThat(Html.shown(refused.body())).contains("try again in");
         TestLogin.Client admin = server.as("admin", Role.ADMINISTRATOR);
         String users = admin.get("/admin/users").body();
-        assertThat(users).contains("waiting until", "Unlock");
-        long id = server.signoff.accounts().users().findByUsername("guessed").orElseThrow().user().id();
+        assertThat(Html.shown(users)).contains("waiting until");
+        assertThat(Html.texts(users, "form button")).contains("Unlock");
+        long id = server.office.accounts().users().findByUsername("guessed").orElseThrow().user().id();
         assertThat(admin.post("/admin/users/" + id + "/unlock", List.of()).statusCode()).isEqualTo(303);
         HttpResponse<String> in = atLogin().post("/login",
                 List.of(entry("username", "guessed"), entry("password", TestLogin.PASSWORD), entry("next", "/projects")));
         assertThat(in.statusCode()).isEqualTo(200);
-        assertThat(in.body()).contains("id=\"failed-attempts\"", "failed attempts to log in as you");
+        assertThat(Html.text(in.body(), "#failed-attempts")).contains("failed attempts to log in as you");
     }
 }

@@ -11,6 +11,7 @@ import com.baysheet.review.PackageScope;
 import com.baysheet.project.BayAssignment;
 import com.baysheet.project.Cell;
 import com.baysheet.project.StoredLevel;
+import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin.Client;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
@@ -24,8 +25,6 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.regex.Matcher;
-import java.util.regex.Pattern;
 
 import static com.baysheet.web.review.Pages.first;
 import static com.baysheet.web.review.Pages.state;
@@ -46,16 +45,17 @@ class PackageFlowTest {
         String pkg = "/review/projects/" + server.project() + "/packages/" + scope.key();
 
         String list = eng.get("/review/projects/" + server.project()).body();
-        assertThat(first(list, "id=\"packages\">(?s)(.*?)</table>")).contains("Project package", scope.title(), "href=\"" + pkg + "\"");
+        assertThat(Html.text(list, "table#packages")).contains("Project package", scope.title());
+        assertThat(Html.all(list, "table#packages a").eachAttr("href")).contains(pkg);
 
         String html = eng.get(pkg).body();
         assertThat(state(html)).isEqualTo("being prepared");
-        assertThat(first(html, "id=\"manifest\">(?s)(.*?)</table>")).contains(member.name());
+        assertThat(Html.text(html, "table#manifest")).contains(member.name());
         assertThat(eng.post(pkg + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
 
         html = chk.get(pkg).body();
         assertThat(state(html)).isEqualTo("submitted for check");
-        assertThat(html).contains("<option value=\"input:" + member.id() + "\">");
+        assertThat(Html.all(html, "option").eachAttr("value")).contains("input:" + member.id());
         assertThat(eng.post(pkg + "/markups", List.of(Map.entry("target", "sheet"), Map.entry("text", "mine"))).statusCode())
                 .as("the preparer does not mark up their own package").isEqualTo(403);
         assertThat(chk.post(pkg + "/markups", List.of(Map.entry("target", "step:R"), Map.entry("text", "no steps"))).statusCode())
@@ -69,14 +69,14 @@ class PackageFlowTest {
 
         html = eng.get(pkg).body();
         assertThat(state(html)).isEqualTo("returned with markups");
-        String markup = first(html, "id=\"markup-(\\d+)\"");
+        String markup = Html.one(html, "[id^=markup-]").id().substring("markup-".length());
         eng.post(pkg + "/markups/" + markup + "/reply", List.of(Map.entry("text", "Reaction taken from the girder sheet")));
         html = eng.get(pkg).body();
         assertThat(eng.post(pkg + "/resubmit", List.of(Map.entry("version", version(html, "/resubmit")))).statusCode()).isEqualTo(303);
 
         html = chk.get(pkg).body();
         assertThat(state(html)).isEqualTo("resubmitted");
-        assertThat(html).contains("Reaction taken from the girder sheet");
+        assertThat(Html.shown(html)).contains("Reaction taken from the girder sheet");
         assertThat(eng.post(pkg + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode())
                 .as("the preparer may not approve").isEqualTo(403);
         assertThat(chk.post(pkg + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode())
@@ -86,13 +86,13 @@ class PackageFlowTest {
         assertThat(chk.post(pkg + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
         html = chk.get(pkg).body();
         assertThat(state(html)).isEqualTo("approved");
-        assertThat(html).contains(chk.user.initials() + " ");
+        assertThat(Html.shown(html)).contains(chk.user.initials() + " ");
         assertThat(chk.post(pkg + "/issue", List.of(Map.entry("version", version(html, "/issue")))).statusCode()).isEqualTo(303);
 
         html = eng.get(pkg).body();
         assertThat(state(html)).isEqualTo("issued");
         String sha = first(html, "SHA-256 ([0-9a-f]{64})");
-        String pdfPath = first(html, "href=\"(/review/revisions/\\d+/issued\\.pdf)\"");
+        String pdfPath = Html.one(html, "a[href$=/issued.pdf]").attr("href");
         HttpResponse<byte[]> pdf = eng.getBytes(pdfPath);
         assertThat(pdf.statusCode()).isEqualTo(200);
         assertThat(pdf.headers().firstValue("Content-Type").orElse("")).startsWith("application/pdf");
@@ -108,7 +108,8 @@ class PackageFlowTest {
                     chk.user.initials()).doesNotContain("CHECKING COPY");
         }
         String verdict = eng.upload("/verify", "pdf", "package.pdf", pdf.body()).body();
-        assertThat(verdict).contains("Matches an issued revision", sha, "href=\"" + pkg + "\"");
+        assertThat(Html.shown(verdict)).contains("Matches an issued revision", sha);
+        assertThat(Html.all(verdict, "a").eachAttr("href")).contains(pkg);
 
         Map<String, String> before = fingerprints(member.level());
         oneBayHeavier(member.level(), 15);
@@ -123,24 +124,23 @@ class PackageFlowTest {
         assertThat(eng.post("/projects/" + server.project() + "/packages", List.of(Map.entry("scope", member.level())))
                 .statusCode()).isEqualTo(303);
         list = eng.get("/review/projects/" + server.project()).body();
-        String row = first(list, "(<tr>\\s*<td><a href=\"" + Pattern.quote(pkg) + "\">(?s).*?</tr>)");
-        assertThat(row).contains("<td>2</td>", "being prepared");
+        org.jsoup.nodes.Element row = Html.one(list, "tr:has(td > a[href=" + pkg + "])");
+        assertThat(row.select("td").eachText()).contains("2", "being prepared");
         html = eng.get(pkg).body();
         assertThat(state(html)).isEqualTo("being prepared");
-        assertThat(first(html, "id=\"revisions\">(?s)(.*?)</table>")).contains("superseded");
+        assertThat(Html.text(html, "table#revisions")).contains("superseded");
 
         String compare = eng.get(pkg + "/compare?from=1&to=2").body();
-        assertThat(compare).contains(scope.title());
-        String changedInputs = first(compare, "id=\"changed-inputs\">(?s)(.*?)</table>");
-        assertThat(names(changedInputs).stream().filter(n -> !n.startsWith("Column take-down")).toList())
+        assertThat(Html.shown(compare)).contains(scope.title());
+        assertThat(names(compare, "table#changed-inputs").stream().filter(n -> !n.startsWith("Column take-down")).toList())
                 .containsExactlyInAnyOrderElementsOf(changed);
-        assertThat(eng.upload("/verify", "pdf", "package.pdf", pdf.body()).body())
+        assertThat(Html.shown(eng.upload("/verify", "pdf", "package.pdf", pdf.body()).body()))
                 .as("the superseded issue still verifies, as superseded").contains("Matches an issued revision", "superseded");
 
         String audit = server.as("admin", Role.ADMINISTRATOR).get("/admin/audit").body();
         for (String action : List.of("submit", "markup", "return", "reply", "resubmit", "resolve", "approve", "issue", "supersede"))
-            assertThat(audit).contains("<td>" + action + "</td>");
-        assertThat(audit).contains(scope.subject());
+            assertThat(Html.texts(audit, "td")).contains(action);
+        assertThat(Html.shown(audit)).contains(scope.subject());
     }
 
     private static Map<String, String> fingerprints(String level) {
@@ -150,12 +150,10 @@ class PackageFlowTest {
         return out;
     }
 
-    /** The labels in the first column of a comparison table. */
-    private static List<String> names(String table) {
-        List<String> out = new ArrayList<>();
-        Matcher m = Pattern.compile("<th>([^<]*)</th>\\s*<td class=\"num\">").matcher(table);
-        while (m.find()) out.add(m.group(1));
-        return out;
+    /** The labels of a comparison table's rows of values (a heading cell followed by a number). */
+    private static List<String> names(String html, String table) {
+        return Html.all(html, table + " th").stream().filter(th -> th.nextElementSibling() != null
+                && th.nextElementSibling().is("td.num")).map(org.jsoup.nodes.Element::text).toList();
     }
 
     /** Adds dead load (psf) to the first floored bay of the level, through the store as the bay editor does. */

@@ -2,6 +2,7 @@ package com.baysheet.web.review;
 
 import com.baysheet.auth.Role;
 import com.baysheet.auth.Tokens;
+import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin.Client;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
@@ -25,7 +26,7 @@ class PackageRoutesTest {
         Client eng = server.as("pia", Role.ENGINEER);
         String base = "/projects/" + server.project() + "/packages";
         String level = server.member().level();
-        assertThat(eng.get(base).body()).contains("Calculation packages", level);
+        assertThat(Html.shown(eng.get(base).body())).contains("Calculation packages", level);
 
         HttpResponse<String> started = eng.post(base, List.of(Map.entry("scope", level)));
         assertThat(started.statusCode()).isEqualTo(303);
@@ -38,7 +39,7 @@ class PackageRoutesTest {
             if (!state.contains("\"finished\":true")) Thread.sleep(100);
         }
         assertThat(state).contains("\"finished\":true").contains("\"error\":\"\"");
-        assertThat(eng.get(job).body()).contains("download the checking copy");
+        assertThat(Html.shown(eng.get(job).body())).contains("download the checking copy");
 
         HttpResponse<byte[]> pdf = eng.getBytes(job + "/file");
         assertThat(pdf.statusCode()).isEqualTo(200);
@@ -57,7 +58,7 @@ class PackageRoutesTest {
         String base = "/projects/" + server.project() + "/packages";
         HttpResponse<String> bad = eng.post(base, List.of(Map.entry("scope", "Level 99")));
         assertThat(bad.statusCode()).isBetween(400, 499);
-        assertThat(bad.body()).contains("Level 99");
+        assertThat(Html.shown(bad.body())).contains("Level 99");
         assertThat(eng.get(base + "/no-such-job").statusCode()).isEqualTo(404);
         assertThat(eng.get("/projects/987654/packages").statusCode()).isEqualTo(404);
     }

@@ -3,6 +3,7 @@ package com.baysheet.web.review;
 import com.baysheet.auth.Role;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.review.PackageScope;
+import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin.Client;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
@@ -16,7 +17,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
-import static com.baysheet.web.review.Pages.first;
 import static com.baysheet.web.review.Pages.version;
 import static org.assertj.core.api.Assertions.assertThat;
 
@@ -55,7 +55,7 @@ class PackageTitleBlocksTest {
 
         String pkg = "/review/projects/" + server.project() + "/packages/" + PackageScope.ofLevel(checked.level()).key();
         walk(eng, packageChecker, pkg);
-        String pdfPath = first(eng.get(pkg).body(), "href=\"(/review/revisions/\\d+/issued\\.pdf)\"");
+        String pdfPath = Html.one(eng.get(pkg).body(), "a[href$=/issued.pdf]").attr("href");
         List<String> issued = pages(eng.getBytes(pdfPath).body());
         assertThat(issued.get(0)).contains("Revision 1, issued " + today, "YOLA").doesNotContain("not issued");
         own = pageOf(issued, checked.name());

@@ -1,28 +1,38 @@
 package com.baysheet.web.review;
 
+import com.baysheet.web.Html;
+import org.jsoup.nodes.Element;
+
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
-/** Reading what a test needs from the rendered HTML. */
+/** Reading what a test needs from the rendered HTML, parsed as HTML (see {@link Html}). */
 final class Pages {
     private Pages() {}
 
-    /** The value of the first {@code version} field of the form whose action ends with this suffix. */
+    /** The value of the {@code version} field of the (first) form whose action ends with this suffix. */
     static String version(String html, String actionSuffix) {
-        int at = html.indexOf(actionSuffix + "\"");
-        if (at < 0) throw new AssertionError("no form posting to ..." + actionSuffix + " on the page");
-        Matcher m = Pattern.compile("name=\"version\" value=\"(\\d+)\"").matcher(html);
-        if (!m.find(at)) throw new AssertionError("no version field after " + actionSuffix);
-        return m.group(1);
+        Element form = Html.parse(html).selectFirst("form[action$=" + actionSuffix + "]");
+        if (form == null) throw new AssertionError("no form posting to ..." + actionSuffix + " on the page");
+        Element v = form.selectFirst("input[name=version]");
+        if (v == null) throw new AssertionError("no version field in the form posting to ..." + actionSuffix);
+        return v.val();
     }
 
+    /** The first group of the first match of a pattern in what the page shows (its text, not its markup). */
     static String first(String html, String regex) {
-        Matcher m = Pattern.compile(regex).matcher(html);
-        if (!m.find()) throw new AssertionError("nothing matches " + regex);
+        Matcher m = Pattern.compile(regex).matcher(Html.shown(html));
+        if (!m.find()) throw new AssertionError("nothing the page shows matches " + regex);
         return m.group(1);
     }
 
+    /** The sheet's state as its page states it. */
     static String state(String html) {
-        return first(html, "<dd id=\"state\">([^<]*)</dd>");
+        return Html.text(html, "dd#state");
+    }
+
+    /** The form token of the page's (first) post form. */
+    static String token(String html) {
+        return Html.one(html, "form[method=post] input[name=_csrf]").val();
     }
 }

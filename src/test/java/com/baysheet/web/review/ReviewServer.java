@@ -15,7 +15,7 @@ import com.baysheet.store.Demo;
 import com.baysheet.project.Project;
 import com.baysheet.project.StoredLevel;
 import com.baysheet.store.Store;
-import com.baysheet.web.Server;
+import com.baysheet.web.Office;
 import com.baysheet.web.TestLogin;
 import io.javalin.Javalin;
 import org.junit.jupiter.api.extension.RegisterExtension;
@@ -28,7 +28,7 @@ import java.util.List;
 import java.util.UUID;
 
 /**
- * The whole office server with sign-off on a random port, over a fresh H2 database with the demo loaded.
+ * The office's own server ({@link Office}) on a random port, over a fresh H2 database with the demo loaded.
  * {@code new ReviewServer()} starts one at once; as a JUnit extension ({@code @RegisterExtension static final
  * ReviewServer server = ReviewServer.perClass();}) it starts before a class's first test and stops after its last.
  */
@@ -37,7 +37,7 @@ final class ReviewServer implements AutoCloseable, BeforeAllCallback, AfterAllCa
     Store store;
     List<Project> demo;
     final TestClock clock = new TestClock(Instant.now());
-    Signoff signoff;
+    Office office;
     Javalin app;
 
     ReviewServer() { start(); }
@@ -58,11 +58,11 @@ final class ReviewServer implements AutoCloseable, BeforeAllCallback, AfterAllCa
                 + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
         store = Store.on(db.dataSource(), Derivation::derive, clock);
         demo = Demo.loadIfEmpty(store);
-        signoff = TestLogin.signoff(store, db, clock);
-        app = Server.create(store, signoff::install).start("127.0.0.1", 0);
+        office = TestLogin.office(store, db, clock);
+        app = office.server(null, false).start("127.0.0.1", 0);
     }
 
-    TestLogin.Client as(String username, Role role) { return TestLogin.as(app, signoff, username, role); }
+    TestLogin.Client as(String username, Role role) { return TestLogin.as(app, office, username, role); }
 
     long project() { return demo.get(0).id(); }
 

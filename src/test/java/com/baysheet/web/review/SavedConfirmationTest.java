@@ -1,6 +1,7 @@
 package com.baysheet.web.review;
 
 import com.baysheet.auth.Role;
+import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin;
 import com.baysheet.web.TestLogin.Client;
 import org.junit.jupiter.api.Test;
@@ -20,7 +21,7 @@ class SavedConfirmationTest {
     /** The page the save redirected to, as the browser then fetches it. */
     static String followed(Client c, HttpResponse<String> r) {
         assertThat(r.statusCode()).as("a save redirects").isEqualTo(303);
-        return c.get(r.headers().firstValue("Location").orElseThrow()).body();
+        return Html.shown(c.get(r.headers().firstValue("Location").orElseThrow()).body());
     }
 
     @Test
@@ -40,7 +41,7 @@ class SavedConfirmationTest {
 
     @Test
     void passwordChange() {
-        TestLogin.user(server.signoff, "pat", Role.ENGINEER);
+        TestLogin.user(server.office, "pat", Role.ENGINEER);
         Client pat = server.as("pat", Role.ENGINEER);
         HttpResponse<String> r = pat.post("/account/password", List.of(Map.entry("currentPassword", TestLogin.PASSWORD),
                 Map.entry("newPassword", "a new password 456"), Map.entry("confirmPassword", "a new password 456")));
@@ -57,7 +58,7 @@ class SavedConfirmationTest {
         HttpResponse<String> added = admin.post("/admin/users", List.of(Map.entry("username", "quinn"), Map.entry("fullName", "Quinn Ray"),
                 Map.entry("initials", "QR"), Map.entry("role", "engineer"), Map.entry("password", TestLogin.PASSWORD)));
         assertThat(followed(admin, added)).contains("Saved: user account.", "quinn");
-        long id = server.signoff.accounts().users().findByUsername("quinn").orElseThrow().user().id();
+        long id = server.office.accounts().users().findByUsername("quinn").orElseThrow().user().id();
         assertThat(followed(admin, admin.post("/admin/users/" + id + "/role", List.of(Map.entry("role", "checker")))))
                 .contains("Saved: user account.");
         assertThat(followed(admin, admin.post("/admin/users/" + id + "/active", List.of(Map.entry("active", "false")))))

@@ -2,6 +2,7 @@ package com.baysheet.web.review;
 
 import com.baysheet.auth.Role;
 import com.baysheet.auth.Tokens;
+import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin.Client;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
@@ -32,26 +33,29 @@ class SheetFlowTest {
 
         html = chk.get(sheet).body();
         assertThat(state(html)).isEqualTo("submitted for check");
-        String step = first(html, "<option value=\"step:([^\"]+)\"");
+        String step = Html.one(html, "option[value^=step:]").val().substring("step:".length());
         String script = "<script>alert('x')</script> is K_LL right?";
         assertThat(chk.post(sheet + "/markups", List.of(Map.entry("target", "step:" + step), Map.entry("text", script)))
                 .statusCode()).isEqualTo(303);
         html = chk.get(sheet).body();
-        assertThat(html).contains("&lt;script&gt;alert(&#39;x&#39;)&lt;/script&gt; is K_LL right?").doesNotContain("<script>alert");
+        // the markup shows as the text it is, and never becomes an element of the page
+        assertThat(Html.shown(html)).contains("<script>alert('x')</script> is K_LL right?");
+        assertThat(Html.all(html, "script").eachAttr("src")).allMatch(src -> src.startsWith("/static/"));
+        assertThat(html).doesNotContain("<script>alert");
         assertThat(html.indexOf("id=\"step-" + step + "\"")).as("the markup sits in its step's row")
                 .isLessThan(html.indexOf("is K_LL right?"));
         chk.post(sheet + "/return", List.of(Map.entry("version", version(html, "/return"))));
 
         html = eng.get(sheet).body();
         assertThat(state(html)).isEqualTo("returned with markups");
-        String markup = first(html, "id=\"markup-(\\d+)\"");
+        String markup = Html.one(html, "[id^=markup-]").id().substring("markup-".length());
         eng.post(sheet + "/markups/" + markup + "/reply", List.of(Map.entry("text", "Interior beam: K_LL = 2")));
         html = eng.get(sheet).body();
         eng.post(sheet + "/resubmit", List.of(Map.entry("version", version(html, "/resubmit"))));
 
         html = chk.get(sheet).body();
         assertThat(state(html)).isEqualTo("resubmitted");
-        assertThat(html).contains("Interior beam: K_LL = 2");
+        assertThat(Html.shown(html)).contains("Interior beam: K_LL = 2");
         assertThat(eng.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode())
                 .as("the preparer may not approve").isEqualTo(403);
         chk.post(sheet + "/markups/" + markup + "/resolve", List.of(Map.entry("version", version(html, "/markups/" + markup + "/resolve"))));
@@ -64,31 +68,32 @@ class SheetFlowTest {
         html = eng.get(sheet).body();
         assertThat(state(html)).isEqualTo("issued");
         String sha = first(html, "SHA-256 ([0-9a-f]{64})");
-        String pdfPath = first(html, "href=\"(/review/revisions/\\d+/issued\\.pdf)\"");
+        String pdfPath = Html.one(html, "a[href$=/issued.pdf]").attr("href");
         HttpResponse<byte[]> pdf = eng.getBytes(pdfPath);
         assertThat(pdf.headers().firstValue("Content-Type")).hasValueSatisfying(t -> assertThat(t).startsWith("application/pdf"));
         assertThat(Tokens.sha256(pdf.body())).isEqualTo(sha);
         assertThat(eng.getBytes(pdfPath).body()).as("the frozen bytes, every time").isEqualTo(pdf.body());
 
         String verdict = eng.upload("/verify", "pdf", "sheet.pdf", pdf.body()).body();
-        assertThat(verdict).contains("Matches an issued revision").contains(sha);
+        assertThat(Html.shown(verdict)).contains("Matches an issued revision").contains(sha);
         byte[] altered = pdf.body().clone();
         altered[altered.length / 2] ^= 1;
-        assertThat(eng.upload("/verify", "pdf", "sheet.pdf", altered).body()).contains("No match");
+        assertThat(Html.shown(eng.upload("/verify", "pdf", "sheet.pdf", altered).body())).contains("No match");
 
         server.heavierFloor(10);
         html = eng.get(sheet).body();
         assertThat(state(html)).isEqualTo("being prepared");
-        assertThat(html).contains("superseded");
+        assertThat(Html.shown(html)).contains("superseded");
         String compare = eng.get(sheet + "/compare?from=1&to=2").body();
-        assertThat(compare).contains("changed-inputs").doesNotContain("No input or result differs");
+        assertThat(Html.all(compare, "table#changed-inputs")).hasSize(1);
+        assertThat(Html.shown(compare)).doesNotContain("No input or result differs");
         // the dead load shows in the steps, not the record's input table, so the results are what changed
-        assertThat(first(compare, "id=\"changed-results\">(?s)(.*?)</table>")).doesNotContain(">none<");
+        assertThat(Html.texts(compare, "table#changed-results td")).doesNotContain("none");
 
         Client admin = server.as("admin", Role.ADMINISTRATOR);
         String audit = admin.get("/admin/audit").body();
         for (String action : List.of("submit", "markup", "return", "reply", "resubmit", "resolve", "approve", "issue", "supersede"))
-            assertThat(audit).contains("<td>" + action + "</td>");
+            assertThat(Html.texts(audit, "td")).contains(action);
         HttpResponse<String> csv = admin.get("/admin/audit.csv");
         assertThat(csv.headers().firstValue("Content-Type")).hasValueSatisfying(t -> assertThat(t).startsWith("text/csv"));
         assertThat(csv.body()).startsWith("id,when (UTC),user,action,subject,detail,address\r\n").contains("\"issue\"");

@@ -30,15 +30,15 @@ class WriteTimeSupersessionTest {
     void aBayChangeThroughTheStoreSupersedesTheIssuedSheetAndIsAuditedWithItsAuthor() {
         Client eng = server.as("erin", Role.ENGINEER), chk = server.as("cody", Role.CHECKER);
         issue(eng, chk);
-        long before = server.signoff.review().audit().count();
+        long before = server.office.review().audit().count();
 
         server.heavierFloor(5);
 
         // seen through the store, without opening the sheet page
-        assertThat(server.signoff.review().reviews().view(server.ref()).current().revision().state()).isEqualTo(SheetState.PREPARING);
-        assertThat(server.signoff.review().reviews().view(server.ref()).history()).extracting(r -> r.revision().state())
+        assertThat(server.office.review().reviews().view(server.ref()).current().revision().state()).isEqualTo(SheetState.PREPARING);
+        assertThat(server.office.review().reviews().view(server.ref()).history()).extracting(r -> r.revision().state())
                 .endsWith(SheetState.SUPERSEDED, SheetState.PREPARING);
-        List<AuditEvent> after = server.signoff.review().audit().page(1000, 0);
+        List<AuditEvent> after = server.office.review().audit().page(1000, 0);
         assertThat(after.size()).isGreaterThan((int) before);
         assertThat(after).anySatisfy(e -> {
             assertThat(e.action()).isEqualTo("supersede");
@@ -67,7 +67,7 @@ class WriteTimeSupersessionTest {
                 Map.entry("version", String.valueOf(server.store.projects().find(p).version())),
                 Map.entry("cells", bay.col() + "," + bay.row()), Map.entry("action", "opening")));
         assertThat(r.statusCode()).isEqualTo(303);
-        AuditEvent last = server.signoff.review().audit().page(1, 0).get(0);
+        AuditEvent last = server.office.review().audit().page(1, 0).get(0);
         assertThat(last.actorUsername()).isEqualTo("erin");
         assertThat(last.action()).isEqualTo("edit");
         assertThat(last.detail()).startsWith("bays assigned on " + level.name() + ": " + cell + ": opening; was: " + cell + " " + bay.occupancy());
@@ -83,13 +83,13 @@ class WriteTimeSupersessionTest {
                 return ps.executeUpdate();
             }
         });
-        long audit = server.signoff.review().audit().count();
-        var view = server.signoff.review().reviews().view(server.ref());
+        long audit = server.office.review().audit().count();
+        var view = server.office.review().reviews().view(server.ref());
 
         assertThat(state(eng.get(server.sheetPath()).body())).isEqualTo("issued");
 
-        assertThat(server.signoff.review().audit().count()).isEqualTo(audit);
-        var again = server.signoff.review().reviews().view(server.ref());
+        assertThat(server.office.review().audit().count()).isEqualTo(audit);
+        var again = server.office.review().reviews().view(server.ref());
         assertThat(again.current().version()).isEqualTo(view.current().version());
         assertThat(again.history()).hasSameSizeAs(view.history());
         assertThat(again.current().revision().state()).isEqualTo(SheetState.ISSUED);
@@ -107,16 +107,16 @@ class WriteTimeSupersessionTest {
                 Map.entry("defaultEdition", "ASCE 7-16"), Map.entry("infillBeamWeight", "35"), Map.entry("gridBeamWeight", "40"),
                 Map.entry("girderWeight", "55"), Map.entry("columnWeight", "50"), Map.entry("version", version(page, "/admin/firm"))));
         assertThat(r.statusCode()).isEqualTo(303);
-        assertThat(server.signoff.review().reviews().view(server.ref()).history()).extracting(x -> x.revision().state())
+        assertThat(server.office.review().reviews().view(server.ref()).history()).extracting(x -> x.revision().state())
                 .endsWith(SheetState.SUPERSEDED, SheetState.PREPARING);
-        assertThat(server.signoff.review().audit().page(1000, 0)).anySatisfy(e -> {
+        assertThat(server.office.review().audit().page(1000, 0)).anySatisfy(e -> {
             assertThat(e.action()).isEqualTo("supersede");
             assertThat(e.actorUsername()).isEqualTo("admin");
         });
     }
 
     private static void issue(Client eng, Client chk) {
-        if (server.signoff.review().reviews().view(server.ref()).current().revision().state() == SheetState.ISSUED) return;
+        if (server.office.review().reviews().view(server.ref()).current().revision().state() == SheetState.ISSUED) return;
         String sheet = server.sheetPath();
         String html = eng.get(sheet).body();
         assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);

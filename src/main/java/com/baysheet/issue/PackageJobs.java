@@ -1,10 +1,9 @@
-package com.baysheet.web.review;
+package com.baysheet.issue;
 
 import com.baysheet.framing.model.Limits;
 import com.baysheet.sheet.CalcPackage;
 import com.baysheet.sheet.PackageRenderer;
 import com.baysheet.sheet.StreamedPdf;
-import com.baysheet.web.TooBusy;
 
 import java.io.IOException;
 import java.io.OutputStream;
@@ -23,19 +22,19 @@ import java.util.concurrent.Executors;
  * follows the progress and downloads the file when it is done, and other users' pages are not held up.
  * The newest {@link #KEPT} jobs are kept; older files are deleted.
  */
-final class PackageJobs {
+public final class PackageJobs {
     static final int KEPT = 20;
 
     /**
-     * A job as the browser sees it. {@code sha256} and {@code file} are set when it is done; {@code fileName} is
+     * A package being rendered. {@code sha256} and {@code file} are set when it is done; {@code fileName} is
      * the download's, {@code <job>-<package>-checking-copy.pdf}.
      */
-    static final class Job {
-        final String id, title, fileName;
-        final long project;
-        volatile int done, total;
-        volatile String sha256, error;
-        volatile Path file;
+    public static final class Job {
+        private final String id, title, fileName;
+        private final long project;
+        private volatile int done, total;
+        private volatile String sha256, error;
+        private volatile Path file;
 
         Job(String id, String title, String fileName, long project) {
             this.id = id;
@@ -44,10 +43,21 @@ final class PackageJobs {
             this.project = project;
         }
 
+        public String id() { return id; }
+
+        public long project() { return project; }
+
+        public String fileName() { return fileName; }
+
+        public String sha256() { return sha256; }
+
+        /** The rendered file, once it is done. */
+        public Optional<Path> file() { return Optional.ofNullable(file); }
+
         boolean finished() { return file != null || error != null; }
 
         /** What the progress page shows, read once so the page is consistent. */
-        View view() { return new View(id, title, done, total, sha256, error, file != null, finished()); }
+        public View view() { return new View(id, title, done, total, sha256, error, file != null, finished()); }
     }
 
     /** A job's state for the template. */

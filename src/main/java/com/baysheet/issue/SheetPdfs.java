@@ -1,4 +1,4 @@
-package com.baysheet.web.review;
+package com.baysheet.issue;
 
 import com.baysheet.review.MarkupNote;
 import com.baysheet.review.SheetRevision;
@@ -22,12 +22,12 @@ import java.util.List;
 final class SheetPdfs {
     private SheetPdfs() {}
 
-    static RenderedPdf issued(Firm firm, SheetContext.OfMember s, SheetRevision approved, LocalDate today) {
+    static RenderedPdf issued(Firm firm, SheetSubject.OfMember s, SheetRevision approved, LocalDate today) {
         SheetHeader h = TitleBlocks.issuing(firm, s.computed().project().info(), s.member().name(), approved, today);
         return SheetRenderer.issued(FramingSheets.member(h, s.computed().derived(), s.member().id()));
     }
 
-    static RenderedPdf checking(Firm firm, SheetContext.OfMember s, SheetRevision r, List<MarkupNote> markups, LocalDate today) {
+    static RenderedPdf checking(Firm firm, SheetSubject.OfMember s, SheetRevision r, List<MarkupNote> markups, LocalDate today) {
         SheetHeader h = TitleBlocks.underCheck(firm, s.computed().project().info(), s.member().name(), r, s.current(), today);
         MemberSheet sheet = FramingSheets.member(h, s.computed().derived(), s.member().id());
         return SheetRenderer.checking(sheet, markups.stream().map(SheetPdfs::markup).toList());

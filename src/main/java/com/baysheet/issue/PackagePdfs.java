@@ -1,4 +1,4 @@
-package com.baysheet.web.review;
+package com.baysheet.issue;
 
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.review.RevisionComparison;
@@ -32,7 +32,7 @@ final class PackagePdfs {
     private PackagePdfs() {}
 
     /** @param latest the latest revision of every sheet of the project, for each member's own title block */
-    static byte[] issued(Firm firm, SheetContext.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
+    static byte[] issued(Firm firm, SheetSubject.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
         SheetRevision r = v.current().revision();
         var info = s.computed().project().info();
         SheetHeader h = TitleBlocks.issuing(firm, info, s.name(), r, today);
@@ -43,7 +43,7 @@ final class PackagePdfs {
     }
 
     /** The checking copy of a package: the package's revision under way, not issued; its earlier issues logged. */
-    static CalcPackage checking(Firm firm, SheetContext.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
+    static CalcPackage checking(Firm firm, SheetSubject.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
         var info = s.computed().project().info();
         SheetHeader h = TitleBlocks.underCheck(firm, info, s.name(), v.current().revision(), s.current(), today);
         List<Revision> log = new ArrayList<>();
@@ -51,7 +51,7 @@ final class PackagePdfs {
         return of(s, h, log, TitleBlocks.members(firm, info, latest, today));
     }
 
-    private static CalcPackage of(SheetContext.OfPackage s, SheetHeader h, List<Revision> log, Function<DerivedMember, SheetHeader> members) {
+    private static CalcPackage of(SheetSubject.OfPackage s, SheetHeader h, List<Revision> log, Function<DerivedMember, SheetHeader> members) {
         return s.scope().isProject() ? FramingSheets.project(h, s.computed().derived(), log, members)
                 : FramingSheets.level(h, s.computed().derived(), s.scope().level(), log, members);
     }

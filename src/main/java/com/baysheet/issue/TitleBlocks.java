@@ -1,4 +1,4 @@
-package com.baysheet.web.review;
+package com.baysheet.issue;
 
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.framing.DerivedMember;

@@ -1,4 +1,4 @@
-package com.baysheet.web;
+package com.baysheet.issue;
 
 /**
  * A request the server will not queue now because a limit of shared work is reached (the package queue):

@@ -1,0 +1,75 @@
+package com.baysheet.issue;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.review.Caller;
+import com.baysheet.review.PackageScope;
+import com.baysheet.review.ReviewAction;
+import com.baysheet.review.ReviewRefused;
+import com.baysheet.review.SheetState;
+import com.baysheet.store.Results;
+import com.baysheet.store.review.ConcurrentChange;
+import com.baysheet.store.review.ReviewStore;
+import com.baysheet.store.review.Reviews;
+import com.baysheet.store.review.StoredRevision;
+
+import java.time.Clock;
+import java.time.LocalDate;
+import java.util.Optional;
+
+/**
+ * Issuing and printing sheets: render the issued copy of an approved revision and issue it (the review rules
+ * check everything again in the same write), print a member's checking copy, and start a package's checking
+ * copy off the request threads. Dates come from the clock the office runs on.
+ */
+public final class Issuing {
+    private final ReviewStore review;
+    private final Clock clock;
+    private final PackageJobs jobs = new PackageJobs();
+
+    public Issuing(ReviewStore review, Clock clock) {
+        this.review = review;
+        this.clock = clock;
+    }
+
+    /** Renders the approved revision's issued copy and issues it, at the version the page showed. */
+    public void issue(SheetSubject s, long version, Caller caller) {
+        Reviews.SheetView v = reviews().view(s.ref());
+        StoredRevision cur = v.current();
+        // checked before rendering the PDF; the review rules check everything again when issuing
+        if (cur.version() != version) throw new ConcurrentChange("The sheet " + s.name());
+        if (cur.revision().state() != SheetState.APPROVED)
+            throw new ReviewRefused.WrongState(ReviewAction.ISSUE, cur.revision().state(), "only an approved sheet is issued");
+        LocalDate today = today();
+        byte[] pdf = s instanceof SheetSubject.OfMember m ? SheetPdfs.issued(review.firm().get(), m, cur.revision(), today).bytes()
+                : PackagePdfs.issued(review.firm().get(), (SheetSubject.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today);
+        reviews().issue(s.ref(), version, caller, today, s.current(), pdf);
+    }
+
+    /** A member's checking copy as it is now: the revision under way, its markups listed, dated today. */
+    public byte[] checkingCopy(SheetSubject.OfMember s) {
+        Reviews.SheetView v = reviews().view(s.ref());
+        return SheetPdfs.checking(review.firm().get(), s, v.current().revision(), v.markups(), today()).bytes();
+    }
+
+    /**
+     * Starts a package's checking copy: the package's own revision under way, and each member's own state, as
+     * they are now; refused when the scope has no members or the queue is full.
+     */
+    public PackageJobs.Job startPackage(Results.Computed c, PackageScope scope) {
+        if (scope.members(c.derived()).isEmpty())
+            throw new InputError("level", scope.isProject() ? "project" : scope.level(), "has no members in this model");
+        SheetSubject.OfPackage s = SheetSubject.pkg(c, scope);
+        long project = c.project().id();
+        return jobs.start(project, PackagePdfs.checking(review.firm().get(), s, reviews().view(s.ref()),
+                reviews().latestOf(project), today()));
+    }
+
+    /** A package job of this project, if it is one of the jobs still kept. */
+    public Optional<PackageJobs.Job> job(long project, String id) {
+        return jobs.find(id).filter(j -> j.project() == project);
+    }
+
+    public LocalDate today() { return LocalDate.now(clock); }
+
+    private Reviews reviews() { return review.reviews(); }
+}

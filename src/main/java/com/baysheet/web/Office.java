@@ -1,0 +1,137 @@
+package com.baysheet.web;
+
+import com.baysheet.auth.LoginRefused;
+import com.baysheet.auth.SetupCode;
+import com.baysheet.issue.Issuing;
+import com.baysheet.review.ReviewRefused;
+import com.baysheet.store.Sql;
+import com.baysheet.store.Store;
+import com.baysheet.store.auth.Accounts;
+import com.baysheet.store.auth.Logins;
+import com.baysheet.store.review.ConcurrentChange;
+import com.baysheet.store.review.ReviewStore;
+import com.baysheet.web.auth.Access;
+import com.baysheet.web.auth.AccessRefused;
+import com.baysheet.web.auth.AdminRoutes;
+import com.baysheet.web.auth.Admit;
+import com.baysheet.web.auth.AuthRoutes;
+import com.baysheet.web.auth.CsrfForms;
+import com.baysheet.web.review.IssuedRoutes;
+import com.baysheet.web.review.MarkupRoutes;
+import com.baysheet.web.review.PackageRoutes;
+import com.baysheet.web.review.Refusals;
+import com.baysheet.web.review.ReviewRoutes;
+import io.javalin.Javalin;
+import io.javalin.config.RoutesConfig;
+import io.javalin.config.SizeUnit;
+import io.javalin.http.staticfiles.Location;
+
+import javax.sql.DataSource;
+import java.time.Clock;
+import java.util.Optional;
+import java.util.Set;
+
+/**
+ * The whole office server, wired in this one place: the store, the accounts, the review store and the issuing
+ * service over one database and one clock, and the server that puts the routes of every feature behind one
+ * access check. Each route declares who it admits ({@link Admit}) where it is declared; the check before every
+ * matched route ({@code beforeMatched}, {@link Access#check}) enforces it. Tests build the same office with a
+ * cheap password hash, their own clock and a known set-up code.
+ *
+ * @param setupCode what the first-start set-up asks for (printed in the console by the server)
+ * @param ds        what {@code /health} asks whether the database answers
+ */
+public record Office(Store store, Accounts accounts, ReviewStore review, Issuing issuing, SetupCode setupCode, DataSource ds) {
+
+    /** The office over this database: the store's clock for every stamp and date, the given login policy. */
+    public static Office on(Store store, DataSource ds, Clock clock, Logins.Policy policy, SetupCode setupCode) {
+        Sql sql = new Sql(ds, clock);
+        ReviewStore review = ReviewStore.on(sql);
+        return new Office(store, Accounts.on(sql, review.audit(), policy), review, new Issuing(review, clock), setupCode, ds);
+    }
+
+    /** The office's production wiring: bcrypt at full strength, working-day sessions, the office throttle. */
+    public static Office on(Store store, DataSource ds, Clock clock) {
+        return on(store, ds, clock, Logins.Policy.office(clock), SetupCode.random());
+    }
+
+    /**
+     * A configured server, not yet started ({@code start(host, port)}, or {@code start(0)} for a random port),
+     * believing X-Forwarded-For only from {@code trustedProxy} (null: from nobody) so that the address the
+     * throttle counts and the audit trail records cannot be chosen by the client; {@code behindTls} when
+     * browsers reach it through an HTTPS proxy: cookies Secure and Strict-Transport-Security ({@link Headers}).
+     */
+    public Javalin server(String trustedProxy, boolean behindTls) {
+        Access access = new Access(accounts.logins(), () -> review.firm().get());
+        return Javalin.create(cfg -> {
+            cfg.startup.showJavalinBanner = false;
+            cfg.contextResolver.ip = ctx -> ClientAddress.of(ctx.req().getRemoteAddr(), ctx.header("X-Forwarded-For"), trustedProxy);
+            // request-size limits: a form or JSON body is a few kilobytes (a 413 past 1 MB, before it is read
+            // whole); the only upload is a PDF to verify, and no sheet or package comes near 50 MB
+            cfg.http.maxRequestSize = 1_000_000L;
+            cfg.jetty.multipartConfig.maxFileSize(50, SizeUnit.MB);
+            cfg.jetty.multipartConfig.maxTotalRequestSize(51, SizeUnit.MB);
+            cfg.fileRenderer(new Views());
+            cfg.staticFiles.add(sf -> {
+                sf.hostedPath = "/static";
+                sf.directory = "/static";
+                sf.location = Location.CLASSPATH;
+                sf.roles = Set.of(Admit.OPEN);
+            });
+            filters(cfg.routes, behindTls);
+            cfg.routes.beforeMatched(access::check);
+            cfg.routes.after(Headers::charset);
+            cfg.routes.after(CsrfForms::after);
+            exceptions(cfg.routes, access);
+            routes(cfg.routes);
+        });
+    }
+
+    /** Before-filters of every request, matched or not (the access check runs after them, on matched routes). */
+    private static void filters(RoutesConfig r, boolean behindTls) {
+        // first: a refusal halts the request with a redirect that needs the headers too
+        r.before(ctx -> Headers.apply(ctx, behindTls));
+        // pages show live project state: never let a browser or proxy reuse an old copy
+        r.before(ctx -> {
+            if (!ctx.path().startsWith("/static/")) ctx.header("Cache-Control", "no-store");
+        });
+        r.before(Saved::onRequest);
+    }
+
+    private static void exceptions(RoutesConfig r, Access access) {
+        r.exception(AccessRefused.class, Refusals::access);
+        r.exception(LoginRefused.class, Refusals::login);
+        r.exception(ReviewRefused.class, Refusals::review);
+        r.exception(ConcurrentChange.class, Refusals::conflict);
+        Errors.install(r);
+        // no route matched (Javalin's own 404): answered as an office page would be, log in first, then the
+        // same page as an unknown id; under /static/ (files anyone may fetch) a plain not found
+        r.error(404, ctx -> {
+            if (Errors.answered(ctx)) return;
+            Optional<AccessRefused> refused = ctx.path().startsWith("/static/") ? Optional.empty() : access.unmatched(ctx);
+            if (refused.isPresent()) Refusals.access(refused.get(), ctx);
+            else Errors.notFound(ctx, "no page at " + ctx.path());
+        });
+    }
+
+    /** The routes of every feature; each declares its roles beside its path. */
+    private void routes(RoutesConfig r) {
+        new Health(ds).install(r);
+        new AuthRoutes(accounts.logins(), setupCode).install(r);
+        new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
+        new ProjectRoutes(store).install(r);
+        new LevelRoutes(store).install(r);
+        new BayRoutes(store).install(r);
+        new LineLoadRoutes(store).install(r);
+        new PlanRoutes(store).install(r);
+        new MemberRoutes(store).install(r);
+        new TakeDownRoutes(store).install(r);
+        new OccupancyRoutes(store).install(r);
+        new ApiRoutes(store).install(r);
+        new ApiResultRoutes(store).install(r);
+        new ReviewRoutes(store, review, issuing).install(r);
+        new MarkupRoutes(store, review.markups()).install(r);
+        new IssuedRoutes(store, review, issuing).install(r);
+        new PackageRoutes(store, issuing).install(r);
+    }
+}
