@@ -23,7 +23,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-import static com.baysheet.web.review.ReviewRoutes.SHEET;
+import static com.baysheet.web.review.ReviewRoutes.MARK;
 import static com.baysheet.web.review.ReviewRoutes.SHEETS;
 
 /** PDFs (the frozen issued copy, a checking copy), revision comparison, and verifying an uploaded PDF. */
@@ -43,7 +43,7 @@ public final class IssuedRoutes {
 
     public void install(RoutesConfig r) {
         r.get("/review/revisions/{revision}/issued.pdf", this::issuedPdf);
-        r.get(SHEET + "/checking.pdf", this::checkingPdf);
+        r.get(MARK + "/checking.pdf", this::checkingPdf);
         for (String base : SHEETS) r.get(base + "/compare", this::compare);
         r.get("/verify", ctx -> ctx.render("review/verify", new HashMap<>()));
         r.post("/verify", this::verify);
@@ -57,9 +57,9 @@ public final class IssuedRoutes {
     }
 
     void checkingPdf(Context ctx) {
-        SheetContext.OfMember s = SheetContext.member(store, ctx);
+        SheetContext.OfMark s = SheetContext.mark(store, ctx);
         Reviews.SheetView v = review.reviews().view(s.ref());
-        byte[] pdf = SheetPdfs.checking(review.firm().get(), s, v.current().revision(), v.markups(), LocalDate.now(clock)).bytes();
+        byte[] pdf = SheetPdfs.checking(review.firm().get(), s, v.current(), v.history(), v.markups(), LocalDate.now(clock)).bytes();
         pdf(ctx, pdf, s.computed().project().info().jobNumber() + "-" + s.name() + "-checking-copy.pdf");
     }
 

@@ -1,6 +1,7 @@
 package com.baysheet.web.review;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.review.MarkSheets;
 import com.baysheet.review.PackageManifest;
 import com.baysheet.review.PackageScope;
 import com.baysheet.review.SheetRef;
@@ -65,7 +66,8 @@ public final class PackageRoutes {
         PackageScope ps = scope.equals("project") ? PackageScope.PROJECT : PackageScope.ofLevel(scope);
         if (ps.members(c.derived()).isEmpty()) throw new InputError("level", scope, "has no members in this model");
         SheetRef ref = new SheetRef(project, ps.subject());
-        SheetContext.OfPackage s = new SheetContext.OfPackage(c, ps, ref, PackageManifest.of(ps, c.derived()));
+        MarkSheets marks = store.marks().of(project, c.derived());
+        SheetContext.OfPackage s = new SheetContext.OfPackage(c, ps, ref, marks, PackageManifest.of(ps, c.derived(), marks));
         CalcPackage pkg = PackagePdfs.checking(review.firm().get(), s, review.reviews().view(ref),
                 review.reviews().latestOf(project), LocalDate.now(clock));
         PackageJobs.Job job = jobs.start(project, pkg);

@@ -82,6 +82,7 @@ public final class Signoff {
         new AuthRoutes(accounts.logins(), setupCode).install(r);
         new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
         new ReviewRoutes(store, review, clock).install(r);
+        new MarkRoutes(store).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
         new IssuedRoutes(store, review, clock).install(r);
         new PackageRoutes(store, review, clock).install(r);

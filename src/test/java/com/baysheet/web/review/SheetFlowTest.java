@@ -59,7 +59,7 @@ class SheetFlowTest {
         assertThat(chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
         html = chk.get(sheet).body();
         assertThat(state(html)).isEqualTo("approved");
-        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")))).statusCode()).isEqualTo(303);
+        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")), Map.entry("description", "First issue"))).statusCode()).isEqualTo(303);
 
         html = eng.get(sheet).body();
         assertThat(state(html)).isEqualTo("issued");
@@ -78,8 +78,11 @@ class SheetFlowTest {
 
         server.heavierFloor(10);
         html = eng.get(sheet).body();
-        assertThat(state(html)).isEqualTo("being prepared");
-        assertThat(html).contains("superseded");
+        assertThat(state(html)).as("an issued revision stays current until the next is issued").isEqualTo("issued");
+        assertThat(html).contains("id=\"changed-since-issue\"");
+        assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
+        html = eng.get(sheet).body();
+        assertThat(state(html)).as("the submission opens the next revision").isEqualTo("submitted for check");
         String compare = eng.get(sheet + "/compare?from=1&to=2").body();
         assertThat(compare).contains("changed-inputs").doesNotContain("No input or result differs");
         // the dead load shows in the steps, not the record's input table, so the results are what changed
@@ -87,7 +90,7 @@ class SheetFlowTest {
 
         Client admin = server.as("admin", Role.ADMINISTRATOR);
         String audit = admin.get("/admin/audit").body();
-        for (String action : List.of("submit", "markup", "return", "reply", "resubmit", "resolve", "approve", "issue", "supersede"))
+        for (String action : List.of("submit", "markup", "return", "reply", "resubmit", "resolve", "approve", "issue"))
             assertThat(audit).contains("<td>" + action + "</td>");
         HttpResponse<String> csv = admin.get("/admin/audit.csv");
         assertThat(csv.headers().firstValue("Content-Type")).hasValueSatisfying(t -> assertThat(t).startsWith("text/csv"));
