@@ -38,6 +38,10 @@ class DemoPackagePagesTest {
         int before = pages(perMember), after = pages(perMark);
         System.out.printf("demo project package: %d members, %d sheets, %d pages per member; %d marks, %d sheets, %d pages per mark%n",
                 d.members().size(), perMember.sheets().size(), before, marks.all().size(), perMark.sheets().size(), after);
+        for (String prefix : List.of("B", "GB", "G", "C"))
+            System.out.printf("  %s: %d marks for %d members%n", prefix,
+                    marks.all().stream().filter(m -> m.mark().prefix().equals(prefix)).count(),
+                    marks.all().stream().filter(m -> m.mark().prefix().equals(prefix)).mapToInt(m -> m.group().members().size()).sum());
         assertThat(perMark.sheets()).hasSize(marks.all().size()).hasSizeLessThan(perMember.sheets().size());
         assertThat(marks.all().stream().mapToInt(m -> m.group().members().size()).sum()).isEqualTo(d.members().size());
         assertThat(after).isLessThan(before);
