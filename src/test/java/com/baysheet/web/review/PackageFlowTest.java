@@ -6,7 +6,6 @@ import com.baysheet.auth.Role;
 import com.baysheet.auth.Tokens;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.model.Bay;
-import com.baysheet.review.CalcFingerprint;
 import com.baysheet.review.PackageScope;
 import com.baysheet.store.BayAssignment;
 import com.baysheet.store.Cell;
@@ -21,7 +20,6 @@ import org.junit.jupiter.api.extension.RegisterExtension;
 import java.io.IOException;
 import java.net.http.HttpResponse;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.regex.Matcher;
@@ -139,13 +137,6 @@ class PackageFlowTest {
         for (String action : List.of("submit", "markup", "return", "reply", "resubmit", "resolve", "approve", "issue"))
             assertThat(audit).contains("<td>" + action + "</td>");
         assertThat(audit).contains(scope.subject()).contains("changed since issue");
-    }
-
-    private static Map<String, String> fingerprints(String level) {
-        Map<String, String> out = new HashMap<>();
-        for (DerivedMember m : server.store.results().of(server.project()).derived().onLevel(level))
-            out.put(m.id(), CalcFingerprint.of(m.result().record()));
-        return out;
     }
 
     /** The labels in the first column of a comparison table. */
