@@ -17,7 +17,7 @@ import java.util.Map;
  * Title blocks that state what happened to the calculation printed, read from its sheet's latest revision:
  * a preparer only if the calculation printed is the one submitted, a checker only if that revision was
  * approved, an issue only if it was issued and still stands. A revision whose calculation has changed since
- * (not yet marked superseded) vouches for nothing on the page.
+ * (changed since issue) vouches for nothing on the page.
  */
 final class TitleBlocks {
     private TitleBlocks() {}
