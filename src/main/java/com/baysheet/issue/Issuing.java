@@ -2,9 +2,11 @@ package com.baysheet.issue;
 
 import com.baysheet.engine.InputError;
 import com.baysheet.review.Caller;
+import com.baysheet.review.MarkSheets;
 import com.baysheet.review.PackageScope;
 import com.baysheet.review.ReviewAction;
 import com.baysheet.review.ReviewRefused;
+import com.baysheet.review.SheetRevision;
 import com.baysheet.review.SheetState;
 import com.baysheet.store.Results;
 import com.baysheet.store.review.ConcurrentChange;
@@ -31,34 +33,38 @@ public final class Issuing {
         this.clock = clock;
     }
 
-    /** Renders the approved revision's issued copy and issues it, at the version the page showed. */
-    public void issue(SheetSubject s, long version, Caller caller) {
+    /**
+     * Renders the approved revision's issued copy and issues it, at the version the page showed, with the
+     * revision's description as the revision block prints it.
+     */
+    public void issue(SheetSubject s, long version, Caller caller, String description) {
         Reviews.SheetView v = reviews().view(s.ref());
         StoredRevision cur = v.current();
         // checked before rendering the PDF; the review rules check everything again when issuing
         if (cur.version() != version) throw new ConcurrentChange("The sheet " + s.name());
         if (cur.revision().state() != SheetState.APPROVED)
             throw new ReviewRefused.WrongState(ReviewAction.ISSUE, cur.revision().state(), "only an approved sheet is issued");
+        String said = SheetRevision.description(description);
         LocalDate today = today();
-        byte[] pdf = s instanceof SheetSubject.OfMember m ? SheetPdfs.issued(review.firm().get(), m, cur.revision(), today).bytes()
-                : PackagePdfs.issued(review.firm().get(), (SheetSubject.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today);
-        reviews().issue(s.ref(), version, caller, today, s.current(), pdf);
+        byte[] pdf = s instanceof SheetSubject.OfMark m ? SheetPdfs.issued(review.firm().get(), m, cur, v.history(), today, said).bytes()
+                : PackagePdfs.issued(review.firm().get(), (SheetSubject.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today, said);
+        reviews().issue(s.ref(), version, caller, today, s.current(), pdf, said);
     }
 
-    /** A member's checking copy as it is now: the revision under way, its markups listed, dated today. */
-    public byte[] checkingCopy(SheetSubject.OfMember s) {
+    /** A mark sheet's checking copy as it is now: the revision under way, its earlier issues and markups, dated today. */
+    public byte[] checkingCopy(SheetSubject.OfMark s) {
         Reviews.SheetView v = reviews().view(s.ref());
-        return SheetPdfs.checking(review.firm().get(), s, v.current().revision(), v.markups(), today()).bytes();
+        return SheetPdfs.checking(review.firm().get(), s, v.current(), v.history(), v.markups(), today()).bytes();
     }
 
     /**
      * Starts a package's checking copy: the package's own revision under way, and each member's own state, as
      * they are now; refused when the scope has no members or the queue is full.
      */
-    public PackageJobs.Job startPackage(Results.Computed c, PackageScope scope) {
+    public PackageJobs.Job startPackage(Results.Computed c, MarkSheets marks, PackageScope scope) {
         if (scope.members(c.derived()).isEmpty())
             throw new InputError("level", scope.isProject() ? "project" : scope.level(), "has no members in this model");
-        SheetSubject.OfPackage s = SheetSubject.pkg(c, scope);
+        SheetSubject.OfPackage s = SheetSubject.pkg(c, marks, scope);
         long project = c.project().id();
         return jobs.start(project, PackagePdfs.checking(review.firm().get(), s, reviews().view(s.ref()),
                 reviews().latestOf(project), today()));

@@ -12,12 +12,13 @@ import com.baysheet.project.Firm;
 import com.baysheet.store.review.Reviews;
 import com.baysheet.store.review.StoredRevision;
 
-import com.baysheet.framing.DerivedMember;
 
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.function.Function;
+import java.util.HashMap;
+import java.util.Map;
+import com.baysheet.sheet.MemberSheet;
 
 /**
  * Packages rendered from the current derivation: the issued copy under the approved revision's title block
@@ -32,28 +33,37 @@ final class PackagePdfs {
     private PackagePdfs() {}
 
     /** @param latest the latest revision of every sheet of the project, for each member's own title block */
-    static byte[] issued(Firm firm, SheetSubject.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
+    static byte[] issued(Firm firm, SheetSubject.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today,
+                         String description) {
         SheetRevision r = v.current().revision();
         var info = s.computed().project().info();
-        SheetHeader h = TitleBlocks.issuing(firm, info, s.name(), r, today);
+        SheetHeader h = TitleBlocks.issuing(firm, info, s.name(), v.current(), today);
         List<Revision> log = new ArrayList<>();
         CalcRecord before = earlier(v.history(), r.number(), log);
-        log.add(line(r, today, before, s.current()));
-        return PackageRenderer.render(of(s, h, log, TitleBlocks.members(firm, info, latest, today))).bytes();
+        log.add(line(v.current(), r, today, before, s.current(), description));
+        return PackageRenderer.render(of(s, h, log, firm, latest, today)).bytes();
     }
 
     /** The checking copy of a package: the package's revision under way, not issued; its earlier issues logged. */
     static CalcPackage checking(Firm firm, SheetSubject.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
         var info = s.computed().project().info();
-        SheetHeader h = TitleBlocks.underCheck(firm, info, s.name(), v.current().revision(), s.current(), today);
+        SheetHeader h = TitleBlocks.underCheck(firm, info, s.name(), v.current(), s.current(), today);
         List<Revision> log = new ArrayList<>();
         earlier(v.history(), Integer.MAX_VALUE, log);
-        return of(s, h, log, TitleBlocks.members(firm, info, latest, today));
+        return of(s, h, log, firm, latest, today);
     }
 
-    private static CalcPackage of(SheetSubject.OfPackage s, SheetHeader h, List<Revision> log, Function<DerivedMember, SheetHeader> members) {
-        return s.scope().isProject() ? FramingSheets.project(h, s.computed().derived(), log, members)
-                : FramingSheets.level(h, s.computed().derived(), s.scope().level(), log, members);
+    /** The package of one sheet per mark in its scope, each under the mark sheet's own title block. */
+    private static CalcPackage of(SheetSubject.OfPackage s, SheetHeader h, List<Revision> log, Firm firm, List<StoredRevision> latest,
+                                  LocalDate today) {
+        Map<String, StoredRevision> bySubject = new HashMap<>();
+        for (StoredRevision x : latest) bySubject.put(x.sheet().subject(), x);
+        var d = s.computed().derived();
+        long project = s.ref().projectId();
+        List<MemberSheet> sheets = s.scope().marks(d, s.marks()).stream()
+                .map(m -> FramingSheets.typical(TitleBlocks.mark(firm, s.computed().project().info(), bySubject, m, project, today), d, m.group(), m.text()))
+                .toList();
+        return s.scope().isProject() ? FramingSheets.projectOf(h, d, log, sheets) : FramingSheets.levelOf(h, d, s.scope().level(), log, sheets);
     }
 
     /** Adds a line for each issued revision numbered below {@code below}; returns the last one's record (null if none). */
@@ -63,15 +73,16 @@ final class PackagePdfs {
             SheetRevision x = h.revision();
             if (x.issue() == null || x.number() >= below) continue;
             CalcRecord rec = h.record().orElseThrow();
-            out.add(line(x, x.issue().on(), before, rec));
+            out.add(line(h, x, x.issue().on(), before, rec, x.issue().description()));
             before = rec;
         }
         return before;
     }
 
-    private static Revision line(SheetRevision x, LocalDate on, CalcRecord before, CalcRecord after) {
-        return new Revision(String.valueOf(x.number()), on, describe(before, after),
-                x.preparer().initials() + " / " + x.approval().initials());
+    /** A revision log line: what the issuer said it changed (revisions issued before it was asked: the sheets that changed). */
+    static Revision line(StoredRevision h, SheetRevision x, LocalDate on, CalcRecord before, CalcRecord after, String said) {
+        String what = said == null || said.isBlank() ? describe(before, after) : said;
+        return new Revision(h.label(), on, what, x.preparer().initials() + " / " + x.approval().initials());
     }
 
     /** "First issue", or the sheets whose calculation changed since the issue before. */

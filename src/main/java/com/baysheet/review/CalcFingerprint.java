@@ -9,11 +9,11 @@ import com.baysheet.engine.record.RecordJson;
  * substituted values, results, notes, load diagram) as the engine's deterministic JSON. The record's input
  * table does not list every load (a bay's dead load shows only in the steps), so the inputs alone would miss
  * changes; two records with one fingerprint print the same sheet. An issued sheet whose member's
- * fingerprint changes is superseded; a submitted one must be resubmitted.
+ * fingerprint changes is changed since issue; a submitted one must be resubmitted.
  *
  * <p>The JSON hashed is the record's first form ({@link FirstRecordForm}: each number with the unit it is shown
  * in, without the name of its base unit), so a sheet issued before records named their base units keeps its
- * fingerprint and is not superseded by a change of format alone.
+ * fingerprint and is not flagged by a change of format alone.
  */
 public final class CalcFingerprint {
     private CalcFingerprint() {}

@@ -14,28 +14,30 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * What a package is checked and issued as: a calculation record whose inputs are the package's member
- * sheets and column take-downs, one entry each (key the member's id, or "takedown-" and the take-down's id;
- * shown the {@link CalcFingerprint} of its record), and whose results are each member's governing values.
- * So a package's fingerprint changes exactly when one of its sheets would print differently, supersession
- * works as for a member, and comparing two revisions names the members that changed.
+ * What a package is checked and issued as: a calculation record whose inputs are the package's mark
+ * sheets (one per typical member) and column take-downs, one entry each (key "mark-" and the mark, or "takedown-"
+ * and the take-down's id; shown the {@link CalcFingerprint} of its record), and whose results are each mark's
+ * governing values.
+ * So a package's fingerprint changes exactly when one of its sheets would print differently, "changed since
+ * issue" works as for a mark sheet, and comparing two revisions names the members that changed.
  */
 public final class PackageManifest {
     public static final String TAKE_DOWN_PREFIX = "takedown-";
 
     private PackageManifest() {}
 
-    public static CalcRecord of(PackageScope scope, Derived d) {
+    public static CalcRecord of(PackageScope scope, Derived d, MarkSheets marks) {
         List<DerivedMember> members = scope.members(d);
         if (members.isEmpty()) throw new InputError("package", scope.title(), "has no members in this model");
         List<Entry> inputs = new ArrayList<>();
         List<Entry> results = new ArrayList<>();
-        for (DerivedMember m : members) {
-            CalcRecord r = m.result().record();
-            inputs.add(Entry.unitless(m.id(), label(scope, m), 0, CalcFingerprint.of(r)));
-            for (String key : r.governing()) {
-                Entry e = r.entry(key);
-                results.add(new Entry(m.id() + "." + key, label(scope, m) + ": " + e.label(), e.value(), e.unit(), e.shown(), e.shownUnit()));
+        for (MarkSheets.MarkSheet s : scope.marks(d, marks)) {
+            CalcRecord r = s.record();
+            String key = s.stored() ? s.ref(0).subject() : MarkSheets.PREFIX + "new-" + s.text();
+            inputs.add(Entry.unitless(key, "Mark " + s.text(), 0, CalcFingerprint.of(r)));
+            for (String g : r.governing()) {
+                Entry e = r.entry(g);
+                results.add(new Entry(key + "." + g, s.text() + ": " + e.label(), e.value(), e.unit(), e.shown(), e.shownUnit()));
             }
         }
         for (TakeDown t : scope.takeDowns(d))
@@ -50,9 +52,5 @@ public final class PackageManifest {
     /** Whether a manifest input is a member sheet (rather than a column take-down). */
     public static boolean isMember(Entry input) {
         return !input.key().startsWith(TAKE_DOWN_PREFIX);
-    }
-
-    private static String label(PackageScope scope, DerivedMember m) {
-        return scope.isProject() ? m.name() + ", " + m.level() : m.name();
     }
 }

@@ -39,6 +39,13 @@ public record PackageScope(String level) {
 
     public String subject() { return SheetRef.PACKAGE_PREFIX + key(); }
 
+    /** The mark sheets of the package: every mark with a location in its scope, in reading order. */
+    public List<MarkSheets.MarkSheet> marks(Derived d, MarkSheets marks) {
+        java.util.Set<String> in = new java.util.HashSet<>();
+        for (DerivedMember m : members(d)) in.add(m.id());
+        return marks.all().stream().filter(s -> s.group().memberIds().stream().anyMatch(in::contains)).toList();
+    }
+
     /** The project's package, then one per level that has members, top down as derived. */
     public static List<PackageScope> all(Derived d) {
         List<PackageScope> out = new ArrayList<>();

@@ -13,9 +13,12 @@ import static com.baysheet.review.SheetState.*;
 /**
  * One revision of a member's calculation sheet and the rules that move it along:
  * being prepared → submitted for check → (returned with markups → resubmitted)* → approved → issued →
- * superseded. Each step returns a new value or throws a {@link ReviewRefused} saying why not.
+ * superseded. Each step returns a new value or throws a {@link ReviewRefused} saying why not. As on drawings,
+ * an issued revision stays current until the next one is issued: a change to the calculation makes it "changed
+ * since issue" ({@link #outdatedBy}), the next revision opens when it is submitted ({@link #reopen}), and the
+ * store marks the earlier one superseded when the next is issued.
  *
- * @param number      1 for the first revision; the next opens when an issued one is superseded
+ * @param number      1 for the first revision (which a mark sheet prints as revision 0)
  * @param preparer    null until first submitted
  * @param fingerprint the member's calculation as submitted ({@link CalcFingerprint}; stored as inputs_sha256); null until submitted
  * @param approval    null until approved
@@ -27,7 +30,11 @@ public record SheetRevision(int number, SheetState state, Preparer preparer, Str
 
     public record Approval(long checkerId, String initials, LocalDate on) {}
 
-    public record Issue(long issuerId, LocalDate on, String pdfSha256) {}
+    /** @param description what the revision changed, as the revision block prints it; null on revisions issued before it was asked */
+    public record Issue(long issuerId, LocalDate on, String pdfSha256, String description) {}
+
+    /** The longest description a revision block prints. */
+    public static final int MAX_DESCRIPTION = 200;
 
     public SheetRevision {
         if (number < 1) throw new IllegalArgumentException("number: revisions count from 1 (got " + number + ")");
@@ -76,33 +83,46 @@ public record SheetRevision(int number, SheetState state, Preparer preparer, Str
     }
 
     /** Freezes the approved sheet: from here on its PDF, whose SHA-256 is given, is the issued copy. */
-    public SheetRevision issue(Actor a, LocalDate on, String pdfSha256, String currentInputs) {
+    public SheetRevision issue(Actor a, LocalDate on, String pdfSha256, String currentInputs, String description) {
+        String said = description(description);
         if (!a.role().mayCheck()) throw new NotPermitted(ReviewAction.ISSUE, "a checker issues approved sheets");
         if (state != APPROVED) throw new WrongState(ReviewAction.ISSUE, state, "only an approved sheet is issued");
         if (!fingerprint.equals(currentInputs)) throw new InputsChanged(ReviewAction.ISSUE);
         if (pdfSha256 == null || !pdfSha256.matches("[0-9a-f]{64}"))
             throw new IllegalArgumentException("pdfSha256: 64 lower-case hex digits (got " + pdfSha256 + ")");
         if (on.isBefore(approval.on())) throw new IllegalArgumentException("on: issue " + on + " before approval " + approval.on());
-        return new SheetRevision(number, ISSUED, preparer, fingerprint, approval, new Issue(a.userId(), on, pdfSha256));
+        return new SheetRevision(number, ISSUED, preparer, fingerprint, approval, new Issue(a.userId(), on, pdfSha256, said));
     }
 
-    /** Whether the member's current inputs differ from those this issued revision was issued with. */
+    /** A revision's description as typed: required, one line, at most {@link #MAX_DESCRIPTION} characters. */
+    public static String description(String text) {
+        String t = text == null ? "" : text.strip().replaceAll("\\s+", " ");
+        if (t.isEmpty()) throw new com.baysheet.engine.InputError("description", "\"\"", "say what this revision changes (the revision block prints it)");
+        if (t.length() > MAX_DESCRIPTION)
+            throw new com.baysheet.engine.InputError("description", t.length() + " characters", "at most " + MAX_DESCRIPTION + " characters");
+        return t;
+    }
+
+    /** Whether this issued revision is changed since issue: the sheet's calculation now differs from the one issued. */
     public boolean outdatedBy(String currentInputs) {
         return state == ISSUED && !fingerprint.equals(currentInputs);
     }
 
-    /** Marks an issued revision superseded by a change of the member's inputs. */
-    public SheetRevision supersede(String currentInputs) {
-        if (state != ISSUED) throw new WrongState(ReviewAction.SUPERSEDE, state, "only an issued sheet is superseded");
+    /**
+     * The next revision, opened on an issued one whose calculation changed since issue; the issued one stays in
+     * force until this one is issued.
+     */
+    public SheetRevision reopen(String currentInputs) {
+        if (state != ISSUED) throw new WrongState(ReviewAction.SUBMIT, state, "a new revision opens on an issued sheet");
         if (!outdatedBy(currentInputs))
-            throw new WrongState(ReviewAction.SUPERSEDE, state, "its inputs are unchanged, so the issued sheet still stands");
-        return new SheetRevision(number, SUPERSEDED, preparer, fingerprint, approval, issue);
+            throw new WrongState(ReviewAction.SUBMIT, state, "its calculation is unchanged since issue, so the issued sheet still stands");
+        return opened(number + 1);
     }
 
-    /** The revision that follows a superseded one. */
-    public SheetRevision next() {
-        if (state != SUPERSEDED) throw new WrongState(ReviewAction.SUPERSEDE, state, "a new revision follows a superseded one");
-        return opened(number + 1);
+    /** This issued revision once the next one is issued (the store writes the same in the issuing transaction). */
+    public SheetRevision supersededByNext() {
+        if (state != ISSUED) throw new WrongState(ReviewAction.SUPERSEDE, state, "only an issued sheet is superseded, by the next issue");
+        return new SheetRevision(number, SUPERSEDED, preparer, fingerprint, approval, issue);
     }
 
     /** The rules shared by everything a checker does: the role, and the four-eyes rule. */

@@ -5,6 +5,7 @@ import com.baysheet.framing.Derived;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.MemberRole;
 import com.baysheet.framing.PlanRect;
+import com.baysheet.framing.TypicalGroup;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.Level;
@@ -62,6 +63,31 @@ public final class FramingSheets {
                                       Function<DerivedMember, SheetHeader> members) {
         return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
                 sheets(members, d, d.members()), d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions);
+    }
+
+    /**
+     * A typical member's sheet under its mark: the shared calculation with every location it covers, ordered in a
+     * package by its first location's level and its role. The key plan is drawn only for a mark of one location
+     * (a plan shows one member; the sheet lists the locations of the others).
+     */
+    public static MemberSheet typical(SheetHeader base, Derived d, TypicalGroup g, String mark) {
+        DerivedMember first = g.first();
+        return new MemberSheet(base.withSubject(mark), g.record(mark), g.members().size() == 1 ? keyPlan(d, first) : null,
+                first.level(), group(g.role()));
+    }
+
+    /** The package of one level made of the sheets given (its typical members'), with the take-downs at that level. */
+    public static CalcPackage levelOf(SheetHeader base, Derived d, String level, List<Revision> revisions, List<MemberSheet> sheets) {
+        List<TakeDownTable> downs = new ArrayList<>();
+        for (var t : d.takeDowns())
+            if (t.rows().stream().anyMatch(r -> r.level().equals(level))) downs.add(TakeDownTables.of(d, t));
+        return new CalcPackage(base.withSubject(level + " package"), level + " package", Criteria.of(d.building()), sheets, downs, revisions);
+    }
+
+    /** The whole project made of the sheets given (its typical members'), with every column take-down. */
+    public static CalcPackage projectOf(SheetHeader base, Derived d, List<Revision> revisions, List<MemberSheet> sheets) {
+        return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
+                sheets, d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions);
     }
 
     private static List<MemberSheet> sheets(Function<DerivedMember, SheetHeader> headers, Derived d, List<DerivedMember> members) {

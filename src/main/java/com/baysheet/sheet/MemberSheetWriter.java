@@ -47,7 +47,22 @@ final class MemberSheetWriter {
         if (!matrix.isEmpty()) pdf.add(matrix.table());
         if (!matrix.others.isEmpty()) pdf.add(new EntryTable(fonts, markups).of("Other results", matrix.others));
         new NotesBlock(pdf, r, markups).write();
+        if (!sheet.revisions().isEmpty()) pdf.add(revisionBlock());
         pdf.add(new ClosingBlock(fonts, markups.checking()).table(governing()));
+    }
+
+    /** The sheet's revision block, as drawings carry one: each issued revision with its date, description and initials. */
+    private PdfPTable revisionBlock() {
+        PdfPTable t = Cells.table(8, 14, 64, 14);
+        Cells.title(t, "Revisions", fonts);
+        for (String h : new String[]{"Rev", "Date", "Description", "By"}) t.addCell(Cells.head(h, fonts));
+        for (Revision x : sheet.revisions()) {
+            t.addCell(Cells.text(x.label(), fonts.body()));
+            t.addCell(Cells.text(x.date().toString(), fonts.body()));
+            t.addCell(Cells.text(x.description(), fonts.body()));
+            t.addCell(Cells.text(x.by(), fonts.body()));
+        }
+        return t;
     }
 
     private Paragraph intro() {

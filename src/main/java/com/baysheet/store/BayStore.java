@@ -42,7 +42,26 @@ public final class BayStore {
 
     /** Gives every selected cell the assignment's bay, replacing what was there. */
     public void assign(Editor who, long projectId, long version, long levelId, BayAssignment a) {
-        writes.change(who, c -> BayText.assigned(c, projectId, levelId, a), projectId, version, c -> {
+        writes.change(who, c -> BayText.assigned(c, projectId, levelId, a), projectId, version, assigning(projectId, levelId, a));
+    }
+
+    /** Leaves the selected cells unframed at this level (no bay at all, unlike an opening). */
+    public void clear(Editor who, long projectId, long version, long levelId, List<Cell> cells) {
+        writes.change(who, c -> BayText.cleared(c, projectId, levelId, cells), projectId, version, clearing(projectId, levelId, cells));
+    }
+
+    /** The issued sheets {@link #assign} would change, by name, found by trying it and saving nothing. */
+    public List<String> touchedByAssign(long projectId, long version, long levelId, BayAssignment a) {
+        return writes.touched(projectId, version, assigning(projectId, levelId, a));
+    }
+
+    /** The issued sheets {@link #clear} would change, by name, found by trying it and saving nothing. */
+    public List<String> touchedByClear(long projectId, long version, long levelId, List<Cell> cells) {
+        return writes.touched(projectId, version, clearing(projectId, levelId, cells));
+    }
+
+    private Sql.Work<Void> assigning(long projectId, long levelId, BayAssignment a) {
+        return c -> {
             Grid g = requireCells(c, projectId, levelId, a.cells());
             if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
                 throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
@@ -50,15 +69,14 @@ public final class BayStore {
             delete(c, levelId, a.cells(), g);
             insert(c, levelId, a, g);
             return null;
-        });
+        };
     }
 
-    /** Leaves the selected cells unframed at this level (no bay at all, unlike an opening). */
-    public void clear(Editor who, long projectId, long version, long levelId, List<Cell> cells) {
-        writes.change(who, c -> BayText.cleared(c, projectId, levelId, cells), projectId, version, c -> {
+    private Sql.Work<Void> clearing(long projectId, long levelId, List<Cell> cells) {
+        return c -> {
             delete(c, levelId, cells, requireCells(c, projectId, levelId, cells));
             return null;
-        });
+        };
     }
 
     /**

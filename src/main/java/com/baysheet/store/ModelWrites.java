@@ -8,7 +8,9 @@ import com.baysheet.project.Project;
 import com.baysheet.project.StoredLevel;
 import com.baysheet.review.AuditEvent;
 import com.baysheet.store.review.AuditTrail;
-import com.baysheet.store.review.Supersession;
+import com.baysheet.store.review.IssuedChanges;
+import com.baysheet.store.review.MarkBook;
+import com.baysheet.review.MarkSheets;
 
 import java.sql.Connection;
 import java.sql.SQLException;
@@ -20,8 +22,10 @@ import java.util.function.Function;
  * The one way a project changes: in one transaction, claim the next version (refusing a stale one), apply
  * the change, derive the changed building so that a model the derivation refuses (a bay outside the grid, a
  * cantilever on an interior edge) or one past its bounds ({@link Limits}) is rolled back with the error and
- * nothing is saved, supersede the issued sheets whose calculation the change alters, and append the audit
- * entry. The change, its supersessions and its entry commit together or not at all.
+ * nothing is saved, give the typical members their marks (never renumbering one), and append the audit entry,
+ * which names the issued sheets the change alters (they are changed since issue, never superseded by the
+ * write: an issued revision stands until the next is issued). The change, its marks and its entry commit
+ * together or not at all.
  */
 public final class ModelWrites {
     /** The audit trail's name for a change to a project's model or settings. */
@@ -58,14 +62,15 @@ public final class ModelWrites {
             Instant at = sql.now();
             long next = ProjectStore.touch(c, projectId, version, at);
             String said = action.run(c);
+            IssuedChanges.Snapshot before = issuedBefore(c, projectId);
             T result = work.run(c);
             Model m = BuildingMapper.load(c, projectId);
             Derived d = checked(m);
             done[0] = new Results.Computed(m, d);
-            List<String> superseded = Supersession.apply(c, projectId, d, by(who), at);
+            List<String> changed = issuedAfter(c, projectId, d, before, MarkBook.reconcile(c, projectId, d, at));
             append(c, who, subject(m.project()), said
                     + "; model version " + version + " → " + next
-                    + (superseded.isEmpty() ? "" : "; superseded: " + String.join(", ", superseded)), at);
+                    + (changed.isEmpty() ? "" : "; changed since issue: " + String.join(", ", changed)), at);
             return result;
         });
         // the building this change derived is the next page's: committed, it need not be derived again on read
@@ -74,9 +79,61 @@ public final class ModelWrites {
     }
 
     /**
-     * After a firm-wide change that enters every project's calculation (the firm's self weights), supersedes in
-     * each project the issued sheets whose calculation it altered, each project in its own transaction with its
-     * audit entry. A project whose model no longer derives is left as it is (its next change reports why).
+     * The issued sheets a change would alter (changed since issue), by name, without saving it: the change is made,
+     * derived and given its marks in a transaction that is then rolled back, so the answer comes from the same
+     * fingerprints a save compares. A stale version or a change the derivation refuses is reported as a save would.
+     */
+    public List<String> touched(long projectId, long version, Sql.Work<?> work) {
+        try {
+            sql.tx(c -> {
+                ProjectStore.touch(c, projectId, version, sql.now());
+                IssuedChanges.Snapshot before = issuedBefore(c, projectId);
+                work.run(c);
+                Model m = BuildingMapper.load(c, projectId);
+                Derived d = checked(m);
+                throw new TriedOnly(issuedAfter(c, projectId, d, before, MarkBook.reconcile(c, projectId, d, sql.now())));
+            });
+        } catch (TriedOnly t) {
+            return t.touched;
+        }
+        throw new IllegalStateException("a tried change always rolls back");
+    }
+
+    /**
+     * How the project's issued sheets print before the change (derived only where some sheet is issued). A model
+     * that no longer derives compares as empty, so every issued sheet counts as changed.
+     */
+    private IssuedChanges.Snapshot issuedBefore(Connection c, long projectId) throws SQLException {
+        if (!IssuedChanges.any(c, projectId)) return IssuedChanges.Snapshot.NONE;
+        Model m = BuildingMapper.load(c, projectId);
+        Derived d;
+        try {
+            d = m.building().levels().isEmpty() ? new Derived(m.building(), List.of(), List.of()) : derive.apply(m.building());
+        } catch (com.baysheet.engine.InputError e) {
+            return IssuedChanges.Snapshot.NONE;
+        }
+        return IssuedChanges.snapshot(c, projectId, d, MarkBook.read(c, projectId, d));
+    }
+
+    private static List<String> issuedAfter(Connection c, long projectId, Derived d, IssuedChanges.Snapshot before, MarkSheets marks)
+            throws SQLException {
+        return IssuedChanges.between(before, IssuedChanges.snapshot(c, projectId, d, marks));
+    }
+
+    /** Carries the answer of a tried change out of its transaction, which throwing rolls back. */
+    private static final class TriedOnly extends RuntimeException {
+        final List<String> touched;
+
+        TriedOnly(List<String> touched) {
+            super(null, null, false, false);
+            this.touched = touched;
+        }
+    }
+
+    /**
+     * After a firm-wide change that enters every project's calculation (the firm's self weights), gives each
+     * project's typical members their marks and names, in its audit entry, the issued sheets it changed since
+     * issue, each project in its own transaction. A project whose model no longer derives is left as it is (its next change reports why).
      */
     public void firmChanged(Editor who, String action, List<Long> projectIds) {
         for (long id : projectIds) {
@@ -89,9 +146,11 @@ public final class ModelWrites {
                 } catch (com.baysheet.engine.InputError e) {
                     return null;
                 }
-                List<String> superseded = Supersession.apply(c, id, d, by(who), at);
-                if (!superseded.isEmpty())
-                    append(c, who, subject(m.project()), action + "; superseded: " + String.join(", ", superseded), at);
+                // the firm's settings are saved already: the sheets are compared with what was issued
+                List<String> changed = IssuedChanges.between(IssuedChanges.asIssued(c, id),
+                        IssuedChanges.snapshot(c, id, d, MarkBook.reconcile(c, id, d, at)));
+                if (!changed.isEmpty())
+                    append(c, who, subject(m.project()), action + "; changed since issue: " + String.join(", ", changed), at);
                 return null;
             });
         }
@@ -115,10 +174,6 @@ public final class ModelWrites {
         Derived d = derive.apply(m.building());
         Limits.count("members", d.members().size(), Limits.MAX_MEMBERS, "members in a project");
         return d;
-    }
-
-    private static Supersession.By by(Editor who) {
-        return new Supersession.By(who.userId(), who.username(), who.address());
     }
 
     Sql sql() { return sql; }

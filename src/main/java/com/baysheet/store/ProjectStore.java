@@ -73,7 +73,7 @@ public final class ProjectStore {
         });
     }
 
-    /** Supersedes, project by project, the issued sheets a change to the firm's settings altered (see ModelWrites). */
+    /** After a change to the firm's settings: each project's marks, and the issued sheets it changed named in its audit entry (see ModelWrites). */
     public void firmChanged(Editor who, String action) {
         writes.firmChanged(who, action, findAll().stream().map(Project::id).toList());
     }

@@ -44,6 +44,10 @@ final class BayRoutes {
         long version = form.version();
         List<Cell> cells = BayForm.cells(form);
         String action = form.text("action");
+        if (action.equals("count")) {
+            count(ctx, p, l, form, version, cells);
+            return;
+        }
         Optional<Object> done = switch (action) {
             case "clear" -> form.attempt(() -> { store.bays().clear(Editors.of(ctx), p.id(), version, l.id(), cells); return action; });
             case "opening" -> form.attempt(() -> { store.bays().assign(Editors.of(ctx), p.id(), version, l.id(), BayAssignment.opening(cells)); return action; });
@@ -56,6 +60,15 @@ final class BayRoutes {
                 () -> render(ctx.status(form.stale() ? 409 : 422), p, l, form));
     }
 
+    /** Before saving: how many issued sheets the change would alter, computed from their fingerprints; nothing is saved. */
+    private void count(Context ctx, Project p, StoredLevel l, Form form, long version, List<Cell> cells) {
+        BayForm.Values v = BayForm.read(form, p.info().units());
+        Optional<List<String>> touched = form.attempt(() -> store.bays().touchedByAssign(p.id(), version, l.id(), v.assignment(cells)));
+        ctx.status(touched.isPresent() ? 200 : form.stale() ? 409 : 422);
+        ctx.attribute("touched", touched.orElse(null));
+        render(ctx, p, l, form);
+    }
+
     private void render(Context ctx, Project p, StoredLevel l, Form form) {
         var computed = store.results().of(p.id());
         var catalogue = computed.model().building().context().catalogue();
@@ -65,6 +78,7 @@ final class BayRoutes {
         m.put("level", l);
         m.put("levels", computed.model().levels());
         m.put("form", form);
+        m.put("touched", ctx.attribute("touched"));
         m.put("units", UnitLabels.of(p.info().units()));
         m.put("sides", BayForm.SIDES);
         m.put("occupancies", catalogue.all());

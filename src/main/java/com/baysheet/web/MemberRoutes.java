@@ -4,6 +4,7 @@ import com.baysheet.engine.code.MemberKind;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.MemberRole;
 import com.baysheet.framing.model.Level;
+import com.baysheet.review.MarkSheets;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
 import com.baysheet.store.Store;
@@ -33,8 +34,13 @@ final class MemberRoutes {
         MemberFilter filter = MemberFilter.of(ctx);
         UnitLabels units = UnitLabels.of(c.project().info().units());
         String href = "/projects/" + c.project().id() + "/members/";
-        List<MemberRow> rows = filter.apply(c.derived().members()).stream().map(m -> MemberRow.of(m, href + m.id(), units)).toList();
+        MarkSheets marks = store.marks().of(c.project().id(), c.derived());
+        List<DerivedMember> shown = filter.apply(c.derived().members());
+        if ("mark".equals(ctx.queryParam("group"))) shown = byMark(shown, marks);
+        List<MemberRow> rows = shown.stream().map(m -> MemberRow.of(m, href + m.id(), units)).toList();
         Map<String, Object> m = base(c);
+        m.put("marks", marks);
+        m.put("byMark", "mark".equals(ctx.queryParam("group")));
         m.put("rows", rows);
         m.put("filter", filter);
         m.put("roles", MemberRole.values());
@@ -51,6 +57,7 @@ final class MemberRoutes {
         String href = "/projects/" + c.project().id() + "/members/{id}";
         Map<String, Object> m = base(c);
         m.put("member", member);
+        m.put("mark", store.marks().of(c.project().id(), c.derived()).ofMember(member.id()).orElse(null));
         m.put("record", member.result().record());
         UnitLabels units = UnitLabels.of(c.project().info().units());
         m.put("row", MemberRow.of(member, "", units));
@@ -61,6 +68,13 @@ final class MemberRoutes {
         m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), member,
                 c.model().building().context().catalogue(), href, c.model().building().lineLoads()));
         ctx.render("members/show", m);
+    }
+
+    /** The members in the order of their marks (reading order), each mark's locations together. */
+    private static List<DerivedMember> byMark(List<DerivedMember> members, MarkSheets marks) {
+        java.util.Set<String> in = new java.util.HashSet<>();
+        for (DerivedMember x : members) in.add(x.id());
+        return marks.all().stream().flatMap(s -> s.group().members().stream()).filter(x -> in.contains(x.id())).toList();
     }
 
     /** The project's edition numbers its K_LL table (ASCE 7-16 Table 4.7-1, ASCE 7-10 Table 4-2): the label is data. */

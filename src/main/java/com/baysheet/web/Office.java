@@ -17,6 +17,7 @@ import com.baysheet.web.auth.Admit;
 import com.baysheet.web.auth.AuthRoutes;
 import com.baysheet.web.auth.CsrfForms;
 import com.baysheet.web.review.IssuedRoutes;
+import com.baysheet.web.review.MarkRoutes;
 import com.baysheet.web.review.MarkupRoutes;
 import com.baysheet.web.review.PackageRoutes;
 import com.baysheet.web.review.Refusals;
@@ -130,6 +131,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new ApiRoutes(store).install(r);
         new ApiResultRoutes(store).install(r);
         new ReviewRoutes(store, review, issuing).install(r);
+        new MarkRoutes(store).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
         new IssuedRoutes(store, review, issuing).install(r);
         new PackageRoutes(store, issuing).install(r);

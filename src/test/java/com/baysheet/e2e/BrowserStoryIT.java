@@ -93,7 +93,7 @@ class BrowserStoryIT {
         enterProject();
         enterGridAndLevels();
         enterBays();
-        String member = readMembersAndTakeDown();
+        String member = readMembersAndTakeDown(); // the girder's mark: its sheet is the mark's
         openSheet(member);
         Path checking = download("Checking copy (PDF)");
         assertThat(Files.readAllBytes(checking)).startsWith("%PDF".getBytes());
@@ -123,8 +123,11 @@ class BrowserStoryIT {
         page.press("Approve");
         assertThat(state()).isEqualTo("approved");
         assertThat(page.form("#titleblock").getText()).contains("CV");
-        page.press("Issue");
+        WebElement issue = page.form("form[action$='/issue']");
+        page.type(issue, "description", "First issue");
+        page.press(issue, "Issue");
         assertThat(state()).isEqualTo("issued");
+        assertThat(page.text()).contains("First issue");
         String sha = page.form("#titleblock").getText().replaceAll("(?s).*SHA-256 ([0-9a-f]{64}).*", "$1");
         assertThat(sha).hasSize(64);
         Path issued = download("Issued copy (PDF)");
@@ -253,7 +256,7 @@ class BrowserStoryIT {
         assertThat(page.driver.findElements(By.cssSelector(".form-errors, .error"))).allSatisfy(e -> assertThat(e.getText()).isBlank());
     }
 
-    /** Reads the girders of Level 2, one girder's record, and a column take-down; returns that girder's name. */
+    /** Reads the girders of Level 2, one girder's record, and a column take-down; returns that girder's mark. */
     private String readMembersAndTakeDown() {
         page.follow("Members");
         WebElement filter = page.form("form.filters");
@@ -265,12 +268,14 @@ class BrowserStoryIT {
         String name = links.get(0).getText();
         pageFollowIn(page.driver.findElement(By.cssSelector("table.members tbody")), name);
         assertThat(page.text()).contains(name).contains("licensed engineer").contains("4.7");
+        String mark = page.driver.findElement(By.cssSelector("#mark a")).getText();
+        assertThat(mark).startsWith("G");
 
         page.follow("Column take-downs");
         WebElement firstStack = page.driver.findElement(By.cssSelector("table a[href*='/takedowns/']"));
         pageFollowIn(firstStack.findElement(By.xpath("..")), firstStack.getText());
         assertThat(page.text()).contains("Roof").contains("Level 2").contains("licensed engineer");
-        return name;
+        return mark;
     }
 
     private void openSheet(String member) {
@@ -301,7 +306,7 @@ class BrowserStoryIT {
         WebElement f = page.form("#verify-form");
         page.field(f, "pdf").sendKeys(pdf.toAbsolutePath().toString());
         page.press(f, "Verify");
-        assertThat(page.text()).contains("Matches an issued revision").contains(sha).contains("revision 1");
+        assertThat(page.text()).contains("Matches an issued revision").contains(sha).contains("revision 0");
     }
 
     private String state() { return page.driver.findElement(By.id("state")).getText(); }

@@ -97,8 +97,11 @@ final class DemoOffice implements AutoCloseable {
         ids.put("user", find(client(Role.ADMINISTRATOR).get("/admin/users").body(),
                 "<td>" + usernames.get(Role.ADMINISTRATOR) + "</td>.*?/admin/users/(\\d+)/role", "the administrator's user id"));
 
-        // one member sheet through the whole check: submitted, marked up, resolved, approved and issued
-        String sheet = "/review" + p + "/members/" + member;
+        // one mark sheet through the whole check: submitted, marked up, resolved, approved and issued (the member's
+        // old sheet address leads to the sheet of the mark it carries)
+        String mark = markOf(eng, "/review" + p + "/members/" + member);
+        ids.put("mark", mark);
+        String sheet = "/review" + p + "/marks/" + mark;
         act(eng, sheet, "submit");
         HttpResponse<String> added = OfficeClient.expect(chk.form(sheet + "/markups",
                 Map.of("target", "sheet", "text", "Walking every route: a markup to resolve.")), 303);
@@ -122,10 +125,18 @@ final class DemoOffice implements AutoCloseable {
         awaitPackage(eng, p + "/packages/" + job + "?format=json");
     }
 
-    /** Posts a lifecycle action with the sheet version its page shows, as the button does. */
+    /** Posts a lifecycle action with the sheet version its page shows, as the button does (an issue says what it changes). */
     private static void act(OfficeClient c, String sheet, String action) {
         String page = c.get(sheet).body();
-        OfficeClient.expect(c.form(sheet + "/" + action, Map.of("version", formVersion(page, sheet + "/" + action))), 303);
+        String version = formVersion(page, sheet + "/" + action);
+        OfficeClient.expect(c.form(sheet + "/" + action, action.equals("issue")
+                ? Map.of("version", version, "description", "First issue") : Map.of("version", version)), 303);
+    }
+
+    /** The id of the mark a member carries, from where its old sheet address leads. */
+    static String markOf(OfficeClient c, String memberSheet) {
+        HttpResponse<String> r = OfficeClient.expect(c.get(memberSheet), 303);
+        return find(r.headers().firstValue("Location").orElse(""), "/marks/(\\d+)$", "mark of " + memberSheet);
     }
 
     /** The hidden version field of the form posting to this action (after the form token the page adds). */

@@ -36,6 +36,7 @@ class HostileInputPropertiesIT {
     static long project;
     static String level;
     static String member;
+    static String mark;
 
     @BeforeContainer
     static void start() throws Exception {
@@ -49,6 +50,7 @@ class HostileInputPropertiesIT {
         project = office.project();
         level = DemoOffice.first(engineer, "/api/projects/" + project + "/levels", "id");
         member = DemoOffice.first(engineer, "/api/projects/" + project + "/members", "id");
+        mark = DemoOffice.markOf(engineer, "/review/projects/" + project + "/members/" + member);
     }
 
     @AfterContainer
@@ -81,9 +83,9 @@ class HostileInputPropertiesIT {
                         "cantileverOccupancy", "")),
                 new FormCase("firm occupancy", engineer, "/occupancies", fields("id", "fuzz-room", "name", "Fuzz room",
                         "units", "US", "uniform", "50", "concentrated", "0", "contactSide", "30", "rule", "ORDINARY")),
-                new FormCase("markup", engineer, "/review/projects/" + project + "/members/" + member + "/markups",
+                new FormCase("markup", engineer, "/review/projects/" + project + "/marks/" + mark + "/markups",
                         fields("target", "sheet", "text", "Check this")),
-                new FormCase("sheet action", engineer, "/review/projects/" + project + "/members/" + member + "/return",
+                new FormCase("sheet action", engineer, "/review/projects/" + project + "/marks/" + mark + "/return",
                         fields("version", "0")),
                 new FormCase("login", anonymous, "/login", fields("username", "nobody", "password", "wrong password", "next", "/projects")),
                 new FormCase("password", engineer, "/account/password", fields("currentPassword", "x",
@@ -185,7 +187,7 @@ class HostileInputPropertiesIT {
     void hostilePathsAndQueriesNeverFault(@ForAll @IntRange(min = 0, max = 11) int which, @ForAll("hostileText") String h) {
         String e = URLEncoder.encode(h.length() > 2000 ? h.substring(0, 2000) : h, StandardCharsets.UTF_8);
         String p = "/projects/" + project;
-        String sheet = "/review/projects/" + project + "/members/" + member;
+        String sheet = "/review/projects/" + project + "/marks/" + mark;
         String path = List.of("/projects/" + e, p + "/members/" + e, p + "/members?level=" + e + "&role=" + e + "&kind=" + e,
                 "/api/projects/" + project + "/members/" + e + "/record", p + "/takedowns/" + e, p + "/plan?level=" + e,
                 sheet + "/compare?from=" + e + "&to=" + e, "/review/revisions/" + e + "/issued.pdf", "/admin/audit?page=" + e,

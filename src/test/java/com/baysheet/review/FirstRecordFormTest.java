@@ -38,7 +38,7 @@ class FirstRecordFormTest {
         assertThat(CalcFingerprint.of(RecordSnapshot.read(today))).isEqualTo(Tokens.sha256(json));
         String fp = Tokens.sha256(json);
         SheetRevision issued = SheetRevision.opened(1).submit(Sheets.ENGINEER, fp, Sheets.DAY)
-                .approve(Sheets.CHECKER, Sheets.DAY, 0, fp).issue(Sheets.CHECKER, Sheets.DAY, Sheets.PDF, fp);
+                .approve(Sheets.CHECKER, Sheets.DAY, 0, fp).issue(Sheets.CHECKER, Sheets.DAY, Sheets.PDF, fp, "First issue");
         assertThat(issued.outdatedBy(CalcFingerprint.of(RecordSnapshot.read(today)))).isFalse();
     }
 

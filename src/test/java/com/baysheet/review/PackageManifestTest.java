@@ -41,17 +41,22 @@ class PackageManifestTest {
                 List.of(Level.floor("Level 2", 14, floor), Level.roof("Roof", 28, 0.25, roof))));
     }
 
+    /** The manifest under the marks a first model write gives the derivation. */
+    static CalcRecord of(PackageScope scope, Derived d) {
+        return PackageManifest.of(scope, d, MarkSheets.fresh(d));
+    }
+
     @Test
-    void listsEveryMemberWithTheFingerprintOfItsRecordThenTheTakeDowns() {
+    void listsEveryMarkWithTheFingerprintOfItsSheetThenTheTakeDowns() {
         Derived d = building(65);
-        CalcRecord m = PackageManifest.of(PackageScope.PROJECT, d);
+        MarkSheets marks = MarkSheets.fresh(d);
+        CalcRecord m = of(PackageScope.PROJECT, d);
         assertThat(m.subject()).isEqualTo("Project package");
-        List<Entry> members = m.inputs().stream().filter(PackageManifest::isMember).toList();
-        assertThat(members).extracting(Entry::key).containsExactlyElementsOf(d.members().stream().map(DerivedMember::id).toList());
-        for (DerivedMember x : d.members()) {
-            Entry e = members.stream().filter(i -> i.key().equals(x.id())).findFirst().orElseThrow();
-            assertThat(e.shown()).isEqualTo(CalcFingerprint.of(x.result().record()));
-            assertThat(e.label()).isEqualTo(x.name() + ", " + x.level());
+        List<Entry> sheets = m.inputs().stream().filter(PackageManifest::isMember).toList();
+        assertThat(sheets).hasSize(marks.all().size()).hasSizeLessThan(d.members().size());
+        for (MarkSheets.MarkSheet x : marks.all()) {
+            Entry e = sheets.stream().filter(i -> i.label().equals("Mark " + x.text())).findFirst().orElseThrow();
+            assertThat(e.shown()).isEqualTo(CalcFingerprint.of(x.record()));
         }
         assertThat(m.inputs().stream().filter(e -> !PackageManifest.isMember(e)).count()).isEqualTo(d.takeDowns().size())
                 .isPositive();
@@ -59,43 +64,43 @@ class PackageManifestTest {
     }
 
     @Test
-    void resultsAreEachMembersGoverningValues() {
+    void resultsAreEachMarksGoverningValues() {
         Derived d = building(65);
-        CalcRecord m = PackageManifest.of(PackageScope.ofLevel("Level 2"), d);
-        DerivedMember first = d.onLevel("Level 2").get(0);
-        CalcRecord r = first.result().record();
+        CalcRecord m = of(PackageScope.ofLevel("Level 2"), d);
+        List<MarkSheets.MarkSheet> marks = PackageScope.ofLevel("Level 2").marks(d, MarkSheets.fresh(d));
+        MarkSheets.MarkSheet first = marks.get(0);
+        CalcRecord r = first.record();
         assertThat(r.governing()).isNotEmpty();
         for (String key : r.governing()) {
-            Entry e = m.entry(first.id() + "." + key);
+            Entry e = m.entry(MarkSheets.PREFIX + "new-" + first.text() + "." + key);
             assertThat(e.value()).isEqualTo(r.entry(key).value());
-            assertThat(e.shown()).isEqualTo(r.entry(key).shown());
-            assertThat(e.label()).startsWith(first.name() + ": ");
+            assertThat(e.label()).startsWith(first.text() + ": ");
         }
-        int governing = d.onLevel("Level 2").stream().mapToInt(x -> x.result().record().governing().size()).sum();
-        assertThat(m.results()).hasSize(governing);
+        assertThat(m.results()).hasSize(marks.stream().mapToInt(x -> x.record().governing().size()).sum());
     }
 
     @Test
-    void aLevelsManifestHoldsOnlyThatLevelAndTheTakeDownsThroughIt() {
+    void aLevelsManifestHoldsOnlyThatLevelsMarksAndTheTakeDownsThroughIt() {
         Derived d = building(65);
-        CalcRecord roof = PackageManifest.of(PackageScope.ofLevel("Roof"), d);
+        CalcRecord roof = of(PackageScope.ofLevel("Roof"), d);
         assertThat(roof.subject()).isEqualTo("Roof package");
-        assertThat(roof.inputs().stream().filter(PackageManifest::isMember).map(Entry::key).toList())
-                .containsExactlyElementsOf(d.onLevel("Roof").stream().map(DerivedMember::id).toList());
+        java.util.Set<String> onRoof = new java.util.HashSet<>(d.onLevel("Roof").stream().map(DerivedMember::id).toList());
+        assertThat(roof.inputs().stream().filter(PackageManifest::isMember).count()).isEqualTo(MarkSheets.fresh(d).all().stream()
+                .filter(s -> s.group().memberIds().stream().anyMatch(onRoof::contains)).count());
         assertThat(roof.inputs().stream().filter(e -> !PackageManifest.isMember(e)).count())
                 .isEqualTo(d.takeDowns().stream().filter(t -> t.rows().stream().anyMatch(r -> r.level().equals("Roof"))).count());
     }
 
     @Test
     void theSameModelGivesTheSameManifestAndFingerprint() {
-        assertThat(CalcFingerprint.of(PackageManifest.of(PackageScope.PROJECT, building(65))))
-                .isEqualTo(CalcFingerprint.of(PackageManifest.of(PackageScope.PROJECT, building(65))));
+        assertThat(CalcFingerprint.of(of(PackageScope.PROJECT, building(65))))
+                .isEqualTo(CalcFingerprint.of(of(PackageScope.PROJECT, building(65))));
     }
 
     @Test
     void aHeavierFloorChangesTheFloorsSheetsAndTheComparisonNamesThem() {
-        CalcRecord before = PackageManifest.of(PackageScope.ofLevel("Level 2"), building(65));
-        CalcRecord after = PackageManifest.of(PackageScope.ofLevel("Level 2"), building(80));
+        CalcRecord before = of(PackageScope.ofLevel("Level 2"), building(65));
+        CalcRecord after = of(PackageScope.ofLevel("Level 2"), building(80));
         assertThat(CalcFingerprint.of(after)).isNotEqualTo(CalcFingerprint.of(before));
         RevisionComparison c = RevisionComparison.of(before, after);
         Map<String, String> labels = after.inputs().stream().collect(Collectors.toMap(Entry::key, Entry::label));
@@ -109,14 +114,14 @@ class PackageManifestTest {
 
     @Test
     void aChangeBelowTheRoofLeavesTheRoofMembersAsTheyWere() {
-        Function<Derived, List<Entry>> roofMembers = d -> PackageManifest.of(PackageScope.ofLevel("Roof"), d).inputs()
+        Function<Derived, List<Entry>> roofMembers = d -> of(PackageScope.ofLevel("Roof"), d).inputs()
                 .stream().filter(PackageManifest::isMember).toList();
         assertThat(roofMembers.apply(building(80))).isEqualTo(roofMembers.apply(building(65)));
     }
 
     @Test
     void aLevelWithoutMembersHasNoManifest() {
-        assertThatThrownBy(() -> PackageManifest.of(PackageScope.ofLevel("Level 9"), building(65)))
+        assertThatThrownBy(() -> of(PackageScope.ofLevel("Level 9"), building(65)))
                 .isInstanceOf(InputError.class).hasMessageContaining("Level 9 package");
     }
 }

@@ -32,17 +32,18 @@ class SheetRevisionTest {
         assertThat(r.state()).isEqualTo(SheetState.APPROVED);
         assertThat(r.approval().initials()).isEqualTo("CK");
         assertThat(r.approval().on()).isEqualTo(DAY);
-        r = r.issue(SECOND_CHECKER, DAY, PDF, FP2);
+        r = r.issue(SECOND_CHECKER, DAY, PDF, FP2, "First issue");
         assertThat(r.state()).isEqualTo(SheetState.ISSUED);
         assertThat(r.issue().pdfSha256()).isEqualTo(PDF);
         assertThat(r.outdatedBy(FP2)).isFalse();
         assertThat(r.outdatedBy(FP)).isTrue();
-        r = r.supersede(FP);
-        assertThat(r.state()).isEqualTo(SheetState.SUPERSEDED);
-        assertThat(r.issue().pdfSha256()).as("the superseded copy keeps its hash").isEqualTo(PDF);
-        SheetRevision next = r.next();
+        assertThat(r.issue().description()).isEqualTo("First issue");
+        SheetRevision next = r.reopen(FP);
         assertThat(next.number()).isEqualTo(2);
         assertThat(next.state()).isEqualTo(SheetState.PREPARING);
+        r = r.supersededByNext();
+        assertThat(r.state()).isEqualTo(SheetState.SUPERSEDED);
+        assertThat(r.issue().pdfSha256()).as("the superseded copy keeps its hash").isEqualTo(PDF);
     }
 
     @Test
@@ -60,7 +61,7 @@ class SheetRevisionTest {
         for (Actor a : new Actor[]{OTHER_ENGINEER, ADMIN}) {
             assertThatThrownBy(() -> submitted().approve(a, DAY, 0, FP)).isInstanceOf(NotPermitted.class);
             assertThatThrownBy(() -> submitted().returnWithMarkups(a, 1)).isInstanceOf(NotPermitted.class);
-            assertThatThrownBy(() -> approved().issue(a, DAY, PDF, FP)).isInstanceOf(NotPermitted.class);
+            assertThatThrownBy(() -> approved().issue(a, DAY, PDF, FP, "First issue")).isInstanceOf(NotPermitted.class);
         }
     }
 
@@ -86,7 +87,7 @@ class SheetRevisionTest {
     @Test
     void inputsChangedSinceSubmissionBlockApprovalAndIssueButAllowResubmission() {
         assertThatThrownBy(() -> submitted().approve(CHECKER, DAY, 0, FP2)).isInstanceOf(InputsChanged.class);
-        assertThatThrownBy(() -> approved().issue(CHECKER, DAY, PDF, FP2)).isInstanceOf(InputsChanged.class);
+        assertThatThrownBy(() -> approved().issue(CHECKER, DAY, PDF, FP2, "First issue")).isInstanceOf(InputsChanged.class);
         SheetRevision again = approved().resubmit(ENGINEER, FP2, DAY);
         assertThat(again.state()).isEqualTo(SheetState.RESUBMITTED);
         assertThat(again.approval()).as("the approval is void").isNull();
@@ -102,9 +103,9 @@ class SheetRevisionTest {
         expect(s.awaitingCheck(), () -> r.returnWithMarkups(CHECKER, 1));
         expect(s.awaitingCheck(), () -> r.approve(CHECKER, DAY, 0, FP));
         expect(s == SheetState.RETURNED, () -> r.resubmit(ENGINEER, FP, DAY));
-        expect(s == SheetState.APPROVED, () -> r.issue(CHECKER, DAY, PDF, FP));
-        expect(s == SheetState.ISSUED, () -> r.supersede(FP2));
-        expect(s == SheetState.SUPERSEDED, r::next);
+        expect(s == SheetState.APPROVED, () -> r.issue(CHECKER, DAY, PDF, FP, "First issue"));
+        expect(s == SheetState.ISSUED, () -> r.reopen(FP2));
+        expect(s == SheetState.ISSUED, r::supersededByNext);
     }
 
     @Test
@@ -114,12 +115,22 @@ class SheetRevisionTest {
         assertThatThrownBy(() -> r.resubmit(ENGINEER, FP2, DAY)).isInstanceOf(WrongState.class).hasMessageContaining("issued");
         assertThatThrownBy(() -> MarkupRules.add(r, SECOND_CHECKER)).isInstanceOf(WrongState.class);
         assertThatThrownBy(() -> MarkupRules.reply(r, ENGINEER)).isInstanceOf(WrongState.class);
-        assertThatThrownBy(() -> r.supersede(FP)).as("unchanged inputs").isInstanceOf(WrongState.class);
+        assertThatThrownBy(() -> r.reopen(FP)).as("unchanged since issue: no next revision").isInstanceOf(WrongState.class);
+    }
+
+    @Test
+    void anIssueNeedsADescriptionOfWhatItChanges() {
+        for (String blank : new String[]{null, "", "   "})
+            assertThatThrownBy(() -> approved().issue(CHECKER, DAY, PDF, FP, blank)).isInstanceOf(com.baysheet.engine.InputError.class)
+                    .hasMessageContaining("description");
+        assertThatThrownBy(() -> approved().issue(CHECKER, DAY, PDF, FP, "x".repeat(SheetRevision.MAX_DESCRIPTION + 1)))
+                .hasMessageContaining("description");
+        assertThat(approved().issue(CHECKER, DAY, PDF, FP, "  Beam  load\n revised ").issue().description()).isEqualTo("Beam load revised");
     }
 
     @Test
     void anIssueNeedsAProperHash() {
-        assertThatThrownBy(() -> approved().issue(CHECKER, DAY, "not a hash", FP)).isInstanceOf(IllegalArgumentException.class);
+        assertThatThrownBy(() -> approved().issue(CHECKER, DAY, "not a hash", FP, "First issue")).isInstanceOf(IllegalArgumentException.class);
     }
 
     @Test
@@ -140,7 +151,7 @@ class SheetRevisionTest {
             case RESUBMITTED -> returned().resubmit(ENGINEER, FP, DAY);
             case APPROVED -> approved();
             case ISSUED -> issued();
-            case SUPERSEDED -> issued().supersede(FP2);
+            case SUPERSEDED -> issued().supersededByNext();
         };
         return f.apply(s);
     }

@@ -48,6 +48,6 @@ final class Sheets {
     }
 
     static SheetRevision issued() {
-        return approved().issue(CHECKER, DAY, PDF, FP);
+        return approved().issue(CHECKER, DAY, PDF, FP, "First issue");
     }
 }

@@ -9,6 +9,7 @@ import com.baysheet.review.MarkupNote;
 import com.baysheet.review.RecordSnapshot;
 import com.baysheet.review.SheetRef;
 import com.baysheet.review.SheetRevision;
+import com.baysheet.review.SheetState;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Sql;
 
@@ -63,7 +64,9 @@ public final class Reviews {
 
     public void submit(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current) {
         String fp = CalcFingerprint.of(current);
-        step(ref, version, who, "submit", r -> r.submit(who.actor(), fp, today), RecordSnapshot.write(current), null);
+        // on an issued sheet changed since issue, the submission opens the next revision; the issued one stays in force
+        step(ref, version, who, "submit", r -> (r.state() == SheetState.ISSUED ? r.reopen(fp) : r).submit(who.actor(), fp, today),
+                RecordSnapshot.write(current), null);
     }
 
     public void resubmit(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current) {
@@ -88,21 +91,19 @@ public final class Reviews {
         });
     }
 
-    /** Issues the approved revision with this PDF, rendered from {@code current}; its SHA-256 is computed here. */
-    public void issue(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current, byte[] pdf) {
+    /**
+     * Issues the approved revision with this PDF, rendered from {@code current}, and what it changes; its SHA-256 is
+     * computed here. The sheet's earlier issued revision is superseded by it in the same transaction.
+     */
+    public void issue(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current, byte[] pdf, String description) {
         String fp = CalcFingerprint.of(current);
         String sha = Tokens.sha256(pdf);
-        step(ref, version, who, "issue", r -> r.issue(who.actor(), today, sha, fp), RecordSnapshot.write(current), pdf);
-    }
-
-    /**
-     * Marks the issued revision superseded and opens the next one when the member's inputs changed since
-     * it was issued; returns whether it did. A change to the project does this itself, in its own transaction
-     * ({@link Supersession}); this is for a change the project's model does not see.
-     */
-    public boolean supersedeIfChanged(SheetRef ref, CalcRecord current, Caller who) {
-        return sql.tx(c -> Supersession.supersede(c, current(c, ref), current,
-                new Supersession.By(who.actor().userId(), who.username(), who.address()), sql.now()));
+        sql.tx(c -> {
+            StoredRevision cur = current(c, ref);
+            apply(c, cur, version, who, "issue", r -> r.issue(who.actor(), today, sha, fp, description), RecordSnapshot.write(current), pdf, sql.now());
+            Revisions.supersedeEarlier(c, cur.id(), sql.now());
+            return null;
+        });
     }
 
     private void step(SheetRef ref, long version, Caller who, String action, UnaryOperator<SheetRevision> rule,
@@ -116,6 +117,7 @@ public final class Reviews {
         SheetRevision next = rule.apply(cur.revision());
         if (!cur.stored()) Revisions.insertFirst(c, cur.sheet(), next, recordJson, at);
         else if (!Revisions.claim(c, cur.id(), version)) throw new ConcurrentChange("The sheet " + cur.sheet().subject());
+        else if (next.number() > cur.revision().number()) Revisions.insertNext(c, cur.id(), next, recordJson, at);
         else Revisions.write(c, cur.id(), next, recordJson, pdf, at);
         AuditTrail.append(c, event(who, action, cur.sheet(), "revision " + next.number() + " now " + next.state().label()), at);
         return null;

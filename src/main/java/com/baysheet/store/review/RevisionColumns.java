@@ -17,14 +17,14 @@ import java.time.LocalDate;
 /** How a {@link SheetRevision} maps onto the columns of sheet_revision, both ways. */
 final class RevisionColumns {
     static final String NAMES = "state, preparer_id, preparer_initials, prepared_on, inputs_sha256, approver_id, "
-            + "approver_initials, approved_on, issuer_id, issued_on, pdf_sha256";
-    static final String MARKS = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?";
+            + "approver_initials, approved_on, issuer_id, issued_on, pdf_sha256, description";
+    static final String MARKS = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?";
     static final String ASSIGN = "state = ?, preparer_id = ?, preparer_initials = ?, prepared_on = ?, inputs_sha256 = ?, "
-            + "approver_id = ?, approver_initials = ?, approved_on = ?, issuer_id = ?, issued_on = ?, pdf_sha256 = ?";
+            + "approver_id = ?, approver_initials = ?, approved_on = ?, issuer_id = ?, issued_on = ?, pdf_sha256 = ?, description = ?";
 
     private RevisionColumns() {}
 
-    /** Binds the eleven columns from {@code i}; returns the next index. */
+    /** Binds the twelve columns from {@code i}; returns the next index. */
     static int bind(PreparedStatement ps, int i, SheetRevision r) throws SQLException {
         Preparer p = r.preparer();
         Approval a = r.approval();
@@ -40,6 +40,7 @@ final class RevisionColumns {
         i = id(ps, i, s == null ? null : s.issuerId());
         i = date(ps, i, s == null ? null : s.on());
         ps.setString(i++, s == null ? null : s.pdfSha256());
+        ps.setString(i++, s == null ? null : s.description());
         return i;
     }
 
@@ -49,7 +50,7 @@ final class RevisionColumns {
         Approval a = rs.getString("approver_initials") == null ? null
                 : new Approval(rs.getLong("approver_id"), rs.getString("approver_initials"), day(rs, "approved_on"));
         Issue s = rs.getString("pdf_sha256") == null ? null
-                : new Issue(rs.getLong("issuer_id"), day(rs, "issued_on"), rs.getString("pdf_sha256"));
+                : new Issue(rs.getLong("issuer_id"), day(rs, "issued_on"), rs.getString("pdf_sha256"), rs.getString("description"));
         SheetRevision r = new SheetRevision(rs.getInt("revision_no"), SheetState.parse(rs.getString("state")), p,
                 rs.getString("inputs_sha256"), a, s);
         return new StoredRevision(rs.getLong("id"), new SheetRef(rs.getLong("project_id"), rs.getString("subject")),

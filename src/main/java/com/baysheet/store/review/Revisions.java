@@ -19,7 +19,7 @@ import java.util.Optional;
 final class Revisions {
     private static final String SELECT = "SELECT r.id, r.version, r.revision_no, r.state, r.preparer_id, r.preparer_initials, "
             + "r.prepared_on, r.inputs_sha256, r.record_json, r.approver_id, r.approver_initials, r.approved_on, "
-            + "r.issuer_id, r.issued_on, r.pdf_sha256, s.project_id, s.subject "
+            + "r.issuer_id, r.issued_on, r.pdf_sha256, r.description, s.project_id, s.subject "
             + "FROM sheet_revision r JOIN review_sheet s ON s.id = r.sheet_id ";
     /** The SQL state of a unique-key violation on both databases. */
     private static final String UNIQUE_VIOLATION = "23505";
@@ -44,6 +44,22 @@ final class Revisions {
     static List<StoredRevision> latestOf(Connection c, long projectId) throws SQLException {
         return list(c, SELECT + "WHERE s.project_id = ? AND r.revision_no = "
                 + "(SELECT MAX(x.revision_no) FROM sheet_revision x WHERE x.sheet_id = r.sheet_id) ORDER BY s.subject", projectId);
+    }
+
+    /** The revision in force of every sheet of a project that has one: its latest issued revision. */
+    static List<StoredRevision> inForce(Connection c, long projectId) throws SQLException {
+        return list(c, SELECT + "WHERE s.project_id = ? AND r.state = 'ISSUED' ORDER BY s.subject, r.revision_no", projectId);
+    }
+
+    /** After a revision is issued: the sheet's earlier issued revision is superseded by it. */
+    static void supersedeEarlier(Connection c, long issuedId, Instant at) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("UPDATE sheet_revision SET state = 'SUPERSEDED', version = version + 1, "
+                + "updated_at = ? WHERE state = 'ISSUED' AND id <> ? AND sheet_id = (SELECT x.sheet_id FROM sheet_revision x WHERE x.id = ?)")) {
+            ps.setObject(1, Sql.stamp(at));
+            ps.setLong(2, issuedId);
+            ps.setLong(3, issuedId);
+            ps.executeUpdate();
+        }
     }
 
     static List<StoredRevision> withPdf(Connection c, String sha256) throws SQLException {
@@ -76,7 +92,7 @@ final class Revisions {
     }
 
     /** Adds the next revision of the sheet the given revision belongs to. */
-    static long insertNext(Connection c, long afterRevisionId, SheetRevision r, Instant at) throws SQLException {
+    static long insertNext(Connection c, long afterRevisionId, SheetRevision r, String recordJson, Instant at) throws SQLException {
         long sheetId;
         try (PreparedStatement ps = c.prepareStatement("SELECT sheet_id FROM sheet_revision WHERE id = ?")) {
             ps.setLong(1, afterRevisionId);
@@ -85,7 +101,7 @@ final class Revisions {
                 sheetId = rs.getLong(1);
             }
         }
-        return insert(c, sheetId, r, null, at);
+        return insert(c, sheetId, r, recordJson, at);
     }
 
     /** Takes the revision for this transaction if it is still at the version the user saw; false if not. */

@@ -19,6 +19,12 @@ public record StoredRevision(long id, SheetRef sheet, long version, SheetRevisio
 
     public boolean stored() { return id != 0; }
 
+    /** The revision as its sheet prints it: a mark sheet counts from 0, as drawings do; older sheets and packages from 1. */
+    public String label() {
+        int n = revision.number();
+        return String.valueOf(com.baysheet.review.MarkSheets.markId(sheet.subject()).isPresent() ? n - 1 : n);
+    }
+
     public Optional<CalcRecord> record() {
         return recordJson == null ? Optional.empty() : Optional.of(RecordSnapshot.read(recordJson));
     }

@@ -31,7 +31,7 @@ public final class AdminRoutes {
     private final ReviewStore review;
     private final Consumer<Editor> firmChanged;
 
-    /** @param firmChanged run after the firm's settings are saved (supersedes what they changed in every project) */
+    /** @param firmChanged run after the firm's settings are saved (names, in every project's audit entry, the issued sheets they changed) */
     public AdminRoutes(Accounts accounts, ReviewStore review, Consumer<Editor> firmChanged) {
         this.firmChanged = firmChanged;
         this.accounts = accounts;
@@ -111,7 +111,7 @@ public final class AdminRoutes {
                             weight(f, "infillBeamWeight"), weight(f, "gridBeamWeight"), weight(f, "girderWeight"),
                             weight(f, "columnWeight"), version),
                     AuditEvent.of(u.id(), u.username(), "firm settings", "firm", f.text("firmName"), ctx.ip()));
-            // the self weights enter every project's calculation: what they change is superseded now, not on a later GET
+            // the self weights enter every project's calculation: what they change is named now, not on a later GET
             firmChanged.accept(Editors.of(ctx));
             return true;
         }).isPresent()) {

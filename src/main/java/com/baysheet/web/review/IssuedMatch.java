@@ -8,11 +8,11 @@ import com.baysheet.store.review.StoredRevision;
 import java.time.LocalDate;
 
 /**
- * An issued revision as a person asks after it: which job and project, which member or package (by the name
+ * An issued revision as a person asks after it: which job and project, which mark, member or package (by the name
  * its sheet was issued under, never a stored id), which revision, who prepared and checked it, when it was
  * issued and whether it still stands; with the address of its sheet page and its download's file name.
  */
-public record IssuedMatch(String jobNumber, String project, String sheet, boolean isPackage, int revision,
+public record IssuedMatch(String jobNumber, String project, String sheet, boolean isPackage, String revision,
                           String state, String preparedBy, String checkedBy, LocalDate issuedOn, String href) {
 
     static IssuedMatch of(Store store, StoredRevision r) {
@@ -20,12 +20,19 @@ public record IssuedMatch(String jobNumber, String project, String sheet, boolea
         SheetRevision x = r.revision();
         String sheet = r.record().map(CalcRecord::subject).orElse(r.sheet().isPackage() ? "package" : "member sheet");
         String base = "/review/projects/" + r.sheet().projectId();
+        var mark = com.baysheet.review.MarkSheets.markId(r.sheet().subject());
+        // a member sheet checked before marks came in leads to the mark sheet its member carries now
         String href = r.sheet().isPackage()
                 ? base + "/packages/" + r.sheet().subject().substring(com.baysheet.review.SheetRef.PACKAGE_PREFIX.length())
-                : base + "/members/" + r.sheet().subject();
-        return new IssuedMatch(info.jobNumber(), info.name(), sheet, r.sheet().isPackage(), x.number(), x.state().label(),
+                : mark.isPresent() ? base + "/marks/" + mark.get() : base + "/members/" + r.sheet().subject();
+        return new IssuedMatch(info.jobNumber(), info.name(), sheet, r.sheet().isPackage(), r.label(), x.state().label(),
                 x.preparer() == null ? "" : x.preparer().initials(), x.approval() == null ? "" : x.approval().initials(),
                 x.issue() == null ? null : x.issue().on(), href);
+    }
+
+    /** What the sheet is in the verdict's words: a package, a mark (a typical member's sheet), or a member checked before marks. */
+    public String kind() {
+        return isPackage ? "package" : href.contains("/marks/") ? "mark" : "member";
     }
 
     /** {@code <job>-<sheet>-rev<revision>.pdf}, as docs/sheets.md promises (made safe for a header by the caller). */

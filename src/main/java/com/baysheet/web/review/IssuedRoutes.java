@@ -23,7 +23,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-import static com.baysheet.web.review.ReviewRoutes.SHEET;
+import static com.baysheet.web.review.ReviewRoutes.MARK;
 import static com.baysheet.web.review.ReviewRoutes.SHEETS;
 
 /** PDFs (the frozen issued copy, a checking copy), revision comparison, and verifying an uploaded PDF. */
@@ -43,7 +43,7 @@ public final class IssuedRoutes {
 
     public void install(RoutesConfig r) {
         r.get("/review/revisions/{revision}/issued.pdf", this::issuedPdf, Admit.OFFICE);
-        r.get(SHEET + "/checking.pdf", this::checkingPdf, Admit.OFFICE);
+        r.get(MARK + "/checking.pdf", this::checkingPdf, Admit.OFFICE);
         for (String base : SHEETS) r.get(base + "/compare", this::compare, Admit.OFFICE);
         r.get("/verify", ctx -> ctx.render("review/verify", new HashMap<>()), Admit.OFFICE);
         r.post("/verify", this::verify, Admit.OFFICE);
@@ -57,7 +57,7 @@ public final class IssuedRoutes {
     }
 
     void checkingPdf(Context ctx) {
-        SheetSubject.OfMember s = SheetContext.member(store, ctx);
+        SheetSubject.OfMark s = SheetContext.mark(store, ctx);
         pdf(ctx, issuing.checkingCopy(s), s.computed().project().info().jobNumber() + "-" + s.name() + "-checking-copy.pdf");
     }
 

@@ -21,14 +21,16 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The check in the browser: the list of a project's sheets and packages, a member's sheet page, and the
- * lifecycle actions (post, then redirect) that member sheets and packages share.
+ * The check in the browser: the list of a project's sheets (one per mark) and packages, a mark's sheet page, and
+ * the lifecycle actions (post, then redirect) that mark sheets and packages share.
  */
 public final class ReviewRoutes {
+    /** A member's sheet before marks came in: now the way to its mark's sheet. */
     static final String SHEET = "/review/projects/{project}/members/{member}";
+    static final String MARK = "/review/projects/{project}/marks/{mark}";
     static final String PACKAGE = "/review/projects/{project}/packages/{package}";
-    /** Where the shared actions and markups are installed: a member's sheet and a package. */
-    static final List<String> SHEETS = List.of(SHEET, PACKAGE);
+    /** Where the shared actions and markups are installed: a typical member's sheet under its mark, and a package. */
+    static final List<String> SHEETS = List.of(MARK, PACKAGE);
 
     private final Store store;
     private final ReviewStore review;
@@ -42,7 +44,8 @@ public final class ReviewRoutes {
 
     public void install(RoutesConfig r) {
         r.get("/review/projects/{project}", this::list, Admit.OFFICE);
-        r.get(SHEET, this::show, Admit.OFFICE);
+        r.get(SHEET, this::memberSheet, Admit.OFFICE);
+        r.get(MARK, this::show, Admit.OFFICE);
         r.get(PACKAGE, this::showPackage, Admit.OFFICE);
         for (String base : SHEETS) {
             r.post(base + "/submit", ctx -> act(ctx, (s, v) -> reviews().submit(s.ref(), v, caller(ctx), today(), s.current())), Admit.PREPARER);
@@ -58,20 +61,43 @@ public final class ReviewRoutes {
         var computed = store.results().of(project);
         Map<String, Object> m = new HashMap<>();
         m.put("project", computed.project());
-        m.put("members", computed.derived().members());
+        m.put("marks", store.marks().of(project, computed.derived()).all());
         m.put("packages", PackageScope.all(computed.derived()));
         m.put("sheets", latestBySubject(project));
         ctx.render("review/list", m);
     }
 
+    /** A member's sheet is its mark's: the member's address leads there. */
+    void memberSheet(Context ctx) {
+        SheetSubject.OfMark s = SheetContext.markOf(store, SheetContext.project(ctx), ctx.pathParam("member"));
+        ctx.redirect(s.path(), HttpStatus.SEE_OTHER);
+    }
+
     void show(Context ctx) {
-        SheetSubject.OfMember s = SheetContext.member(store, ctx);
+        var retired = SheetContext.retired(store, ctx);
+        if (retired.isPresent()) {
+            retiredMark(ctx, retired.get());
+            return;
+        }
+        SheetSubject.OfMark s = SheetContext.mark(store, ctx);
         Map<String, Object> m = new HashMap<>();
         m.put("project", s.computed().project());
-        m.put("member", s.member());
+        m.put("mark", s.sheet());
+        m.put("base", s.path());
         m.put("page", SheetPage.of(reviews().view(s.ref()), s.current(), Access.user(ctx)));
+        m.put("before", beforeMarks(s));
         m.put("error", ctx.queryParam("error"));
         ctx.render("review/sheet", m);
+    }
+
+    /** A mark no member carries now: its sheet's revisions stay readable, and its issued copies downloadable. */
+    private void retiredMark(Context ctx, com.baysheet.review.Mark mark) {
+        long project = SheetContext.project(ctx);
+        Map<String, Object> m = new HashMap<>();
+        m.put("project", store.results().of(project).project());
+        m.put("mark", mark);
+        m.put("history", reviews().view(new com.baysheet.review.SheetRef(project, com.baysheet.review.MarkSheets.PREFIX + mark.id())).history());
+        ctx.render("review/retired-mark", m);
     }
 
     /** A package's page: its manifest (each sheet with its own state), markups and the same actions. */
@@ -90,7 +116,7 @@ public final class ReviewRoutes {
     /** Renders the issued copy and issues it: the issuing service checks the version and state first. */
     void issue(Context ctx) {
         SheetSubject s = SheetContext.of(store, ctx);
-        issuing.issue(s, version(ctx), caller(ctx));
+        issuing.issue(s, version(ctx), caller(ctx), ctx.formParam("description"));
         ctx.redirect(s.path(), HttpStatus.SEE_OTHER);
     }
 
@@ -104,6 +130,12 @@ public final class ReviewRoutes {
     @FunctionalInterface
     interface Action {
         void run(SheetSubject s, long version);
+    }
+
+    /** The member sheets of the mark's members checked before marks came in: history, readable and verifiable. */
+    private List<StoredRevision> beforeMarks(SheetSubject.OfMark s) {
+        var ids = new java.util.HashSet<>(s.sheet().group().memberIds());
+        return reviews().latestOf(s.ref().projectId()).stream().filter(r -> ids.contains(r.sheet().subject())).toList();
     }
 
     private Map<String, StoredRevision> latestBySubject(long project) {

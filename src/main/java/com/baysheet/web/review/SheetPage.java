@@ -16,8 +16,8 @@ import java.util.List;
  * prepared), the markups grouped by what they target, and which actions to offer this user. The offer is
  * only a convenience: every action is checked again by the review rules when posted.
  */
-record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChanged, List<MarkupNote> markups,
-                 List<StoredRevision> history, Offer offer) {
+record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChanged, boolean changedSinceIssue,
+                 List<MarkupNote> markups, List<StoredRevision> history, Offer offer) {
     /** The buttons shown to this user. */
     record Offer(boolean submit, boolean resubmit, boolean check, boolean issue, boolean reply) {}
 
@@ -25,16 +25,18 @@ record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChange
         StoredRevision cur = v.current();
         CalcRecord shown = cur.record().orElse(currentRecord);
         SheetRevision r = cur.revision();
-        boolean changed = r.fingerprint() != null && !r.state().frozen()
-                && !r.fingerprint().equals(CalcFingerprint.of(currentRecord));
-        return new SheetPage(cur, shown, changed, v.markups(), v.history(), offer(r, user, changed));
+        String now = CalcFingerprint.of(currentRecord);
+        boolean changed = r.fingerprint() != null && !r.state().frozen() && !r.fingerprint().equals(now);
+        // an issued revision stays in force until the next is issued: a change only flags it
+        boolean sinceIssue = r.outdatedBy(now);
+        return new SheetPage(cur, shown, changed, sinceIssue, v.markups(), v.history(), offer(r, user, changed, sinceIssue));
     }
 
-    private static Offer offer(SheetRevision r, User u, boolean changed) {
+    private static Offer offer(SheetRevision r, User u, boolean changed, boolean sinceIssue) {
         boolean preparer = r.preparer() != null && r.preparer().userId() == u.id();
         boolean otherChecker = u.role().mayCheck() && !preparer;
         SheetState s = r.state();
-        return new Offer(s == SheetState.PREPARING && u.role().mayPrepare(),
+        return new Offer((s == SheetState.PREPARING || sinceIssue) && u.role().mayPrepare(),
                 preparer && (s == SheetState.RETURNED || (changed && (s.awaitingCheck() || s == SheetState.APPROVED))),
                 otherChecker && s.awaitingCheck(),
                 u.role().mayCheck() && s == SheetState.APPROVED,

@@ -82,7 +82,7 @@ abstract class ReviewsContract {
         reviews().resubmit(ref, version(), engineer, DAY, r);
         store.markups().resolve(ref, m, 1, checker, true);
         reviews().approve(ref, version(), checker, DAY, r);
-        reviews().issue(ref, version(), checker, DAY, r, PDF);
+        reviews().issue(ref, version(), checker, DAY, r, PDF, "First issue");
     }
 
     @Test
@@ -104,18 +104,25 @@ abstract class ReviewsContract {
     }
 
     @Test
-    void changedInputsSupersedeTheIssuedRevisionAndOpenTheNext() {
+    void anIssuedRevisionStaysCurrentUntilTheNextIsIssued() {
         throughIssue(record(20));
-        assertThat(reviews().supersedeIfChanged(ref, record(20), checker)).isFalse();
-        assertThat(reviews().supersedeIfChanged(ref, record(24), engineer)).isTrue();
+        StoredRevision first = current();
+        assertThatThrownBy(() -> reviews().submit(ref, first.version(), engineer, DAY, record(20)))
+                .as("unchanged since issue: nothing to revise").isInstanceOf(ReviewRefused.class);
+        // the calculation changes: submitting opens revision 2 while revision 1 stays issued
+        reviews().submit(ref, first.version(), engineer, DAY, record(24));
         List<StoredRevision> h = reviews().view(ref).history();
         assertThat(h).extracting(s -> s.revision().number()).containsExactly(1, 2);
-        assertThat(h.get(0).revision().state()).isEqualTo(SheetState.SUPERSEDED);
-        assertThat(h.get(1).revision().state()).isEqualTo(SheetState.PREPARING);
+        assertThat(h.get(0).revision().state()).as("changed since issue, not superseded").isEqualTo(SheetState.ISSUED);
+        assertThat(h.get(1).revision().state()).isEqualTo(SheetState.SUBMITTED);
+        reviews().approve(ref, version(), checker, DAY, record(24));
+        byte[] second = "%PDF-1.4 second".getBytes();
+        reviews().issue(ref, version(), checker, DAY, record(24), second, "Floor dead load raised");
+        h = reviews().view(ref).history();
+        assertThat(h.get(0).revision().state()).as("superseded once the next is issued").isEqualTo(SheetState.SUPERSEDED);
+        assertThat(h.get(1).revision().state()).isEqualTo(SheetState.ISSUED);
+        assertThat(h.get(1).revision().issue().description()).isEqualTo("Floor dead load raised");
         assertThat(reviews().issuedPdf(h.get(0).id())).as("the superseded copy stays downloadable").contains(PDF);
-        reviews().submit(ref, version(), engineer, DAY, record(24));
-        assertThat(current().revision().number()).isEqualTo(2);
-        assertThat(current().revision().state()).isEqualTo(SheetState.SUBMITTED);
     }
 
     @Test
@@ -125,7 +132,7 @@ abstract class ReviewsContract {
         long v = before.version();
         assertThatThrownBy(() -> reviews().resubmit(ref, v, engineer, DAY, record(24))).isInstanceOf(ReviewRefused.class);
         assertThatThrownBy(() -> reviews().approve(ref, v, secondChecker, DAY, record(20))).isInstanceOf(ReviewRefused.class);
-        assertThatThrownBy(() -> reviews().issue(ref, v, checker, DAY, record(20), "other".getBytes())).isInstanceOf(ReviewRefused.class);
+        assertThatThrownBy(() -> reviews().issue(ref, v, checker, DAY, record(20), "other".getBytes(), "Reissued")).isInstanceOf(ReviewRefused.class);
         assertThatThrownBy(() -> store.markups().add(ref, secondChecker, "sheet", "late note")).isInstanceOf(ReviewRefused.class);
         assertThat(current()).isEqualTo(before);
         assertThat(reviews().issuedPdf(before.id())).contains(PDF);

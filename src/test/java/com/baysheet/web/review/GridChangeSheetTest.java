@@ -30,33 +30,40 @@ class GridChangeSheetTest {
     @Test
     void aLineInsertedAndRemovedLeavesOtherMembersAndTheirSheetsAsTheyWere() {
         Client eng = server.as("erin", Role.ENGINEER), chk = server.as("cody", Role.CHECKER);
-        long p = server.project();
         DerivedMember far = server.member();
         DerivedMember edge = member("Column A/5 below Roof");
-        issue(eng, chk, path(far.id()));
-        issue(eng, chk, path(edge.id()));
+        String farSheet = markPath(far.id()), edgeSheet = markPath(edge.id());
+        issue(eng, chk, farSheet);
+        issue(eng, chk, edgeSheet);
         Map<String, String> before = records();
+        Map<String, String> marksBefore = marks();
 
         // line 4A splits the bays between lines 4 and 5 on every level
         assertThat(saveGrid(eng, "1 2 3 4 4A 5", "30 30 30 12 18").statusCode()).isEqualTo(303);
         Map<String, String> inserted = records();
         assertThat(inserted.get(far.id())).isEqualTo(before.get(far.id()));
-        assertThat(state(eng.get(path(far.id())).body())).isEqualTo("issued");
-        // the column on line 5 keeps its id and its sheet: its bay is half as wide, so the issued sheet is superseded
+        assertThat(state(eng.get(farSheet).body())).isEqualTo("issued");
+        // the column on line 5 keeps its id; its bay is narrower, so its mark's issued sheet is changed since issue
+        // (and stays the issued revision until the next is issued)
         assertThat(member("Column A/5 below Roof").id()).isEqualTo(edge.id());
-        String edgeSheet = eng.get(path(edge.id())).body();
-        assertThat(state(edgeSheet)).isEqualTo("being prepared");
-        assertThat(Html.shown(edgeSheet)).contains("superseded");
+        String edgeHtml = eng.get(edgeSheet).body();
+        assertThat(state(edgeHtml)).isEqualTo("issued");
+        assertThat(Html.all(edgeHtml, "#changed-since-issue")).isNotEmpty();
         // members on the new line are new: no sheet history, whatever stood at their place in the list before
         DerivedMember onNewLine = member("Column A/4A below Roof");
         assertThat(before).doesNotContainKey(onNewLine.id());
         for (String id : inserted.keySet())
             if (!before.containsKey(id))
-                assertThat(server.office.review().reviews().view(new SheetRef(p, id)).history()).as(id).isEmpty();
+                assertThat(server.office.review().reviews().view(new SheetRef(server.project(), id)).history()).as(id).isEmpty();
 
         assertThat(saveGrid(eng, "1 2 3 4 5", "30 30 30 30").statusCode()).isEqualTo(303);
         assertThat(records()).isEqualTo(before);
-        assertThat(state(eng.get(path(far.id())).body())).isEqualTo("issued");
+        assertThat(marks()).as("every member finds its mark again: marks never renumber").isEqualTo(marksBefore);
+        for (String sheet : List.of(farSheet, edgeSheet)) {
+            String html = eng.get(sheet).body();
+            assertThat(state(html)).isEqualTo("issued");
+            assertThat(html).as(sheet).doesNotContain("id=\"changed-since-issue\"");
+        }
     }
 
     @Test
@@ -83,11 +90,25 @@ class GridChangeSheetTest {
         html = chk.get(sheet).body();
         assertThat(chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
         html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")))).statusCode()).isEqualTo(303);
+        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")), Map.entry("description", "First issue"))).statusCode()).isEqualTo(303);
         assertThat(state(eng.get(sheet).body())).isEqualTo("issued");
     }
 
-    private static String path(String member) { return "/review/projects/" + server.project() + "/members/" + member; }
+    /** The sheet of the mark the member carries now. */
+    private static String markPath(String member) {
+        var d = server.store.results().of(server.project()).derived();
+        long id = server.store.marks().of(server.project(), d).ofMember(member).orElseThrow().mark().id();
+        return "/review/projects/" + server.project() + "/marks/" + id;
+    }
+
+    /** Each member's mark. */
+    private static Map<String, String> marks() {
+        var d = server.store.results().of(server.project()).derived();
+        var marks = server.store.marks().of(server.project(), d);
+        Map<String, String> out = new TreeMap<>();
+        for (DerivedMember m : d.members()) out.put(m.id(), marks.label(m.id()));
+        return out;
+    }
 
     private static DerivedMember member(String name) {
         return server.store.results().of(server.project()).derived().members().stream().filter(m -> m.name().equals(name))

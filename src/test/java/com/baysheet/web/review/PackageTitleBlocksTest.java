@@ -35,17 +35,19 @@ class PackageTitleBlocksTest {
         Client eng = server.as("quentin", Role.ENGINEER);       // QUEN
         Client memberChecker = server.as("walter", Role.CHECKER);   // WALT
         Client packageChecker = server.as("yolanda", Role.CHECKER); // YOLA
-        DerivedMember checked = server.member();
-        DerivedMember untouched = server.store.results().of(server.project()).derived().onLevel(checked.level()).stream()
-                .filter(m -> !m.id().equals(checked.id())).findFirst().orElseThrow();
+        DerivedMember member = server.member();
+        var d = server.store.results().of(server.project()).derived();
+        String checked = server.mark().text();
+        String untouched = PackageScope.ofLevel(member.level()).marks(d, server.store.marks().of(server.project(), d)).stream()
+                .map(m -> m.text()).filter(t -> !t.equals(checked)).findFirst().orElseThrow();
         walk(eng, memberChecker, server.sheetPath());
         LocalDate today = LocalDate.now(server.clock);
 
-        List<String> copy = pages(eng.getBytes(job(eng, checked.level()) + "/file").body());
-        String own = pageOf(copy, checked.name());
-        assertThat(own).contains("CHECKING COPY", "Prepared by\nQUEN", "Checked by\nWALT", "Revision\n1\n", "Issue date\n" + today)
+        List<String> copy = pages(eng.getBytes(job(eng, member.level()) + "/file").body());
+        String own = pageOf(copy, checked);
+        assertThat(own).contains("CHECKING COPY", "Prepared by\nQUEN", "Checked by\nWALT", "Revision\n0\n", "Issue date\n" + today)
                 .doesNotContain("not yet checked", "Revision\ncheck");
-        String none = pageOf(copy, untouched.name());
+        String none = pageOf(copy, untouched);
         assertThat(none).contains("Prepared by\nnot submitted", "Checked by\nnot yet checked", "Revision\nnot issued",
                 "Issue date\nnot issued").doesNotContain("QUEN", "WALT");
         String cover = copy.get(0);
@@ -53,15 +55,15 @@ class PackageTitleBlocksTest {
                 "Printed " + today).doesNotContainPattern("issued \\d{4}-");
         assertThat(copy.get(copy.size() - 1)).contains("Revision log").doesNotContainPattern("(?m)/\\s*$");
 
-        String pkg = "/review/projects/" + server.project() + "/packages/" + PackageScope.ofLevel(checked.level()).key();
+        String pkg = "/review/projects/" + server.project() + "/packages/" + PackageScope.ofLevel(member.level()).key();
         walk(eng, packageChecker, pkg);
         String pdfPath = Html.one(eng.get(pkg).body(), "a[href$=/issued.pdf]").attr("href");
         List<String> issued = pages(eng.getBytes(pdfPath).body());
         assertThat(issued.get(0)).contains("Revision 1, issued " + today, "YOLA").doesNotContain("not issued");
-        own = pageOf(issued, checked.name());
-        assertThat(own).contains("Checked by\nWALT", "Revision\n1\n", "ISSUED · " + checked.level() + " package · Rev 1 · " + today)
+        own = pageOf(issued, checked);
+        assertThat(own).contains("Checked by\nWALT", "Revision\n0\n", "ISSUED · " + member.level() + " package · Rev 1 · " + today)
                 .doesNotContain("YOLA");
-        none = pageOf(issued, untouched.name());
+        none = pageOf(issued, untouched);
         assertThat(none).contains("Checked by\nnot yet checked", "Revision\nnot issued", "Prepared by\nnot submitted")
                 .doesNotContain("YOLA", "QUEN");
         assertThat(issued.get(issued.size() - 1)).contains("First issue", "QUEN / YOLA");
@@ -83,7 +85,7 @@ class PackageTitleBlocksTest {
         html = checker.get(sheet).body();
         assertThat(checker.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
         html = checker.get(sheet).body();
-        assertThat(checker.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")))).statusCode()).isEqualTo(303);
+        assertThat(checker.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")), Map.entry("description", "First issue"))).statusCode()).isEqualTo(303);
     }
 
     /** Starts a checking copy of the level's package and waits (bounded) for the worker. */

@@ -72,19 +72,35 @@ final class ReviewServer implements AutoCloseable, BeforeAllCallback, AfterAllCa
                 .filter(m -> !m.kind().name().contains("COLUMN")).findFirst().orElseThrow();
     }
 
-    SheetRef ref() { return new SheetRef(project(), member().id()); }
+    /** The mark the member carries now (its sheet is the unit of review). */
+    com.baysheet.review.MarkSheets.MarkSheet mark() {
+        var c = store.results().of(project());
+        return store.marks().of(project(), c.derived()).ofMember(member().id()).orElseThrow();
+    }
 
-    String sheetPath() { return "/review/projects/" + project() + "/members/" + member().id(); }
+    SheetRef ref() { return mark().ref(project()); }
 
-    /** Adds this much dead load to every bay of the member's level: its inputs change. */
+    String sheetPath() { return "/review/projects/" + project() + "/marks/" + mark().mark().id(); }
+
+    /**
+     * Adds this much dead load to every bay of the member's level: its inputs change. Bays alike are changed in one
+     * save, as the bay editor does with several bays ticked.
+     */
     void heavierFloor(double more) {
         long p = project();
         String level = member().level();
         StoredLevel l = store.levels().findByProject(p).stream().filter(x -> x.info().name().equals(level)).findFirst().orElseThrow();
-        for (Bay b : store.bays().findByLevel(p, l.id())) {
-            if (b.opening()) continue;
-            store.bays().assign(Editor.DEMO, p, store.projects().find(p).version(), l.id(), new BayAssignment(List.of(new Cell(b.col(), b.row())),
-                    false, b.occupancy(), b.deadLoad() + more, b.framing(), b.cantilevers()));
+        java.util.Map<List<Object>, List<Cell>> alike = new java.util.LinkedHashMap<>();
+        for (Bay b : store.bays().findByLevel(p, l.id()))
+            if (!b.opening())
+                alike.computeIfAbsent(List.of(b.occupancy(), b.deadLoad(), b.framing(), b.cantilevers()), k -> new java.util.ArrayList<>())
+                        .add(new Cell(b.col(), b.row()));
+        for (var e : alike.entrySet()) {
+            List<Object> k = e.getKey();
+            @SuppressWarnings("unchecked")
+            var cantilevers = (java.util.Map<com.baysheet.framing.model.Side, Double>) k.get(3);
+            store.bays().assign(Editor.DEMO, p, store.projects().find(p).version(), l.id(), new BayAssignment(e.getValue(),
+                    false, (String) k.get(0), (Double) k.get(1) + more, (com.baysheet.framing.model.Framing) k.get(2), cantilevers));
         }
     }
 

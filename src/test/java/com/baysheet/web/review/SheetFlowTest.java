@@ -63,7 +63,7 @@ class SheetFlowTest {
         assertThat(chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
         html = chk.get(sheet).body();
         assertThat(state(html)).isEqualTo("approved");
-        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")))).statusCode()).isEqualTo(303);
+        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")), Map.entry("description", "First issue"))).statusCode()).isEqualTo(303);
 
         html = eng.get(sheet).body();
         assertThat(state(html)).isEqualTo("issued");
@@ -82,8 +82,11 @@ class SheetFlowTest {
 
         server.heavierFloor(10);
         html = eng.get(sheet).body();
-        assertThat(state(html)).isEqualTo("being prepared");
-        assertThat(Html.shown(html)).contains("superseded");
+        assertThat(state(html)).as("an issued revision stays current until the next is issued").isEqualTo("issued");
+        assertThat(Html.all(html, "#changed-since-issue")).isNotEmpty();
+        assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
+        html = eng.get(sheet).body();
+        assertThat(state(html)).as("the submission opens the next revision").isEqualTo("submitted for check");
         String compare = eng.get(sheet + "/compare?from=1&to=2").body();
         assertThat(Html.all(compare, "table#changed-inputs")).hasSize(1);
         assertThat(Html.shown(compare)).doesNotContain("No input or result differs");
@@ -92,7 +95,7 @@ class SheetFlowTest {
 
         Client admin = server.as("admin", Role.ADMINISTRATOR);
         String audit = admin.get("/admin/audit").body();
-        for (String action : List.of("submit", "markup", "return", "reply", "resubmit", "resolve", "approve", "issue", "supersede"))
+        for (String action : List.of("submit", "markup", "return", "reply", "resubmit", "resolve", "approve", "issue"))
             assertThat(Html.texts(audit, "td")).contains(action);
         HttpResponse<String> csv = admin.get("/admin/audit.csv");
         assertThat(csv.headers().firstValue("Content-Type")).hasValueSatisfying(t -> assertThat(t).startsWith("text/csv"));

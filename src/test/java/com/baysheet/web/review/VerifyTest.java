@@ -33,23 +33,23 @@ class VerifyTest {
         Client chk = server.as("harriet", Role.CHECKER);  // HARR
         DerivedMember member = server.member();
         ProjectInfo info = server.store.projects().find(server.project()).info();
-        String issuedAs = member.result().record().subject(); // the member's name and level, as its record names it
+        String issuedAs = server.mark().text(); // the mark the member carries: its sheet is the mark's
         String sheet = server.sheetPath();
         String html = eng.get(sheet).body();
         eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit"))));
         html = chk.get(sheet).body();
         chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve"))));
         html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")))).statusCode()).isEqualTo(303);
+        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")), Map.entry("description", "First issue"))).statusCode()).isEqualTo(303);
 
         HttpResponse<byte[]> pdf = eng.getBytes(Html.one(eng.get(sheet).body(), "a[href$=/issued.pdf]").attr("href"));
         assertThat(pdf.headers().firstValue("X-Content-SHA256")).hasValue(Tokens.sha256(pdf.body()));
         assertThat(pdf.headers().firstValue("Content-Disposition").orElse(""))
-                .isEqualTo("attachment; filename=\"" + safe(info.jobNumber() + "-" + issuedAs + "-rev1.pdf") + "\"");
+                .isEqualTo("attachment; filename=\"" + safe(info.jobNumber() + "-" + issuedAs + "-rev0.pdf") + "\"");
 
         String said = Html.text(eng.upload("/verify", "pdf", "sheet.pdf", pdf.body()).body(), "section#verdict");
         assertThat(said).contains("Matches an issued revision", "job " + info.jobNumber() + ", " + info.name(),
-                "member " + issuedAs + ",", "revision 1", "prepared by GIDE", "checked by HARR",
+                "mark " + issuedAs + ",", "revision 0", "prepared by GIDE", "checked by HARR",
                 "issued " + LocalDate.now(server.clock), "(now issued)");
         assertThat(said).as("no stored ids in what the verdict says")
                 .doesNotContain("Project " + server.project(), "member " + member.id() + " ");
@@ -63,7 +63,7 @@ class VerifyTest {
         assertThat(pdf.statusCode()).isEqualTo(200);
         assertThat(pdf.headers().firstValue("X-Content-SHA256")).hasValue(Tokens.sha256(pdf.body()));
         assertThat(pdf.headers().firstValue("Content-Disposition").orElse(""))
-                .isEqualTo("attachment; filename=\"" + safe(info.jobNumber() + "-" + server.member().name() + "-checking-copy.pdf") + "\"");
+                .isEqualTo("attachment; filename=\"" + safe(info.jobNumber() + "-" + server.mark().text() + "-checking-copy.pdf") + "\"");
     }
 
     @Test

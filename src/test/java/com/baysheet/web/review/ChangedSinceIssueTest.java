@@ -18,39 +18,72 @@ import static com.baysheet.web.review.Pages.version;
 import static org.assertj.core.api.Assertions.assertThat;
 
 /**
- * Supersession and the audit entry happen at the write, in the change's own transaction: a change through the
- * store alone, with no request and no filter, supersedes the issued sheet it alters and records who did what;
- * a GET of the sheet page shows the state and writes nothing.
+ * As drawings do it: an issued revision stays current until the next one is issued. A change through the store
+ * alone, with no request and no filter, leaves the issued sheet it alters issued (changed since issue, never
+ * superseded by the write) and its audit entry names that sheet and who did it; the bay form counts the issued
+ * sheets a change would alter before anything is saved; a GET of the sheet page shows the state and writes nothing.
  */
-class WriteTimeSupersessionTest {
+class ChangedSinceIssueTest {
     @RegisterExtension
     static final ReviewServer server = ReviewServer.perClass();
 
     @Test
-    void aBayChangeThroughTheStoreSupersedesTheIssuedSheetAndIsAuditedWithItsAuthor() {
+    void aBayChangeThroughTheStoreLeavesTheSheetIssuedAndChangedSinceIssueAndIsAuditedWithItsAuthor() {
         Client eng = server.as("erin", Role.ENGINEER), chk = server.as("cody", Role.CHECKER);
         issue(eng, chk);
+        var ref = server.ref();
+        String mark = server.mark().text();
+        var states = server.office.review().reviews().view(ref).history().stream().map(r -> r.revision().state()).toList();
         long before = server.office.review().audit().count();
 
         server.heavierFloor(5);
 
-        // seen through the store, without opening the sheet page
-        assertThat(server.office.review().reviews().view(server.ref()).current().revision().state()).isEqualTo(SheetState.PREPARING);
-        assertThat(server.office.review().reviews().view(server.ref()).history()).extracting(r -> r.revision().state())
-                .endsWith(SheetState.SUPERSEDED, SheetState.PREPARING);
+        // seen through the store, without opening the sheet page: still issued, no revision opened by the write
+        var view = server.office.review().reviews().view(ref);
+        assertThat(view.current().revision().state()).isEqualTo(SheetState.ISSUED);
+        assertThat(view.history()).extracting(r -> r.revision().state()).as("the write opens no revision and supersedes none")
+                .containsExactlyElementsOf(states);
         List<AuditEvent> after = server.office.review().audit().page(1000, 0);
         assertThat(after.size()).isGreaterThan((int) before);
-        assertThat(after).anySatisfy(e -> {
-            assertThat(e.action()).isEqualTo("supersede");
-            assertThat(e.subject()).isEqualTo(server.ref().label());
-            assertThat(e.actorUsername()).isEqualTo(Editor.DEMO.username());
-        });
+        assertThat(after).noneSatisfy(e -> assertThat(e.action()).isEqualTo("supersede"));
         assertThat(after).anySatisfy(e -> {
             assertThat(e.action()).isEqualTo("edit");
             assertThat(e.actorUsername()).isEqualTo(Editor.DEMO.username());
             assertThat(e.detail()).contains("bays assigned on " + server.member().level(), "; was: ", "model version ",
-                    "superseded: " + server.ref().label());
+                    "changed since issue: ").contains(mark);
         });
+        String html = eng.get("/review/projects/" + server.project() + "/marks/" + ref.subject().substring("mark-".length())).body();
+        assertThat(state(html)).isEqualTo("issued");
+        assertThat(html).contains("id=\"changed-since-issue\"");
+    }
+
+    @Test
+    void theBayFormCountsTheIssuedSheetsAChangeTouchesAndSavesNothing() {
+        Client eng = server.as("erin", Role.ENGINEER), chk = server.as("cody", Role.CHECKER);
+        issue(eng, chk);
+        long p = server.project();
+        String mark = server.mark().text();
+        var level = server.store.levels().findByProject(p).stream().filter(x -> x.info().name().equals(server.member().level()))
+                .findFirst().orElseThrow();
+        var bay = server.member().bays().get(0);
+        var b = server.store.bays().findByLevel(p, level.id()).stream().filter(x -> !x.opening()).filter(x ->
+                server.store.grids().find(p).bayName(x.col(), x.row()).equals(bay)).findFirst().orElseThrow();
+        long version = server.store.projects().find(p).version();
+        String bays = "/projects/" + p + "/levels/" + level.id() + "/bays";
+        var r = eng.post(bays, List.of(Map.entry("version", String.valueOf(version)), Map.entry("cells", b.col() + "," + b.row()),
+                Map.entry("action", "count"), Map.entry("occupancy", b.occupancy()), Map.entry("deadLoad", String.valueOf(b.deadLoad() + 9)),
+                Map.entry("beams", b.framing().beams().name()), Map.entry("infillBeams", String.valueOf(b.framing().infillBeams()))));
+        assertThat(r.statusCode()).isEqualTo(200);
+        String said = Pages.first(r.body(), "id=\"touched\">([^<]*)<");
+        assertThat(said).contains("Applying this changes ").contains(mark).contains("Nothing is saved yet");
+        assertThat(server.store.projects().find(p).version()).as("nothing saved").isEqualTo(version);
+        assertThat(server.store.bays().findByLevel(p, level.id())).contains(b);
+        // the same bay as it is: no issued sheet changes
+        var same = eng.post(bays, List.of(Map.entry("version", String.valueOf(version)), Map.entry("cells", b.col() + "," + b.row()),
+                Map.entry("action", "count"), Map.entry("occupancy", b.occupancy()), Map.entry("deadLoad", String.valueOf(b.deadLoad())),
+                Map.entry("beams", b.framing().beams().name()), Map.entry("infillBeams", String.valueOf(b.framing().infillBeams()))));
+        if (b.cantilevers().isEmpty() && b.cantileverOccupancy() == null)
+            assertThat(Pages.first(same.body(), "id=\"touched\">([^<]*)<")).contains("changes no issued sheet");
     }
 
     @Test
@@ -95,35 +128,37 @@ class WriteTimeSupersessionTest {
         assertThat(again.current().revision().state()).isEqualTo(SheetState.ISSUED);
     }
 
-    /** Brings the member's sheet to issued (the tests share one server, in no set order). */
     @Test
-    void aChangeOfTheFirmsSelfWeightsSupersedesTheIssuedSheetsItAltersAtTheSave() {
+    void aChangeOfTheFirmsSelfWeightsLeavesTheIssuedSheetsIssuedAndNamesThoseItChanged() {
         // the firm's self weights enter every project's calculation (docs/engine.md, Self weight): the save itself
-        // must supersede what they change, since no GET does any more
+        // names what they change, since no GET writes
         Client eng = server.as("erin", Role.ENGINEER), chk = server.as("cody", Role.CHECKER), admin = server.as("admin", Role.ADMINISTRATOR);
         issue(eng, chk);
+        var ref = server.ref();
         String page = admin.get("/admin/firm").body();
         var r = admin.post("/admin/firm", List.of(Map.entry("firmName", "Tidewater Structural"), Map.entry("logoText", ""),
                 Map.entry("defaultEdition", "ASCE 7-16"), Map.entry("infillBeamWeight", "35"), Map.entry("gridBeamWeight", "40"),
                 Map.entry("girderWeight", "55"), Map.entry("columnWeight", "50"), Map.entry("version", version(page, "/admin/firm"))));
         assertThat(r.statusCode()).isEqualTo(303);
-        assertThat(server.office.review().reviews().view(server.ref()).history()).extracting(x -> x.revision().state())
-                .endsWith(SheetState.SUPERSEDED, SheetState.PREPARING);
+        assertThat(server.office.review().reviews().view(ref).current().revision().state()).isEqualTo(SheetState.ISSUED);
         assertThat(server.office.review().audit().page(1000, 0)).anySatisfy(e -> {
-            assertThat(e.action()).isEqualTo("supersede");
+            assertThat(e.action()).isEqualTo("edit");
+            assertThat(e.detail()).contains("changed since issue");
             assertThat(e.actorUsername()).isEqualTo("admin");
         });
     }
 
+    /** Brings the member's mark sheet to issued (the tests share one server, in no set order). */
     private static void issue(Client eng, Client chk) {
-        if (server.office.review().reviews().view(server.ref()).current().revision().state() == SheetState.ISSUED) return;
+        var now = server.office.review().reviews().view(server.ref()).current().revision();
+        if (now.state() == SheetState.ISSUED && !now.outdatedBy(com.baysheet.review.CalcFingerprint.of(server.mark().record()))) return;
         String sheet = server.sheetPath();
         String html = eng.get(sheet).body();
         assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
         html = chk.get(sheet).body();
         assertThat(chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
         html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")))).statusCode()).isEqualTo(303);
+        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")), Map.entry("description", "First issue"))).statusCode()).isEqualTo(303);
         assertThat(state(eng.get(sheet).body())).isEqualTo("issued");
     }
 }

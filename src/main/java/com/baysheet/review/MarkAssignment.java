@@ -1,0 +1,109 @@
+package com.baysheet.review;
+
+import com.baysheet.framing.TypicalGroup;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * Which mark each typical group of a derivation carries, given the marks stored so far and the mark each
+ * member carried before. Marks never renumber:
+ * <ol>
+ * <li>a group keeps the mark its members carried whose calculation is still theirs (an edit of one bay leaves
+ * the rest of its group with their mark; an edit undone brings the split-off members back to it);</li>
+ * <li>otherwise, largest group first, a group keeps the mark most of its members carried, if no other group
+ * has taken it (a change to every member of a group keeps its mark, and its sheet is "changed since issue");</li>
+ * <li>otherwise a group whose calculation is that of a mark no group has taken gets that mark (a group that
+ * reappears, such as an edit undone, gets its old mark back);</li>
+ * <li>what is left is a new mark, the next free number of its prefix, naming the mark most of its members came
+ * from (a group split off by an edit).</li>
+ * </ol>
+ * A stored mark no group carries is kept, inactive, so that its number is never given again.
+ */
+public final class MarkAssignment {
+    /** One group and its mark ({@code mark.id()} 0 for a new one). */
+    public record Assigned(TypicalGroup group, Mark mark) {}
+
+    /** The groups with their marks (in the groups' order), and every stored mark as it now stands. */
+    public record Result(List<Assigned> assigned, List<Mark> retired) {}
+
+    private MarkAssignment() {}
+
+    /** @param carried each member id and the id of the mark it carried before */
+    public static Result of(List<TypicalGroup> groups, List<Mark> stored, Map<String, Long> carried) {
+        Map<TypicalGroup, Mark> chosen = new HashMap<>();
+        Map<TypicalGroup, String> calc = new HashMap<>();
+        Set<Long> taken = new HashSet<>();
+        for (TypicalGroup g : groups) calc.put(g, CalcFingerprint.of(g.calculation()));
+        Map<Long, Mark> byId = new HashMap<>();
+        for (Mark m : stored) byId.put(m.id(), m);
+        for (TypicalGroup g : groups) {
+            Mark m = byId.get(mostCarried(g, carried, byId, x -> x.calc().equals(calc.get(g))));
+            if (m != null && !taken.contains(m.id()) && m.prefix().equals(Mark.prefix(g.role()))) {
+                chosen.put(g, m.given(calc.get(g), true));
+                taken.add(m.id());
+            }
+        }
+        List<TypicalGroup> bySize = new ArrayList<>(groups);
+        bySize.sort(Comparator.comparingInt((TypicalGroup g) -> -g.members().size()));
+        for (TypicalGroup g : bySize) {
+            if (chosen.containsKey(g)) continue;
+            Mark m = byId.get(mostCarried(g, carried, byId));
+            if (m != null && !taken.contains(m.id()) && m.prefix().equals(Mark.prefix(g.role()))) {
+                chosen.put(g, m.given(calc.get(g), true));
+                taken.add(m.id());
+            }
+        }
+        for (TypicalGroup g : groups) {
+            if (chosen.containsKey(g)) continue;
+            stored.stream().filter(m -> m.calc().equals(calc.get(g)) && m.prefix().equals(Mark.prefix(g.role())) && !taken.contains(m.id()))
+                    .min(Comparator.comparing((Mark m) -> !m.active()).thenComparingInt(Mark::seq))
+                    .ifPresent(m -> { chosen.put(g, m.given(calc.get(g), true)); taken.add(m.id()); });
+        }
+        Set<String> texts = new HashSet<>();
+        Map<String, Integer> last = new HashMap<>();
+        for (Mark m : stored) {
+            texts.add(m.text());
+            last.merge(m.prefix(), m.seq(), Math::max);
+        }
+        List<Assigned> out = new ArrayList<>();
+        for (TypicalGroup g : groups) {
+            Mark m = chosen.get(g);
+            if (m == null) {
+                String prefix = Mark.prefix(g.role());
+                int seq = last.getOrDefault(prefix, 0) + 1;
+                // a renamed mark may hold the text a number would print: that number is passed over (bounded by the marks stored)
+                while (texts.contains(prefix + seq)) seq++;
+                last.put(prefix, seq);
+                texts.add(prefix + seq);
+                m = new Mark(0, prefix, seq, prefix + seq, calc.get(g), mostCarried(g, carried, byId), true);
+            }
+            out.add(new Assigned(g, m));
+        }
+        List<Mark> retired = stored.stream().filter(m -> !taken.contains(m.id())).map(m -> m.given(m.calc(), false)).toList();
+        return new Result(out, retired);
+    }
+
+    /** The stored mark most of the group's members carried (the first in reading order on a tie), or null. */
+    private static Long mostCarried(TypicalGroup g, Map<String, Long> carried, Map<Long, Mark> stored) {
+        return mostCarried(g, carried, stored, m -> true);
+    }
+
+    /** As {@link #mostCarried(TypicalGroup, Map, Map)}, among the marks that pass {@code which}. */
+    private static Long mostCarried(TypicalGroup g, Map<String, Long> carried, Map<Long, Mark> stored, java.util.function.Predicate<Mark> which) {
+        Map<Long, Integer> count = new HashMap<>();
+        Long best = null;
+        for (String id : g.memberIds()) {
+            Long m = carried.get(id);
+            if (m == null || !stored.containsKey(m) || !which.test(stored.get(m))) continue;
+            int n = count.merge(m, 1, Integer::sum);
+            if (best == null || n > count.get(best)) best = m;
+        }
+        return best;
+    }
+}

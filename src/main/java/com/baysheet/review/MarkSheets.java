@@ -1,0 +1,72 @@
+package com.baysheet.review;
+
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.TypicalGroup;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * A project's typical members, each with its mark: one sheet per mark, the unit of review. A mark sheet's
+ * subject is {@link #PREFIX} and the mark's stored id, so that renaming a mark keeps its sheet and history.
+ */
+public final class MarkSheets {
+    public static final String PREFIX = "mark-";
+
+    /** One mark's sheet: the mark, its group of members, and the text of the mark it was split from (or null). */
+    public record MarkSheet(Mark mark, TypicalGroup group, String origin) {
+        public String text() { return mark.text(); }
+
+        /** The record the sheet prints and is checked on: the group's calculation under the mark, with its locations. */
+        public CalcRecord record() { return group.record(mark.text()); }
+
+        public SheetRef ref(long projectId) { return new SheetRef(projectId, PREFIX + mark.id()); }
+
+        /** Whether the mark is stored, so that its sheet can be checked (a mark is stored by the model write). */
+        public boolean stored() { return mark.id() != 0; }
+    }
+
+    private final List<MarkSheet> sheets;
+    private final Map<String, MarkSheet> byMember = new HashMap<>();
+    private final Map<Long, MarkSheet> byId = new HashMap<>();
+
+    public MarkSheets(List<MarkSheet> sheets) {
+        this.sheets = List.copyOf(sheets);
+        for (MarkSheet s : this.sheets) {
+            for (DerivedMember m : s.group().members()) byMember.put(m.id(), s);
+            if (s.stored()) byId.put(s.mark().id(), s);
+        }
+    }
+
+    /** The marks a derivation is given when none are stored yet (what a project's first model write stores), unsaved. */
+    public static MarkSheets fresh(com.baysheet.framing.Derived d) {
+        var r = MarkAssignment.of(com.baysheet.framing.Typicals.of(d), List.of(), Map.of());
+        return new MarkSheets(r.assigned().stream().map(a -> new MarkSheet(a.mark(), a.group(), null)).toList());
+    }
+
+    /** In reading order (by each mark's first location). */
+    public List<MarkSheet> all() { return sheets; }
+
+    public Optional<MarkSheet> ofMember(String memberId) { return Optional.ofNullable(byMember.get(memberId)); }
+
+    public Optional<MarkSheet> byId(long markId) { return Optional.ofNullable(byId.get(markId)); }
+
+    /** The member → label lookup other sheets and schedules print: the member's mark, or its id where it has none. */
+    public String label(String memberId) {
+        MarkSheet s = byMember.get(memberId);
+        return s == null ? memberId : s.text();
+    }
+
+    /** The mark id a sheet subject names, or empty when the subject is not a mark sheet's. */
+    public static Optional<Long> markId(String subject) {
+        if (subject == null || !subject.startsWith(PREFIX)) return Optional.empty();
+        try {
+            return Optional.of(Long.parseLong(subject.substring(PREFIX.length())));
+        } catch (NumberFormatException e) {
+            return Optional.empty();
+        }
+    }
+}
