@@ -35,7 +35,8 @@ public final class Derivation {
             boolean below = l.elevation() < b.levels().get(order.get(0)).elevation();
             LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid(), below);
             LevelFraming f = new LevelFraming(cache, plan, b.selfWeights(),
-                    b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList()).derive();
+                    b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList(),
+                    RoofSteps.of(b.context(), plan, b.levels())).derive();
             plans.add(plan);
             framings.add(f);
             members.addAll(f.members);

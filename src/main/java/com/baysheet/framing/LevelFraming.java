@@ -33,13 +33,15 @@ final class LevelFraming {
     private final Segment[][] alongX, alongY;
     private final SelfWeights weights;
     private final List<GridLineLoad> lineLoads;
+    private final RoofSteps steps;
 
     @SuppressWarnings("unchecked")
     LevelFraming(MemberCache cache, LevelPlan plan) {
-        this(cache, plan, SelfWeights.NONE, List.of());
+        this(cache, plan, SelfWeights.NONE, List.of(), RoofSteps.NONE);
     }
 
-    LevelFraming(MemberCache cache, LevelPlan plan, SelfWeights weights, List<GridLineLoad> lineLoads) {
+    LevelFraming(MemberCache cache, LevelPlan plan, SelfWeights weights, List<GridLineLoad> lineLoads, RoofSteps steps) {
+        this.steps = steps;
         this.cache = cache;
         this.plan = plan;
         this.weights = weights;
@@ -85,7 +87,8 @@ final class LevelFraming {
             PlanRect trib = beamsAlongX ? new PlanRect(x0, y0 + t - s / 2, x1, y0 + t + s / 2) : new PlanRect(x0 + t - s / 2, y0, x0 + t + s / 2, y1);
             String id = plan.id + "-bay" + plan.at(c, r) + "-b" + k;
             String title = "Beam " + name + " #" + k;
-            MemberResult res = calc(title, MemberKind.INTERIOR_BEAM, beamLength, List.of(new AreaStrip(b.occupancy(), s, 0, beamLength, b.deadLoad())));
+            MemberResult res = calc(title, MemberKind.INTERIOR_BEAM, beamLength, List.of(new AreaStrip(b.occupancy(), s, 0, beamLength, b.deadLoad())),
+                    line, trib);
             members.add(new DerivedMember(id, title, plan.level.name(), MemberRole.INFILL_BEAM, MemberKind.INTERIOR_BEAM, line,
                     beamLength, s, Map.of(b.occupancy(), s * beamLength), s * beamLength, List.of(name), List.of(trib), res));
             PlanRect startHalf = beamsAlongX ? new PlanRect(x0, y0 + t - s / 2, (x0 + x1) / 2, y0 + t + s / 2) : new PlanRect(x0 + t - s / 2, y0, x0 + t + s / 2, (y0 + y1) / 2);
@@ -126,9 +129,9 @@ final class LevelFraming {
                 List.of(), s.points, 0, roofSlope(), Double.NaN, plan.level.roof())
                 .withSelfWeight(girder ? weights.girder() : weights.gridBeam(), source(girder ? "girders" : "grid beams"), 0)
                 .withLineLoads(s.lineLoads);
-        MemberResult res = cache.calculate(in.withSnow(snow()));
         PlanLine pl = s.alongX ? new PlanLine(plan.x(i), plan.y(j), plan.x(i + 1), plan.y(j))
                 : new PlanLine(plan.x(i), plan.y(j), plan.x(i), plan.y(j + 1));
+        MemberResult res = cache.calculate(in.withSnow(snow(pl, s.stripRects)));
         Map<String, Double> areas = new java.util.LinkedHashMap<>();
         for (AreaStrip st : s.strips) areas.merge(st.occupancy(), st.area(), Double::sum);
         for (var p : s.points) for (var a : p.areas()) areas.merge(a.occupancy(), a.area(), Double::sum);
@@ -140,17 +143,22 @@ final class LevelFraming {
         else arrive(i, j + 1, res.right());
     }
 
-    private MemberResult calc(String title, MemberKind kind, double span, List<AreaStrip> strips) {
+    private MemberResult calc(String title, MemberKind kind, double span, List<AreaStrip> strips, PlanLine line, PlanRect trib) {
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(span), 1, strips, List.of(),
                 List.of(), 0, roofSlope(), Double.NaN, plan.level.roof())
                 .withSelfWeight(weights.infillBeam(), source("infill beams"), 0);
-        return cache.calculate(in.withSnow(snow()));
+        return cache.calculate(in.withSnow(snow(line, List.of(trib))));
     }
 
-    /** A roof level's snow on its members' strips (the snow site itself is the project's, in the context). */
-    private SnowOnRoof snow() {
+    /**
+     * A roof level's snow on a member's strips (the snow site itself is the project's, in the context), with the
+     * drifts of the roof steps that reach the strips.
+     */
+    private SnowOnRoof snow(PlanLine line, List<PlanRect> rects) {
         Level l = plan.level;
-        return l.roof() ? new SnowOnRoof(l.surface().roof(l.roofSlope()), plan.belowAnother) : null;
+        if (!l.roof()) return null;
+        return new SnowOnRoof(l.surface().roof(l.roofSlope()), plan.belowAnother,
+                steps.isEmpty() ? List.of() : steps.on(line, rects, cache.context()));
     }
 
     private String source(String role) { return weights.origin() + " for " + role; }

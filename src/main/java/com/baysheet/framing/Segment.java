@@ -20,6 +20,8 @@ final class Segment {
     /** Line loads along the member (cladding, walls): they load it but make it no member where there is none. */
     final List<LineLoad> lineLoads = new ArrayList<>();
     final List<PlanRect> outline = new ArrayList<>();
+    /** The plan outline of each slab strip, in the order of {@link #strips} (for the drift at a roof step). */
+    final List<PlanRect> stripRects = new ArrayList<>();
     final List<String> bays = new ArrayList<>();
     boolean cantilever;
     double direct;
@@ -34,6 +36,7 @@ final class Segment {
     void strip(String occupancy, double width, double dead, PlanRect rect, String bay) {
         strips.add(new AreaStrip(occupancy, width, 0, length, dead));
         outline.add(rect);
+        stripRects.add(rect);
         direct += width * length;
         serves(bay);
     }
