@@ -42,7 +42,7 @@ final class BuildingMapper {
         // every level's line loads, an unframed level's too: the derivation refuses those, so clearing the bays
         // beneath a load is refused rather than leaving the load carried by nothing
         Building b = new Building(p.info().name(), ctx, grid, levels).withSelfWeights(selfWeights(c, p.info().units()))
-                .withLineLoads(LineLoadStore.forBuilding(c, grid, stored));
+                .withLineLoads(LineLoadStore.forBuilding(c, grid, stored)).withPointLoads(PointLoadStore.forBuilding(c, grid, stored));
         return new Model(p, OccupancyStore.catalogueVersion(c), b, stored, unframed, Results.firmVersion(c));
     }
 

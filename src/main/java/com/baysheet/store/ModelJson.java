@@ -112,6 +112,22 @@ public final class ModelJson {
                 n.hasNonNull("liveOccupancy") ? text(n, "liveOccupancy") : null, flag(n, "partitionWall"));
     }
 
+    /**
+     * A point load: {@code label}, {@code dead} (default 0), {@code live} (default 0) with {@code liveOccupancy}; in a bay
+     * by {@code xLine} and {@code yLine} (the lines at its west and south sides) with {@code x} and {@code y} from that
+     * corner, or on a grid-line member by {@code line}, {@code from}, {@code to} (and {@code axis} where a name is on
+     * both axes) with {@code distance} from the from line toward the to line.
+     */
+    public static PointLoadEntry pointLoad(JsonNode n) {
+        double dead = n.hasNonNull("dead") ? number(n, "dead") : 0, live = n.hasNonNull("live") ? number(n, "live") : 0;
+        String occ = n.hasNonNull("liveOccupancy") ? text(n, "liveOccupancy") : null;
+        if (n.has("line") || n.has("distance"))
+            return PointLoadEntry.onMember(text(n, "label"), n.hasNonNull("axis") ? choice(n, "axis", "X", "Y").toLowerCase() : null,
+                    lineName(n, "line"), lineName(n, "from"), lineName(n, "to"), number(n, "distance"), dead, live, occ);
+        return PointLoadEntry.inBay(text(n, "label"), lineName(n, "xLine"), lineName(n, "yLine"), number(n, "x"), number(n, "y"),
+                dead, live, occ);
+    }
+
     public static FirmOccupancy firmOccupancy(JsonNode n) {
         return new FirmOccupancy(text(n, "id"), text(n, "name"), UnitSystem.parse("units", text(n, "units")),
                 number(n, "uniform"), n.has("concentrated") ? number(n, "concentrated") : 0, number(n, "contactSide"),

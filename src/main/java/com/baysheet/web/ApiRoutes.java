@@ -37,6 +37,10 @@ final class ApiRoutes {
                 store.lineLoads().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.LineLoadJson::of).toList()));
         r.post("/api/projects/{project}/levels/{level}/line-loads", this::addLineLoad);
         r.delete("/api/projects/{project}/levels/{level}/line-loads/{lineLoad}", this::deleteLineLoad);
+        r.get("/api/projects/{project}/levels/{level}/point-loads", ctx -> Json.send(ctx,
+                store.pointLoads().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.PointLoadJson::of).toList()));
+        r.post("/api/projects/{project}/levels/{level}/point-loads", this::addPointLoad);
+        r.delete("/api/projects/{project}/levels/{level}/point-loads/{pointLoad}", this::deletePointLoad);
         r.get("/api/occupancies", ctx -> Json.send(ctx, store.occupancies().findAll()));
         r.post("/api/occupancies", ctx -> {
             store.occupancies().add(Editors.of(ctx), ModelJson.firmOccupancy(Json.body(ctx)));
@@ -115,6 +119,20 @@ final class ApiRoutes {
         var saved = store.lineLoads().add(Editors.of(ctx), id, ModelJson.version(body), Ids.level(ctx), ModelJson.lineLoad(body));
         ctx.header("Location", "/api/projects/" + id + "/levels/" + Ids.level(ctx) + "/line-loads/" + saved.id());
         saved(ctx, 201, id, ApiViews.LineLoadJson.of(saved));
+    }
+
+    void addPointLoad(Context ctx) {
+        JsonNode body = Json.body(ctx);
+        long id = Ids.project(ctx);
+        var saved = store.pointLoads().add(Editors.of(ctx), id, ModelJson.version(body), Ids.level(ctx), ModelJson.pointLoad(body));
+        ctx.header("Location", "/api/projects/" + id + "/levels/" + Ids.level(ctx) + "/point-loads/" + saved.id());
+        saved(ctx, 201, id, ApiViews.PointLoadJson.of(saved));
+    }
+
+    void deletePointLoad(Context ctx) {
+        long id = Ids.project(ctx);
+        store.pointLoads().delete(Editors.of(ctx), id, queryVersion(ctx.queryParam("version")), Ids.level(ctx), Ids.pointLoad(ctx));
+        saved(ctx, 200, id, Map.of("deleted", Ids.pointLoad(ctx)));
     }
 
     void deleteLineLoad(Context ctx) {

@@ -63,6 +63,7 @@ public final class Server {
             new LevelRoutes(store).install(cfg.routes);
             new BayRoutes(store).install(cfg.routes);
             new LineLoadRoutes(store).install(cfg.routes);
+            new PointLoadRoutes(store).install(cfg.routes);
             new PlanRoutes(store).install(cfg.routes);
             new MemberRoutes(store).install(cfg.routes);
             new TakeDownRoutes(store).install(cfg.routes);
