@@ -4,6 +4,7 @@ import com.baysheet.engine.beam.BeamLoads;
 import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
+import com.baysheet.engine.record.Sketch;
 import com.baysheet.engine.snow.DriftStrip;
 import com.baysheet.engine.snow.DriftSurcharge;
 import com.baysheet.engine.units.Quantity;
@@ -22,7 +23,8 @@ final class MemberDrift {
     private MemberDrift() {}
 
     /** Adds the strip's drift to {@code snow}; returns the load added (lb or kN). */
-    static double strip(Edition ed, DriftSurcharge d, DriftStrip s, String label, RecordBuilder rec, BeamLoads snow) {
+    static double strip(Edition ed, DriftSurcharge d, DriftStrip s, String label, RecordBuilder rec, BeamLoads snow,
+                        java.util.List<Sketch.Drift> sketch) {
         Clause c = ed.clause("snow.driftShape");
         double ext = d.extent();
         if (s.parallel()) {
@@ -30,6 +32,7 @@ final class MemberDrift {
             double w = d.over(a, b);
             if (w <= 0) return 0;
             snow.distributed(w, s.from(), s.to());
+            sketch.add(new Sketch.Drift(s.from(), s.to(), w, w));
             rec.step("w_S,drift" + label, "Drift surcharge on the strip " + rec.show(Math.max(0, a), Quantity.LENGTH) + " to "
                             + rec.show(Math.min(b, ext), Quantity.LENGTH) + " from the step (parallel to it), uniform along the member from x = "
                             + rec.show(s.from(), Quantity.LENGTH) + " to " + rec.show(s.to(), Quantity.LENGTH),
@@ -52,6 +55,7 @@ final class MemberDrift {
         }
         double dLo = s.nearFrom() + k * (lo - s.from()), dHi = s.nearFrom() + k * (hi - s.from());
         double wLo = s.width() * d.at(dLo), wHi = s.width() * d.at(dHi);
+        sketch.add(new Sketch.Drift(lo, hi, wLo, wHi));
         rec.step("W_S,drift" + label, "Drift surcharge on a strip " + rec.show(s.width(), Quantity.LENGTH) + " wide running away from the step: "
                         + (Math.min(wLo, wHi) <= 0 ? "triangular" : "trapezoidal") + " load from " + rec.show(wLo, Quantity.LINE_LOAD) + " at x = "
                         + rec.show(lo, Quantity.LENGTH) + " to " + rec.show(wHi, Quantity.LINE_LOAD) + " at x = " + rec.show(hi, Quantity.LENGTH)

@@ -68,7 +68,7 @@ final class MemberSnow {
             DriftSurcharge d = i == 0 ? l.drift() : RoofSnow.drift(ctx, ctx.snow(), l.sloped(), sd.step(), rec);
             if (!d.required()) continue;
             for (int k = 0; k < sd.strips().size(); k++)
-                added += MemberDrift.strip(ed, d, sd.strips().get(k), (i + 1) + "." + (k + 1), rec, book.snow);
+                added += MemberDrift.strip(ed, d, sd.strips().get(k), (i + 1) + "." + (k + 1), rec, book.snow, book.driftSketch);
         }
         if (added > 0) {
             rec.result("snow.drift.load", "Drift surcharge carried by this member", added, Quantity.FORCE);
