@@ -24,7 +24,7 @@ CREATE TABLE point_load (
     CONSTRAINT fk_point_load_level FOREIGN KEY (level_id) REFERENCES building_level (id) ON DELETE CASCADE
 );
 CREATE INDEX ix_point_load_level ON point_load (level_id);
--- A project's own self weights by role (plf; SI projects convert exactly to kN/m), overriding the firm's defaults
+-- A project's own self weights by role, in its base units (plf, or kN/m on an SI project), overriding the firm's defaults
 -- (V109). All four NULL: the firm's defaults apply; the store sets all four or none.
 ALTER TABLE project ADD COLUMN sw_infill_beam DOUBLE PRECISION CHECK (sw_infill_beam >= 0);
 ALTER TABLE project ADD COLUMN sw_grid_beam DOUBLE PRECISION CHECK (sw_grid_beam >= 0);

@@ -64,6 +64,7 @@ public final class Server {
             new BayRoutes(store).install(cfg.routes);
             new LineLoadRoutes(store).install(cfg.routes);
             new PointLoadRoutes(store).install(cfg.routes);
+            new SelfWeightRoutes(store).install(cfg.routes);
             new PlanRoutes(store).install(cfg.routes);
             new MemberRoutes(store).install(cfg.routes);
             new TakeDownRoutes(store).install(cfg.routes);
