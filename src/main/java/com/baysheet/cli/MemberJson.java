@@ -37,7 +37,7 @@ final class MemberJson {
     record Parsed(CalcContext context, MemberInput input) {}
 
     static final Set<String> TOP = Set.of("edition", "units", "subject", "kind", "support", "floorsSupported", "strips",
-            "areas", "pointLoads", "selfWeight", "roofSlope", "EI", "onRoof", "options", "customOccupancies", "floors");
+            "areas", "pointLoads", "selfWeight", "roofSlope", "EI", "onRoof", "options", "customOccupancies", "floors", "snow");
 
     static Parsed parse(JsonNode root) {
         JsonFields f = JsonFields.strict(root, "", TOP);
@@ -46,7 +46,7 @@ final class MemberJson {
         OccupancyCatalogue catalogue = OccupancyCatalogue.builtIn();
         int i = 0;
         for (JsonNode c : f.array("customOccupancies")) catalogue = catalogue.with(custom(c, "customOccupancies[" + i++ + "]", units));
-        CalcContext ctx = new CalcContext(Editions.builtIn().get(edition), units, catalogue, options(f));
+        CalcContext plain = new CalcContext(Editions.builtIn().get(edition), units, catalogue, options(f));
         String subject = f.text("subject");
         MemberKind kind = MemberKind.parse("kind", f.text("kind"));
         Support support = support(JsonFields.strict(f.node("support"), "support", Set.of("type", "span", "overhang", "length")));
@@ -59,7 +59,10 @@ final class MemberJson {
         int floorsSupported = f.integer("floorsSupported", floors.isEmpty() ? 1 : floors.size());
         MemberInput in = JsonFields.at("", () -> new MemberInput(subject, kind, support, floorsSupported, strips, areas, points,
                 f.number("selfWeight", 0), f.number("roofSlope", Double.NaN), ei, f.flag("onRoof", false), floors));
-        return new Parsed(ctx, in);
+        SnowJson.Parsed snow = SnowJson.parse(f, f.number("roofSlope", Double.NaN));
+        if (snow == null) return new Parsed(plain, in);
+        if (kind.isColumn()) throw new InputError("snow", "column", "snow is given to the beams and girders of a roof; a column carries it in its loads");
+        return new Parsed(plain.withSnow(snow.site()), in.withSnow(snow.roof()));
     }
 
     private static DesignOptions options(JsonFields top) {

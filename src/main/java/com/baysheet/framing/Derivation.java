@@ -21,6 +21,10 @@ public final class Derivation {
             if (b.levels().stream().noneMatch(v -> v.name().equals(l.level())))
                 throw new com.baysheet.engine.InputError("lineLoads[" + l.label() + "].level", l.level(),
                         "is not a framed level of the building: the line load \"" + l.label() + "\" needs a member beneath it");
+        for (var p : b.pointLoads())
+            if (b.levels().stream().noneMatch(v -> v.name().equals(p.level())))
+                throw new com.baysheet.engine.InputError("pointLoads[" + p.label() + "].level", p.level(),
+                        "is not a framed level of the building: the point load \"" + p.label() + "\" needs a member beneath it");
         ModelCheck.validate(b);
         List<Integer> order = new ArrayList<>();
         for (int k = 0; k < b.levels().size(); k++) order.add(k);
@@ -35,7 +39,9 @@ public final class Derivation {
             boolean below = l.elevation() < b.levels().get(order.get(0)).elevation();
             LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid(), below);
             LevelFraming f = new LevelFraming(cache, plan, b.selfWeights(),
-                    b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList()).derive();
+                    b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList(),
+                    RoofSteps.of(b.context(), plan, b.levels()),
+                    b.pointLoads().stream().filter(x -> x.level().equals(l.name())).toList()).derive();
             plans.add(plan);
             framings.add(f);
             members.addAll(f.members);

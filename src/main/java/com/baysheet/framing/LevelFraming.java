@@ -11,6 +11,8 @@ import com.baysheet.engine.member.MemberResult;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Direction;
 import com.baysheet.framing.model.GridLineLoad;
+import com.baysheet.framing.model.GridPointLoad;
+import com.baysheet.engine.load.PointLoad;
 import com.baysheet.framing.model.SelfWeights;
 import com.baysheet.framing.model.Side;
 
@@ -33,13 +35,18 @@ final class LevelFraming {
     private final Segment[][] alongX, alongY;
     private final SelfWeights weights;
     private final List<GridLineLoad> lineLoads;
+    private final RoofSteps steps;
+    private final List<GridPointLoad> pointLoads;
 
     @SuppressWarnings("unchecked")
     LevelFraming(MemberCache cache, LevelPlan plan) {
-        this(cache, plan, SelfWeights.NONE, List.of());
+        this(cache, plan, SelfWeights.NONE, List.of(), RoofSteps.NONE, List.of());
     }
 
-    LevelFraming(MemberCache cache, LevelPlan plan, SelfWeights weights, List<GridLineLoad> lineLoads) {
+    LevelFraming(MemberCache cache, LevelPlan plan, SelfWeights weights, List<GridLineLoad> lineLoads, RoofSteps steps,
+                 List<GridPointLoad> pointLoads) {
+        this.steps = steps;
+        this.pointLoads = pointLoads;
         this.cache = cache;
         this.plan = plan;
         this.weights = weights;
@@ -53,12 +60,14 @@ final class LevelFraming {
     }
 
     LevelFraming derive() {
+        for (GridPointLoad p : pointLoads) PointLoads.check(plan, p, cache.context().catalogue());
         for (int c = 0; c < plan.xCells(); c++)
             for (int r = 0; r < plan.yCells(); r++) {
                 Bay b = plan.floored(c, r);
                 if (b != null) bay(b);
             }
         for (GridLineLoad l : lineLoads) LineLoads.place(plan, l, alongX, alongY, cache.context().catalogue());
+        for (GridPointLoad p : pointLoads) if (!p.inBay()) PointLoads.onLine(plan, p, alongX, alongY);
         for (Segment[] row : alongX) for (Segment s : row) if (s.loaded()) gridMember(s);
         for (Segment[] row : alongY) for (Segment s : row) if (s.loaded()) gridMember(s);
         return this;
@@ -75,6 +84,9 @@ final class LevelFraming {
         // grid-line members parallel to the beams: half a spacing each
         Segment lo = beamsAlongX ? alongX[c][r] : alongY[c][r];
         Segment hi = beamsAlongX ? alongX[c][r + 1] : alongY[c + 1][r];
+        Map<Integer, List<PointLoad>> points = PointLoads.inBay(plan, b, pointLoads, cache.context().system());
+        lo.applied.addAll(points.getOrDefault(0, List.of()));
+        hi.applied.addAll(points.getOrDefault(n + 1, List.of()));
         lo.strip(b.occupancy(), s / 2, b.deadLoad(), beamsAlongX ? new PlanRect(x0, y0, x1, y0 + s / 2) : new PlanRect(x0, y0, x0 + s / 2, y1), name);
         hi.strip(b.occupancy(), s / 2, b.deadLoad(), beamsAlongX ? new PlanRect(x0, y1 - s / 2, x1, y1) : new PlanRect(x1 - s / 2, y0, x1, y1), name);
         Segment startGirder = beamsAlongX ? alongY[c][r] : alongX[c][r];
@@ -85,7 +97,8 @@ final class LevelFraming {
             PlanRect trib = beamsAlongX ? new PlanRect(x0, y0 + t - s / 2, x1, y0 + t + s / 2) : new PlanRect(x0 + t - s / 2, y0, x0 + t + s / 2, y1);
             String id = plan.id + "-bay" + plan.at(c, r) + "-b" + k;
             String title = "Beam " + name + " #" + k;
-            MemberResult res = calc(title, MemberKind.INTERIOR_BEAM, beamLength, List.of(new AreaStrip(b.occupancy(), s, 0, beamLength, b.deadLoad())));
+            MemberResult res = calc(title, MemberKind.INTERIOR_BEAM, beamLength, List.of(new AreaStrip(b.occupancy(), s, 0, beamLength, b.deadLoad())),
+                    line, trib, points.getOrDefault(k, List.of()));
             members.add(new DerivedMember(id, title, plan.level.name(), MemberRole.INFILL_BEAM, MemberKind.INTERIOR_BEAM, line,
                     beamLength, s, Map.of(b.occupancy(), s * beamLength), s * beamLength, List.of(name), List.of(trib), res));
             PlanRect startHalf = beamsAlongX ? new PlanRect(x0, y0 + t - s / 2, (x0 + x1) / 2, y0 + t + s / 2) : new PlanRect(x0 + t - s / 2, y0, x0 + t + s / 2, (y0 + y1) / 2);
@@ -122,13 +135,15 @@ final class LevelFraming {
                 : plan.grid.y().name(j) + "-" + plan.grid.y().name(j + 1);
         String title = (girder ? "Girder " : "Beam ") + line + "/" + between;
         String id = plan.id + (s.alongX ? "-h" : "-v") + plan.at(i, j);
+        List<PointLoad> carried = new ArrayList<>(s.points);
+        carried.addAll(s.applied);
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(s.length), 1, s.strips,
-                List.of(), s.points, 0, roofSlope(), Double.NaN, plan.level.roof())
+                List.of(), carried, 0, roofSlope(), Double.NaN, plan.level.roof())
                 .withSelfWeight(girder ? weights.girder() : weights.gridBeam(), source(girder ? "girders" : "grid beams"), 0)
                 .withLineLoads(s.lineLoads);
-        MemberResult res = cache.calculate(in.withSnow(snow()));
         PlanLine pl = s.alongX ? new PlanLine(plan.x(i), plan.y(j), plan.x(i + 1), plan.y(j))
                 : new PlanLine(plan.x(i), plan.y(j), plan.x(i), plan.y(j + 1));
+        MemberResult res = cache.calculate(in.withSnow(snow(pl, s.stripRects)));
         Map<String, Double> areas = new java.util.LinkedHashMap<>();
         for (AreaStrip st : s.strips) areas.merge(st.occupancy(), st.area(), Double::sum);
         for (var p : s.points) for (var a : p.areas()) areas.merge(a.occupancy(), a.area(), Double::sum);
@@ -140,17 +155,23 @@ final class LevelFraming {
         else arrive(i, j + 1, res.right());
     }
 
-    private MemberResult calc(String title, MemberKind kind, double span, List<AreaStrip> strips) {
+    private MemberResult calc(String title, MemberKind kind, double span, List<AreaStrip> strips, PlanLine line, PlanRect trib,
+                              List<PointLoad> applied) {
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(span), 1, strips, List.of(),
-                List.of(), 0, roofSlope(), Double.NaN, plan.level.roof())
+                applied, 0, roofSlope(), Double.NaN, plan.level.roof())
                 .withSelfWeight(weights.infillBeam(), source("infill beams"), 0);
-        return cache.calculate(in.withSnow(snow()));
+        return cache.calculate(in.withSnow(snow(line, List.of(trib))));
     }
 
-    /** A roof level's snow on its members' strips (the snow site itself is the project's, in the context). */
-    private SnowOnRoof snow() {
+    /**
+     * A roof level's snow on a member's strips (the snow site itself is the project's, in the context), with the
+     * drifts of the roof steps that reach the strips.
+     */
+    private SnowOnRoof snow(PlanLine line, List<PlanRect> rects) {
         Level l = plan.level;
-        return l.roof() ? new SnowOnRoof(l.surface().roof(l.roofSlope()), plan.belowAnother) : null;
+        if (!l.roof()) return null;
+        return new SnowOnRoof(l.surface().roof(l.roofSlope()), plan.belowAnother,
+                steps.isEmpty() ? List.of() : steps.on(line, rects, cache.context()));
     }
 
     private String source(String role) { return weights.origin() + " for " + role; }

@@ -19,7 +19,11 @@ final class Segment {
     final List<PointLoad> points = new ArrayList<>();
     /** Line loads along the member (cladding, walls): they load it but make it no member where there is none. */
     final List<LineLoad> lineLoads = new ArrayList<>();
+    /** Point loads applied to the member (a rooftop unit): they load it but make it no girder and no member where there is none. */
+    final List<PointLoad> applied = new ArrayList<>();
     final List<PlanRect> outline = new ArrayList<>();
+    /** The plan outline of each slab strip, in the order of {@link #strips} (for the drift at a roof step). */
+    final List<PlanRect> stripRects = new ArrayList<>();
     final List<String> bays = new ArrayList<>();
     boolean cantilever;
     double direct;
@@ -34,6 +38,7 @@ final class Segment {
     void strip(String occupancy, double width, double dead, PlanRect rect, String bay) {
         strips.add(new AreaStrip(occupancy, width, 0, length, dead));
         outline.add(rect);
+        stripRects.add(rect);
         direct += width * length;
         serves(bay);
     }

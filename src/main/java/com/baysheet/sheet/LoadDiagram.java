@@ -79,9 +79,39 @@ final class LoadDiagram {
             if (crossesPoint(cx - lw / 2 - 2, cx + lw / 2 + 2)) cx = Math.max(x0, LEFT) + lw / 2 + 2;
             Text.show(t, fonts.regular, 5.5f, Fonts.INK, Element.ALIGN_CENTER, label, cx, y0 + 12.5f);
         }
+        drift(rows.size());
         if (s.distributed().size() > MAX_ROWS)
             Text.show(t, fonts.regular, 5.5f, Fonts.GREY, Element.ALIGN_LEFT,
                     "+ " + (s.distributed().size() - MAX_ROWS) + " more distributed loads (see steps)", LEFT, HEIGHT - 8);
+    }
+
+    /**
+     * The snow drift surcharge at a roof step, in the row above the distributed loads: its outline to scale of its
+     * largest intensity (a triangle or trapezoid), labelled with the intensities at its ends.
+     */
+    private void drift(int row) {
+        if (s.drift().isEmpty()) return;
+        double max = 0;
+        for (Sketch.Drift d : s.drift()) max = Math.max(max, Math.max(d.start(), d.end()));
+        if (max <= 0) return;
+        float y0 = BEAM + 3 + Math.min(row, MAX_ROWS) * ROW;
+        t.setLineWidth(0.5f);
+        for (Sketch.Drift d : s.drift()) {
+            float x0 = x(d.from()), x1 = x(d.to());
+            float h0 = (float) (11 * d.start() / max), h1 = (float) (11 * d.end() / max);
+            t.moveTo(x0, y0);
+            t.lineTo(x0, y0 + h0);
+            t.lineTo(x1, y0 + h1);
+            t.lineTo(x1, y0);
+            t.closePath();
+            t.stroke();
+        }
+        Sketch.Drift first = s.drift().get(0);
+        String label = "S drift " + Display.of(first.start(), Quantity.LINE_LOAD, system) + " to "
+                + Display.of(first.end(), Quantity.LINE_LOAD, system) + (s.drift().size() > 1 ? " (+" + (s.drift().size() - 1) + ")" : "");
+        float x0 = x(first.from()), x1 = x(first.to());
+        Text.show(t, fonts.regular, 5.5f, Fonts.INK, Element.ALIGN_CENTER, Text.fit(label, fonts.regular, 5.5f, Math.max(x1 - x0, 80)),
+                Math.max(LEFT + 40, Math.min(RIGHT - 40, (x0 + x1) / 2)), y0 + 13);
     }
 
     private boolean crossesPoint(float from, float to) {

@@ -45,24 +45,9 @@ final class BuildingMapper {
         }
         // every level's line loads, an unframed level's too: the derivation refuses those, so clearing the bays
         // beneath a load is refused rather than leaving the load carried by nothing
-        Building b = new Building(p.info().name(), ctx, grid, levels).withSelfWeights(selfWeights(c, p.info().units()))
-                .withLineLoads(LineLoadStore.forBuilding(c, grid, stored));
+        Building b = new Building(p.info().name(), ctx, grid, levels).withSelfWeights(SelfWeightStore.forProject(c, projectId, p.info().units()))
+                .withLineLoads(LineLoadStore.forBuilding(c, grid, stored)).withPointLoads(PointLoadStore.forBuilding(c, grid, stored));
         return new Model(p, OccupancyStore.catalogueVersion(c), b, stored, unframed, Results.firmVersion(c));
-    }
-
-    /** The firm's self weights by role (plf), converted exactly for an SI project; all 0: not included, and said so. */
-    static SelfWeights selfWeights(Connection c, UnitSystem units) {
-        double k = units == UnitSystem.SI ? Convert.KN_PER_M_PER_PLF : 1;
-        try (Handle h = Sql.on(c)) {
-            return h.createQuery("SELECT sw_infill_beam, sw_grid_beam, sw_girder, sw_column FROM firm_setting WHERE id = 1")
-                    .map((rs, ctx) -> {
-                        double i = rs.getDouble("sw_infill_beam"), g = rs.getDouble("sw_grid_beam"),
-                                gi = rs.getDouble("sw_girder"), col = rs.getDouble("sw_column");
-                        if (i == 0 && g == 0 && gi == 0 && col == 0) return SelfWeights.NONE;
-                        return new SelfWeights(i * k, g * k, gi * k, col * k, "firm default");
-                    })
-                    .findFirst().orElse(SelfWeights.NONE);
-        }
     }
 
     private static Level level(LevelInfo l, List<Bay> bays) {

@@ -13,7 +13,7 @@ import java.util.List;
 /**
  * Loads the invented demo projects of demo-data/ (listed in demo-data/index.json) through the same store
  * calls and validation a user's entries go through. Bays are assigned in file order, so a file lists
- * cantilevers after the bays that make their edge an edge, and a level's line loads after its bays.
+ * cantilevers after the bays that make their edge an edge, and a level's line and point loads after its bays.
  */
 public final class Demo {
     private static final ObjectMapper JSON = new ObjectMapper();
@@ -37,6 +37,7 @@ public final class Demo {
             long levelId = store.levels().add(Editor.DEMO, id, version(store, id), ModelJson.level(l)).id();
             for (JsonNode b : l.path("bays")) store.bays().assign(Editor.DEMO, id, version(store, id), levelId, ModelJson.bays(b, store.grids().find(id)));
             for (JsonNode w : l.path("lineLoads")) store.lineLoads().add(Editor.DEMO, id, version(store, id), levelId, ModelJson.lineLoad(w));
+            for (JsonNode w : l.path("pointLoads")) store.pointLoads().add(Editor.DEMO, id, version(store, id), levelId, ModelJson.pointLoad(w));
         }
         return store.projects().find(id);
     }

@@ -40,6 +40,7 @@ public final class GridStore {
             Grid before = find(c, projectId);
             Grid after = withIds(c, projectId, grid, LineMatch.ids(before.x(), grid.x()), LineMatch.ids(before.y(), grid.y()));
             LineLoadStore.requireLines(c, projectId, before, after);
+            PointLoadStore.requireLines(c, projectId, before, after);
             BayRegrid.apply(c, projectId, before, after);
             write(c, projectId, after);
             return null;

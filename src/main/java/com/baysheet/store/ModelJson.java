@@ -125,6 +125,23 @@ public final class ModelJson {
                 n.has("liveOccupancy") ? n.text("liveOccupancy") : null, n.flag("partitionWall", false));
     }
 
+    /**
+     * A point load: {@code label}, {@code dead} (default 0), {@code live} (default 0) with {@code liveOccupancy}; in a bay
+     * by {@code xLine} and {@code yLine} (the lines at its west and south sides) with {@code x} and {@code y} from that
+     * corner, or on a grid-line member by {@code line}, {@code from}, {@code to} (and {@code axis} where a name is on
+     * both axes) with {@code distance} from the from line toward the to line.
+     */
+    public static PointLoadEntry pointLoad(JsonNode node) {
+        JsonFields n = JsonFields.of(node);
+        double dead = n.number("dead", 0), live = n.number("live", 0);
+        String occ = n.has("liveOccupancy") ? n.text("liveOccupancy") : null;
+        if (n.has("line") || n.has("distance"))
+            return PointLoadEntry.onMember(n.text("label"), n.has("axis") ? choice(n, "axis", "X", "Y").toLowerCase() : null,
+                    lineName(n, "line"), lineName(n, "from"), lineName(n, "to"), n.number("distance"), dead, live, occ);
+        return PointLoadEntry.inBay(n.text("label"), lineName(n, "xLine"), lineName(n, "yLine"), n.number("x"), n.number("y"),
+                dead, live, occ);
+    }
+
     public static FirmOccupancy firmOccupancy(JsonNode node) {
         JsonFields n = JsonFields.of(node);
         return new FirmOccupancy(n.text("id"), n.text("name"), UnitSystem.parse("units", n.text("units")),

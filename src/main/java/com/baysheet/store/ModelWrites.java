@@ -170,7 +170,7 @@ public final class ModelWrites {
         Limits.count("levels", m.levels().size(), Limits.MAX_LEVELS, "levels in a project");
         for (StoredLevel l : m.levels())
             Limits.level(m.project().info().units(), l.info().elevation(), l.info().roof(), l.info().roofSlope());
-        if (m.building().levels().isEmpty() && m.building().lineLoads().isEmpty()) return new Derived(m.building(), List.of(), List.of());
+        if (m.building().levels().isEmpty() && m.building().lineLoads().isEmpty() && m.building().pointLoads().isEmpty()) return new Derived(m.building(), List.of(), List.of());
         Derived d = derive.apply(m.building());
         Limits.count("members", d.members().size(), Limits.MAX_MEMBERS, "members in a project");
         return d;

@@ -10,7 +10,7 @@ import java.util.function.Function;
 /** All of the store over one database, wired once. */
 public record Store(ProjectStore projects, GridStore grids, LevelStore levels, BayStore bays,
                     OccupancyStore occupancies, Results results, LineLoadStore lineLoads,
-                    com.baysheet.store.review.MarkBook marks) {
+                    com.baysheet.store.review.MarkBook marks, PointLoadStore pointLoads, SelfWeightStore selfWeights) {
 
     /**
      * @param derive the framing derivation, run to validate each model change, to supersede what it changes
@@ -24,6 +24,7 @@ public record Store(ProjectStore projects, GridStore grids, LevelStore levels, B
         OccupancyStore occupancies = new OccupancyStore(sql);
         return new Store(new ProjectStore(writes), new GridStore(writes), new LevelStore(writes),
                 new BayStore(writes, occupancies), occupancies, results,
-                new LineLoadStore(writes), new com.baysheet.store.review.MarkBook(sql));
+                new LineLoadStore(writes), new com.baysheet.store.review.MarkBook(sql),
+                new PointLoadStore(writes), new SelfWeightStore(writes));
     }
 }

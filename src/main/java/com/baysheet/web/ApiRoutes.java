@@ -38,6 +38,10 @@ final class ApiRoutes {
                 store.lineLoads().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.LineLoadJson::of).toList()), Admit.OFFICE);
         r.post("/api/projects/{project}/levels/{level}/line-loads", this::addLineLoad, Admit.PREPARER);
         r.delete("/api/projects/{project}/levels/{level}/line-loads/{lineLoad}", this::deleteLineLoad, Admit.PREPARER);
+        r.get("/api/projects/{project}/levels/{level}/point-loads", ctx -> Json.send(ctx,
+                store.pointLoads().findByLevel(Ids.project(ctx), Ids.level(ctx)).stream().map(ApiViews.PointLoadJson::of).toList()), Admit.OFFICE);
+        r.post("/api/projects/{project}/levels/{level}/point-loads", this::addPointLoad, Admit.PREPARER);
+        r.delete("/api/projects/{project}/levels/{level}/point-loads/{pointLoad}", this::deletePointLoad, Admit.PREPARER);
         r.get("/api/occupancies", ctx -> Json.send(ctx, store.occupancies().findAll()), Admit.OFFICE);
         r.post("/api/occupancies", ctx -> {
             store.occupancies().add(Editors.of(ctx), ModelJson.firmOccupancy(Json.body(ctx)));
@@ -116,6 +120,20 @@ final class ApiRoutes {
         var saved = store.lineLoads().add(Editors.of(ctx), id, ModelJson.version(body), Ids.level(ctx), ModelJson.lineLoad(body));
         ctx.header("Location", "/api/projects/" + id + "/levels/" + Ids.level(ctx) + "/line-loads/" + saved.id());
         saved(ctx, 201, id, ApiViews.LineLoadJson.of(saved));
+    }
+
+    void addPointLoad(Context ctx) {
+        JsonNode body = Json.body(ctx);
+        long id = Ids.project(ctx);
+        var saved = store.pointLoads().add(Editors.of(ctx), id, ModelJson.version(body), Ids.level(ctx), ModelJson.pointLoad(body));
+        ctx.header("Location", "/api/projects/" + id + "/levels/" + Ids.level(ctx) + "/point-loads/" + saved.id());
+        saved(ctx, 201, id, ApiViews.PointLoadJson.of(saved));
+    }
+
+    void deletePointLoad(Context ctx) {
+        long id = Ids.project(ctx);
+        store.pointLoads().delete(Editors.of(ctx), id, queryVersion(ctx.queryParam("version")), Ids.level(ctx), Ids.pointLoad(ctx));
+        saved(ctx, 200, id, Map.of("deleted", Ids.pointLoad(ctx)));
     }
 
     void deleteLineLoad(Context ctx) {

@@ -7,6 +7,7 @@ import com.baysheet.framing.TakeDown;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.project.StoredLevel;
 import com.baysheet.project.StoredLineLoad;
+import com.baysheet.store.StoredPointLoad;
 
 import java.util.List;
 import java.util.Map;
@@ -47,6 +48,15 @@ final class ApiViews {
             return new LineLoadJson(l.id(), l.axis(), l.line(), l.from(), l.to(), l.label(), l.dead(),
                     l.cladding() ? l.deadPressure() : null, l.cladding() ? l.height() : null, l.live(), l.liveOccupancy(),
                     l.partitionWall());
+        }
+    }
+
+    /** A point load: where ("bay A-B/1-2" or "line 2, from A toward C"), x and y in a bay or distance on a member (else null). */
+    record PointLoadJson(long id, String label, boolean inBay, String where, Double x, Double y, Double distance, double dead,
+                         double live, String liveOccupancy) {
+        static PointLoadJson of(StoredPointLoad p) {
+            return new PointLoadJson(p.id(), p.label(), p.inBay(), p.where(), p.inBay() ? p.x() : null, p.inBay() ? p.y() : null,
+                    p.inBay() ? null : p.distance(), p.dead(), p.live(), p.liveOccupancy());
         }
     }
 

@@ -13,6 +13,8 @@ final class Ids {
 
     static long lineLoad(Context ctx) { return id(ctx, "lineLoad"); }
 
+    static long pointLoad(Context ctx) { return id(ctx, "pointLoad"); }
+
     private static long id(Context ctx, String name) {
         String text = ctx.pathParam(name);
         try {

@@ -3,6 +3,7 @@ package com.baysheet.web;
 import com.baysheet.engine.code.MemberKind;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.MemberRole;
+import com.baysheet.framing.DriftZones;
 import com.baysheet.framing.model.Level;
 import com.baysheet.review.MarkSheets;
 import com.baysheet.store.NotFound;
@@ -66,7 +67,8 @@ final class MemberRoutes {
         m.put("supportedArea", member.role() != MemberRole.COLUMN ? null
                 : member.result().floorReduction().map(lf -> units.area(lf.tributaryArea())).orElse(null));
         m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), member,
-                c.model().building().context().catalogue(), href, c.model().building().lineLoads()));
+                c.model().building().context().catalogue(), href, c.model().building().lineLoads(),
+                DriftZones.of(c.model().building(), level.name()), c.model().building().pointLoads()));
         ctx.render("members/show", m);
     }
 

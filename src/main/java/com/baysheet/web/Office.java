@@ -124,6 +124,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new LevelRoutes(store).install(r);
         new BayRoutes(store).install(r);
         new LineLoadRoutes(store).install(r);
+        new PointLoadRoutes(store).install(r);
+        new SelfWeightRoutes(store).install(r);
         new PlanRoutes(store).install(r);
         new MemberRoutes(store).install(r);
         new TakeDownRoutes(store).install(r);

@@ -1,5 +1,6 @@
 package com.baysheet.web;
 
+import com.baysheet.framing.DriftZones;
 import com.baysheet.framing.model.Level;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
@@ -38,7 +39,8 @@ final class PlanRoutes {
         if (level != null)
             m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), null,
                     c.model().building().context().catalogue(), "/projects/" + c.project().id() + "/members/{id}",
-                    c.model().building().lineLoads()));
+                    c.model().building().lineLoads(),
+                DriftZones.of(c.model().building(), level.name()), c.model().building().pointLoads()));
         ctx.render("plan/show", m);
     }
 }

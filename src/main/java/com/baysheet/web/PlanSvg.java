@@ -30,6 +30,13 @@ final class PlanSvg {
             s.append("<text x=\"").append(n(vertical ? mx + 8 : mx)).append("\" y=\"").append(n(vertical ? my : my - 8))
              .append(vertical ? "\" text-anchor=\"start\">" : "\" text-anchor=\"middle\">").append(esc(l.title())).append("</text></g>");
         }
+        for (PlanView.Shape d : p.drifts())
+            rect(s, d, "drift").append("><title>").append(esc(d.title())).append("</title></rect>");
+        for (PlanView.Shape pt : p.pointLoads()) {
+            s.append("<g class=\"point-load\"><title>").append(esc("point load: " + pt.title())).append("</title><circle cx=\"")
+             .append(n(pt.x())).append("\" cy=\"").append(n(pt.y())).append("\" r=\"6\"/><text x=\"").append(n(pt.x() + 9))
+             .append("\" y=\"").append(n(pt.y() - 7)).append("\">").append(esc(pt.title())).append("</text></g>");
+        }
         for (PlanView.Shape t : p.tributary()) rect(s, t, "tributary").append("><title>tributary area</title></rect>");
         for (PlanView.Shape m : p.members()) {
             s.append("<a href=\"").append(esc(m.href())).append("\"><title>").append(esc(m.title())).append("</title>");

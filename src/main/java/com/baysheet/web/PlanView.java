@@ -2,12 +2,14 @@ package com.baysheet.web;
 
 import com.baysheet.engine.code.OccupancyCatalogue;
 import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.DriftZones;
 import com.baysheet.framing.MemberRole;
 import com.baysheet.framing.PlanLine;
 import com.baysheet.framing.PlanRect;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridLineLoad;
+import com.baysheet.framing.model.GridPointLoad;
 import com.baysheet.framing.model.Level;
 import com.baysheet.framing.model.Side;
 
@@ -22,14 +24,21 @@ import java.util.Map;
  * selected member's tributary outline, and the level's line loads as thick labelled lines. Plan y (north) points up.
  */
 record PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
-                List<Shape> members, List<Shape> tributary, Map<String, String> legend, List<Shape> lineLoads) {
+                List<Shape> members, List<Shape> tributary, Map<String, String> legend, List<Shape> lineLoads,
+                List<Shape> drifts, List<Shape> pointLoads) {
     /** One drawn thing: a rectangle (x, y, w, h) or a line (x, y to x2, y2), with its class, fill, link and tooltip. */
     record Shape(double x, double y, double w, double h, double x2, double y2, String cls, String fill, String href, String title) {}
 
     /** A plan without line loads. */
     PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
              List<Shape> members, List<Shape> tributary, Map<String, String> legend) {
-        this(width, height, bays, gridLines, gridLabels, members, tributary, legend, List.of());
+        this(width, height, bays, gridLines, gridLabels, members, tributary, legend, List.of(), List.of(), List.of());
+    }
+
+    /** A plan without drifts or point loads. */
+    PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
+             List<Shape> members, List<Shape> tributary, Map<String, String> legend, List<Shape> lineLoads) {
+        this(width, height, bays, gridLines, gridLabels, members, tributary, legend, lineLoads, List.of(), List.of());
     }
 
     private static final double MAX_W = 760, MAX_H = 560, PAD = 36;
@@ -39,6 +48,12 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
 
     static PlanView of(Grid g, Level level, List<DerivedMember> members, DerivedMember selected,
                        OccupancyCatalogue cat, String memberHref, List<GridLineLoad> lineLoads) {
+        return of(g, level, members, selected, cat, memberHref, lineLoads, List.of(), List.of());
+    }
+
+    /** With the level's drift zones at roof steps and the building's point loads (those of this level are drawn). */
+    static PlanView of(Grid g, Level level, List<DerivedMember> members, DerivedMember selected, OccupancyCatalogue cat,
+                       String memberHref, List<GridLineLoad> lineLoads, List<DriftZones.Zone> driftZones, List<GridPointLoad> points) {
         Frame f = Frame.of(g, level);
         Palette palette = new Palette(cat);
         Map<String, String> legend = new LinkedHashMap<>();
@@ -82,7 +97,14 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
         if (selected != null) for (PlanRect r : selected.tributary()) trib.add(f.rect(r.x1(), r.y1(), r.x2(), r.y2(), "tributary", "none", null, "tributary area"));
         List<Shape> loads = new ArrayList<>();
         for (GridLineLoad l : lineLoads) if (l.level().equals(level.name())) loads.add(f.lineLoad(g, l));
-        return new PlanView(f.width(), f.height(), bays, lines, labels, drawn, trib, legend, loads);
+        List<Shape> drifts = new ArrayList<>();
+        for (DriftZones.Zone z : driftZones) {
+            PlanRect r = z.area();
+            drifts.add(f.rect(r.x1(), r.y1(), r.x2(), r.y2(), "drift", "none", null, z.label()));
+        }
+        List<Shape> pts = new ArrayList<>();
+        for (GridPointLoad p : points) if (p.level().equals(level.name())) pts.add(f.point(g, p));
+        return new PlanView(f.width(), f.height(), bays, lines, labels, drawn, trib, legend, loads, drifts, pts);
     }
 
     /** Plan coordinates to screen coordinates: one scale, y flipped, a margin for the grid names. */
@@ -126,6 +148,12 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
             }
             double y = g.y().position(l.line());
             return line(g.x().position(l.from()), y, g.x().position(l.to()), y, "line-load", null, l.label());
+        }
+
+        /** A marker at the point load's place on plan; its title is the label and the loads. */
+        Shape point(Grid g, GridPointLoad p) {
+            double[] at = p.onPlan(g);
+            return new Shape(sx(at[0]), sy(at[1]), 0, 0, 0, 0, "point-load", "none", null, p.label());
         }
 
         Shape label(double x, double y, double dx, double dy, String text) {

@@ -57,7 +57,18 @@ final class ProjectRoutes {
 
     void settingsForm(Context ctx) {
         Project p = store.projects().find(Ids.project(ctx));
-        renderForm(ctx, "projects/settings", p, Form.filled(values(p)));
+        renderSettings(ctx, store, p, Form.filled(values(p)), null);
+    }
+
+    /** The settings page with the project form and the self weight form; null for either: filled from the store. */
+    static void renderSettings(Context ctx, Store store, Project p, Form form, Form weights) {
+        Map<String, Object> m = new HashMap<>(model(form != null ? form : Form.filled(values(p))));
+        m.put("project", p);
+        m.put("weightsForm", weights != null ? weights : Form.filled(SelfWeightRoutes.values(store, p)));
+        m.put("firmWeights", store.selfWeights().firmDefaults(p.id()));
+        m.put("ownWeights", store.selfWeights().find(p.id()).isPresent());
+        m.put("units", UnitLabels.of(p.info().units()));
+        ctx.render("projects/settings", m);
     }
 
     void updateSettings(Context ctx) {
@@ -66,10 +77,16 @@ final class ProjectRoutes {
         long version = form.version();
         form.attempt(() -> store.projects().update(Editors.of(ctx), p.id(), version, info(form)))
                 .ifPresentOrElse(saved -> Pages.seeOther(ctx, Saved.PROJECT.after("/projects/" + p.id())),
-                        () -> renderForm(ctx.status(form.stale() ? 409 : 422), "projects/settings", p, form));
+                        () -> renderSettings(ctx.status(form.stale() ? 409 : 422), store, p, form, null));
     }
 
     private void renderForm(Context ctx, String template, Project p, Form form) {
+        Map<String, Object> m = model(form);
+        if (p != null) m.put("project", p);
+        ctx.render(template, m);
+    }
+
+    private static Map<String, Object> model(Form form) {
         Map<String, Object> m = new HashMap<>();
         m.put("form", form);
         m.put("editions", Editions.builtIn().ids());
@@ -78,8 +95,7 @@ final class ProjectRoutes {
         m.put("snowExposures", com.baysheet.engine.snow.Exposure.Shelter.values());
         m.put("thermalConditions", com.baysheet.engine.snow.Thermal.Condition.values());
         m.put("riskCategories", com.baysheet.engine.snow.Importance.RiskCategory.values());
-        if (p != null) m.put("project", p);
-        ctx.render(template, m);
+        return m;
     }
 
     private static ProjectInfo info(Form f) {

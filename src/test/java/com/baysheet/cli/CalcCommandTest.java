@@ -51,8 +51,9 @@ class CalcCommandTest {
 
     @Test
     void everyKindOfExampleIsThereInBothUnitSystems() throws IOException {
-        assertThat(examples().map(p -> p.getFileName().toString())).hasSize(10)
-                .contains("office-beam-us.json", "office-beam-si.json", "girder-us.json", "roof-beam-si.json", "storage-column-us.json");
+        assertThat(examples().map(p -> p.getFileName().toString())).hasSize(12)
+                .contains("office-beam-us.json", "office-beam-si.json", "girder-us.json", "roof-beam-si.json", "storage-column-us.json",
+                "snow-drift-beam-us.json", "snow-drift-beam-si.json");
     }
 
     @ParameterizedTest
@@ -176,5 +177,26 @@ class CalcCommandTest {
         assertThat(missing.exit()).isEqualTo(2);
         assertThat(missing.err()).contains("no-such-member.json").hasLineCount(1);
         assertThat(stdin("").exit()).isEqualTo(2);
+    }
+
+    @Test
+    void aMemberJsonCarriesSnowAndADrift() throws IOException {
+        // p_g 30 psf, C_e = C_t = I_s = 1, flat: p_f = p_s = 21.0 psf (Eq. 7.3-1) over p_m 20 psf, so S_u = 21 psf on a
+        // 10 ft strip: 210 plf × 30 / 2 = 3150 lb at each end. The drift (12 ft step, ℓu = ℓl = 30 ft, see RoofDriftTest):
+        // h_d = 0.43 ∛30 ∜40 − 1.5 = 1.860 ft, w = 7.441 ft, p_d = 33.30 psf; the step is at x = 30 (d = 0 there), so the
+        // triangle lies on the last w of the span: 10 × p_d w / 2 = 1238.7 lb, its resultant w/3 from the step, and
+        // R_A = 3150 + 1238.7 × (7.441/3)/30 = 3252.4 lb (AISC Manual Table 3-23, load increasing to one end, on the stretch).
+        Run r = run(InputStream.nullInputStream(), "docs/examples/snow-drift-beam-us.json");
+        assertThat(r.exit()).as(r.err()).isZero();
+        double hd = 0.43 * Math.cbrt(30) * Math.pow(40, 0.25) - 1.5, w = 4 * hd, drift = 10 * hd * 17.9 * w / 2;
+        assertThat(r.result("snow.drift.load")).isCloseTo(drift, within(1e-6));
+        assertThat(r.result("S.RA")).isCloseTo(3150 + drift * (w / 3) / 30, within(1e-3 * drift));
+        Run si = run(InputStream.nullInputStream(), "docs/examples/snow-drift-beam-si.json");
+        assertThat(si.exit()).as(si.err()).isZero();
+        assertThat(si.result("snow.drift.hd")).isGreaterThan(0);
+        Run bad = stdin(BEAM.formatted(", \"snow\": {\"groundSnow\": -5, \"terrain\": \"C\", \"exposure\": \"PARTIALLY\","
+                + " \"thermalCondition\": \"HEATED\", \"riskCategory\": \"II\"}"));
+        assertThat(bad.exit()).isEqualTo(2);
+        assertThat(bad.err()).contains("groundSnowLoad");
     }
 }

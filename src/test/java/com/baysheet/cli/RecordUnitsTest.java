@@ -33,12 +33,14 @@ class RecordUnitsTest {
             Map.entry("plf", LBF / FT), Map.entry("kN/m", 1000.0),
             Map.entry("lb", LBF), Map.entry("kip", KIP), Map.entry("kN", 1000.0),
             Map.entry("lb·ft", LBF * FT), Map.entry("kip·ft", KIP * FT), Map.entry("kN·m", 1000.0),
-            Map.entry("lb·ft²", LBF * FT * FT), Map.entry("kip·in²", KIP * IN * IN), Map.entry("kN·m²", 1000.0));
+            Map.entry("lb·ft²", LBF * FT * FT), Map.entry("kip·in²", KIP * IN * IN), Map.entry("kN·m²", 1000.0),
+            // the snow chapter's (a snow block in the input): degrees of slope and snow density
+            Map.entry("°", 1.0), Map.entry("pcf", LBF / (FT * FT * FT)), Map.entry("kN/m³", 1000.0));
 
     /** The base units of each system (docs/engine.md, The calculation record). */
     static final Map<String, Set<String>> BASE = Map.of(
-            "US", Set.of("", "in/ft", "ft", "ft²", "psf", "plf", "lb", "lb·ft", "lb·ft²"),
-            "SI", Set.of("", "%", "m", "m²", "kPa", "kN/m", "kN", "kN·m", "kN·m²"));
+            "US", Set.of("", "in/ft", "ft", "ft²", "psf", "plf", "lb", "lb·ft", "lb·ft²", "°", "pcf"),
+            "SI", Set.of("", "%", "m", "m²", "kPa", "kN/m", "kN", "kN·m", "kN·m²", "°", "kN/m³"));
 
     static final Pattern SHOWN = Pattern.compile("(-?\\d+(?:\\.\\d+)?)(?: (.+))?");
 

@@ -89,7 +89,8 @@ final class DemoOffice implements AutoCloseable {
         ids.put("project", project);
         String p = "/projects/" + project;
         ids.put("level", first(eng, "/api" + p + "/levels", "id"));
-        ids.put("lineLoad", firstLineLoad(eng, "/api" + p));
+        ids.put("lineLoad", firstLineLoad(eng, "/api" + p, "line-loads"));
+        ids.put("pointLoad", firstLineLoad(eng, "/api" + p, "point-loads"));
         String member = first(eng, "/api" + p + "/members", "id");
         ids.put("member", member);
         ids.put("stack", first(eng, "/api" + p + "/takedowns", "id"));
@@ -157,13 +158,13 @@ final class DemoOffice implements AutoCloseable {
     }
 
     /** A field of the first element of the JSON list at this path. */
-    /** The demo's first line load, on whichever level carries one. */
-    private static String firstLineLoad(OfficeClient c, String project) throws IOException {
+    /** The demo's first line load (or point load: {@code kind}), on whichever level carries one. */
+    private static String firstLineLoad(OfficeClient c, String project, String kind) throws IOException {
         for (JsonNode level : JSON.readTree(OfficeClient.expect(c.get(project + "/levels"), 200).body())) {
-            JsonNode loads = JSON.readTree(OfficeClient.expect(c.get(project + "/levels/" + level.path("id").asText() + "/line-loads"), 200).body());
+            JsonNode loads = JSON.readTree(OfficeClient.expect(c.get(project + "/levels/" + level.path("id").asText() + "/" + kind), 200).body());
             if (!loads.isEmpty()) return loads.get(0).path("id").asText();
         }
-        throw new IllegalStateException(project + " has no line load in the demo");
+        throw new IllegalStateException(project + " has no " + kind + " in the demo");
     }
 
     static String first(OfficeClient c, String path, String field) throws IOException {

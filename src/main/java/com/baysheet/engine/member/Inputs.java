@@ -69,6 +69,12 @@ final class Inputs {
         for (int i = 0; i < in.pointLoads().size(); i++) {
             PointLoad p = in.pointLoads().get(i);
             String where = in.kind().isColumn() ? "axial" : "at x = " + rec.show(p.x(), Quantity.LENGTH);
+            if (p.applied()) {
+                String occ = p.live().isEmpty() ? "" : " (" + ctx.catalogue().get(p.live().get(0).occupancy()).name() + ", not reduced)";
+                rec.inputText("point[" + i + "]", "Point load " + (i + 1), p.label() + ", " + where + ": dead "
+                        + rec.show(p.dead(), Quantity.FORCE) + ", live " + rec.show(p.liveTotal(), Quantity.FORCE) + occ);
+                continue;
+            }
             rec.inputText("point[" + i + "]", (in.kind().isColumn() ? "Load carried " : "Point load ") + (i + 1), where
                     + ": dead " + rec.show(p.dead(), Quantity.FORCE) + ", live unreduced " + rec.show(p.liveTotal(), Quantity.FORCE)
                     + " from " + rec.show(area(p), Quantity.AREA));

@@ -26,6 +26,8 @@ final class LoadBook {
     final BeamLoads dead = new BeamLoads();
     /** The roof snow load S, unfactored and not reduced: on the strips (see {@link #snowOnStrips}) and in point loads. */
     final BeamLoads snow = new BeamLoads();
+    /** The drift surcharge on the member as the load diagram draws it (linear loads). */
+    final java.util.List<com.baysheet.engine.record.Sketch.Drift> driftSketch = new java.util.ArrayList<>();
     final Map<String, BeamLoads> live = new LinkedHashMap<>();
     final Map<String, Double> floorAreas = new LinkedHashMap<>();
     final Map<String, Double> roofAreas = new LinkedHashMap<>();

@@ -50,7 +50,7 @@ public final class MemberCalculation {
         boolean halfL = halfLAllowed(ctx, book);
         if (in.kind().isColumn()) AxialActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, snow, rec);
         else BendingActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, snow, rec);
-        rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1)));
+        rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1), book.driftSketch));
         BalconyNote.record(ctx, book, rec);
         Cautions.standard(ctx, book, rec);
         return new Outcome(rec.build(), share(ctx, in, book, true), in.kind().isColumn()

@@ -21,7 +21,10 @@ import java.util.List;
  * overhang alone lifts the back-span support (ASCE 7-16 4.3.3 partial loading). Each live case takes the
  * least of its patterns (whole member, back span, overhang) and of no live load at all, unreduced
  * (the reduction of 4.7 rests on the whole member's K_LL A_T, the overhang alone is a smaller area:
- * conservative) and, for floors, also the 4.4 concentrated load at either end of its travel. The gravity
+ * conservative) and also the 4.4 concentrated load at either end of its travel: the floor's against the floor live
+ * load, the roof's (the roof concentrated load for maintenance workers) against the roof live load. A reaction is
+ * linear in the load's position, so the end of its travel on the overhang is where it most reduces the back-span
+ * reaction (statics). The gravity
  * combinations then give the least factored and service reactions, the permissive 0.5 L of combination 3
  * not taken. A negative one is uplift, flagged with a caution. Simple spans and cantilevers under gravity
  * loads cannot lift a support: nothing is recorded for them.
@@ -103,7 +106,8 @@ final class MinimumReactions {
             double v = BendingActions.value(MemberCalculation.solve(s, ps.get(i), Double.NaN), e, s);
             if (v < best.value) best = new Least(v, BendingActions.PATTERNS[i]);
         }
-        Occupancy o = floor ? ConcentratedCheck.largest(ctx, book.floorAreas.keySet()) : null;
+        // the floor's concentrated load against L, the roof's (300 lb for maintenance workers, Table 4.3-1) against Lr
+        Occupancy o = ConcentratedCheck.largest(ctx, floor ? book.floorAreas.keySet() : book.roofAreas.keySet());
         if (o == null) return best;
         // 4.4: the concentrated load instead of the uniform load; a reaction is linear in its position, so its
         // least is at one end of the load's travel
@@ -112,7 +116,8 @@ final class MinimumReactions {
                 : ConcentratedCheck.Effect.RIGHT_REACTION;
         for (double x : new double[] {patch / 2, s.length() - patch / 2}) {
             double v = ConcentratedCheck.value(s, p, patch, x, ce);
-            if (v < best.value) best = new Least(v, "the concentrated load of " + o.name() + " at the overhang tip");
+            if (v < best.value) best = new Least(v, (floor ? "the concentrated load of " : "the roof concentrated load of ") + o.name()
+                    + " at the overhang tip");
         }
         return best;
     }

@@ -33,6 +33,17 @@ final class OwnWeight {
                 rec.caution(l.label() + ": a partition wall given as a line load while the project also takes the partition "
                         + "allowance on the floor area; the partitions may be counted twice.", Clause.NONE);
         }
+        for (int i = 0; i < in.pointLoads().size(); i++) {
+            var p = in.pointLoads().get(i);
+            if (!p.applied()) continue;
+            rec.step("P_D,point" + (i + 1), "Point load " + (i + 1) + ", " + p.label() + ": dead load", "P given",
+                    "at x = " + rec.show(p.x(), Quantity.LENGTH), p.dead(), Quantity.FORCE, Clause.NONE);
+            if (p.liveTotal() > 0)
+                rec.step("P_L,point" + (i + 1), "Point load " + (i + 1) + ", " + p.label() + ": live load, unreduced", "P given",
+                        "at x = " + rec.show(p.x(), Quantity.LENGTH), p.liveTotal(), Quantity.FORCE, Clause.NONE);
+        }
+        if (in.pointLoads().stream().anyMatch(p -> p.applied() && p.liveTotal() > 0))
+            rec.info("A point load has no tributary area: its live load is not reduced and adds to no A_T (our choice).", Clause.NONE);
         if (in.lineLoads().stream().anyMatch(l -> l.live() > 0))
             rec.info("A line load has no tributary area: its live load is not reduced and adds to no A_T (our choice).", Clause.NONE);
     }

@@ -12,7 +12,9 @@ import java.util.List;
 final class Sketches {
     private Sketches() {}
 
-    static Sketch of(Support s, BeamLoads dead, BeamLoads live) {
+    static Sketch of(Support s, BeamLoads dead, BeamLoads live) { return of(s, dead, live, List.of()); }
+
+    static Sketch of(Support s, BeamLoads dead, BeamLoads live, List<Sketch.Drift> drift) {
         if (s instanceof Support.Axial) return Sketch.NONE;
         String kind = s instanceof Support.Simple ? "simple" : s instanceof Support.Overhang ? "overhang" : "cantilever";
         List<Sketch.Segment> seg = new ArrayList<>();
@@ -22,7 +24,7 @@ final class Sketches {
         for (int i = 0; i < dead.pointCount(); i++) pts.add(new Sketch.Point(dead.x(i), dead.p(i), 0));
         for (int i = 0; i < live.pointCount(); i++) pts.add(new Sketch.Point(live.x(i), 0, live.p(i)));
         BeamActions a = MemberCalculation.solve(s, new BeamLoads().add(dead, 1).add(live, 1), Double.NaN);
-        return new Sketch(kind, s.length(), s.span(), merge(seg), mergePoints(pts), a.left(), a.right());
+        return new Sketch(kind, s.length(), s.span(), merge(seg), mergePoints(pts), a.left(), a.right(), drift);
     }
 
     /** Dead and live segments over the same stretch become one segment. */

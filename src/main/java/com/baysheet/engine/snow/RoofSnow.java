@@ -65,6 +65,19 @@ public final class RoofSnow {
         return loads;
     }
 
+    /**
+     * The drift surcharge at one more roof step of the same lower roof (7.7.1), each step written into {@code rec}:
+     * for a member near two steps, after {@link #calculate} has written the roof's own snow loads.
+     *
+     * @param ps the lower roof's sloped roof snow load p_s (psf or kN/m²), without rain-on-snow
+     */
+    public static DriftSurcharge drift(CalcContext ctx, SnowSite site, double ps, RoofStep step, RecordBuilder rec) {
+        Check.present("snow", site);
+        Check.present("step", step);
+        data(ctx.edition());
+        return SnowDrift.calculate(ctx.edition(), ctx.system(), site.groundLoad(), ps, step, rec);
+    }
+
     /** The edition's snow data; an edition without it (or marked unsupported) is refused with the reason from the data. */
     static SnowData data(Edition ed) {
         SnowData d = ed.snow().orElseThrow(() -> new InputError("edition", ed.id(), "has no roof snow calculation in Baysheet"));

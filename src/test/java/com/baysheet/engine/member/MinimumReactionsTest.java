@@ -126,4 +126,20 @@ class MinimumReactionsTest {
         assertThat(r.entry("LRFD.RA,min").label()).endsWith("(LRFD 3)");
         assertThat(r.notes()).anyMatch(n -> n.text().startsWith("Minimum reactions from 1.2D + 1.6Lr with live load on the overhang only (2.3.1, combination 3)"));
     }
+
+    @Test
+    void theRoofConcentratedLoadAtTheOverhangTipCanLiftTheBackSpan() {
+        // Hand calculation. A 1 ft wide roof joist, 10 ft back span + 2 ft overhang, 5 psf dead, ordinary roof, flat.
+        // R_A,D = w(ℓ² − a²)/2ℓ = 5 × (100 − 4)/20 = 24 lb. Uniform Lr (20 psf, A_T 12 ft², R1 = R2 = 1) on the overhang
+        // only: R_A = −20 × 4/20 = −4 lb, so 1.2D + 1.6Lr = 28.8 − 6.4 = 22.4 lb, no uplift. The 300 lb roof concentrated
+        // load (Table 4.3-1, from memory) on its 2.5 ft square at the tip, centred 10.75 ft from A: by statics
+        // R_A = −300 × 0.75/10 = −22.5 lb, and 2.3.1 combination 3 gives 1.2 × 24 + 1.6 × (−22.5) = −7.2 lb: uplift.
+        CalcRecord r = calc(US, Fixtures.beam(new Support.Overhang(10, 2), List.of(new AreaStrip("roof-ordinary", 1, 0, 12, 5)),
+                List.of(), 0, Double.NaN));
+        assertThat(r.result("D.RA")).isCloseTo(24, within(1e-9));
+        assertThat(r.result("Lr0.RA,min")).isCloseTo(-22.5, within(1e-9));
+        assertThat(r.step("R_A,min.Lr0").substituted()).contains("roof concentrated load").contains("overhang tip");
+        assertThat(r.result("LRFD.RA,min")).isCloseTo(-7.2, within(1e-9));
+        assertThat(r.notes()).anyMatch(n -> n.level() == Note.Level.CAUTION && n.text().startsWith("Uplift at support A"));
+    }
 }

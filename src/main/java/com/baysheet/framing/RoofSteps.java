@@ -1,0 +1,150 @@
+package com.baysheet.framing;
+
+import com.baysheet.engine.record.RecordBuilder;
+import com.baysheet.engine.CalcContext;
+import com.baysheet.engine.snow.DriftStrip;
+import com.baysheet.engine.snow.DriftSurcharge;
+import com.baysheet.engine.snow.RoofSnow;
+import com.baysheet.engine.snow.RoofStep;
+import com.baysheet.engine.snow.SnowRoof;
+import com.baysheet.engine.snow.StepDrift;
+import com.baysheet.engine.units.Display;
+import com.baysheet.engine.units.Quantity;
+import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.Level;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The roof steps of a lower roof found in the model (ASCE 7-16 7.7.1). A bay of a roof level is exposed where no
+ * higher level has a floored bay over it; where an exposed bay's side borders a cell that a higher level covers, the
+ * grid line between them is a wall, of height the highest covering level's elevation less this roof's. The upper
+ * roof length ℓu is the run of covered cells straight away from the wall, the lower roof length ℓl the run of this
+ * roof's exposed bays straight away from it (both in the direction across the wall, as the wind blows over the step).
+ * Each wall is one bay side long; its drift acts over that length of wall only.
+ */
+final class RoofSteps {
+    /**
+     * One bay side of wall: along x at y = {@code at} (or along y at x = at), from {@code start} to {@code end}; the
+     * lower roof lies toward increasing coordinate where {@code toward} is +1.
+     */
+    record Wall(boolean alongX, double at, double start, double end, int toward, RoofStep step, String line,
+                String between, DriftSurcharge drift) {
+        /** Distance from the wall into the lower roof of a coordinate across it. */
+        double distance(double across) { return (across - at) * toward; }
+    }
+
+    static final RoofSteps NONE = new RoofSteps(List.of());
+
+    final List<Wall> walls;
+
+    private RoofSteps(List<Wall> walls) { this.walls = List.copyOf(walls); }
+
+    /** The walls beside this level, where it is a roof of a snow project lower than another level; else none. */
+    static RoofSteps of(CalcContext ctx, LevelPlan plan, List<Level> all) {
+        Level low = plan.level;
+        if (!low.roof() || ctx.snow() == null || !plan.belowAnother) return NONE;
+        Grid g = plan.grid;
+        int nx = plan.xCells(), ny = plan.yCells();
+        double[][] top = new double[nx][ny];
+        for (double[] row : top) java.util.Arrays.fill(row, Double.NaN);
+        for (Level l : all) {
+            if (l.elevation() <= low.elevation()) continue;
+            LevelPlan p = new LevelPlan("", l, g);
+            for (int c = 0; c < nx; c++)
+                for (int r = 0; r < ny; r++)
+                    if (p.floored(c, r) != null && !(top[c][r] >= l.elevation())) top[c][r] = l.elevation();
+        }
+        SnowRoof roof = low.surface().roof(low.roofSlope());
+        List<Wall> out = new ArrayList<>();
+        int[][] sides = {{0, 1}, {0, -1}, {1, 0}, {-1, 0}};
+        for (int c = 0; c < nx; c++)
+            for (int r = 0; r < ny; r++) {
+                if (plan.floored(c, r) == null || !Double.isNaN(top[c][r])) continue;
+                for (int[] s : sides) {
+                    int nc = c + s[0], nr = r + s[1];
+                    if (nc < 0 || nr < 0 || nc >= nx || nr >= ny || Double.isNaN(top[nc][nr])) continue;
+                    double upper = 0, lower = 0;
+                    for (int k = 0; ; k++) {
+                        int cc = nc + k * s[0], rr = nr + k * s[1];
+                        if (cc < 0 || rr < 0 || cc >= nx || rr >= ny || Double.isNaN(top[cc][rr])) break;
+                        upper += s[0] != 0 ? g.x().spacing(cc) : g.y().spacing(rr);
+                    }
+                    for (int k = 0; ; k++) {
+                        int cc = c - k * s[0], rr = r - k * s[1];
+                        if (cc < 0 || rr < 0 || cc >= nx || rr >= ny || plan.floored(cc, rr) == null || !Double.isNaN(top[cc][rr])) break;
+                        lower += s[0] != 0 ? g.x().spacing(cc) : g.y().spacing(rr);
+                    }
+                    RoofStep step = new RoofStep(top[nc][nr] - low.elevation(), upper, lower);
+                    DriftSurcharge d = RoofSnow.calculate(ctx, ctx.snow(), roof.withStep(step),
+                            RecordBuilder.numbersOnly("step", ctx.edition().id(), ctx.system())).drift();
+                    if (!d.required()) continue;
+                    boolean alongX = s[1] != 0;
+                    int wallLine = alongX ? (s[1] > 0 ? r + 1 : r) : (s[0] > 0 ? c + 1 : c);
+                    double at = alongX ? plan.y(wallLine) : plan.x(wallLine);
+                    double start = alongX ? plan.x(c) : plan.y(r), end = alongX ? plan.x(c + 1) : plan.y(r + 1);
+                    String line = alongX ? g.y().name(wallLine) : g.x().name(wallLine);
+                    String between = alongX ? g.x().name(c) + "-" + g.x().name(c + 1) : g.y().name(r) + "-" + g.y().name(r + 1);
+                    out.add(new Wall(alongX, at, start, end, -(s[0] + s[1]), step, line, between, d));
+                }
+            }
+        return new RoofSteps(out);
+    }
+
+    boolean isEmpty() { return walls.isEmpty(); }
+
+    /**
+     * The drifts reaching a member on {@code line} with loaded strips {@code rects} (the strips in the member's own
+     * order; x along the member from the line's first point). Walls of the same step (one line, one height and
+     * roof lengths) are one entry.
+     */
+    List<StepDrift> on(PlanLine member, List<PlanRect> rects, CalcContext ctx) {
+        Map<String, List<DriftStrip>> strips = new LinkedHashMap<>();
+        Map<String, Wall> first = new LinkedHashMap<>();
+        Map<String, List<String>> spans = new LinkedHashMap<>();
+        boolean memberAlongX = member.y1() == member.y2();
+        for (Wall w : walls)
+            for (PlanRect r : rects) {
+                DriftStrip s = strip(w, member, memberAlongX, r);
+                if (s == null) continue;
+                String key = (w.alongX ? "x" : "y") + w.at + "/" + w.toward + "/" + w.step;
+                strips.computeIfAbsent(key, k -> new ArrayList<>()).add(s);
+                first.putIfAbsent(key, w);
+                List<String> b = spans.computeIfAbsent(key, k -> new ArrayList<>());
+                if (!b.contains(w.between)) b.add(w.between);
+            }
+        List<StepDrift> out = new ArrayList<>();
+        for (var e : strips.entrySet()) {
+            Wall w = first.get(e.getKey());
+            String where = "wall on grid line " + w.line + " (" + String.join(", ", spans.get(e.getKey())) + "), "
+                    + show(w.step.height(), ctx) + " from this roof up to the higher level; upper roof length ℓu "
+                    + show(w.step.upperLength(), ctx) + ", lower roof length ℓl " + show(w.step.lowerLength(), ctx);
+            out.add(new StepDrift(w.step, where, e.getValue()));
+        }
+        return out;
+    }
+
+    private static DriftStrip strip(Wall w, PlanLine m, boolean memberAlongX, PlanRect r) {
+        double rs = w.alongX ? Math.min(r.x1(), r.x2()) : Math.min(r.y1(), r.y2());   // along the wall
+        double re = w.alongX ? Math.max(r.x1(), r.x2()) : Math.max(r.y1(), r.y2());
+        double ca = w.alongX ? r.y1() : r.x1(), cb = w.alongX ? r.y2() : r.x2();      // across the wall
+        double lo = Math.max(rs, w.start), hi = Math.min(re, w.end);
+        if (hi <= lo) return null;
+        double da = w.distance(ca), db = w.distance(cb);
+        double ext = w.drift.extent();
+        if (Math.max(da, db) <= 0 || Math.min(da, db) >= ext) return null;
+        boolean parallel = memberAlongX == w.alongX;
+        double mStart = memberAlongX ? m.x1() : m.y1();
+        if (parallel) {
+            double near = Math.max(0, Math.min(da, db)), far = Math.max(da, db);
+            return new DriftStrip(true, lo - mStart, hi - mStart, far - near, near, near);
+        }
+        double a = Math.min(ca, cb), b = Math.max(ca, cb);
+        return new DriftStrip(false, a - mStart, b - mStart, hi - lo, w.distance(a), w.distance(b));
+    }
+
+    private static String show(double v, CalcContext ctx) { return Display.of(v, Quantity.LENGTH, ctx.system()); }
+}
