@@ -63,8 +63,8 @@ public final class MemberCalculation {
         if (!book.floorAreas.isEmpty()) {
             if (in.onRoof())
                 rec.info("Occupiable roof: its live load follows the floor rules.", ctx.edition().clause("roof.occupiable"));
-            LiveFactors lf = ReductionMethods.forEdition(ctx).reduce(ctx, in.kind(), book.floorAreas, in.floors(),
-                    in.floorsSupported(), in.support().span(), rec);
+            LiveFactors lf = ReductionMethods.of(ctx).reduce(ctx, in.kind(), book.floorAreas, in.floors(),
+                    in.floorsSupported(), in.support().span(), book.supportedDead, rec);
             f.putAll(lf.bySource());
             reduction[0] = lf;
             if (!in.kind().isColumn() && carriesDeliveredArea(in))
