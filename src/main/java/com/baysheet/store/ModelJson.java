@@ -35,7 +35,8 @@ public final class ModelJson {
     public static ProjectInfo project(JsonNode n, String edition) {
         return new ProjectInfo(text(n, "jobNumber"), text(n, "name"), optText(n, "address"), optText(n, "client"),
                 n.hasNonNull("edition") ? text(n, "edition") : edition, UnitSystem.parse("units", text(n, "units")),
-                flag(n, "partitionAllowance"), flag(n, "reducePartitions"), flag(n, "upliftReducedDead"), snow(n));
+                flag(n, "partitionAllowance"), flag(n, "reducePartitions"), flag(n, "upliftReducedDead"), snow(n),
+                optText(n, "floorMethod"));
     }
 
     /** The optional snow fields of a project (see {@link SnowInput}); no groundSnow, no snow. */

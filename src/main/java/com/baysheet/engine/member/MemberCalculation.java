@@ -33,7 +33,8 @@ public final class MemberCalculation {
     public static MemberResult calculate(CalcContext ctx, MemberInput in) {
         RecordBuilder rec = RecordBuilder.numbersOnly(in.subject(), ctx.edition().id(), ctx.system());
         Outcome o = run(ctx, in, rec);
-        return new MemberResult(o.record, o.left, o.right, o.reduction, () -> run(ctx, in, new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system())).record);
+        return new MemberResult(o.record, o.left, o.right, o.reduction, () -> run(ctx, in, new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system())).record,
+                () -> MethodComparison.of(ctx, in));
     }
 
     private record Outcome(CalcRecord record, EndShare left, EndShare right, LiveFactors reduction) {}

@@ -45,6 +45,9 @@ public record MethodData(String id, String method, String standard, String title
 
     public boolean supports(UnitSystem system) { return units.contains(system); }
 
+    /** The one unit system the method is written for ("SI"), or "" where it serves both. */
+    public String onlyFor() { return units.size() == 1 ? units.iterator().next().name() : ""; }
+
     public Clause clause(String key) {
         Clause c = clauses.get(key);
         if (c == null) throw new IllegalStateException(id + ": no clause label for " + key);
