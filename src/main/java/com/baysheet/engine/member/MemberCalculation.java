@@ -70,8 +70,8 @@ public final class MemberCalculation {
             reduction[0] = lf;
             if (!in.kind().isColumn() && carriesDeliveredArea(in))
                 rec.info("A_T includes the tributary areas delivered by the members this one carries, each counted once, "
-                        + "and its live load is reduced with its own K_LL·A_T, not taken from their reduced reactions "
-                        + "(common practice).", ctx.edition().clause("reduction.basic"));
+                        + "and its live load is reduced with its own " + (ctx.floorMethod() == null ? "K_LL·A_T" : "tributary area")
+                        + ", not taken from their reduced reactions (common practice).", ctx.edition().clause("reduction.basic"));
         }
         if (!book.roofAreas.isEmpty()) {
             // A_T of 4.8.2 is the ordinary roof area: other roof rows are not reduced and must not lower R1

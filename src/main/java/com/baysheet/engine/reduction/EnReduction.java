@@ -36,6 +36,9 @@ final class EnReduction implements FloorReductionMethod {
     public String title(CalcContext ctx) { return data.title(); }
 
     @Override
+    public com.baysheet.engine.record.Clause clause(CalcContext ctx) { return data.clause("area"); }
+
+    @Override
     public LiveFactors reduce(CalcContext ctx, MemberKind kind, Map<String, Double> areas, List<SupportedFloor> byFloor,
                               int floors, double span, RecordBuilder rec) {
         MethodSteps.chosen(ctx, data, "area", rec);

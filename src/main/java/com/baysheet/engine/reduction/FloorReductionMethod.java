@@ -37,6 +37,9 @@ public interface FloorReductionMethod {
     /** The method's name as a sheet prints it. */
     default String title(CalcContext ctx) { return ctx.edition().id() + " basic live load reduction"; }
 
+    /** The clause the reduced floor live load cites on the record (the edition's equation, or the chosen method's). */
+    default com.baysheet.engine.record.Clause clause(CalcContext ctx) { return ctx.edition().clause("reduction.eq"); }
+
     /** One K_LL throughout: the member's own. */
     default LiveFactors reduce(CalcContext ctx, MemberKind kind, Map<String, Double> areas, int floors, double span,
                                RecordBuilder record) {

@@ -34,6 +34,9 @@ final class IbcAlternativeReduction implements FloorReductionMethod {
     @Override
     public String title(CalcContext ctx) { return data.title(); }
 
+    @Override
+    public com.baysheet.engine.record.Clause clause(CalcContext ctx) { return data.clause("alt.eq"); }
+
     /** Without the dead load: D = 0, the least R the dead load cap allows (conservative). */
     @Override
     public LiveFactors reduce(CalcContext ctx, MemberKind kind, Map<String, Double> areas, List<SupportedFloor> byFloor,

@@ -34,6 +34,9 @@ final class NbcReduction implements FloorReductionMethod {
     public String title(CalcContext ctx) { return data.title(); }
 
     @Override
+    public com.baysheet.engine.record.Clause clause(CalcContext ctx) { return data.clause("tributary"); }
+
+    @Override
     public LiveFactors reduce(CalcContext ctx, MemberKind kind, Map<String, Double> areas, List<SupportedFloor> byFloor,
                               int floors, double span, RecordBuilder rec) {
         MethodSteps.chosen(ctx, data, "tributary", rec);
