@@ -50,6 +50,10 @@ interface FloorMethodContract {
         assertThat(during.keySet()).isEqualTo(before.keySet());
         assertThat(during).isNotEqualTo(before);
         assertThat(during.values()).anyMatch(r -> r.contains("IBC 2021 alternative uniform live load reduction"));
+        // the take-down works the chosen method's factor, not the edition's K_LL and influence area
+        String takeDown = during.entrySet().stream().filter(e -> e.getKey().startsWith("takedown ")).findFirst().orElseThrow().getValue();
+        assertThat(takeDown).contains("IBC 2021").doesNotContain("K_LL@");
+        assertThat(before.entrySet().stream().filter(e -> e.getKey().startsWith("takedown ")).findFirst().orElseThrow().getValue()).contains("K_LL@");
         store().projects().update(Editor.DEMO, p.id(), ibc.version(), ibc.info().withFloorMethod(null));
         assertThat(records(p.id())).isEqualTo(before);
     }
