@@ -1,6 +1,5 @@
 package com.baysheet.engine.member;
 
-import com.baysheet.engine.reduction.ReductionMethods;
 
 import com.baysheet.engine.beam.BeamActions;
 import com.baysheet.engine.beam.BeamLoads;
@@ -11,6 +10,7 @@ import com.baysheet.engine.load.Support;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.reduction.CalcContext;
+import com.baysheet.engine.reduction.ReductionMethods;
 import com.baysheet.engine.units.Quantity;
 
 import java.util.ArrayList;

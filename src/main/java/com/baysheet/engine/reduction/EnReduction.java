@@ -98,7 +98,7 @@ final class EnReduction implements FloorReductionMethod {
     /** The occupancy's category where it may be reduced, "" where not (with the reason on the record). */
     private String reducibleCategory(Occupancy o, RecordBuilder rec) {
         if (MethodSteps.refusedByCatalogue(o)) {
-            MethodSteps.notReduced(null, o, "the catalogue does not permit reduction (kept under every method)", data.clause("categories"), rec);
+            MethodSteps.notReduced(o, "the catalogue does not permit reduction (kept under every method)", data.clause("categories"), rec);
             return "";
         }
         String c = data.category(o.id());
@@ -107,7 +107,7 @@ final class EnReduction implements FloorReductionMethod {
             return "";
         }
         if (!data.reducible().contains(c)) {
-            MethodSteps.notReduced(null, o, "category " + c, data.clause("area"), rec);
+            MethodSteps.notReduced(o, "category " + c, data.clause("area"), rec);
             return "";
         }
         return c;

@@ -14,9 +14,10 @@ import java.util.Map;
 /**
  * The IBC alternative uniform live load reduction (IBC 2021 1607.12.2; IBC 2015 1607.10.2): R = 0.08 (A − 150) %
  * (SI 0.861 (A − 13.94)) on members supporting more than 150 ft², not more than 40 % for horizontal members, 60 % for
- * vertical members, nor 23.1 (1 + D/L0) %; L = L0 (1 − R/100). Not in Group A (assembly) occupancies; L0 over 100 psf and
+ * vertical members, nor 23.1 (1 + D/L0) % (IBC 2018 Eqs. 16-31, 16-32); L = L0 (1 − R/100). L0 over 100 psf and
  * passenger vehicle garages only on members supporting two or more floors, by at most 20 %; one-way slabs take
- * A ≤ 0.5 ℓ². Clause labels and constants are the data set's.
+ * A ≤ 0.5 ℓ²; assembly rows are not reduced (the load table's limitation, Table 1607.1). Clause labels and constants
+ * are the data set's.
  *
  * <p>Our choices (each printed on the record): A is the reducible area (mixed occupancy, common practice) summed over
  * every floor supported; R is worked out per occupancy, since 23.1 (1 + D/L0) depends on its L0; D is the dead load the
@@ -73,10 +74,12 @@ final class IbcAlternativeReduction implements FloorReductionMethod {
         double rEq = 0, rMax = 0, d = 0;
         if (reducible > 0) {
             rEq = equation(ctx, reducible, reducible < total, rec);
-            boolean vertical = kind.isColumn();
-            rMax = rec.step("R_max", "Largest reduction, " + (vertical ? "vertical member" : "horizontal member"), "R_max",
-                    "Clause value", data.constant(vertical ? "r.maxVertical" : "r.maxHorizontal"), Quantity.RATIO, data.clause("alt.eq"));
-            if (rEq > 0) d = deadLoad(dead, rec);
+            if (rEq > 0) {
+                boolean vertical = kind.isColumn();
+                rMax = rec.step("R_max", "Largest reduction, " + (vertical ? "vertical member" : "horizontal member"), "R_max",
+                        "Clause value", data.constant(vertical ? "r.maxVertical" : "r.maxHorizontal"), Quantity.RATIO, data.clause("alt.eq"));
+                d = deadLoad(dead, rec);
+            }
         }
 
         Map<String, Double> bySource = new LinkedHashMap<>(), factors = new LinkedHashMap<>();
@@ -123,15 +126,15 @@ final class IbcAlternativeReduction implements FloorReductionMethod {
     private double factor(CalcContext ctx, Occupancy o, ReductionRule rule, int floors, double rEq, double rMax, double d, RecordBuilder rec) {
         switch (rule) {
             case NOT_REDUCIBLE -> {
-                String why = o.assembly() ? "assembly use (Group A)" : o.isBalcony() ? "balcony or deck, not reduced by choice (see the balcony note)"
+                String why = o.assembly() ? "assembly use (Group A; the load table's limitation, kept for every assembly row)" : o.isBalcony() ? "balcony or deck, not reduced by choice (see the balcony note)"
                         : "the catalogue does not permit reduction";
-                MethodSteps.notReduced(ctx, o, why, data.clause(o.assembly() ? "alt.assembly" : "alt"), rec);
+                MethodSteps.notReduced(o, why, data.clause(o.assembly() ? "alt.assembly" : "alt"), rec);
                 return 1;
             }
             case HEAVY, GARAGE -> {
                 String clause = rule == ReductionRule.HEAVY ? "alt.heavy" : "alt.garage";
                 if (floors == 1) {
-                    MethodSteps.notReduced(ctx, o, (rule == ReductionRule.HEAVY ? "live load over "
+                    MethodSteps.notReduced(o, (rule == ReductionRule.HEAVY ? "live load over "
                             + rec.show(data.constant("heavy.threshold", ctx.system()), Quantity.PRESSURE) : "passenger vehicle garage")
                             + ", on a member supporting one floor", data.clause(clause), rec);
                     return 1;
@@ -149,7 +152,7 @@ final class IbcAlternativeReduction implements FloorReductionMethod {
                 double r = Math.min(rEq, Math.min(rMax, rDead));
                 rec.step("R[" + o.id() + "]", "Reduction, percent, " + o.name(), "R = min(R_eq, R_max, " + rec.plain(coef) + " (1 + D/L0))",
                         "min(" + rec.fmt(rEq) + ", " + rec.fmt(rMax) + ", " + rec.plain(coef) + " × (1 + " + rec.num(d, Quantity.PRESSURE)
-                                + "/" + rec.num(l0, Quantity.PRESSURE) + "))", r, Quantity.RATIO, data.clause("alt.eq"));
+                                + "/" + rec.num(l0, Quantity.PRESSURE) + "))", r, Quantity.RATIO, data.clause("alt.dead"));
                 return 1 - r / 100;
             }
             default -> throw new IllegalStateException("roof occupancy " + o.id() + " reached the floor reduction");

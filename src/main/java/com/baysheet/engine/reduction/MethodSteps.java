@@ -40,7 +40,7 @@ final class MethodSteps {
         return o.rule() == ReductionRule.NOT_REDUCIBLE;
     }
 
-    static void notReduced(CalcContext ctx, Occupancy o, String why, Clause clause, RecordBuilder rec) {
+    static void notReduced(Occupancy o, String why, Clause clause, RecordBuilder rec) {
         rec.info("Not reduced: " + o.name() + ", " + why + ".", clause);
     }
 

@@ -92,12 +92,12 @@ final class NbcReduction implements FloorReductionMethod {
     /** The occupancy's rule, "" where it is not reduced (with the reason on the record). */
     private String group(CalcContext ctx, Occupancy o, RecordBuilder rec) {
         if (MethodSteps.refusedByCatalogue(o)) {
-            MethodSteps.notReduced(ctx, o, "the catalogue does not permit reduction (kept under every method)", data.clause("tributary"), rec);
+            MethodSteps.notReduced(o, "the catalogue does not permit reduction (kept under every method)", data.clause("tributary"), rec);
             return "";
         }
         double min = data.constant("assembly.minLoad");
         if (o.assembly() && o.uniform(ctx.system()) < min) {
-            MethodSteps.notReduced(ctx, o, "assembly use designed for less than " + rec.show(min, Quantity.PRESSURE), data.clause("tributary.large"), rec);
+            MethodSteps.notReduced(o, "assembly use designed for less than " + rec.show(min, Quantity.PRESSURE), data.clause("tributary.large"), rec);
             return "";
         }
         if (!data.lists(o.id()))
