@@ -37,7 +37,7 @@ final class MemberJson {
     record Parsed(CalcContext context, MemberInput input) {}
 
     static final Set<String> TOP = Set.of("edition", "units", "subject", "kind", "support", "floorsSupported", "strips",
-            "areas", "pointLoads", "selfWeight", "roofSlope", "EI", "onRoof", "options", "customOccupancies", "floors", "snow");
+            "areas", "pointLoads", "selfWeight", "roofSlope", "EI", "onRoof", "options", "customOccupancies", "floors", "snow", "floorMethod");
 
     static Parsed parse(JsonNode root) {
         JsonFields f = JsonFields.strict(root, "", TOP);
@@ -46,7 +46,8 @@ final class MemberJson {
         OccupancyCatalogue catalogue = OccupancyCatalogue.builtIn();
         int i = 0;
         for (JsonNode c : f.array("customOccupancies")) catalogue = catalogue.with(custom(c, "customOccupancies[" + i++ + "]", units));
-        CalcContext plain = new CalcContext(Editions.builtIn().get(edition), units, catalogue, options(f));
+        CalcContext plain = new CalcContext(Editions.builtIn().get(edition), units, catalogue, options(f), null,
+                f.text("floorMethod", ""));
         String subject = f.text("subject");
         MemberKind kind = MemberKind.parse("kind", f.text("kind"));
         Support support = support(JsonFields.strict(f.node("support"), "support", Set.of("type", "span", "overhang", "length")));

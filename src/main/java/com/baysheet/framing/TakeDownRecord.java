@@ -8,6 +8,7 @@ import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.record.ResultKey;
 import com.baysheet.engine.record.Step;
 import com.baysheet.engine.CalcContext;
+import com.baysheet.engine.reduction.ReductionMethods;
 import com.baysheet.engine.units.Quantity;
 
 import java.util.List;
@@ -29,20 +30,15 @@ final class TakeDownRecord {
             String at = "@" + w.level(), lv = w.level() + ": ";
             areas(rec, ctx, w, above, k == 0, lv, at);
             above = w.cumulativeArea();
-            rec.step("K_LL" + at, lv + "live load element factor of the column's place at this level", "K_LL", "Table value",
-                    w.kll(), Quantity.RATIO, ed.clause("reduction.kll"));
-            Step kat = find(r, "K_LL·A_T");
-            rec.step("K_LL·ΣA_T" + at, lv + "influence area that gives f" + (reducedInPart(w) ? ", from the reducible area of each floor" : ""),
-                    kat == null ? "Σ K_LL,i × A_T,r,i" : kat.formula(), kat == null ? "no reducible floor area" : kat.substituted(),
-                    w.influenceArea(), Quantity.AREA, ed.clause("reduction.basic"));
-            rec.step("f" + at, lv + "reduction factor on ordinary floor live load", formula(ctx, rec),
-                    factorWorking(ctx, rec, r, w), w.factor(), Quantity.RATIO, ed.clause("reduction.eq"));
+            if (ctx.floorMethod() == null) basicFactor(ctx, rec, r, w, lv, at);
+            else rec.step("f" + at, lv + "factor the reducible floor live loads take together, " + ReductionMethods.of(ctx).title(ctx),
+                    "f = Σ f_i L0 A_i / Σ L0 A_i", "see the column record " + w.member(), w.factor(), Quantity.RATIO, ReductionMethods.of(ctx).clause(ctx));
             rec.step("P_sw" + at, lv + "self weight of the column below this level", "P_sw = w_sw × h",
                     "see the column record " + w.member(), w.selfWeightAtLevel(), Quantity.FORCE, Clause.NONE);
             rec.step("P_D" + at, lv + "dead load", "Σ D", "level adds " + rec.show(w.deadAtLevel(), Quantity.FORCE) + ", column self weight included", w.dead(), Quantity.FORCE,
                     Clause.NONE);
             rec.step("P_L" + at, lv + "floor live load, reduced (unreduced " + rec.show(w.liveUnreduced(), Quantity.FORCE) + ")", "Σ f_i L0 A_i",
-                    "see the column record " + w.member(), w.liveReduced(), Quantity.FORCE, ed.clause("reduction.eq"));
+                    "see the column record " + w.member(), w.liveReduced(), Quantity.FORCE, ReductionMethods.of(ctx).clause(ctx));
             if (w.roofLive() > 0)
                 rec.step("P_Lr" + at, lv + "roof live load", "Σ Lr A_i", "see the column record " + w.member(), w.roofLive(), Quantity.FORCE,
                         ed.clause("roof.reduction"));
@@ -65,6 +61,19 @@ final class TakeDownRecord {
            .governs(ResultKey.axial("LRFD")).governs(ResultKey.axial("ASD"));
         notes(rec, ctx);
         return rec.build();
+    }
+
+    /** K_LL, the influence area and f of the edition's own reduction (Eq. 4.7-1), as the column's record works them out. */
+    private static void basicFactor(CalcContext ctx, RecordBuilder rec, CalcRecord r, TakeDown.Row w, String lv, String at) {
+        var ed = ctx.edition();
+        rec.step("K_LL" + at, lv + "live load element factor of the column's place at this level", "K_LL", "Table value",
+                w.kll(), Quantity.RATIO, ed.clause("reduction.kll"));
+        Step kat = find(r, "K_LL·A_T");
+        rec.step("K_LL·ΣA_T" + at, lv + "influence area that gives f" + (reducedInPart(w) ? ", from the reducible area of each floor" : ""),
+                kat == null ? "Σ K_LL,i × A_T,r,i" : kat.formula(), kat == null ? "no reducible floor area" : kat.substituted(),
+                w.influenceArea(), Quantity.AREA, ed.clause("reduction.basic"));
+        rec.step("f" + at, lv + "reduction factor on ordinary floor live load", formula(ctx, rec),
+                factorWorking(ctx, rec, r, w), w.factor(), Quantity.RATIO, ed.clause("reduction.eq"));
     }
 
     /** A_T supported (cumulative) with what this level adds, and the reducible part where it differs. */
@@ -104,12 +113,18 @@ final class TakeDownRecord {
         var ed = ctx.edition();
         rec.info("Each level's column carries everything at and above it; its reduction uses its own tributary area summed over "
                 + "the floors it supports, never the reduced reactions of the members it carries (common practice).", ed.clause("reduction.multifloor"));
-        rec.info("Influence area: each floor counts with the K_LL of the column's place on that floor, K_LL·A_T = Σ K_LL,i A_T,i over "
-                + "the floors supported; with mixed occupancy only the reducible area of each floor counts, so f follows from "
-                + "Σ K_LL,i × reducible A_T,i, printed beside it (common practice).", ed.clause("reduction.multifloor"));
-        rec.info("f is the reduction factor with its lower limit, as it applies to ordinary floor live load; heavy loads and "
-                + "garages (reduced by at most 20 %) and assembly uses (not reduced) follow their own rules in each column's "
-                + "record, so L reduced / L unreduced can differ from f.", ed.clause("reduction.eq"));
+        if (ctx.floorMethod() != null) {
+            rec.info("Floor live loads reduced by the project's chosen method, " + ReductionMethods.of(ctx).title(ctx) + "; f is the "
+                    + "factor the reducible loads take together, each occupancy's own factor is in each column's record; loads and "
+                    + "combinations stay " + ed.id() + ".", ReductionMethods.of(ctx).clause(ctx));
+        } else {
+            rec.info("Influence area: each floor counts with the K_LL of the column's place on that floor, K_LL·A_T = Σ K_LL,i A_T,i over "
+                    + "the floors supported; with mixed occupancy only the reducible area of each floor counts, so f follows from "
+                    + "Σ K_LL,i × reducible A_T,i, printed beside it (common practice).", ed.clause("reduction.multifloor"));
+            rec.info("f is the reduction factor with its lower limit, as it applies to ordinary floor live load; heavy loads and "
+                    + "garages (reduced by at most 20 %) and assembly uses (not reduced) follow their own rules in each column's "
+                    + "record, so L reduced / L unreduced can differ from f.", ed.clause("reduction.eq"));
+        }
         rec.caution("Results must be checked by a licensed engineer; the adopted local code and its amendments govern.", Clause.NONE);
     }
 

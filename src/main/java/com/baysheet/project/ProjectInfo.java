@@ -8,16 +8,25 @@ import com.baysheet.engine.code.Edition;
 import com.baysheet.engine.code.Editions;
 import com.baysheet.engine.snow.SnowSite;
 import com.baysheet.engine.load.DesignOptions;
+import com.baysheet.engine.reduction.FloorMethods;
 import com.baysheet.engine.units.UnitSystem;
 
 /**
  * What a project is: the job and its people, the code edition, the unit system its numbers are in (fixed
- * once levels exist, since every stored length and load is in that system), the design options and the snow site
- * (null: no ground snow load given, so no member carries snow).
+ * once levels exist, since every stored length and load is in that system), the design options, the snow site
+ * (null: no ground snow load given, so no member carries snow) and the floor reduction method chosen instead of the
+ * edition's own (null: the edition's own).
  */
 public record ProjectInfo(String jobNumber, String name, String address, String client, String edition,
                           UnitSystem units, boolean partitionAllowance, boolean reducePartitions,
-                          boolean upliftReducedDead, @JsonIgnore SnowSite snow) {
+                          boolean upliftReducedDead, @JsonIgnore SnowSite snow, String floorMethod) {
+    /** The edition's own floor reduction method. */
+    public ProjectInfo(String jobNumber, String name, String address, String client, String edition,
+                       UnitSystem units, boolean partitionAllowance, boolean reducePartitions, boolean upliftReducedDead,
+                       SnowSite snow) {
+        this(jobNumber, name, address, client, edition, units, partitionAllowance, reducePartitions, upliftReducedDead, snow, null);
+    }
+
     /** No snow site. */
     public ProjectInfo(String jobNumber, String name, String address, String client, String edition,
                        UnitSystem units, boolean partitionAllowance, boolean reducePartitions, boolean upliftReducedDead) {
@@ -34,6 +43,14 @@ public record ProjectInfo(String jobNumber, String name, String address, String 
         Check.present("units", units);
         // the engine has no roof snow for some editions (ASCE 7-22): refused here, beside the ground snow load
         if (snow != null) SnowInput.check(ed, units, snow);
+        // EN 1991-1-1 and NBC are written for SI only: refused beside the field on a US project
+        floorMethod = FloorMethods.builtIn().validate(floorMethod, units);
+    }
+
+    /** The same project with another floor reduction method (null for the edition's own). */
+    public ProjectInfo withFloorMethod(String id) {
+        return new ProjectInfo(jobNumber, name, address, client, edition, units, partitionAllowance, reducePartitions,
+                upliftReducedDead, snow, id);
     }
 
     /** A project with the uplift option off (0.9D + 1.6L not taken for minimum reactions). */

@@ -6,12 +6,20 @@ import java.util.List;
 
 /**
  * A calculation package: cover (project data and design criteria), index, member sheets grouped by level
- * and member kind (put in that order here, otherwise as given), column take-downs and the revision log, all under one title block.
+ * and member kind (put in that order here, otherwise as given), column take-downs, the floor live load of each level's
+ * members under the other reduction methods (where the project chose a method other than its edition's own) and the
+ * revision log, all under one title block.
  *
  * @param title what the package covers ("Project package", "Level 2 package")
  */
 public record CalcPackage(SheetHeader header, String title, DesignCriteria criteria, List<MemberSheet> sheets,
-                          List<TakeDownTable> takeDowns, List<Revision> revisions) {
+                          List<TakeDownTable> takeDowns, List<Revision> revisions, List<TakeDownTable> methodTables) {
+    /** No comparison of floor reduction methods. */
+    public CalcPackage(SheetHeader header, String title, DesignCriteria criteria, List<MemberSheet> sheets,
+                       List<TakeDownTable> takeDowns, List<Revision> revisions) {
+        this(header, title, criteria, sheets, takeDowns, revisions, List.of());
+    }
+
     public CalcPackage {
         if (header == null) throw new InputError("header", "none", "a package needs its title block");
         if (title == null || title.isBlank()) throw new InputError("title", "\"\"", "a package needs a title");
@@ -19,12 +27,13 @@ public record CalcPackage(SheetHeader header, String title, DesignCriteria crite
         sheets = Index.grouped(List.copyOf(sheets));
         takeDowns = List.copyOf(takeDowns);
         revisions = List.copyOf(revisions);
+        methodTables = List.copyOf(methodTables);
         if (sheets.isEmpty() && takeDowns.isEmpty())
             throw new InputError("sheets", 0, "a package needs at least one member sheet or take-down");
     }
 
     /** The same package under another title block of its own (the member sheets keep theirs). */
     public CalcPackage withHeader(SheetHeader h) {
-        return new CalcPackage(h, title, criteria, sheets, takeDowns, revisions);
+        return new CalcPackage(h, title, criteria, sheets, takeDowns, revisions, methodTables);
     }
 }

@@ -48,6 +48,10 @@ final class Criteria {
                 "Minimum reactions of overhanging beams: " + (opt.upliftReducedDead()
                         ? "the code combinations, and also 0.9D + 1.6L (firm practice, not a " + ctx.edition().clause("combo.lrfd").ref() + " combination)"
                         : "the code combinations (" + ctx.edition().clause("combo.lrfd").ref() + ", " + ctx.edition().clause("combo.asd").ref() + ")")));
+        if (ctx.floorMethod() != null)
+            options.add(1, "Floor live load reduction by the project's chosen method: "
+                    + com.baysheet.engine.reduction.FloorMethods.builtIn().get(ctx.floorMethod()).title()
+                    + ", in place of the basic reduction listed below; loads and combinations stay " + ctx.edition().id());
         options.add(SnowCriteria.line(ctx));
         return new DesignCriteria(ctx.edition().id(), ctx.system() == com.baysheet.engine.units.UnitSystem.US
                 ? "US customary (ft, psf, plf, kip, kip·ft)" : "SI (m, kPa, kN/m, kN, kN·m)", rows, options);

@@ -46,7 +46,7 @@ public final class FramingSheets {
         for (var t : d.takeDowns())
             if (t.rows().stream().anyMatch(r -> r.level().equals(level))) downs.add(TakeDownTables.of(d, t));
         return new CalcPackage(base.withSubject(level + " package"), level + " package", Criteria.of(d.building()),
-                sheets(members, d, on), downs, revisions);
+                sheets(members, d, on), downs, revisions, MethodTables.of(d, List.of(level)));
     }
 
     /** The whole project, every member sheet under the package's own title block. */
@@ -62,7 +62,8 @@ public final class FramingSheets {
     public static CalcPackage project(SheetHeader base, Derived d, List<Revision> revisions,
                                       Function<DerivedMember, SheetHeader> members) {
         return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
-                sheets(members, d, d.members()), d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions);
+                sheets(members, d, d.members()), d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions,
+                MethodTables.of(d, d.members().stream().map(DerivedMember::level).distinct().toList()));
     }
 
     /**

@@ -25,6 +25,7 @@ import java.util.StringJoiner;
 final class Index {
     static final Object TAKE_DOWNS = new Object();
     static final Object REVISIONS = new Object();
+    static final Object METHODS = new Object();
 
     private final PdfaDocument pdf;
     private final CalcPackage pkg;
@@ -36,6 +37,7 @@ final class Index {
         for (MemberSheet s : pkg.sheets()) starts.put(s, template());
         starts.put(TAKE_DOWNS, template());
         starts.put(REVISIONS, template());
+        starts.put(METHODS, template());
     }
 
     private PdfTemplate template() { return pdf.writer.getDirectContent().createTemplate(28, 9); }
@@ -62,6 +64,8 @@ final class Index {
         }
         if (!pkg.takeDowns().isEmpty())
             row(t, starts.get(TAKE_DOWNS), "Column take-downs", pkg.takeDowns().size() + " column stacks");
+        if (!pkg.methodTables().isEmpty())
+            row(t, starts.get(METHODS), "Floor live load reduction methods compared", pkg.methodTables().size() + " levels");
         row(t, starts.get(REVISIONS), "Revision log", "");
         pdf.add(t);
     }

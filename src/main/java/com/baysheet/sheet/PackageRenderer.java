@@ -66,6 +66,12 @@ public final class PackageRenderer {
             index.startsHere(Index.TAKE_DOWNS);
             new TakeDownPages(pdf, pkg.takeDowns()).write();
         }
+        if (!pkg.methodTables().isEmpty()) {
+            pdf.newPage();
+            pdf.frame.show(pkg.header().withSubject("Reduction methods compared"), pkg.title() + " · reduction methods compared");
+            index.startsHere(Index.METHODS);
+            new TakeDownPages(pdf, pkg.methodTables()).write();
+        }
         pdf.newPage();
         pdf.frame.show(pkg.header().withSubject("Revision log"), pkg.title() + " · revision log");
         index.startsHere(Index.REVISIONS);
@@ -86,6 +92,7 @@ public final class PackageRenderer {
         d.update(("package|" + pkg.header() + "|" + pkg.title() + "|" + pkg.criteria() + "|" + pkg.revisions()).getBytes(StandardCharsets.UTF_8));
         for (MemberSheet s : pkg.sheets()) d.update(s.toString().getBytes(StandardCharsets.UTF_8));
         for (TakeDownTable t : pkg.takeDowns()) d.update(t.toString().getBytes(StandardCharsets.UTF_8));
+        for (TakeDownTable t : pkg.methodTables()) d.update(t.toString().getBytes(StandardCharsets.UTF_8));
         return d.digest();
     }
 }

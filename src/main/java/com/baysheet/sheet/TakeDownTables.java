@@ -26,10 +26,12 @@ final class TakeDownTables {
                 "Floors", "f", "D at level (" + f + ")", "Column self weight (" + f + ")", "ΣD (" + f + ")", "L0 (" + f + ")", "L (" + f + ")", "Lr (" + f + ")", "S (" + f + ")",
                 "LRFD (" + f + ")", "ASD (" + f + ")");
         List<List<String>> rows = new ArrayList<>();
+        // under a chosen floor method K_LL and the influence area give no factor: left blank
+        boolean basic = d.building().context().floorMethod() == null;
         for (TakeDown.Row r : t.rows()) {
             String column = d.member(r.member()).map(DerivedMember::name).orElse(r.member());
             rows.add(List.of(r.level(), column, n(r.areaAtLevel(), Quantity.AREA, sys), n(r.cumulativeArea(), Quantity.AREA, sys),
-                    n(r.reducibleArea(), Quantity.AREA, sys), Display.sig3(r.kll()), n(r.influenceArea(), Quantity.AREA, sys), Integer.toString(r.floorsSupported()),
+                    n(r.reducibleArea(), Quantity.AREA, sys), basic ? Display.sig3(r.kll()) : "—", basic ? n(r.influenceArea(), Quantity.AREA, sys) : "—", Integer.toString(r.floorsSupported()),
                     Display.sig3(r.factor()), n(r.deadAtLevel(), Quantity.FORCE, sys),
                     n(r.selfWeightAtLevel(), Quantity.FORCE, sys), n(r.dead(), Quantity.FORCE, sys),
                     n(r.liveUnreduced(), Quantity.FORCE, sys), n(r.liveReduced(), Quantity.FORCE, sys), n(r.roofLive(), Quantity.FORCE, sys), n(r.snow(), Quantity.FORCE, sys),

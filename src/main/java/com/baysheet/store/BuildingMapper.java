@@ -33,7 +33,7 @@ final class BuildingMapper {
     static Model load(Connection c, long projectId) throws SQLException {
         Project p = ProjectStore.find(c, projectId);
         CalcContext ctx = new CalcContext(Editions.builtIn().get(p.info().edition()), p.info().units(),
-                OccupancyStore.catalogue(c), p.info().options(), p.info().snow());
+                OccupancyStore.catalogue(c), p.info().options(), p.info().snow(), p.info().floorMethod());
         List<StoredLevel> stored = LevelStore.findByProject(c, projectId);
         List<Level> levels = new ArrayList<>();
         List<String> unframed = new ArrayList<>();

@@ -45,7 +45,8 @@ public final class ModelJson {
         JsonFields n = JsonFields.of(node);
         return new ProjectInfo(n.text("jobNumber"), n.text("name"), n.text("address", ""), n.text("client", ""),
                 n.has("edition") ? n.text("edition") : edition, UnitSystem.parse("units", n.text("units")),
-                n.flag("partitionAllowance", false), n.flag("reducePartitions", false), n.flag("upliftReducedDead", false), snow(n));
+                n.flag("partitionAllowance", false), n.flag("reducePartitions", false), n.flag("upliftReducedDead", false), snow(n),
+                n.text("floorMethod", ""));
     }
 
     /** The optional snow fields of a project (see {@link SnowInput}); no groundSnow, no snow. */

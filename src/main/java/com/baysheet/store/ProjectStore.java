@@ -22,7 +22,7 @@ import java.util.List;
 /** Projects: listing, creating, settings, and the version that guards every change to a project. */
 public final class ProjectStore {
     private static final String COLUMNS = "id, version, job_number, name, address, client, edition, unit_system, "
-            + "partition_allowance, reduce_partitions, uplift_reduced_dead, " + SnowColumns.NAMES;
+            + "partition_allowance, reduce_partitions, uplift_reduced_dead, " + SnowColumns.NAMES + ", floor_method";
 
     private final Sql sql;
     private final ModelWrites writes;
@@ -56,7 +56,7 @@ public final class ProjectStore {
             long id;
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO project (version, job_number, name, address, "
                     + "client, edition, unit_system, partition_allowance, reduce_partitions, uplift_reduced_dead, "
-                    + SnowColumns.NAMES + ", created_at, updated_at) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
+                    + SnowColumns.NAMES + ", floor_method, created_at, updated_at) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
                 int i = bind(ps, info);
                 ps.setObject(i++, now);
                 ps.setObject(i, now);
@@ -89,7 +89,7 @@ public final class ProjectStore {
             for (StoredLevel l : LevelStore.findByProject(c, id)) SnowInput.checkRoof(info, l.info(), "groundSnow");
             try (PreparedStatement ps = c.prepareStatement("UPDATE project SET job_number = ?, name = ?, address = ?, "
                     + "client = ?, edition = ?, unit_system = ?, partition_allowance = ?, reduce_partitions = ?, "
-                    + "uplift_reduced_dead = ?, " + SnowColumns.SETS + " WHERE id = ?")) {
+                    + "uplift_reduced_dead = ?, " + SnowColumns.SETS + ", floor_method = ? WHERE id = ?")) {
                 int i = bind(ps, info);
                 ps.setLong(i, id);
                 ps.executeUpdate();
@@ -162,7 +162,8 @@ public final class ProjectStore {
     /** The settings that change a calculation, as the audit entry records them before and after. */
     static String settings(ProjectInfo i) {
         return i.jobNumber() + " " + i.name() + ", " + i.edition() + ", " + i.units() + (i.partitionAllowance() ? ", partitions" : "")
-                + (i.reducePartitions() ? " reduced" : "") + (i.upliftReducedDead() ? ", uplift with reduced dead" : "");
+                + (i.reducePartitions() ? " reduced" : "") + (i.upliftReducedDead() ? ", uplift with reduced dead" : "")
+                + (i.floorMethod() != null ? ", floor reduction " + i.floorMethod() : "");
     }
 
     private static int bind(PreparedStatement ps, ProjectInfo p) throws SQLException {
@@ -175,7 +176,9 @@ public final class ProjectStore {
         ps.setBoolean(7, p.partitionAllowance());
         ps.setBoolean(8, p.reducePartitions());
         ps.setBoolean(9, p.upliftReducedDead());
-        return SnowColumns.bind(ps, 10, p.snow());
+        int i = SnowColumns.bind(ps, 10, p.snow());
+        ps.setString(i, p.floorMethod());
+        return i + 1;
     }
 
     private static Project read(ResultSet rs) throws SQLException {
@@ -183,6 +186,6 @@ public final class ProjectStore {
                 rs.getString("name"), rs.getString("address"), rs.getString("client"), rs.getString("edition"),
                 UnitSystem.valueOf(rs.getString("unit_system")), rs.getBoolean("partition_allowance"),
                 rs.getBoolean("reduce_partitions"), rs.getBoolean("uplift_reduced_dead"),
-                SnowColumns.read(rs)));
+                SnowColumns.read(rs), rs.getString("floor_method")));
     }
 }

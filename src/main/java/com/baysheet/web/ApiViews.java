@@ -69,7 +69,8 @@ final class ApiViews {
         }
     }
 
-    record MemberDetail(MemberJson member, CalcRecord record) {}
+    /** A member, its record, and its floor live load under each reduction method its project could choose (own first). */
+    record MemberDetail(MemberJson member, CalcRecord record, java.util.List<com.baysheet.engine.member.MethodComparison.Row> methods) {}
 
     record TakeDownJson(String id, String gridPoint, List<TakeDown.Row> rows, CalcRecord record) {
         static TakeDownJson of(TakeDown t) { return new TakeDownJson(t.id(), t.gridPoint(), t.rows(), t.record()); }

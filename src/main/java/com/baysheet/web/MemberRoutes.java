@@ -63,6 +63,8 @@ final class MemberRoutes {
         UnitLabels units = UnitLabels.of(c.project().info().units());
         m.put("row", MemberRow.of(member, "", units));
         m.put("kllClause", kllClause(c));
+        m.put("methods", member.result().methods());
+        m.put("levelId", c.model().levels().stream().filter(l -> l.name().equals(member.level())).map(l -> l.id()).findFirst().orElse(null));
         // a column's area is this level's; the A_T it is reduced with is cumulative over the floors it supports
         m.put("supportedArea", member.role() != MemberRole.COLUMN ? null
                 : member.result().floorReduction().map(lf -> units.area(lf.tributaryArea())).orElse(null));

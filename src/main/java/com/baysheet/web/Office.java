@@ -129,6 +129,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new PlanRoutes(store).install(r);
         new MemberRoutes(store).install(r);
         new TakeDownRoutes(store).install(r);
+        new MethodRoutes(store).install(r);
         new OccupancyRoutes(store).install(r);
         new ApiRoutes(store).install(r);
         new ApiResultRoutes(store).install(r);

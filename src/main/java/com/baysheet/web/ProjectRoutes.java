@@ -91,6 +91,7 @@ final class ProjectRoutes {
         m.put("form", form);
         m.put("editions", Editions.builtIn().ids());
         m.put("unitSystems", UnitSystem.values());
+        m.put("floorMethods", com.baysheet.engine.reduction.FloorMethods.builtIn().all());
         m.put("snowTerrains", com.baysheet.engine.snow.Exposure.Terrain.values());
         m.put("snowExposures", com.baysheet.engine.snow.Exposure.Shelter.values());
         m.put("thermalConditions", com.baysheet.engine.snow.Thermal.Condition.values());
@@ -102,7 +103,7 @@ final class ProjectRoutes {
         UnitSystem units = UnitSystem.parse("units", f.text("units"));
         return new ProjectInfo(f.text("jobNumber"), f.text("name"), f.text("address"), f.text("client"),
                 f.text("edition"), units, f.checked("partitionAllowance"), f.checked("reducePartitions"),
-                f.checked("upliftReducedDead"), snow(f));
+                f.checked("upliftReducedDead"), snow(f), f.text("floorMethod"));
     }
 
     /** The snow fields (all ignored where groundSnow is blank: no snow); numbers read with the form's own parsing. */
@@ -122,6 +123,7 @@ final class ProjectRoutes {
         if (i.partitionAllowance()) v.put("partitionAllowance", "on");
         if (i.reducePartitions()) v.put("reducePartitions", "on");
         if (i.upliftReducedDead()) v.put("upliftReducedDead", "on");
+        v.put("floorMethod", i.floorMethod() == null ? "" : i.floorMethod());
         SnowInput.fields(i.snow()).forEach((k, x) -> v.put(k, x instanceof Double d ? Display.plain(d) : String.valueOf(x)));
         return v;
     }

@@ -36,6 +36,12 @@ final class TakeDownRoutes {
         Map<String, Object> m = MemberRoutes.base(c);
         m.put("takeDown", t);
         m.put("record", t.record());
+        var calc = c.model().building().context();
+        m.put("basicMethod", calc.floorMethod() == null);
+        m.put("methodTitle", com.baysheet.engine.reduction.ReductionMethods.of(calc).title(calc));
+        // the column below each level under every floor reduction method the project could choose
+        var columns = t.rows().stream().map(r -> c.derived().member(r.member())).flatMap(java.util.Optional::stream).toList();
+        m.put("methods", MethodTable.of(columns, "/projects/" + c.project().id() + "/members/", UnitLabels.of(c.project().info().units())));
         ctx.render("takedowns/show", m);
     }
 }

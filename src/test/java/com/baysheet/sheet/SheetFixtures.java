@@ -65,7 +65,10 @@ final class SheetFixtures {
     }
 
     /** Three bays by two, an office floor under a roof, infill beams spanning in x. */
-    static Derived building() {
+    static Derived building() { return building(US); }
+
+    /** The same building in the given project context (another floor reduction method, say). */
+    static Derived building(CalcContext ctx) {
         Grid g = new Grid(new GridAxis("x", List.of("1", "2", "3", "4"), List.of(30.0, 30.0, 30.0)),
                 new GridAxis("y", List.of("A", "B", "C"), List.of(25.0, 25.0)));
         List<Bay> floor = new ArrayList<>(), roof = new ArrayList<>();
@@ -74,7 +77,7 @@ final class SheetFixtures {
                 floor.add(Bay.floor(c, r, "office", 65, new Framing(Direction.X, 2)));
                 roof.add(Bay.floor(c, r, "roof-ordinary", 25, new Framing(Direction.X, 2)));
             }
-        Building b = new Building("Elm Street Offices", US, g,
+        Building b = new Building("Elm Street Offices", ctx, g,
                 List.of(Level.floor("Level 2", 14, floor), Level.roof("Roof", 28, 0.25, roof)));
         return Derivation.derive(b);
     }

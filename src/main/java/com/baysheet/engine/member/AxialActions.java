@@ -19,7 +19,8 @@ final class AxialActions {
         double l0 = floor0.total(), l = floor.total();
         if (l0 > 0) {
             rec.step("P_L0", "Axial floor live load, unreduced", "P_L0 = Σ L0 A_i", "sum over sources", l0, Quantity.FORCE, ed.clause("loads.table"));
-            rec.step("P_L", "Axial floor live load, reduced", "P_L = Σ f_i L0 A_i", "sum over sources", l, Quantity.FORCE, ed.clause("reduction.eq"));
+            rec.step("P_L", "Axial floor live load, reduced", "P_L = Σ f_i L0 A_i", "sum over sources", l, Quantity.FORCE,
+                    com.baysheet.engine.reduction.ReductionMethods.of(ctx).clause(ctx));
         }
         double lr = roof.total();
         if (roof0.total() > 0) {

@@ -1,5 +1,6 @@
 package com.baysheet.engine.member;
 
+
 import com.baysheet.engine.beam.BeamActions;
 import com.baysheet.engine.beam.BeamLoads;
 import com.baysheet.engine.code.Edition;
@@ -10,6 +11,7 @@ import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.record.ResultKey;
 import com.baysheet.engine.CalcContext;
+import com.baysheet.engine.reduction.ReductionMethods;
 import com.baysheet.engine.units.Quantity;
 
 import java.util.ArrayList;
@@ -55,7 +57,7 @@ final class BendingActions {
         double[] l = new double[effects.size()];
         if (!floor0.isEmpty()) {
             caseEffects(rec, "L0", "floor live load, unreduced", s, List.of(floor0), effects, Double.NaN, ed.clause("loads.table"));
-            l = caseEffects(rec, "L", "floor live load, reduced", s, patterns(s, floor), effects, ei, ed.clause("reduction.eq"));
+            l = caseEffects(rec, "L", "floor live load, reduced", s, patterns(s, floor), effects, ei, ReductionMethods.of(ctx).clause(ctx));
         }
         double[] lr = new double[effects.size()];
         if (!roof.isEmpty()) lr = caseEffects(rec, "Lr", "roof live load", s, patterns(s, roof), effects, ei, ed.clause("roof.reduction"));

@@ -12,6 +12,7 @@ import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.PointLoad;
 import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.reduction.PartitionAllowance;
+import com.baysheet.engine.reduction.SupportedDead;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -34,6 +35,8 @@ final class LoadBook {
     /** Area of each occupancy apportioned to the left and right ends by the lever rule (half-way rule). */
     final Map<String, Double> leftAreas = new LinkedHashMap<>();
     final Map<String, Double> rightAreas = new LinkedHashMap<>();
+    /** The dead load the tributary area brings (strips, areas, carried reactions with area), for D/L0 rules. */
+    SupportedDead supportedDead = SupportedDead.NONE;
     private final CalcContext ctx;
     private final MemberInput in;
 
@@ -60,6 +63,7 @@ final class LoadBook {
             b.source(o.id()).distributed(o.uniform(ctx.system()) * s.width(), s.from(), s.to());
             if (b.partitioned(o)) b.source(o.id() + "#partitions").distributed(b.partition() * s.width(), s.from(), s.to());
             b.area(o, s.area(), (s.from() + s.to()) / 2);
+            b.supportedDead = b.supportedDead.plus(s.deadPressure() * s.area(), s.area());
         }
         for (int i = 0; i < in.areas().size(); i++) {
             AreaLoad a = in.areas().get(i);
@@ -68,6 +72,7 @@ final class LoadBook {
             b.source(o.id()).point(o.uniform(ctx.system()) * a.area(), 0);
             if (b.partitioned(o)) b.source(o.id() + "#partitions").point(b.partition() * a.area(), 0);
             b.area(o, a.area(), 0);
+            b.supportedDead = b.supportedDead.plus(a.deadPressure() * a.area(), a.area());
         }
         for (int i = 0; i < in.pointLoads().size(); i++) {
             PointLoad p = in.pointLoads().get(i);
@@ -79,6 +84,9 @@ final class LoadBook {
             }
             if (p.snow() > 0) b.snow.point(p.snow(), x);
             for (AreaShare a : p.areas()) b.area(b.occupancy("pointLoads[" + i + "].areas.occupancy", a.occupancy()), a.area(), x);
+            double brought = 0;
+            for (AreaShare a : p.areas()) brought += a.area();
+            if (brought > 0) b.supportedDead = b.supportedDead.plus(p.dead(), brought);
         }
         b.checkFloors();
         return b;

@@ -33,7 +33,8 @@ public final class MemberCalculation {
     public static MemberResult calculate(CalcContext ctx, MemberInput in) {
         RecordBuilder rec = RecordBuilder.numbersOnly(in.subject(), ctx.edition().id(), ctx.system());
         Outcome o = run(ctx, in, rec);
-        return new MemberResult(o.record, o.left, o.right, o.reduction, () -> run(ctx, in, new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system())).record);
+        return new MemberResult(o.record, o.left, o.right, o.reduction, () -> run(ctx, in, new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system())).record,
+                () -> MethodComparison.of(ctx, in));
     }
 
     private record Outcome(CalcRecord record, EndShare left, EndShare right, LiveFactors reduction) {}
@@ -63,14 +64,14 @@ public final class MemberCalculation {
         if (!book.floorAreas.isEmpty()) {
             if (in.onRoof())
                 rec.info("Occupiable roof: its live load follows the floor rules.", ctx.edition().clause("roof.occupiable"));
-            LiveFactors lf = ReductionMethods.forEdition(ctx).reduce(ctx, in.kind(), book.floorAreas, in.floors(),
-                    in.floorsSupported(), in.support().span(), rec);
+            LiveFactors lf = ReductionMethods.of(ctx).reduce(ctx, in.kind(), book.floorAreas, in.floors(),
+                    in.floorsSupported(), in.support().span(), book.supportedDead, rec);
             f.putAll(lf.bySource());
             reduction[0] = lf;
             if (!in.kind().isColumn() && carriesDeliveredArea(in))
                 rec.info("A_T includes the tributary areas delivered by the members this one carries, each counted once, "
-                        + "and its live load is reduced with its own K_LL·A_T, not taken from their reduced reactions "
-                        + "(common practice).", ctx.edition().clause("reduction.basic"));
+                        + "and its live load is reduced with its own " + (ctx.floorMethod() == null ? "K_LL·A_T" : "tributary area")
+                        + ", not taken from their reduced reactions (common practice).", ctx.edition().clause("reduction.basic"));
         }
         if (!book.roofAreas.isEmpty()) {
             // A_T of 4.8.2 is the ordinary roof area: other roof rows are not reduced and must not lower R1

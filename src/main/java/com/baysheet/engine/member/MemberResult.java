@@ -4,6 +4,7 @@ import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.ResultKey;
 import com.baysheet.engine.reduction.LiveFactors;
 
+import java.util.List;
 import java.util.Optional;
 import java.util.function.Supplier;
 
@@ -22,8 +23,12 @@ public final class MemberResult {
     private final LiveFactors reduction;
     private Supplier<CalcRecord> writer;
     private volatile CalcRecord record;
+    private final Supplier<List<MethodComparison.Row>> comparer;
+    private volatile List<MethodComparison.Row> methods;
 
-    MemberResult(CalcRecord numbers, EndShare left, EndShare right, LiveFactors reduction, Supplier<CalcRecord> writer) {
+    MemberResult(CalcRecord numbers, EndShare left, EndShare right, LiveFactors reduction, Supplier<CalcRecord> writer,
+                 Supplier<List<MethodComparison.Row>> comparer) {
+        this.comparer = comparer;
         this.numbers = numbers;
         this.left = left;
         this.right = right;
@@ -44,6 +49,16 @@ public final class MemberResult {
             }
         }
         return r;
+    }
+
+    /**
+     * The member's floor live load under each reduction method its project could choose, the project's own first
+     * (worked out on first use); empty where it carries no floor live load.
+     */
+    public List<MethodComparison.Row> methods() {
+        List<MethodComparison.Row> m = methods;
+        if (m == null) methods = m = List.copyOf(comparer.get());
+        return m;
     }
 
     public EndShare left() { return left; }
@@ -78,6 +93,6 @@ public final class MemberResult {
     /** The same calculation under another subject. */
     public MemberResult withSubject(String subject) {
         MemberResult base = this;
-        return new MemberResult(numbers.withSubject(subject), left, right, reduction, () -> base.record().withSubject(subject));
+        return new MemberResult(numbers.withSubject(subject), left, right, reduction, () -> base.record().withSubject(subject), base::methods);
     }
 }

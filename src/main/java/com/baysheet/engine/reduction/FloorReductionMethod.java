@@ -9,8 +9,9 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * A floor live load reduction method. A new method (the IBC alternative, EN 1991-1-1, NBC) is an edition in
- * editions.json naming it, plus one implementation registered in {@link ReductionMethods}.
+ * A floor live load reduction method. The edition's own is named by its {@code floorMethod}; the others a project may
+ * choose are data sets in the {@code floorMethods} block of editions.json, each naming one implementation registered
+ * in {@link ReductionMethods}.
  */
 public interface FloorReductionMethod {
     String id();
@@ -24,6 +25,21 @@ public interface FloorReductionMethod {
      */
     LiveFactors reduce(CalcContext ctx, MemberKind kind, Map<String, Double> areas, List<SupportedFloor> byFloor,
                        int floors, double span, RecordBuilder record);
+
+    /**
+     * With the dead load that the tributary area brings, for a method that weighs it against the live load (the IBC
+     * alternative's D/L0). A method that does not need it ignores it.
+     */
+    default LiveFactors reduce(CalcContext ctx, MemberKind kind, Map<String, Double> areas, List<SupportedFloor> byFloor,
+                               int floors, double span, SupportedDead dead, RecordBuilder record) {
+        return reduce(ctx, kind, areas, byFloor, floors, span, record);
+    }
+
+    /** The method's name as a sheet prints it. */
+    default String title(CalcContext ctx) { return ctx.edition().id() + " basic live load reduction"; }
+
+    /** The clause the reduced floor live load cites on the record (the edition's equation, or the chosen method's). */
+    default com.baysheet.engine.record.Clause clause(CalcContext ctx) { return ctx.edition().clause("reduction.eq"); }
 
     /** One K_LL throughout: the member's own. */
     default LiveFactors reduce(CalcContext ctx, MemberKind kind, Map<String, Double> areas, int floors, double span,
