@@ -29,14 +29,30 @@ public final class Access {
     public static final String CHANGE_FIRST = "Your password was set by someone else: choose your own password before going on.";
 
     private final Logins logins;
+    private final AuditRecorder recorder;
     /** Set-up is done once and never undone, so after the first yes we stop asking the database. */
     private volatile boolean setupDone;
 
     public Access(Logins logins) {
+        this(logins, null);
+    }
+
+    /** @param recorder where refused privileged attempts and form-token failures are recorded (null: nowhere) */
+    public Access(Logins logins, AuditRecorder recorder) {
         this.logins = logins;
+        this.recorder = recorder;
     }
 
     public void before(Context ctx) {
+        try {
+            check(ctx);
+        } catch (AccessRefused e) {
+            if (recorder != null) recorder.refused(ctx, e);
+            throw e;
+        }
+    }
+
+    private void check(Context ctx) {
         // the health check asks the database itself: it must answer (503) when the session lookup would fail
         if (ctx.path().equals(HEALTH)) return;
         Optional<SignedIn> s = logins.session(Cookies.token(ctx, Cookies.SESSION));

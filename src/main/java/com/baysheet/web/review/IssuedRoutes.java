@@ -9,6 +9,7 @@ import com.baysheet.store.Store;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.store.review.Reviews;
 import com.baysheet.store.review.StoredRevision;
+import com.baysheet.web.auth.AuditRecorder;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
@@ -34,11 +35,18 @@ public final class IssuedRoutes {
     private final Store store;
     private final ReviewStore review;
     private final Clock clock;
+    private final AuditRecorder recorder;
 
     public IssuedRoutes(Store store, ReviewStore review, Clock clock) {
+        this(store, review, clock, null);
+    }
+
+    /** @param recorder where each download of an issued copy is recorded (null: nowhere) */
+    public IssuedRoutes(Store store, ReviewStore review, Clock clock, AuditRecorder recorder) {
         this.store = store;
         this.review = review;
         this.clock = clock;
+        this.recorder = recorder;
     }
 
     public void install(RoutesConfig r) {
@@ -53,7 +61,9 @@ public final class IssuedRoutes {
         long id = id(ctx.pathParam("revision"), "revision");
         StoredRevision r = review.reviews().revision(id);
         byte[] pdf = review.reviews().issuedPdf(id).orElseThrow(() -> new NotFound("issued copy of revision", id));
-        pdf(ctx, pdf, IssuedMatch.of(store, r).fileName());
+        IssuedMatch match = IssuedMatch.of(store, r);
+        if (recorder != null) recorder.downloaded(ctx, r.sheet().label(), "revision " + r.revision().number() + ", " + match.fileName());
+        pdf(ctx, pdf, match.fileName());
     }
 
     void checkingPdf(Context ctx) {

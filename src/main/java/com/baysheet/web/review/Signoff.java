@@ -17,6 +17,7 @@ import com.baysheet.web.Health;
 import com.baysheet.web.auth.Access;
 import com.baysheet.web.auth.AccessRefused;
 import com.baysheet.web.auth.AdminRoutes;
+import com.baysheet.web.auth.AuditRecorder;
 import com.baysheet.web.auth.AuthRoutes;
 import com.baysheet.web.auth.CsrfForms;
 import io.javalin.config.RoutesConfig;
@@ -68,7 +69,8 @@ public final class Signoff {
     public SetupCode setupCode() { return setupCode; }
 
     public void install(RoutesConfig r) {
-        Access access = new Access(accounts.logins());
+        AuditRecorder recorder = new AuditRecorder(review.audit(), clock);
+        Access access = new Access(accounts.logins(), recorder);
         r.before(access::before);
         r.before(ctx -> {
             if (!ctx.path().startsWith("/static/") && !ctx.path().equals("/health")) FirmOnPage.put(ctx, review.firm().get());
@@ -83,7 +85,7 @@ public final class Signoff {
         new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
         new ReviewRoutes(store, review, clock).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
-        new IssuedRoutes(store, review, clock).install(r);
+        new IssuedRoutes(store, review, clock, recorder).install(r);
         new PackageRoutes(store, review, clock).install(r);
     }
 }
