@@ -55,13 +55,15 @@ public final class ModelWrites {
             Instant at = sql.now();
             long next = ProjectStore.touch(c, projectId, version, at);
             String said = action.run(c);
+            Model was = BuildingMapper.load(c, projectId);
             T result = work.run(c);
             Model m = BuildingMapper.load(c, projectId);
+            String diff = ModelDiff.between(was, m);
             Derived d = checked(m);
             done[0] = new Results.Computed(m, d);
             List<String> superseded = Supersession.apply(c, projectId, d, by(who), at);
             append(c, who, subject(m.project()), said
-                    + "; model version " + version + " → " + next
+                    + "; model version " + version + " → " + next + (diff.isEmpty() ? "" : "; " + diff)
                     + (superseded.isEmpty() ? "" : "; superseded: " + String.join(", ", superseded)), at);
             return result;
         });
