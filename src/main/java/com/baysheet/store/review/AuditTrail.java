@@ -29,7 +29,10 @@ public final class AuditTrail {
     private static final String COLUMNS = "id, occurred_at, actor_id, actor_username, action, subject, detail, address, entry_hash";
 
     /** The newest entry's id and hash as the head row holds them. */
-    public record Head(long id, String hash) {}
+    public record Head(long id, String hash) {
+        /** As an issued PDF prints it. */
+        public String printed() { return "entry " + id + ", SHA-256 " + hash; }
+    }
 
     private final Sql sql;
 

@@ -32,10 +32,11 @@ final class PackagePdfs {
     private PackagePdfs() {}
 
     /** @param latest the latest revision of every sheet of the project, for each member's own title block */
-    static byte[] issued(Firm firm, SheetContext.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
+    static byte[] issued(Firm firm, SheetContext.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today,
+                         String auditHead) {
         SheetRevision r = v.current().revision();
         var info = s.computed().project().info();
-        SheetHeader h = TitleBlocks.issuing(firm, info, s.name(), r, today);
+        SheetHeader h = TitleBlocks.issuing(firm, info, s.name(), r, today).withAuditHead(auditHead);
         List<Revision> log = new ArrayList<>();
         CalcRecord before = earlier(v.history(), r.number(), log);
         log.add(line(r, today, before, s.current()));

@@ -98,8 +98,9 @@ public final class ReviewRoutes {
         if (cur.version() != version) throw new ConcurrentChange("The sheet " + s.name());
         if (cur.revision().state() != SheetState.APPROVED)
             throw new ReviewRefused.WrongState(ReviewAction.ISSUE, cur.revision().state(), "only an approved sheet is issued");
-        byte[] pdf = s instanceof SheetContext.OfMember m ? SheetPdfs.issued(review.firm().get(), m, cur.revision(), today()).bytes()
-                : PackagePdfs.issued(review.firm().get(), (SheetContext.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today());
+        String head = review.audit().head().printed(); // the trail as it stands at the issue, printed on the copy
+        byte[] pdf = s instanceof SheetContext.OfMember m ? SheetPdfs.issued(review.firm().get(), m, cur.revision(), today(), head).bytes()
+                : PackagePdfs.issued(review.firm().get(), (SheetContext.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today(), head);
         reviews().issue(s.ref(), version, caller(ctx), today(), s.current(), pdf);
         ctx.redirect(s.path(), HttpStatus.SEE_OTHER);
     }

@@ -22,8 +22,10 @@ import java.util.List;
 final class SheetPdfs {
     private SheetPdfs() {}
 
-    static RenderedPdf issued(Firm firm, SheetContext.OfMember s, SheetRevision approved, LocalDate today) {
-        SheetHeader h = TitleBlocks.issuing(firm, s.computed().project().info(), s.member().name(), approved, today);
+    /** @param auditHead the audit trail's chain head at the issue, printed on the sheet */
+    static RenderedPdf issued(Firm firm, SheetContext.OfMember s, SheetRevision approved, LocalDate today, String auditHead) {
+        SheetHeader h = TitleBlocks.issuing(firm, s.computed().project().info(), s.member().name(), approved, today)
+                .withAuditHead(auditHead);
         return SheetRenderer.issued(FramingSheets.member(h, s.computed().derived(), s.member().id()));
     }
 
