@@ -7,7 +7,8 @@ import com.baysheet.auth.Role;
  * in detail (the four-eyes rule, the sheet's state), by the review rules themselves; this table only keeps
  * each role inside its part of the office:
  * <ul>
- *   <li>anyone: the health check, static files, login, and set-up while no administrator exists;</li>
+ *   <li>anyone: the health check, static files, login, choosing a password with a reset code, and set-up while no
+ *   administrator exists;</li>
  *   <li>any logged-in user: every page and API read, the review pages, verification, their own password, logout;</li>
  *   <li>engineers and checkers (who prepare): changes to projects, firm occupancies and the JSON API, and review actions;</li>
  *   <li>administrators: users, firm settings and the audit trail under /admin.</li>
@@ -22,7 +23,7 @@ public final class AccessRules {
     public static Decision decide(String method, String path, Role role, boolean setupDone) {
         if (isOpen(path)) return Decision.ALLOW;
         if (path.equals("/setup")) return setupDone ? Decision.LOGIN : Decision.ALLOW;
-        if (path.equals("/login")) return setupDone ? Decision.ALLOW : Decision.SET_UP;
+        if (path.equals("/login") || path.equals(AuthRoutes.RESET_PAGE)) return setupDone ? Decision.ALLOW : Decision.SET_UP;
         if (!setupDone) return Decision.SET_UP;
         if (role == null) return Decision.LOGIN;
         if (path.equals("/admin") || path.startsWith("/admin/"))

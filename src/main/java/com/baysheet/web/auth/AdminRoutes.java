@@ -10,6 +10,7 @@ import com.baysheet.engine.InputError;
 import com.baysheet.store.Editor;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.auth.Accounts;
+import com.baysheet.store.auth.ResetCodes;
 import com.baysheet.store.review.Firm;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.engine.code.Editions;
@@ -95,9 +96,16 @@ public final class AdminRoutes {
         ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
     }
 
+    /**
+     * Makes a one-time reset code and shows it on this response only (no redirect: it is stored nowhere to show
+     * again). {@code confirm=reset} is asked for so that a stray empty POST makes no code.
+     */
     void resetPassword(Context ctx) {
-        accounts.admin().resetPassword(Access.user(ctx), userId(ctx), ctx.formParam("password"), ctx.ip());
-        ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
+        if (!"reset".equals(ctx.formParam("confirm")))
+            throw new InputError("confirm", String.valueOf(ctx.formParam("confirm")), "must be \"reset\" to make a reset code");
+        ResetCodes.Issued issued = accounts.resets().make(Access.user(ctx), userId(ctx), ctx.ip());
+        ctx.render("auth/reset-code", Map.of("issued", issued,
+                "expires", issued.expiresAt().truncatedTo(java.time.temporal.ChronoUnit.MINUTES).toString().replace('T', ' ')));
     }
 
     void firm(Context ctx, Form f) {

@@ -81,7 +81,7 @@ public final class Signoff {
         r.exception(ReviewRefused.class, Refusals::review);
         r.exception(ConcurrentChange.class, Refusals::conflict);
         health.install(r);
-        new AuthRoutes(accounts.logins(), setupCode).install(r);
+        new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
         new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
         new ReviewRoutes(store, review, clock).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
