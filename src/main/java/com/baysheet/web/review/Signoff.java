@@ -19,6 +19,7 @@ import com.baysheet.web.auth.AccessRefused;
 import com.baysheet.web.auth.AdminRoutes;
 import com.baysheet.web.auth.AuditRecorder;
 import com.baysheet.web.auth.AuthRoutes;
+import com.baysheet.web.auth.BackupRoutes;
 import com.baysheet.web.auth.CsrfForms;
 import io.javalin.config.RoutesConfig;
 
@@ -37,6 +38,7 @@ public final class Signoff {
     private final Clock clock;
     private final SetupCode setupCode;
     private final Health health;
+    private final DataSource ds;
 
     /**
      * {@code setupCode} is the one the first-start set-up asks for (printed in the console by the server;
@@ -49,6 +51,7 @@ public final class Signoff {
         this.clock = clock;
         this.setupCode = setupCode;
         this.health = new Health(ds);
+        this.ds = ds;
     }
 
     /** The office's production wiring: bcrypt at full strength, working-day sessions, the office throttle. */
@@ -83,6 +86,7 @@ public final class Signoff {
         health.install(r);
         new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
         new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
+        new BackupRoutes(ds, review.audit(), clock).install(r);
         new ReviewRoutes(store, review, clock).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
         new IssuedRoutes(store, review, clock, recorder).install(r);
