@@ -25,6 +25,15 @@ final class ModelDiff {
 
     /** The differences, or "" when the model is the same (a change of nothing but its version). */
     static String between(Model before, Model after) {
+        try {
+            return listed(before, after);
+        } catch (IllegalArgumentException e) {
+            // a model Jackson cannot write must not stop the save it describes: the entry says the list is missing
+            return "changed: (differences not listed: " + e.getMessage() + ")";
+        }
+    }
+
+    private static String listed(Model before, Model after) {
         List<String> out = new ArrayList<>();
         int[] total = {0};
         walk("project", tree(before.project()), tree(after.project()), out, total);
