@@ -1,6 +1,5 @@
 package com.baysheet;
 
-import com.baysheet.cli.BackupCommand;
 import com.baysheet.cli.CalcCommand;
 import com.baysheet.framing.Derivation;
 import com.baysheet.store.BackupPort;

@@ -1,6 +1,7 @@
 package com.baysheet.web.auth;
 
 import com.baysheet.auth.User;
+import com.baysheet.review.ReviewRefused;
 import com.baysheet.review.AuditEvent;
 import com.baysheet.store.auth.SignedIn;
 import com.baysheet.store.review.AuditTrail;
@@ -13,8 +14,9 @@ import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 
 /**
- * What the access filter and the PDF downloads add to the audit trail: a refused privileged attempt (a role that
- * may not, a 403), a form without its token, and the download of an issued PDF. Refusals are coalesced: one
+ * What the access filter, the review refusals and the PDF downloads add to the audit trail: a refused privileged
+ * attempt (a role that may not, the four-eyes rule: the 403s), a form without its token, and the download of an
+ * issued PDF. Refusals are coalesced: one
  * entry per kind, user and address a minute at most, the next one counting those left out meanwhile, so a
  * script hammering a form cannot flood the trail. Each call is one line where it happens.
  */
@@ -52,6 +54,20 @@ public final class AuditRecorder {
         String role = s == null ? "not logged in" : s.user().role().label();
         append(s == null ? null : s.user(), who, action, ctx.method().name() + " " + ctx.path(),
                 role + (leftOut > 0 ? "; " + leftOut + " more like it in the minute before, not recorded one by one" : ""), ctx.ip());
+    }
+
+    /**
+     * Records a review action refused for the person's rights (a role that may not, or the four-eyes rule: a
+     * preparer approving their own sheet), coalesced like the filter's refusals.
+     */
+    public void refusedReview(Context ctx, ReviewRefused e) {
+        if (!(e instanceof ReviewRefused.NotPermitted || e instanceof ReviewRefused.FourEyes)) return;
+        SignedIn s = ctx.attribute(Access.SIGNED_IN);
+        String who = s == null ? "" : s.user().username();
+        int leftOut = admit("review refused\n" + who + '\n' + ctx.ip());
+        if (leftOut < 0) return;
+        append(s == null ? null : s.user(), who, "review action refused", ctx.method().name() + " " + ctx.path(),
+                e.getMessage() + (leftOut > 0 ? "; " + leftOut + " more like it in the minute before, not recorded one by one" : ""), ctx.ip());
     }
 
     /** Records that the logged-in user downloaded an issued PDF ({@code what}: the sheet or package and revision). */

@@ -81,7 +81,7 @@ public final class Signoff {
         r.after(CsrfForms::after);
         r.exception(AccessRefused.class, Refusals::access);
         r.exception(LoginRefused.class, Refusals::login);
-        r.exception(ReviewRefused.class, Refusals::review);
+        r.exception(ReviewRefused.class, (e, ctx) -> { recorder.refusedReview(ctx, e); Refusals.review(e, ctx); });
         r.exception(ConcurrentChange.class, Refusals::conflict);
         health.install(r);
         new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);

@@ -56,6 +56,22 @@ class AuditRecordTest {
     }
 
     @Test
+    void aReviewActionRefusedForThePersonsRightsIsRecorded() {
+        Client eng = server.as("evan", Role.ENGINEER);
+        // a sheet of its own (a column's), submitted by the engineer, who then tries to approve it
+        String member = server.store.results().of(server.project()).derived().members().stream()
+                .filter(m -> m.kind().name().contains("COLUMN")).findFirst().orElseThrow().id();
+        String sheet = "/review/projects/" + server.project() + "/members/" + member;
+        String html = eng.get(sheet).body();
+        assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
+        String v = String.valueOf(server.signoff.review().reviews().view(new com.baysheet.review.SheetRef(server.project(), member))
+                .current().version());
+        assertThat(eng.post(sheet + "/approve", List.of(Map.entry("version", v))).statusCode()).isEqualTo(403);
+        List<AuditEvent> refused = actions("review action refused").stream().filter(e -> e.actorUsername().equals("evan")).toList();
+        assertThat(refused).singleElement().satisfies(e -> assertThat(e.subject()).isEqualTo("POST " + sheet + "/approve"));
+    }
+
+    @Test
     void anIssuedPdfCarriesTheChainHeadAndItsDownloadIsRecorded() throws Exception {
         Client eng = server.as("ed", Role.ENGINEER);
         Client chk = server.as("cat", Role.CHECKER);

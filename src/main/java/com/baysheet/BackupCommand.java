@@ -1,4 +1,4 @@
-package com.baysheet.cli;
+package com.baysheet;
 
 import com.baysheet.review.ChainCheck;
 import com.baysheet.store.Backups;
