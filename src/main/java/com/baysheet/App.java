@@ -2,6 +2,7 @@ package com.baysheet;
 
 import com.baysheet.cli.CalcCommand;
 import com.baysheet.framing.Derivation;
+import com.baysheet.store.BackupPort;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
 import com.baysheet.store.Store;
@@ -16,7 +17,10 @@ import java.time.Clock;
 import java.util.Arrays;
 import java.util.function.Consumer;
 
-/** Entry point: {@code calc ...} runs the command-line calculation; anything else starts the office server. */
+/**
+ * Entry point: {@code calc ...} runs the command-line calculation, {@code backup ...} and {@code restore ...} copy the
+ * embedded database out and back; anything else starts the office server.
+ */
 public final class App {
     private static final Logger LOG = LoggerFactory.getLogger(App.class);
 
@@ -25,6 +29,9 @@ public final class App {
     public static void main(String[] args) throws IOException {
         if (args.length > 0 && args[0].equals("calc"))
             System.exit(CalcCommand.run(Arrays.copyOfRange(args, 1, args.length), System.in, System.out, System.err));
+        if (args.length > 0 && (args[0].equals("backup") || args[0].equals("restore")))
+            System.exit(BackupCommand.run(args[0].equals("restore"), Arrays.copyOfRange(args, 1, args.length), System.getenv(),
+                    System.out, System.err));
         ServerOptions options;
         try {
             options = ServerOptions.parse(args, System.getenv());
@@ -50,10 +57,11 @@ public final class App {
     }
 
     /** A started server and its database, which stopping closes. */
-    record Running(Javalin app, Database db, Office office) implements AutoCloseable {
+    record Running(Javalin app, Database db, Office office, BackupPort backupPort) implements AutoCloseable {
         @Override
         public void close() {
             app.stop();
+            if (backupPort != null) backupPort.close();
             db.close();
         }
     }
@@ -75,8 +83,10 @@ public final class App {
             LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");
             DemoAccounts.add(office.accounts().admin(), console);
         }
+        // the listener through which `baysheet backup` copies the database while this server holds its file
+        BackupPort port = o.embedded() ? BackupPort.open(o.dataDir()) : null;
         Javalin app = office.server(o.trustedProxy(), o.behindTls()).start(o.bind(), o.port());
-        Running running = new Running(app, db, office);
+        Running running = new Running(app, db, office, port);
         console.accept("listening on " + o.bind() + ":" + app.port() + (o.bind().equals("127.0.0.1") || o.bind().equals("localhost")
                 ? " (this machine only; --bind 0.0.0.0 for the office network)" : " (the office network)") + ", database "
                 + (o.embedded() ? o.dataDir() : "by JDBC URL") + (o.behindTls() ? ", behind a TLS proxy" : ""));

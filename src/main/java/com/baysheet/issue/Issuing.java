@@ -46,8 +46,9 @@ public final class Issuing {
             throw new ReviewRefused.WrongState(ReviewAction.ISSUE, cur.revision().state(), "only an approved sheet is issued");
         String said = SheetRevision.description(description);
         LocalDate today = today();
-        byte[] pdf = s instanceof SheetSubject.OfMark m ? SheetPdfs.issued(review.firm().get(), m, cur, v.history(), today, said).bytes()
-                : PackagePdfs.issued(review.firm().get(), (SheetSubject.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today, said);
+        String head = review.audit().head().printed(); // the trail as it stands at the issue, printed on the copy
+        byte[] pdf = s instanceof SheetSubject.OfMark m ? SheetPdfs.issued(review.firm().get(), m, cur, v.history(), today, said, head).bytes()
+                : PackagePdfs.issued(review.firm().get(), (SheetSubject.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today, said, head);
         reviews().issue(s.ref(), version, caller, today, s.current(), pdf, said);
     }
 

@@ -34,10 +34,10 @@ final class PackagePdfs {
 
     /** @param latest the latest revision of every sheet of the project, for each member's own title block */
     static byte[] issued(Firm firm, SheetSubject.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today,
-                         String description) {
+                         String description, String auditHead) {
         SheetRevision r = v.current().revision();
         var info = s.computed().project().info();
-        SheetHeader h = TitleBlocks.issuing(firm, info, s.name(), v.current(), today);
+        SheetHeader h = TitleBlocks.issuing(firm, info, s.name(), v.current(), today).withAuditHead(auditHead);
         List<Revision> log = new ArrayList<>();
         CalcRecord before = earlier(v.history(), r.number(), log);
         log.add(line(v.current(), r, today, before, s.current(), description));

@@ -26,9 +26,10 @@ final class SheetPdfs {
     private SheetPdfs() {}
 
     /** The issued copy of the approved revision: its revision block lists the earlier issues and this one, described as given. */
+    /** @param auditHead the audit trail's chain head at the issue, printed on the sheet */
     static RenderedPdf issued(Firm firm, SheetSubject.OfMark s, StoredRevision approved, List<StoredRevision> history,
-                              LocalDate today, String description) {
-        SheetHeader h = TitleBlocks.issuing(firm, s.computed().project().info(), s.name(), approved, today);
+                              LocalDate today, String description, String auditHead) {
+        SheetHeader h = TitleBlocks.issuing(firm, s.computed().project().info(), s.name(), approved, today).withAuditHead(auditHead);
         List<Revision> block = new ArrayList<>(issues(history));
         SheetRevision r = approved.revision();
         block.add(new Revision(approved.label(), today, description, r.preparer().initials() + " / " + r.approval().initials()));

@@ -1,30 +1,48 @@
 package com.baysheet.review;
 
-import java.time.format.DateTimeFormatter;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.io.StringWriter;
 import java.util.List;
 
 /**
- * The audit trail as CSV (RFC 4180: comma-separated, fields quoted, quotes doubled, CRLF line ends). A
- * field that a spreadsheet would read as a formula (starting with =, +, - or @) gets a leading apostrophe,
- * so that opening the export never runs what someone typed as a username or markup.
+ * The audit trail as CSV (RFC 4180: comma-separated, fields quoted, quotes doubled, CRLF line ends), one
+ * entry at a time, so that the export streams however long the trail. The time is the chain's canonical UTC
+ * instant and the last column the entry's chain hash, so the export can be re-verified on its own
+ * ({@link AuditChain}). A field that a spreadsheet would read as a formula (starting with =, +, - or @) gets a
+ * leading apostrophe, so that opening the export never runs what someone typed as a username or markup; the
+ * apostrophe is not part of the hashed entry.
  */
 public final class AuditCsv {
-    private static final String HEADER = "id,when (UTC),user,action,subject,detail,address";
+    static final String HEADER = "id,when (UTC),user,action,subject,detail,address,chain hash";
 
-    private AuditCsv() {}
+    private final Writer out;
+
+    /** Writes the header line at once. */
+    public AuditCsv(Writer out) {
+        this.out = out;
+        put(HEADER + "\r\n");
+    }
+
+    public void row(AuditEvent e) {
+        put(e.id() + "," + field(AuditChain.instant(e.at())) + "," + field(e.actorUsername()) + "," + field(e.action())
+                + "," + field(e.subject()) + "," + field(e.detail()) + "," + field(e.address()) + "," + field(e.hash()) + "\r\n");
+    }
 
     public static String of(List<AuditEvent> events) {
-        StringBuilder b = new StringBuilder(HEADER).append("\r\n");
-        for (AuditEvent e : events) {
-            b.append(e.id()).append(',')
-                    .append(field(DateTimeFormatter.ISO_INSTANT.format(e.at()))).append(',')
-                    .append(field(e.actorUsername())).append(',')
-                    .append(field(e.action())).append(',')
-                    .append(field(e.subject())).append(',')
-                    .append(field(e.detail())).append(',')
-                    .append(field(e.address())).append("\r\n");
+        StringWriter w = new StringWriter();
+        AuditCsv csv = new AuditCsv(w);
+        events.forEach(csv::row);
+        return w.toString();
+    }
+
+    private void put(String s) {
+        try {
+            out.write(s);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
         }
-        return b.toString();
     }
 
     static String field(String s) {

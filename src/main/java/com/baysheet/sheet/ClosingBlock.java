@@ -19,10 +19,17 @@ final class ClosingBlock {
 
     private final Fonts fonts;
     private final boolean checking;
+    private final String auditHead;
 
     ClosingBlock(Fonts fonts, boolean checking) {
+        this(fonts, checking, "");
+    }
+
+    /** @param auditHead the audit trail's chain head at the issue, printed under the disclaimer; blank for none */
+    ClosingBlock(Fonts fonts, boolean checking, String auditHead) {
         this.fonts = fonts;
         this.checking = checking;
+        this.auditHead = auditHead == null ? "" : auditHead;
     }
 
     /** @param lead what sits above the disclaimer (the governing results), or null */
@@ -31,6 +38,8 @@ final class ClosingBlock {
         t.setSpacingBefore(8);
         t.setKeepTogether(true);
         Phrase words = new Phrase(DISCLAIMER, fonts.body());
+        if (!checking && !auditHead.isEmpty())
+            words.add(new Chunk("\n\nAudit trail at issue: " + auditHead, fonts.smallGrey()));
         if (checking) words.add(new Chunk("\n\nCHECKING COPY — NOT FOR SUBMITTAL. Markups may be open; do not seal.", fonts.mark()));
         PdfPCell left = new PdfPCell();
         if (lead != null) left.addElement(lead);

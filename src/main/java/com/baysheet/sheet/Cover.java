@@ -67,7 +67,7 @@ final class Cover {
         pdf.add(Cells.line("This package holds " + pkg.sheets().size() + " member sheets on " + levels
                 + (levels == 1 ? " level" : " levels") + " and " + pkg.takeDowns().size() + " column take-downs, listed in the index that follows.",
                 fonts.body()));
-        pdf.add(new ClosingBlock(fonts, false).table(null));
+        pdf.add(new ClosingBlock(fonts, false, pkg.header().auditHead()).table(null));
     }
 
     /**

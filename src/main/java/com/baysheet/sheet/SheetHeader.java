@@ -20,10 +20,13 @@ import java.time.LocalDate;
  * @param printedOn  the date this copy was made, which fixes the PDF's dates and so its bytes; for an issued copy
  *                   its issue date
  * @param logoText   the firm's short mark, printed before its name in the title block; blank for none
+ * @param auditHead  on an issued copy, the audit trail's chain head when it was issued ("entry N, SHA-256 …"),
+ *                   printed in the closing block so that the trail can later be checked against the paper; blank for none
  */
 public record SheetHeader(String firm, String project, String jobNumber, String subject,
                           String preparedBy, LocalDate preparedOn, String checkedBy, LocalDate checkedOn,
-                          String revision, LocalDate issueDate, LocalDate printedOn, String logoText) {
+                          String revision, LocalDate issueDate, LocalDate printedOn, String logoText,
+                          String auditHead) {
     public static final String NOT_SUBMITTED = "not submitted";
     public static final String NOT_ISSUED = "not issued";
 
@@ -33,8 +36,16 @@ public record SheetHeader(String firm, String project, String jobNumber, String 
         this(firm, project, jobNumber, subject, preparedBy, preparedOn, checkedBy, checkedOn, revision, issueDate, printedOn, "");
     }
 
+    public SheetHeader(String firm, String project, String jobNumber, String subject, String preparedBy, LocalDate preparedOn,
+                       String checkedBy, LocalDate checkedOn, String revision, LocalDate issueDate, LocalDate printedOn,
+                       String logoText) {
+        this(firm, project, jobNumber, subject, preparedBy, preparedOn, checkedBy, checkedOn, revision, issueDate, printedOn,
+                logoText, "");
+    }
+
     public SheetHeader {
         logoText = logoText == null ? "" : logoText.strip();
+        auditHead = auditHead == null ? "" : auditHead.strip();
         firm = required("firm", firm);
         project = required("project", project);
         jobNumber = required("jobNumber", jobNumber);
@@ -68,12 +79,17 @@ public record SheetHeader(String firm, String project, String jobNumber, String 
 
     /** The same title block for another subject (a page of a package about the package itself). */
     public SheetHeader withSubject(String s) {
-        return new SheetHeader(firm, project, jobNumber, s, preparedBy, preparedOn, checkedBy, checkedOn, revision, issueDate, printedOn, logoText);
+        return new SheetHeader(firm, project, jobNumber, s, preparedBy, preparedOn, checkedBy, checkedOn, revision, issueDate, printedOn, logoText, auditHead);
+    }
+
+    /** The same issued title block quoting the audit trail's chain head at the issue. */
+    public SheetHeader withAuditHead(String head) {
+        return new SheetHeader(firm, project, jobNumber, subject, preparedBy, preparedOn, checkedBy, checkedOn, revision, issueDate, printedOn, logoText, head);
     }
 
     /** The same sheet as a checking copy printed on {@link #printedOn}: a checking copy is never an issue. */
     public SheetHeader notIssued() {
-        return new SheetHeader(firm, project, jobNumber, subject, preparedBy, preparedOn, checkedBy, checkedOn, revision, null, printedOn, logoText);
+        return new SheetHeader(firm, project, jobNumber, subject, preparedBy, preparedOn, checkedBy, checkedOn, revision, null, printedOn, logoText, "");
     }
 
     /** "JQR / MKL", "JQR", or "" where the sheet was neither submitted nor checked: the initials that signed it. */

@@ -63,13 +63,15 @@ public final class ModelWrites {
             long next = ProjectStore.touch(c, projectId, version, at);
             String said = action.run(c);
             IssuedChanges.Snapshot before = issuedBefore(c, projectId);
+            Model was = BuildingMapper.load(c, projectId);
             T result = work.run(c);
             Model m = BuildingMapper.load(c, projectId);
+            String diff = ModelDiff.between(was, m);
             Derived d = checked(m);
             done[0] = new Results.Computed(m, d);
             List<String> changed = issuedAfter(c, projectId, d, before, MarkBook.reconcile(c, projectId, d, at));
             append(c, who, subject(m.project()), said
-                    + "; model version " + version + " → " + next
+                    + "; model version " + version + " → " + next + (diff.isEmpty() ? "" : "; " + diff)
                     + (changed.isEmpty() ? "" : "; changed since issue: " + String.join(", ", changed)), at);
             return result;
         });

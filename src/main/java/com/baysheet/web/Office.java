@@ -14,7 +14,9 @@ import com.baysheet.web.auth.Access;
 import com.baysheet.web.auth.AccessRefused;
 import com.baysheet.web.auth.AdminRoutes;
 import com.baysheet.web.auth.Admit;
+import com.baysheet.web.auth.AuditRecorder;
 import com.baysheet.web.auth.AuthRoutes;
+import com.baysheet.web.auth.BackupRoutes;
 import com.baysheet.web.auth.CsrfForms;
 import com.baysheet.web.review.IssuedRoutes;
 import com.baysheet.web.review.MarkRoutes;
@@ -40,15 +42,17 @@ import java.util.Set;
  * cheap password hash, their own clock and a known set-up code.
  *
  * @param setupCode what the first-start set-up asks for (printed in the console by the server)
- * @param ds        what {@code /health} asks whether the database answers
+ * @param ds        what {@code /health} asks whether the database answers, and what backups copy
+ * @param clock     what refusals and downloads are recorded by
  */
-public record Office(Store store, Accounts accounts, ReviewStore review, Issuing issuing, SetupCode setupCode, DataSource ds) {
+public record Office(Store store, Accounts accounts, ReviewStore review, Issuing issuing, SetupCode setupCode, DataSource ds,
+                     Clock clock) {
 
     /** The office over this database: the store's clock for every stamp and date, the given login policy. */
     public static Office on(Store store, DataSource ds, Clock clock, Logins.Policy policy, SetupCode setupCode) {
         Sql sql = new Sql(ds, clock);
         ReviewStore review = ReviewStore.on(sql);
-        return new Office(store, Accounts.on(sql, review.audit(), policy), review, new Issuing(review, clock), setupCode, ds);
+        return new Office(store, Accounts.on(sql, review.audit(), policy), review, new Issuing(review, clock), setupCode, ds, clock);
     }
 
     /** The office's production wiring: bcrypt at full strength, working-day sessions, the office throttle. */
@@ -63,7 +67,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
      * browsers reach it through an HTTPS proxy: cookies Secure and Strict-Transport-Security ({@link Headers}).
      */
     public Javalin server(String trustedProxy, boolean behindTls) {
-        Access access = new Access(accounts.logins(), () -> review.firm().get());
+        AuditRecorder recorder = new AuditRecorder(review.audit(), clock);
+        Access access = new Access(accounts.logins(), () -> review.firm().get(), recorder);
         return Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
             cfg.contextResolver.ip = ctx -> ClientAddress.of(ctx.req().getRemoteAddr(), ctx.header("X-Forwarded-For"), trustedProxy);
@@ -83,8 +88,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
             cfg.routes.beforeMatched(access::check);
             cfg.routes.after(Headers::charset);
             cfg.routes.after(CsrfForms::after);
-            exceptions(cfg.routes, access);
-            routes(cfg.routes);
+            exceptions(cfg.routes, access, recorder);
+            routes(cfg.routes, recorder);
         });
     }
 
@@ -99,10 +104,13 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         r.before(Saved::onRequest);
     }
 
-    private static void exceptions(RoutesConfig r, Access access) {
+    private static void exceptions(RoutesConfig r, Access access, AuditRecorder recorder) {
         r.exception(AccessRefused.class, Refusals::access);
         r.exception(LoginRefused.class, Refusals::login);
-        r.exception(ReviewRefused.class, Refusals::review);
+        r.exception(ReviewRefused.class, (e, ctx) -> {
+            recorder.refusedReview(ctx, e);
+            Refusals.review(e, ctx);
+        });
         r.exception(ConcurrentChange.class, Refusals::conflict);
         Errors.install(r);
         // no route matched (Javalin's own 404): answered as an office page would be, log in first, then the
@@ -116,10 +124,11 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
     }
 
     /** The routes of every feature; each declares its roles beside its path. */
-    private void routes(RoutesConfig r) {
+    private void routes(RoutesConfig r, AuditRecorder recorder) {
         new Health(ds).install(r);
-        new AuthRoutes(accounts.logins(), setupCode).install(r);
+        new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
         new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
+        new BackupRoutes(ds, review.audit(), clock).install(r);
         new ProjectRoutes(store).install(r);
         new LevelRoutes(store).install(r);
         new BayRoutes(store).install(r);
@@ -136,7 +145,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new ReviewRoutes(store, review, issuing).install(r);
         new MarkRoutes(store).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
-        new IssuedRoutes(store, review, issuing).install(r);
+        new IssuedRoutes(store, review, issuing, recorder).install(r);
         new PackageRoutes(store, issuing).install(r);
     }
 }

@@ -22,6 +22,12 @@ import java.sql.Statement;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Map;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.net.http.HttpResponse;
 import java.util.zip.ZipEntry;
 import java.util.zip.ZipInputStream;
 
@@ -85,6 +91,104 @@ class BackupRestoreIT {
             assertThat(projects(db)).isEqualTo(atBackup);
         }
         servedByTheJar(fresh, atBackup);
+    }
+
+    private static final String PASSWORD = "backup office words 24";
+
+    /**
+     * {@code baysheet backup} against a server under a stream of saves, the administrator's download beside it;
+     * {@code baysheet restore} into a new data directory (refusing one in use, or one that holds a database without
+     * --force); the shipped server on the restored directory serves the data, and the backup is consistent: the
+     * project's version is the one its last audit entry moved it to (a change and its entry are one transaction),
+     * and the audit chain verifies.
+     */
+    @Test
+    void theBackupCommandCopiesARunningServerUnderSavesAndTheRestoreServesIt() throws Exception {
+        Path live = dir.resolve("live");
+        Files.createDirectories(live);
+        Path zip = dir.resolve("cli-backup.zip");
+        long own;
+        try (ChildServer server = ChildServer.start(live, false)) {
+            OfficeClient admin = new OfficeClient(server.base()).setUp("admin", PASSWORD, server.setupCode());
+            admin.addUser("erin", "engineer", PASSWORD);
+            OfficeClient eng = new OfficeClient(server.base()).logIn("erin", PASSWORD);
+            own = JSON.readTree(OfficeClient.expect(eng.json("POST", "/api/projects",
+                    "{\"jobNumber\": \"BK-1\", \"name\": \"Backed up\", \"units\": \"US\"}"), 201).body()).path("id").asLong();
+            AtomicBoolean stop = new AtomicBoolean();
+            AtomicLong saves = new AtomicLong();
+            Thread saver = new Thread(() -> {
+                long version = 1;
+                while (!stop.get()) {
+                    HttpResponse<String> r = eng.json("PUT", "/api/projects/" + own, "{\"version\": " + version
+                            + ", \"jobNumber\": \"BK-1\", \"name\": \"Backed up, save " + saves.get() + "\", \"units\": \"US\"}");
+                    if (r.statusCode() != 200) throw new IllegalStateException("save answered " + r.statusCode() + ": " + r.body());
+                    try {
+                        version = JSON.readTree(r.body()).path("version").asLong();
+                    } catch (Exception e) {
+                        throw new IllegalStateException(e);
+                    }
+                    saves.incrementAndGet();
+                }
+            });
+            saver.start();
+            while (saves.get() < 5 && saver.isAlive()) Thread.sleep(10);
+            Cli backup = cli("backup", zip.toString(), "--data", live.toString());
+            long during = saves.get();
+            while (saves.get() < during + 5 && saver.isAlive()) Thread.sleep(10);
+            stop.set(true);
+            saver.join(30_000);
+            assertThat(backup.exit).as(backup.output).isZero();
+            assertThat(backup.output).contains("taken from the running server");
+            assertThat(saves.get()).as("saves went on across the backup").isGreaterThan(during);
+            assertThat(cli("backup", zip.toString(), "--data", live.toString()).output).as("no silent overwrite").contains("--force");
+
+            HttpResponse<byte[]> download = admin.formBytes("/admin/backup", Map.of("confirm", "backup"));
+            assertThat(download.statusCode()).isEqualTo(200);
+            assertThat(download.headers().firstValue("Content-Type").orElse("")).startsWith("application/zip");
+            assertThat(zipNames(download.body())).containsExactly("baysheet.mv.db");
+            assertThat(cli("restore", zip.toString(), "--data", live.toString(), "--force").output)
+                    .as("never into a database in use").contains("a server is using");
+        }
+        Path restored = dir.resolve("restored-cli");
+        Cli restore = cli("restore", zip.toString(), "--data", restored.toString());
+        assertThat(restore.exit).as(restore.output).isZero();
+        assertThat(restore.output).contains("audit chain verified");
+        assertThat(cli("restore", zip.toString(), "--data", restored.toString()).output).contains("already holds a database");
+
+        try (ChildServer server = ChildServer.start(restored, false)) {
+            OfficeClient eng = new OfficeClient(server.base()).logIn("erin", PASSWORD);
+            long version = 0;
+            for (JsonNode p : JSON.readTree(OfficeClient.expect(eng.get("/api/projects"), 200).body()))
+                if (p.path("id").asLong() == own) version = p.path("version").asLong();
+            OfficeClient admin = new OfficeClient(server.base()).logIn("admin", PASSWORD);
+            String csv = OfficeClient.expect(admin.get("/admin/audit.csv"), 200).body();
+            long last = 0;
+            Matcher m = Pattern.compile("model version \\d+ → (\\d+)").matcher(csv);
+            while (m.find()) last = Math.max(last, Long.parseLong(m.group(1)));
+            assertThat(version).as("the restored project is at the version its last audit entry names").isEqualTo(last).isGreaterThan(1);
+            assertThat(OfficeClient.expect(admin.get("/admin/audit/verify"), 200).body()).contains("Chain verified");
+        }
+    }
+
+    private record Cli(int exit, String output) {}
+
+    /** Runs the shipped jar's command line and waits for it. */
+    private Cli cli(String... args) throws Exception {
+        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-jar",
+                ChildServer.jar().toString()));
+        cmd.addAll(List.of(args));
+        Process p = new ProcessBuilder(cmd).redirectErrorStream(true).start();
+        String out = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        assertThat(p.waitFor(120, java.util.concurrent.TimeUnit.SECONDS)).isTrue();
+        return new Cli(p.exitValue(), out);
+    }
+
+    private static List<String> zipNames(byte[] zip) throws Exception {
+        List<String> names = new ArrayList<>();
+        try (ZipInputStream in = new ZipInputStream(new java.io.ByteArrayInputStream(zip))) {
+            for (ZipEntry e; (e = in.getNextEntry()) != null; ) names.add(e.getName());
+        }
+        return names;
     }
 
     /** The shipped server, started on the restored directory, lists the projects as they were at the backup. */

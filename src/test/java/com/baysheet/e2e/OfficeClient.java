@@ -91,6 +91,15 @@ final class OfficeClient {
         return formRaw(path, all.entrySet().stream().map(e -> Map.entry(e.getKey(), e.getValue())).toList());
     }
 
+    /** A form post with the form token added, whose answer is a file. */
+    HttpResponse<byte[]> formBytes(String path, Map<String, String> fields) {
+        Map<String, String> all = new LinkedHashMap<>(fields);
+        if (token != null) all.putIfAbsent("_csrf", token);
+        String body = all.entrySet().stream().map(e -> enc(e.getKey()) + "=" + enc(e.getValue())).collect(Collectors.joining("&"));
+        return sendBytes(HttpRequest.newBuilder(uri(path)).header("Content-Type", "application/x-www-form-urlencoded")
+                .POST(HttpRequest.BodyPublishers.ofString(body)));
+    }
+
     /** A form post of these pairs (names may repeat), with the form token added last. */
     HttpResponse<String> post(String path, List<Map.Entry<String, String>> fields) {
         List<Map.Entry<String, String>> all = new java.util.ArrayList<>(fields);

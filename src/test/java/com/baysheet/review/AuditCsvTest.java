@@ -12,9 +12,9 @@ class AuditCsvTest {
 
     @Test
     void quotesEveryFieldAndDoublesQuotes() {
-        String csv = AuditCsv.of(List.of(new AuditEvent(7, AT, 1L, "jo", "markup", "B-1", "say \"why\", please", "127.0.0.1")));
-        assertThat(csv).isEqualTo("id,when (UTC),user,action,subject,detail,address\r\n"
-                + "7,\"2026-03-02T08:00:00Z\",\"jo\",\"markup\",\"B-1\",\"say \"\"why\"\", please\",\"127.0.0.1\"\r\n");
+        String csv = AuditCsv.of(List.of(new AuditEvent(7, AT, 1L, "jo", "markup", "B-1", "say \"why\", please", "127.0.0.1", "ab12")));
+        assertThat(csv).isEqualTo("id,when (UTC),user,action,subject,detail,address,chain hash\r\n"
+                + "7,\"2026-03-02T08:00:00.000000Z\",\"jo\",\"markup\",\"B-1\",\"say \"\"why\"\", please\",\"127.0.0.1\",\"ab12\"\r\n");
     }
 
     @Test

@@ -425,8 +425,19 @@ abstract class StoreContract implements LineLoadContract, FloorMethodContract {
         assertThat(e.actorUsername()).isEqualTo("erin");
         assertThat(e.address()).isEqualTo("10.0.0.9");
         assertThat(e.subject()).isEqualTo("project T-1");
-        assertThat(e.detail()).isEqualTo("bays assigned on Level 2: 1-2/A-B: office, dead 60, beams Y + 2; was: 1-2/A-B unframed; "
-                + "model version " + p.version() + " → " + (p.version() + 1));
+        assertThat(e.detail()).startsWith("bays assigned on Level 2: 1-2/A-B: office, dead 60, beams Y + 2; was: 1-2/A-B unframed; "
+                + "model version " + p.version() + " → " + (p.version() + 1) + "; changed: ").contains("building.levels[0]");
+    }
+
+    @Test
+    void aModelChangesAuditEntryGivesTheOldAndNewValues() {
+        Project p = projectWithLevel();
+        long level = level(p);
+        StoredLevel l = store.levels().findByProject(p.id()).get(0);
+        store.levels().update(Editor.DEMO, p.id(), p.version(), level, new LevelInfo("Second floor", l.info().elevation(),
+                false, Double.NaN, l.info().surface()));
+        AuditEvent e = new AuditTrail(new Sql(db.dataSource())).page(1, 0).get(0);
+        assertThat(e.detail()).contains("\"Level 2\" → \"Second floor\"").doesNotContain("version: ");
     }
 
     @Test

@@ -14,6 +14,7 @@ import com.baysheet.store.auth.SessionStore.StoredSession;
 
 import java.time.Clock;
 import java.time.Instant;
+import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 
@@ -36,8 +37,16 @@ public final class Logins {
     private final LoginFailures failures;
     private final AuditTrail audit;
     private final Policy policy;
+    private final ResetCodes resets;
 
     public Logins(UserStore users, SessionStore sessions, LoginFailures failures, AuditTrail audit, Policy policy) {
+        this(users, sessions, failures, audit, policy, null);
+    }
+
+    /** @param resets whose notices a login tells the person (null: none) */
+    public Logins(UserStore users, SessionStore sessions, LoginFailures failures, AuditTrail audit, Policy policy,
+                  ResetCodes resets) {
+        this.resets = resets;
         this.users = users;
         this.sessions = sessions;
         this.failures = failures;
@@ -71,7 +80,8 @@ public final class Logins {
         User u = found.get().user();
         audit.append(AuditEvent.of(u.id(), u.username(), "login", "user " + u.username(),
                 before > 0 ? before + " failed attempts before this login" : "", address));
-        return start(u, now).withFailedAttempts(before).withMustChangePassword(found.get().mustChangePassword());
+        return start(u, now).withFailedAttempts(before).withMustChangePassword(found.get().mustChangePassword())
+                .withNotices(resets == null ? List.of() : resets.notices(u.id()));
     }
 
     /** The administrator lifts a user's wait at once; the audit trail notes it with the attempts it had. */

@@ -11,8 +11,9 @@ import com.baysheet.store.review.AuditTrail;
 /**
  * What the administrator does to users: add one with a starting password, change a role, make a user
  * inactive or active again. An administrator cannot demote or deactivate themselves (the office would be
- * left with nobody to manage users). Every change goes to the audit trail. A password the administrator
- * sets must be changed by its owner at the next login.
+ * left with nobody to manage users). Every change goes to the audit trail. A starting password the administrator
+ * sets must be changed by its owner at the first login; a reset never gives the administrator a password
+ * ({@link ResetCodes}).
  */
 public final class UserAdmin {
     private final UserStore users;
@@ -49,14 +50,6 @@ public final class UserAdmin {
         users.setActive(userId, active);
         if (!active) sessions.deleteAll(userId);
         log(admin, active ? "user activated" : "user deactivated", u, "", address);
-    }
-
-    /** The administrator sets a new password for someone who forgot theirs; their sessions end. */
-    public void resetPassword(User admin, long userId, String password, String address) {
-        User u = users.find(userId);
-        users.setPassword(userId, passwords.hash(Passwords.acceptable("password", password, u.username(), users.firmName())), true);
-        sessions.deleteAll(userId);
-        log(admin, "password reset", u, "", address);
     }
 
     /**

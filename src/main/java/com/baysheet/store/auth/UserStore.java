@@ -118,7 +118,7 @@ public final class UserStore {
         });
     }
 
-    private static void setPassword(Connection c, long id, String hash, boolean mustChange) throws SQLException {
+    static void setPassword(Connection c, long id, String hash, boolean mustChange) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("UPDATE app_user SET password_hash = ?, "
                 + "must_change_password = ?, version = version + 1 WHERE id = ?")) {
             ps.setString(1, hash);

@@ -1,23 +1,39 @@
 package com.baysheet.store.review;
 
+import com.baysheet.review.AuditChain;
 import com.baysheet.review.AuditEvent;
+import com.baysheet.review.ChainCheck;
 import com.baysheet.store.Sql;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
+import java.sql.Statement;
 import java.sql.Types;
 import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Consumer;
 
 /**
- * The append-only audit trail. There is deliberately no method that changes or removes an entry; an
- * action and its entry are written in one transaction where the action is ours.
+ * The append-only audit trail, hash-chained ({@link AuditChain}). There is deliberately no method that changes
+ * or removes an entry; an action and its entry are written in one transaction where the action is ours. Every
+ * append locks the chain's head row, so entries join the chain one at a time in id order, and moves the head
+ * in the same transaction.
  */
 public final class AuditTrail {
+    /** Rows fetched at a time while streaming (PostgreSQL holds a cursor open only with a fetch size). */
+    private static final int FETCH = 500;
+    private static final String COLUMNS = "id, occurred_at, actor_id, actor_username, action, subject, detail, address, entry_hash";
+
+    /** The newest entry's id and hash as the head row holds them. */
+    public record Head(long id, String hash) {
+        /** As an issued PDF prints it. */
+        public String printed() { return "entry " + id + ", SHA-256 " + hash; }
+    }
+
     private final Sql sql;
 
     public AuditTrail(Sql sql) {
@@ -32,10 +48,13 @@ public final class AuditTrail {
     }
 
     /** Appends within the caller's transaction, so the entry stands or falls with the action it records. */
-    public static void append(Connection c, AuditEvent e, Instant at) throws SQLException {
+    public static AuditEvent append(Connection c, AuditEvent e, Instant at) throws SQLException {
+        Head head = lockHead(c);
+        Instant stamped = at.truncatedTo(AuditChain.PRECISION);
+        long id;
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO audit_event (occurred_at, actor_id, actor_username, "
-                + "action, subject, detail, address) VALUES (?, ?, ?, ?, ?, ?, ?)")) {
-            ps.setObject(1, Sql.stamp(at));
+                + "action, subject, detail, address) VALUES (?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
+            ps.setObject(1, Sql.stamp(stamped));
             if (e.actorId() == null) ps.setNull(2, Types.BIGINT);
             else ps.setLong(2, e.actorId());
             ps.setString(3, e.actorUsername());
@@ -44,17 +63,91 @@ public final class AuditTrail {
             ps.setString(6, e.detail());
             ps.setString(7, e.address());
             ps.executeUpdate();
+            try (ResultSet k = ps.getGeneratedKeys()) {
+                k.next();
+                id = k.getLong(1);
+            }
         }
+        AuditEvent stored = e.stored(id, stamped, null);
+        String hash = AuditChain.link(head.hash(), stored);
+        update(c, "UPDATE audit_event SET entry_hash = ? WHERE id = ?", hash, id);
+        update(c, "UPDATE audit_chain SET head_id = ?, head_hash = ? WHERE id = 1", id, hash);
+        return stored.stored(id, stamped, hash);
+    }
+
+    /** The chain's head now, as the head row holds it (what an issued PDF quotes). */
+    public Head head() {
+        return sql.tx(c -> {
+            try (PreparedStatement ps = c.prepareStatement("SELECT head_id, head_hash FROM audit_chain WHERE id = 1");
+                 ResultSet rs = ps.executeQuery()) {
+                rs.next();
+                return new Head(rs.getLong(1), rs.getString(2));
+            }
+        });
+    }
+
+    /**
+     * Recomputes the chain over every entry in id order and compares each stored hash and, at the end, the head
+     * row: reports the first entry that differs (changed, or the one after an entry taken out) or a cut end.
+     */
+    public ChainCheck verify() {
+        Head head = head();
+        long[] n = {0};
+        long[] lastId = {0};
+        String[] expected = {AuditChain.GENESIS};
+        ChainCheck[] broken = {null};
+        forEach(e -> {
+            if (broken[0] != null) return;
+            n[0]++;
+            String h = AuditChain.link(expected[0], e);
+            if (!h.equals(e.hash())) {
+                broken[0] = ChainCheck.broken(n[0], head.id(), head.hash(), e.id(), "entry " + e.id()
+                        + " does not match its hash: it, or an entry before it, was changed or removed");
+                return;
+            }
+            expected[0] = h;
+            lastId[0] = e.id();
+        });
+        if (broken[0] != null) return broken[0];
+        if (lastId[0] != head.id() || !expected[0].equals(head.hash()))
+            return ChainCheck.broken(n[0], head.id(), head.hash(), lastId[0], "the chain ends at entry " + lastId[0]
+                    + " but its head names entry " + head.id() + ": entries were removed from the end, or the head was changed");
+        return ChainCheck.holds(n[0], head.id(), head.hash());
     }
 
     /** Newest first, a page at a time. */
     public List<AuditEvent> page(int limit, int offset) {
-        return query("SELECT * FROM audit_event ORDER BY id DESC LIMIT ? OFFSET ?", limit, offset);
+        return sql.tx(c -> {
+            try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM audit_event ORDER BY id DESC LIMIT ? OFFSET ?")) {
+                ps.setInt(1, limit);
+                ps.setInt(2, offset);
+                List<AuditEvent> out = new ArrayList<>();
+                try (ResultSet rs = ps.executeQuery()) {
+                    while (rs.next()) out.add(read(rs));
+                }
+                return out;
+            }
+        });
     }
 
-    /** Everything, oldest first, for the CSV export. */
+    /** Everything, oldest first, for tests; the export streams with {@link #forEach}. */
     public List<AuditEvent> all() {
-        return query("SELECT * FROM audit_event ORDER BY id");
+        List<AuditEvent> out = new ArrayList<>();
+        forEach(out::add);
+        return out;
+    }
+
+    /** Every entry oldest first, one at a time, never the whole trail in memory (the CSV export, verification). */
+    public void forEach(Consumer<AuditEvent> each) {
+        sql.tx(c -> {
+            try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM audit_event ORDER BY id")) {
+                ps.setFetchSize(FETCH);
+                try (ResultSet rs = ps.executeQuery()) {
+                    while (rs.next()) each.accept(read(rs));
+                }
+            }
+            return null;
+        });
     }
 
     public long count() {
@@ -66,17 +159,19 @@ public final class AuditTrail {
         });
     }
 
-    private List<AuditEvent> query(String q, Object... args) {
-        return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement(q)) {
-                for (int i = 0; i < args.length; i++) ps.setObject(i + 1, args[i]);
-                List<AuditEvent> out = new ArrayList<>();
-                try (ResultSet rs = ps.executeQuery()) {
-                    while (rs.next()) out.add(read(rs));
-                }
-                return out;
-            }
-        });
+    private static Head lockHead(Connection c) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT head_id, head_hash FROM audit_chain WHERE id = 1 FOR UPDATE");
+             ResultSet rs = ps.executeQuery()) {
+            if (!rs.next()) throw new SQLException("the audit chain has no head row (migration V116 not applied)");
+            return new Head(rs.getLong(1), rs.getString(2));
+        }
+    }
+
+    private static void update(Connection c, String q, Object... args) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(q)) {
+            for (int i = 0; i < args.length; i++) ps.setObject(i + 1, args[i]);
+            ps.executeUpdate();
+        }
     }
 
     private static AuditEvent read(ResultSet rs) throws SQLException {
@@ -84,6 +179,6 @@ public final class AuditTrail {
         Long actorId = rs.wasNull() ? null : actor;
         Instant at = rs.getObject("occurred_at", OffsetDateTime.class).toInstant();
         return new AuditEvent(rs.getLong("id"), at, actorId, rs.getString("actor_username"), rs.getString("action"),
-                rs.getString("subject"), rs.getString("detail"), rs.getString("address"));
+                rs.getString("subject"), rs.getString("detail"), rs.getString("address"), rs.getString("entry_hash"));
     }
 }

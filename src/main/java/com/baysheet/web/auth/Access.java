@@ -37,17 +37,31 @@ public final class Access {
 
     private final Logins logins;
     private final Supplier<Firm> firm;
+    private final AuditRecorder recorder;
     /** Set-up is done once and never undone, so after the first yes we stop asking the database. */
     private volatile boolean setupDone;
 
-    /** @param firm the firm's settings, put on every request let through for the page header and new projects */
-    public Access(Logins logins, Supplier<Firm> firm) {
+    /**
+     * @param firm the firm's settings, put on every request let through for the page header and new projects
+     * @param recorder where refused privileged attempts and form-token failures are recorded (null: nowhere)
+     */
+    public Access(Logins logins, Supplier<Firm> firm, AuditRecorder recorder) {
         this.logins = logins;
         this.firm = firm;
+        this.recorder = recorder;
     }
 
-    /** The {@code beforeMatched} check: returns when the route's roles admit the request, throws otherwise. */
+    /** The {@code beforeMatched} check: returns when the route's roles admit the request, throws (and records) otherwise. */
     public void check(Context ctx) {
+        try {
+            admitRoute(ctx);
+        } catch (AccessRefused e) {
+            if (recorder != null) recorder.refused(ctx, e);
+            throw e;
+        }
+    }
+
+    private void admitRoute(Context ctx) {
         Set<RouteRole> admits = ctx.routeRoles();
         // the health check asks the database itself: it must answer (503) when the session lookup would fail
         if (admits.contains(Admit.OPEN)) return;

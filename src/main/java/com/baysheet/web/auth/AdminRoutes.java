@@ -5,11 +5,13 @@ import com.baysheet.auth.Role;
 import com.baysheet.auth.User;
 import com.baysheet.review.AuditCsv;
 import com.baysheet.review.AuditEvent;
+import com.baysheet.review.ChainCheck;
 import com.baysheet.engine.InputError;
 import com.baysheet.store.Editor;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.auth.Accounts;
 import com.baysheet.project.Firm;
+import com.baysheet.store.auth.ResetCodes;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.engine.code.Editions;
 import com.baysheet.web.Editors;
@@ -19,6 +21,11 @@ import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
 
+import java.io.BufferedWriter;
+import java.io.IOException;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.function.Consumer;
@@ -47,7 +54,8 @@ public final class AdminRoutes {
         r.post("/admin/users/{user}/unlock", this::unlock, Admit.ADMINISTRATOR);
         r.get("/admin/firm", ctx -> firm(ctx, null), Admit.ADMINISTRATOR);
         r.post("/admin/firm", this::updateFirm, Admit.ADMINISTRATOR);
-        r.get("/admin/audit", this::audit, Admit.ADMINISTRATOR);
+        r.get("/admin/audit", ctx -> audit(ctx, null), Admit.ADMINISTRATOR);
+        r.get("/admin/audit/verify", ctx -> audit(ctx, review.audit().verify()), Admit.ADMINISTRATOR);
         r.get("/admin/audit.csv", this::auditCsv, Admit.ADMINISTRATOR);
     }
 
@@ -88,9 +96,16 @@ public final class AdminRoutes {
         ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
     }
 
+    /**
+     * Makes a one-time reset code and shows it on this response only (no redirect: it is stored nowhere to show
+     * again). {@code confirm=reset} is asked for so that a stray empty POST makes no code.
+     */
     void resetPassword(Context ctx) {
-        accounts.admin().resetPassword(Access.user(ctx), userId(ctx), ctx.formParam("password"), ctx.ip());
-        ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
+        if (!"reset".equals(ctx.formParam("confirm")))
+            throw new InputError("confirm", String.valueOf(ctx.formParam("confirm")), "must be \"reset\" to make a reset code");
+        ResetCodes.Issued issued = accounts.resets().make(Access.user(ctx), userId(ctx), ctx.ip());
+        ctx.render("auth/reset-code", Map.of("issued", issued,
+                "expires", issued.expiresAt().truncatedTo(java.time.temporal.ChronoUnit.MINUTES).toString().replace('T', ' ')));
     }
 
     void firm(Context ctx, Form f) {
@@ -129,19 +144,26 @@ public final class AdminRoutes {
 
     private static String plain(double v) { return com.baysheet.engine.units.Display.plain(v); }
 
-    void audit(Context ctx) {
+    /** @param check the chain's verification, or null when not asked for */
+    void audit(Context ctx, ChainCheck check) {
         int page = parsePage(ctx.queryParam("page"));
         Map<String, Object> m = new HashMap<>();
+        m.put("head", review.audit().head());
+        m.put("check", check);
         m.put("events", review.audit().page(AUDIT_PAGE, page * AUDIT_PAGE));
         m.put("page", page);
         m.put("more", review.audit().count() > (long) (page + 1) * AUDIT_PAGE);
         ctx.render("auth/audit", m);
     }
 
-    void auditCsv(Context ctx) {
+    void auditCsv(Context ctx) throws IOException {
         ctx.header("Content-Disposition", "attachment; filename=\"baysheet-audit-trail.csv\"");
         ctx.contentType("text/csv; charset=utf-8");
-        ctx.result(AuditCsv.of(review.audit().all()));
+        // streamed a row at a time: the trail grows without bound and is never held whole in memory
+        Writer w = new BufferedWriter(new OutputStreamWriter(ctx.outputStream(), StandardCharsets.UTF_8));
+        AuditCsv csv = new AuditCsv(w);
+        review.audit().forEach(csv::row);
+        w.flush();
     }
 
     /** The furthest page whose offset (page × page size) still fits an int. */

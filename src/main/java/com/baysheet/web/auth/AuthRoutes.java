@@ -5,6 +5,7 @@ import com.baysheet.auth.Role;
 import com.baysheet.auth.SessionPolicy;
 import com.baysheet.auth.SetupCode;
 import com.baysheet.store.auth.Logins;
+import com.baysheet.store.auth.ResetCodes;
 import com.baysheet.store.auth.SignedIn;
 import com.baysheet.web.Form;
 import com.baysheet.web.Saved;
@@ -18,15 +19,20 @@ import java.util.Optional;
 
 /**
  * Logging in and out, the one-time set-up of the first administrator (which asks for the code the server
- * printed in its console), and a password change.
+ * printed in its console), a password change, and a password chosen with a one-time reset code.
  */
 public final class AuthRoutes {
+    /** Where a person uses a one-time reset code; open without a login. */
+    public static final String RESET_PAGE = "/account/reset";
+
     private final Logins logins;
     private final SetupCode setupCode;
+    private final ResetCodes resets;
 
-    public AuthRoutes(Logins logins, SetupCode setupCode) {
+    public AuthRoutes(Logins logins, SetupCode setupCode, ResetCodes resets) {
         this.logins = logins;
         this.setupCode = setupCode;
+        this.resets = resets;
     }
 
     public void install(RoutesConfig r) {
@@ -37,6 +43,8 @@ public final class AuthRoutes {
         r.post("/setup", this::setup, Admit.FIRST_START);
         r.get("/account/password", this::passwordForm, Admit.ACCOUNT);
         r.post("/account/password", this::changePassword, Admit.ACCOUNT);
+        r.get(RESET_PAGE, ctx -> ctx.render("auth/reset", model(Form.filled(Map.of()))), Admit.ANYONE);
+        r.post(RESET_PAGE, this::reset, Admit.ANYONE);
     }
 
     void loginForm(Context ctx) {
@@ -49,12 +57,26 @@ public final class AuthRoutes {
         SignedIn s = logins.login(f.text("username"), f.value("password"), ctx.ip(), Cookies.token(ctx, Cookies.SESSION));
         startSession(ctx, s);
         String next = s.mustChangePassword() ? Access.CHANGE_PASSWORD_PAGE : safeNext(f.text("next"));
-        if (s.failedAttempts() == 0) {
+        if (s.failedAttempts() == 0 && s.notices().isEmpty()) {
             ctx.redirect(next, HttpStatus.SEE_OTHER);
             return;
         }
-        // the user is told before going on: someone may have been guessing their password
-        ctx.render("auth/login-notice", Map.of("attempts", s.failedAttempts(), "next", next));
+        // the user is told before going on: someone may have been guessing their password, or had it reset
+        ctx.render("auth/login-notice", Map.of("attempts", s.failedAttempts(), "notices", s.notices(), "next", next));
+    }
+
+    /** The person chooses their own password with the administrator's one-time code, then logs in. */
+    void reset(Context ctx) {
+        Form f = Form.of(ctx);
+        if (f.attempt(() -> {
+            resets.use(f.text("username"), f.value("code"), f.value("newPassword"), f.value("confirmPassword"), ctx.ip());
+            return true;
+        }).isPresent()) {
+            ctx.redirect(Saved.PASSWORD.after("/login"), HttpStatus.SEE_OTHER);
+        } else {
+            ctx.status(HttpStatus.BAD_REQUEST);
+            ctx.render("auth/reset", model(f));
+        }
     }
 
     void logout(Context ctx) {

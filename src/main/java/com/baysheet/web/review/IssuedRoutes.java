@@ -11,6 +11,7 @@ import com.baysheet.store.Store;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.store.review.StoredRevision;
 import com.baysheet.web.auth.Admit;
+import com.baysheet.web.auth.AuditRecorder;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
@@ -34,11 +35,14 @@ public final class IssuedRoutes {
     private final Store store;
     private final ReviewStore review;
     private final Issuing issuing;
+    private final AuditRecorder recorder;
 
-    public IssuedRoutes(Store store, ReviewStore review, Issuing issuing) {
+    /** @param recorder where each download of an issued copy is recorded (null: nowhere) */
+    public IssuedRoutes(Store store, ReviewStore review, Issuing issuing, AuditRecorder recorder) {
         this.store = store;
         this.review = review;
         this.issuing = issuing;
+        this.recorder = recorder;
     }
 
     public void install(RoutesConfig r) {
@@ -53,7 +57,9 @@ public final class IssuedRoutes {
         long id = id(ctx.pathParam("revision"), "revision");
         StoredRevision r = review.reviews().revision(id);
         byte[] pdf = review.reviews().issuedPdf(id).orElseThrow(() -> new NotFound("issued copy of revision", id));
-        pdf(ctx, pdf, IssuedMatch.of(store, r).fileName());
+        IssuedMatch match = IssuedMatch.of(store, r);
+        if (recorder != null) recorder.downloaded(ctx, r.sheet().label(), "revision " + r.revision().number() + ", " + match.fileName());
+        pdf(ctx, pdf, match.fileName());
     }
 
     void checkingPdf(Context ctx) {

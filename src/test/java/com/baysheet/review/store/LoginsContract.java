@@ -237,7 +237,56 @@ abstract class LoginsContract {
         assertThat(accounts.users().mustChangePassword(made.id())).as("still flagged after refusals").isTrue();
         logins().changePassword(in, PASSWORD, "eve's own chosen words", "eve's own chosen words", "x");
         assertThat(logins().session(in.token()).orElseThrow().mustChangePassword()).isFalse();
-        accounts.admin().resetPassword(admin.user(), made.id(), "a reset by ada 42", "x");
-        assertThat(logins().login("eve.engineer", "a reset by ada 42", "x", null).mustChangePassword()).as("after a reset").isTrue();
+    }
+
+    @Test
+    void aResetCodeSetsThePersonsOwnPasswordOnceAndGivesTheAdministratorNothingToLogInWith() {
+        SignedIn admin = admin();
+        var eve = accounts.admin().add(admin.user(), new NewUser("eve", "Eve Engineer", "EE", Role.ENGINEER), PASSWORD, "x");
+        SignedIn first = logins().login("eve", PASSWORD, "x", null);
+        logins().changePassword(first, PASSWORD, "eve's own chosen words", "eve's own chosen words", "x");
+        var issued = accounts.resets().make(admin.user(), eve.id(), "10.0.0.1");
+        String code = issued.code();
+        assertThat(code).matches("[2-9A-HJKMNP-TV-Z]{4}(-[2-9A-HJKMNP-TV-Z]{4}){4}");
+        assertThat(audit.all().get(audit.all().size() - 1).detail()).as("the code is never recorded").doesNotContain(code);
+
+        // what the administrator saw (the code) is no password, for the person or anyone
+        assertThatThrownBy(() -> logins().login("eve", code, "10.0.0.1", null)).isInstanceOf(LoginRefused.class);
+        assertThatThrownBy(() -> accounts.resets().use("ada", code, "ada takes over 1", "ada takes over 1", "10.0.0.1"))
+                .as("the code is the person's only").isInstanceOf(InputError.class).hasMessageStartingWith("code:");
+
+        SignedIn stillIn = logins().login("eve", "eve's own chosen words", "x", null);
+        assertThat(stillIn.notices()).as("told at the next login").singleElement().asString()
+                .contains("made for you by ada", "has not been used");
+        accounts.resets().use(" Eve ", code.toLowerCase().replace("-", " "), "words only eve knows", "words only eve knows", "10.0.0.5");
+        assertThat(logins().session(stillIn.token())).as("her sessions end").isEmpty();
+        assertThatThrownBy(() -> logins().login("eve", "eve's own chosen words", "x", null)).isInstanceOf(LoginRefused.class);
+        SignedIn after = logins().login("eve", "words only eve knows", "x", null);
+        assertThat(after.mustChangePassword()).as("chosen by the person: no forced change").isFalse();
+        assertThat(after.notices()).singleElement().asString().contains("used on", "from 10.0.0.5");
+        assertThat(logins().login("eve", "words only eve knows", "x", null).notices()).as("told once").isEmpty();
+
+        assertThatThrownBy(() -> accounts.resets().use("eve", code, "a second use of it", "a second use of it", "10.0.0.1"))
+                .as("single use").isInstanceOf(InputError.class).hasMessageStartingWith("code:");
+        assertThatThrownBy(() -> logins().login("eve", code, "10.0.0.1", null)).isInstanceOf(LoginRefused.class);
+        assertThat(audit.all()).extracting(e -> e.action()).contains("reset code made", "password reset");
+    }
+
+    @Test
+    void aResetCodeLapsesAndANewOneVoidsTheLast() {
+        SignedIn admin = admin();
+        var eve = accounts.admin().add(admin.user(), new NewUser("eve", "Eve Engineer", "EE", Role.ENGINEER), PASSWORD, "x");
+        String lapsing = accounts.resets().make(admin.user(), eve.id(), "x").code();
+        clock.advance(com.baysheet.store.auth.ResetCodes.LIFETIME.plusSeconds(1));
+        assertThatThrownBy(() -> accounts.resets().use("eve", lapsing, "too late for this", "too late for this", "x"))
+                .isInstanceOf(InputError.class).hasMessageStartingWith("code:");
+        String voided = accounts.resets().make(admin.user(), eve.id(), "x").code();
+        String live = accounts.resets().make(admin.user(), eve.id(), "x").code();
+        assertThatThrownBy(() -> accounts.resets().use("eve", voided, "an earlier code here", "an earlier code here", "x"))
+                .isInstanceOf(InputError.class).hasMessageStartingWith("code:");
+        assertThatThrownBy(() -> accounts.resets().use("eve", live, "short", "short", "x"))
+                .as("a refused password spends no code").isInstanceOf(InputError.class).hasMessageStartingWith("newPassword:");
+        accounts.resets().use("eve", live, "the latest code works", "the latest code works", "x");
+        assertThat(logins().login("eve", "the latest code works", "x", null).user().username()).isEqualTo("eve");
     }
 }

@@ -99,6 +99,6 @@ class SheetFlowTest {
             assertThat(Html.texts(audit, "td")).contains(action);
         HttpResponse<String> csv = admin.get("/admin/audit.csv");
         assertThat(csv.headers().firstValue("Content-Type")).hasValueSatisfying(t -> assertThat(t).startsWith("text/csv"));
-        assertThat(csv.body()).startsWith("id,when (UTC),user,action,subject,detail,address\r\n").contains("\"issue\"");
+        assertThat(csv.body()).startsWith("id,when (UTC),user,action,subject,detail,address,chain hash\r\n").contains("\"issue\"");
     }
 }
