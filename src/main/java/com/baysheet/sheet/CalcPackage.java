@@ -1,6 +1,7 @@
 package com.baysheet.sheet;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.framing.schedule.LoadSchedule;
 
 import java.util.List;
 
@@ -8,10 +9,19 @@ import java.util.List;
  * A calculation package: cover (project data and design criteria), index, member sheets grouped by level
  * and member kind (put in that order here, otherwise as given), column take-downs and the revision log, all under one title block.
  *
- * @param title what the package covers ("Project package", "Level 2 package")
+ * @param title     what the package covers ("Project package", "Level 2 package")
+ * @param plans     a framing plan sheet per level, before the member sheets
+ * @param schedules the load summaries (column loads, foundation reactions, members), after the take-downs
  */
 public record CalcPackage(SheetHeader header, String title, DesignCriteria criteria, List<MemberSheet> sheets,
-                          List<TakeDownTable> takeDowns, List<Revision> revisions) {
+                          List<TakeDownTable> takeDowns, List<Revision> revisions, List<FramingPlan> plans,
+                          List<LoadSchedule> schedules) {
+    /** A package of member sheets and take-downs alone: no plan sheets, no schedules. */
+    public CalcPackage(SheetHeader header, String title, DesignCriteria criteria, List<MemberSheet> sheets,
+                       List<TakeDownTable> takeDowns, List<Revision> revisions) {
+        this(header, title, criteria, sheets, takeDowns, revisions, List.of(), List.of());
+    }
+
     public CalcPackage {
         if (header == null) throw new InputError("header", "none", "a package needs its title block");
         if (title == null || title.isBlank()) throw new InputError("title", "\"\"", "a package needs a title");
@@ -19,12 +29,14 @@ public record CalcPackage(SheetHeader header, String title, DesignCriteria crite
         sheets = Index.grouped(List.copyOf(sheets));
         takeDowns = List.copyOf(takeDowns);
         revisions = List.copyOf(revisions);
+        plans = List.copyOf(plans);
+        schedules = List.copyOf(schedules);
         if (sheets.isEmpty() && takeDowns.isEmpty())
             throw new InputError("sheets", 0, "a package needs at least one member sheet or take-down");
     }
 
     /** The same package under another title block of its own (the member sheets keep theirs). */
     public CalcPackage withHeader(SheetHeader h) {
-        return new CalcPackage(h, title, criteria, sheets, takeDowns, revisions);
+        return new CalcPackage(h, title, criteria, sheets, takeDowns, revisions, plans, schedules);
     }
 }

@@ -5,6 +5,8 @@ import com.baysheet.framing.Derived;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.MemberRole;
 import com.baysheet.framing.PlanRect;
+import com.baysheet.framing.schedule.ColumnSchedules;
+import com.baysheet.framing.schedule.MemberSchedule;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.Level;
@@ -45,7 +47,9 @@ public final class FramingSheets {
         for (var t : d.takeDowns())
             if (t.rows().stream().anyMatch(r -> r.level().equals(level))) downs.add(TakeDownTables.of(d, t));
         return new CalcPackage(base.withSubject(level + " package"), level + " package", Criteria.of(d.building()),
-                sheets(members, d, on), downs, revisions);
+                sheets(members, d, on), downs, revisions, FramingPlans.of(d, List.of(level)),
+                List.of(ColumnSchedules.loads(d, ColumnSchedules.at(level)), ColumnSchedules.foundations(d, ColumnSchedules.at(level)),
+                        MemberSchedule.onLevel(d, level)));
     }
 
     /** The whole project, every member sheet under the package's own title block. */
@@ -61,7 +65,9 @@ public final class FramingSheets {
     public static CalcPackage project(SheetHeader base, Derived d, List<Revision> revisions,
                                       Function<DerivedMember, SheetHeader> members) {
         return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
-                sheets(members, d, d.members()), d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions);
+                sheets(members, d, d.members()), d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions,
+                FramingPlans.of(d, d.members().stream().map(DerivedMember::level).distinct().toList()),
+                List.of(ColumnSchedules.loads(d), ColumnSchedules.foundations(d), MemberSchedule.of(d)));
     }
 
     private static List<MemberSheet> sheets(Function<DerivedMember, SheetHeader> headers, Derived d, List<DerivedMember> members) {

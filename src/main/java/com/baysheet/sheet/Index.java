@@ -24,6 +24,7 @@ import java.util.StringJoiner;
 final class Index {
     static final Object TAKE_DOWNS = new Object();
     static final Object REVISIONS = new Object();
+    static final Object SCHEDULES = new Object();
 
     private final PdfaDocument pdf;
     private final CalcPackage pkg;
@@ -35,6 +36,8 @@ final class Index {
         for (MemberSheet s : pkg.sheets()) starts.put(s, template());
         starts.put(TAKE_DOWNS, template());
         starts.put(REVISIONS, template());
+        starts.put(SCHEDULES, template());
+        for (FramingPlan p : pkg.plans()) starts.put(p, template());
     }
 
     private PdfTemplate template() { return pdf.writer.getDirectContent().createTemplate(28, 9); }
@@ -47,6 +50,7 @@ final class Index {
         t.addCell(Cells.head("Subject", fonts));
         t.addCell(Cells.head("Governing results", fonts));
         t.setHeaderRows(2);
+        for (FramingPlan p : pkg.plans()) row(t, starts.get(p), "Framing plan, " + p.level(), p.members().size() + " members");
         String group = null;
         for (MemberSheet s : pkg.sheets()) {
             String g = s.level().isEmpty() && s.group().isEmpty() ? "Members" : (s.level() + " · " + s.group());
@@ -61,6 +65,8 @@ final class Index {
         }
         if (!pkg.takeDowns().isEmpty())
             row(t, starts.get(TAKE_DOWNS), "Column take-downs", pkg.takeDowns().size() + " column stacks");
+        if (!pkg.schedules().isEmpty())
+            row(t, starts.get(SCHEDULES), "Load summaries", String.join("; ", pkg.schedules().stream().map(x -> x.title()).toList()));
         row(t, starts.get(REVISIONS), "Revision log", "");
         pdf.add(t);
     }

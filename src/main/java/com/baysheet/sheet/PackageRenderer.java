@@ -52,6 +52,7 @@ public final class PackageRenderer {
         pdf.newPage();
         pdf.frame.show(pkg.header().withSubject("Index of sheets"), pkg.title() + " · index");
         index.write();
+        PackageSections.plans(pdf, pkg, index);
         int done = 0;
         for (MemberSheet s : pkg.sheets()) {
             pdf.newPage();
@@ -66,6 +67,7 @@ public final class PackageRenderer {
             index.startsHere(Index.TAKE_DOWNS);
             new TakeDownPages(pdf, pkg.takeDowns()).write();
         }
+        PackageSections.schedules(pdf, pkg, index);
         pdf.newPage();
         pdf.frame.show(pkg.header().withSubject("Revision log"), pkg.title() + " · revision log");
         index.startsHere(Index.REVISIONS);
@@ -86,6 +88,8 @@ public final class PackageRenderer {
         d.update(("package|" + pkg.header() + "|" + pkg.title() + "|" + pkg.criteria() + "|" + pkg.revisions()).getBytes(StandardCharsets.UTF_8));
         for (MemberSheet s : pkg.sheets()) d.update(s.toString().getBytes(StandardCharsets.UTF_8));
         for (TakeDownTable t : pkg.takeDowns()) d.update(t.toString().getBytes(StandardCharsets.UTF_8));
+        for (FramingPlan p : pkg.plans()) d.update(p.toString().getBytes(StandardCharsets.UTF_8));
+        for (var s : pkg.schedules()) d.update(s.toString().getBytes(StandardCharsets.UTF_8));
         return d.digest();
     }
 }

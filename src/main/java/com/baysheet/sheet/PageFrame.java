@@ -56,7 +56,7 @@ final class PageFrame extends PdfPageEventHelper {
     @Override
     public void onEndPage(PdfWriter writer, Document document) {
         pages++;
-        Rectangle page = document.getPageSize();
+        Rectangle page = writer.getPageSize();   // the page ending, which a plan sheet may have turned to landscape
         PdfContentByte cb = writer.getDirectContent();
         if (checking) watermark(writer.getDirectContentUnder(), page);
         new TitleBlock(fonts, cb, header, context, status())
