@@ -66,6 +66,7 @@ public final class Server {
             new PlanRoutes(store).install(cfg.routes);
             new MemberRoutes(store).install(cfg.routes);
             new TakeDownRoutes(store).install(cfg.routes);
+            new ScheduleRoutes(store).install(cfg.routes);
             new OccupancyRoutes(store).install(cfg.routes);
             new ApiRoutes(store).install(cfg.routes);
             new ApiResultRoutes(store).install(cfg.routes);
