@@ -49,7 +49,7 @@ public final class FramingSheets {
         return new CalcPackage(base.withSubject(level + " package"), level + " package", Criteria.of(d.building()),
                 sheets(members, d, on), downs, revisions, FramingPlans.of(d, List.of(level)),
                 List.of(ColumnSchedules.loads(d, ColumnSchedules.at(level)), ColumnSchedules.foundations(d, ColumnSchedules.at(level)),
-                        MemberSchedule.onLevel(d, level)));
+                        MemberSchedule.onLevel(d, level)), Submittal.NONE);
     }
 
     /** The whole project, every member sheet under the package's own title block. */
@@ -67,7 +67,7 @@ public final class FramingSheets {
         return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
                 sheets(members, d, d.members()), d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions,
                 FramingPlans.of(d, d.members().stream().map(DerivedMember::level).distinct().toList()),
-                List.of(ColumnSchedules.loads(d), ColumnSchedules.foundations(d), MemberSchedule.of(d)));
+                List.of(ColumnSchedules.loads(d), ColumnSchedules.foundations(d), MemberSchedule.of(d)), Submittal.NONE);
     }
 
     private static List<MemberSheet> sheets(Function<DerivedMember, SheetHeader> headers, Derived d, List<DerivedMember> members) {

@@ -25,6 +25,7 @@ final class Index {
     static final Object TAKE_DOWNS = new Object();
     static final Object REVISIONS = new Object();
     static final Object SCHEDULES = new Object();
+    static final Object CRITERIA = new Object();
 
     private final PdfaDocument pdf;
     private final CalcPackage pkg;
@@ -37,6 +38,7 @@ final class Index {
         starts.put(TAKE_DOWNS, template());
         starts.put(REVISIONS, template());
         starts.put(SCHEDULES, template());
+        starts.put(CRITERIA, template());
         for (FramingPlan p : pkg.plans()) starts.put(p, template());
     }
 
@@ -50,6 +52,7 @@ final class Index {
         t.addCell(Cells.head("Subject", fonts));
         t.addCell(Cells.head("Governing results", fonts));
         t.setHeaderRows(2);
+        row(t, starts.get(CRITERIA), "Design criteria", "codes, loads, combinations, self weights");
         for (FramingPlan p : pkg.plans()) row(t, starts.get(p), "Framing plan, " + p.level(), p.members().size() + " members");
         String group = null;
         for (MemberSheet s : pkg.sheets()) {

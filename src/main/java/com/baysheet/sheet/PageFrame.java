@@ -31,6 +31,7 @@ final class PageFrame extends PdfPageEventHelper {
     private PdfTemplate totalInBlock;
     private PdfTemplate totalInFooter;
     private int pages;
+    private Submittal site = Submittal.NONE;
 
     PageFrame(Fonts fonts, SheetHeader header, boolean checking) {
         this.fonts = fonts;
@@ -47,6 +48,9 @@ final class PageFrame extends PdfPageEventHelper {
 
     int pages() { return pages; }
 
+    /** The site address and engineer of record every title block of the document carries. */
+    void site(Submittal s) { this.site = s == null ? Submittal.NONE : s; }
+
     @Override
     public void onOpenDocument(PdfWriter writer, Document document) {
         totalInBlock = writer.getDirectContent().createTemplate(40, 12);
@@ -59,7 +63,7 @@ final class PageFrame extends PdfPageEventHelper {
         Rectangle page = writer.getPageSize();   // the page ending, which a plan sheet may have turned to landscape
         PdfContentByte cb = writer.getDirectContent();
         if (checking) watermark(writer.getDirectContentUnder(), page);
-        new TitleBlock(fonts, cb, header, context, status())
+        new TitleBlock(fonts, cb, header, context, status(), site)
                 .draw(MARGIN, page.getHeight() - MARGIN - BLOCK_HEIGHT, page.getWidth() - 2 * MARGIN, BLOCK_HEIGHT, pages, totalInBlock);
         footer(cb, page);
     }

@@ -21,9 +21,14 @@ final class TitleBlock {
     private final SheetHeader h;
     private final String context;
     private final String status;
+    private final Submittal site;
 
-    /** @param status what the band says of the copy ("ISSUED · Rev 2 · date"), or null on a checking copy */
-    TitleBlock(Fonts fonts, PdfContentByte cb, SheetHeader h, String context, String status) {
+    /**
+     * @param status what the band says of the copy ("ISSUED · Rev 2 · date"), or null on a checking copy
+     * @param site   the site address (beside the project's name) and the engineer of record (under the firm's)
+     */
+    TitleBlock(Fonts fonts, PdfContentByte cb, SheetHeader h, String context, String status, Submittal site) {
+        this.site = site;
         this.fonts = fonts;
         this.cb = cb;
         this.h = h;
@@ -49,8 +54,12 @@ final class TitleBlock {
         vertical(p, top - row, top - 2 * row);
         cb.restoreState();
 
-        firm(x + 4, top - 16, a - x - 8);
-        cell("Project", h.project(), a, top, b - a);
+        firm(x + 4, site.engineerLine().isEmpty() ? top - 16 : top - 13, a - x - 8);
+        cell(site.address().isEmpty() ? "Project" : Text.fit("Project · " + site.address(), fonts.regular, LABEL, b - a - 8),
+                h.project(), a, top, b - a);
+        if (!site.engineerLine().isEmpty())
+            Text.show(cb, fonts.regular, 5.5f, Fonts.GREY, Element.ALIGN_LEFT,
+                    Text.fit("Engineer of record: " + site.engineerLine(), fonts.regular, 5.5f, a - x - 8), x + 4, top - 22.3f);
         cell("Job no.", h.jobNumber(), b, top, c - b);
         Text.show(cb, fonts.regular, LABEL, Fonts.GREY, Element.ALIGN_LEFT, "Sheet", c + 4, top - 8);
         String n = page + " of ";

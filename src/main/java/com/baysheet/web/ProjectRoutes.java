@@ -69,7 +69,13 @@ final class ProjectRoutes {
     }
 
     private void renderForm(Context ctx, String template, Project p, Form form) {
+        renderForm(ctx, template, p, form, p == null ? null : SubmittalRoutes.filled(store, p));
+    }
+
+    /** The new-project or settings page; the settings page also holds the submittal form ({@link SubmittalRoutes}). */
+    static void renderForm(Context ctx, String template, Project p, Form form, Form submittal) {
         Map<String, Object> m = new HashMap<>();
+        if (submittal != null) m.put("submittal", submittal);
         m.put("form", form);
         m.put("editions", Editions.builtIn().ids());
         m.put("unitSystems", UnitSystem.values());
@@ -97,7 +103,7 @@ final class ProjectRoutes {
         return SnowInput.of(pg, f.text("snowTerrain"), f.text("snowExposure"), ce, f.text("thermalCondition"), ct, f.text("riskCategory"));
     }
 
-    private static Map<String, String> values(Project p) {
+    static Map<String, String> values(Project p) {
         ProjectInfo i = p.info();
         Map<String, String> v = new HashMap<>(Map.of("version", String.valueOf(p.version()), "jobNumber", i.jobNumber(),
                 "name", i.name(), "address", i.address(), "client", i.client(), "edition", i.edition(),

@@ -67,6 +67,7 @@ public final class Server {
             new MemberRoutes(store).install(cfg.routes);
             new TakeDownRoutes(store).install(cfg.routes);
             new ScheduleRoutes(store).install(cfg.routes);
+            new SubmittalRoutes(store).install(cfg.routes);
             new OccupancyRoutes(store).install(cfg.routes);
             new ApiRoutes(store).install(cfg.routes);
             new ApiResultRoutes(store).install(cfg.routes);

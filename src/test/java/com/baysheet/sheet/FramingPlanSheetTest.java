@@ -59,7 +59,7 @@ class FramingPlanSheetTest {
         CalcPackage whole = FramingSheets.project(SheetFixtures.header("Project"), building, List.of());
         // the plans and summaries of the whole project with one member sheet and one take-down: a short PDF to validate
         project = new CalcPackage(whole.header(), whole.title(), whole.criteria(), whole.sheets().subList(0, 1),
-                whole.takeDowns().subList(0, 1), List.of(), whole.plans(), whole.schedules());
+                whole.takeDowns().subList(0, 1), List.of(), whole.plans(), whole.schedules(), whole.submittal());
         pdf = PackageRenderer.render(project);
         pages = SheetFixtures.pageTexts(pdf.bytes());
         if (System.getProperty("baysheet.keepPdf") != null) write(pdf.bytes());

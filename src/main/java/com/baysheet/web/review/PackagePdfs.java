@@ -8,6 +8,7 @@ import com.baysheet.sheet.FramingSheets;
 import com.baysheet.sheet.PackageRenderer;
 import com.baysheet.sheet.Revision;
 import com.baysheet.sheet.SheetHeader;
+import com.baysheet.sheet.Submittal;
 import com.baysheet.store.review.Firm;
 import com.baysheet.store.review.Reviews;
 import com.baysheet.store.review.StoredRevision;
@@ -32,23 +33,23 @@ final class PackagePdfs {
     private PackagePdfs() {}
 
     /** @param latest the latest revision of every sheet of the project, for each member's own title block */
-    static byte[] issued(Firm firm, SheetContext.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
+    static byte[] issued(Firm firm, Submittal site, SheetContext.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
         SheetRevision r = v.current().revision();
         var info = s.computed().project().info();
         SheetHeader h = TitleBlocks.issuing(firm, info, s.name(), r, today);
         List<Revision> log = new ArrayList<>();
         CalcRecord before = earlier(v.history(), r.number(), log);
         log.add(line(r, today, before, s.current()));
-        return PackageRenderer.render(of(s, h, log, TitleBlocks.members(firm, info, latest, today))).bytes();
+        return PackageRenderer.render(of(s, h, log, TitleBlocks.members(firm, info, latest, today)).withSubmittal(site)).bytes();
     }
 
     /** The checking copy of a package: the package's revision under way, not issued; its earlier issues logged. */
-    static CalcPackage checking(Firm firm, SheetContext.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
+    static CalcPackage checking(Firm firm, Submittal site, SheetContext.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
         var info = s.computed().project().info();
         SheetHeader h = TitleBlocks.underCheck(firm, info, s.name(), v.current().revision(), s.current(), today);
         List<Revision> log = new ArrayList<>();
         earlier(v.history(), Integer.MAX_VALUE, log);
-        return of(s, h, log, TitleBlocks.members(firm, info, latest, today));
+        return of(s, h, log, TitleBlocks.members(firm, info, latest, today)).withSubmittal(site);
     }
 
     private static CalcPackage of(SheetContext.OfPackage s, SheetHeader h, List<Revision> log, Function<DerivedMember, SheetHeader> members) {

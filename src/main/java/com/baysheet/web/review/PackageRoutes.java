@@ -66,7 +66,7 @@ public final class PackageRoutes {
         if (ps.members(c.derived()).isEmpty()) throw new InputError("level", scope, "has no members in this model");
         SheetRef ref = new SheetRef(project, ps.subject());
         SheetContext.OfPackage s = new SheetContext.OfPackage(c, ps, ref, PackageManifest.of(ps, c.derived()));
-        CalcPackage pkg = PackagePdfs.checking(review.firm().get(), s, review.reviews().view(ref),
+        CalcPackage pkg = PackagePdfs.checking(review.firm().get(), store.projects().submittals().find(project), s, review.reviews().view(ref),
                 review.reviews().latestOf(project), LocalDate.now(clock));
         PackageJobs.Job job = jobs.start(project, pkg);
         ctx.redirect("/projects/" + project + "/packages/" + job.id, io.javalin.http.HttpStatus.SEE_OTHER);

@@ -99,7 +99,7 @@ public final class ReviewRoutes {
         if (cur.revision().state() != SheetState.APPROVED)
             throw new ReviewRefused.WrongState(ReviewAction.ISSUE, cur.revision().state(), "only an approved sheet is issued");
         byte[] pdf = s instanceof SheetContext.OfMember m ? SheetPdfs.issued(review.firm().get(), m, cur.revision(), today()).bytes()
-                : PackagePdfs.issued(review.firm().get(), (SheetContext.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today());
+                : PackagePdfs.issued(review.firm().get(), store.projects().submittals().find(s.ref().projectId()), (SheetContext.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today());
         reviews().issue(s.ref(), version, caller(ctx), today(), s.current(), pdf);
         ctx.redirect(s.path(), HttpStatus.SEE_OTHER);
     }
