@@ -36,7 +36,10 @@ class NoInternalIdsTest {
             Results.Computed c = server.store.results().of(project.id());
             SheetHeader h = new SheetHeader("Harbor & Pine Structural", project.info().name(), project.info().jobNumber(), "Project package",
                     SheetHeader.NOT_SUBMITTED, null, "", null, "1", null, LocalDate.of(2026, 1, 5));
-            CalcPackage pkg = FramingSheets.project(h, c.derived(), List.of()).withSubmittal(server.store.projects().submittals().find(project.id()));
+            // the whole office project, and one level of the SI deck (its sheets are written by the same code)
+            CalcPackage whole = project == server.alder() ? FramingSheets.project(h, c.derived(), List.of())
+                    : FramingSheets.level(h, c.derived(), c.derived().members().get(0).level(), List.of());
+            CalcPackage pkg = whole.withSubmittal(server.store.projects().submittals().find(project.id()));
             ByteArrayOutputStream out = new ByteArrayOutputStream();
             PackageRenderer.checking(pkg, out, PackageRenderer.Progress.NONE);
             try (PDDocument d = Loader.loadPDF(out.toByteArray())) {

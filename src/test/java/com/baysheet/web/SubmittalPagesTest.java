@@ -51,7 +51,8 @@ class SubmittalPagesTest {
         assertThat(r.statusCode()).isEqualTo(422);
         assertThat(r.body()).contains("id=\"error-codeYear\"", "four digits").contains("value=\"18\"");
         HttpResponse<String> orphan = server.post("/projects/" + id + "/settings/submittal", List.of(entry("version", String.valueOf(v)),
-                entry("licenceNumber", "PE-1")));
+                entry("engineerOfRecord", ""), entry("licenceNumber", "PE-1"), entry("licenceState", "OR"), entry("buildingCode", ""),
+                entry("codeYear", "")));
         assertThat(orphan.statusCode()).isEqualTo(422);
         assertThat(orphan.body()).contains("id=\"error-engineerOfRecord\"");
         assertThat(server.store.projects().submittals().find(id)).isEqualTo(before);
