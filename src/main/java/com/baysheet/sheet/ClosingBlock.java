@@ -19,8 +19,10 @@ final class ClosingBlock {
 
     private final Fonts fonts;
     private final boolean checking;
+    private final Wording wording;
 
-    ClosingBlock(Fonts fonts, boolean checking) {
+    ClosingBlock(Fonts fonts, boolean checking, Wording wording) {
+        this.wording = wording;
         this.fonts = fonts;
         this.checking = checking;
     }
@@ -31,7 +33,7 @@ final class ClosingBlock {
         t.setSpacingBefore(8);
         t.setKeepTogether(true);
         Phrase words = new Phrase(DISCLAIMER, fonts.body());
-        if (checking) words.add(new Chunk("\n\nCHECKING COPY — NOT FOR SUBMITTAL. Markups may be open; do not seal.", fonts.mark()));
+        if (checking) words.add(new Chunk("\n\n" + wording.closing, fonts.mark()));
         PdfPCell left = new PdfPCell();
         if (lead != null) left.addElement(lead);
         com.lowagie.text.Paragraph p = new com.lowagie.text.Paragraph(words);

@@ -48,7 +48,7 @@ final class Cover {
                 + (levels == 1 ? " level" : " levels") + ", " + pkg.plans().size() + " framing plans and " + pkg.takeDowns().size()
                 + " column take-downs; the design criteria follow, then the index.",
                 fonts.body()));
-        pdf.add(new ClosingBlock(fonts, false).table(null));
+        pdf.add(new ClosingBlock(fonts, false, pdf.frame.wording()).table(null));
     }
 
     /**

@@ -47,7 +47,7 @@ final class MemberSheetWriter {
         if (!matrix.isEmpty()) pdf.add(matrix.table());
         if (!matrix.others.isEmpty()) pdf.add(new EntryTable(fonts, markups).of("Other results", matrix.others));
         new NotesBlock(pdf, r, markups).write();
-        pdf.add(new ClosingBlock(fonts, markups.checking()).table(governing()));
+        pdf.add(new ClosingBlock(fonts, markups.checking(), pdf.frame.wording()).table(governing()));
     }
 
     private Paragraph intro() {

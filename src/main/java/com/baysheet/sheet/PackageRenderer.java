@@ -47,6 +47,7 @@ public final class PackageRenderer {
         byte[] id = markups.checking() ? Hashes.of("checking-package", java.util.Arrays.toString(digest(pkg))) : digest(pkg);
         PdfaDocument pdf = PdfaDocument.open(out, pkg.header(), pkg.title() + ", " + pkg.header().project(), id, markups.checking());
         pdf.frame.site(pkg.submittal());
+        pdf.frame.wording(Wording.of(pkg));
         Index index = new Index(pdf, pkg);
         pdf.frame.show(pkg.header(), pkg.title() + " · cover");
         new Cover(pdf, pkg, markups.checking()).write();

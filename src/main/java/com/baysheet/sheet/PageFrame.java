@@ -20,7 +20,6 @@ final class PageFrame extends PdfPageEventHelper {
     static final float MARGIN = 36f;
     static final float BLOCK_HEIGHT = 64f;
     static final float FOOTER = 22f;
-    static final String CHECKING = "CHECKING COPY — NOT FOR SUBMITTAL";
 
     private final Fonts fonts;
     private final boolean checking;
@@ -32,6 +31,7 @@ final class PageFrame extends PdfPageEventHelper {
     private PdfTemplate totalInFooter;
     private int pages;
     private Submittal site = Submittal.NONE;
+    private Wording wording = Wording.SI;
 
     PageFrame(Fonts fonts, SheetHeader header, boolean checking) {
         this.fonts = fonts;
@@ -48,6 +48,11 @@ final class PageFrame extends PdfPageEventHelper {
 
     int pages() { return pages; }
 
+    /** The words a copy that is not issued marks itself with. */
+    void wording(Wording w) { this.wording = w; }
+
+    Wording wording() { return wording; }
+
     /** The site address and engineer of record every title block of the document carries. */
     void site(Submittal s) { this.site = s == null ? Submittal.NONE : s; }
 
@@ -63,7 +68,7 @@ final class PageFrame extends PdfPageEventHelper {
         Rectangle page = writer.getPageSize();   // the page ending, which a plan sheet may have turned to landscape
         PdfContentByte cb = writer.getDirectContent();
         if (checking) watermark(writer.getDirectContentUnder(), page);
-        new TitleBlock(fonts, cb, header, context, status(), site)
+        new TitleBlock(fonts, cb, header, context, status(), site, wording.mark)
                 .draw(MARGIN, page.getHeight() - MARGIN - BLOCK_HEIGHT, page.getWidth() - 2 * MARGIN, BLOCK_HEIGHT, pages, totalInBlock);
         footer(cb, page);
     }
@@ -115,7 +120,7 @@ final class PageFrame extends PdfPageEventHelper {
         under.beginText();
         under.setFontAndSize(fonts.bold, 30f);
         under.setColorFill(new Color(0xf6, 0xd5, 0xd5));
-        under.showTextAligned(Element.ALIGN_CENTER, CHECKING, page.getWidth() / 2, page.getHeight() / 2, 55f);
+        under.showTextAligned(Element.ALIGN_CENTER, wording.mark, page.getWidth() / 2, page.getHeight() / 2, 55f);
         under.endText();
         under.restoreState();
     }

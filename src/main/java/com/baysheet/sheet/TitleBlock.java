@@ -22,13 +22,15 @@ final class TitleBlock {
     private final String context;
     private final String status;
     private final Submittal site;
+    private final String mark;
 
     /**
      * @param status what the band says of the copy ("ISSUED · Rev 2 · date"), or null on a checking copy
      * @param site   the site address (beside the project's name) and the engineer of record (under the firm's)
      */
-    TitleBlock(Fonts fonts, PdfContentByte cb, SheetHeader h, String context, String status, Submittal site) {
+    TitleBlock(Fonts fonts, PdfContentByte cb, SheetHeader h, String context, String status, Submittal site, String mark) {
         this.site = site;
+        this.mark = mark;
         this.fonts = fonts;
         this.cb = cb;
         this.h = h;
@@ -98,7 +100,7 @@ final class TitleBlock {
             cb.rectangle(x + w - bw, y, bw, height);
             cb.fill();
             cb.restoreState();
-            Text.show(cb, fonts.bold, 7.5f, Color.WHITE, Element.ALIGN_CENTER, PageFrame.CHECKING, x + w - bw / 2, y + 5);
+            Text.show(cb, fonts.bold, 7.5f, Color.WHITE, Element.ALIGN_CENTER, mark, x + w - bw / 2, y + 5);
         } else {
             Text.show(cb, fonts.bold, 7f, Fonts.INK, Element.ALIGN_RIGHT, status, x + w - 4, y + 5);
         }

@@ -105,7 +105,7 @@ class PackageFlowTest {
             back.setStartPage(doc.getNumberOfPages());
             String text = front.getText(doc) + back.getText(doc);
             assertThat(text).contains(scope.title(), member.name(), "Index of sheets", "Revision log", "First issue",
-                    chk.user.initials()).doesNotContain("CHECKING COPY");
+                    chk.user.initials()).doesNotContain("CHECK PRINT", "CHECKING COPY");
         }
         String verdict = eng.upload("/verify", "pdf", "package.pdf", pdf.body()).body();
         assertThat(verdict).contains("Matches an issued revision", sha, "href=\"" + pkg + "\"");
