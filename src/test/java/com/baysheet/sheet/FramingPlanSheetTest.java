@@ -122,6 +122,17 @@ class FramingPlanSheetTest {
     }
 
     @Test
+    void aPointLoadOnThePlanIsDrawnWithItsTextAndInTheLegend() {
+        FramingPlan p = project.plans().get(1);
+        FramingPlan with = new FramingPlan(p.level(), p.system(), p.gridLines(), p.bays(), p.openings(), p.cantilevers(), p.members(),
+                p.lineLoads(), List.of(new FramingPlan.LoadPoint(45, 12.5, "Tank P1: D 4.00 kip")));
+        CalcPackage one = new CalcPackage(project.header(), project.title(), project.criteria(), project.sheets(), List.of(), List.of(),
+                List.of(with), List.of(), project.submittal());
+        String text = SheetFixtures.squash(String.join("", SheetFixtures.pageTexts(PackageRenderer.render(one).bytes())));
+        assertThat(text).contains("TankP1:D4.00kip").contains("pointload(unfactored)");
+    }
+
+    @Test
     void lengthsAreDimensionedAsDrawingsWriteThem() {
         assertThat(PlanLengths.of(25.5, com.baysheet.engine.units.UnitSystem.US)).isEqualTo("25'-6\"");
         assertThat(PlanLengths.of(0.5 / 12, com.baysheet.engine.units.UnitSystem.US)).isEqualTo("0'-0 1/2\"");
