@@ -1,5 +1,6 @@
 package com.baysheet.sheet;
 
+import com.baysheet.framing.model.Submittal;
 import com.lowagie.text.Paragraph;
 import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;

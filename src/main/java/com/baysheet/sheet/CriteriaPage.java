@@ -1,5 +1,6 @@
 package com.baysheet.sheet;
 
+import com.baysheet.framing.model.Submittal;
 import com.lowagie.text.pdf.PdfPTable;
 
 import java.util.List;

@@ -1,5 +1,6 @@
 package com.baysheet.sheet;
 
+import com.baysheet.framing.model.Submittal;
 import com.baysheet.engine.InputError;
 import com.baysheet.framing.Derived;
 import com.baysheet.framing.DerivedMember;

@@ -1,5 +1,6 @@
 package com.baysheet.sheet;
 
+import com.baysheet.framing.model.Submittal;
 import com.lowagie.text.Element;
 import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfTemplate;

@@ -34,7 +34,7 @@ public final class Demo {
         long id = made.id();
         JsonNode sub = p.path("submittal");
         if (!sub.isMissingNode())
-            store.projects().submittals().save(Editor.DEMO, id, version(store, id), new com.baysheet.sheet.Submittal(made.info().address(),
+            store.projects().submittals().save(Editor.DEMO, id, version(store, id), new com.baysheet.framing.model.Submittal(made.info().address(),
                     made.info().client(), sub.path("engineerOfRecord").asText(""), sub.path("licenceNumber").asText(""),
                     sub.path("licenceState").asText(""), sub.path("buildingCode").asText(""), sub.path("codeYear").asText("")));
         store.grids().save(Editor.DEMO, id, version(store, id), ModelJson.grid(p.path("grid")));

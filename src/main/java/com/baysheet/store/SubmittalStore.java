@@ -1,6 +1,6 @@
 package com.baysheet.store;
 
-import com.baysheet.sheet.Submittal;
+import com.baysheet.framing.model.Submittal;
 
 import java.sql.Connection;
 import java.sql.PreparedStatement;

@@ -1,6 +1,6 @@
 package com.baysheet.web;
 
-import com.baysheet.sheet.Submittal;
+import com.baysheet.framing.model.Submittal;
 import com.baysheet.store.Project;
 import com.baysheet.store.Store;
 import io.javalin.config.RoutesConfig;

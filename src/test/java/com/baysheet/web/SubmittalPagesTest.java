@@ -1,6 +1,6 @@
 package com.baysheet.web;
 
-import com.baysheet.sheet.Submittal;
+import com.baysheet.framing.model.Submittal;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 

@@ -8,7 +8,7 @@ import com.baysheet.sheet.FramingSheets;
 import com.baysheet.sheet.PackageRenderer;
 import com.baysheet.sheet.Revision;
 import com.baysheet.sheet.SheetHeader;
-import com.baysheet.sheet.Submittal;
+import com.baysheet.framing.model.Submittal;
 import com.baysheet.store.review.Firm;
 import com.baysheet.store.review.Reviews;
 import com.baysheet.store.review.StoredRevision;

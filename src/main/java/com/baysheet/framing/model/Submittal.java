@@ -1,4 +1,4 @@
-package com.baysheet.sheet;
+package com.baysheet.framing.model;
 
 import com.baysheet.engine.InputError;
 
