@@ -79,7 +79,7 @@ final class ColumnTakeDown {
         if (rows.isEmpty()) return null;
         CalcContext c = ctx; // the writer keeps only what it needs, not this take-down's working state
         return new TakeDown("c" + plans.get(0).at(i, j), point, rows,
-                () -> TakeDownRecord.write(c, "Column " + point + " take-down", rows, records));
+                () -> TakeDownRecord.write(c, point, rows, records));
     }
 
     /**

@@ -20,32 +20,37 @@ import java.util.List;
 final class TakeDownRecord {
     private TakeDownRecord() {}
 
-    static CalcRecord write(CalcContext ctx, String title, List<TakeDown.Row> rows, List<MemberResult> columns) {
+    /** Relative difference below which the reducible area is taken as the whole A_T (nothing to print apart). */
+    private static final double SAME_AREA = 1e-9;
+
+    /** @param point the grid point of the stack ("B/2"): the text refers a reader to each level's column by it, never by id */
+    static CalcRecord write(CalcContext ctx, String point, List<TakeDown.Row> rows, List<MemberResult> columns) {
+        String title = "Column " + point + " take-down";
         var ed = ctx.edition();
         RecordBuilder rec = new RecordBuilder(title, ed.id(), ctx.system());
         double above = 0;
         for (int k = 0; k < rows.size(); k++) {
             TakeDown.Row w = rows.get(k);
             CalcRecord r = columns.get(k).record();
-            String at = "@" + w.level(), lv = w.level() + ": ";
-            areas(rec, ctx, w, above, k == 0, lv, at);
+            String at = "@" + w.level(), lv = w.level() + ": ", see = see(point, w);
+            areas(rec, ctx, w, above, k == 0, lv, at, see);
             above = w.cumulativeArea();
             if (ctx.floorMethod() == null) basicFactor(ctx, rec, r, w, lv, at);
             else rec.step("f" + at, lv + "factor the reducible floor live loads take together, " + ReductionMethods.of(ctx).title(ctx),
                     "f = Σ f_i L0 A_i / Σ L0 A_i", "see the column record " + w.member(), w.factor(), Quantity.RATIO, ReductionMethods.of(ctx).clause(ctx));
             rec.step("P_sw" + at, lv + "self weight of the column below this level", "P_sw = w_sw × h",
-                    "see the column record " + w.member(), w.selfWeightAtLevel(), Quantity.FORCE, Clause.NONE);
+                    see, w.selfWeightAtLevel(), Quantity.FORCE, Clause.NONE);
             rec.step("P_D" + at, lv + "dead load", "Σ D", "level adds " + rec.show(w.deadAtLevel(), Quantity.FORCE) + ", column self weight included", w.dead(), Quantity.FORCE,
                     Clause.NONE);
             rec.step("P_L" + at, lv + "floor live load, reduced (unreduced " + rec.show(w.liveUnreduced(), Quantity.FORCE) + ")", "Σ f_i L0 A_i",
-                    "see the column record " + w.member(), w.liveReduced(), Quantity.FORCE, ReductionMethods.of(ctx).clause(ctx));
+                    see, w.liveReduced(), Quantity.FORCE, ReductionMethods.of(ctx).clause(ctx));
             if (w.roofLive() > 0)
-                rec.step("P_Lr" + at, lv + "roof live load", "Σ Lr A_i", "see the column record " + w.member(), w.roofLive(), Quantity.FORCE,
+                rec.step("P_Lr" + at, lv + "roof live load", "Σ Lr A_i", see, w.roofLive(), Quantity.FORCE,
                         ed.clause("roof.reduction"));
             if (w.snow() > 0)
                 rec.step("P_S" + at, lv + "snow load, not reduced" + (k > 0 && w.snow() > rows.get(k - 1).snow() ? " (this roof adds "
                         + rec.show(w.snow() - rows.get(k - 1).snow(), Quantity.FORCE) + ")" : ""), "Σ S",
-                        "see the column record " + w.member(), w.snow(), Quantity.FORCE, ed.clause("snow.sloped"));
+                        see, w.snow(), Quantity.FORCE, ed.clause("snow.sloped"));
             rec.step("P_u" + at, lv + "factored axial load", r.step("P_u").formula(), r.step("P_u").substituted(), w.lrfd(), Quantity.FORCE,
                     ed.clause("combo.lrfd"));
             rec.step("P_a" + at, lv + "service axial load", r.step("P_a").formula(), r.step("P_a").substituted(), w.asd(), Quantity.FORCE,
@@ -77,7 +82,7 @@ final class TakeDownRecord {
     }
 
     /** A_T supported (cumulative) with what this level adds, and the reducible part where it differs. */
-    private static void areas(RecordBuilder rec, CalcContext ctx, TakeDown.Row w, double above, boolean top, String lv, String at) {
+    private static void areas(RecordBuilder rec, CalcContext ctx, TakeDown.Row w, double above, boolean top, String lv, String at, String see) {
         var ed = ctx.edition();
         double floorHere = w.cumulativeArea() - above, roofHere = w.areaAtLevel() - floorHere;
         String roof = roofHere > Tolerances.SAME_AREA * Math.max(1, w.areaAtLevel()) ? "; roof area at this level " + rec.show(roofHere, Quantity.AREA) + ", carried as Lr" : "";
@@ -87,7 +92,12 @@ final class TakeDownRecord {
                 w.cumulativeArea(), Quantity.AREA, ed.clause("reduction.multifloor"));
         if (reducedInPart(w))
             rec.step("A_T,r" + at, lv + "reducible A_T, cumulative (the floor area whose live load may be reduced)", "A_T,r ≤ ΣA_T",
-                    "see the column record " + w.member(), w.reducibleArea(), Quantity.AREA, ed.clause("reduction.basic"));
+                    see, w.reducibleArea(), Quantity.AREA, ed.clause("reduction.basic"));
+    }
+
+    /** Where the reader finds the working of a level's value: that level's column, by grid point and level. */
+    static String see(String point, TakeDown.Row w) {
+        return "see the record of column " + point + " below " + w.level();
     }
 
     /** Some of the A_T supported is not reducible (mixed occupancy), so f comes from the reducible part. */

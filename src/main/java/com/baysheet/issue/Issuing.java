@@ -1,6 +1,7 @@
 package com.baysheet.issue;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.framing.model.Submittal;
 import com.baysheet.review.Caller;
 import com.baysheet.review.MarkSheets;
 import com.baysheet.review.PackageScope;
@@ -37,7 +38,7 @@ public final class Issuing {
      * Renders the approved revision's issued copy and issues it, at the version the page showed, with the
      * revision's description as the revision block prints it.
      */
-    public void issue(SheetSubject s, long version, Caller caller, String description) {
+    public void issue(SheetSubject s, long version, Caller caller, String description, Submittal site) {
         Reviews.SheetView v = reviews().view(s.ref());
         StoredRevision cur = v.current();
         // checked before rendering the PDF; the review rules check everything again when issuing
@@ -48,7 +49,7 @@ public final class Issuing {
         LocalDate today = today();
         String head = review.audit().head().printed(); // the trail as it stands at the issue, printed on the copy
         byte[] pdf = s instanceof SheetSubject.OfMark m ? SheetPdfs.issued(review.firm().get(), m, cur, v.history(), today, said, head).bytes()
-                : PackagePdfs.issued(review.firm().get(), (SheetSubject.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today, said, head);
+                : PackagePdfs.issued(review.firm().get(), site, (SheetSubject.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today, said, head);
         reviews().issue(s.ref(), version, caller, today, s.current(), pdf, said);
     }
 
@@ -62,12 +63,12 @@ public final class Issuing {
      * Starts a package's checking copy: the package's own revision under way, and each member's own state, as
      * they are now; refused when the scope has no members or the queue is full.
      */
-    public PackageJobs.Job startPackage(Results.Computed c, MarkSheets marks, PackageScope scope) {
+    public PackageJobs.Job startPackage(Results.Computed c, MarkSheets marks, Submittal site, PackageScope scope) {
         if (scope.members(c.derived()).isEmpty())
             throw new InputError("level", scope.isProject() ? "project" : scope.level(), "has no members in this model");
         SheetSubject.OfPackage s = SheetSubject.pkg(c, marks, scope);
         long project = c.project().id();
-        return jobs.start(project, PackagePdfs.checking(review.firm().get(), s, reviews().view(s.ref()),
+        return jobs.start(project, PackagePdfs.checking(review.firm().get(), site, s, reviews().view(s.ref()),
                 reviews().latestOf(project), today()));
     }
 

@@ -9,6 +9,7 @@ import com.baysheet.sheet.PackageRenderer;
 import com.baysheet.sheet.Revision;
 import com.baysheet.sheet.SheetHeader;
 import com.baysheet.project.Firm;
+import com.baysheet.framing.model.Submittal;
 import com.baysheet.store.review.Reviews;
 import com.baysheet.store.review.StoredRevision;
 
@@ -33,24 +34,24 @@ final class PackagePdfs {
     private PackagePdfs() {}
 
     /** @param latest the latest revision of every sheet of the project, for each member's own title block */
-    static byte[] issued(Firm firm, SheetSubject.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today,
-                         String description, String auditHead) {
+    static byte[] issued(Firm firm, Submittal site, SheetSubject.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest,
+                         LocalDate today, String description, String auditHead) {
         SheetRevision r = v.current().revision();
         var info = s.computed().project().info();
         SheetHeader h = TitleBlocks.issuing(firm, info, s.name(), v.current(), today).withAuditHead(auditHead);
         List<Revision> log = new ArrayList<>();
         CalcRecord before = earlier(v.history(), r.number(), log);
         log.add(line(v.current(), r, today, before, s.current(), description));
-        return PackageRenderer.render(of(s, h, log, firm, latest, today)).bytes();
+        return PackageRenderer.render(of(s, h, log, firm, latest, today).withSubmittal(site)).bytes();
     }
 
     /** The checking copy of a package: the package's revision under way, not issued; its earlier issues logged. */
-    static CalcPackage checking(Firm firm, SheetSubject.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
+    static CalcPackage checking(Firm firm, Submittal site, SheetSubject.OfPackage s, Reviews.SheetView v, List<StoredRevision> latest, LocalDate today) {
         var info = s.computed().project().info();
         SheetHeader h = TitleBlocks.underCheck(firm, info, s.name(), v.current(), s.current(), today);
         List<Revision> log = new ArrayList<>();
         earlier(v.history(), Integer.MAX_VALUE, log);
-        return of(s, h, log, firm, latest, today);
+        return of(s, h, log, firm, latest, today).withSubmittal(site);
     }
 
     /** The package of one sheet per mark in its scope, each under the mark sheet's own title block. */

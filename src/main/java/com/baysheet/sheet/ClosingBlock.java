@@ -20,13 +20,15 @@ final class ClosingBlock {
     private final Fonts fonts;
     private final boolean checking;
     private final String auditHead;
+    private final Wording wording;
 
-    ClosingBlock(Fonts fonts, boolean checking) {
-        this(fonts, checking, "");
+    ClosingBlock(Fonts fonts, boolean checking, Wording wording) {
+        this(fonts, checking, wording, "");
     }
 
     /** @param auditHead the audit trail's chain head at the issue, printed under the disclaimer; blank for none */
-    ClosingBlock(Fonts fonts, boolean checking, String auditHead) {
+    ClosingBlock(Fonts fonts, boolean checking, Wording wording, String auditHead) {
+        this.wording = wording;
         this.fonts = fonts;
         this.checking = checking;
         this.auditHead = auditHead == null ? "" : auditHead;
@@ -40,7 +42,7 @@ final class ClosingBlock {
         Phrase words = new Phrase(DISCLAIMER, fonts.body());
         if (!checking && !auditHead.isEmpty())
             words.add(new Chunk("\n\nAudit trail at issue: " + auditHead, fonts.smallGrey()));
-        if (checking) words.add(new Chunk("\n\nCHECKING COPY — NOT FOR SUBMITTAL. Markups may be open; do not seal.", fonts.mark()));
+        if (checking) words.add(new Chunk("\n\n" + wording.closing, fonts.mark()));
         PdfPCell left = new PdfPCell();
         if (lead != null) left.addElement(lead);
         com.lowagie.text.Paragraph p = new com.lowagie.text.Paragraph(words);

@@ -1,12 +1,12 @@
 package com.baysheet.sheet;
 
+import com.baysheet.framing.model.Submittal;
 import com.lowagie.text.Paragraph;
 import com.lowagie.text.pdf.PdfPCell;
 import com.lowagie.text.pdf.PdfPTable;
 
-import java.util.List;
 
-/** The package cover: project and issue data, the design criteria, the loads used, what the package holds, the seal. */
+/** The package cover: project, submittal and issue data, what the package holds, the seal; the design criteria follow on their own page. */
 final class Cover {
     private final PdfaDocument pdf;
     private final CalcPackage pkg;
@@ -33,41 +33,23 @@ final class Cover {
         Cells.title(project, "Project", fonts);
         pair(project, "Project", h.project());
         pair(project, "Job number", h.jobNumber());
+        Submittal site = pkg.submittal();
+        if (!site.address().isEmpty()) pair(project, "Site address", site.address());
+        if (!site.client().isEmpty()) pair(project, "Client", site.client());
+        pair(project, "Engineer of record", site.engineerLine().isEmpty() ? "not given" : site.engineerLine());
+        if (!site.adoptedCode().isEmpty()) pair(project, "Building code", site.adoptedCode());
         pair(project, "Prepared by", h.firm());
         pair(project, "Prepared by (engineer)", h.isSubmitted() ? h.preparedBy() + ", " + h.preparedOn() : h.preparedBy());
         pair(project, "Checked by", h.isChecked() ? h.checkedBy() + ", " + h.checkedOn() : "not yet checked");
         pair(project, "Revision and issue date", standing(h));
         pdf.add(project);
 
-        DesignCriteria c = pkg.criteria();
-        PdfPTable criteria = Cells.table(25, 75);
-        Cells.title(criteria, "Design criteria", fonts);
-        pair(criteria, "Code edition", c.edition() + " (the adopted local code and its amendments govern)");
-        pair(criteria, "Units", c.units());
-        for (String o : c.options()) {
-            int colon = o.indexOf(':');
-            pair(criteria, colon > 0 ? o.substring(0, colon) : "Option", colon > 0 ? o.substring(colon + 1).strip() : o);
-        }
-        pdf.add(criteria);
-
-        PdfPTable loads = Cells.table(26, 12, 14, 18, 30);
-        Cells.title(loads, "Occupancies and loads used", fonts);
-        for (String s : List.of("Occupancy", "Live load L0", "Concentrated", "Dead loads used", "Live load reduction"))
-            loads.addCell(Cells.head(s, fonts));
-        for (DesignCriteria.LoadRow r : c.loads()) {
-            loads.addCell(Cells.text(r.occupancy(), fonts.body()));
-            loads.addCell(Cells.right(r.liveLoad(), fonts.body()));
-            loads.addCell(Cells.right(r.concentrated(), fonts.body()));
-            loads.addCell(Cells.text(r.deadLoad(), fonts.body()));
-            loads.addCell(Cells.text(r.reduction(), fonts.body()));
-        }
-        pdf.add(loads);
-
         long levels = pkg.sheets().stream().map(MemberSheet::level).distinct().count();
         pdf.add(Cells.line("This package holds " + pkg.sheets().size() + " member sheets on " + levels
-                + (levels == 1 ? " level" : " levels") + " and " + pkg.takeDowns().size() + " column take-downs, listed in the index that follows.",
+                + (levels == 1 ? " level" : " levels") + ", " + pkg.plans().size() + " framing plans and " + pkg.takeDowns().size()
+                + " column take-downs; the design criteria follow, then the index.",
                 fonts.body()));
-        pdf.add(new ClosingBlock(fonts, false, pkg.header().auditHead()).table(null));
+        pdf.add(new ClosingBlock(fonts, false, pdf.frame.wording(), pkg.header().auditHead()).table(null));
     }
 
     /**

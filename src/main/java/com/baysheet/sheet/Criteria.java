@@ -54,7 +54,8 @@ final class Criteria {
                     + ", in place of the basic reduction listed below; loads and combinations stay " + ctx.edition().id());
         options.add(SnowCriteria.line(ctx));
         return new DesignCriteria(ctx.edition().id(), ctx.system() == com.baysheet.engine.units.UnitSystem.US
-                ? "US customary (ft, psf, plf, kip, kip·ft)" : "SI (m, kPa, kN/m, kN, kN·m)", rows, options);
+                ? "US customary (ft, psf, plf, kip, kip·ft)" : "SI (m, kPa, kN/m, kN, kN·m)", rows, options,
+                CriteriaLines.combinations(ctx), CriteriaLines.selfWeights(b.selfWeights(), ctx.system()));
     }
 
     private static String reduction(CalcContext ctx, Occupancy o) {

@@ -1,11 +1,14 @@
 package com.baysheet.sheet;
 
+import com.baysheet.framing.model.Submittal;
 import com.baysheet.engine.InputError;
 import com.baysheet.framing.Derived;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.MemberRole;
 import com.baysheet.framing.PlanRect;
 import com.baysheet.framing.TypicalGroup;
+import com.baysheet.framing.schedule.ColumnSchedules;
+import com.baysheet.framing.schedule.MemberSchedule;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.Level;
@@ -46,7 +49,10 @@ public final class FramingSheets {
         for (var t : d.takeDowns())
             if (t.rows().stream().anyMatch(r -> r.level().equals(level))) downs.add(TakeDownTables.of(d, t));
         return new CalcPackage(base.withSubject(level + " package"), level + " package", Criteria.of(d.building()),
-                sheets(members, d, on), downs, revisions, MethodTables.of(d, List.of(level)));
+                sheets(members, d, on), downs, revisions, MethodTables.of(d, List.of(level)),
+                FramingPlans.of(d, List.of(level)),
+                List.of(ColumnSchedules.loads(d, ColumnSchedules.at(level)), ColumnSchedules.foundations(d, ColumnSchedules.at(level)),
+                        MemberSchedule.onLevel(d, level)), Submittal.NONE);
     }
 
     /** The whole project, every member sheet under the package's own title block. */
@@ -63,7 +69,9 @@ public final class FramingSheets {
                                       Function<DerivedMember, SheetHeader> members) {
         return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
                 sheets(members, d, d.members()), d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions,
-                MethodTables.of(d, d.members().stream().map(DerivedMember::level).distinct().toList()));
+                MethodTables.of(d, d.members().stream().map(DerivedMember::level).distinct().toList()),
+                FramingPlans.of(d, d.members().stream().map(DerivedMember::level).distinct().toList()),
+                List.of(ColumnSchedules.loads(d), ColumnSchedules.foundations(d), MemberSchedule.of(d)), Submittal.NONE);
     }
 
     /**
@@ -82,13 +90,19 @@ public final class FramingSheets {
         List<TakeDownTable> downs = new ArrayList<>();
         for (var t : d.takeDowns())
             if (t.rows().stream().anyMatch(r -> r.level().equals(level))) downs.add(TakeDownTables.of(d, t));
-        return new CalcPackage(base.withSubject(level + " package"), level + " package", Criteria.of(d.building()), sheets, downs, revisions);
+        return new CalcPackage(base.withSubject(level + " package"), level + " package", Criteria.of(d.building()), sheets, downs, revisions,
+                MethodTables.of(d, List.of(level)), FramingPlans.of(d, List.of(level)),
+                List.of(ColumnSchedules.loads(d, ColumnSchedules.at(level)), ColumnSchedules.foundations(d, ColumnSchedules.at(level)),
+                        MemberSchedule.onLevel(d, level)), Submittal.NONE);
     }
 
     /** The whole project made of the sheets given (its typical members'), with every column take-down. */
     public static CalcPackage projectOf(SheetHeader base, Derived d, List<Revision> revisions, List<MemberSheet> sheets) {
         return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
-                sheets, d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions);
+                sheets, d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions,
+                MethodTables.of(d, d.members().stream().map(DerivedMember::level).distinct().toList()),
+                FramingPlans.of(d, d.members().stream().map(DerivedMember::level).distinct().toList()),
+                List.of(ColumnSchedules.loads(d), ColumnSchedules.foundations(d), MemberSchedule.of(d)), Submittal.NONE);
     }
 
     private static List<MemberSheet> sheets(Function<DerivedMember, SheetHeader> headers, Derived d, List<DerivedMember> members) {

@@ -26,6 +26,8 @@ final class Index {
     static final Object TAKE_DOWNS = new Object();
     static final Object REVISIONS = new Object();
     static final Object METHODS = new Object();
+    static final Object SCHEDULES = new Object();
+    static final Object CRITERIA = new Object();
 
     private final PdfaDocument pdf;
     private final CalcPackage pkg;
@@ -38,6 +40,9 @@ final class Index {
         starts.put(TAKE_DOWNS, template());
         starts.put(REVISIONS, template());
         starts.put(METHODS, template());
+        starts.put(SCHEDULES, template());
+        starts.put(CRITERIA, template());
+        for (FramingPlan p : pkg.plans()) starts.put(p, template());
     }
 
     private PdfTemplate template() { return pdf.writer.getDirectContent().createTemplate(28, 9); }
@@ -50,6 +55,8 @@ final class Index {
         t.addCell(Cells.head("Subject", fonts));
         t.addCell(Cells.head("Governing results", fonts));
         t.setHeaderRows(2);
+        row(t, starts.get(CRITERIA), "Design criteria", "codes, loads, combinations, self weights");
+        for (FramingPlan p : pkg.plans()) row(t, starts.get(p), "Framing plan, " + p.level(), p.members().size() + " members");
         String group = null;
         for (MemberSheet s : pkg.sheets()) {
             String g = s.level().isEmpty() && s.group().isEmpty() ? "Members" : (s.level() + " · " + s.group());
@@ -66,6 +73,8 @@ final class Index {
             row(t, starts.get(TAKE_DOWNS), "Column take-downs", pkg.takeDowns().size() + " column stacks");
         if (!pkg.methodTables().isEmpty())
             row(t, starts.get(METHODS), "Floor live load reduction methods compared", pkg.methodTables().size() + " levels");
+        if (!pkg.schedules().isEmpty())
+            row(t, starts.get(SCHEDULES), "Load summaries", String.join("; ", pkg.schedules().stream().map(x -> x.title()).toList()));
         row(t, starts.get(REVISIONS), "Revision log", "");
         pdf.add(t);
     }

@@ -48,7 +48,7 @@ final class MemberSheetWriter {
         if (!matrix.others.isEmpty()) pdf.add(new EntryTable(fonts, markups).of("Other results", matrix.others));
         new NotesBlock(pdf, r, markups).write();
         if (!sheet.revisions().isEmpty()) pdf.add(revisionBlock());
-        pdf.add(new ClosingBlock(fonts, markups.checking(), sheet.header().auditHead()).table(governing()));
+        pdf.add(new ClosingBlock(fonts, markups.checking(), pdf.frame.wording(), sheet.header().auditHead()).table(governing()));
     }
 
     /** The sheet's revision block, as drawings carry one: each issued revision with its date, description and initials. */

@@ -46,12 +46,19 @@ public final class PackageRenderer {
     private static StreamedPdf write(CalcPackage pkg, OutputStream out, Progress progress, Markups markups) {
         byte[] id = markups.checking() ? Hashes.of("checking-package", java.util.Arrays.toString(digest(pkg))) : digest(pkg);
         PdfaDocument pdf = PdfaDocument.open(out, pkg.header(), pkg.title() + ", " + pkg.header().project(), id, markups.checking());
+        pdf.frame.site(pkg.submittal());
+        pdf.frame.wording(Wording.of(pkg));
         Index index = new Index(pdf, pkg);
         pdf.frame.show(pkg.header(), pkg.title() + " · cover");
         new Cover(pdf, pkg, markups.checking()).write();
         pdf.newPage();
+        pdf.frame.show(pkg.header().withSubject("Design criteria"), pkg.title() + " · design criteria");
+        index.startsHere(Index.CRITERIA);
+        new CriteriaPage(pdf, pkg).write();
+        pdf.newPage();
         pdf.frame.show(pkg.header().withSubject("Index of sheets"), pkg.title() + " · index");
         index.write();
+        PackageSections.plans(pdf, pkg, index);
         int done = 0;
         for (MemberSheet s : pkg.sheets()) {
             pdf.newPage();
@@ -72,6 +79,7 @@ public final class PackageRenderer {
             index.startsHere(Index.METHODS);
             new TakeDownPages(pdf, pkg.methodTables()).write();
         }
+        PackageSections.schedules(pdf, pkg, index);
         pdf.newPage();
         pdf.frame.show(pkg.header().withSubject("Revision log"), pkg.title() + " · revision log");
         index.startsHere(Index.REVISIONS);
@@ -89,10 +97,13 @@ public final class PackageRenderer {
     /** A digest of everything printed, fed part by part so that a large package is never one string. */
     private static byte[] digest(CalcPackage pkg) {
         MessageDigest d = Hashes.sha256();
-        d.update(("package|" + pkg.header() + "|" + pkg.title() + "|" + pkg.criteria() + "|" + pkg.revisions()).getBytes(StandardCharsets.UTF_8));
+        d.update(("package|" + pkg.header() + "|" + pkg.title() + "|" + pkg.criteria() + "|" + pkg.revisions() + "|" + pkg.submittal())
+                .getBytes(StandardCharsets.UTF_8));
         for (MemberSheet s : pkg.sheets()) d.update(s.toString().getBytes(StandardCharsets.UTF_8));
         for (TakeDownTable t : pkg.takeDowns()) d.update(t.toString().getBytes(StandardCharsets.UTF_8));
         for (TakeDownTable t : pkg.methodTables()) d.update(t.toString().getBytes(StandardCharsets.UTF_8));
+        for (FramingPlan p : pkg.plans()) d.update(p.toString().getBytes(StandardCharsets.UTF_8));
+        for (var s : pkg.schedules()) d.update(s.toString().getBytes(StandardCharsets.UTF_8));
         return d.digest();
     }
 }

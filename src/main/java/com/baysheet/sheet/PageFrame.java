@@ -1,5 +1,6 @@
 package com.baysheet.sheet;
 
+import com.baysheet.framing.model.Submittal;
 import com.lowagie.text.Document;
 import com.lowagie.text.Element;
 import com.lowagie.text.Rectangle;
@@ -20,7 +21,6 @@ final class PageFrame extends PdfPageEventHelper {
     static final float MARGIN = 36f;
     static final float BLOCK_HEIGHT = 64f;
     static final float FOOTER = 22f;
-    static final String CHECKING = "CHECKING COPY — NOT FOR SUBMITTAL";
 
     private final Fonts fonts;
     private final boolean checking;
@@ -31,6 +31,8 @@ final class PageFrame extends PdfPageEventHelper {
     private PdfTemplate totalInBlock;
     private PdfTemplate totalInFooter;
     private int pages;
+    private Submittal site = Submittal.NONE;
+    private Wording wording = Wording.SI;
 
     PageFrame(Fonts fonts, SheetHeader header, boolean checking) {
         this.fonts = fonts;
@@ -47,6 +49,14 @@ final class PageFrame extends PdfPageEventHelper {
 
     int pages() { return pages; }
 
+    /** The words a copy that is not issued marks itself with. */
+    void wording(Wording w) { this.wording = w; }
+
+    Wording wording() { return wording; }
+
+    /** The site address and engineer of record every title block of the document carries. */
+    void site(Submittal s) { this.site = s == null ? Submittal.NONE : s; }
+
     @Override
     public void onOpenDocument(PdfWriter writer, Document document) {
         totalInBlock = writer.getDirectContent().createTemplate(40, 12);
@@ -56,10 +66,10 @@ final class PageFrame extends PdfPageEventHelper {
     @Override
     public void onEndPage(PdfWriter writer, Document document) {
         pages++;
-        Rectangle page = document.getPageSize();
+        Rectangle page = writer.getPageSize();   // the page ending, which a plan sheet may have turned to landscape
         PdfContentByte cb = writer.getDirectContent();
         if (checking) watermark(writer.getDirectContentUnder(), page);
-        new TitleBlock(fonts, cb, header, context, status())
+        new TitleBlock(fonts, cb, header, context, status(), site, wording.mark)
                 .draw(MARGIN, page.getHeight() - MARGIN - BLOCK_HEIGHT, page.getWidth() - 2 * MARGIN, BLOCK_HEIGHT, pages, totalInBlock);
         footer(cb, page);
     }
@@ -111,7 +121,7 @@ final class PageFrame extends PdfPageEventHelper {
         under.beginText();
         under.setFontAndSize(fonts.bold, 30f);
         under.setColorFill(new Color(0xf6, 0xd5, 0xd5));
-        under.showTextAligned(Element.ALIGN_CENTER, CHECKING, page.getWidth() / 2, page.getHeight() / 2, 55f);
+        under.showTextAligned(Element.ALIGN_CENTER, wording.mark, page.getWidth() / 2, page.getHeight() / 2, 55f);
         under.endText();
         under.restoreState();
     }

@@ -48,6 +48,7 @@ public final class SheetRenderer {
     private static StreamedPdf write(MemberSheet sheet, Markups markups, OutputStream out) {
         PdfaDocument pdf = PdfaDocument.open(out, sheet.header(), sheet.record().subject(),
                 Hashes.of("member-sheet", sheet, markups.checking(), markups.list()), markups.checking());
+        pdf.frame.wording(Wording.of(sheet.record().units()));
         pdf.frame.show(sheet.header(), context(sheet));
         new MemberSheetWriter(pdf, sheet, markups).write();
         return pdf.finish();

@@ -6,7 +6,7 @@ import com.baysheet.engine.units.Display;
 import com.baysheet.engine.units.Quantity;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.Derived;
-import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.MemberLabel;
 import com.baysheet.framing.TakeDown;
 
 import java.util.ArrayList;
@@ -29,7 +29,8 @@ final class TakeDownTables {
         // under a chosen floor method K_LL and the influence area give no factor: left blank
         boolean basic = d.building().context().floorMethod() == null;
         for (TakeDown.Row r : t.rows()) {
-            String column = d.member(r.member()).map(DerivedMember::name).orElse(r.member());
+            // the column by its label, or by its grid point where the member is gone: never its internal id
+            String column = d.member(r.member()).map(MemberLabel::of).orElse("Column " + t.gridPoint());
             rows.add(List.of(r.level(), column, n(r.areaAtLevel(), Quantity.AREA, sys), n(r.cumulativeArea(), Quantity.AREA, sys),
                     n(r.reducibleArea(), Quantity.AREA, sys), basic ? Display.sig3(r.kll()) : "—", basic ? n(r.influenceArea(), Quantity.AREA, sys) : "—", Integer.toString(r.floorsSupported()),
                     Display.sig3(r.factor()), n(r.deadAtLevel(), Quantity.FORCE, sys),

@@ -1,5 +1,6 @@
 package com.baysheet.sheet;
 
+import com.baysheet.framing.model.Submittal;
 import com.lowagie.text.Element;
 import com.lowagie.text.pdf.PdfContentByte;
 import com.lowagie.text.pdf.PdfTemplate;
@@ -21,9 +22,16 @@ final class TitleBlock {
     private final SheetHeader h;
     private final String context;
     private final String status;
+    private final Submittal site;
+    private final String mark;
 
-    /** @param status what the band says of the copy ("ISSUED · Rev 2 · date"), or null on a checking copy */
-    TitleBlock(Fonts fonts, PdfContentByte cb, SheetHeader h, String context, String status) {
+    /**
+     * @param status what the band says of the copy ("ISSUED · Rev 2 · date"), or null on a checking copy
+     * @param site   the site address (beside the project's name) and the engineer of record (under the firm's)
+     */
+    TitleBlock(Fonts fonts, PdfContentByte cb, SheetHeader h, String context, String status, Submittal site, String mark) {
+        this.site = site;
+        this.mark = mark;
         this.fonts = fonts;
         this.cb = cb;
         this.h = h;
@@ -49,8 +57,12 @@ final class TitleBlock {
         vertical(p, top - row, top - 2 * row);
         cb.restoreState();
 
-        firm(x + 4, top - 16, a - x - 8);
-        cell("Project", h.project(), a, top, b - a);
+        firm(x + 4, site.engineerLine().isEmpty() ? top - 16 : top - 13, a - x - 8);
+        cell(site.address().isEmpty() ? "Project" : Text.fit("Project · " + site.address(), fonts.regular, LABEL, b - a - 8),
+                h.project(), a, top, b - a);
+        if (!site.engineerLine().isEmpty())
+            Text.show(cb, fonts.regular, 5.5f, Fonts.GREY, Element.ALIGN_LEFT,
+                    Text.fit("Engineer of record: " + site.engineerLine(), fonts.regular, 5.5f, a - x - 8), x + 4, top - 22.3f);
         cell("Job no.", h.jobNumber(), b, top, c - b);
         Text.show(cb, fonts.regular, LABEL, Fonts.GREY, Element.ALIGN_LEFT, "Sheet", c + 4, top - 8);
         String n = page + " of ";
@@ -89,7 +101,7 @@ final class TitleBlock {
             cb.rectangle(x + w - bw, y, bw, height);
             cb.fill();
             cb.restoreState();
-            Text.show(cb, fonts.bold, 7.5f, Color.WHITE, Element.ALIGN_CENTER, PageFrame.CHECKING, x + w - bw / 2, y + 5);
+            Text.show(cb, fonts.bold, 7.5f, Color.WHITE, Element.ALIGN_CENTER, mark, x + w - bw / 2, y + 5);
         } else {
             Text.show(cb, fonts.bold, 7f, Fonts.INK, Element.ALIGN_RIGHT, status, x + w - 4, y + 5);
         }

@@ -31,7 +31,13 @@ public final class Demo {
     }
 
     static Project loadProject(Store store, JsonNode p) {
-        long id = store.projects().create(Editor.DEMO, ModelJson.project(p.path("project"))).id();
+        Project made = store.projects().create(Editor.DEMO, ModelJson.project(p.path("project")));
+        long id = made.id();
+        JsonNode sub = p.path("submittal");
+        if (!sub.isMissingNode())
+            store.projects().submittals().save(Editor.DEMO, id, version(store, id), new com.baysheet.framing.model.Submittal(made.info().address(),
+                    made.info().client(), sub.path("engineerOfRecord").asText(""), sub.path("licenceNumber").asText(""),
+                    sub.path("licenceState").asText(""), sub.path("buildingCode").asText(""), sub.path("codeYear").asText("")));
         store.grids().save(Editor.DEMO, id, version(store, id), ModelJson.grid(p.path("grid")));
         for (JsonNode l : p.path("levels")) {
             long levelId = store.levels().add(Editor.DEMO, id, version(store, id), ModelJson.level(l)).id();

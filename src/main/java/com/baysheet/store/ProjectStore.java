@@ -32,6 +32,9 @@ public final class ProjectStore {
         this.writes = writes;
     }
 
+    /** The projects' submittal data: engineer of record, licence, building code as adopted. */
+    public SubmittalStore submittals() { return new SubmittalStore(writes); }
+
     public List<Project> findAll() {
         return sql.tx(c -> {
             try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM project ORDER BY job_number")) {

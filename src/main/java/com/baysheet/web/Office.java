@@ -139,6 +139,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new MemberRoutes(store).install(r);
         new TakeDownRoutes(store).install(r);
         new MethodRoutes(store).install(r);
+        new ScheduleRoutes(store).install(r);
+        new SubmittalRoutes(store).install(r);
         new OccupancyRoutes(store).install(r);
         new ApiRoutes(store).install(r);
         new ApiResultRoutes(store).install(r);

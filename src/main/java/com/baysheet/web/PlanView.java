@@ -163,7 +163,7 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
         Shape member(DerivedMember m, DerivedMember selected, String href) {
             PlanLine p = m.plan();
             String cls = m.role().name().toLowerCase().replace('_', '-') + (selected != null && m.id().equals(selected.id()) ? " selected" : "");
-            String title = m.name() + " (" + m.kind().title() + ")";
+            String title = com.baysheet.framing.MemberLabel.of(m) + " (" + m.kind().title() + ")";
             if (m.role() == MemberRole.COLUMN)
                 return new Shape(round(sx(p.x1()) - 5), round(sy(p.y1()) - 5), 10, 10, 0, 0, cls, "none", href, title);
             return line(p.x1(), p.y1(), p.x2(), p.y2(), cls, href, title);

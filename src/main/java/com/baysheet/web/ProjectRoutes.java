@@ -57,12 +57,16 @@ final class ProjectRoutes {
 
     void settingsForm(Context ctx) {
         Project p = store.projects().find(Ids.project(ctx));
-        renderSettings(ctx, store, p, Form.filled(values(p)), null);
+        renderSettings(ctx, store, p, Form.filled(values(p)), null, null);
     }
 
-    /** The settings page with the project form and the self weight form; null for either: filled from the store. */
-    static void renderSettings(Context ctx, Store store, Project p, Form form, Form weights) {
+    /**
+     * The settings page with the project form, the self weight form and the submittal form
+     * ({@link SubmittalRoutes}); null for any of them: filled from the store.
+     */
+    static void renderSettings(Context ctx, Store store, Project p, Form form, Form weights, Form submittal) {
         Map<String, Object> m = new HashMap<>(model(form != null ? form : Form.filled(values(p))));
+        m.put("submittal", submittal != null ? submittal : SubmittalRoutes.filled(store, p));
         m.put("project", p);
         m.put("weightsForm", weights != null ? weights : Form.filled(SelfWeightRoutes.values(store, p)));
         m.put("firmWeights", store.selfWeights().firmDefaults(p.id()));
@@ -77,7 +81,7 @@ final class ProjectRoutes {
         long version = form.version();
         form.attempt(() -> store.projects().update(Editors.of(ctx), p.id(), version, info(form)))
                 .ifPresentOrElse(saved -> Pages.seeOther(ctx, Saved.PROJECT.after("/projects/" + p.id())),
-                        () -> renderSettings(ctx.status(form.stale() ? 409 : 422), store, p, form, null));
+                        () -> renderSettings(ctx.status(form.stale() ? 409 : 422), store, p, form, null, null));
     }
 
     private void renderForm(Context ctx, String template, Project p, Form form) {
@@ -115,7 +119,7 @@ final class ProjectRoutes {
         return SnowInput.of(pg, f.text("snowTerrain"), f.text("snowExposure"), ce, f.text("thermalCondition"), ct, f.text("riskCategory"));
     }
 
-    private static Map<String, String> values(Project p) {
+    static Map<String, String> values(Project p) {
         ProjectInfo i = p.info();
         Map<String, String> v = new HashMap<>(Map.of("version", String.valueOf(p.version()), "jobNumber", i.jobNumber(),
                 "name", i.name(), "address", i.address(), "client", i.client(), "edition", i.edition(),

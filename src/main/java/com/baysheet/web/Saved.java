@@ -10,6 +10,7 @@ import io.javalin.http.Context;
 public enum Saved {
     FIRM("firm", "Saved: firm settings."),
     PROJECT("project", "Saved: project settings."),
+    SUBMITTAL("submittal", "Saved: submittal data."),
     PASSWORD("password", "Saved: your new password. Your other logins were ended."),
     USER("user", "Saved: user account.");
 

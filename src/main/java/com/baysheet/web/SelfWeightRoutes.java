@@ -37,7 +37,7 @@ final class SelfWeightRoutes {
         ProjectSelfWeights w = read(form);
         form.attempt(() -> { store.selfWeights().set(Editors.of(ctx), p.id(), version, w); return p.id(); })
                 .ifPresentOrElse(done -> Pages.seeOther(ctx, "/projects/" + p.id() + "/settings"),
-                        () -> ProjectRoutes.renderSettings(ctx.status(form.stale() ? 409 : 422), store, p, null, form));
+                        () -> ProjectRoutes.renderSettings(ctx.status(form.stale() ? 409 : 422), store, p, null, form, null));
     }
 
     /** The four values, or null for the firm's defaults (all blank); some blank and some given is refused. */

@@ -21,7 +21,7 @@ class CheckingCopyTest {
     void checkingCopyIsMarkedOnEveryPageAndListsItsMarkups() {
         RenderedPdf pdf = SheetRenderer.checking(MemberSheet.of(SheetFixtures.unchecked("Girder G1"), girder), markups);
         for (int p = 1; p <= pdf.pages(); p++)
-            assertThat(SheetFixtures.page(pdf.bytes(), p)).contains(PageFrame.CHECKING);
+            assertThat(SheetFixtures.page(pdf.bytes(), p)).contains(Wording.US.mark);
         String text = SheetFixtures.squash(SheetFixtures.text(pdf.bytes()));
         assertThat(text).contains("Checker'smarkups").contains("M1").contains("M2").contains("OPEN").contains("resolved")
                 .contains(SheetFixtures.squash("Confirm K_LL: is this girder on an edge?"))
@@ -48,7 +48,7 @@ class CheckingCopyTest {
     @Test
     void issuedCopyCarriesNoCheckingMark() {
         RenderedPdf pdf = SheetRenderer.issued(MemberSheet.of(SheetFixtures.header("Girder G1"), girder));
-        assertThat(SheetFixtures.text(pdf.bytes())).doesNotContain(PageFrame.CHECKING).doesNotContain("Checker's markups");
+        assertThat(SheetFixtures.text(pdf.bytes())).doesNotContain(Wording.US.mark).doesNotContain("Checker's markups");
     }
 
     @Test

@@ -58,7 +58,7 @@ public final class PackageRoutes {
         Results.Computed c = store.results().of(SheetContext.project(ctx));
         String scope = ctx.formParam("scope");
         if (scope == null || scope.isBlank()) throw new InputError("scope", "\"\"", "choose the project or one level");
-        PackageJobs.Job job = issuing.startPackage(c, SheetContext.marks(store, c),
+        PackageJobs.Job job = issuing.startPackage(c, SheetContext.marks(store, c), store.projects().submittals().find(c.project().id()),
                 scope.equals("project") ? PackageScope.PROJECT : PackageScope.ofLevel(scope));
         ctx.redirect("/projects/" + job.project() + "/packages/" + job.id(), HttpStatus.SEE_OTHER);
     }

@@ -116,7 +116,7 @@ public final class ReviewRoutes {
     /** Renders the issued copy and issues it: the issuing service checks the version and state first. */
     void issue(Context ctx) {
         SheetSubject s = SheetContext.of(store, ctx);
-        issuing.issue(s, version(ctx), caller(ctx), ctx.formParam("description"));
+        issuing.issue(s, version(ctx), caller(ctx), ctx.formParam("description"), store.projects().submittals().find(s.ref().projectId()));
         ctx.redirect(s.path(), HttpStatus.SEE_OTHER);
     }
 

@@ -32,7 +32,7 @@ class RouteRolesTest {
     private static final Set<HandlerType> METHODS = Set.of(HandlerType.GET, HandlerType.POST, HandlerType.PUT,
             HandlerType.PATCH, HandlerType.DELETE);
     /** The changes that are not a preparer's or the administrator's work: signing in and out, one's own password, a PDF to verify. */
-    private static final Set<String> PERSONAL = Set.of("POST /login", "POST /setup", "POST /logout", "POST /account/password",
+    private static final Set<String> PERSONAL = Set.of("POST /login", "POST /setup", "POST /logout", "POST /account/password", "POST /account/reset",
             "POST /verify");
 
     record Route(String method, String path, Set<RouteRole> roles) {

@@ -98,13 +98,14 @@ class PackageFlowTest {
         assertThat(Tokens.sha256(pdf.body())).isEqualTo(sha);
         assertThat(eng.getBytes(pdfPath).body()).as("the frozen bytes, every time").isEqualTo(pdf.body());
         try (PDDocument doc = Loader.loadPDF(pdf.body())) {
-            PDFTextStripper front = new PDFTextStripper(); // the cover and index, then the revision log: enough to read
-            front.setEndPage(2);
+            // cover, criteria, index and the level's plan sheet (every member labelled), then the revision log: enough to read
+            PDFTextStripper front = new PDFTextStripper();
+            front.setEndPage(5);
             PDFTextStripper back = new PDFTextStripper();
             back.setStartPage(doc.getNumberOfPages());
             String text = front.getText(doc) + back.getText(doc);
             assertThat(text).contains(scope.title(), server.mark().text(), "Index of sheets", "Revision log", "First issue",
-                    chk.user.initials()).doesNotContain("CHECKING COPY");
+                    chk.user.initials()).doesNotContain("CHECK PRINT", "CHECKING COPY");
         }
         String verdict = eng.upload("/verify", "pdf", "package.pdf", pdf.body()).body();
         assertThat(Html.shown(verdict)).contains("Matches an issued revision", sha);

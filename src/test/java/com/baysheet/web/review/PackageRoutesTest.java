@@ -47,7 +47,7 @@ class PackageRoutesTest {
         assertThat(pdf.headers().firstValue("X-Content-SHA256")).hasValue(Tokens.sha256(pdf.body()));
         try (PDDocument doc = Loader.loadPDF(pdf.body())) {
             String text = new PDFTextStripper().getText(doc);
-            assertThat(text).contains("CHECKING COPY", server.member().name(), "Index of sheets");
+            assertThat(text).contains("CHECK PRINT — NOT FOR CONSTRUCTION", server.member().name(), "Index of sheets");
             assertThat(text).contains("of " + doc.getNumberOfPages());
         }
     }

@@ -45,7 +45,7 @@ class PackageTitleBlocksTest {
 
         List<String> copy = pages(eng.getBytes(job(eng, member.level()) + "/file").body());
         String own = pageOf(copy, checked);
-        assertThat(own).contains("CHECKING COPY", "Prepared by\nQUEN", "Checked by\nWALT", "Revision\n0\n", "Issue date\n" + today)
+        assertThat(own).contains("CHECK PRINT — NOT FOR CONSTRUCTION", "Prepared by\nQUEN", "Checked by\nWALT", "Revision\n0\n", "Issue date\n" + today)
                 .doesNotContain("not yet checked", "Revision\ncheck");
         String none = pageOf(copy, untouched);
         assertThat(none).contains("Prepared by\nnot submitted", "Checked by\nnot yet checked", "Revision\nnot issued",
@@ -74,7 +74,7 @@ class PackageTitleBlocksTest {
         Client eng = server.as("ursula", Role.ENGINEER);
         String text = pages(eng.getBytes(server.sheetPath() + "/checking.pdf").body()).get(0);
         LocalDate today = LocalDate.now(server.clock);
-        assertThat(text).contains("CHECKING COPY", "Issue date\nnot issued", "Printed " + today)
+        assertThat(text).contains("CHECK PRINT — NOT FOR CONSTRUCTION", "Issue date\nnot issued", "Printed " + today)
                 .doesNotContain("Issue date\n" + today);
     }
 

@@ -1,0 +1,90 @@
+package com.baysheet.framing.schedule;
+
+import com.baysheet.engine.units.Quantity;
+import com.baysheet.framing.Derived;
+import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.MemberLabel;
+import com.baysheet.framing.MemberRole;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Function;
+import java.util.function.Predicate;
+
+/**
+ * The member schedule: beams and girders level by level, one row per label with the number of members that
+ * carry it, the span, the total loads on the member (D, L reduced, Lr and S where any member carries them),
+ * the service and factored end reactions, the factored shear and moments. Every number is read from the
+ * members' records; where several members share a label the row is their envelope (the largest of each value,
+ * the most negative M−), so a typical member is never shown lighter than the worst it stands for.
+ * Columns are in the column load schedule.
+ */
+public final class MemberSchedule {
+    private MemberSchedule() {}
+
+    /** The schedule with each member labelled by {@link MemberLabel}. */
+    public static LoadSchedule of(Derived d) { return of(d, m -> true, MemberLabel::of); }
+
+    /** The members of one level. */
+    public static LoadSchedule onLevel(Derived d, String level) { return of(d, m -> m.level().equals(level), MemberLabel::of); }
+
+    /** The members chosen, with another labelling where typical members share a mark. */
+    public static LoadSchedule of(Derived d, Predicate<DerivedMember> which, Function<DerivedMember, String> label) {
+        Map<String, List<DerivedMember>> groups = new LinkedHashMap<>();
+        boolean lr = false, s = false, neg = false;
+        for (DerivedMember m : d.members()) {
+            if (m.role() == MemberRole.COLUMN || !which.test(m)) continue;
+            groups.computeIfAbsent(m.level() + "\u0000" + label.apply(m), k -> new ArrayList<>()).add(m);
+            lr |= positive(m.result().stepValue("W.Lr"));
+            s |= positive(m.result().stepValue("W.S"));
+            neg |= !Double.isNaN(m.result().value("LRFD.M-"));
+        }
+        List<Value> values = new ArrayList<>(List.of(
+                new Value("Span", Quantity.LENGTH, m -> m.span(), false),
+                new Value("W D", Quantity.FORCE, m -> m.result().stepValue("W.D"), false),
+                new Value("W L", Quantity.FORCE, m -> m.result().stepValue("W.L"), false)));
+        if (lr) values.add(new Value("W Lr", Quantity.FORCE, m -> m.result().stepValue("W.Lr"), false));
+        if (s) values.add(new Value("W S", Quantity.FORCE, m -> m.result().stepValue("W.S"), false));
+        values.addAll(List.of(
+                new Value("R_A service", Quantity.FORCE, m -> m.result().value("ASD.RA"), false),
+                new Value("R_A factored", Quantity.FORCE, m -> m.result().value("LRFD.RA"), false),
+                new Value("R_B service", Quantity.FORCE, m -> m.result().value("ASD.RB"), false),
+                new Value("R_B factored", Quantity.FORCE, m -> m.result().value("LRFD.RB"), false),
+                new Value("V_u", Quantity.FORCE, m -> m.result().value("LRFD.V"), false),
+                new Value("M_u+", Quantity.MOMENT, m -> m.result().value("LRFD.M+"), false)));
+        if (neg) values.add(new Value("M_u−", Quantity.MOMENT, m -> m.result().value("LRFD.M-"), true));
+
+        List<LoadSchedule.Column> cols = new ArrayList<>(List.of(LoadSchedule.Column.text("Level"), LoadSchedule.Column.text("Member"),
+                LoadSchedule.Column.text("Count")));
+        for (Value v : values) cols.add(new LoadSchedule.Column(v.heading, v.quantity));
+        List<List<Object>> rows = new ArrayList<>();
+        for (List<DerivedMember> g : groups.values()) {
+            DerivedMember first = g.get(0);
+            List<Object> row = new ArrayList<>(List.of(first.level(), label.apply(first), Integer.toString(g.size())));
+            for (Value v : values) row.add(v.envelope(g));
+            rows.add(row);
+        }
+        return new LoadSchedule("members", "Member schedule", d.building().context().system(), cols, rows, List.of(
+                "W: the total load on the member by case (L reduced as its record states); R_A and R_B: the end reactions "
+                        + "(service: the governing allowable stress design combination; factored: the governing strength design "
+                        + "combination); V_u and M_u: factored shear and moments.",
+                "Where several members share a label the row shows the largest of each value among them (the most negative M_u−)."));
+    }
+
+    private static boolean positive(double v) { return !Double.isNaN(v) && v > 0; }
+
+    /** One number column: how to read it from a member, and whether the envelope is the least (a negative moment). */
+    private record Value(String heading, Quantity quantity, Function<DerivedMember, Double> read, boolean least) {
+        double envelope(List<DerivedMember> members) {
+            double out = Double.NaN;
+            for (DerivedMember m : members) {
+                double v = read.apply(m);
+                if (Double.isNaN(v)) continue;
+                out = Double.isNaN(out) ? v : least ? Math.min(out, v) : Math.max(out, v);
+            }
+            return out;
+        }
+    }
+}
