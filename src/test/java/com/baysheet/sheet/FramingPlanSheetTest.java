@@ -59,7 +59,7 @@ class FramingPlanSheetTest {
         CalcPackage whole = FramingSheets.project(SheetFixtures.header("Project"), building, List.of());
         // the plans and summaries of the whole project with one member sheet and one take-down: a short PDF to validate
         project = new CalcPackage(whole.header(), whole.title(), whole.criteria(), whole.sheets().subList(0, 1),
-                whole.takeDowns().subList(0, 1), List.of(), whole.plans(), whole.schedules(), whole.submittal());
+                whole.takeDowns().subList(0, 1), List.of(), List.of(), whole.plans(), whole.schedules(), whole.submittal());
         pdf = PackageRenderer.render(project);
         pages = SheetFixtures.pageTexts(pdf.bytes());
         if (System.getProperty("baysheet.keepPdf") != null) write(pdf.bytes());
@@ -126,7 +126,7 @@ class FramingPlanSheetTest {
         FramingPlan p = project.plans().get(1);
         FramingPlan with = new FramingPlan(p.level(), p.system(), p.gridLines(), p.bays(), p.openings(), p.cantilevers(), p.members(),
                 p.lineLoads(), List.of(new FramingPlan.LoadPoint(45, 12.5, "Tank P1: D 4.00 kip")));
-        CalcPackage one = new CalcPackage(project.header(), project.title(), project.criteria(), project.sheets(), List.of(), List.of(),
+        CalcPackage one = new CalcPackage(project.header(), project.title(), project.criteria(), project.sheets(), List.of(), List.of(), List.of(),
                 List.of(with), List.of(), project.submittal());
         String text = SheetFixtures.squash(String.join("", SheetFixtures.pageTexts(PackageRenderer.render(one).bytes())));
         assertThat(text).contains("TankP1:D4.00kip").contains("pointload(unfactored)");
