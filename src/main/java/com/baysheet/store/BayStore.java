@@ -31,8 +31,8 @@ public final class BayStore {
 
     public List<Bay> findByLevel(long projectId, long levelId) {
         return writes.sql().tx(c -> {
-            LevelStore.find(c, projectId, levelId);
-            return findByLevel(c, levelId, GridStore.find(c, projectId));
+            // a linked level shows its typical's bays, which are its own in the derivation
+            return findByLevel(c, TypicalLevels.baysOf(LevelStore.find(c, projectId, levelId)), GridStore.find(c, projectId));
         });
     }
 
@@ -74,7 +74,7 @@ public final class BayStore {
     }
 
     private static Grid requireCells(Connection c, long projectId, long levelId, List<Cell> cells) throws SQLException {
-        LevelStore.find(c, projectId, levelId);
+        TypicalLevels.requireOwnBays(c, projectId, levelId);
         if (cells.isEmpty()) throw new InputError("cells", "none", "select at least one bay");
         Grid g = GridStore.find(c, projectId);
         for (Cell cell : cells)

@@ -35,26 +35,30 @@ public final class LevelStore {
     }
 
     public StoredLevel add(Editor who, long projectId, long version, LevelInfo info) {
-        return writes.change(who, "level added: " + describe(info), projectId, version, c -> {
-            requireUnique(c, projectId, info, -1);
-            SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO building_level (project_id, name, elevation, "
-                    + "is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge) VALUES (?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
-                ps.setLong(1, projectId);
-                bind(ps, 2, info);
-                ps.executeUpdate();
-                try (ResultSet keys = ps.getGeneratedKeys()) {
-                    keys.next();
-                    return new StoredLevel(keys.getLong(1), projectId, info);
-                }
+        return writes.change(who, "level added: " + describe(info), projectId, version, c -> insert(c, projectId, info));
+    }
+
+    /** Adds a level with bays of its own, refusing a name or elevation another level has, in the caller's change. */
+    static StoredLevel insert(Connection c, long projectId, LevelInfo info) throws SQLException {
+        requireUnique(c, projectId, info, -1);
+        SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO building_level (project_id, name, elevation, "
+                + "is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge) VALUES (?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
+            ps.setLong(1, projectId);
+            bind(ps, 2, info);
+            ps.executeUpdate();
+            try (ResultSet keys = ps.getGeneratedKeys()) {
+                keys.next();
+                return new StoredLevel(keys.getLong(1), projectId, info);
             }
-        });
+        }
     }
 
     public void update(Editor who, long projectId, long version, long levelId, LevelInfo info) {
         writes.change(who, c -> "level saved: " + describe(info) + "; was: " + describe(find(c, projectId, levelId).info()), projectId, version, c -> {
             find(c, projectId, levelId);
             requireUnique(c, projectId, info, levelId);
+            TypicalRules.requireSameKind(c, projectId, levelId, info);
             SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
             try (PreparedStatement ps = c.prepareStatement(
                     "UPDATE building_level SET name = ?, elevation = ?, is_roof = ?, roof_slope = ?, roof_shape = ?, "
@@ -66,10 +70,12 @@ public final class LevelStore {
         });
     }
 
-    /** Removes a level with all its bays. */
+    /** Removes a level with all its bays; the levels that were the same as it become independent copies first. */
     public void delete(Editor who, long projectId, long version, long levelId) {
-        writes.change(who, c -> "level deleted: " + describe(find(c, projectId, levelId).info()), projectId, version, c -> {
+        writes.change(who, c -> "level deleted: " + describe(find(c, projectId, levelId).info())
+                + TypicalLevels.releasedText(c, projectId, levelId), projectId, version, c -> {
             find(c, projectId, levelId);
+            TypicalLevels.release(c, projectId, levelId);
             try (PreparedStatement ps = c.prepareStatement("DELETE FROM building_level WHERE id = ?")) {
                 ps.setLong(1, levelId);
                 return ps.executeUpdate();
@@ -84,7 +90,7 @@ public final class LevelStore {
     }
 
     static List<StoredLevel> findByProject(Connection c, long projectId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge "
+        try (PreparedStatement ps = c.prepareStatement("SELECT id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge, typical_of "
                 + "FROM building_level WHERE project_id = ? ORDER BY elevation, id")) {
             ps.setLong(1, projectId);
             List<StoredLevel> out = new ArrayList<>();
@@ -96,7 +102,7 @@ public final class LevelStore {
     }
 
     static StoredLevel find(Connection c, long projectId, long levelId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge "
+        try (PreparedStatement ps = c.prepareStatement("SELECT id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge, typical_of "
                 + "FROM building_level WHERE id = ? AND project_id = ?")) {
             ps.setLong(1, levelId);
             ps.setLong(2, projectId);
@@ -133,6 +139,7 @@ public final class LevelStore {
         return new StoredLevel(rs.getLong("id"), rs.getLong("project_id"), new LevelInfo(rs.getString("name"),
                 rs.getDouble("elevation"), rs.getBoolean("is_roof"), Sql.getDouble(rs, "roof_slope"),
                 new RoofSurface(rs.getString("roof_shape") == null ? SnowRoof.Shape.MONOSLOPE : SnowRoof.Shape.valueOf(rs.getString("roof_shape")),
-                        rs.getBoolean("roof_slippery"), Sql.getDouble(rs, "eave_to_ridge"))));
+                        rs.getBoolean("roof_slippery"), Sql.getDouble(rs, "eave_to_ridge"))),
+                rs.getObject("typical_of") == null ? null : rs.getLong("typical_of"));
     }
 }
