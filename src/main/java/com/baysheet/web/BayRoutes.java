@@ -63,6 +63,8 @@ final class BayRoutes {
         m.put("project", computed.project());
         m.put("level", l);
         m.put("levels", computed.model().levels());
+        m.put("typicalName", !l.linked() ? "" : computed.model().levels().stream().filter(o -> o.id() == l.typicalOf())
+                .map(StoredLevel::name).findFirst().orElse(""));
         m.put("form", form);
         m.put("units", UnitLabels.of(p.info().units()));
         m.put("sides", BayForm.SIDES);

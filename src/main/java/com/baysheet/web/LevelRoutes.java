@@ -95,6 +95,9 @@ final class LevelRoutes {
         Map<String, Object> m = new HashMap<>();
         m.put("project", computed.project());
         m.put("levels", computed.model().levels());
+        Map<Long, String> names = new HashMap<>();
+        for (StoredLevel l : computed.model().levels()) names.put(l.id(), l.name());
+        m.put("levelNames", names);
         m.put("grid", computed.model().building().grid());
         m.put("units", UnitLabels.of(p.info().units()));
         m.put("gridForm", gridForm);
@@ -103,6 +106,6 @@ final class LevelRoutes {
     }
 
     private void renderEdit(Context ctx, Project p, StoredLevel l, Form form) {
-        ctx.render("levels/edit", Map.of("project", p, "level", l, "form", form, "units", UnitLabels.of(p.info().units())));
+        LevelPage.render(ctx, store, p, l, form, Form.filled(Map.of("version", form.value("version"))));
     }
 }

@@ -61,6 +61,7 @@ public final class Server {
             Errors.install(cfg.routes);
             new ProjectRoutes(store).install(cfg.routes);
             new LevelRoutes(store).install(cfg.routes);
+            new TypicalRoutes(store).install(cfg.routes);
             new BayRoutes(store).install(cfg.routes);
             new LineLoadRoutes(store).install(cfg.routes);
             new PlanRoutes(store).install(cfg.routes);
@@ -68,6 +69,7 @@ public final class Server {
             new TakeDownRoutes(store).install(cfg.routes);
             new OccupancyRoutes(store).install(cfg.routes);
             new ApiRoutes(store).install(cfg.routes);
+            new ApiTypicalRoutes(store).install(cfg.routes);
             new ApiResultRoutes(store).install(cfg.routes);
         });
     }
