@@ -39,14 +39,19 @@ public final class BayStore {
     /** Gives every selected cell the assignment's bay, replacing what was there. */
     public void assign(Editor who, long projectId, long version, long levelId, BayAssignment a) {
         writes.change(who, c -> BayText.assigned(c, projectId, levelId, a), projectId, version, c -> {
-            Grid g = requireCells(c, projectId, levelId, a.cells());
-            if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
-                throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
-            requireCantileverOccupancy(c, a);
-            delete(c, levelId, a.cells(), g);
-            insert(c, levelId, a, g);
+            put(c, projectId, levelId, a);
             return null;
         });
+    }
+
+    /** The assignment's bays in place of what the cells held, in the caller's change. */
+    static void put(Connection c, long projectId, long levelId, BayAssignment a) throws SQLException {
+        Grid g = requireCells(c, projectId, levelId, a.cells());
+        if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
+            throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
+        requireCantileverOccupancy(c, a);
+        delete(c, levelId, a.cells(), g);
+        insert(c, levelId, a, g);
     }
 
     /** Leaves the selected cells unframed at this level (no bay at all, unlike an opening). */

@@ -62,6 +62,22 @@ public final class GridStore {
         write(c, projectId, withIds(c, projectId, grid, fresh(grid.x()), fresh(grid.y())));
     }
 
+    /**
+     * A new project's first grid with the ids it carries (an imported model file keeps its lines' ids, and so its
+     * member ids); the project's next id is past them. Ids must differ across both axes.
+     */
+    static void createAsGiven(Connection c, long projectId, Grid grid) throws SQLException {
+        java.util.Set<Integer> all = new java.util.HashSet<>(grid.x().ids());
+        for (int id : grid.y().ids())
+            if (!all.add(id)) throw new com.baysheet.engine.InputError("grid.y.ids", id, "is also the id of a line along x");
+        write(c, projectId, grid);
+        try (PreparedStatement ps = c.prepareStatement("UPDATE project SET next_line_id = ? WHERE id = ?")) {
+            ps.setInt(1, all.stream().mapToInt(Integer::intValue).max().orElse(0) + 1);
+            ps.setLong(2, projectId);
+            ps.executeUpdate();
+        }
+    }
+
     static Grid find(Connection c, long projectId) throws SQLException {
         return new Grid(axis(c, projectId, "x"), axis(c, projectId, "y"));
     }

@@ -71,6 +71,24 @@ public final class ModelWrites {
     }
 
     /**
+     * Creates a whole project in one transaction (an imported model file): {@code work} inserts it and returns its
+     * id; the building is derived and checked as on every change, and the audit entry says {@code action}. A model
+     * the derivation refuses leaves nothing behind.
+     */
+    public Project create(Editor who, String action, Sql.Work<Long> work) {
+        Results.Computed[] done = new Results.Computed[1];
+        Project out = sql.tx(c -> {
+            long id = work.run(c);
+            Model m = BuildingMapper.load(c, id);
+            done[0] = new Results.Computed(m, checked(m));
+            append(c, who, subject(m.project()), action, sql.now());
+            return m.project();
+        });
+        if (results != null) results.offer(done[0]);
+        return out;
+    }
+
+    /**
      * After a firm-wide change that enters every project's calculation (the firm's self weights), supersedes in
      * each project the issued sheets whose calculation it altered, each project in its own transaction with its
      * audit entry. A project whose model no longer derives is left as it is (its next change reports why).

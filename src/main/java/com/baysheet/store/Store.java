@@ -10,7 +10,7 @@ import java.util.function.Function;
 /** All of the store over one database, wired once. */
 public record Store(ProjectStore projects, GridStore grids, LevelStore levels, BayStore bays,
                     OccupancyStore occupancies, Results results, LineLoadStore lineLoads,
-                    TypicalLevels typicals) {
+                    TypicalLevels typicals, ModelExport exports, ModelImport imports) {
 
     /**
      * @param derive the framing derivation, run to validate each model change, to supersede what it changes
@@ -24,6 +24,6 @@ public record Store(ProjectStore projects, GridStore grids, LevelStore levels, B
         OccupancyStore occupancies = new OccupancyStore(sql);
         return new Store(new ProjectStore(writes), new GridStore(writes), new LevelStore(writes),
                 new BayStore(writes, occupancies), occupancies, results,
-                new LineLoadStore(writes), new TypicalLevels(writes));
+                new LineLoadStore(writes), new TypicalLevels(writes), new ModelExport(sql), new ModelImport(writes));
     }
 }

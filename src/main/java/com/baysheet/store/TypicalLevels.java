@@ -28,14 +28,17 @@ public final class TypicalLevels {
         requireSome(levelIds);
         writes.change(who, c -> "levels made the same as " + TypicalRules.typical(c, projectId, typicalId).name() + ": "
                 + describe(c, projectId, levelIds), projectId, version, c -> {
-            StoredLevel typical = TypicalRules.typical(c, projectId, typicalId);
-            for (long id : levelIds) {
-                StoredLevel l = TypicalRules.linkable(c, projectId, typical, id);
-                deleteBays(c, l.id());
-                setTypical(c, l.id(), typical.id());
-            }
+            for (long id : levelIds) linkIn(c, projectId, typicalId, id);
             return null;
         });
+    }
+
+    /** Makes one level the same as a typical in the caller's change, or refuses the link (see {@link TypicalRules}). */
+    static void linkIn(Connection c, long projectId, long typicalId, long levelId) throws SQLException {
+        StoredLevel typical = TypicalRules.typical(c, projectId, typicalId);
+        StoredLevel l = TypicalRules.linkable(c, projectId, typical, levelId);
+        deleteBays(c, l.id());
+        setTypical(c, l.id(), typical.id());
     }
 
     /**

@@ -23,7 +23,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 /** The store's behaviour, run against each database with the real migrations. */
-abstract class StoreContract implements LineLoadContract, TypicalLevelContract {
+abstract class StoreContract implements LineLoadContract, TypicalLevelContract, ModelFileContract {
     protected Database db;
     protected Store store;
 
