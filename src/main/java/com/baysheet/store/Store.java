@@ -10,7 +10,8 @@ import java.util.function.Function;
 /** All of the store over one database, wired once. */
 public record Store(ProjectStore projects, GridStore grids, LevelStore levels, BayStore bays,
                     OccupancyStore occupancies, Results results, LineLoadStore lineLoads,
-                    TypicalLevels typicals, ModelExport exports, ModelImport imports) {
+                    TypicalLevels typicals, ModelExport exports, ModelImport imports,
+                    UnitConversion conversions) {
 
     /**
      * @param derive the framing derivation, run to validate each model change, to supersede what it changes
@@ -24,6 +25,7 @@ public record Store(ProjectStore projects, GridStore grids, LevelStore levels, B
         OccupancyStore occupancies = new OccupancyStore(sql);
         return new Store(new ProjectStore(writes), new GridStore(writes), new LevelStore(writes),
                 new BayStore(writes, occupancies), occupancies, results,
-                new LineLoadStore(writes), new TypicalLevels(writes), new ModelExport(sql), new ModelImport(writes));
+                new LineLoadStore(writes), new TypicalLevels(writes), new ModelExport(sql), new ModelImport(writes),
+                new UnitConversion(writes));
     }
 }

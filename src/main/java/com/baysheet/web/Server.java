@@ -59,6 +59,7 @@ public final class Server {
             if (access != null) access.accept(cfg.routes);
             filters(cfg.routes);
             Errors.install(cfg.routes);
+            new ModelFileRoutes(store).install(cfg.routes);
             new ProjectRoutes(store).install(cfg.routes);
             new LevelRoutes(store).install(cfg.routes);
             new TypicalRoutes(store).install(cfg.routes);

@@ -74,6 +74,37 @@ interface ModelFileContract {
     }
 
     @Test
+    default void convertingUsToSiAndBackReturnsTheModelWithinOnePartInABillion() {
+        Project p = demo();
+        ObjectNode us = store().exports().of(p.id());
+        Project si = store().conversions().convert(Editor.DEMO, p.id(), p.version(), com.baysheet.engine.units.UnitSystem.SI);
+        assertThat(si.info().units()).isEqualTo(com.baysheet.engine.units.UnitSystem.SI);
+        ObjectNode metric = store().exports().of(p.id());
+        // 30 ft = 9.144 m exactly; 14 ft = 4.2672 m (NIST SP 811)
+        assertThat(metric.at("/grid/x/spacings/0").asDouble()).isCloseTo(9.144, org.assertj.core.api.Assertions.within(1e-12));
+        assertThat(metric.at("/levels/1/elevation").asDouble()).isCloseTo(4.2672, org.assertj.core.api.Assertions.within(1e-12));
+        assertThat(store().results().of(p.id()).derived().members()).isNotEmpty();
+        store().conversions().convert(Editor.DEMO, p.id(), si.version(), com.baysheet.engine.units.UnitSystem.US);
+        sameWithin(us, store().exports().of(p.id()), "", 1e-9);
+        assertThatThrownBy(() -> store().conversions().convert(Editor.DEMO, p.id(), si.version() + 1, com.baysheet.engine.units.UnitSystem.US))
+                .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("units"));
+    }
+
+    /** Two JSON trees alike in shape and text, every number within {@code relative} of the other. */
+    private static void sameWithin(JsonNode a, JsonNode b, String at, double relative) {
+        if (a.isNumber()) {
+            assertThat(b.isNumber()).as(at).isTrue();
+            assertThat(b.asDouble()).as(at).isCloseTo(a.asDouble(), org.assertj.core.api.Assertions.within(relative * Math.abs(a.asDouble())));
+            return;
+        }
+        assertThat(b.getNodeType()).as(at).isEqualTo(a.getNodeType());
+        assertThat(b.size()).as(at).isEqualTo(a.size());
+        if (a.isArray()) for (int i = 0; i < a.size(); i++) sameWithin(a.get(i), b.get(i), at + "/" + i, relative);
+        else if (a.isObject()) a.fieldNames().forEachRemaining(f -> sameWithin(a.get(f), b.get(f), at + "/" + f, relative));
+        else assertThat(b).as(at).isEqualTo(a);
+    }
+
+    @Test
     default void aFileWithABadValueIsRefusedNamingWhereAndNothingIsStored() {
         Project p = demo();
         ObjectNode file = store().exports().of(p.id());

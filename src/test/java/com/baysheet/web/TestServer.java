@@ -84,6 +84,9 @@ final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCall
                 .method(method, json == null ? HttpRequest.BodyPublishers.noBody() : HttpRequest.BodyPublishers.ofString(json)).build());
     }
 
+    /** The server's address, for a request the helpers here do not build (a multipart upload). */
+    String base() { return "http://127.0.0.1:" + app.port(); }
+
     private URI uri(String path) { return URI.create("http://127.0.0.1:" + app.port() + path); }
 
     private HttpResponse<String> send(HttpRequest r) {

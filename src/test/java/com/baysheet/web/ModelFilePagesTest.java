@@ -1,0 +1,71 @@
+package com.baysheet.web;
+
+import com.baysheet.engine.record.RecordJson;
+import com.baysheet.store.Project;
+import com.fasterxml.jackson.databind.JsonNode;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.RegisterExtension;
+
+import java.io.IOException;
+import java.net.URI;
+import java.net.http.HttpClient;
+import java.net.http.HttpRequest;
+import java.net.http.HttpResponse;
+import java.nio.charset.StandardCharsets;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+/** The model file on the project pages and in the API: downloaded, uploaded as a new project, refused when it is not one. */
+class ModelFilePagesTest {
+    @RegisterExtension
+    static final TestServer server = TestServer.perClass();
+
+    @Test
+    void aDownloadedModelUploadsAsANewProjectWithTheSameMembers() throws Exception {
+        Project alder = server.alder();
+        assertThat(server.get("/projects/" + alder.id()).body()).contains("Download the model as one JSON file");
+        HttpResponse<String> file = server.get("/projects/" + alder.id() + "/model.json");
+        assertThat(file.statusCode()).isEqualTo(200);
+        assertThat(file.headers().firstValue("Content-Disposition")).hasValue("attachment; filename=\"24-031-model.json\"");
+        assertThat(RecordJson.mapper().readTree(file.body()).path("levels").size()).isEqualTo(4);
+
+        HttpResponse<String> up = upload(file.body(), "24-031-COPY");
+        assertThat(up.statusCode()).isEqualTo(303);
+        Project copy = server.store.projects().findAll().stream().filter(p -> p.info().jobNumber().equals("24-031-COPY")).findFirst().orElseThrow();
+        assertThat(up.headers().firstValue("Location")).hasValue("/projects/" + copy.id());
+        assertThat(server.store.results().of(copy.id()).derived().members()).hasSameSizeAs(server.store.results().of(alder.id()).derived().members());
+    }
+
+    @Test
+    void anUploadThatIsNoModelIsRefusedBesideTheFileWithNothingStored() throws Exception {
+        int before = server.store.projects().findAll().size();
+        HttpResponse<String> notJson = upload("this is not json", "X-1");
+        assertThat(notJson.statusCode()).isEqualTo(422);
+        assertThat(notJson.body()).contains("is not valid JSON", "Nothing was saved", "licensed engineer");
+        HttpResponse<String> taken = upload(server.get("/projects/" + server.deck().id() + "/model.json").body(), "");
+        assertThat(taken.statusCode()).isEqualTo(409);
+        assertThat(taken.body()).contains("already the job number");
+        assertThat(server.post("/projects/import", java.util.List.of()).statusCode()).isEqualTo(422);
+        assertThat(server.store.projects().findAll()).hasSize(before);
+    }
+
+    @Test
+    void theApiExportsAndImportsTheSameFile() throws Exception {
+        String model = server.get("/api/projects/" + server.deck().id() + "/model").body();
+        HttpResponse<String> r = server.json("POST", "/api/projects/import", "{\"jobNumber\": \"24-058-API\", \"model\": " + model + "}");
+        assertThat(r.statusCode()).isEqualTo(201);
+        JsonNode created = RecordJson.mapper().readTree(r.body());
+        String again = server.get("/api/projects/" + created.get("id").asLong() + "/model").body();
+        assertThat(again.replace("24-058-API", "24-058")).isEqualTo(model);
+    }
+
+    private static HttpResponse<String> upload(String content, String jobNumber) throws IOException, InterruptedException {
+        String b = "----baysheet-test-boundary";
+        String body = "--" + b + "\r\nContent-Disposition: form-data; name=\"jobNumber\"\r\n\r\n" + jobNumber + "\r\n"
+                + "--" + b + "\r\nContent-Disposition: form-data; name=\"file\"; filename=\"model.json\"\r\n"
+                + "Content-Type: application/json\r\n\r\n" + content + "\r\n--" + b + "--\r\n";
+        return HttpClient.newHttpClient().send(HttpRequest.newBuilder(URI.create(server.base() + "/projects/import"))
+                .header("Content-Type", "multipart/form-data; boundary=" + b)
+                .POST(HttpRequest.BodyPublishers.ofString(body, StandardCharsets.UTF_8)).build(), HttpResponse.BodyHandlers.ofString());
+    }
+}
