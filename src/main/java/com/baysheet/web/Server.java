@@ -63,6 +63,7 @@ public final class Server {
             new ProjectRoutes(store).install(cfg.routes);
             new LevelRoutes(store).install(cfg.routes);
             new TypicalRoutes(store).install(cfg.routes);
+            new UnitRoutes(store).install(cfg.routes);
             new BayRoutes(store).install(cfg.routes);
             new LineLoadRoutes(store).install(cfg.routes);
             new PlanRoutes(store).install(cfg.routes);

@@ -59,6 +59,26 @@ class ModelFilePagesTest {
         assertThat(again.replace("24-058-API", "24-058")).isEqualTo(model);
     }
 
+    @Test
+    void aConversionSaysThatResultsChangeAndNeedsItsConfirmation() {
+        long deck = server.deck().id();
+        String page = server.get("/projects/" + deck + "/units").body();
+        assertThat(page).contains("Convert 24-058 to US units", "The results change", "opens a new revision", "licensed engineer");
+        long before = server.version(deck);
+        HttpResponse<String> unconfirmed = server.post("/projects/" + deck + "/units",
+                java.util.List.of(java.util.Map.entry("version", String.valueOf(before))));
+        assertThat(unconfirmed.statusCode()).isEqualTo(422);
+        assertThat(unconfirmed.body()).contains("tick the box");
+        assertThat(server.version(deck)).isEqualTo(before);
+        double spanSi = server.store.grids().find(deck).x().spacing(0);
+        HttpResponse<String> done = server.post("/projects/" + deck + "/units", java.util.List.of(
+                java.util.Map.entry("version", String.valueOf(before)), java.util.Map.entry("confirm", "yes")));
+        assertThat(done.statusCode()).isEqualTo(303);
+        assertThat(server.store.projects().find(deck).info().units()).isEqualTo(com.baysheet.engine.units.UnitSystem.US);
+        // 16.8 m / 0.3048 m/ft
+        assertThat(server.store.grids().find(deck).x().spacing(0)).isEqualTo(spanSi / 0.3048);
+    }
+
     private static HttpResponse<String> upload(String content, String jobNumber) throws IOException, InterruptedException {
         String b = "----baysheet-test-boundary";
         String body = "--" + b + "\r\nContent-Disposition: form-data; name=\"jobNumber\"\r\n\r\n" + jobNumber + "\r\n"
