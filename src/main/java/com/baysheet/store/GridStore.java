@@ -37,13 +37,18 @@ public final class GridStore {
      */
     public void save(Editor who, long projectId, long version, Grid grid) {
         writes.change(who, c -> "grid saved: " + describe(grid) + "; was: " + describe(find(c, projectId)), projectId, version, c -> {
-            Grid before = find(c, projectId);
-            Grid after = withIds(c, projectId, grid, LineMatch.ids(before.x(), grid.x()), LineMatch.ids(before.y(), grid.y()));
-            LineLoadStore.requireLines(c, projectId, before, after);
-            BayRegrid.apply(c, projectId, before, after);
-            write(c, projectId, after);
+            replace(c, projectId, grid);
             return null;
         });
+    }
+
+    /** The grid replaced as {@link #save} does, in the caller's change. */
+    static void replace(Connection c, long projectId, Grid grid) throws SQLException {
+        Grid before = find(c, projectId);
+        Grid after = withIds(c, projectId, grid, LineMatch.ids(before.x(), grid.x()), LineMatch.ids(before.y(), grid.y()));
+        LineLoadStore.requireLines(c, projectId, before, after);
+        BayRegrid.apply(c, projectId, before, after);
+        write(c, projectId, after);
     }
 
     /** The grid as a line of text: the line names with the spacings between them, x then y. */

@@ -11,7 +11,7 @@ import java.util.function.Function;
 public record Store(ProjectStore projects, GridStore grids, LevelStore levels, BayStore bays,
                     OccupancyStore occupancies, Results results, LineLoadStore lineLoads,
                     TypicalLevels typicals, ModelExport exports, ModelImport imports,
-                    UnitConversion conversions) {
+                    UnitConversion conversions, LayoutImport layouts) {
 
     /**
      * @param derive the framing derivation, run to validate each model change, to supersede what it changes
@@ -26,6 +26,6 @@ public record Store(ProjectStore projects, GridStore grids, LevelStore levels, B
         return new Store(new ProjectStore(writes), new GridStore(writes), new LevelStore(writes),
                 new BayStore(writes, occupancies), occupancies, results,
                 new LineLoadStore(writes), new TypicalLevels(writes), new ModelExport(sql), new ModelImport(writes),
-                new UnitConversion(writes));
+                new UnitConversion(writes), new LayoutImport(writes));
     }
 }

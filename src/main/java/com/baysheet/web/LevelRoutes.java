@@ -21,6 +21,7 @@ final class LevelRoutes {
         r.get("/projects/{project}/levels", this::show);
         r.post("/projects/{project}/grid", this::updateGrid);
         r.post("/projects/{project}/levels", this::create);
+        r.post("/projects/{project}/levels/csv", this::fromTable);
         r.get("/projects/{project}/levels/{level}/edit", this::editForm);
         r.post("/projects/{project}/levels/{level}", this::update);
         r.post("/projects/{project}/levels/{level}/delete", this::delete);
@@ -51,6 +52,21 @@ final class LevelRoutes {
         form.attempt(() -> store.levels().add(Editors.of(ctx), p.id(), version, v.info()))
                 .ifPresentOrElse(l -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
                         () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, Form.filled(gridValues(p)), form));
+    }
+
+    /** The grid and levels from a table (a CSV file, or its text pasted), every refusal shown at once. */
+    void fromTable(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        Form form = Form.of(ctx);
+        long version = form.version();
+        LayoutCsv table = LayoutCsv.read(TableUpload.text(ctx, form), p.info().units());
+        if (!table.refusals().isEmpty()) form.reject("csv", String.join("; ", table.refusals()));
+        form.attempt(() -> {
+            store.layouts().apply(Editors.of(ctx), p.id(), version, table.grid(), table.levels());
+            return p;
+        }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
+                () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, Form.filled(gridValues(p)),
+                        Form.filled(Map.of("version", String.valueOf(p.version()))), form));
     }
 
     void editForm(Context ctx) {
@@ -91,6 +107,10 @@ final class LevelRoutes {
     }
 
     private void renderPage(Context ctx, Project p, Form gridForm, Form levelForm) {
+        renderPage(ctx, p, gridForm, levelForm, Form.filled(Map.of("version", String.valueOf(p.version()))));
+    }
+
+    private void renderPage(Context ctx, Project p, Form gridForm, Form levelForm, Form csvForm) {
         var computed = store.results().of(p.id());
         Map<String, Object> m = new HashMap<>();
         m.put("project", computed.project());
@@ -102,6 +122,7 @@ final class LevelRoutes {
         m.put("units", UnitLabels.of(p.info().units()));
         m.put("gridForm", gridForm);
         m.put("levelForm", levelForm);
+        m.put("csvForm", csvForm);
         ctx.render("levels/index", m);
     }
 
