@@ -105,6 +105,13 @@ public final class TypicalLevels {
                 + linked.stream().map(StoredLevel::name).collect(Collectors.joining(", "));
     }
 
+    /** "; also on Level 3, Level 4 (the same as it)" for the audit entry of a bay change on a typical (empty if none). */
+    static String alsoText(Connection c, long projectId, long typicalId) throws SQLException {
+        List<StoredLevel> linked = linkedTo(c, projectId, typicalId);
+        return linked.isEmpty() ? "" : "; also on " + linked.stream().map(StoredLevel::name).collect(Collectors.joining(", "))
+                + " (the same as it)";
+    }
+
     /** The level whose bays a level has: its typical, or itself. */
     static long baysOf(StoredLevel l) {
         return l.linked() ? l.typicalOf() : l.id();

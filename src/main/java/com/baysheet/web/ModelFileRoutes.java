@@ -22,8 +22,8 @@ import java.util.Map;
  * /projects/import is this page and not a project.
  */
 final class ModelFileRoutes {
-    /** A model file larger than this is refused before it is read: about a hundred times the demo office block. */
-    static final long MAX_FILE = 20_000_000;
+    /** A model file larger than this is refused before it is read (a JSON tree takes several times its text in memory). */
+    static final long MAX_FILE = 5_000_000;
 
     private final Store store;
 

@@ -78,9 +78,11 @@ interface TypicalLevelContract {
     default void everyLinkChangeIsAuditedWithWhatTheLevelHeldBefore() {
         Project p = building();
         store().typicals().link(Editor.DEMO, p.id(), version(p), id(p, "Level 2"), List.of(id(p, "Level 3")));
+        store().bays().assign(Editor.DEMO, p.id(), version(p), id(p, "Level 2"), bays(70));
         store().typicals().unlink(Editor.DEMO, p.id(), version(p), id(p, "Level 3"));
-        var trail = new com.baysheet.store.review.AuditTrail(new Sql(database().dataSource())).page(2, 0);
-        assertThat(trail.get(1).detail()).contains("levels made the same as Level 2: Level 3 (was: 0 bays of its own)");
+        var trail = new com.baysheet.store.review.AuditTrail(new Sql(database().dataSource())).page(3, 0);
+        assertThat(trail.get(2).detail()).contains("levels made the same as Level 2: Level 3 (was: 0 bays of its own)");
+        assertThat(trail.get(1).detail()).contains("bays assigned on Level 2", "; also on Level 3 (the same as it)");
         assertThat(trail.get(0).detail()).contains("Level 3 unlinked from its typical Level 2");
     }
 

@@ -49,7 +49,7 @@ class BalconyPagesTest {
         String page = server.get(bays("Level 3")).body();
         assertThat(page).contains("<label for=\"cantileverOccupancy\">Occupancy of the cantilever slabs</label>",
                 "<option value=\"\" selected=\"selected\">Balcony or deck serving the bay", "value=\"balcony:office\"",
-                "Balcony or deck serving Offices — 75.0 psf", "cantilever north (Balcony or deck serving Assembly: movable seats)",
+                "Balcony or deck serving Offices — 75.0 psf", "cantilever north 6.00 ft (Balcony or deck serving Assembly: movable seats)",
                 "id=\"cantileverOccupancy\"", "licensed engineer").doesNotContain("data-cantilever-occupancy=\"");
     }
 
@@ -67,7 +67,7 @@ class BalconyPagesTest {
         assertThat(ok.statusCode()).as(ok.body()).isEqualTo(303);
         List<Bay> stored = server.store.bays().findByLevel(project, level("Level 3"));
         assertThat(stored).filteredOn(b -> !b.cantilevers().isEmpty()).hasSize(2).allMatch(b -> "office".equals(b.cantileverOccupancy()));
-        assertThat(server.get(bays("Level 3")).body()).contains("data-cantilever-occupancy=\"office\"", "cantilever north (Offices)");
+        assertThat(server.get(bays("Level 3")).body()).contains("data-cantilever-occupancy=\"office\"", "cantilever north 6.00 ft (Offices)");
 
         // back to the default: the blank choice stores NULL
         assertThat(server.post(bays("Level 3"), assembly("")).statusCode()).isEqualTo(303);
