@@ -35,8 +35,8 @@ public final class BayStore {
 
     public List<Bay> findByLevel(long projectId, long levelId) {
         return writes.sql().tx(c -> {
-            LevelStore.find(c, projectId, levelId);
-            return findByLevel(c, levelId, GridStore.find(c, projectId));
+            // a linked level shows its typical's bays, which are its own in the derivation
+            return findByLevel(c, TypicalLevels.baysOf(LevelStore.find(c, projectId, levelId)), GridStore.find(c, projectId));
         });
     }
 
@@ -62,14 +62,19 @@ public final class BayStore {
 
     private Sql.Work<Void> assigning(long projectId, long levelId, BayAssignment a) {
         return c -> {
-            Grid g = requireCells(c, projectId, levelId, a.cells());
-            if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
-                throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
-            requireCantileverOccupancy(c, a);
-            delete(c, levelId, a.cells(), g);
-            insert(c, levelId, a, g);
+            put(c, projectId, levelId, a);
             return null;
         };
+    }
+
+    /** The assignment's bays in place of what the cells held, in the caller's change. */
+    static void put(Connection c, long projectId, long levelId, BayAssignment a) throws SQLException {
+        Grid g = requireCells(c, projectId, levelId, a.cells());
+        if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
+            throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
+        requireCantileverOccupancy(c, a);
+        delete(c, levelId, a.cells(), g);
+        insert(c, levelId, a, g);
     }
 
     private Sql.Work<Void> clearing(long projectId, long levelId, List<Cell> cells) {
@@ -93,7 +98,7 @@ public final class BayStore {
     }
 
     private static Grid requireCells(Connection c, long projectId, long levelId, List<Cell> cells) throws SQLException {
-        LevelStore.find(c, projectId, levelId);
+        TypicalLevels.requireOwnBays(c, projectId, levelId);
         if (cells.isEmpty()) throw new InputError("cells", "none", "select at least one bay");
         Grid g = GridStore.find(c, projectId);
         for (Cell cell : cells)

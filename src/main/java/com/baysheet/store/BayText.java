@@ -23,13 +23,13 @@ final class BayText {
         Grid g = GridStore.find(c, projectId);
         String now = a.opening() ? "opening" : bay(a.bayAt(a.cells().get(0)));
         return "bays assigned on " + LevelStore.find(c, projectId, levelId).name() + ": " + cells(g, a.cells()) + ": " + now
-                + "; was: " + before(c, levelId, g, a.cells());
+                + "; was: " + before(c, levelId, g, a.cells()) + TypicalLevels.alsoText(c, projectId, levelId);
     }
 
     static String cleared(Connection c, long projectId, long levelId, List<Cell> cells) throws SQLException {
         Grid g = GridStore.find(c, projectId);
         return "bays cleared on " + LevelStore.find(c, projectId, levelId).name() + ": " + cells(g, cells)
-                + "; was: " + before(c, levelId, g, cells);
+                + "; was: " + before(c, levelId, g, cells) + TypicalLevels.alsoText(c, projectId, levelId);
     }
 
     private static String before(Connection c, long levelId, Grid g, List<Cell> cells) throws SQLException {

@@ -39,7 +39,8 @@ final class BuildingMapper {
         List<String> unframed = new ArrayList<>();
         Grid grid = GridStore.find(c, projectId);
         for (StoredLevel s : stored) {
-            List<Bay> bays = BayStore.findByLevel(c, s.id(), grid);
+            // a typical level's bays are its typical's (TypicalLevels); its members keep its own key and elevation
+            List<Bay> bays = BayStore.findByLevel(c, TypicalLevels.baysOf(s), grid);
             if (bays.stream().allMatch(Bay::opening)) unframed.add(s.name());
             else levels.add(level(s.info(), bays).withKey("L" + s.id()));
         }

@@ -8,6 +8,7 @@ import org.jdbi.v3.core.Handle;
 import org.jdbi.v3.core.statement.PreparedBatch;
 
 import java.sql.Connection;
+import java.sql.SQLException;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -37,14 +38,19 @@ public final class GridStore {
      */
     public void save(Editor who, long projectId, long version, Grid grid) {
         writes.change(who, c -> "grid saved: " + describe(grid) + "; was: " + describe(find(c, projectId)), projectId, version, c -> {
-            Grid before = find(c, projectId);
-            Grid after = withIds(c, projectId, grid, LineMatch.ids(before.x(), grid.x()), LineMatch.ids(before.y(), grid.y()));
-            LineLoadStore.requireLines(c, projectId, before, after);
-            PointLoadStore.requireLines(c, projectId, before, after);
-            BayRegrid.apply(c, projectId, before, after);
-            write(c, projectId, after);
+            replace(c, projectId, grid);
             return null;
         });
+    }
+
+    /** The grid replaced as {@link #save} does, in the caller's change. */
+    static void replace(Connection c, long projectId, Grid grid) throws SQLException {
+        Grid before = find(c, projectId);
+        Grid after = withIds(c, projectId, grid, LineMatch.ids(before.x(), grid.x()), LineMatch.ids(before.y(), grid.y()));
+        LineLoadStore.requireLines(c, projectId, before, after);
+        PointLoadStore.requireLines(c, projectId, before, after);
+        BayRegrid.apply(c, projectId, before, after);
+        write(c, projectId, after);
     }
 
     /** The grid as a line of text: the line names with the spacings between them, x then y. */
@@ -61,6 +67,21 @@ public final class GridStore {
     /** A new project's first grid: every line gets a fresh id. */
     static void create(Connection c, long projectId, Grid grid) {
         write(c, projectId, withIds(c, projectId, grid, fresh(grid.x()), fresh(grid.y())));
+    }
+
+    /**
+     * A new project's first grid with the ids it carries (an imported model file keeps its lines' ids, and so its
+     * member ids); the project's next id is past them. Ids must differ across both axes.
+     */
+    static void createAsGiven(Connection c, long projectId, Grid grid) {
+        java.util.Set<Integer> all = new java.util.HashSet<>(grid.x().ids());
+        for (int id : grid.y().ids())
+            if (!all.add(id)) throw new com.baysheet.engine.InputError("grid.y.ids", id, "is also the id of a line along x");
+        write(c, projectId, grid);
+        try (Handle h = Sql.on(c)) {
+            h.createUpdate("UPDATE project SET next_line_id = :next WHERE id = :id")
+                    .bind("next", all.stream().mapToInt(Integer::intValue).max().orElse(0) + 1).bind("id", projectId).execute();
+        }
     }
 
     static Grid find(Connection c, long projectId) {

@@ -39,24 +39,28 @@ public final class LevelStore {
     }
 
     public StoredLevel add(Editor who, long projectId, long version, LevelInfo info) {
-        return writes.change(who, "level added: " + describe(info), projectId, version, c -> {
-            requireUnique(c, projectId, info, -1);
-            SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
-            try (Handle h = Sql.on(c)) {
-                long id = bind(h.createUpdate("INSERT INTO building_level (project_id, name, elevation, is_roof, roof_slope, roof_shape, "
-                                + "roof_slippery, eave_to_ridge) VALUES (:project, :name, :elevation, :roof, :roofSlope, :roofShape, "
-                                + ":slippery, :eaveToRidge)"), info)
-                        .bind("project", projectId)
-                        .executeAndReturnGeneratedKeys("id").mapTo(Long.class).one();
-                return new StoredLevel(id, projectId, info);
-            }
-        });
+        return writes.change(who, "level added: " + describe(info), projectId, version, c -> insert(c, projectId, info));
+    }
+
+    /** Adds a level with bays of its own, refusing a name or elevation another level has, in the caller's change. */
+    static StoredLevel insert(Connection c, long projectId, LevelInfo info) throws SQLException {
+        requireUnique(c, projectId, info, -1);
+        SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
+        try (Handle h = Sql.on(c)) {
+            long id = bind(h.createUpdate("INSERT INTO building_level (project_id, name, elevation, is_roof, roof_slope, roof_shape, "
+                            + "roof_slippery, eave_to_ridge) VALUES (:project, :name, :elevation, :roof, :roofSlope, :roofShape, "
+                            + ":slippery, :eaveToRidge)"), info)
+                    .bind("project", projectId)
+                    .executeAndReturnGeneratedKeys("id").mapTo(Long.class).one();
+            return new StoredLevel(id, projectId, info);
+        }
     }
 
     public void update(Editor who, long projectId, long version, long levelId, LevelInfo info) {
         writes.change(who, c -> "level saved: " + describe(info) + "; was: " + describe(find(c, projectId, levelId).info()), projectId, version, c -> {
             find(c, projectId, levelId);
             requireUnique(c, projectId, info, levelId);
+            TypicalRules.requireSameKind(c, projectId, levelId, info);
             SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
             try (Handle h = Sql.on(c)) {
                 return bind(h.createUpdate("UPDATE building_level SET name = :name, elevation = :elevation, is_roof = :roof, "
@@ -66,10 +70,12 @@ public final class LevelStore {
         });
     }
 
-    /** Removes a level with all its bays. */
+    /** Removes a level with all its bays; the levels that were the same as it become independent copies first. */
     public void delete(Editor who, long projectId, long version, long levelId) {
-        writes.change(who, c -> "level deleted: " + describe(find(c, projectId, levelId).info()), projectId, version, c -> {
+        writes.change(who, c -> "level deleted: " + describe(find(c, projectId, levelId).info())
+                + TypicalLevels.releasedText(c, projectId, levelId), projectId, version, c -> {
             find(c, projectId, levelId);
+            TypicalLevels.release(c, projectId, levelId);
             try (Handle h = Sql.on(c)) {
                 return h.createUpdate("DELETE FROM building_level WHERE id = :id").bind("id", levelId).execute();
             }
@@ -82,7 +88,7 @@ public final class LevelStore {
                 + (i.roof() ? ", roof" + (Double.isNaN(i.roofSlope()) ? "" : " sloped " + Display.plain(i.roofSlope())) : "");
     }
 
-    private static final String COLUMNS = "id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge";
+    private static final String COLUMNS = "id, project_id, name, elevation, is_roof, roof_slope, roof_shape, roof_slippery, eave_to_ridge, typical_of";
 
     static List<StoredLevel> findByProject(Connection c, long projectId) {
         try (Handle h = Sql.on(c)) {
@@ -122,6 +128,7 @@ public final class LevelStore {
         return new StoredLevel(rs.getLong("id"), rs.getLong("project_id"), new LevelInfo(rs.getString("name"),
                 rs.getDouble("elevation"), rs.getBoolean("is_roof"), Sql.getDouble(rs, "roof_slope"),
                 new RoofSurface(rs.getString("roof_shape") == null ? SnowRoof.Shape.MONOSLOPE : SnowRoof.Shape.valueOf(rs.getString("roof_shape")),
-                        rs.getBoolean("roof_slippery"), Sql.getDouble(rs, "eave_to_ridge"))));
+                        rs.getBoolean("roof_slippery"), Sql.getDouble(rs, "eave_to_ridge"))),
+                rs.getObject("typical_of") == null ? null : rs.getLong("typical_of"));
     }
 }

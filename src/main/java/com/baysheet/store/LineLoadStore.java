@@ -61,7 +61,7 @@ public final class LineLoadStore {
         return writes.change(who, action, projectId, version, work);
     }
 
-    private static long insert(Connection c, long projectId, long levelId, LineLoadEntry e) throws SQLException {
+    static long insert(Connection c, long projectId, long levelId, LineLoadEntry e) throws SQLException {
         LevelStore.find(c, projectId, levelId);
         Grid g = GridStore.find(c, projectId);
         LineRef ref = LineRef.resolve(g, e);

@@ -81,6 +81,26 @@ public final class ModelWrites {
     }
 
     /**
+     * Creates a whole project in one transaction (an imported model file): {@code work} inserts it and returns its
+     * id; the building is derived and checked as on every change, and the audit entry says {@code action}. A model
+     * the derivation refuses leaves nothing behind.
+     */
+    public Project create(Editor who, String action, Sql.Work<Long> work) {
+        Results.Computed[] done = new Results.Computed[1];
+        Project out = sql.tx(c -> {
+            long id = work.run(c);
+            Model m = BuildingMapper.load(c, id);
+            Derived d = checked(m);
+            done[0] = new Results.Computed(m, d);
+            MarkBook.reconcile(c, id, d, sql.now());
+            append(c, who, subject(m.project()), action, sql.now());
+            return m.project();
+        });
+        if (results != null) results.offer(done[0]);
+        return out;
+    }
+
+    /**
      * The issued sheets a change would alter (changed since issue), by name, without saving it: the change is made,
      * derived and given its marks in a transaction that is then rolled back, so the answer comes from the same
      * fingerprints a save compares. A stale version or a change the derivation refuses is reported as a save would.

@@ -55,25 +55,30 @@ public final class ProjectStore {
     public Project create(Editor who, ProjectInfo info) {
         return sql.tx(c -> {
             OffsetDateTime now = sql.stamp();
-            requireFreeJobNumber(c, info.jobNumber(), -1);
-            long id;
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO project (version, job_number, name, address, "
-                    + "client, edition, unit_system, partition_allowance, reduce_partitions, uplift_reduced_dead, "
-                    + SnowColumns.NAMES + ", floor_method, created_at, updated_at) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
-                int i = bind(ps, info);
-                ps.setObject(i++, now);
-                ps.setObject(i, now);
-                ps.executeUpdate();
-                try (ResultSet keys = ps.getGeneratedKeys()) {
-                    keys.next();
-                    id = keys.getLong(1);
-                }
-            }
-            GridStore.create(c, id, startingGrid(info.units()));
-            Project p = find(c, id);
+            Project p = find(c, insert(c, info, startingGrid(info.units()), now));
             ModelWrites.append(c, who, ModelWrites.subject(p), "project created: " + info.name(), now.toInstant());
             return p;
         });
+    }
+
+    /** Inserts a project at version 1 with this grid (every line a fresh id), refusing a job number in use; returns its id. */
+    static long insert(Connection c, ProjectInfo info, Grid grid, OffsetDateTime now) throws SQLException {
+        requireFreeJobNumber(c, info.jobNumber(), -1);
+        long id;
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO project (version, job_number, name, address, "
+                + "client, edition, unit_system, partition_allowance, reduce_partitions, uplift_reduced_dead, "
+                + SnowColumns.NAMES + ", floor_method, created_at, updated_at) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
+            int i = bind(ps, info);
+            ps.setObject(i++, now);
+            ps.setObject(i, now);
+            ps.executeUpdate();
+            try (ResultSet keys = ps.getGeneratedKeys()) {
+                keys.next();
+                id = keys.getLong(1);
+            }
+        }
+        GridStore.create(c, id, grid);
+        return id;
     }
 
     /** After a change to the firm's settings: each project's marks, and the issued sheets it changed named in its audit entry (see ModelWrites). */

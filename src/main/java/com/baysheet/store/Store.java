@@ -10,7 +10,9 @@ import java.util.function.Function;
 /** All of the store over one database, wired once. */
 public record Store(ProjectStore projects, GridStore grids, LevelStore levels, BayStore bays,
                     OccupancyStore occupancies, Results results, LineLoadStore lineLoads,
-                    com.baysheet.store.review.MarkBook marks, PointLoadStore pointLoads, SelfWeightStore selfWeights) {
+                    com.baysheet.store.review.MarkBook marks, PointLoadStore pointLoads, SelfWeightStore selfWeights,
+                    TypicalLevels typicals, ModelExport exports, ModelImport imports,
+                    UnitConversion conversions, LayoutImport layouts) {
 
     /**
      * @param derive the framing derivation, run to validate each model change, to supersede what it changes
@@ -25,6 +27,7 @@ public record Store(ProjectStore projects, GridStore grids, LevelStore levels, B
         return new Store(new ProjectStore(writes), new GridStore(writes), new LevelStore(writes),
                 new BayStore(writes, occupancies), occupancies, results,
                 new LineLoadStore(writes), new com.baysheet.store.review.MarkBook(sql),
-                new PointLoadStore(writes), new SelfWeightStore(writes));
+                new PointLoadStore(writes), new SelfWeightStore(writes), new TypicalLevels(writes), new ModelExport(sql),
+                new ModelImport(writes), new UnitConversion(writes), new LayoutImport(writes));
     }
 }

@@ -19,13 +19,13 @@ final class ApiViews {
 
     /** roofShape, slippery and eaveToRidge (null where not given) only on a roof. */
     record LevelJson(long id, String name, double elevation, boolean roof, Double roofSlope, String roofShape, Boolean slippery,
-                     Double eaveToRidge) {
+                     Double eaveToRidge, Long typicalOf) {
         static LevelJson of(StoredLevel l) {
             var i = l.info();
             var s = i.surface();
             return new LevelJson(l.id(), l.name(), i.elevation(), i.roof(), i.roof() ? i.roofSlope() : null,
                     i.roof() ? s.shape().name() : null, i.roof() ? s.slippery() : null,
-                    i.roof() && !Double.isNaN(s.eaveToRidge()) ? s.eaveToRidge() : null);
+                    i.roof() && !Double.isNaN(s.eaveToRidge()) ? s.eaveToRidge() : null, l.typicalOf());
         }
     }
 

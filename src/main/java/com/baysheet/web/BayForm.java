@@ -21,7 +21,21 @@ import java.util.Map;
 final class BayForm {
     static final List<String> SIDES = List.of("north", "south", "east", "west");
 
+    /** The fields an Apply keeps for the next one. */
+    static final List<String> FIELDS = List.of("occupancy", "deadLoad", "beams", "infillBeams", "cantilevers.north",
+            "cantilevers.south", "cantilevers.east", "cantilevers.west", "cantileverOccupancy");
+
     private BayForm() {}
+
+    /** "?occupancy=office&deadLoad=65...": the applied values, for the page after the redirect. */
+    static String kept(Form f) {
+        StringBuilder q = new StringBuilder();
+        for (String field : FIELDS) {
+            q.append(q.length() == 0 ? "?" : "&").append(java.net.URLEncoder.encode(field, java.nio.charset.StandardCharsets.UTF_8))
+                    .append('=').append(java.net.URLEncoder.encode(f.value(field), java.nio.charset.StandardCharsets.UTF_8));
+        }
+        return q.toString();
+    }
 
     /** The values of an existing bay, to start the form from when one bay is being edited. */
     static Map<String, String> values(Bay b) {

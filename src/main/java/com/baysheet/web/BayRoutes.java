@@ -32,8 +32,10 @@ final class BayRoutes {
     void edit(Context ctx) {
         Project p = store.projects().find(Ids.project(ctx));
         StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
-        Map<String, String> start = new HashMap<>(Map.of("version", String.valueOf(p.version()), "beams", "Y",
-                "infillBeams", "2", "occupancy", "office"));
+        Map<String, String> start = new HashMap<>(Map.of("beams", "Y", "infillBeams", "2", "occupancy", "office"));
+        // after an Apply the form comes back with the values just applied (post-redirect-get carries them in the query)
+        for (String f : BayForm.FIELDS) if (ctx.queryParam(f) != null) start.put(f, ctx.queryParam(f));
+        start.put("version", String.valueOf(p.version()));
         render(ctx, p, l, Form.filled(start));
     }
 
@@ -56,7 +58,7 @@ final class BayRoutes {
                 yield form.attempt(() -> { store.bays().assign(Editors.of(ctx), p.id(), version, l.id(), v.assignment(cells)); return action; });
             }
         };
-        done.ifPresentOrElse(a -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels/" + l.id() + "/bays"),
+        done.ifPresentOrElse(a -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels/" + l.id() + "/bays" + BayForm.kept(form)),
                 () -> render(ctx.status(form.stale() ? 409 : 422), p, l, form));
     }
 
@@ -77,13 +79,18 @@ final class BayRoutes {
         m.put("project", computed.project());
         m.put("level", l);
         m.put("levels", computed.model().levels());
+        m.put("typicalName", !l.linked() ? "" : computed.model().levels().stream().filter(o -> o.id() == l.typicalOf())
+                .map(StoredLevel::name).findFirst().orElse(""));
         m.put("form", form);
         m.put("touched", ctx.attribute("touched"));
         m.put("units", UnitLabels.of(p.info().units()));
         m.put("sides", BayForm.SIDES);
         m.put("occupancies", catalogue.all());
         m.put("balconies", catalogue.balconies());
-        m.put("table", BayGridView.of(computed.model().building().grid(), bays, catalogue, new HashSet<>(form.values("cells")), UnitLabels.of(p.info().units())));
+        var loads = computed.model().building().lineLoads().stream().filter(w -> w.level().equals(l.name())).toList();
+        m.put("table", BayGridView.of(computed.model().building().grid(), bays, loads, catalogue, new HashSet<>(form.values("cells")),
+                UnitLabels.of(p.info().units())));
+        m.put("slabLimit", UnitLabels.of(p.info().units()).length(com.baysheet.framing.model.SlabSpan.limit(p.info().units())));
         ctx.render("bays/edit", m);
     }
 }

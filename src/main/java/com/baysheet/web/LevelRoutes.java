@@ -22,6 +22,7 @@ final class LevelRoutes {
         r.get("/projects/{project}/levels", this::show, Admit.OFFICE);
         r.post("/projects/{project}/grid", this::updateGrid, Admit.PREPARER);
         r.post("/projects/{project}/levels", this::create, Admit.PREPARER);
+        r.post("/projects/{project}/levels/csv", this::fromTable, Admit.PREPARER);
         r.get("/projects/{project}/levels/{level}/edit", this::editForm, Admit.OFFICE);
         r.post("/projects/{project}/levels/{level}", this::update, Admit.PREPARER);
         r.post("/projects/{project}/levels/{level}/delete", this::delete, Admit.PREPARER);
@@ -52,6 +53,21 @@ final class LevelRoutes {
         form.attempt(() -> store.levels().add(Editors.of(ctx), p.id(), version, v.info()))
                 .ifPresentOrElse(l -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
                         () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, Form.filled(gridValues(p)), form));
+    }
+
+    /** The grid and levels from a table (a CSV file, or its text pasted), every refusal shown at once. */
+    void fromTable(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        Form form = Form.of(ctx);
+        long version = form.version();
+        LayoutCsv table = LayoutCsv.read(TableUpload.text(ctx, form), p.info().units());
+        if (!table.refusals().isEmpty()) form.reject("csv", String.join("; ", table.refusals()));
+        form.attempt(() -> {
+            store.layouts().apply(Editors.of(ctx), p.id(), version, table.grid(), table.levels());
+            return p;
+        }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
+                () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, Form.filled(gridValues(p)),
+                        Form.filled(Map.of("version", String.valueOf(p.version()))), form));
     }
 
     void editForm(Context ctx) {
@@ -92,18 +108,26 @@ final class LevelRoutes {
     }
 
     private void renderPage(Context ctx, Project p, Form gridForm, Form levelForm) {
+        renderPage(ctx, p, gridForm, levelForm, Form.filled(Map.of("version", String.valueOf(p.version()))));
+    }
+
+    private void renderPage(Context ctx, Project p, Form gridForm, Form levelForm, Form csvForm) {
         var computed = store.results().of(p.id());
         Map<String, Object> m = new HashMap<>();
         m.put("project", computed.project());
         m.put("levels", computed.model().levels());
+        Map<Long, String> names = new HashMap<>();
+        for (StoredLevel l : computed.model().levels()) names.put(l.id(), l.name());
+        m.put("levelNames", names);
         m.put("grid", computed.model().building().grid());
         m.put("units", UnitLabels.of(p.info().units()));
         m.put("gridForm", gridForm);
         m.put("levelForm", levelForm);
+        m.put("csvForm", csvForm);
         ctx.render("levels/index", m);
     }
 
     private void renderEdit(Context ctx, Project p, StoredLevel l, Form form) {
-        ctx.render("levels/edit", Map.of("project", p, "level", l, "form", form, "units", UnitLabels.of(p.info().units())));
+        LevelPage.render(ctx, store, p, l, form, Form.filled(Map.of("version", form.value("version"))));
     }
 }

@@ -129,8 +129,11 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
         new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
         new BackupRoutes(ds, review.audit(), clock).install(r);
+        new ModelFileRoutes(store).install(r); // before ProjectRoutes: /projects/import is not a project id
         new ProjectRoutes(store).install(r);
         new LevelRoutes(store).install(r);
+        new TypicalRoutes(store).install(r);
+        new UnitRoutes(store).install(r);
         new BayRoutes(store).install(r);
         new LineLoadRoutes(store).install(r);
         new PointLoadRoutes(store).install(r);
@@ -143,6 +146,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new SubmittalRoutes(store).install(r);
         new OccupancyRoutes(store).install(r);
         new ApiRoutes(store).install(r);
+        new ApiTypicalRoutes(store).install(r);
         new ApiResultRoutes(store).install(r);
         new ReviewRoutes(store, review, issuing).install(r);
         new MarkRoutes(store).install(r);

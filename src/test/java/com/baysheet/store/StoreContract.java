@@ -30,12 +30,15 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 /** The store's behaviour, run against each database with the real migrations. */
-abstract class StoreContract implements LineLoadContract, FloorMethodContract {
+abstract class StoreContract implements LineLoadContract, FloorMethodContract, TypicalLevelContract, ModelFileContract {
     protected Database db;
     protected Store store;
 
     @Override
     public Store store() { return store; }
+
+    @Override
+    public Database database() { return db; }
 
     /** A URL of an empty database for one test. */
     protected abstract String freshUrl();

@@ -53,7 +53,7 @@ class BalconyPagesTest {
         assertThat(choice.selectFirst("option[selected]").text()).startsWith("Balcony or deck serving the bay");
         assertThat(choice.select("option").eachAttr("value")).contains("balcony:office");
         assertThat(choice.select("option").eachText()).contains("Balcony or deck serving Offices — 75.0 psf");
-        assertThat(Html.shown(page)).contains("cantilever north (Balcony or deck serving Assembly: movable seats)", "licensed engineer");
+        assertThat(Html.shown(page)).contains("cantilever north 6.00 ft (Balcony or deck serving Assembly: movable seats)", "licensed engineer");
         assertThat(Html.all(page, "[data-cantilever-occupancy]")).isEmpty();
     }
 
@@ -74,7 +74,7 @@ class BalconyPagesTest {
         assertThat(stored).filteredOn(b -> !b.cantilevers().isEmpty()).hasSize(2).allMatch(b -> "office".equals(b.cantileverOccupancy()));
         String after = server.get(bays("Level 3")).body();
         assertThat(Html.all(after, "[data-cantilever-occupancy]").eachAttr("data-cantilever-occupancy")).isNotEmpty().containsOnly("office");
-        assertThat(Html.shown(after)).contains("cantilever north (Offices)");
+        assertThat(Html.shown(after)).contains("cantilever north 6.00 ft (Offices)");
 
         // back to the default: the blank choice stores NULL
         assertThat(server.post(bays("Level 3"), assembly("")).statusCode()).isEqualTo(303);

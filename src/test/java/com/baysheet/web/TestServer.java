@@ -82,6 +82,9 @@ final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCall
         return engineer.json(method, path, json);
     }
 
+    /** The server's address, for a request the helpers here do not build (a multipart upload). */
+    String base() { return "http://127.0.0.1:" + app.port(); }
+
     @Override
     public void close() {
         app.stop();

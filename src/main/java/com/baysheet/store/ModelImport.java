@@ -1,0 +1,106 @@
+package com.baysheet.store;
+
+import com.baysheet.project.ProjectInfo;
+import com.baysheet.project.Project;
+import com.baysheet.engine.InputError;
+import com.baysheet.framing.model.Grid;
+import com.baysheet.framing.model.Limits;
+import com.fasterxml.jackson.databind.JsonNode;
+
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.time.OffsetDateTime;
+import java.util.HashMap;
+import java.util.Map;
+
+/**
+ * A new project from a model file ({@link ModelExport}'s shape), in one transaction: the project, its grid, its
+ * levels with their bays and line loads, then the typical links, derived and checked like every change. A value
+ * the file gets wrong is refused naming where it is ("levels[Level 2].bays[1].occupancy") and nothing is stored.
+ */
+public final class ModelImport {
+    private final ModelWrites writes;
+
+    public ModelImport(ModelWrites writes) {
+        this.writes = writes;
+    }
+
+    /** @param jobNumber the new project's job number, or blank for the file's own */
+    public Project create(Editor who, JsonNode file, String jobNumber) {
+        if (file == null || !file.isObject()) throw new InputError("file", "not a JSON object", "is not a model file");
+        if (file.path("format").isIntegralNumber() && file.path("format").asInt() > ModelExport.FORMAT)
+            throw new InputError("format", file.path("format"), "is a later model file than this server reads (" + ModelExport.FORMAT + ")");
+        ProjectInfo read = ModelJson.project(file.path("project"));
+        ProjectInfo info = jobNumber == null || jobNumber.isBlank() ? read : new ProjectInfo(jobNumber, read.name(),
+                read.address(), read.client(), read.edition(), read.units(), read.partitionAllowance(), read.reducePartitions(),
+                read.upliftReducedDead(), read.snow());
+        Grid grid = ModelJson.grid(file.path("grid"));
+        JsonNode levels = file.path("levels");
+        if (!levels.isMissingNode() && !levels.isArray()) throw new InputError("levels", levels.getNodeType(), "must be a list of levels");
+        Limits.count("levels", levels.size(), Limits.MAX_LEVELS, "levels in a project");
+        return writes.create(who, "project imported from a model file: " + info.name() + ", " + levels.size() + " levels",
+                c -> insert(c, info, grid, withIds(file.path("grid"), grid), levels, writes.sql().stamp()));
+    }
+
+    private static long insert(Connection c, ProjectInfo info, Grid grid, Grid given, JsonNode levels, OffsetDateTime now) throws SQLException {
+        long id = ProjectStore.insert(c, info, grid, now);
+        if (given != null) GridStore.createAsGiven(c, id, given);
+        Grid stored = GridStore.find(c, id);
+        Map<String, Long> ids = new HashMap<>();
+        for (JsonNode l : levels) {
+            String where = "levels[" + l.path("name").asText("?") + "].";
+            long levelId = within(where, () -> LevelStore.insert(c, id, ModelJson.level(l)).id());
+            ids.put(l.path("name").asText().strip().toLowerCase(), levelId);
+            int i = 0;
+            for (JsonNode b : l.path("bays")) {
+                String at = where + "bays[" + i++ + "].";
+                within(at, () -> { BayStore.put(c, id, levelId, ModelJson.bays(b, stored)); return null; });
+            }
+            for (JsonNode w : l.path("lineLoads")) {
+                String at = where + "lineLoads[" + w.path("label").asText("?") + "].";
+                within(at, () -> LineLoadStore.insert(c, id, levelId, ModelJson.lineLoad(w)));
+            }
+        }
+        for (JsonNode l : levels) {
+            if (!l.hasNonNull("sameAs")) continue;
+            String where = "levels[" + l.path("name").asText() + "].";
+            Long typical = ids.get(l.get("sameAs").asText().strip().toLowerCase());
+            if (typical == null) throw new InputError(where + "sameAs", l.get("sameAs").asText(), "names no level of this file");
+            if (l.path("bays").size() > 0)
+                throw new InputError(where + "bays", l.path("bays").size() + " entries", "a level the same as another has no bays of its own");
+            long levelId = ids.get(l.path("name").asText().strip().toLowerCase());
+            within(where, () -> { TypicalLevels.linkIn(c, id, typical, levelId); return null; });
+        }
+        return id;
+    }
+
+    /** The grid with the line ids the file gives on both axes, or null where it gives none (fresh ids then). */
+    private static Grid withIds(JsonNode n, Grid grid) {
+        if (!n.path("x").has("ids") && !n.path("y").has("ids")) return null;
+        return new Grid(grid.x().withIds(ids(n, "x")), grid.y().withIds(ids(n, "y")));
+    }
+
+    private static java.util.List<Integer> ids(JsonNode n, String axis) {
+        java.util.List<Integer> out = new java.util.ArrayList<>();
+        for (JsonNode id : n.path(axis).path("ids")) {
+            if (!id.isIntegralNumber() || !id.canConvertToInt()) throw new InputError("grid." + axis + ".ids", id, "a grid line id is a whole number");
+            out.add(id.asInt());
+        }
+        return out;
+    }
+
+    private interface Step<T> {
+        T run() throws SQLException;
+    }
+
+    /** Runs a step, naming where in the file a value it refuses is. */
+    private static <T> T within(String where, Step<T> step) throws SQLException {
+        try {
+            return step.run();
+        } catch (InputError e) {
+            String problem = e.problem(), got = " (got " + e.value() + ")";
+            if (problem.endsWith(got)) problem = problem.substring(0, problem.length() - got.length());
+            throw new InputError(where + e.field(), e.value(), problem);
+        }
+    }
+}
