@@ -41,8 +41,8 @@ public final class BackupRoutes {
     }
 
     public void install(RoutesConfig r) {
-        r.get("/admin/backup", this::page);
-        r.post("/admin/backup", this::download);
+        r.get("/admin/backup", this::page, Admit.ADMINISTRATOR);
+        r.post("/admin/backup", this::download, Admit.ADMINISTRATOR);
     }
 
     void page(Context ctx) {

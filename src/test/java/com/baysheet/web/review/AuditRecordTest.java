@@ -61,11 +61,13 @@ class AuditRecordTest {
         // a sheet of its own (a column's), submitted by the engineer, who then tries to approve it
         String member = server.store.results().of(server.project()).derived().members().stream()
                 .filter(m -> m.kind().name().contains("COLUMN")).findFirst().orElseThrow().id();
-        String sheet = "/review/projects/" + server.project() + "/members/" + member;
+        // the member's address leads to its mark's sheet, the unit of review
+        String sheet = eng.get("/review/projects/" + server.project() + "/members/" + member).headers().firstValue("Location").orElseThrow();
         String html = eng.get(sheet).body();
         assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
-        String v = String.valueOf(server.office.review().reviews().view(new com.baysheet.review.SheetRef(server.project(), member))
-                .current().version());
+        long markId = Long.parseLong(sheet.substring(sheet.lastIndexOf('/') + 1));
+        String v = String.valueOf(server.office.review().reviews().view(new com.baysheet.review.SheetRef(server.project(),
+                com.baysheet.review.MarkSheets.PREFIX + markId)).current().version());
         assertThat(eng.post(sheet + "/approve", List.of(Map.entry("version", v))).statusCode()).isEqualTo(403);
         List<AuditEvent> refused = actions("review action refused").stream().filter(e -> e.actorUsername().equals("evan")).toList();
         assertThat(refused).singleElement().satisfies(e -> assertThat(e.subject()).isEqualTo("POST " + sheet + "/approve"));
@@ -81,8 +83,9 @@ class AuditRecordTest {
         html = chk.get(sheet).body();
         chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve"))));
         html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")))).statusCode()).isEqualTo(303);
-        String pdfPath = first(eng.get(sheet).body(), "href=\"(/review/revisions/\\d+/issued\\.pdf)\"");
+        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")), Map.entry("description", "First issue")))
+                .statusCode()).isEqualTo(303);
+        String pdfPath = com.baysheet.web.Html.one(eng.get(sheet).body(), "a[href$=/issued.pdf]").attr("href");
         byte[] pdf = eng.getBytes(pdfPath).body();
 
         String text;
