@@ -7,6 +7,8 @@ import com.baysheet.project.LevelInfo;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
+import com.baysheet.framing.model.GridPointLoad;
+import com.baysheet.framing.model.Submittal;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -19,8 +21,8 @@ import java.util.Map;
 
 /**
  * A project's model as one JSON file, in the fields the API and {@link ModelJson} read (docs/api.md): the project's
- * settings, the grid, and each level with its bays (bays that hold the same are one entry with their cells), its
- * line loads and, for a typical level, {@code sameAs} naming its typical instead of bays. The grid lines carry their
+ * settings (with its own self weights where it states them, and its submittal data), the grid, and each level with its bays (bays that hold the same are one entry with their cells), its
+ * line and point loads and, for a typical level, {@code sameAs} naming its typical instead of bays. The grid lines carry their
  * stable ids, so that member ids (which follow the lines) come back the same. Numbers are written in
  * full (Jackson writes the shortest text that reads back as the same double), so an import derives the same members.
  */
@@ -46,6 +48,11 @@ public final class ModelExport {
         ObjectNode out = JSON.createObjectNode();
         out.put("format", FORMAT);
         out.set("project", JSON.valueToTree(p.info()));
+        SelfWeightStore.own(c, projectId).ifPresent(w -> out.set("selfWeights", JSON.valueToTree(w)));
+        Submittal site = SubmittalStore.find(c, projectId);
+        ObjectNode sub = out.putObject("submittal");
+        sub.put("engineerOfRecord", site.engineerOfRecord()).put("licenceNumber", site.licenceNumber())
+                .put("licenceState", site.licenceState()).put("buildingCode", site.buildingCode()).put("codeYear", site.codeYear());
         ObjectNode grid = out.putObject("grid");
         axis(grid.putObject("x"), g.x());
         axis(grid.putObject("y"), g.y());
@@ -59,6 +66,8 @@ public final class ModelExport {
             else bays(n.putArray("bays"), BayStore.findByLevel(c, l.id(), g));
             ArrayNode loads = n.putArray("lineLoads");
             for (StoredLineLoad w : LineLoadStore.findByLevel(c, l.id(), g)) lineLoad(loads.addObject(), w);
+            ArrayNode points = n.putArray("pointLoads");
+            for (GridPointLoad q : PointLoadStore.forBuilding(c, g, List.of(l))) pointLoad(points.addObject(), q, g);
         }
         return out;
     }
@@ -113,6 +122,20 @@ public final class ModelExport {
         }
         if (b.cantileverOccupancy() != null) n.put("cantileverOccupancy", b.cantileverOccupancy());
         return n;
+    }
+
+    /** A point load by the names of the lines it is placed by, in the fields {@link ModelJson#pointLoad} reads. */
+    private static void pointLoad(ObjectNode n, GridPointLoad q, Grid g) {
+        n.put("label", q.label());
+        if (q.inBay()) {
+            n.put("xLine", g.x().name(q.col())).put("yLine", g.y().name(q.row())).put("x", q.x()).put("y", q.y());
+        } else {
+            GridAxis own = q.onXLine() ? g.x() : g.y(), across = q.onXLine() ? g.y() : g.x();
+            n.put("axis", q.onXLine() ? "X" : "Y").put("line", own.name(q.line())).put("from", across.name(q.from()))
+                    .put("to", across.name(q.to())).put("distance", q.distance());
+        }
+        n.put("dead", q.dead()).put("live", q.live());
+        if (q.liveOccupancy() != null) n.put("liveOccupancy", q.liveOccupancy());
     }
 
     /** A cladding load keeps its weight per area and height (the import multiplies them again), any other its dead load. */

@@ -7,6 +7,8 @@ import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.Limits;
 import com.fasterxml.jackson.databind.JsonNode;
 
+import com.baysheet.framing.model.Submittal;
+
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.time.OffsetDateTime;
@@ -33,13 +35,17 @@ public final class ModelImport {
         ProjectInfo read = ModelJson.project(file.path("project"));
         ProjectInfo info = jobNumber == null || jobNumber.isBlank() ? read : new ProjectInfo(jobNumber, read.name(),
                 read.address(), read.client(), read.edition(), read.units(), read.partitionAllowance(), read.reducePartitions(),
-                read.upliftReducedDead(), read.snow());
+                read.upliftReducedDead(), read.snow(), read.floorMethod());
         Grid grid = ModelJson.grid(file.path("grid"));
         JsonNode levels = file.path("levels");
         if (!levels.isMissingNode() && !levels.isArray()) throw new InputError("levels", levels.getNodeType(), "must be a list of levels");
         Limits.count("levels", levels.size(), Limits.MAX_LEVELS, "levels in a project");
         return writes.create(who, "project imported from a model file: " + info.name() + ", " + levels.size() + " levels",
-                c -> insert(c, info, grid, withIds(file.path("grid"), grid), levels, writes.sql().stamp()));
+                c -> {
+                    long id = insert(c, info, grid, withIds(file.path("grid"), grid), levels, writes.sql().stamp());
+                    projectExtras(c, id, file);
+                    return id;
+                });
     }
 
     private static long insert(Connection c, ProjectInfo info, Grid grid, Grid given, JsonNode levels, OffsetDateTime now) throws SQLException {
@@ -60,6 +66,10 @@ public final class ModelImport {
                 String at = where + "lineLoads[" + w.path("label").asText("?") + "].";
                 within(at, () -> LineLoadStore.insert(c, id, levelId, ModelJson.lineLoad(w)));
             }
+            for (JsonNode q : l.path("pointLoads")) {
+                String at = where + "pointLoads[" + q.path("label").asText("?") + "].";
+                within(at, () -> PointLoadStore.insert(c, id, levelId, ModelJson.pointLoad(q)));
+            }
         }
         for (JsonNode l : levels) {
             if (!l.hasNonNull("sameAs")) continue;
@@ -72,6 +82,24 @@ public final class ModelImport {
             within(where, () -> { TypicalLevels.linkIn(c, id, typical, levelId); return null; });
         }
         return id;
+    }
+
+    /** The project's own self weights and its submittal data, where the file gives them. */
+    private static void projectExtras(Connection c, long id, JsonNode file) throws SQLException {
+        JsonNode w = file.path("selfWeights");
+        if (w.isObject()) {
+            com.baysheet.engine.JsonFields f = com.baysheet.engine.JsonFields.of(w);
+            ProjectSelfWeights own = within("selfWeights.", () -> new ProjectSelfWeights(f.number("infillBeam"), f.number("gridBeam"),
+                    f.number("girder"), f.number("column")));
+            SelfWeightStore.write(c, id, own);
+        }
+        JsonNode s = file.path("submittal");
+        if (s.isObject()) {
+            com.baysheet.engine.JsonFields f = com.baysheet.engine.JsonFields.of(s);
+            Submittal site = within("submittal.", () -> new Submittal("", "", f.text("engineerOfRecord", ""), f.text("licenceNumber", ""),
+                    f.text("licenceState", ""), f.text("buildingCode", ""), f.text("codeYear", "")));
+            SubmittalStore.write(c, id, site);
+        }
     }
 
     /** The grid with the line ids the file gives on both axes, or null where it gives none (fresh ids then). */

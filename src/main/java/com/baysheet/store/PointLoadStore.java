@@ -56,7 +56,7 @@ public final class PointLoadStore {
         });
     }
 
-    private static long insert(Connection c, long projectId, long levelId, PointLoadEntry e) throws SQLException {
+    static long insert(Connection c, long projectId, long levelId, PointLoadEntry e) throws SQLException {
         LevelStore.find(c, projectId, levelId);
         Grid g = GridStore.find(c, projectId);
         if (e.liveOccupancy() != null && !OccupancyStore.catalogue(c).contains(e.liveOccupancy()))

@@ -39,18 +39,23 @@ public final class SelfWeightStore {
     /** Sets the project's own values, or with null goes back to the firm's defaults. */
     public void set(Editor who, long projectId, long version, ProjectSelfWeights w) {
         writes.change(who, c -> "self weights set: " + describe(w) + "; was: " + describe(own(c, projectId).orElse(null)), projectId, version, c -> {
-            try (PreparedStatement ps = c.prepareStatement(
-                    "UPDATE project SET sw_infill_beam = ?, sw_grid_beam = ?, sw_girder = ?, sw_column = ? WHERE id = ?")) {
-                double[] v = w == null ? null : new double[] {w.infillBeam(), w.gridBeam(), w.girder(), w.column()};
-                for (int i = 0; i < 4; i++) {
-                    if (v == null) ps.setNull(i + 1, Types.DOUBLE);
-                    else ps.setDouble(i + 1, v[i]);
-                }
-                ps.setLong(5, projectId);
-                ps.executeUpdate();
-            }
+            write(c, projectId, w);
             return null;
         });
+    }
+
+    /** The project's own values (null: the firm's defaults), in the caller's change. */
+    static void write(Connection c, long projectId, ProjectSelfWeights w) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(
+                "UPDATE project SET sw_infill_beam = ?, sw_grid_beam = ?, sw_girder = ?, sw_column = ? WHERE id = ?")) {
+            double[] v = w == null ? null : new double[] {w.infillBeam(), w.gridBeam(), w.girder(), w.column()};
+            for (int i = 0; i < 4; i++) {
+                if (v == null) ps.setNull(i + 1, Types.DOUBLE);
+                else ps.setDouble(i + 1, v[i]);
+            }
+            ps.setLong(5, projectId);
+            ps.executeUpdate();
+        }
     }
 
     /** The weights the project's members carry, with where they come from. */
@@ -63,7 +68,7 @@ public final class SelfWeightStore {
         return firm(c, units);
     }
 
-    private static Optional<ProjectSelfWeights> own(Connection c, long projectId) throws SQLException {
+    static Optional<ProjectSelfWeights> own(Connection c, long projectId) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("SELECT sw_infill_beam, sw_grid_beam, sw_girder, sw_column FROM project WHERE id = ?")) {
             ps.setLong(1, projectId);
             try (ResultSet rs = ps.executeQuery()) {

@@ -30,18 +30,23 @@ public final class SubmittalStore {
     /** Saves the engineer, licence and code over {@code version}; the site address and client are the project's settings. */
     public Submittal save(Editor who, long projectId, long version, Submittal s) {
         return writes.change(who, c -> "submittal data saved: " + said(s) + "; was: " + said(find(c, projectId)), projectId, version, c -> {
-            try (PreparedStatement ps = c.prepareStatement("UPDATE project SET engineer_of_record = ?, licence_number = ?, "
-                    + "licence_state = ?, building_code = ?, code_year = ? WHERE id = ?")) {
-                ps.setString(1, s.engineerOfRecord());
-                ps.setString(2, s.licenceNumber());
-                ps.setString(3, s.licenceState());
-                ps.setString(4, s.buildingCode());
-                ps.setString(5, s.codeYear());
-                ps.setLong(6, projectId);
-                ps.executeUpdate();
-            }
+            write(c, projectId, s);
             return find(c, projectId);
         });
+    }
+
+    /** The engineer, licence and code of {@code s}, in the caller's change. */
+    static void write(Connection c, long projectId, Submittal s) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("UPDATE project SET engineer_of_record = ?, licence_number = ?, "
+                + "licence_state = ?, building_code = ?, code_year = ? WHERE id = ?")) {
+            ps.setString(1, s.engineerOfRecord());
+            ps.setString(2, s.licenceNumber());
+            ps.setString(3, s.licenceState());
+            ps.setString(4, s.buildingCode());
+            ps.setString(5, s.codeYear());
+            ps.setLong(6, projectId);
+            ps.executeUpdate();
+        }
     }
 
     static Submittal find(Connection c, long projectId) throws SQLException {

@@ -41,7 +41,15 @@ public final class UnitConversion {
             new Column("line_load", "dead_load", ON_LEVELS, Quantity.LINE_LOAD),
             new Column("line_load", "dead_pressure", ON_LEVELS, Quantity.PRESSURE),
             new Column("line_load", "height", ON_LEVELS, Quantity.LENGTH),
-            new Column("line_load", "live_load", ON_LEVELS, Quantity.LINE_LOAD));
+            new Column("line_load", "live_load", ON_LEVELS, Quantity.LINE_LOAD),
+            new Column("point_load", "x_offset", ON_LEVELS, Quantity.LENGTH),
+            new Column("point_load", "y_offset", ON_LEVELS, Quantity.LENGTH),
+            new Column("point_load", "dead_load", ON_LEVELS, Quantity.FORCE),
+            new Column("point_load", "live_load", ON_LEVELS, Quantity.FORCE),
+            new Column("project", "sw_infill_beam", PROJECT, Quantity.LINE_LOAD),
+            new Column("project", "sw_grid_beam", PROJECT, Quantity.LINE_LOAD),
+            new Column("project", "sw_girder", PROJECT, Quantity.LINE_LOAD),
+            new Column("project", "sw_column", PROJECT, Quantity.LINE_LOAD));
 
     private final ModelWrites writes;
 

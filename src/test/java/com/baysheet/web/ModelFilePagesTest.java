@@ -79,13 +79,8 @@ class ModelFilePagesTest {
         assertThat(server.store.grids().find(deck).x().spacing(0)).isEqualTo(spanSi / 0.3048);
     }
 
-    private static HttpResponse<String> upload(String content, String jobNumber) throws IOException, InterruptedException {
-        String b = "----baysheet-test-boundary";
-        String body = "--" + b + "\r\nContent-Disposition: form-data; name=\"jobNumber\"\r\n\r\n" + jobNumber + "\r\n"
-                + "--" + b + "\r\nContent-Disposition: form-data; name=\"file\"; filename=\"model.json\"\r\n"
-                + "Content-Type: application/json\r\n\r\n" + content + "\r\n--" + b + "--\r\n";
-        return HttpClient.newHttpClient().send(HttpRequest.newBuilder(URI.create(server.base() + "/projects/import"))
-                .header("Content-Type", "multipart/form-data; boundary=" + b)
-                .POST(HttpRequest.BodyPublishers.ofString(body, StandardCharsets.UTF_8)).build(), HttpResponse.BodyHandlers.ofString());
+    private static HttpResponse<String> upload(String content, String jobNumber) {
+        return server.engineer.upload("/projects/import", java.util.Map.of("jobNumber", jobNumber), "file", "model.json",
+                "application/json", content.getBytes(StandardCharsets.UTF_8));
     }
 }

@@ -55,8 +55,7 @@ class SchedulePagesTest {
 
     @Test
     void theXlsxOpensWithTheMembersAsNumberCells() throws Exception {
-        HttpResponse<byte[]> r = HttpClient.newHttpClient().send(HttpRequest.newBuilder(
-                URI.create("http://127.0.0.1:" + server.app.port() + base() + "/schedules/members.xlsx")).build(), HttpResponse.BodyHandlers.ofByteArray());
+        HttpResponse<byte[]> r = server.engineer.getBytes(base() + "/schedules/members.xlsx");
         assertThat(r.statusCode()).isEqualTo(200);
         assertThat(r.headers().firstValue("Content-Type").orElse("")).contains("spreadsheetml");
         var s = MemberSchedule.of(alder.derived());

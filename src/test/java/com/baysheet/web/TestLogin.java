@@ -134,12 +134,20 @@ public final class TestLogin {
             return send(b.build());
         }
 
-        /** Uploads one file as multipart/form-data field {@code field}, with the token. */
+        /** Uploads one PDF as multipart/form-data field {@code field}, with the token. */
         public HttpResponse<String> upload(String path, String field, String filename, byte[] content) {
+            return upload(path, java.util.Map.of(), field, filename, "application/pdf", content);
+        }
+
+        /** Uploads one file as multipart/form-data field {@code field} beside the text fields given, with the token. */
+        public HttpResponse<String> upload(String path, java.util.Map<String, String> fields, String field, String filename,
+                                           String contentType, byte[] content) {
             String boundary = "----baysheet-test-boundary";
-            byte[] head = ("--" + boundary + "\r\nContent-Disposition: form-data; name=\"_csrf\"\r\n\r\n" + csrf + "\r\n--"
-                    + boundary + "\r\nContent-Disposition: form-data; name=\"" + field + "\"; filename=\"" + filename
-                    + "\"\r\nContent-Type: application/pdf\r\n\r\n").getBytes(StandardCharsets.UTF_8);
+            StringBuilder text = new StringBuilder("--" + boundary + "\r\nContent-Disposition: form-data; name=\"_csrf\"\r\n\r\n" + csrf + "\r\n");
+            fields.forEach((k, v) -> text.append("--").append(boundary).append("\r\nContent-Disposition: form-data; name=\"").append(k)
+                    .append("\"\r\n\r\n").append(v).append("\r\n"));
+            byte[] head = (text + "--" + boundary + "\r\nContent-Disposition: form-data; name=\"" + field + "\"; filename=\"" + filename
+                    + "\"\r\nContent-Type: " + contentType + "\r\n\r\n").getBytes(StandardCharsets.UTF_8);
             byte[] tail = ("\r\n--" + boundary + "--\r\n").getBytes(StandardCharsets.UTF_8);
             byte[] body = new byte[head.length + content.length + tail.length];
             System.arraycopy(head, 0, body, 0, head.length);
