@@ -72,7 +72,8 @@ class CrashSafetyIT {
                 jobs.add(p.path("info").path("jobNumber").asText());
                 versions.put(p.path("id").asLong(), p.path("version").asLong());
             }
-            assertThat(jobs).as("every project answered 201 is there").containsAll(ackedProjects);
+            assertThat(jobs).as("every project answered 201 is there (server logs: %s, %s)", first.log, second.log)
+                    .containsAll(ackedProjects);
             ackedVersions.forEach((id, v) -> assertThat(versions.get(id)).as("project " + id + " reached its answered version")
                     .isGreaterThanOrEqualTo(v));
             Set<String> occupancies = new java.util.HashSet<>();
