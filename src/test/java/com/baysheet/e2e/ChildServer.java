@@ -95,15 +95,23 @@ final class ChildServer implements AutoCloseable {
         }
     }
 
+    /**
+     * Waits until /health on the port answers 200 and this process's console says it listens on that port. The port
+     * was free when {@link #freePort} closed it, but the server binds it only after opening and migrating the
+     * database (seconds on a loaded machine), and in that window another process on the machine may take it: then
+     * the answer would come from a stranger, and a test would read another server's data as this one's. One
+     * listener per port, so the line in this process's own log makes the answer this process's.
+     */
     private void awaitHealthy() throws InterruptedException {
         HttpClient c = HttpClient.newBuilder().connectTimeout(Duration.ofSeconds(2)).build();
         long deadline = System.nanoTime() + STARTUP.toNanos();
+        String bound = "listening on 127.0.0.1:" + port + " ";
         while (System.nanoTime() < deadline) {
             if (!process.isAlive()) throw new IllegalStateException("server exited with " + process.exitValue() + ":\n" + logText());
             try {
                 HttpResponse<String> r = c.send(HttpRequest.newBuilder(URI.create(base() + "/health")).timeout(Duration.ofSeconds(5)).build(),
                         HttpResponse.BodyHandlers.ofString());
-                if (r.statusCode() == 200) return;
+                if (r.statusCode() == 200 && logText().contains(bound)) return;
             } catch (IOException e) {
                 // not listening yet
             }
