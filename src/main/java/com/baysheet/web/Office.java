@@ -26,6 +26,7 @@ import com.baysheet.web.review.Refusals;
 import com.baysheet.web.review.ReviewRoutes;
 import io.javalin.Javalin;
 import io.javalin.config.RoutesConfig;
+import org.eclipse.jetty.http.HttpException;
 import io.javalin.config.SizeUnit;
 import io.javalin.http.staticfiles.Location;
 
@@ -102,7 +103,17 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
             if (!ctx.path().startsWith("/static/")) ctx.header("Cache-Control", "no-store");
         });
         r.before(Saved::onRequest);
+        // a body declared larger than the largest upload (a PDF to verify) is refused from its length, unread:
+        // no thread reads what would be refused anyway, and a client that asks first (Expect: 100-continue, as
+        // curl does for a large body) is told before it sends a byte of it
+        r.before(ctx -> {
+            if (ctx.req().getContentLengthLong() > MAX_BODY_BYTES)
+                throw new HttpException.RuntimeException(413, "larger than any form or sheet this server takes");
+        });
     }
+
+    /** The largest body any route reads: the multipart limit of the verify upload (51 MB). */
+    static final long MAX_BODY_BYTES = 51L * 1024 * 1024;
 
     private static void exceptions(RoutesConfig r, Access access, AuditRecorder recorder) {
         r.exception(AccessRefused.class, Refusals::access);
