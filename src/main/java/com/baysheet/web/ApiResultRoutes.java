@@ -22,7 +22,9 @@ final class ApiResultRoutes {
         r.get("/api/projects/{project}/members", this::members, Admit.OFFICE);
         r.get("/api/projects/{project}/members/{member}", ctx -> {
             DerivedMember m = member(ctx);
-            Json.send(ctx, new ApiViews.MemberDetail(ApiViews.MemberJson.of(m), m.result().record(), m.result().methods()));
+            Results.Computed c = results(ctx);
+            String mark = store.marks().of(c.project().id(), c.derived()).label(m.id());
+            Json.send(ctx, new ApiViews.MemberDetail(ApiViews.MemberJson.of(m), mark, m.result().record(), m.result().methods()));
         }, Admit.OFFICE);
         r.get("/api/projects/{project}/members/{member}/record", ctx ->
                 ctx.contentType("application/json; charset=utf-8").result(RecordJson.write(member(ctx).result().record())), Admit.OFFICE);

@@ -70,7 +70,9 @@ final class ApiViews {
     }
 
     /** A member, its record, and its floor live load under each reduction method its project could choose (own first). */
-    record MemberDetail(MemberJson member, CalcRecord record, java.util.List<com.baysheet.engine.member.MethodComparison.Row> methods) {}
+    /** @param mark the typical member's mark the member is calculated under (its sheet's name) */
+    record MemberDetail(MemberJson member, String mark, CalcRecord record,
+                        java.util.List<com.baysheet.engine.member.MethodComparison.Row> methods) {}
 
     record TakeDownJson(String id, String gridPoint, List<TakeDown.Row> rows, CalcRecord record) {
         static TakeDownJson of(TakeDown t) { return new TakeDownJson(t.id(), t.gridPoint(), t.rows(), t.record()); }

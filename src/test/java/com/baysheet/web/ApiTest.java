@@ -43,6 +43,10 @@ class ApiTest {
         String memberId = members.get(0).get("id").asText();
         JsonNode detail = json(server.get("/api/projects/" + id + "/members/" + memberId));
         assertThat(detail.get("member").get("role").asText()).isEqualTo("GIRDER");
+        // the mark it is calculated under: the same as its sheet's, a girder's G prefix
+        var computed = server.store.results().of(id);
+        assertThat(detail.get("mark").asText()).startsWith("G").isNotEqualTo(memberId)
+                .isEqualTo(server.store.marks().of(id, computed.derived()).label(memberId));
         assertThat(detail.get("record").get("steps").size()).isPositive();
         assertThat(json(server.get("/api/projects/" + id + "/takedowns")).size())
                 .isEqualTo(server.store.results().of(id).derived().takeDowns().size()).isPositive();
