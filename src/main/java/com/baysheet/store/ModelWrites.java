@@ -62,8 +62,8 @@ public final class ModelWrites {
             Instant at = sql.now();
             long next = ProjectStore.touch(c, projectId, version, at);
             String said = action.run(c);
-            IssuedChanges.Snapshot before = issuedBefore(c, projectId);
             Model was = BuildingMapper.load(c, projectId);
+            IssuedChanges.Snapshot before = issuedBefore(c, projectId, was);
             T result = work.run(c);
             Model m = BuildingMapper.load(c, projectId);
             String diff = ModelDiff.between(was, m);
@@ -109,7 +109,7 @@ public final class ModelWrites {
         try {
             sql.tx(c -> {
                 ProjectStore.touch(c, projectId, version, sql.now());
-                IssuedChanges.Snapshot before = issuedBefore(c, projectId);
+                IssuedChanges.Snapshot before = issuedBefore(c, projectId, BuildingMapper.load(c, projectId));
                 work.run(c);
                 Model m = BuildingMapper.load(c, projectId);
                 Derived d = checked(m);
@@ -122,12 +122,12 @@ public final class ModelWrites {
     }
 
     /**
-     * How the project's issued sheets print before the change (derived only where some sheet is issued). A model
-     * that no longer derives compares as empty, so every issued sheet counts as changed.
+     * How the project's issued sheets print before the change, from the model {@code m} as it stands before it
+     * (derived only where some sheet is issued). A model that no longer derives compares as empty, so every issued
+     * sheet counts as changed.
      */
-    private IssuedChanges.Snapshot issuedBefore(Connection c, long projectId) throws SQLException {
+    private IssuedChanges.Snapshot issuedBefore(Connection c, long projectId, Model m) throws SQLException {
         if (!IssuedChanges.any(c, projectId)) return IssuedChanges.Snapshot.NONE;
-        Model m = BuildingMapper.load(c, projectId);
         Derived d;
         try {
             d = m.building().levels().isEmpty() ? new Derived(m.building(), List.of(), List.of()) : derive.apply(m.building());
