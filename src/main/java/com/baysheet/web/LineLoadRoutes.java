@@ -1,78 +1,35 @@
 package com.baysheet.web;
 
 import com.baysheet.project.LineLoadEntry;
-import com.baysheet.project.Project;
-import com.baysheet.project.StoredLevel;
+import com.baysheet.store.Editor;
+import com.baysheet.store.LineLoadStore;
 import com.baysheet.store.Store;
-import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
-import io.javalin.http.Context;
 
-import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 
 /** A level's line loads (cladding, walls, parapets along grid lines): listed, added, and deleted after a confirmation. */
 final class LineLoadRoutes {
-    private final Store store;
+    private final LevelLoadRoutes<LineLoadEntry> pages;
 
     LineLoadRoutes(Store store) {
-        this.store = store;
+        LineLoadStore loads = store.lineLoads();
+        pages = new LevelLoadRoutes<>(store, "line-loads", "lineloads/list", Map.of("deadBy", "pressure"),
+                (form, units) -> LineLoadForm.read(form), Ids::lineLoad, new LevelLoadRoutes.Loads<>() {
+                    public List<?> findByLevel(long project, long level) { return loads.findByLevel(project, level); }
+
+                    public Object add(Editor who, long project, long version, long level, LineLoadEntry e) {
+                        return loads.add(who, project, version, level, e);
+                    }
+
+                    public void delete(Editor who, long project, long version, long level, long id) {
+                        loads.delete(who, project, version, level, id);
+                    }
+                });
     }
 
     void install(RoutesConfig r) {
-        r.get("/projects/{project}/levels/{level}/line-loads", this::list, Admit.OFFICE);
-        r.post("/projects/{project}/levels/{level}/line-loads", this::add, Admit.PREPARER);
-        r.post("/projects/{project}/levels/{level}/line-loads/{lineLoad}/delete", this::delete, Admit.PREPARER);
-    }
-
-    void list(Context ctx) {
-        Project p = store.projects().find(Ids.project(ctx));
-        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
-        render(ctx, p, l, Form.filled(new HashMap<>(Map.of("version", String.valueOf(p.version()), "deadBy", "pressure"))),
-                Form.filled(Map.of()));
-    }
-
-    void add(Context ctx) {
-        Project p = store.projects().find(Ids.project(ctx));
-        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
-        Form form = Form.of(ctx);
-        long version = form.version();
-        LineLoadEntry e = LineLoadForm.read(form);
-        form.attempt(() -> store.lineLoads().add(Editors.of(ctx), p.id(), version, l.id(), e))
-                .ifPresentOrElse(saved -> Pages.seeOther(ctx, path(p, l)),
-                        () -> render(ctx.status(form.stale() ? 409 : 422), p, l, form, Form.filled(Map.of())));
-    }
-
-    /** Deletes only with the confirmation box ticked: a line load's weight leaves every member beneath it. */
-    void delete(Context ctx) {
-        Project p = store.projects().find(Ids.project(ctx));
-        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
-        long id = Ids.lineLoad(ctx);
-        Form form = Form.of(ctx);
-        long version = form.version();
-        if (!form.checked("confirm")) form.reject("confirm", "tick the box to confirm the deletion");
-        form.attempt(() -> { store.lineLoads().delete(Editors.of(ctx), p.id(), version, l.id(), id); return id; })
-                .ifPresentOrElse(done -> Pages.seeOther(ctx, path(p, l)), () -> render(ctx.status(form.stale() ? 409 : 422), p, l,
-                        Form.filled(new HashMap<>(Map.of("version", String.valueOf(p.version()), "deadBy", "pressure"))),
-                        form));
-    }
-
-    private void render(Context ctx, Project p, StoredLevel l, Form form, Form deleteForm) {
-        var computed = store.results().of(p.id());
-        Map<String, Object> m = new HashMap<>();
-        m.put("project", computed.project());
-        m.put("level", l);
-        m.put("levels", computed.model().levels());
-        m.put("grid", computed.model().building().grid());
-        m.put("loads", store.lineLoads().findByLevel(p.id(), l.id()));
-        m.put("form", form);
-        m.put("deleteForm", deleteForm);
-        m.put("units", UnitLabels.of(p.info().units()));
-        m.put("occupancies", computed.model().building().context().catalogue().all());
-        ctx.render("lineloads/list", m);
-    }
-
-    private static String path(Project p, StoredLevel l) {
-        return "/projects/" + p.id() + "/levels/" + l.id() + "/line-loads";
+        pages.install(r, "lineLoad");
     }
 }

@@ -1,0 +1,116 @@
+package com.baysheet.web;
+
+import com.baysheet.engine.units.UnitSystem;
+import com.baysheet.project.Project;
+import com.baysheet.project.StoredLevel;
+import com.baysheet.store.Editor;
+import com.baysheet.store.Store;
+import com.baysheet.web.auth.Admit;
+import io.javalin.config.RoutesConfig;
+import io.javalin.http.Context;
+
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.BiFunction;
+import java.util.function.ToLongFunction;
+
+/**
+ * The pages of one kind of load placed on a level (line loads, point loads): listed with the form to add one,
+ * added, and deleted only with the confirmation box ticked (the load leaves every member that carried it).
+ *
+ * @param <E> what the add form reads
+ */
+final class LevelLoadRoutes<E> {
+    /** Where the loads of this kind are kept. */
+    interface Loads<E> {
+        List<?> findByLevel(long project, long level);
+
+        Object add(Editor who, long project, long version, long level, E entry);
+
+        void delete(Editor who, long project, long version, long level, long id);
+    }
+
+    private final Store store;
+    private final String segment, template;
+    private final Map<String, String> start;
+    private final BiFunction<Form, UnitSystem, E> read;
+    private final ToLongFunction<Context> id;
+    private final Loads<E> loads;
+
+    /**
+     * @param segment the path under the level ({@code line-loads}) and {@code id} the load's id from its path parameter
+     * @param start   the add form's starting choices besides the version
+     */
+    LevelLoadRoutes(Store store, String segment, String template, Map<String, String> start, BiFunction<Form, UnitSystem, E> read,
+                    ToLongFunction<Context> id, Loads<E> loads) {
+        this.store = store;
+        this.segment = segment;
+        this.template = template;
+        this.start = start;
+        this.read = read;
+        this.id = id;
+        this.loads = loads;
+    }
+
+    void install(RoutesConfig r, String idParameter) {
+        String base = "/projects/{project}/levels/{level}/" + segment;
+        r.get(base, this::list, Admit.OFFICE);
+        r.post(base, this::add, Admit.PREPARER);
+        r.post(base + "/{" + idParameter + "}/delete", this::delete, Admit.PREPARER);
+    }
+
+    void list(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
+        render(ctx, p, l, fresh(p), Form.filled(Map.of()));
+    }
+
+    void add(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
+        Form form = Form.of(ctx);
+        long version = form.version();
+        E e = read.apply(form, p.info().units());
+        form.attempt(() -> loads.add(Editors.of(ctx), p.id(), version, l.id(), e))
+                .ifPresentOrElse(saved -> Pages.seeOther(ctx, path(p, l)),
+                        () -> render(ctx.status(form.stale() ? 409 : 422), p, l, form, Form.filled(Map.of())));
+    }
+
+    void delete(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
+        long load = id.applyAsLong(ctx);
+        Form form = Form.of(ctx);
+        long version = form.version();
+        if (!form.checked("confirm")) form.reject("confirm", "tick the box to confirm the deletion");
+        form.attempt(() -> { loads.delete(Editors.of(ctx), p.id(), version, l.id(), load); return load; })
+                .ifPresentOrElse(done -> Pages.seeOther(ctx, path(p, l)),
+                        () -> render(ctx.status(form.stale() ? 409 : 422), p, l, fresh(p), form));
+    }
+
+    private Form fresh(Project p) {
+        Map<String, String> values = new HashMap<>(start);
+        values.put("version", String.valueOf(p.version()));
+        return Form.filled(values);
+    }
+
+    private void render(Context ctx, Project p, StoredLevel l, Form form, Form deleteForm) {
+        var computed = store.results().of(p.id());
+        Map<String, Object> m = new HashMap<>();
+        m.put("project", computed.project());
+        m.put("level", l);
+        m.put("levels", computed.model().levels());
+        m.put("grid", computed.model().building().grid());
+        m.put("loads", loads.findByLevel(p.id(), l.id()));
+        m.put("form", form);
+        m.put("deleteForm", deleteForm);
+        m.put("units", UnitLabels.of(p.info().units()));
+        m.put("occupancies", computed.model().building().context().catalogue().all());
+        ctx.render(template, m);
+    }
+
+    private String path(Project p, StoredLevel l) {
+        return "/projects/" + p.id() + "/levels/" + l.id() + "/" + segment;
+    }
+}
