@@ -64,7 +64,9 @@ final class PackagePdfs {
         List<MemberSheet> sheets = s.scope().marks(d, s.marks()).stream()
                 .map(m -> FramingSheets.typical(TitleBlocks.mark(firm, s.computed().project().info(), bySubject, m, project, today), d, m.group(), m.text()))
                 .toList();
-        return s.scope().isProject() ? FramingSheets.projectOf(h, d, log, sheets) : FramingSheets.levelOf(h, d, s.scope().level(), log, sheets);
+        var marks = s.marks().labels();
+        return s.scope().isProject() ? FramingSheets.projectOf(h, d, log, sheets, marks)
+                : FramingSheets.levelOf(h, d, s.scope().level(), log, sheets, marks);
     }
 
     /** Adds a line for each issued revision numbered below {@code below}; returns the last one's record (null if none). */

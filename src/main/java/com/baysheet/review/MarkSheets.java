@@ -2,6 +2,8 @@ package com.baysheet.review;
 
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.MemberLabel;
+import com.baysheet.framing.MemberLabels;
 import com.baysheet.framing.TypicalGroup;
 
 import java.util.HashMap;
@@ -58,6 +60,17 @@ public final class MarkSheets {
     public String label(String memberId) {
         MarkSheet s = byMember.get(memberId);
         return s == null ? memberId : s.text();
+    }
+
+    /**
+     * The labelling the plans and schedules print: each member's mark, and for a member with none (a model not
+     * written since marks came in) its place, never its id.
+     */
+    public MemberLabels labels() {
+        return m -> {
+            MarkSheet s = byMember.get(m.id());
+            return s == null ? MemberLabel.of(m) : s.text();
+        };
     }
 
     /** The mark id a sheet subject names, or empty when the subject is not a mark sheet's. */

@@ -6,6 +6,7 @@ import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.Derived;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.MemberLabel;
+import com.baysheet.framing.MemberLabels;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
@@ -17,19 +18,22 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
-/** Framing plans from a derived model: one per level, with every member labelled by {@link MemberLabel}. */
+/** Framing plans from a derived model: one per level, with every member labelled by its mark or, without marks, by {@link MemberLabel}. */
 public final class FramingPlans {
     private FramingPlans() {}
 
     /** The plans of the levels named, in the order given. */
-    public static List<FramingPlan> of(Derived d, List<String> levels) {
+    public static List<FramingPlan> of(Derived d, List<String> levels) { return of(d, levels, MemberLabels.PLACES); }
+
+    /** The same with each member labelled as given (by its mark where the project has marks). */
+    public static List<FramingPlan> of(Derived d, List<String> levels, MemberLabels labels) {
         List<FramingPlan> out = new ArrayList<>();
         for (String name : levels)
-            d.building().levels().stream().filter(l -> l.name().equals(name)).findFirst().ifPresent(l -> out.add(of(d, l)));
+            d.building().levels().stream().filter(l -> l.name().equals(name)).findFirst().ifPresent(l -> out.add(of(d, l, labels)));
         return out;
     }
 
-    static FramingPlan of(Derived d, Level level) {
+    static FramingPlan of(Derived d, Level level, MemberLabels labels) {
         Grid g = d.building().grid();
         UnitSystem sys = d.building().context().system();
         List<KeyPlan.GridLine> lines = new ArrayList<>();
@@ -58,7 +62,7 @@ public final class FramingPlans {
         List<FramingPlan.Member> members = new ArrayList<>();
         for (DerivedMember m : d.onLevel(level.name())) {
             var p = m.plan();
-            members.add(new FramingPlan.Member(new KeyPlan.Line(p.x1(), p.y1(), p.x2(), p.y2()), m.role(), MemberLabel.of(m)));
+            members.add(new FramingPlan.Member(new KeyPlan.Line(p.x1(), p.y1(), p.x2(), p.y2()), m.role(), labels.of(m)));
         }
         List<FramingPlan.LoadLine> loads = new ArrayList<>();
         for (GridLineLoad l : d.building().lineLoads())

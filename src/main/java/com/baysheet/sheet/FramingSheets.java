@@ -4,10 +4,12 @@ import com.baysheet.framing.model.Submittal;
 import com.baysheet.engine.InputError;
 import com.baysheet.framing.Derived;
 import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.MemberLabels;
 import com.baysheet.framing.MemberRole;
 import com.baysheet.framing.PlanRect;
 import com.baysheet.framing.TypicalGroup;
 import com.baysheet.framing.schedule.ColumnSchedules;
+import com.baysheet.framing.schedule.MarkSchedule;
 import com.baysheet.framing.schedule.MemberSchedule;
 import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Grid;
@@ -87,22 +89,37 @@ public final class FramingSheets {
 
     /** The package of one level made of the sheets given (its typical members'), with the take-downs at that level. */
     public static CalcPackage levelOf(SheetHeader base, Derived d, String level, List<Revision> revisions, List<MemberSheet> sheets) {
+        return levelOf(base, d, level, revisions, sheets, MemberLabels.PLACES);
+    }
+
+    /**
+     * The same with the plan, the take-downs and the schedules labelling each member by its mark, and the member
+     * schedule one row per mark.
+     */
+    public static CalcPackage levelOf(SheetHeader base, Derived d, String level, List<Revision> revisions, List<MemberSheet> sheets,
+                                      MemberLabels marks) {
         List<TakeDownTable> downs = new ArrayList<>();
         for (var t : d.takeDowns())
-            if (t.rows().stream().anyMatch(r -> r.level().equals(level))) downs.add(TakeDownTables.of(d, t));
+            if (t.rows().stream().anyMatch(r -> r.level().equals(level))) downs.add(TakeDownTables.of(d, t, marks));
         return new CalcPackage(base.withSubject(level + " package"), level + " package", Criteria.of(d.building()), sheets, downs, revisions,
-                MethodTables.of(d, List.of(level)), FramingPlans.of(d, List.of(level)),
-                List.of(ColumnSchedules.loads(d, ColumnSchedules.at(level)), ColumnSchedules.foundations(d, ColumnSchedules.at(level)),
-                        MemberSchedule.onLevel(d, level)), Submittal.NONE);
+                MethodTables.of(d, List.of(level)), FramingPlans.of(d, List.of(level), marks),
+                List.of(ColumnSchedules.loads(d, ColumnSchedules.at(level), marks), ColumnSchedules.foundations(d, ColumnSchedules.at(level), marks),
+                        marks == MemberLabels.PLACES ? MemberSchedule.onLevel(d, level) : MarkSchedule.onLevel(d, level, marks)), Submittal.NONE);
     }
 
     /** The whole project made of the sheets given (its typical members'), with every column take-down. */
     public static CalcPackage projectOf(SheetHeader base, Derived d, List<Revision> revisions, List<MemberSheet> sheets) {
+        return projectOf(base, d, revisions, sheets, MemberLabels.PLACES);
+    }
+
+    /** The same labelled by marks, as {@link #levelOf(SheetHeader, Derived, String, List, List, MemberLabels)}. */
+    public static CalcPackage projectOf(SheetHeader base, Derived d, List<Revision> revisions, List<MemberSheet> sheets, MemberLabels marks) {
+        List<String> levels = d.members().stream().map(DerivedMember::level).distinct().toList();
         return new CalcPackage(base.withSubject("Project package"), "Project package", Criteria.of(d.building()),
-                sheets, d.takeDowns().stream().map(t -> TakeDownTables.of(d, t)).toList(), revisions,
-                MethodTables.of(d, d.members().stream().map(DerivedMember::level).distinct().toList()),
-                FramingPlans.of(d, d.members().stream().map(DerivedMember::level).distinct().toList()),
-                List.of(ColumnSchedules.loads(d), ColumnSchedules.foundations(d), MemberSchedule.of(d)), Submittal.NONE);
+                sheets, d.takeDowns().stream().map(t -> TakeDownTables.of(d, t, marks)).toList(), revisions,
+                MethodTables.of(d, levels), FramingPlans.of(d, levels, marks),
+                List.of(ColumnSchedules.loads(d, t -> true, marks), ColumnSchedules.foundations(d, t -> true, marks),
+                        marks == MemberLabels.PLACES ? MemberSchedule.of(d) : MarkSchedule.of(d, marks)), Submittal.NONE);
     }
 
     private static List<MemberSheet> sheets(Function<DerivedMember, SheetHeader> headers, Derived d, List<DerivedMember> members) {

@@ -6,7 +6,7 @@ import com.baysheet.engine.units.Display;
 import com.baysheet.engine.units.Quantity;
 import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.Derived;
-import com.baysheet.framing.MemberLabel;
+import com.baysheet.framing.MemberLabels;
 import com.baysheet.framing.TakeDown;
 
 import java.util.ArrayList;
@@ -18,7 +18,10 @@ import java.util.Set;
 final class TakeDownTables {
     private TakeDownTables() {}
 
-    static TakeDownTable of(Derived d, TakeDown t) {
+    static TakeDownTable of(Derived d, TakeDown t) { return of(d, t, MemberLabels.PLACES); }
+
+    /** With each level's column labelled as given (its mark beside its place). */
+    static TakeDownTable of(Derived d, TakeDown t, MemberLabels labels) {
         UnitSystem sys = d.building().context().system();
         String a = Quantity.AREA.unit(sys).symbol(), f = Quantity.FORCE.unit(sys).symbol();
         List<String> head = List.of("Level", "Column", "Area at this level (" + a + ")", "A_T supported, cumulative (" + a + ")",
@@ -30,7 +33,7 @@ final class TakeDownTables {
         boolean basic = d.building().context().floorMethod() == null;
         for (TakeDown.Row r : t.rows()) {
             // the column by its label, or by its grid point where the member is gone: never its internal id
-            String column = d.member(r.member()).map(MemberLabel::of).orElse("Column " + t.gridPoint());
+            String column = d.member(r.member()).map(labels::placed).orElse("Column " + t.gridPoint());
             rows.add(List.of(r.level(), column, n(r.areaAtLevel(), Quantity.AREA, sys), n(r.cumulativeArea(), Quantity.AREA, sys),
                     n(r.reducibleArea(), Quantity.AREA, sys), basic ? Display.sig3(r.kll()) : "—", basic ? n(r.influenceArea(), Quantity.AREA, sys) : "—", Integer.toString(r.floorsSupported()),
                     Display.sig3(r.factor()), n(r.deadAtLevel(), Quantity.FORCE, sys),

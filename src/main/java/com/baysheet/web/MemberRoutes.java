@@ -58,7 +58,8 @@ final class MemberRoutes {
         String href = "/projects/" + c.project().id() + "/members/{id}";
         Map<String, Object> m = base(c);
         m.put("member", member);
-        m.put("mark", store.marks().of(c.project().id(), c.derived()).ofMember(member.id()).orElse(null));
+        MarkSheets marks = store.marks().of(c.project().id(), c.derived());
+        m.put("mark", marks.ofMember(member.id()).orElse(null));
         m.put("record", member.result().record());
         UnitLabels units = UnitLabels.of(c.project().info().units());
         m.put("row", MemberRow.of(member, "", units));
@@ -70,7 +71,7 @@ final class MemberRoutes {
                 : member.result().floorReduction().map(lf -> units.area(lf.tributaryArea())).orElse(null));
         m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), member,
                 c.model().building().context().catalogue(), href, c.model().building().lineLoads(),
-                DriftZones.of(c.model().building(), level.name()), c.model().building().pointLoads()));
+                DriftZones.of(c.model().building(), level.name()), c.model().building().pointLoads(), marks.labels()));
         ctx.render("members/show", m);
     }
 

@@ -40,7 +40,8 @@ final class PlanRoutes {
             m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), null,
                     c.model().building().context().catalogue(), "/projects/" + c.project().id() + "/members/{id}",
                     c.model().building().lineLoads(),
-                DriftZones.of(c.model().building(), level.name()), c.model().building().pointLoads()));
+                DriftZones.of(c.model().building(), level.name()), c.model().building().pointLoads(),
+                store.marks().of(c.project().id(), c.derived()).labels()));
         ctx.render("plan/show", m);
     }
 }

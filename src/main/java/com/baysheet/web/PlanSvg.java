@@ -38,10 +38,16 @@ final class PlanSvg {
              .append("\" y=\"").append(n(pt.y() - 7)).append("\">").append(esc(pt.title())).append("</text></g>");
         }
         for (PlanView.Shape t : p.tributary()) rect(s, t, "tributary").append("><title>tributary area</title></rect>");
-        for (PlanView.Shape m : p.members()) {
+        for (int i = 0; i < p.members().size(); i++) {
+            PlanView.Shape m = p.members().get(i);
             s.append("<a href=\"").append(esc(m.href())).append("\"><title>").append(esc(m.title())).append("</title>");
             if (m.w() == 0) line(s, m, "member " + m.cls()).append("/>");
             else rect(s, m, "member " + m.cls()).append("/>");
+            if (i < p.marks().size()) {
+                PlanView.Shape t = p.marks().get(i);
+                s.append("<text class=\"mark\" x=\"").append(n(t.x())).append("\" y=\"").append(n(t.y()))
+                 .append("\" text-anchor=\"middle\">").append(esc(t.title())).append("</text>");
+            }
             s.append("</a>");
         }
         return s.append("</svg>").toString();

@@ -3,6 +3,7 @@ package com.baysheet.web;
 import com.baysheet.engine.code.OccupancyCatalogue;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.DriftZones;
+import com.baysheet.framing.MemberLabels;
 import com.baysheet.framing.MemberRole;
 import com.baysheet.framing.PlanLine;
 import com.baysheet.framing.PlanRect;
@@ -25,20 +26,20 @@ import java.util.Map;
  */
 record PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
                 List<Shape> members, List<Shape> tributary, Map<String, String> legend, List<Shape> lineLoads,
-                List<Shape> drifts, List<Shape> pointLoads) {
+                List<Shape> drifts, List<Shape> pointLoads, List<Shape> marks) {
     /** One drawn thing: a rectangle (x, y, w, h) or a line (x, y to x2, y2), with its class, fill, link and tooltip. */
     record Shape(double x, double y, double w, double h, double x2, double y2, String cls, String fill, String href, String title) {}
 
     /** A plan without line loads. */
     PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
              List<Shape> members, List<Shape> tributary, Map<String, String> legend) {
-        this(width, height, bays, gridLines, gridLabels, members, tributary, legend, List.of(), List.of(), List.of());
+        this(width, height, bays, gridLines, gridLabels, members, tributary, legend, List.of(), List.of(), List.of(), List.of());
     }
 
     /** A plan without drifts or point loads. */
     PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
              List<Shape> members, List<Shape> tributary, Map<String, String> legend, List<Shape> lineLoads) {
-        this(width, height, bays, gridLines, gridLabels, members, tributary, legend, lineLoads, List.of(), List.of());
+        this(width, height, bays, gridLines, gridLabels, members, tributary, legend, lineLoads, List.of(), List.of(), List.of());
     }
 
     private static final double MAX_W = 760, MAX_H = 560, PAD = 36;
@@ -48,12 +49,13 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
 
     static PlanView of(Grid g, Level level, List<DerivedMember> members, DerivedMember selected,
                        OccupancyCatalogue cat, String memberHref, List<GridLineLoad> lineLoads) {
-        return of(g, level, members, selected, cat, memberHref, lineLoads, List.of(), List.of());
+        return of(g, level, members, selected, cat, memberHref, lineLoads, List.of(), List.of(), MemberLabels.PLACES);
     }
 
     /** With the level's drift zones at roof steps and the building's point loads (those of this level are drawn). */
     static PlanView of(Grid g, Level level, List<DerivedMember> members, DerivedMember selected, OccupancyCatalogue cat,
-                       String memberHref, List<GridLineLoad> lineLoads, List<DriftZones.Zone> driftZones, List<GridPointLoad> points) {
+                       String memberHref, List<GridLineLoad> lineLoads, List<DriftZones.Zone> driftZones, List<GridPointLoad> points,
+                       MemberLabels marked) {
         Frame f = Frame.of(g, level);
         Palette palette = new Palette(cat);
         Map<String, String> legend = new LinkedHashMap<>();
@@ -92,7 +94,11 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
             labels.add(f.label(f.minX, y, -18, 0, g.y().name(j)));
         }
         List<Shape> drawn = new ArrayList<>();
-        for (DerivedMember m : members) drawn.add(f.member(m, selected, memberHref.replace("{id}", m.id())));
+        List<Shape> marks = new ArrayList<>();
+        for (DerivedMember m : members) {
+            drawn.add(f.member(m, selected, memberHref.replace("{id}", m.id()), marked));
+            marks.add(f.mark(m, marked));
+        }
         List<Shape> trib = new ArrayList<>();
         if (selected != null) for (PlanRect r : selected.tributary()) trib.add(f.rect(r.x1(), r.y1(), r.x2(), r.y2(), "tributary", "none", null, "tributary area"));
         List<Shape> loads = new ArrayList<>();
@@ -104,7 +110,7 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
         }
         List<Shape> pts = new ArrayList<>();
         for (GridPointLoad p : points) if (p.level().equals(level.name())) pts.add(f.point(g, p));
-        return new PlanView(f.width(), f.height(), bays, lines, labels, drawn, trib, legend, loads, drifts, pts);
+        return new PlanView(f.width(), f.height(), bays, lines, labels, drawn, trib, legend, loads, drifts, pts, marks);
     }
 
     /** Plan coordinates to screen coordinates: one scale, y flipped, a margin for the grid names. */
@@ -160,10 +166,18 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
             return new Shape(round(sx(x) + dx), round(sy(y) + dy), 0, 0, 0, 0, "grid-name", "none", null, text);
         }
 
-        Shape member(DerivedMember m, DerivedMember selected, String href) {
+        /** The member's label printed beside it: at a beam's midpoint, to the upper right of a column. */
+        Shape mark(DerivedMember m, MemberLabels labels) {
+            PlanLine p = m.plan();
+            boolean column = m.role() == MemberRole.COLUMN;
+            double x = column ? sx(p.x1()) + 7 : (sx(p.x1()) + sx(p.x2())) / 2, y = column ? sy(p.y1()) - 7 : (sy(p.y1()) + sy(p.y2())) / 2 - 3;
+            return new Shape(round(x), round(y), 0, 0, 0, 0, "mark", "none", null, labels.of(m));
+        }
+
+        Shape member(DerivedMember m, DerivedMember selected, String href, MemberLabels labels) {
             PlanLine p = m.plan();
             String cls = m.role().name().toLowerCase().replace('_', '-') + (selected != null && m.id().equals(selected.id()) ? " selected" : "");
-            String title = com.baysheet.framing.MemberLabel.of(m) + " (" + m.kind().title() + ")";
+            String title = labels.placed(m) + ", " + m.kind().title();
             if (m.role() == MemberRole.COLUMN)
                 return new Shape(round(sx(p.x1()) - 5), round(sy(p.y1()) - 5), 10, 10, 0, 0, cls, "none", href, title);
             return line(p.x1(), p.y1(), p.x2(), p.y2(), cls, href, title);

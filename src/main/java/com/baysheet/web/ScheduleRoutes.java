@@ -3,7 +3,9 @@ package com.baysheet.web;
 import com.baysheet.web.auth.Admit;
 import com.baysheet.engine.units.Display;
 import com.baysheet.framing.Derived;
+import com.baysheet.framing.MemberLabels;
 import com.baysheet.framing.schedule.ColumnSchedules;
+import com.baysheet.framing.schedule.MarkSchedule;
 import com.baysheet.framing.schedule.LoadSchedule;
 import com.baysheet.framing.schedule.MemberSchedule;
 import com.baysheet.sheet.ScheduleCsv;
@@ -18,20 +20,22 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.function.Function;
+import java.util.function.BiFunction;
 
 /**
- * The load summaries of a project (column loads, foundation reactions, members): one page showing them, each
+ * The load summaries of a project (column loads, foundation reactions, members by mark and by level), each member
+ * labelled by its mark: one page showing them, each
  * as a CSV and an XLSX download, and each in the JSON API. All read from the current derivation's take-downs
  * and records.
  */
 final class ScheduleRoutes {
     /** The schedules by the key their paths and file names use, in the order the page shows them. */
-    static final Map<String, Function<Derived, LoadSchedule>> SCHEDULES = new LinkedHashMap<>();
+    static final Map<String, BiFunction<Derived, MemberLabels, LoadSchedule>> SCHEDULES = new LinkedHashMap<>();
 
     static {
-        SCHEDULES.put("column-loads", ColumnSchedules::loads);
-        SCHEDULES.put("foundation-reactions", ColumnSchedules::foundations);
+        SCHEDULES.put("column-loads", (d, marks) -> ColumnSchedules.loads(d, t -> true, marks));
+        SCHEDULES.put("foundation-reactions", (d, marks) -> ColumnSchedules.foundations(d, t -> true, marks));
+        SCHEDULES.put("marks", MarkSchedule::of);
         SCHEDULES.put("members", MemberSchedule::of);
     }
 
@@ -50,8 +54,9 @@ final class ScheduleRoutes {
             r.get("/api/projects/{project}/schedules/" + key, ctx -> Json.send(ctx, ScheduleJson.of(schedule(ctx, key))), Admit.OFFICE);
         }
         r.get("/api/projects/{project}/schedules", ctx -> {
-            Derived d = results(ctx).derived();
-            Json.send(ctx, SCHEDULES.values().stream().map(f -> ScheduleJson.of(f.apply(d))).toList());
+            Results.Computed c = results(ctx);
+            MemberLabels marks = marks(c);
+            Json.send(ctx, SCHEDULES.values().stream().map(f -> ScheduleJson.of(f.apply(c.derived(), marks))).toList());
         }, Admit.OFFICE);
     }
 
@@ -59,7 +64,8 @@ final class ScheduleRoutes {
         Results.Computed c = results(ctx);
         Map<String, Object> m = MemberRoutes.base(c);
         List<Shown> shown = new ArrayList<>();
-        for (var e : SCHEDULES.entrySet()) shown.add(Shown.of(e.getKey(), e.getValue().apply(c.derived())));
+        MemberLabels marks = marks(c);
+        for (var e : SCHEDULES.entrySet()) shown.add(Shown.of(e.getKey(), e.getValue().apply(c.derived(), marks)));
         m.put("schedules", shown);
         ctx.render("schedules/show", m);
     }
@@ -71,7 +77,7 @@ final class ScheduleRoutes {
     private void xlsx(Context ctx, String key) {
         Results.Computed c = results(ctx);
         var info = c.project().info();
-        byte[] book = ScheduleXlsx.of(SCHEDULES.get(key).apply(c.derived()), info.name() + ", job " + info.jobNumber());
+        byte[] book = ScheduleXlsx.of(schedule(c, key), info.name() + ", job " + info.jobNumber());
         download(ctx, key, "xlsx", "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet", book);
     }
 
@@ -81,7 +87,12 @@ final class ScheduleRoutes {
         ctx.contentType(type).result(body);
     }
 
-    private LoadSchedule schedule(Context ctx, String key) { return SCHEDULES.get(key).apply(results(ctx).derived()); }
+    private LoadSchedule schedule(Context ctx, String key) { return schedule(results(ctx), key); }
+
+    private LoadSchedule schedule(Results.Computed c, String key) { return SCHEDULES.get(key).apply(c.derived(), marks(c)); }
+
+    /** Each member by the mark its sheet is under, as the package and the plans print it. */
+    private MemberLabels marks(Results.Computed c) { return store.marks().of(c.project().id(), c.derived()).labels(); }
 
     private Results.Computed results(Context ctx) { return store.results().of(Ids.project(ctx)); }
 

@@ -1,6 +1,9 @@
 package com.baysheet.sheet;
 
 import com.baysheet.framing.Derived;
+import com.baysheet.framing.MemberLabels;
+import com.baysheet.framing.schedule.MarkSchedule;
+import com.baysheet.review.MarkSheets;
 import com.baysheet.framing.schedule.ColumnSchedules;
 import com.baysheet.framing.schedule.LoadSchedule;
 import com.baysheet.framing.schedule.MemberSchedule;
@@ -20,7 +23,9 @@ import static org.assertj.core.api.Assertions.within;
 /** The CSV and XLSX downloads read back to the very values of the take-downs and the records. */
 class ScheduleExportTest {
     static final Derived D = SheetFixtures.building();
-    static final List<LoadSchedule> ALL = List.of(ColumnSchedules.loads(D), ColumnSchedules.foundations(D), MemberSchedule.of(D));
+    static final MemberLabels MARKS = MarkSheets.fresh(D).labels();
+    static final List<LoadSchedule> ALL = List.of(ColumnSchedules.loads(D), ColumnSchedules.foundations(D), MemberSchedule.of(D),
+            ColumnSchedules.loads(D, t -> true, MARKS), MarkSchedule.of(D, MARKS), MemberSchedule.of(D, MARKS));
 
     @Test
     void csvReadsBackToTheRecordValuesInTheHeadingsUnits() {

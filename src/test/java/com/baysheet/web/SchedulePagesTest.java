@@ -3,7 +3,10 @@ package com.baysheet.web;
 import com.baysheet.engine.record.RecordJson;
 import com.baysheet.framing.TakeDown;
 import com.baysheet.framing.schedule.ColumnSchedules;
+import com.baysheet.framing.MemberRole;
+import com.baysheet.framing.schedule.MarkSchedule;
 import com.baysheet.framing.schedule.MemberSchedule;
+import com.baysheet.review.MarkSheets;
 import com.baysheet.sheet.ScheduleCsv;
 import com.baysheet.store.Results;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -27,10 +30,12 @@ class SchedulePagesTest {
     @RegisterExtension
     static final TestServer server = TestServer.perClass();
     static Results.Computed alder;
+    static MarkSheets marks;
 
     @BeforeAll
     static void start() {
         alder = server.store.results().of(server.alder().id());
+        marks = server.store.marks().of(server.alder().id(), alder.derived());
     }
 
     static String base() { return "/projects/" + server.alder().id(); }
@@ -50,7 +55,7 @@ class SchedulePagesTest {
         assertThat(r.statusCode()).isEqualTo(200);
         assertThat(r.headers().firstValue("Content-Type").orElse("")).startsWith("text/csv");
         assertThat(r.headers().firstValue("Content-Disposition").orElse("")).contains("attachment", "foundation-reactions.csv");
-        assertThat(r.body()).isEqualTo(ScheduleCsv.of(ColumnSchedules.foundations(alder.derived())));
+        assertThat(r.body()).isEqualTo(ScheduleCsv.of(ColumnSchedules.foundations(alder.derived(), t -> true, marks.labels())));
     }
 
     @Test
@@ -58,7 +63,7 @@ class SchedulePagesTest {
         HttpResponse<byte[]> r = server.engineer.getBytes(base() + "/schedules/members.xlsx");
         assertThat(r.statusCode()).isEqualTo(200);
         assertThat(r.headers().firstValue("Content-Type").orElse("")).contains("spreadsheetml");
-        var s = MemberSchedule.of(alder.derived());
+        var s = MemberSchedule.of(alder.derived(), marks.labels());
         try (ReadableWorkbook wb = new ReadableWorkbook(new ByteArrayInputStream(r.body()))) {
             List<Row> rows = wb.getFirstSheet().read();
             Row first = rows.get(com.baysheet.sheet.ScheduleXlsx.HEADING_ROW + 1);
@@ -66,6 +71,23 @@ class SchedulePagesTest {
             assertThat(first.getCellAsString(1)).hasValue((String) s.rows().get(0).get(1));
             assertThat(first.getCellAsNumber(m).orElseThrow().doubleValue()).isEqualTo(s.shown(0, m));
         }
+    }
+
+    @Test
+    void theMarkScheduleAndTheWebPlanPrintTheMarksOfTheMarkSheets() throws Exception {
+        JsonNode j = RecordJson.mapper().readTree(server.get("/api" + base() + "/schedules/marks").body());
+        List<String> beamMarks = marks.all().stream().filter(m -> m.group().role() != MemberRole.COLUMN).map(MarkSheets.MarkSheet::text).toList();
+        List<String> rows = new java.util.ArrayList<>();
+        for (JsonNode row : j.path("rows")) rows.add(row.get(0).asText());
+        assertThat(rows).containsExactlyInAnyOrderElementsOf(beamMarks);
+        String csv = server.get(base() + "/schedules/marks.csv").body();
+        assertThat(csv).isEqualTo(ScheduleCsv.of(MarkSchedule.of(alder.derived(), marks.labels())));
+        String level = alder.derived().members().get(0).level();
+        long levelId = alder.model().levels().stream().filter(l -> l.name().equals(level)).findFirst().orElseThrow().id();
+        var page = org.jsoup.Jsoup.parse(server.get(base() + "/plan?level=" + levelId).body());
+        List<String> printed = page.select("svg text.mark").eachText();
+        List<String> expected = alder.derived().onLevel(level).stream().map(m -> marks.ofMember(m.id()).orElseThrow().text()).toList();
+        assertThat(printed).containsExactlyElementsOf(expected);
     }
 
     @Test
@@ -79,7 +101,7 @@ class SchedulePagesTest {
         TakeDown t = alder.derived().takeDowns().get(0);
         assertThat(j.path("rows").get(0).get(2).asDouble()).isEqualTo(t.rows().get(0).dead());
         JsonNode all = RecordJson.mapper().readTree(server.get("/api" + base() + "/schedules").body());
-        assertThat(all).hasSize(3);
+        assertThat(all).hasSize(4);
         assertThat(server.get("/api/projects/987654/schedules/members").statusCode()).isEqualTo(404);
     }
 }

@@ -2,7 +2,7 @@ package com.baysheet.framing.schedule;
 
 import com.baysheet.engine.units.Quantity;
 import com.baysheet.framing.Derived;
-import com.baysheet.framing.MemberLabel;
+import com.baysheet.framing.MemberLabels;
 import com.baysheet.framing.TakeDown;
 
 import java.util.ArrayList;
@@ -21,14 +21,17 @@ public final class ColumnSchedules {
     public static LoadSchedule loads(Derived d) { return loads(d, t -> true); }
 
     /** The same for the stacks chosen (a level's package: those with a column at that level). */
-    public static LoadSchedule loads(Derived d, Predicate<TakeDown> which) {
+    public static LoadSchedule loads(Derived d, Predicate<TakeDown> which) { return loads(d, which, MemberLabels.PLACES); }
+
+    /** The same with each column labelled as given (its mark beside its place). */
+    public static LoadSchedule loads(Derived d, Predicate<TakeDown> which, MemberLabels labels) {
         Presence p = Presence.of(d);
         List<List<Object>> rows = new ArrayList<>();
         for (TakeDown t : d.takeDowns()) {
             if (!which.test(t)) continue;
-            for (TakeDown.Row r : t.rows()) rows.add(row(label(d, t, r), "below " + r.level(), r, p));
+            for (TakeDown.Row r : t.rows()) rows.add(row(label(d, t, r, labels), "below " + r.level(), r, p));
             TakeDown.Row base = t.rows().get(t.rows().size() - 1);
-            rows.add(row(label(d, t, base), "base", base, p));
+            rows.add(row(label(d, t, base, labels), "base", base, p));
         }
         return new LoadSchedule("column-loads", "Column load schedule", d.building().context().system(), columns("At", p), rows,
                 List.of("Each level's row is the load in the column below that level, from everything at and above it; "
@@ -39,14 +42,17 @@ public final class ColumnSchedules {
     public static LoadSchedule foundations(Derived d) { return foundations(d, t -> true); }
 
     /** The same for the stacks chosen. */
-    public static LoadSchedule foundations(Derived d, Predicate<TakeDown> which) {
+    public static LoadSchedule foundations(Derived d, Predicate<TakeDown> which) { return foundations(d, which, MemberLabels.PLACES); }
+
+    /** The same with each column labelled as given (its mark beside its place). */
+    public static LoadSchedule foundations(Derived d, Predicate<TakeDown> which, MemberLabels labels) {
         Presence p = Presence.of(d);
         List<List<Object>> rows = new ArrayList<>();
         double[] sum = new double[4];
         for (TakeDown t : d.takeDowns()) {
             if (!which.test(t)) continue;
             TakeDown.Row base = t.rows().get(t.rows().size() - 1);
-            rows.add(row(label(d, t, base), "below " + base.level(), base, p));
+            rows.add(row(label(d, t, base, labels), "below " + base.level(), base, p));
             sum[0] += base.dead();
             sum[1] += base.liveReduced();
             sum[2] += base.roofLive();
@@ -72,8 +78,9 @@ public final class ColumnSchedules {
         return t -> t.rows().stream().anyMatch(r -> r.level().equals(level));
     }
 
-    private static String label(Derived d, TakeDown t, TakeDown.Row r) {
-        return d.member(r.member()).map(MemberLabel::of).orElse("Column " + t.gridPoint());
+    /** The column by its label, or by its grid point where the member is gone: never its internal id. */
+    static String label(Derived d, TakeDown t, TakeDown.Row r, MemberLabels labels) {
+        return d.member(r.member()).map(labels::placed).orElse("Column " + t.gridPoint());
     }
 
     private static List<LoadSchedule.Column> columns(String at, Presence p) {

@@ -4,6 +4,7 @@ import com.baysheet.engine.units.Quantity;
 import com.baysheet.framing.Derived;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.MemberLabel;
+import com.baysheet.framing.MemberLabels;
 import com.baysheet.framing.MemberRole;
 
 import java.util.ArrayList;
@@ -30,13 +31,43 @@ public final class MemberSchedule {
     /** The members of one level. */
     public static LoadSchedule onLevel(Derived d, String level) { return of(d, m -> m.level().equals(level), MemberLabel::of); }
 
+    /** Every member labelled as given (by its mark where the project has marks). */
+    public static LoadSchedule of(Derived d, MemberLabels labels) { return of(d, m -> true, labels::of); }
+
+    /** The members of one level labelled as given. */
+    public static LoadSchedule onLevel(Derived d, String level, MemberLabels labels) {
+        return of(d, m -> m.level().equals(level), labels::of);
+    }
+
     /** The members chosen, with another labelling where typical members share a mark. */
     public static LoadSchedule of(Derived d, Predicate<DerivedMember> which, Function<DerivedMember, String> label) {
         Map<String, List<DerivedMember>> groups = new LinkedHashMap<>();
-        boolean lr = false, s = false, neg = false;
+        List<DerivedMember> chosen = new ArrayList<>();
         for (DerivedMember m : d.members()) {
             if (m.role() == MemberRole.COLUMN || !which.test(m)) continue;
             groups.computeIfAbsent(m.level() + "\u0000" + label.apply(m), k -> new ArrayList<>()).add(m);
+            chosen.add(m);
+        }
+        List<Value> values = values(chosen);
+        List<LoadSchedule.Column> cols = new ArrayList<>(List.of(LoadSchedule.Column.text("Level"), LoadSchedule.Column.text("Member"),
+                LoadSchedule.Column.text("Count")));
+        for (Value v : values) cols.add(new LoadSchedule.Column(v.heading, v.quantity));
+        List<List<Object>> rows = new ArrayList<>();
+        for (List<DerivedMember> g : groups.values()) {
+            DerivedMember first = g.get(0);
+            List<Object> row = new ArrayList<>(List.of(first.level(), label.apply(first), Integer.toString(g.size())));
+            for (Value v : values) row.add(v.envelope(g));
+            rows.add(row);
+        }
+        return new LoadSchedule("members", "Member schedule", d.building().context().system(), cols, rows, List.of(
+                READING,
+                "Where several members share a label the row shows the largest of each value among them (the most negative M_u−)."));
+    }
+
+    /** The number columns for these members: Lr, S and M− only where some member carries them. */
+    static List<Value> values(List<DerivedMember> members) {
+        boolean lr = false, s = false, neg = false;
+        for (DerivedMember m : members) {
             lr |= positive(m.result().stepValue("W.Lr"));
             s |= positive(m.result().stepValue("W.S"));
             neg |= !Double.isNaN(m.result().value("LRFD.M-"));
@@ -55,28 +86,17 @@ public final class MemberSchedule {
                 new Value("V_u", Quantity.FORCE, m -> m.result().value("LRFD.V"), false),
                 new Value("M_u+", Quantity.MOMENT, m -> m.result().value("LRFD.M+"), false)));
         if (neg) values.add(new Value("M_u−", Quantity.MOMENT, m -> m.result().value("LRFD.M-"), true));
-
-        List<LoadSchedule.Column> cols = new ArrayList<>(List.of(LoadSchedule.Column.text("Level"), LoadSchedule.Column.text("Member"),
-                LoadSchedule.Column.text("Count")));
-        for (Value v : values) cols.add(new LoadSchedule.Column(v.heading, v.quantity));
-        List<List<Object>> rows = new ArrayList<>();
-        for (List<DerivedMember> g : groups.values()) {
-            DerivedMember first = g.get(0);
-            List<Object> row = new ArrayList<>(List.of(first.level(), label.apply(first), Integer.toString(g.size())));
-            for (Value v : values) row.add(v.envelope(g));
-            rows.add(row);
-        }
-        return new LoadSchedule("members", "Member schedule", d.building().context().system(), cols, rows, List.of(
-                "W: the total load on the member by case (L reduced as its record states); R_A and R_B: the end reactions "
-                        + "(service: the governing allowable stress design combination; factored: the governing strength design "
-                        + "combination); V_u and M_u: factored shear and moments.",
-                "Where several members share a label the row shows the largest of each value among them (the most negative M_u−)."));
+        return values;
     }
+
+    static final String READING = "W: the total load on the member by case (L reduced as its record states); R_A and R_B: the end reactions "
+            + "(service: the governing allowable stress design combination; factored: the governing strength design "
+            + "combination); V_u and M_u: factored shear and moments.";
 
     private static boolean positive(double v) { return !Double.isNaN(v) && v > 0; }
 
     /** One number column: how to read it from a member, and whether the envelope is the least (a negative moment). */
-    private record Value(String heading, Quantity quantity, Function<DerivedMember, Double> read, boolean least) {
+    record Value(String heading, Quantity quantity, Function<DerivedMember, Double> read, boolean least) {
         double envelope(List<DerivedMember> members) {
             double out = Double.NaN;
             for (DerivedMember m : members) {

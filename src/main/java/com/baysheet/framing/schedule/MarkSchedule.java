@@ -1,0 +1,61 @@
+package com.baysheet.framing.schedule;
+
+import com.baysheet.framing.Derived;
+import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.MemberLabels;
+import com.baysheet.framing.MemberRole;
+import com.baysheet.framing.TypicalGroup;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Predicate;
+
+/**
+ * The member schedule by mark: one row per beam or girder mark, with the number of members that carry it, where
+ * they are, and the same values as the member schedule (span, loads by case, end reactions, V_u, M_u). The
+ * members of a mark are calculated once, so their values are equal; the row still shows their envelope (the
+ * largest of each, the most negative M_u−), so that a row is never lighter than a location it stands for, whatever
+ * the labelling given. Columns are in the column load schedule, under their marks.
+ */
+public final class MarkSchedule {
+    private MarkSchedule() {}
+
+    /** Every beam and girder mark of the project. */
+    public static LoadSchedule of(Derived d, MemberLabels marks) { return of(d, m -> true, marks); }
+
+    /** The marks with members on one level, counting and locating only those on it. */
+    public static LoadSchedule onLevel(Derived d, String level, MemberLabels marks) {
+        return of(d, m -> m.level().equals(level), marks);
+    }
+
+    /** The members chosen, one row per label, in the order of each label's first member. */
+    public static LoadSchedule of(Derived d, Predicate<DerivedMember> which, MemberLabels marks) {
+        Map<String, List<DerivedMember>> groups = new LinkedHashMap<>();
+        List<DerivedMember> chosen = new ArrayList<>();
+        for (DerivedMember m : d.members()) {
+            if (m.role() == MemberRole.COLUMN || !which.test(m)) continue;
+            groups.computeIfAbsent(marks.of(m), k -> new ArrayList<>()).add(m);
+            chosen.add(m);
+        }
+        List<MemberSchedule.Value> values = MemberSchedule.values(chosen);
+        List<LoadSchedule.Column> cols = new ArrayList<>(List.of(LoadSchedule.Column.text("Mark"), LoadSchedule.Column.text("Count"),
+                LoadSchedule.Column.text("Locations")));
+        for (MemberSchedule.Value v : values) cols.add(new LoadSchedule.Column(v.heading(), v.quantity()));
+        List<List<Object>> rows = new ArrayList<>();
+        for (var g : groups.entrySet()) {
+            List<Object> row = new ArrayList<>(List.of(g.getKey(), Integer.toString(g.getValue().size()), locations(g.getValue())));
+            for (MemberSchedule.Value v : values) row.add(v.envelope(g.getValue()));
+            rows.add(row);
+        }
+        return new LoadSchedule("marks", "Member schedule by mark", d.building().context().system(), cols, rows, List.of(
+                MemberSchedule.READING,
+                "Each mark is calculated once for all its locations; its sheet lists them with the calculation."));
+    }
+
+    /** The locations of a mark as a reader finds them: level and grid position, never an internal id. */
+    static String locations(List<DerivedMember> members) {
+        return String.join("; ", members.stream().map(TypicalGroup::location).toList());
+    }
+}
