@@ -9,7 +9,6 @@ import com.baysheet.store.Results;
 import com.fasterxml.jackson.databind.JsonNode;
 import org.dhatim.fastexcel.reader.ReadableWorkbook;
 import org.dhatim.fastexcel.reader.Row;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
@@ -26,14 +25,9 @@ import static org.assertj.core.api.Assertions.assertThat;
 class SchedulePagesTest {
     @RegisterExtension
     static final TestServer server = TestServer.perClass();
-    static Results.Computed alder;
+    static Results.Computed alder() { return server.alderResults(); }
 
-    @BeforeAll
-    static void start() {
-        alder = server.store.results().of(server.alder().id());
-    }
-
-    static String base() { return "/projects/" + server.alder().id(); }
+    static String base() { return "/projects/" + server.alderId(); }
 
     @Test
     void thePageShowsTheThreeSchedulesWithTheirDownloadsAndTheCaution() {
@@ -50,7 +44,7 @@ class SchedulePagesTest {
         assertThat(r.statusCode()).isEqualTo(200);
         assertThat(r.headers().firstValue("Content-Type").orElse("")).startsWith("text/csv");
         assertThat(r.headers().firstValue("Content-Disposition").orElse("")).contains("attachment", "foundation-reactions.csv");
-        assertThat(r.body()).isEqualTo(ScheduleCsv.of(ColumnSchedules.foundations(alder.derived())));
+        assertThat(r.body()).isEqualTo(ScheduleCsv.of(ColumnSchedules.foundations(alder().derived())));
     }
 
     @Test
@@ -58,7 +52,7 @@ class SchedulePagesTest {
         HttpResponse<byte[]> r = server.engineer.getBytes(base() + "/schedules/members.xlsx");
         assertThat(r.statusCode()).isEqualTo(200);
         assertThat(r.headers().firstValue("Content-Type").orElse("")).contains("spreadsheetml");
-        var s = MemberSchedule.of(alder.derived());
+        var s = MemberSchedule.of(alder().derived());
         try (ReadableWorkbook wb = new ReadableWorkbook(new ByteArrayInputStream(r.body()))) {
             List<Row> rows = wb.getFirstSheet().read();
             Row first = rows.get(com.baysheet.sheet.ScheduleXlsx.HEADING_ROW + 1);
@@ -76,7 +70,7 @@ class SchedulePagesTest {
         assertThat(j.path("key").asText()).isEqualTo("column-loads");
         assertThat(j.path("columns").get(2).path("heading").asText()).isEqualTo("D");
         assertThat(j.path("columns").get(2).path("unit").asText()).isEqualTo("lb");
-        TakeDown t = alder.derived().takeDowns().get(0);
+        TakeDown t = alder().derived().takeDowns().get(0);
         assertThat(j.path("rows").get(0).get(2).asDouble()).isEqualTo(t.rows().get(0).dead());
         JsonNode all = RecordJson.mapper().readTree(server.get("/api" + base() + "/schedules").body());
         assertThat(all).hasSize(3);
