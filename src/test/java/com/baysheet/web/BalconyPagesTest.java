@@ -3,7 +3,6 @@ package com.baysheet.web;
 import com.baysheet.engine.record.RecordJson;
 import com.baysheet.framing.model.Bay;
 import com.fasterxml.jackson.databind.JsonNode;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
@@ -23,21 +22,16 @@ import static org.assertj.core.api.Assertions.assertThat;
 class BalconyPagesTest {
     @RegisterExtension
     static final TestServer server = TestServer.perClass();
-    static long project;
+    static long project() { return server.alderId(); }
 
-    @BeforeAll
-    static void start() {
-        project = server.alder().id();
-    }
+    static long level(String name) { return server.levelId(project(), name); }
 
-    static long level(String name) { return server.levelId(project, name); }
-
-    static String bays(String level) { return "/projects/" + project + "/levels/" + level(level) + "/bays"; }
+    static String bays(String level) { return server.levelPage(project(), level, "bays"); }
 
     static List<Map.Entry<String, String>> assembly(String cantileverOccupancy) {
-        List<Map.Entry<String, String>> f = new ArrayList<>(List.of(entry("version", String.valueOf(server.version(project))),
-                entry("cells", "0,2"), entry("cells", "1,2"), entry("action", "assign"), entry("occupancy", "assembly-movable-seats"),
-                entry("deadLoad", "70"), entry("beams", "Y"), entry("infillBeams", "2"), entry("cantilevers.north", "6")));
+        List<Map.Entry<String, String>> f = server.versioned(project(), entry("cells", "0,2"), entry("cells", "1,2"),
+                entry("action", "assign"), entry("occupancy", "assembly-movable-seats"),
+                entry("deadLoad", "70"), entry("beams", "Y"), entry("infillBeams", "2"), entry("cantilevers.north", "6"));
         f.add(entry("cantileverOccupancy", cantileverOccupancy));
         return f;
     }
@@ -59,18 +53,18 @@ class BalconyPagesTest {
 
     @Test
     void anEnclosedCantileverIsGivenItsOwnOccupancyAndAnUnknownOneIsRefused() {
-        long v = server.version(project);
+        long v = server.version(project());
         HttpResponse<String> bad = server.post(bays("Level 3"), assembly("ballroom"));
         assertThat(bad.statusCode()).isEqualTo(422);
         assertThat(Html.text(bad.body(), "#error-cantileverOccupancy")).contains("is not in the occupancy catalogue");
         assertThat(Html.shown(bad.body())).contains("Nothing was saved");
         assertThat(bad.body()).doesNotContain("Exception");
-        assertThat(server.version(project)).isEqualTo(v);
-        assertThat(server.store.bays().findByLevel(project, level("Level 3"))).allMatch(b -> b.cantileverOccupancy() == null);
+        assertThat(server.version(project())).isEqualTo(v);
+        assertThat(server.store.bays().findByLevel(project(), level("Level 3"))).allMatch(b -> b.cantileverOccupancy() == null);
 
         HttpResponse<String> ok = server.post(bays("Level 3"), assembly("office"));
         assertThat(ok.statusCode()).as(ok.body()).isEqualTo(303);
-        List<Bay> stored = server.store.bays().findByLevel(project, level("Level 3"));
+        List<Bay> stored = server.store.bays().findByLevel(project(), level("Level 3"));
         assertThat(stored).filteredOn(b -> !b.cantilevers().isEmpty()).hasSize(2).allMatch(b -> "office".equals(b.cantileverOccupancy()));
         String after = server.get(bays("Level 3")).body();
         assertThat(Html.all(after, "[data-cantilever-occupancy]").eachAttr("data-cantilever-occupancy")).isNotEmpty().containsOnly("office");
@@ -78,31 +72,31 @@ class BalconyPagesTest {
 
         // back to the default: the blank choice stores NULL
         assertThat(server.post(bays("Level 3"), assembly("")).statusCode()).isEqualTo(303);
-        assertThat(server.store.bays().findByLevel(project, level("Level 3"))).allMatch(b -> b.cantileverOccupancy() == null);
+        assertThat(server.store.bays().findByLevel(project(), level("Level 3"))).allMatch(b -> b.cantileverOccupancy() == null);
     }
 
     @Test
     void theApiReadsAndWritesTheCantileverOccupancyAndRefusesAnUnknownOne() throws Exception {
-        String at = "/api/projects/" + project + "/levels/" + level("Level 2") + "/bays";
+        String at = "/api/projects/" + project() + "/levels/" + level("Level 2") + "/bays";
         String body = ", \"cells\": [[0, 0]], \"occupancy\": \"office\", \"deadLoad\": 65, \"beams\": \"Y\", \"infillBeams\": 2,"
                 + " \"cantilevers\": {\"south\": 5}";
-        long v = server.version(project);
+        long v = server.version(project());
         HttpResponse<String> bad = server.json("POST", at, "{\"version\": " + v + body + ", \"cantileverOccupancy\": \"ballroom\"}");
         assertThat(bad.statusCode()).isEqualTo(400);
         assertThat(json(bad).get("field").asText()).isEqualTo("cantileverOccupancy");
         assertThat(json(bad).get("value").asText()).isEqualTo("ballroom");
-        assertThat(server.version(project)).isEqualTo(v);
+        assertThat(server.version(project())).isEqualTo(v);
 
         HttpResponse<String> byDefault = server.json("POST", at, "{\"version\": " + v + body + "}");
         assertThat(byDefault.statusCode()).isEqualTo(200);
         JsonNode saved = json(byDefault).get("saved").get(0);
         assertThat(saved.get("cantileverOccupancy").isNull()).isTrue();
         // the edge member along the south slab carries balcony area and says so, citing the load table
-        JsonNode members = json(server.get("/api/projects/" + project + "/members?level=Level+2"));
+        JsonNode members = json(server.get("/api/projects/" + project() + "/members?level=Level+2"));
         String edge = null;
         for (JsonNode m : members) if (m.get("areas").has("balcony:office")) edge = m.get("id").asText();
         assertThat(edge).isNotNull();
-        JsonNode notes = json(server.get("/api/projects/" + project + "/members/" + edge)).get("record").get("notes");
+        JsonNode notes = json(server.get("/api/projects/" + project() + "/members/" + edge)).get("record").get("notes");
         assertThat(notes.toString()).contains("Balcony or deck serving Offices", "Table 4.3-1");
 
         HttpResponse<String> given = server.json("POST", at, "{\"version\": " + json(byDefault).get("version").asLong() + body

@@ -3,7 +3,6 @@ package com.baysheet.web;
 import com.baysheet.engine.record.RecordJson;
 import com.baysheet.project.StoredLineLoad;
 import com.fasterxml.jackson.databind.JsonNode;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
@@ -23,22 +22,17 @@ import static org.assertj.core.api.Assertions.assertThat;
 class LineLoadPagesTest {
     @RegisterExtension
     static final TestServer server = TestServer.perClass();
-    static long project;
+    static long project() { return server.alderId(); }
 
-    @BeforeAll
-    static void start() {
-        project = server.alder().id();
-    }
+    static long level(String name) { return server.levelId(project(), name); }
 
-    static long level(String name) { return server.levelId(project, name); }
+    static String page(String level) { return server.levelPage(project(), level, "line-loads"); }
 
-    static String page(String level) { return "/projects/" + project + "/levels/" + level(level) + "/line-loads"; }
-
-    static List<StoredLineLoad> loads(String level) { return server.store.lineLoads().findByLevel(project, level(level)); }
+    static List<StoredLineLoad> loads(String level) { return server.store.lineLoads().findByLevel(project(), level(level)); }
 
     static List<Map.Entry<String, String>> wall(String line, String from, String to, String dead) {
-        return new ArrayList<>(List.of(entry("version", String.valueOf(server.version(project))), entry("label", "Core wall"),
-                entry("line", line), entry("from", from), entry("to", to), entry("deadBy", "length"), entry("dead", dead)));
+        return server.versioned(project(), entry("label", "Core wall"),
+                entry("line", line), entry("from", from), entry("to", to), entry("deadBy", "length"), entry("dead", dead));
     }
 
     static JsonNode json(HttpResponse<String> r) throws Exception { return RecordJson.mapper().readTree(r.body()); }
@@ -49,21 +43,21 @@ class LineLoadPagesTest {
         // 15 psf × 13 ft = 195 plf
         assertThat(String.join(" | ", Html.texts(body, "tbody td"))).contains("South cladding", "A, 1-5", "195 plf", "15.0 psf", "13.0 ft");
         assertThat(Html.shown(body)).contains("licensed engineer", "Add a line load");
-        assertThat(Html.texts(server.get("/projects/" + project + "/levels/" + level("Level 2") + "/bays").body(), "a"))
+        assertThat(Html.texts(server.get("/projects/" + project() + "/levels/" + level("Level 2") + "/bays").body(), "a"))
                 .contains("Line loads of this level");
     }
 
     @Test
     void theFramingPlanDrawsTheCladdingAlongItsLineWithItsLabel() {
-        String plan = server.get("/projects/" + project + "/plan?level=" + level("Level 2")).body();
+        String plan = server.get("/projects/" + project() + "/plan?level=" + level("Level 2")).body();
         assertThat(Html.texts(plan, "svg g.line-load > title")).contains("line load: South cladding");
         assertThat(Html.texts(plan, "svg text")).contains("South cladding");
-        assertThat(server.get("/projects/" + project + "/plan?level=" + level("Level 3")).body()).doesNotContain("South cladding");
+        assertThat(server.get("/projects/" + project() + "/plan?level=" + level("Level 3")).body()).doesNotContain("South cladding");
     }
 
     @Test
     void aWallAddedOnTheFormIsStoredAndCarriedByTheMembersBeneath() throws Exception {
-        long before = server.version(project);
+        long before = server.version(project());
         HttpResponse<String> r = server.post(page("Level 3"), wall("3", "A", "B", "400"));
         assertThat(r.statusCode()).isEqualTo(303);
         assertThat(loads("Level 3")).singleElement().satisfies(l -> {
@@ -71,12 +65,12 @@ class LineLoadPagesTest {
             assertThat(l.dead()).isEqualTo(400.0);
             assertThat(l.cladding()).isFalse();
         });
-        assertThat(server.version(project)).isEqualTo(before + 1);
+        assertThat(server.version(project())).isEqualTo(before + 1);
         assertThat(String.join(" | ", Html.texts(server.get(page("Level 3")).body(), "tbody td"))).contains("Core wall", "400 plf");
-        JsonNode members = json(server.get("/api/projects/" + project + "/members"));
+        JsonNode members = json(server.get("/api/projects/" + project() + "/members"));
         boolean carried = false;
         for (JsonNode m : members)
-            if (m.get("level").asText().equals("Level 3") && server.get("/api/projects/" + project + "/members/" + m.get("id").asText()).body().contains("Core wall"))
+            if (m.get("level").asText().equals("Level 3") && server.get("/api/projects/" + project() + "/members/" + m.get("id").asText()).body().contains("Core wall"))
                 carried = true;
         assertThat(carried).isTrue();
     }
@@ -84,7 +78,7 @@ class LineLoadPagesTest {
     @Test
     void badEntriesAreRefusedBesideTheirFieldAndNothingIsStored() {
         int count = loads("Roof").size();
-        long version = server.version(project);
+        long version = server.version(project());
         Map<String, List<Map.Entry<String, String>>> cases = Map.of(
                 "line", wall("Z", "1", "2", "300"),
                 "from", wall("A", "9", "2", "300"),
@@ -100,7 +94,7 @@ class LineLoadPagesTest {
         cladding.addAll(List.of(entry("deadBy", "pressure"), entry("deadPressure", "12"), entry("height", "-4")));
         assertThat(Html.text(server.post(page("Roof"), cladding).body(), "#error-height")).isNotBlank();
         assertThat(loads("Roof")).hasSize(count);
-        assertThat(server.version(project)).isEqualTo(version);
+        assertThat(server.version(project())).isEqualTo(version);
     }
 
     @Test
@@ -115,8 +109,8 @@ class LineLoadPagesTest {
 
     @Test
     void theApiAddsRefusesAndDeletesWithTheVersion() throws Exception {
-        String api = "/api/projects/" + project + "/levels/" + level("Level 1") + "/line-loads";
-        long v = server.version(project);
+        String api = "/api/projects/" + project() + "/levels/" + level("Level 1") + "/line-loads";
+        long v = server.version(project());
         HttpResponse<String> bad = server.json("POST", api, "{\"version\": " + v + ", \"line\": 1, \"from\": \"A\", \"to\": \"D\","
                 + " \"label\": \"West wall\", \"deadPressure\": 40, \"height\": -14}");
         assertThat(bad.statusCode()).isEqualTo(400);
@@ -146,12 +140,11 @@ class LineLoadPagesTest {
         assertThat(server.post(page("Roof"), parapet).statusCode()).isEqualTo(303);
         StoredLineLoad demo = loads("Roof").stream().filter(l -> l.label().equals("North parapet")).findFirst().orElseThrow();
         String delete = page("Roof") + "/" + demo.id() + "/delete";
-        HttpResponse<String> unconfirmed = server.post(delete, List.of(entry("version", String.valueOf(server.version(project))),
-                entry("lineLoad", String.valueOf(demo.id()))));
+        HttpResponse<String> unconfirmed = server.post(delete, server.versioned(project(), entry("lineLoad", String.valueOf(demo.id()))));
         assertThat(unconfirmed.statusCode()).isEqualTo(422);
         assertThat(Html.shown(unconfirmed.body())).contains("tick the box to confirm");
         assertThat(loads("Roof")).contains(demo);
-        HttpResponse<String> confirmed = server.post(delete, List.of(entry("version", String.valueOf(server.version(project))),
+        HttpResponse<String> confirmed = server.post(delete, server.versioned(project(),
                 entry("lineLoad", String.valueOf(demo.id())), entry("confirm", "yes")));
         assertThat(confirmed.statusCode()).isEqualTo(303);
         assertThat(loads("Roof")).doesNotContain(demo);

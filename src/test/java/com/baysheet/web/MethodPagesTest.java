@@ -6,7 +6,6 @@ import com.baysheet.engine.units.Quantity;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.MemberRole;
 import com.baysheet.store.Results;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
@@ -21,17 +20,12 @@ class MethodPagesTest {
     static final String CAUTION = "for review by a licensed engineer";
     @RegisterExtension
     static final TestServer server = TestServer.perClass();
-    static Results.Computed alder;
+    static Results.Computed alder() { return server.alderResults(); }
 
-    @BeforeAll
-    static void start() {
-        alder = server.store.results().of(server.alder().id());
-    }
-
-    static String base() { return "/projects/" + server.alder().id(); }
+    static String base() { return "/projects/" + server.alderId(); }
 
     private static DerivedMember officeBeam() {
-        return alder.derived().members().stream().filter(m -> m.role() != MemberRole.COLUMN && !m.result().methods().isEmpty())
+        return alder().derived().members().stream().filter(m -> m.role() != MemberRole.COLUMN && !m.result().methods().isEmpty())
                 .findFirst().orElseThrow();
     }
 
@@ -47,7 +41,7 @@ class MethodPagesTest {
 
     @Test
     void levelComparisonPageAndItsCsv() {
-        String level = alder.derived().members().get(0).level();
+        String level = alder().derived().members().get(0).level();
         long id = server.levelId(server.alder().id(), level);
         HttpResponse<String> page = server.get(base() + "/levels/" + id + "/methods");
         assertThat(page.statusCode()).isEqualTo(200);
@@ -57,17 +51,17 @@ class MethodPagesTest {
         assertThat(csv.statusCode()).isEqualTo(200);
         assertThat(csv.headers().firstValue("Content-Type").orElse("")).startsWith("text/csv");
         List<String> lines = csv.body().lines().toList();
-        long members = alder.derived().onLevel(level).stream().filter(m -> !m.result().methods().isEmpty()).count();
+        long members = alder().derived().onLevel(level).stream().filter(m -> !m.result().methods().isEmpty()).count();
         assertThat(lines).hasSize((int) members + 1);
         assertThat(lines.get(0)).startsWith("\"member\",\"name\",\"role\",\"L unreduced (lb)\"").contains("\"f, IBC 2021 alternative");
         // full precision, as the comparison gives it
-        DerivedMember first = alder.derived().onLevel(level).stream().filter(m -> !m.result().methods().isEmpty()).findFirst().orElseThrow();
+        DerivedMember first = alder().derived().onLevel(level).stream().filter(m -> !m.result().methods().isEmpty()).findFirst().orElseThrow();
         assertThat(lines.get(1)).startsWith("\"" + first.id() + "\"").contains("\"" + first.result().methods().get(1).reduced() + "\"");
     }
 
     @Test
     void takeDownShowsEachLevelUnderEveryMethod() {
-        var t = alder.derived().takeDowns().get(0);
+        var t = alder().derived().takeDowns().get(0);
         String body = server.get(base() + "/takedowns/" + t.id()).body();
         assertThat(body).contains("Floor live load under each reduction method", "IBC 2018 alternative uniform live load reduction");
     }

@@ -3,7 +3,6 @@ package com.baysheet.web;
 import com.baysheet.engine.record.RecordJson;
 import com.baysheet.store.StoredPointLoad;
 import com.fasterxml.jackson.databind.JsonNode;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
@@ -23,22 +22,17 @@ import static org.assertj.core.api.Assertions.assertThat;
 class PointLoadPagesTest {
     @RegisterExtension
     static final TestServer server = TestServer.perClass();
-    static long project;
+    static long project() { return server.alderId(); }
 
-    @BeforeAll
-    static void start() {
-        project = server.alder().id();
-    }
+    static long level(String name) { return server.levelId(project(), name); }
 
-    static long level(String name) { return server.levelId(project, name); }
+    static String page(String level) { return server.levelPage(project(), level, "point-loads"); }
 
-    static String page(String level) { return "/projects/" + project + "/levels/" + level(level) + "/point-loads"; }
-
-    static List<StoredPointLoad> loads(String level) { return server.store.pointLoads().findByLevel(project, level(level)); }
+    static List<StoredPointLoad> loads(String level) { return server.store.pointLoads().findByLevel(project(), level(level)); }
 
     static List<Map.Entry<String, String>> inBay(String label, String x, String y, String dead) {
-        return new ArrayList<>(List.of(entry("version", String.valueOf(server.version(project))), entry("label", label),
-                entry("placeBy", "bay"), entry("xLine", "1"), entry("yLine", "A"), entry("x", x), entry("y", y), entry("dead", dead)));
+        return server.versioned(project(), entry("label", label),
+                entry("placeBy", "bay"), entry("xLine", "1"), entry("yLine", "A"), entry("x", x), entry("y", y), entry("dead", dead));
     }
 
     static JsonNode json(HttpResponse<String> r) throws Exception { return RecordJson.mapper().readTree(r.body()); }
@@ -46,13 +40,13 @@ class PointLoadPagesTest {
     @Test
     void theDemoRooftopUnitIsListedDrawnAndSharedByTheLeverRule() throws Exception {
         assertThat(server.get(page("Roof")).body()).contains("RTU-1 rooftop unit", "bay A-B/3-4", "3.50 kip", "licensed engineer");
-        assertThat(server.get("/projects/" + project + "/plan?level=" + level("Roof")).body())
+        assertThat(server.get("/projects/" + project() + "/plan?level=" + level("Roof")).body())
                 .contains("<g class=\"point-load\"><title>point load: RTU-1 rooftop unit</title>");
         // roof beams along y at 7.5 ft in the 30 ft bay; x = 12 ft lies 4.5 ft past the beam at 7.5 ft: 0.4 of it there, 0.6 on the next
         boolean shared = false;
-        for (JsonNode m : json(server.get("/api/projects/" + project + "/members")))
+        for (JsonNode m : json(server.get("/api/projects/" + project() + "/members")))
             if (m.get("level").asText().equals("Roof")) {
-                String body = server.get("/api/projects/" + project + "/members/" + m.get("id").asText()).body();
+                String body = server.get("/api/projects/" + project() + "/members/" + m.get("id").asText()).body();
                 if (body.contains("RTU-1 rooftop unit: 0.600 of it by the lever rule")) shared = true;
             }
         assertThat(shared).isTrue();
@@ -73,19 +67,19 @@ class PointLoadPagesTest {
     @Test
     void aLoadOutsideItsBayIsRefusedBesideTheFieldAndNothingIsStored() {
         int count = loads("Level 1").size();
-        long version = server.version(project);
+        long version = server.version(project());
         HttpResponse<String> r = server.post(page("Level 1"), inBay("Safe", "31", "4", "900"));
         assertThat(r.statusCode()).isEqualTo(422);
         assertThat(r.body()).contains("id=\"error-x\"", "lies outside bay");
         assertThat(server.post(page("Level 1"), inBay("Safe", "-2", "4", "900")).body()).contains("id=\"error-x\"");
         assertThat(loads("Level 1")).hasSize(count);
-        assertThat(server.version(project)).isEqualTo(version);
+        assertThat(server.version(project())).isEqualTo(version);
     }
 
     @Test
     void theApiAddsRefusesAndDeletesAPointLoadOnAMember() throws Exception {
-        String api = "/api/projects/" + project + "/levels/" + level("Level 1") + "/point-loads";
-        long v = server.version(project);
+        String api = "/api/projects/" + project() + "/levels/" + level("Level 1") + "/point-loads";
+        long v = server.version(project());
         HttpResponse<String> off = server.json("POST", api, "{\"version\": " + v + ", \"label\": \"Hoist\", \"line\": \"A\","
                 + " \"from\": \"1\", \"to\": \"2\", \"distance\": 45, \"dead\": 500}");
         assertThat(off.statusCode()).isEqualTo(400);
@@ -98,7 +92,7 @@ class PointLoadPagesTest {
         assertThat(saved.get("distance").asDouble()).isEqualTo(10.0);
         long id = saved.get("id").asLong(), after = json(ok).get("version").asLong();
         // a grid change that would remove a line the load is placed by is refused, naming the load
-        HttpResponse<String> grid = server.json("PUT", "/api/projects/" + project + "/grid", "{\"version\": " + after
+        HttpResponse<String> grid = server.json("PUT", "/api/projects/" + project() + "/grid", "{\"version\": " + after
                 + ", \"x\": {\"names\": [\"1\", \"3\", \"4\", \"5\"], \"spacings\": [60, 30, 30]},"
                 + " \"y\": {\"names\": [\"A\", \"B\", \"C\", \"D\"], \"spacings\": [28, 10, 28]}}");
         assertThat(grid.statusCode()).isEqualTo(400);

@@ -5,7 +5,6 @@ import com.baysheet.engine.record.Step;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.TakeDown;
 import com.baysheet.store.Results;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
@@ -18,23 +17,18 @@ class ResultPagesTest {
     static final String CAUTION = "for review by a licensed engineer";
     @RegisterExtension
     static final TestServer server = TestServer.perClass();
-    static Results.Computed alder;
-
-    @BeforeAll
-    static void start() {
-        alder = server.store.results().of(server.alder().id());
-    }
+    static Results.Computed alder() { return server.alderResults(); }
 
     /** A record's text as a page shows it: runs of white space read as one space. */
     static String shown(String s) {
         return s.strip().replaceAll("\\s+", " ");
     }
 
-    static String base() { return "/projects/" + server.alder().id(); }
+    static String base() { return "/projects/" + server.alderId(); }
 
     @Test
     void memberPageRendersTheWholeRecordWithClausesAndCautions() {
-        DerivedMember girder = alder.derived().members().stream()
+        DerivedMember girder = alder().derived().members().stream()
                 .filter(m -> m.name().equals("Girder D/1-2") && m.level().equals("Level 3")).findFirst().orElseThrow();
         HttpResponse<String> r = server.get(base() + "/members/" + girder.id());
         assertThat(r.statusCode()).isEqualTo(200);
@@ -52,7 +46,7 @@ class ResultPagesTest {
 
     @Test
     void columnPageNamesTheAreaAtItsLevelApartFromTheCumulativeAreaItIsReducedWith() {
-        DerivedMember c = alder.derived().members().stream().filter(m -> m.name().equals("Column B/2 below Level 1")).findFirst().orElseThrow();
+        DerivedMember c = alder().derived().members().stream().filter(m -> m.name().equals("Column B/2 below Level 1")).findFirst().orElseThrow();
         String page = server.get(base() + "/members/" + c.id()).body();
         UnitLabels us = UnitLabels.of(server.alder().info().units());
         assertThat(Html.texts(page, "dt")).contains("Area at this level").doesNotContain("Tributary area");
@@ -65,10 +59,10 @@ class ResultPagesTest {
     void memberListFiltersByLevelAndRoleAndShowsGoverningNumbers() {
         HttpResponse<String> r = server.get(base() + "/members?level=Level+1&role=COLUMN");
         String body = Html.shown(r.body());
-        long columns = alder.derived().members().stream()
+        long columns = alder().derived().members().stream()
                 .filter(m -> m.level().equals("Level 1") && m.role().name().equals("COLUMN")).count();
         assertThat(body).contains(columns + " members.", "Column B/2 below Level 1", CAUTION).doesNotContain("Girder A/1-2");
-        DerivedMember c = alder.derived().members().stream().filter(m -> m.name().equals("Column B/2 below Level 1")).findFirst().orElseThrow();
+        DerivedMember c = alder().derived().members().stream().filter(m -> m.name().equals("Column B/2 below Level 1")).findFirst().orElseThrow();
         assertThat(body).contains(shown(c.result().record().entry("LRFD.P").shown()));
         assertThat(Html.shown(server.get(base() + "/members?kind=EDGE_BEAM_CANTILEVER").body())).contains("Girder D/1-2").doesNotContain("Girder B/1-2");
     }
@@ -88,7 +82,7 @@ class ResultPagesTest {
 
     @Test
     void takeDownPageTabulatesEveryLevelFromTheTop() {
-        TakeDown t = alder.derived().takeDowns().stream().filter(s -> s.gridPoint().equals("C/2")).findFirst().orElseThrow();
+        TakeDown t = alder().derived().takeDowns().stream().filter(s -> s.gridPoint().equals("C/2")).findFirst().orElseThrow();
         String page = server.get(base() + "/takedowns/" + t.id()).body();
         String body = Html.shown(page);
         UnitLabels us = UnitLabels.of(server.alder().info().units());
@@ -107,9 +101,9 @@ class ResultPagesTest {
 
     @Test
     void framingPlanDrawsGridNamesOccupancyLegendAndMemberLinks() {
-        long level3 = alder.model().levels().stream().filter(l -> l.name().equals("Level 3")).findFirst().orElseThrow().id();
+        long level3 = alder().model().levels().stream().filter(l -> l.name().equals("Level 3")).findFirst().orElseThrow().id();
         String page = server.get(base() + "/plan?level=" + level3).body();
-        String girder = alder.derived().onLevel("Level 3").stream().filter(m -> m.id().contains("-h")).findFirst().orElseThrow().id();
+        String girder = alder().derived().onLevel("Level 3").stream().filter(m -> m.id().contains("-h")).findFirst().orElseThrow().id();
         assertThat(Html.texts(page, "svg text")).contains("A", "5");
         assertThat(Html.shown(page)).contains("Offices", "Office corridors above first floor", "Assembly: movable seats", CAUTION);
         assertThat(Html.all(page, "svg .cantilever")).isNotEmpty();
@@ -127,7 +121,7 @@ class ResultPagesTest {
 
     @Test
     void apiRecordIsTheSameRecordAsThePage() {
-        DerivedMember m = alder.derived().members().get(3);
+        DerivedMember m = alder().derived().members().get(3);
         HttpResponse<String> r = server.get("/api" + base() + "/members/" + m.id() + "/record");
         assertThat(r.statusCode()).isEqualTo(200);
         assertThat(r.headers().firstValue("Content-Type").orElse("")).startsWith("application/json");

@@ -5,6 +5,7 @@ import com.baysheet.framing.Derivation;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
 import com.baysheet.project.Project;
+import com.baysheet.store.Results;
 import com.baysheet.store.Store;
 import io.javalin.Javalin;
 import org.junit.jupiter.api.extension.AfterAllCallback;
@@ -13,6 +14,7 @@ import org.junit.jupiter.api.extension.ExtensionContext;
 
 import java.net.http.HttpResponse;
 import java.time.Clock;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.UUID;
@@ -57,7 +59,13 @@ final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCall
         engineer = TestLogin.as(app, office, "tess", Role.ENGINEER);
     }
 
+    /** The demo's office building, the project most page tests work on. */
     Project alder() { return demo.get(0); }
+
+    long alderId() { return alder().id(); }
+
+    /** The office building's calculated results, as its pages read them. */
+    Results.Computed alderResults() { return store.results().of(alderId()); }
 
     Project deck() { return demo.get(1); }
 
@@ -67,6 +75,20 @@ final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCall
     long levelId(long projectId, String name) {
         return store.levels().findByProject(projectId).stream().filter(l -> l.name().equals(name))
                 .findFirst().map(com.baysheet.project.StoredLevel::id).orElseThrow();
+    }
+
+    /** A page under one of a project's levels, the level given by name: {@code "/projects/1/levels/3/" + page}. */
+    String levelPage(long projectId, String level, String page) {
+        return "/projects/" + projectId + "/levels/" + levelId(projectId, level) + "/" + page;
+    }
+
+    /** A model form's fields led by the project's current version, as every model form sends them; open to more. */
+    @SafeVarargs
+    final List<Map.Entry<String, String>> versioned(long projectId, Map.Entry<String, String>... fields) {
+        List<Map.Entry<String, String>> f = new ArrayList<>();
+        f.add(Map.entry("version", String.valueOf(version(projectId))));
+        f.addAll(List.of(fields));
+        return f;
     }
 
     HttpResponse<String> get(String path) {
