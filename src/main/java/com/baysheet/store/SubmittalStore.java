@@ -2,9 +2,9 @@ package com.baysheet.store;
 
 import com.baysheet.framing.model.Submittal;
 
+import org.jdbi.v3.core.Handle;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
 import java.sql.SQLException;
 
 /**
@@ -37,26 +37,22 @@ public final class SubmittalStore {
 
     /** The engineer, licence and code of {@code s}, in the caller's change. */
     static void write(Connection c, long projectId, Submittal s) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("UPDATE project SET engineer_of_record = ?, licence_number = ?, "
-                + "licence_state = ?, building_code = ?, code_year = ? WHERE id = ?")) {
-            ps.setString(1, s.engineerOfRecord());
-            ps.setString(2, s.licenceNumber());
-            ps.setString(3, s.licenceState());
-            ps.setString(4, s.buildingCode());
-            ps.setString(5, s.codeYear());
-            ps.setLong(6, projectId);
-            ps.executeUpdate();
+        try (Handle h = Sql.on(c)) {
+            h.createUpdate("UPDATE project SET engineer_of_record = :engineer, licence_number = :licence, "
+                            + "licence_state = :licenceState, building_code = :code, code_year = :codeYear WHERE id = :id")
+                    .bind("engineer", s.engineerOfRecord()).bind("licence", s.licenceNumber())
+                    .bind("licenceState", s.licenceState()).bind("code", s.buildingCode()).bind("codeYear", s.codeYear())
+                    .bind("id", projectId).execute();
         }
     }
 
     static Submittal find(Connection c, long projectId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM project WHERE id = ?")) {
-            ps.setLong(1, projectId);
-            try (ResultSet rs = ps.executeQuery()) {
-                if (!rs.next()) throw new NotFound("project", projectId);
-                return new Submittal(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4), rs.getString(5),
-                        rs.getString(6), rs.getString(7));
-            }
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT " + COLUMNS + " FROM project WHERE id = :id").bind("id", projectId)
+                    .map((rs, ctx) -> new Submittal(rs.getString("address"), rs.getString("client"), rs.getString("engineer_of_record"),
+                            rs.getString("licence_number"), rs.getString("licence_state"), rs.getString("building_code"),
+                            rs.getString("code_year")))
+                    .findOne().orElseThrow(() -> new NotFound("project", projectId));
         }
     }
 

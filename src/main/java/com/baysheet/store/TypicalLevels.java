@@ -4,9 +4,10 @@ import com.baysheet.project.StoredLevel;
 import com.baysheet.project.LevelInfo;
 import com.baysheet.engine.InputError;
 
+import org.jdbi.v3.core.Handle;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
+import java.sql.ResultSetMetaData;
 import java.sql.SQLException;
 import java.util.ArrayList;
 import java.util.List;
@@ -158,46 +159,39 @@ public final class TypicalLevels {
     }
 
     private static void setTypical(Connection c, long levelId, Long typicalId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("UPDATE building_level SET typical_of = ? WHERE id = ?")) {
-            if (typicalId == null) ps.setNull(1, java.sql.Types.BIGINT);
-            else ps.setLong(1, typicalId);
-            ps.setLong(2, levelId);
-            ps.executeUpdate();
+        try (Handle h = Sql.on(c)) {
+            h.createUpdate("UPDATE building_level SET typical_of = :typical WHERE id = :id")
+                    .bind("typical", typicalId).bind("id", levelId).execute();
         }
     }
 
     private static void deleteBays(Connection c, long levelId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("DELETE FROM bay WHERE level_id = ?")) {
-            ps.setLong(1, levelId);
-            ps.executeUpdate();
+        try (Handle h = Sql.on(c)) {
+            h.createUpdate("DELETE FROM bay WHERE level_id = :level").bind("level", levelId).execute();
         }
     }
 
     private static int countBays(Connection c, long levelId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT COUNT(*) FROM bay WHERE level_id = ?")) {
-            ps.setLong(1, levelId);
-            try (ResultSet rs = ps.executeQuery()) {
-                rs.next();
-                return rs.getInt(1);
-            }
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT COUNT(*) FROM bay WHERE level_id = :level").bind("level", levelId).mapTo(Integer.class).one();
         }
     }
 
     /** Copies every column of the bay rows (whatever columns the bay table has), with the target's level id. */
     private static void copyBays(Connection c, long fromLevel, long toLevel) throws SQLException {
-        List<String> cols = new ArrayList<>();
-        try (PreparedStatement ps = c.prepareStatement("SELECT * FROM bay WHERE 1 = 0"); ResultSet rs = ps.executeQuery()) {
-            for (int i = 1; i <= rs.getMetaData().getColumnCount(); i++) {
-                String name = rs.getMetaData().getColumnLabel(i).toLowerCase();
-                if (!name.equals("level_id")) cols.add(name);
-            }
-        }
-        String list = String.join(", ", cols);
-        try (PreparedStatement ps = c.prepareStatement("INSERT INTO bay (level_id, " + list + ") SELECT ?, " + list
-                + " FROM bay WHERE level_id = ?")) {
-            ps.setLong(1, toLevel);
-            ps.setLong(2, fromLevel);
-            ps.executeUpdate();
+        try (Handle h = Sql.on(c)) {
+            List<String> cols = h.createQuery("SELECT * FROM bay WHERE 1 = 0").scanResultSet((rows, ctx) -> {
+                ResultSetMetaData meta = rows.get().getMetaData();
+                List<String> names = new ArrayList<>();
+                for (int i = 1; i <= meta.getColumnCount(); i++) {
+                    String name = meta.getColumnLabel(i).toLowerCase();
+                    if (!name.equals("level_id")) names.add(name);
+                }
+                return names;
+            });
+            String list = String.join(", ", cols);
+            h.createUpdate("INSERT INTO bay (level_id, " + list + ") SELECT :to, " + list + " FROM bay WHERE level_id = :from")
+                    .bind("to", toLevel).bind("from", fromLevel).execute();
         }
     }
 }

@@ -4,9 +4,9 @@ import com.baysheet.project.StoredLevel;
 import com.baysheet.project.LevelInfo;
 import com.baysheet.engine.InputError;
 
+import org.jdbi.v3.core.Handle;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.List;
 import java.util.regex.Matcher;
@@ -72,11 +72,9 @@ final class TypicalRules {
     private static String kind(StoredLevel l) { return l.info().roof() ? "roof" : "floor"; }
 
     private static Long projectOf(Connection c, long levelId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT project_id FROM building_level WHERE id = ?")) {
-            ps.setLong(1, levelId);
-            try (ResultSet rs = ps.executeQuery()) {
-                return rs.next() ? rs.getLong(1) : null;
-            }
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT project_id FROM building_level WHERE id = :id").bind("id", levelId)
+                    .mapTo(Long.class).findOne().orElse(null);
         }
     }
 }

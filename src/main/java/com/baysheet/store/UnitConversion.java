@@ -6,8 +6,9 @@ import com.baysheet.engine.units.Convert;
 import com.baysheet.engine.units.Quantity;
 import com.baysheet.engine.units.UnitSystem;
 
+import org.jdbi.v3.core.Handle;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
 import java.sql.SQLException;
 import java.util.List;
 
@@ -21,10 +22,10 @@ public final class UnitConversion {
     /** A stored number, where its rows are found from the project id, and what kind of value it is. */
     private record Column(String table, String column, String rowsOf, Quantity quantity) {}
 
-    private static final String PROJECT = "id = ?";
-    private static final String GRID = "project_id = ?";
-    private static final String LEVEL = "project_id = ?";
-    private static final String ON_LEVELS = "level_id IN (SELECT id FROM building_level WHERE project_id = ?)";
+    private static final String PROJECT = "id = :project";
+    private static final String GRID = "project_id = :project";
+    private static final String LEVEL = "project_id = :project";
+    private static final String ON_LEVELS = "level_id IN (SELECT id FROM building_level WHERE project_id = :project)";
 
     /** Every number a project stores in its unit system (the firm's self weights are kept in plf and converted on reading). */
     private static final List<Column> COLUMNS = List.of(
@@ -65,15 +66,11 @@ public final class UnitConversion {
             if (from == to) throw new InputError("units", to, "is already the project's unit system");
             for (Column col : COLUMNS) scale(c, col, projectId, from);
             // a cladding load stays the product of its weight per area and its height, as entered
-            try (PreparedStatement ps = c.prepareStatement("UPDATE line_load SET dead_load = dead_pressure * height WHERE "
-                    + "dead_pressure IS NOT NULL AND height IS NOT NULL AND " + ON_LEVELS)) {
-                ps.setLong(1, projectId);
-                ps.executeUpdate();
-            }
-            try (PreparedStatement ps = c.prepareStatement("UPDATE project SET unit_system = ? WHERE id = ?")) {
-                ps.setString(1, to.name());
-                ps.setLong(2, projectId);
-                ps.executeUpdate();
+            try (Handle h = Sql.on(c)) {
+                h.createUpdate("UPDATE line_load SET dead_load = dead_pressure * height WHERE "
+                        + "dead_pressure IS NOT NULL AND height IS NOT NULL AND " + ON_LEVELS).bind("project", projectId).execute();
+                h.createUpdate("UPDATE project SET unit_system = :units WHERE id = :project")
+                        .bind("units", to.name()).bind("project", projectId).execute();
             }
             return ProjectStore.find(c, projectId);
         });
@@ -81,12 +78,11 @@ public final class UnitConversion {
 
     /** US to SI multiplies by the factor, SI to US divides by it (as {@link Convert#toSi} and {@link Convert#toUs} do). */
     private static void scale(Connection c, Column col, long projectId, UnitSystem from) throws SQLException {
-        String op = from == UnitSystem.US ? " * ?" : " / ?";
-        try (PreparedStatement ps = c.prepareStatement("UPDATE " + col.table() + " SET " + col.column() + " = " + col.column()
-                + op + " WHERE " + col.column() + " IS NOT NULL AND " + col.rowsOf())) {
-            ps.setDouble(1, Convert.toSi(col.quantity(), 1.0));
-            ps.setLong(2, projectId);
-            ps.executeUpdate();
+        String op = from == UnitSystem.US ? " * :factor" : " / :factor";
+        try (Handle h = Sql.on(c)) {
+            h.createUpdate("UPDATE " + col.table() + " SET " + col.column() + " = " + col.column()
+                            + op + " WHERE " + col.column() + " IS NOT NULL AND " + col.rowsOf())
+                    .bind("factor", Convert.toSi(col.quantity(), 1.0)).bind("project", projectId).execute();
         }
     }
 }
