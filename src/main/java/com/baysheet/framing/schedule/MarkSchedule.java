@@ -3,13 +3,9 @@ package com.baysheet.framing.schedule;
 import com.baysheet.framing.Derived;
 import com.baysheet.framing.DerivedMember;
 import com.baysheet.framing.MemberLabels;
-import com.baysheet.framing.MemberRole;
 import com.baysheet.framing.TypicalGroup;
 
-import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.function.Predicate;
 
 /**
@@ -32,26 +28,10 @@ public final class MarkSchedule {
 
     /** The members chosen, one row per label, in the order of each label's first member. */
     public static LoadSchedule of(Derived d, Predicate<DerivedMember> which, MemberLabels marks) {
-        Map<String, List<DerivedMember>> groups = new LinkedHashMap<>();
-        List<DerivedMember> chosen = new ArrayList<>();
-        for (DerivedMember m : d.members()) {
-            if (m.role() == MemberRole.COLUMN || !which.test(m)) continue;
-            groups.computeIfAbsent(marks.of(m), k -> new ArrayList<>()).add(m);
-            chosen.add(m);
-        }
-        List<MemberSchedule.Value> values = MemberSchedule.values(chosen);
-        List<LoadSchedule.Column> cols = new ArrayList<>(List.of(LoadSchedule.Column.text("Mark"), LoadSchedule.Column.text("Count"),
-                LoadSchedule.Column.text("Locations")));
-        for (MemberSchedule.Value v : values) cols.add(new LoadSchedule.Column(v.heading(), v.quantity()));
-        List<List<Object>> rows = new ArrayList<>();
-        for (var g : groups.entrySet()) {
-            List<Object> row = new ArrayList<>(List.of(g.getKey(), Integer.toString(g.getValue().size()), locations(g.getValue())));
-            for (MemberSchedule.Value v : values) row.add(v.envelope(g.getValue()));
-            rows.add(row);
-        }
-        return new LoadSchedule("marks", "Member schedule by mark", d.building().context().system(), cols, rows, List.of(
-                MemberSchedule.READING,
-                "Each mark is calculated once for all its locations; its sheet lists them with the calculation."));
+        return MemberSchedule.table(d, "marks", "Member schedule by mark", List.of("Mark", "Count", "Locations"),
+                MemberSchedule.grouped(d, which, marks::of),
+                g -> List.of(marks.of(g.get(0)), Integer.toString(g.size()), locations(g)),
+                "Each mark is calculated once for all its locations; its sheet lists them with the calculation.");
     }
 
     /** The locations of a mark as a reader finds them: level and grid position, never an internal id. */

@@ -41,27 +41,33 @@ public final class MemberSchedule {
 
     /** The members chosen, with another labelling where typical members share a mark. */
     public static LoadSchedule of(Derived d, Predicate<DerivedMember> which, Function<DerivedMember, String> label) {
+        return table(d, "members", "Member schedule", List.of("Level", "Member", "Count"),
+                grouped(d, which, m -> m.level() + "\u0000" + label.apply(m)),
+                g -> List.of(g.get(0).level(), label.apply(g.get(0)), Integer.toString(g.size())),
+                "Where several members share a label the row shows the largest of each value among them (the most negative M_u−).");
+    }
+
+    /** The beams and girders chosen, grouped by the key given, each group in the order of its first member. */
+    static Map<String, List<DerivedMember>> grouped(Derived d, Predicate<DerivedMember> which, Function<DerivedMember, String> key) {
         Map<String, List<DerivedMember>> groups = new LinkedHashMap<>();
-        List<DerivedMember> chosen = new ArrayList<>();
-        for (DerivedMember m : d.members()) {
-            if (m.role() == MemberRole.COLUMN || !which.test(m)) continue;
-            groups.computeIfAbsent(m.level() + "\u0000" + label.apply(m), k -> new ArrayList<>()).add(m);
-            chosen.add(m);
-        }
-        List<Value> values = values(chosen);
-        List<LoadSchedule.Column> cols = new ArrayList<>(List.of(LoadSchedule.Column.text("Level"), LoadSchedule.Column.text("Member"),
-                LoadSchedule.Column.text("Count")));
+        for (DerivedMember m : d.members())
+            if (m.role() != MemberRole.COLUMN && which.test(m)) groups.computeIfAbsent(key.apply(m), k -> new ArrayList<>()).add(m);
+        return groups;
+    }
+
+    /** One row per group: the text cells given for it, then the envelope over the group of every number column. */
+    static LoadSchedule table(Derived d, String key, String title, List<String> headings, Map<String, List<DerivedMember>> groups,
+                              Function<List<DerivedMember>, List<Object>> cells, String note) {
+        List<Value> values = values(groups.values().stream().flatMap(List::stream).toList());
+        List<LoadSchedule.Column> cols = new ArrayList<>(headings.stream().map(LoadSchedule.Column::text).toList());
         for (Value v : values) cols.add(new LoadSchedule.Column(v.heading, v.quantity));
         List<List<Object>> rows = new ArrayList<>();
         for (List<DerivedMember> g : groups.values()) {
-            DerivedMember first = g.get(0);
-            List<Object> row = new ArrayList<>(List.of(first.level(), label.apply(first), Integer.toString(g.size())));
+            List<Object> row = new ArrayList<>(cells.apply(g));
             for (Value v : values) row.add(v.envelope(g));
             rows.add(row);
         }
-        return new LoadSchedule("members", "Member schedule", d.building().context().system(), cols, rows, List.of(
-                READING,
-                "Where several members share a label the row shows the largest of each value among them (the most negative M_u−)."));
+        return new LoadSchedule(key, title, d.building().context().system(), cols, rows, List.of(READING, note));
     }
 
     /** The number columns for these members: Lr, S and M− only where some member carries them. */
