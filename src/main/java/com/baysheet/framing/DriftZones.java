@@ -10,7 +10,8 @@ import java.util.List;
 
 /**
  * Where the drift surcharges of a level lie on plan, for drawing: each wall found at a roof step (see {@link RoofSteps})
- * with the band of the lower roof it loads, from the wall to the drift's extent.
+ * with the bands of the lower roof it loads, from the wall to the drift's extent: one along the wall's own length and
+ * one per bay past each free end of the wall, where the drift is carried on for its width (see {@link WallEnds}).
  */
 public final class DriftZones {
     private DriftZones() {}
@@ -29,14 +30,17 @@ public final class DriftZones {
         double top = b.levels().stream().mapToDouble(Level::elevation).max().orElse(level.elevation());
         LevelPlan plan = new LevelPlan("", level, b.grid(), level.elevation() < top);
         List<Zone> out = new ArrayList<>();
+        var sys = b.context().system();
         for (RoofSteps.Wall w : RoofSteps.of(b.context(), plan, b.levels()).walls) {
-            double far = w.at() + w.toward() * w.drift().extent();
-            PlanRect area = w.alongX() ? new PlanRect(w.start(), Math.min(w.at(), far), w.end(), Math.max(w.at(), far))
-                    : new PlanRect(Math.min(w.at(), far), w.start(), Math.max(w.at(), far), w.end());
             PlanLine wall = w.alongX() ? new PlanLine(w.start(), w.at(), w.end(), w.at()) : new PlanLine(w.at(), w.start(), w.at(), w.end());
-            var sys = b.context().system();
-            out.add(new Zone(area, wall, "drift at " + w.line() + " (" + w.between() + "): h_d " + Display.of(w.drift().height(), Quantity.LENGTH, sys)
-                    + ", w " + Display.of(w.drift().width(), Quantity.LENGTH, sys) + ", p_d " + Display.of(w.drift().peak(), Quantity.PRESSURE, sys)));
+            String label = "drift at " + w.line() + " (" + w.between() + "): h_d " + Display.of(w.drift().height(), Quantity.LENGTH, sys)
+                    + ", w " + Display.of(w.drift().width(), Quantity.LENGTH, sys) + ", p_d " + Display.of(w.drift().peak(), Quantity.PRESSURE, sys);
+            for (RoofSteps.Reach r : w.reaches()) {
+                double far = w.at() + w.toward() * r.depth();
+                PlanRect area = w.alongX() ? new PlanRect(r.from(), Math.min(w.at(), far), r.to(), Math.max(w.at(), far))
+                        : new PlanRect(Math.min(w.at(), far), r.from(), Math.max(w.at(), far), r.to());
+                out.add(new Zone(area, wall, r.pastEnd() ? label + ", carried past the end of the wall" : label));
+            }
         }
         return out;
     }

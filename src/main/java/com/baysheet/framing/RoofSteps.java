@@ -24,7 +24,8 @@ import java.util.Map;
  * grid line between them is a wall, of height the highest covering level's elevation less this roof's. The upper
  * roof length ℓu is the run of covered cells straight away from the wall, the lower roof length ℓl the run of this
  * roof's exposed bays straight away from it (both in the direction across the wall, as the wind blows over the step).
- * Each wall is one bay side long; its drift acts over that length of wall only.
+ * Each wall is one bay side long; its drift acts over that length of wall and, past each free end of the wall, for
+ * the drift width w along the wall's line (our choice, see {@link WallEnds}).
  */
 final class RoofSteps {
     /**
@@ -32,10 +33,21 @@ final class RoofSteps {
      * lower roof lies toward increasing coordinate where {@code toward} is +1.
      */
     record Wall(boolean alongX, double at, double start, double end, int toward, RoofStep step, String line,
-                String between, DriftSurcharge drift) {
+                String between, DriftSurcharge drift, List<Reach> reaches) {
+        Wall { reaches = List.copyOf(reaches); }
+
         /** Distance from the wall into the lower roof of a coordinate across it. */
         double distance(double across) { return (across - at) * toward; }
+
+        Wall withReaches(List<Reach> r) { return new Wall(alongX, at, start, end, toward, step, line, between, drift, r); }
     }
+
+    /**
+     * A rectangle of the lower roof the wall's drift profile loads: along the wall's line from {@code from} to
+     * {@code to}, across from the wall's line to {@code depth} into the lower roof; {@code pastEnd} where it lies
+     * beyond an end of the wall.
+     */
+    record Reach(double from, double to, double depth, boolean pastEnd) {}
 
     static final RoofSteps NONE = new RoofSteps(List.of());
 
@@ -59,7 +71,9 @@ final class RoofSteps {
                     if (p.floored(c, r) != null && !(top[c][r] >= l.elevation())) top[c][r] = l.elevation();
         }
         SnowRoof roof = low.surface().roof(low.roofSlope());
-        List<Wall> out = new ArrayList<>();
+        boolean[][] exposed = new boolean[nx][ny];
+        for (int c = 0; c < nx; c++) for (int r = 0; r < ny; r++) exposed[c][r] = plan.floored(c, r) != null && Double.isNaN(top[c][r]);
+        List<WallEnds.Placed> out = new ArrayList<>();
         int[][] sides = {{0, 1}, {0, -1}, {1, 0}, {-1, 0}};
         for (int c = 0; c < nx; c++)
             for (int r = 0; r < ny; r++) {
@@ -88,10 +102,11 @@ final class RoofSteps {
                     double start = alongX ? plan.x(c) : plan.y(r), end = alongX ? plan.x(c + 1) : plan.y(r + 1);
                     String line = alongX ? g.y().name(wallLine) : g.x().name(wallLine);
                     String between = alongX ? g.x().name(c) + "-" + g.x().name(c + 1) : g.y().name(r) + "-" + g.y().name(r + 1);
-                    out.add(new Wall(alongX, at, start, end, -(s[0] + s[1]), step, line, between, d));
+                    out.add(new WallEnds.Placed(c, r, s[0], s[1],
+                            new Wall(alongX, at, start, end, -(s[0] + s[1]), step, line, between, d, List.of())));
                 }
             }
-        return new RoofSteps(out);
+        return new RoofSteps(WallEnds.reaches(plan, exposed, out));
     }
 
     boolean isEmpty() { return walls.isEmpty(); }
@@ -105,45 +120,46 @@ final class RoofSteps {
         Map<String, List<DriftStrip>> strips = new LinkedHashMap<>();
         Map<String, Wall> first = new LinkedHashMap<>();
         Map<String, List<String>> spans = new LinkedHashMap<>();
+        java.util.Set<String> pastEnds = new java.util.HashSet<>();
         boolean memberAlongX = member.y1() == member.y2();
         for (Wall w : walls)
-            for (PlanRect r : rects) {
-                DriftStrip s = strip(w, member, memberAlongX, r);
-                if (s == null) continue;
-                String key = (w.alongX ? "x" : "y") + w.at + "/" + w.toward + "/" + w.step;
-                strips.computeIfAbsent(key, k -> new ArrayList<>()).add(s);
-                first.putIfAbsent(key, w);
-                List<String> b = spans.computeIfAbsent(key, k -> new ArrayList<>());
-                if (!b.contains(w.between)) b.add(w.between);
-            }
+            for (Reach reach : w.reaches)
+                for (PlanRect r : rects) {
+                    DriftStrip s = strip(w, reach, member, memberAlongX, r);
+                    if (s == null) continue;
+                    String key = (w.alongX ? "x" : "y") + w.at + "/" + w.toward + "/" + w.step;
+                    strips.computeIfAbsent(key, k -> new ArrayList<>()).add(s);
+                    first.putIfAbsent(key, w);
+                    if (reach.pastEnd()) pastEnds.add(key);
+                    List<String> b = spans.computeIfAbsent(key, k -> new ArrayList<>());
+                    if (!b.contains(w.between)) b.add(w.between);
+                }
         List<StepDrift> out = new ArrayList<>();
         for (var e : strips.entrySet()) {
             Wall w = first.get(e.getKey());
             String where = "wall on grid line " + w.line + " (" + String.join(", ", spans.get(e.getKey())) + "), "
                     + show(w.step.height(), ctx) + " from this roof up to the higher level; upper roof length ℓu "
                     + show(w.step.upperLength(), ctx) + ", lower roof length ℓl " + show(w.step.lowerLength(), ctx);
-            out.add(new StepDrift(w.step, where, e.getValue()));
+            out.add(new StepDrift(w.step, where, e.getValue(), pastEnds.contains(e.getKey())));
         }
         return out;
     }
 
-    private static DriftStrip strip(Wall w, PlanLine m, boolean memberAlongX, PlanRect r) {
+    /** The part of strip {@code r} within the reach of the wall's drift, or null where the drift does not reach it. */
+    private static DriftStrip strip(Wall w, Reach reach, PlanLine m, boolean memberAlongX, PlanRect r) {
         double rs = w.alongX ? Math.min(r.x1(), r.x2()) : Math.min(r.y1(), r.y2());   // along the wall
         double re = w.alongX ? Math.max(r.x1(), r.x2()) : Math.max(r.y1(), r.y2());
         double ca = w.alongX ? r.y1() : r.x1(), cb = w.alongX ? r.y2() : r.x2();      // across the wall
-        double lo = Math.max(rs, w.start), hi = Math.min(re, w.end);
+        double lo = Math.max(rs, reach.from()), hi = Math.min(re, reach.to());
         if (hi <= lo) return null;
         double da = w.distance(ca), db = w.distance(cb);
-        double ext = w.drift.extent();
-        if (Math.max(da, db) <= 0 || Math.min(da, db) >= ext) return null;
-        boolean parallel = memberAlongX == w.alongX;
+        double near = Math.max(0, Math.min(da, db)), far = Math.min(reach.depth(), Math.max(da, db));
+        if (far <= near) return null;
         double mStart = memberAlongX ? m.x1() : m.y1();
-        if (parallel) {
-            double near = Math.max(0, Math.min(da, db)), far = Math.max(da, db);
-            return new DriftStrip(true, lo - mStart, hi - mStart, far - near, near, near);
-        }
-        double a = Math.min(ca, cb), b = Math.max(ca, cb);
-        return new DriftStrip(false, a - mStart, b - mStart, hi - lo, w.distance(a), w.distance(b));
+        if (memberAlongX == w.alongX) return new DriftStrip(true, lo - mStart, hi - mStart, far - near, near, near);
+        double a = w.at + w.toward * near, b = w.at + w.toward * far;   // the stretch of the member within the reach
+        return new DriftStrip(false, Math.min(a, b) - mStart, Math.max(a, b) - mStart, hi - lo,
+                w.toward > 0 ? near : far, w.toward > 0 ? far : near);
     }
 
     private static String show(double v, CalcContext ctx) { return Display.of(v, Quantity.LENGTH, ctx.system()); }

@@ -67,6 +67,11 @@ final class MemberSnow {
             rec.info("Roof step " + (i + 1) + ": " + sd.where() + ".", ed.clause("snow.drift"));
             DriftSurcharge d = i == 0 ? l.drift() : RoofSnow.drift(ctx, ctx.snow(), l.sloped(), sd.step(), rec);
             if (!d.required()) continue;
+            if (sd.pastEnds())
+                rec.info("Roof step " + (i + 1) + ": the drift is carried past the free end of the wall for the drift width w, with"
+                        + " the profile it has at the wall (p_d at the wall's line, linear to 0 at w), over the lower roof's exposed"
+                        + " bays (our choice, common practice, conservative: the code gives no rule at the ends of a wall, and drifting"
+                        + " snow does not stop where the wall stops).", ed.clause("snow.drift"));
             for (int k = 0; k < sd.strips().size(); k++)
                 added += MemberDrift.strip(ed, d, sd.strips().get(k), (i + 1) + "." + (k + 1), rec, book.snow, book.driftSketch);
         }
