@@ -25,25 +25,36 @@ import static org.assertj.core.api.Assertions.within;
 
 /**
  * The drift at a roof step is carried once: the drift loads on the members add up to the drift's area load (its
- * resultant per length of wall × the wall's length, ASCE 7-16 7.7.1), and the column bases carry every roof's uniform
- * snow plus that drift, whatever the framing.
+ * resultant per length of wall, ASCE 7-16 7.7.1, × the loaded length: the walls' length plus, at each free end, the
+ * extension of w along the wall's line cut at the lower roof's edge, our choice), and the column bases carry every
+ * roof's uniform snow plus that drift, whatever the framing.
  */
 class RoofDriftProperties {
     @Property(tries = 60)
     void driftOnMembersSumsToTheDriftAreaLoadAndReachesTheColumnsOnce(
             @ForAll @DoubleRange(min = 12, max = 40) double lowSpan, @ForAll @DoubleRange(min = 12, max = 60) double highSpan,
-            @ForAll @DoubleRange(min = 12, max = 40) double across, @ForAll @IntRange(min = 0, max = 3) int beams,
+            @ForAll @DoubleRange(min = 3, max = 40) double a0, @ForAll @DoubleRange(min = 12, max = 40) double a1,
+            @ForAll @DoubleRange(min = 3, max = 40) double a2, @ForAll @DoubleRange(min = 12, max = 40) double a3,
+            @ForAll @IntRange(min = 1, max = 4) int cells, @ForAll @IntRange(min = 0, max = 3) int first,
+            @ForAll @IntRange(min = 1, max = 4) int covered, @ForAll @IntRange(min = 0, max = 3) int beams,
             @ForAll boolean beamsAlongX, @ForAll boolean stepAlongX, @ForAll boolean highFirst,
             @ForAll @DoubleRange(min = 4, max = 20) double height, @ForAll @DoubleRange(min = 21, max = 60) double pg) {
         // p_g above 20 psf: a flat roof needs no W for rain-on-snow (7.10), which the check here does not give
-        // two cells in a row (along x, or along y where the wall runs along x): one low roof bay, one covered by the high roof
+        // two rows of cells across the wall: the low roof's row (every cell along), and the row the high roof covers in
+        // part (cells from..to along); the wall runs between them, one step (one height, ℓu and ℓl) all along
+        double[] along = java.util.Arrays.copyOf(new double[] {a0, a1, a2, a3}, cells);
+        int from = Math.min(first, cells - 1), to = Math.min(cells, from + covered);
         double[] run = highFirst ? new double[] {highSpan, lowSpan} : new double[] {lowSpan, highSpan};
-        Grid g = stepAlongX ? Buildings.grid(new double[] {across}, run) : Buildings.grid(run, new double[] {across});
+        Grid g = stepAlongX ? Buildings.grid(along, run) : Buildings.grid(run, along);
         int low = highFirst ? 1 : 0, high = 1 - low;
         Framing f = new Framing(beamsAlongX ? Direction.X : Direction.Y, beams);
-        Level lowRoof = Level.roof("Low", 10, 0.25, List.of(stepAlongX ? Bay.floor(0, low, "roof-ordinary", 20, f) : Bay.floor(low, 0, "roof-ordinary", 20, f)));
-        Level highRoof = Level.roof("High", 10 + height, 0.25,
-                List.of(stepAlongX ? Bay.floor(0, high, "roof-ordinary", 20, f) : Bay.floor(high, 0, "roof-ordinary", 20, f)));
+        List<Bay> lowBays = new java.util.ArrayList<>(), highBays = new java.util.ArrayList<>();
+        for (int k = 0; k < cells; k++) {
+            lowBays.add(stepAlongX ? Bay.floor(k, low, "roof-ordinary", 20, f) : Bay.floor(low, k, "roof-ordinary", 20, f));
+            if (k >= from && k < to) highBays.add(stepAlongX ? Bay.floor(k, high, "roof-ordinary", 20, f) : Bay.floor(high, k, "roof-ordinary", 20, f));
+        }
+        Level lowRoof = Level.roof("Low", 10, 0.25, lowBays);
+        Level highRoof = Level.roof("High", 10 + height, 0.25, highBays);
         Building b = SnowTakeDownProperties.building(g, List.of(lowRoof, highRoof), pg);
         Derived d = Derivation.derive(b);
 
@@ -51,7 +62,14 @@ class RoofDriftProperties {
         SnowLoads expected = RoofSnow.calculate(ctx, ctx.snow(), SnowRoof.of(SnowRoof.Shape.MONOSLOPE, 0.25, false, Double.NaN)
                 .withStep(new RoofStep(height, highSpan, lowSpan)), RecordBuilder.numbersOnly("check", ctx.edition().id(), ctx.system()));
         DriftSurcharge drift = expected.drift();
-        double driftArea = drift.resultant() * across;
+        double wall = 0, before = 0, after = 0;
+        for (int k = 0; k < cells; k++) {
+            if (k < from) before += along[k];
+            else if (k < to) wall += along[k];
+            else after += along[k];
+        }
+        double loaded = !drift.required() ? 0 : wall + Math.min(drift.width(), before) + Math.min(drift.width(), after);
+        double driftArea = drift.resultant() * loaded;
 
         double onMembers = 0;
         for (DerivedMember m : d.members()) {
@@ -66,7 +84,7 @@ class RoofDriftProperties {
 
         double base = 0;
         for (TakeDown t : d.takeDowns()) base += t.rows().get(t.rows().size() - 1).snow();
-        double uniform = expected.uniform() * (lowSpan + highSpan) * across;
+        double uniform = expected.uniform() * (lowSpan * (before + wall + after) + highSpan * wall);
         assertThat(base).isCloseTo(uniform + driftArea, within(1e-9 * (uniform + driftArea)));
     }
 }
