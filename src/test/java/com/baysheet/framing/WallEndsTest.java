@@ -25,17 +25,27 @@ class WallEndsTest {
     static final double PER_FT = PD * W / 2;   // the drift's resultant per length of wall, ℓl ≥ w
 
     static Derived build(double[] xs, double[] ys, List<int[]> lowBays, List<int[]> highBays, Direction beams, int infill) {
+        return build(xs, ys, lowBays, highBays, List.of(), beams, infill);
+    }
+
+    /** With {@code midBays} a roof at 18 ft, between the low roof (12 ft) and the high roof (24 ft). */
+    static Derived build(double[] xs, double[] ys, List<int[]> lowBays, List<int[]> highBays, List<int[]> midBays,
+                         Direction beams, int infill) {
         Grid g = Buildings.grid(xs, ys);
         Framing f = new Framing(beams, infill);
         Level low = Level.roof("Low roof", 12, 0.25, lowBays.stream().map(c -> Bay.floor(c[0], c[1], "roof-ordinary", 20, f)).toList());
         Level high = Level.roof("High roof", 24, 0.25, highBays.stream().map(c -> Bay.floor(c[0], c[1], "roof-ordinary", 20, f)).toList());
-        return Derivation.derive(SnowTakeDownProperties.building(g, List.of(low, high), 30));
+        List<Level> levels = new java.util.ArrayList<>(List.of(low, high));
+        if (!midBays.isEmpty())
+            levels.add(Level.roof("Mid roof", 18, 0.25, midBays.stream().map(c -> Bay.floor(c[0], c[1], "roof-ordinary", 20, f)).toList()));
+        return Derivation.derive(SnowTakeDownProperties.building(g, levels, 30));
     }
 
+    /** The drift on the low roof's beams and girders (lb). */
     static double driftOnMembers(Derived d) {
         double sum = 0;
         for (DerivedMember m : d.members()) {
-            if (m.role() == MemberRole.COLUMN) continue;
+            if (m.role() == MemberRole.COLUMN || !m.level().equals("Low roof")) continue;
             double v = m.result().record().result("snow.drift.load");
             if (!Double.isNaN(v)) sum += v;
         }
@@ -107,5 +117,26 @@ class WallEndsTest {
         assertThat(driftOnMembers(d)).isCloseTo(30 * PER_FT + extension, within(1e-6));
         assertThat(DriftZones.of(d.building(), "Low roof")).extracting(DriftZones.Zone::area)
                 .containsExactly(new PlanRect(0, 35 - W, 30, 35), new PlanRect(30, 30, 30 + W, 35));
+    }
+
+    @Test
+    void atAnInsideCornerBothWallsCarryTheirDriftAndNeitherIsExtendedUnderTheHigherRoof() {
+        // the high roof is L-shaped round the low roof's bay (0,0): walls on Y2 (x 0 to 30) and on line 2 (y 0 to 30); the
+        // low level's bay (1,0) lies under the higher roof, so nothing is extended into it; in the corner both drifts act
+        // and add (conservative)
+        Derived d = build(new double[] {30, 30}, new double[] {30, 30}, List.of(new int[] {0, 0}, new int[] {1, 0}),
+                List.of(new int[] {0, 1}, new int[] {1, 1}, new int[] {1, 0}), Direction.Y, 4);
+        assertThat(driftOnMembers(d)).isCloseTo(2 * 30 * PER_FT, within(1e-6));
+        assertThat(DriftZones.of(d.building(), "Low roof")).hasSize(2);
+    }
+
+    @Test
+    void pastAWallOfAnotherStepOnTheSameLineBothDriftsAct() {
+        // walls on Y2 from x = 0 to 30 (12 ft up to the high roof) and 30 to 60 (6 ft up to the mid roof): two steps, so
+        // each end at x = 30 is free and each drift runs w into the other's length, where both add (conservative). With
+        // 6 ft, h_c = 6 − 1.173 = 4.83 ft > h_d: the same h_d, w and p_d (7.7.1), so the total is p_d w/2 (60 + 2 w)
+        Derived d = build(new double[] {30, 30}, new double[] {30, 30}, List.of(new int[] {0, 0}, new int[] {1, 0}),
+                List.of(new int[] {0, 1}), List.of(new int[] {1, 1}), Direction.Y, 4);
+        assertThat(driftOnMembers(d)).isCloseTo((60 + 2 * W) * PER_FT, within(1e-6));
     }
 }
