@@ -14,9 +14,11 @@ import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.Level;
 
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 /**
  * The roof steps of a lower roof found in the model (ASCE 7-16 7.7.1). A bay of a roof level is exposed where no
@@ -120,7 +122,7 @@ final class RoofSteps {
         Map<String, List<DriftStrip>> strips = new LinkedHashMap<>();
         Map<String, Wall> first = new LinkedHashMap<>();
         Map<String, List<String>> spans = new LinkedHashMap<>();
-        java.util.Set<String> pastEnds = new java.util.HashSet<>();
+        Set<String> pastEnds = new HashSet<>();
         boolean memberAlongX = member.y1() == member.y2();
         for (Wall w : walls)
             for (Reach reach : w.reaches)
