@@ -63,14 +63,14 @@ final class ColumnTakeDown {
             MemberKind kind = cls.kind(cant);
             if (floorHere > 0) supported.add(new SupportedFloor(p.level.name(), kind, floorShares(here)));
             String name = "Column " + point + " below " + p.level.name();
-            double height = storeyBelow(k), own = weights.column() * height;
+            String id = p.id + "-c" + p.at(i, j);
+            double perLength = weights.of(id, weights.column()), height = storeyBelow(k), own = perLength * height;
             MemberInput in = new MemberInput(name + " (" + cls.label() + ")", kind, new Support.Axial(), Math.max(1, floors), List.of(),
                     List.of(), List.of(total.asPointLoad()), 0, slope, Double.NaN, false, supported)
-                    .withSelfWeight(weights.column(), weights.origin() + " for columns", height);
+                    .withSelfWeight(perLength, weights.originOf(id, "columns"), height);
             MemberResult res = cache.calculate(in);
             total.dead += own; // the column below this level weighs on every level beneath it
             here.dead += own;
-            String id = p.id + "-c" + p.at(i, j);
             out.add(new DerivedMember(id, name, p.level.name(), MemberRole.COLUMN, kind,
                     new PlanLine(p.x(i), p.y(j), p.x(i), p.y(j)), 0, 0, here.areas, 0, bays(p, i, j), outline(p, i, j), res));
             rows.add(row(p, id, res, areaHere, floorArea, kind, floors, here.dead, own));

@@ -97,7 +97,7 @@ final class LevelFraming {
             PlanRect trib = beamsAlongX ? new PlanRect(x0, y0 + t - s / 2, x1, y0 + t + s / 2) : new PlanRect(x0 + t - s / 2, y0, x0 + t + s / 2, y1);
             String id = plan.id + "-bay" + plan.at(c, r) + "-b" + k;
             String title = "Beam " + name + " #" + k;
-            MemberResult res = calc(title, MemberKind.INTERIOR_BEAM, beamLength, List.of(new AreaStrip(b.occupancy(), s, 0, beamLength, b.deadLoad())),
+            MemberResult res = calc(id, title, MemberKind.INTERIOR_BEAM, beamLength, List.of(new AreaStrip(b.occupancy(), s, 0, beamLength, b.deadLoad())),
                     line, trib, points.getOrDefault(k, List.of()));
             members.add(new DerivedMember(id, title, plan.level.name(), MemberRole.INFILL_BEAM, MemberKind.INTERIOR_BEAM, line,
                     beamLength, s, Map.of(b.occupancy(), s * beamLength), s * beamLength, List.of(name), List.of(trib), res));
@@ -139,7 +139,8 @@ final class LevelFraming {
         carried.addAll(s.applied);
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(s.length), 1, s.strips,
                 List.of(), carried, 0, roofSlope(), Double.NaN, plan.level.roof())
-                .withSelfWeight(girder ? weights.girder() : weights.gridBeam(), source(girder ? "girders" : "grid beams"), 0)
+                .withSelfWeight(weights.of(id, girder ? weights.girder() : weights.gridBeam()),
+                        weights.originOf(id, girder ? "girders" : "grid beams"), 0)
                 .withLineLoads(s.lineLoads);
         PlanLine pl = s.alongX ? new PlanLine(plan.x(i), plan.y(j), plan.x(i + 1), plan.y(j))
                 : new PlanLine(plan.x(i), plan.y(j), plan.x(i), plan.y(j + 1));
@@ -155,11 +156,11 @@ final class LevelFraming {
         else arrive(i, j + 1, res.right());
     }
 
-    private MemberResult calc(String title, MemberKind kind, double span, List<AreaStrip> strips, PlanLine line, PlanRect trib,
+    private MemberResult calc(String id, String title, MemberKind kind, double span, List<AreaStrip> strips, PlanLine line, PlanRect trib,
                               List<PointLoad> applied) {
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(span), 1, strips, List.of(),
                 applied, 0, roofSlope(), Double.NaN, plan.level.roof())
-                .withSelfWeight(weights.infillBeam(), source("infill beams"), 0);
+                .withSelfWeight(weights.of(id, weights.infillBeam()), weights.originOf(id, "infill beams"), 0);
         return cache.calculate(in.withSnow(snow(line, List.of(trib))));
     }
 
@@ -173,8 +174,6 @@ final class LevelFraming {
         return new SnowOnRoof(l.surface().roof(l.roofSlope()), plan.belowAnother,
                 steps.isEmpty() ? List.of() : steps.on(line, rects, cache.context()));
     }
-
-    private String source(String role) { return weights.origin() + " for " + role; }
 
     private double roofSlope() { return plan.level.roofSlope(); }
 

@@ -34,8 +34,11 @@ final class CriteriaLines {
     /** The self weight of each role per length, or that none is included. */
     static List<String> selfWeights(SelfWeights w, UnitSystem sys) {
         if (w.none()) return List.of("Member self weight: not included (none set in the firm's settings); the dead loads given carry it");
-        return List.of("Infill beams " + plf(w.infillBeam(), sys) + ", beams on grid lines " + plf(w.gridBeam(), sys)
-                + ", girders " + plf(w.girder(), sys) + ", columns " + plf(w.column(), sys) + " (" + w.origin() + ")");
+        String roles = "Infill beams " + plf(w.infillBeam(), sys) + ", beams on grid lines " + plf(w.gridBeam(), sys)
+                + ", girders " + plf(w.girder(), sys) + ", columns " + plf(w.column(), sys) + " (" + w.origin() + ")";
+        if (w.members().isEmpty()) return List.of(roles);
+        int n = w.members().size();
+        return List.of(roles, "Own weight entered for " + n + (n == 1 ? " member" : " members") + " instead of its role's; each sheet says so");
     }
 
     private static String plf(double v, UnitSystem sys) {

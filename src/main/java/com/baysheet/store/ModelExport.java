@@ -59,6 +59,7 @@ public final class ModelExport {
         List<StoredLevel> levels = LevelStore.findByProject(c, projectId);
         Map<Long, String> names = new LinkedHashMap<>();
         for (StoredLevel l : levels) names.put(l.id(), l.name());
+        Map<String, Double> own = SelfWeightStore.members(c, projectId);
         ArrayNode ls = out.putArray("levels");
         for (StoredLevel l : levels) {
             ObjectNode n = level(ls.addObject(), l.info());
@@ -68,8 +69,19 @@ public final class ModelExport {
             for (StoredLineLoad w : LineLoadStore.findByLevel(c, l.id(), g)) lineLoad(loads.addObject(), w);
             ArrayNode points = n.putArray("pointLoads");
             for (GridPointLoad q : PointLoadStore.forBuilding(c, g, List.of(l))) pointLoad(points.addObject(), q, g);
+            memberWeights(n, own, "L" + l.id());
         }
         return out;
+    }
+
+    /** The weights entered for the level's members, each by its id within the level (the level's own key left off). */
+    private static void memberWeights(ObjectNode level, Map<String, Double> own, String key) {
+        ArrayNode out = null;
+        for (Map.Entry<String, Double> e : own.entrySet()) {
+            if (!e.getKey().startsWith(key + "-")) continue;
+            if (out == null) out = level.putArray("memberWeights");
+            out.addObject().put("member", e.getKey().substring(key.length())).put("weight", e.getValue());
+        }
     }
 
     private static void axis(ObjectNode n, GridAxis a) {

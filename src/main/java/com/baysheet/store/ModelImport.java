@@ -70,6 +70,11 @@ public final class ModelImport {
                 String at = where + "pointLoads[" + q.path("label").asText("?") + "].";
                 within(at, () -> PointLoadStore.insert(c, id, levelId, ModelJson.pointLoad(q)));
             }
+            int k = 0;
+            for (JsonNode w : l.path("memberWeights")) {
+                String at = where + "memberWeights[" + k++ + "].";
+                within(at, () -> { memberWeight(c, id, levelId, w); return null; });
+            }
         }
         for (JsonNode l : levels) {
             if (!l.hasNonNull("sameAs")) continue;
@@ -82,6 +87,16 @@ public final class ModelImport {
             within(where, () -> { TypicalLevels.linkIn(c, id, typical, levelId); return null; });
         }
         return id;
+    }
+
+    /** A weight entered for one member of the level: its id within the level (as exported) and the weight per length. */
+    private static void memberWeight(Connection c, long projectId, long levelId, JsonNode w) {
+        com.baysheet.engine.JsonFields f = com.baysheet.engine.JsonFields.of(w);
+        String member = f.text("member", "");
+        if (!member.matches("-[A-Za-z0-9-]{1,100}")) throw new InputError("member", member, "is not a member of a level as this server exports it");
+        double weight = f.number("weight");
+        com.baysheet.engine.Check.nonNegative("weight", weight);
+        SelfWeightStore.writeMember(c, projectId, "L" + levelId + member, weight);
     }
 
     /** The project's own self weights and its submittal data, where the file gives them. */

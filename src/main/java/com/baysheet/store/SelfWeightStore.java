@@ -10,11 +10,16 @@ import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Types;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import java.util.Optional;
+
+import org.jdbi.v3.core.Handle;
 
 /**
  * The self weights a project's members carry: the project's own where it states them (every sheet says "project
- * value"), else the firm's defaults by role (V109; "firm default"), converted exactly for an SI project.
+ * value"), else the firm's defaults by role (V109; "firm default"), converted exactly for an SI project; and a single
+ * member's own weight where the engineer entered one (V122; "entered for this member").
  */
 public final class SelfWeightStore {
     private final ModelWrites writes;
@@ -44,6 +49,46 @@ public final class SelfWeightStore {
         });
     }
 
+    /** The weights entered for single members of the project, by derived member id, in its base units. */
+    public Map<String, Double> members(long projectId) {
+        return writes.sql().tx(c -> members(c, projectId));
+    }
+
+    /**
+     * Sets a member's own weight per length (NaN: back to its role's), as one model change. {@code member} is how the
+     * audit names it (the member's title); the caller checks that the member exists in the project's derivation.
+     */
+    public void setMember(Editor who, long projectId, long version, String memberId, String member, double perLength) {
+        if (!Double.isNaN(perLength)) com.baysheet.engine.Check.nonNegative("ownWeight", perLength);
+        writes.change(who, c -> "own weight of " + member + (Double.isNaN(perLength) ? " cleared (its role's applies)"
+                : " set to " + Display.plain(perLength)) + "; was " + Optional.ofNullable(members(c, projectId).get(memberId))
+                .map(Display::plain).orElse("its role's"), projectId, version, c -> {
+            writeMember(c, projectId, memberId, perLength);
+            return null;
+        });
+    }
+
+    /** A member's own weight (NaN: none), in the caller's change. */
+    static void writeMember(Connection c, long projectId, String memberId, double perLength) {
+        try (Handle h = Sql.on(c)) {
+            h.createUpdate("DELETE FROM member_weight WHERE project_id = :project AND member_id = :member")
+                    .bind("project", projectId).bind("member", memberId).execute();
+            if (!Double.isNaN(perLength))
+                h.createUpdate("INSERT INTO member_weight (project_id, member_id, weight) VALUES (:project, :member, :weight)")
+                        .bind("project", projectId).bind("member", memberId).bind("weight", perLength).execute();
+        }
+    }
+
+    static Map<String, Double> members(Connection c, long projectId) {
+        Map<String, Double> out = new LinkedHashMap<>();
+        try (Handle h = Sql.on(c)) {
+            h.createQuery("SELECT member_id, weight FROM member_weight WHERE project_id = :project ORDER BY member_id")
+                    .bind("project", projectId).map((rs, ctx) -> Map.entry(rs.getString(1), rs.getDouble(2)))
+                    .forEach(e -> out.put(e.getKey(), e.getValue()));
+        }
+        return out;
+    }
+
     /** The project's own values (null: the firm's defaults), in the caller's change. */
     static void write(Connection c, long projectId, ProjectSelfWeights w) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement(
@@ -61,11 +106,9 @@ public final class SelfWeightStore {
     /** The weights the project's members carry, with where they come from. */
     static SelfWeights forProject(Connection c, long projectId, UnitSystem units) throws SQLException {
         Optional<ProjectSelfWeights> own = own(c, projectId);
-        if (own.isPresent()) {
-            ProjectSelfWeights w = own.get();
-            return new SelfWeights(w.infillBeam(), w.gridBeam(), w.girder(), w.column(), "project value");
-        }
-        return firm(c, units);
+        SelfWeights byRole = own.map(w -> new SelfWeights(w.infillBeam(), w.gridBeam(), w.girder(), w.column(), "project value"))
+                .orElse(firm(c, units));
+        return byRole.withMembers(members(c, projectId));
     }
 
     static Optional<ProjectSelfWeights> own(Connection c, long projectId) throws SQLException {

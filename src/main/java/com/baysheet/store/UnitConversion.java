@@ -50,7 +50,8 @@ public final class UnitConversion {
             new Column("project", "sw_infill_beam", PROJECT, Quantity.LINE_LOAD),
             new Column("project", "sw_grid_beam", PROJECT, Quantity.LINE_LOAD),
             new Column("project", "sw_girder", PROJECT, Quantity.LINE_LOAD),
-            new Column("project", "sw_column", PROJECT, Quantity.LINE_LOAD));
+            new Column("project", "sw_column", PROJECT, Quantity.LINE_LOAD),
+            new Column("member_weight", "weight", GRID, Quantity.LINE_LOAD));
 
     private final ModelWrites writes;
 

@@ -51,6 +51,11 @@ final class MemberRoutes {
     }
 
     void show(Context ctx) {
+        render(ctx, store, null);
+    }
+
+    /** The member page, with the own-weight form as submitted where it comes back refused (else its stored value). */
+    static void render(Context ctx, Store store, Form weightForm) {
         Results.Computed c = store.results().of(Ids.project(ctx));
         DerivedMember member = c.derived().member(ctx.pathParam("member"))
                 .orElseThrow(() -> new NotFound("member", ctx.pathParam("member")));
@@ -72,6 +77,7 @@ final class MemberRoutes {
         m.put("plan", PlanView.of(c.model().building().grid(), level, c.derived().onLevel(level.name()), member,
                 c.model().building().context().catalogue(), href, c.model().building().lineLoads(),
                 DriftZones.of(c.model().building(), level.name()), c.model().building().pointLoads(), marks.labels()));
+        MemberWeightRoutes.put(m, c, member, weightForm);
         ctx.render("members/show", m);
     }
 

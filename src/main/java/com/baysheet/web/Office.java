@@ -151,6 +151,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new SelfWeightRoutes(store).install(r);
         new PlanRoutes(store).install(r);
         new MemberRoutes(store).install(r);
+        new MemberWeightRoutes(store).install(r);
+        new ApiWeightRoutes(store).install(r);
         new TakeDownRoutes(store).install(r);
         new MethodRoutes(store).install(r);
         new ScheduleRoutes(store).install(r);

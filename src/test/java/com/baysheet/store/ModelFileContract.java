@@ -30,6 +30,10 @@ interface ModelFileContract {
         Project p = Demo.loadIfEmpty(store()).get(0);
         long l2 = id(p, "Level 2"), l3 = id(p, "Level 3");
         store().typicals().link(Editor.DEMO, p.id(), store().projects().find(p.id()).version(), l2, List.of(l3));
+        // a girder of Level 2 with its own weight, so the file carries a weight entered for one member
+        DerivedMember g = store().results().of(p.id()).derived().members().stream()
+                .filter(m -> m.level().equals("Level 2") && m.role() == com.baysheet.framing.MemberRole.GIRDER).findFirst().orElseThrow();
+        store().selfWeights().setMember(Editor.DEMO, p.id(), store().projects().find(p.id()).version(), g.id(), g.name(), 120);
         return store().projects().find(p.id());
     }
 
@@ -60,6 +64,7 @@ interface ModelFileContract {
         Project p = demo();
         ObjectNode file = store().exports().of(p.id());
         assertThat(file.path("levels").get(2).path("sameAs").asText()).isEqualTo("Level 2");
+        assertThat(file.path("levels").get(1).path("memberWeights").get(0).path("weight").asDouble()).isEqualTo(120.0);
         Project copy = store().imports().create(Editor.DEMO, file, "24-031-B");
         assertThat(copy.info().jobNumber()).isEqualTo("24-031-B");
         assertThat(copy.info().snow()).isEqualTo(p.info().snow());
@@ -85,6 +90,8 @@ interface ModelFileContract {
         // 30 ft = 9.144 m exactly; 14 ft = 4.2672 m (NIST SP 811)
         assertThat(metric.at("/grid/x/spacings/0").asDouble()).isCloseTo(9.144, org.assertj.core.api.Assertions.within(1e-12));
         assertThat(metric.at("/levels/1/elevation").asDouble()).isCloseTo(4.2672, org.assertj.core.api.Assertions.within(1e-12));
+        // 120 plf = 120 × 4.4482216152605 N / 0.3048 m = 1.751268352 kN/m (NIST SP 811)
+        assertThat(metric.at("/levels/1/memberWeights/0/weight").asDouble()).isCloseTo(1.751268352, org.assertj.core.api.Assertions.within(1e-9));
         assertThat(store().results().of(p.id()).derived().members()).isNotEmpty();
         store().conversions().convert(Editor.DEMO, p.id(), si.version(), com.baysheet.engine.units.UnitSystem.US);
         sameWithin(us, store().exports().of(p.id()), "", 1e-9);

@@ -45,4 +45,48 @@ class SelfWeightPagesTest {
         assertThat(server.store.selfWeights().find(project())).isEmpty();
         assertThat(member("GIRDER")).doesNotContain("project value");
     }
+
+    @Test
+    void aMembersOwnWeightIsEnteredOnItsPageRefusedWhenNegativeAndClearedWhenBlank() {
+        String id = server.store.results().of(project()).derived().members().stream()
+                .filter(m -> m.role().name().equals("INFILL_BEAM")).findFirst().orElseThrow().id();
+        String page = "/projects/" + project() + "/members/" + id, post = page + "/weight";
+        assertThat(Html.one(server.get(page).body(), "#own-weight-form").attr("action")).isEqualTo(post);
+        String v = String.valueOf(server.version(project()));
+        HttpResponse<String> negative = server.post(post, List.of(entry("version", v), entry("ownWeight", "-5")));
+        assertThat(negative.statusCode()).isEqualTo(422);
+        assertThat(Html.text(negative.body(), "#error-ownWeight")).contains("0 or more");
+        assertThat(Html.field(negative.body(), "ownWeight")).isEqualTo("-5");
+        assertThat(server.store.selfWeights().members(project())).isEmpty();
+        assertThat(server.post(post, List.of(entry("version", v), entry("ownWeight", "85"))).statusCode()).isEqualTo(303);
+        assertThat(server.store.selfWeights().members(project())).containsEntry(id, 85.0);
+        assertThat(Html.text(server.get(page).body(), "#weight-now")).contains("85", "entered for this member");
+        assertThat(server.get("/api/projects/" + project() + "/members/" + id).body()).contains("entered for this member");
+        // the form's version is now stale: another save in between is refused, nothing changes
+        assertThat(server.post(post, List.of(entry("version", v), entry("ownWeight", "95"))).statusCode()).isEqualTo(409);
+        assertThat(server.store.selfWeights().members(project())).containsEntry(id, 85.0);
+        HttpResponse<String> cleared = server.post(post, List.of(entry("version", String.valueOf(server.version(project()))),
+                entry("ownWeight", "")));
+        assertThat(cleared.statusCode()).isEqualTo(303);
+        assertThat(server.store.selfWeights().members(project())).isEmpty();
+        assertThat(Html.text(server.get(page).body(), "#weight-now")).contains("for infill beams").doesNotContain("entered for this member");
+    }
+
+    @Test
+    void theApiListsTheWeightsAndSetsAMembersOwnRefusingABadValueNamingTheField() throws Exception {
+        String id = server.store.results().of(project()).derived().members().stream()
+                .filter(m -> m.role().name().equals("COLUMN")).findFirst().orElseThrow().id();
+        String at = "/api/projects/" + project() + "/members/" + id + "/weight";
+        long v = server.version(project());
+        HttpResponse<String> bad = server.json("PUT", at, "{\"version\": " + v + ", \"ownWeight\": \"heavy\"}");
+        assertThat(bad.statusCode()).isEqualTo(400);
+        assertThat(bad.body()).contains("ownWeight");
+        HttpResponse<String> ok = server.json("PUT", at, "{\"version\": " + v + ", \"ownWeight\": 150}");
+        assertThat(ok.statusCode()).isEqualTo(200);
+        var listed = new com.fasterxml.jackson.databind.ObjectMapper().readTree(server.get("/api/projects/" + project() + "/self-weights").body());
+        assertThat(listed.path("members").path(id).asDouble()).isEqualTo(150.0);
+        assertThat(listed.path("units").asText()).isEqualTo("plf");
+        assertThat(server.json("PUT", at, "{\"version\": " + server.version(project()) + ", \"ownWeight\": null}").statusCode()).isEqualTo(200);
+        assertThat(server.store.selfWeights().members(project())).isEmpty();
+    }
 }
