@@ -19,7 +19,7 @@ import java.util.function.Consumer;
 
 /**
  * Entry point: {@code calc ...} runs the command-line calculation, {@code backup ...} and {@code restore ...} copy the
- * embedded database out and back; anything else starts the office server.
+ * embedded database out and back, {@code transfer ...} moves an H2 office onto PostgreSQL; anything else starts the office server.
  */
 public final class App {
     private static final Logger LOG = LoggerFactory.getLogger(App.class);
@@ -32,6 +32,8 @@ public final class App {
         if (args.length > 0 && (args[0].equals("backup") || args[0].equals("restore")))
             System.exit(BackupCommand.run(args[0].equals("restore"), Arrays.copyOfRange(args, 1, args.length), System.getenv(),
                     System.out, System.err));
+        if (args.length > 0 && args[0].equals("transfer"))
+            System.exit(TransferCommand.run(Arrays.copyOfRange(args, 1, args.length), System.getenv(), System.out, System.err));
         ServerOptions options;
         try {
             options = ServerOptions.parse(args, System.getenv());
