@@ -33,8 +33,8 @@ public final class TransferCommand {
         }
         if (from == null) return usage(err, "--from is missing: name the H2 data directory the server used");
         if (to == null) return usage(err, "--to is missing: name the PostgreSQL database by its JDBC URL");
-        if (!to.startsWith("jdbc:postgresql:")) return usage(err, "--to must be a PostgreSQL JDBC URL (jdbc:postgresql:...), got "
-                + (to.startsWith("jdbc:") ? to.substring(0, to.indexOf(':', 5) < 0 ? to.length() : to.indexOf(':', 5) + 1) + "..." : to));
+        // the URL itself is not echoed: it may carry the password
+        if (!to.startsWith("jdbc:postgresql:")) return usage(err, "--to must be a PostgreSQL JDBC URL (jdbc:postgresql://HOST/DATABASE)");
         String password = env.get("BAYSHEET_DB_PASSWORD");
         try {
             Transfer.Report r = Transfer.run(Path.of(from), to, password == null || password.isEmpty() ? null : password);
@@ -46,14 +46,14 @@ public final class TransferCommand {
                     + " identity columns advanced past their largest id");
             return OK;
         } catch (Transfer.Refused e) {
-            err.println("baysheet: transfer refused: " + e.getMessage());
+            err.println("baysheet: transfer refused: " + e.getMessage().lines().findFirst().orElse(""));
             return switch (e.stop) {
                 case SOURCE -> SOURCE;
                 case TARGET -> TARGET;
                 case VERIFICATION -> VERIFICATION;
             };
         } catch (RuntimeException e) {
-            err.println("baysheet: transfer failed: " + e.getMessage());
+            err.println("baysheet: transfer failed: " + String.valueOf(e.getMessage()).lines().findFirst().orElse(""));
             return TARGET;
         }
     }

@@ -54,8 +54,9 @@ public final class Transfer {
             throw new Refused(Stop.SOURCE, "no readable Baysheet database in " + dataDir + " (expected " + file.getFileName() + ")");
         // IFEXISTS: never make an empty database where the office was expected; read-only: the source stays as it was
         try (Connection from = open(Stop.SOURCE, Database.h2Url(dataDir) + ";IFEXISTS=TRUE;ACCESS_MODE_DATA=r", null)) {
-            Map<String, Long> seeds = seedRows();
+            Map<String, Long> seeds;
             try (Connection found = open(Stop.TARGET, targetUrl, password)) {
+                seeds = seedRows();
                 refuseWork(found, seeds); // before migrating: a refused target is left as it was
             }
             try (Database db = Database.open(targetUrl, password)) {
