@@ -125,6 +125,36 @@ class TransferTest {
         assertThat(run.err).contains("no readable Baysheet database in " + empty).hasLineCount(1);
     }
 
+    @Test
+    void anIssuedPdfThatNoLongerMatchesItsHashFailsTheTransferAndNothingIsKept(@TempDir Path copy) throws Exception {
+        java.nio.file.Files.copy(data.resolve("baysheet.mv.db"), copy.resolve("baysheet.mv.db"));
+        try (Connection c = DriverManager.getConnection(Database.h2Url(copy) + ";IFEXISTS=TRUE"); Statement s = c.createStatement()) {
+            // one byte of one issued copy changed after its issue, as damage on disk would
+            assertThat(s.executeUpdate("UPDATE sheet_revision SET pdf = pdf || X'20' WHERE id = (SELECT MIN(id) FROM sheet_revision "
+                    + "WHERE pdf_sha256 IS NOT NULL)")).isEqualTo(1);
+        }
+        String target = TestDatabases.postgresSchema(server);
+        Run run = run("--from", copy.toString(), "--to", target);
+        assertThat(run.code).isEqualTo(TransferCommand.VERIFICATION);
+        assertThat(run.err).contains("does not match the SHA-256 stored at its issue; nothing was kept").hasLineCount(1);
+        Map<String, List<String>> left = contents(target);
+        assertThat(left.get("project")).isEmpty();
+        assertThat(left.get("sheet_revision")).isEmpty();
+        assertThat(left.get("audit_event")).isEmpty();
+    }
+
+    @Test
+    void aSourceAtAnotherMigrationIsRefusedSayingBoth(@TempDir Path older) throws Exception {
+        Database.prepareDataDir(older);
+        Database.open(Database.h2Url(older)).close();
+        try (Connection c = DriverManager.getConnection(Database.h2Url(older) + ";IFEXISTS=TRUE"); Statement s = c.createStatement()) {
+            s.executeUpdate("DELETE FROM flyway_schema_history WHERE version = '117'"); // as a data directory one release behind
+        }
+        Run run = run("--from", older.toString(), "--to", TestDatabases.postgresSchema(server));
+        assertThat(run.code).isEqualTo(TransferCommand.SOURCE);
+        assertThat(run.err).contains("the source is at migration 116, the target at 117").hasLineCount(1);
+    }
+
     private record Run(int code, String out, String err) {}
 
     private static Run transfer(String target) {
