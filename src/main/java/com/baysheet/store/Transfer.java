@@ -135,7 +135,8 @@ public final class Transfer {
                 for (String t : tables) {
                     long n = TableCopy.copy(from, to, t);
                     copied.add(new Table(t, TableCopy.count(from, t), TableCopy.count(to, t)));
-                    if (copied.get(copied.size() - 1).source() != n) throw new IllegalStateException(t + ": read " + n + " rows");
+                    if (copied.get(copied.size() - 1).source() != n) throw new Refused(Stop.VERIFICATION, "table " + t + ": read " + n
+                            + " rows of " + copied.get(copied.size() - 1).source() + "; nothing was kept");
                 }
                 for (Table t : copied)
                     if (t.source() != t.target()) throw new Refused(Stop.VERIFICATION, "table " + t.name() + ": " + t.source()
