@@ -19,10 +19,13 @@ import java.util.function.Consumer;
 
 /**
  * Entry point: {@code calc ...} runs the command-line calculation, {@code backup ...} and {@code restore ...} copy the
- * embedded database out and back; anything else starts the office server.
+ * embedded database out and back, {@code transfer ...} moves an H2 office onto PostgreSQL; anything else starts the office server.
  */
 public final class App {
-    private static final Logger LOG = LoggerFactory.getLogger(App.class);
+    /** Made at first use, not when App loads: slf4j-simple reads its level once, and a command may lower it first. */
+    private static final class Log {
+        static final Logger LOG = LoggerFactory.getLogger(App.class);
+    }
 
     private App() {}
 
@@ -32,6 +35,11 @@ public final class App {
         if (args.length > 0 && (args[0].equals("backup") || args[0].equals("restore")))
             System.exit(BackupCommand.run(args[0].equals("restore"), Arrays.copyOfRange(args, 1, args.length), System.getenv(),
                     System.out, System.err));
+        if (args.length > 0 && args[0].equals("transfer")) {
+            // the command's own lines are its answer: the pool's and the migrations' progress would bury them
+            System.setProperty("org.slf4j.simpleLogger.defaultLogLevel", "warn");
+            System.exit(TransferCommand.run(Arrays.copyOfRange(args, 1, args.length), System.getenv(), System.out, System.err));
+        }
         ServerOptions options;
         try {
             options = ServerOptions.parse(args, System.getenv());
@@ -41,7 +49,7 @@ public final class App {
             return;
         }
         try {
-            Running running = start(options, LOG::info);
+            Running running = start(options, Log.LOG::info);
             Runtime.getRuntime().addShutdownHook(new Thread(running::close));
         } catch (RuntimeException e) {
             // a database that is locked by another server, unreachable or refusing the login: say so in one line
@@ -80,7 +88,7 @@ public final class App {
         Office office = Office.on(store, db.dataSource(), clock);
         if (o.demo()) {
             int loaded = Demo.loadIfEmpty(store).size();
-            LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");
+            Log.LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");
             DemoAccounts.add(office.accounts().admin(), console);
         }
         // the listener through which `baysheet backup` copies the database while this server holds its file
