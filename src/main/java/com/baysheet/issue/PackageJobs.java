@@ -31,7 +31,7 @@ import java.util.Optional;
 public final class PackageJobs {
     /** A job's state for the template, read once so the page is consistent. */
     public record View(String id, String title, int done, int total, String sha256, String error, boolean ready,
-                       boolean finished, boolean cancelled, String requestedBy) {}
+                       boolean finished, boolean cancelled, boolean queued, String requestedBy) {}
 
     /** A done job's PDF, under the download's name ({@code <job number>-<package>-checking-copy.pdf}). */
     public record Download(String fileName, String sha256, byte[] pdf) {}
@@ -60,7 +60,8 @@ public final class PackageJobs {
 
     public Optional<View> view(long project, String id) {
         return job(project, id).map(j -> new View(String.valueOf(j.id()), j.title(), j.done(), j.total(), j.sha256(), j.error(),
-                j.state() == PackageJob.State.DONE, j.state().finished(), j.state() == PackageJob.State.CANCELLED, j.requestedBy()));
+                j.state() == PackageJob.State.DONE, j.state().finished(), j.state() == PackageJob.State.CANCELLED,
+                j.state() == PackageJob.State.QUEUED, j.requestedBy()));
     }
 
     public Optional<Download> file(long project, String id) {

@@ -163,6 +163,44 @@ abstract class PackageJobStoreContract {
     }
 
     @Test
+    void eightRequestsAtOnceGetFourPlacesInTheQueue() throws Exception {
+        ExecutorService pool = Executors.newFixedThreadPool(8);
+        try {
+            CyclicBarrier together = new CyclicBarrier(8);
+            List<Future<Boolean>> asked = new ArrayList<>();
+            for (int i = 0; i < 8; i++) {
+                long p = i % 2 == 0 ? project : other;
+                asked.add(pool.submit(() -> {
+                    together.await(5, TimeUnit.SECONDS);
+                    try {
+                        enqueue(p);
+                        return true;
+                    } catch (TooBusy e) {
+                        return false;
+                    }
+                }));
+            }
+            int queued = 0;
+            for (Future<Boolean> f : asked) if (f.get(30, TimeUnit.SECONDS)) queued++;
+            assertThat(queued).isEqualTo(4);
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    @Test
+    void aStoppingServerPutsItsJobBackWithoutCountingTheAttempt() {
+        long id = enqueue(project);
+        jobs.claim("server-a", LEASE).orElseThrow();
+        assertThat(jobs.release(id, "server-b")).as("not server-b's to release").isFalse();
+        assertThat(jobs.release(id, "server-a")).isTrue();
+        PackageJob back = job(project, id);
+        assertThat(back.state()).isEqualTo(PackageJob.State.QUEUED);
+        assertThat(back.attempts()).isZero();
+        assertThat(jobs.claim("server-b", LEASE).orElseThrow().id()).as("taken up at once by another").isEqualTo(id);
+    }
+
+    @Test
     void pruningKeepsTheNewestTwentyFinishedJobsOfTheProjectAndEveryUnfinishedOne() {
         List<Long> finished = new ArrayList<>();
         for (int i = 0; i < 25; i++) {
