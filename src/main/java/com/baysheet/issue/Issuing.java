@@ -1,15 +1,11 @@
 package com.baysheet.issue;
 
-import com.baysheet.engine.InputError;
 import com.baysheet.framing.model.Submittal;
 import com.baysheet.review.Caller;
-import com.baysheet.review.MarkSheets;
-import com.baysheet.review.PackageScope;
 import com.baysheet.review.ReviewAction;
 import com.baysheet.review.ReviewRefused;
 import com.baysheet.review.SheetRevision;
 import com.baysheet.review.SheetState;
-import com.baysheet.store.Results;
 import com.baysheet.store.review.ConcurrentChange;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.store.review.Reviews;
@@ -17,17 +13,15 @@ import com.baysheet.store.review.StoredRevision;
 
 import java.time.Clock;
 import java.time.LocalDate;
-import java.util.Optional;
 
 /**
  * Issuing and printing sheets: render the issued copy of an approved revision and issue it (the review rules
- * check everything again in the same write), print a member's checking copy, and start a package's checking
- * copy off the request threads. Dates come from the clock the office runs on.
+ * check everything again in the same write) and print a member's checking copy (a package's checking copy is
+ * rendered off the request threads: {@link PackageJobs}). Dates come from the clock the office runs on.
  */
 public final class Issuing {
     private final ReviewStore review;
     private final Clock clock;
-    private final PackageJobs jobs = new PackageJobs();
 
     public Issuing(ReviewStore review, Clock clock) {
         this.review = review;
@@ -57,24 +51,6 @@ public final class Issuing {
     public byte[] checkingCopy(SheetSubject.OfMark s) {
         Reviews.SheetView v = reviews().view(s.ref());
         return SheetPdfs.checking(review.firm().get(), s, v.current(), v.history(), v.markups(), today()).bytes();
-    }
-
-    /**
-     * Starts a package's checking copy: the package's own revision under way, and each member's own state, as
-     * they are now; refused when the scope has no members or the queue is full.
-     */
-    public PackageJobs.Job startPackage(Results.Computed c, MarkSheets marks, Submittal site, PackageScope scope) {
-        if (scope.members(c.derived()).isEmpty())
-            throw new InputError("level", scope.isProject() ? "project" : scope.level(), "has no members in this model");
-        SheetSubject.OfPackage s = SheetSubject.pkg(c, marks, scope);
-        long project = c.project().id();
-        return jobs.start(project, PackagePdfs.checking(review.firm().get(), site, s, reviews().view(s.ref()),
-                reviews().latestOf(project), today()));
-    }
-
-    /** A package job of this project, if it is one of the jobs still kept. */
-    public Optional<PackageJobs.Job> job(long project, String id) {
-        return jobs.find(id).filter(j -> j.project() == project);
     }
 
     public LocalDate today() { return LocalDate.now(clock); }

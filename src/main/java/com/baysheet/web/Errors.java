@@ -1,7 +1,7 @@
 package com.baysheet.web;
 
 import com.baysheet.engine.InputError;
-import com.baysheet.issue.TooBusy;
+import com.baysheet.store.TooBusy;
 import com.baysheet.store.Duplicate;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.StaleVersion;

@@ -3,7 +3,10 @@ package com.baysheet.web;
 import com.baysheet.auth.LoginRefused;
 import com.baysheet.auth.SetupCode;
 import com.baysheet.issue.Issuing;
+import com.baysheet.issue.PackageJobs;
+import com.baysheet.issue.PackageWorker;
 import com.baysheet.review.ReviewRefused;
+import com.baysheet.store.PackageJobStore;
 import com.baysheet.store.Sql;
 import com.baysheet.store.Store;
 import com.baysheet.store.auth.Accounts;
@@ -42,18 +45,20 @@ import java.util.Set;
  * matched route ({@code beforeMatched}, {@link Access#check}) enforces it. Tests build the same office with a
  * cheap password hash, their own clock and a known set-up code.
  *
+ * @param packages  the office's queue of package checking copies, in the database; each started server renders from it
  * @param setupCode what the first-start set-up asks for (printed in the console by the server)
  * @param ds        what {@code /health} asks whether the database answers, and what backups copy
  * @param clock     what refusals and downloads are recorded by
  */
-public record Office(Store store, Accounts accounts, ReviewStore review, Issuing issuing, SetupCode setupCode, DataSource ds,
-                     Clock clock) {
+public record Office(Store store, Accounts accounts, ReviewStore review, Issuing issuing, PackageJobs packages, SetupCode setupCode,
+                     DataSource ds, Clock clock) {
 
     /** The office over this database: the store's clock for every stamp and date, the given login policy. */
     public static Office on(Store store, DataSource ds, Clock clock, Logins.Policy policy, SetupCode setupCode) {
         Sql sql = new Sql(ds, clock);
         ReviewStore review = ReviewStore.on(sql);
-        return new Office(store, Accounts.on(sql, review.audit(), policy), review, new Issuing(review, clock), setupCode, ds, clock);
+        PackageJobs packages = new PackageJobs(store, review, new PackageJobStore(sql), clock);
+        return new Office(store, Accounts.on(sql, review.audit(), policy), review, new Issuing(review, clock), packages, setupCode, ds, clock);
     }
 
     /** The office's production wiring: bcrypt at full strength, working-day sessions, the office throttle. */
@@ -66,12 +71,17 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
      * believing X-Forwarded-For only from {@code trustedProxy} (null: from nobody) so that the address the
      * throttle counts and the audit trail records cannot be chosen by the client; {@code behindTls} when
      * browsers reach it through an HTTPS proxy: cookies Secure and Strict-Transport-Security ({@link Headers}).
+     * While it runs, the server renders package jobs of the office's queue ({@link PackageWorker}, its lease from
+     * {@value PackageWorker#LEASE_PROPERTY}).
      */
     public Javalin server(String trustedProxy, boolean behindTls) {
         AuditRecorder recorder = new AuditRecorder(review.audit(), clock);
         Access access = new Access(accounts.logins(), () -> review.firm().get(), recorder);
+        PackageWorker worker = new PackageWorker(packages, PackageWorker.leaseFromSystem());
         return Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
+            cfg.events.serverStarted(worker::start);
+            cfg.events.serverStopping(worker::stop);
             cfg.contextResolver.ip = ctx -> ClientAddress.of(ctx.req().getRemoteAddr(), ctx.header("X-Forwarded-For"), trustedProxy);
             // request-size limits: a form or JSON body is a few kilobytes (a 413 past 1 MB, before it is read
             // whole); the only upload is a PDF to verify, and no sheet or package comes near 50 MB
@@ -165,6 +175,6 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new MarkRoutes(store).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
         new IssuedRoutes(store, review, issuing, recorder).install(r);
-        new PackageRoutes(store, issuing).install(r);
+        new PackageRoutes(store, packages).install(r);
     }
 }

@@ -1,4 +1,4 @@
-package com.baysheet.issue;
+package com.baysheet.store;
 
 /**
  * A request the server will not queue now because a limit of shared work is reached (the package queue):
