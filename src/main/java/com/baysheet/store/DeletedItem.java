@@ -12,4 +12,13 @@ import java.time.Instant;
 public record DeletedItem(long id, long projectId, String jobNumber, String kind, String label, int members,
                           String deletedBy, Instant deletedAt) {
     public static final String LEVEL = "level", BAYS = "bays", PROJECT = "project";
+
+    private static final java.time.format.DateTimeFormatter SECONDS =
+            java.time.format.DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'").withZone(java.time.ZoneOffset.UTC);
+
+    /** When it was deleted, to the second, in UTC as the audit trail shows times. */
+    public String when() { return SECONDS.format(deletedAt); }
+
+    /** The last moment it can be restored. */
+    public String keptUntil() { return SECONDS.format(deletedAt.plus(DeletedItems.KEPT)); }
 }

@@ -90,6 +90,17 @@ public final class LevelStore {
         });
     }
 
+    /** The issued sheets deleting this level would withdraw or change, by name, without deleting it (for its confirmation). */
+    public List<String> touchedByDelete(long projectId, long version, long levelId) {
+        return writes.touched(projectId, version, c -> {
+            find(c, projectId, levelId);
+            TypicalLevels.release(c, projectId, levelId);
+            try (Handle h = Sql.on(c)) {
+                return h.createUpdate("DELETE FROM building_level WHERE id = :id").bind("id", levelId).execute();
+            }
+        });
+    }
+
     /** Puts a deleted level back with its own row id (its members' ids follow it), in the caller's change. */
     static long insertAs(Connection c, long projectId, long id, LevelInfo info) throws SQLException {
         SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");

@@ -106,6 +106,11 @@ public final class ProjectStore {
         });
     }
 
+    /** Whether any sheet or package of the project was ever issued: such a project cannot be deleted. */
+    public boolean issued(long id) {
+        return sql.tx(c -> com.baysheet.store.review.IssuedChanges.everIssued(c, id));
+    }
+
     /**
      * Deletes a project that has never issued a sheet (one that has is refused, saying so), kept for 30 days as a
      * model file ({@link DeletedItems}); its reviews and audit subject stay with the office.
