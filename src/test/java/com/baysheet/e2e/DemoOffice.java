@@ -95,7 +95,7 @@ final class DemoOffice implements AutoCloseable {
         String loads = "/api" + p + "/levels/" + level;
         ids.put("lineLoad", first(eng, loads + "/line-loads", "id"));
         if (JSON.readTree(OfficeClient.expect(eng.get(loads + "/point-loads"), 200).body()).isEmpty()) {
-            long version = JSON.readTree(OfficeClient.expect(eng.get("/api" + p), 200).body()).path("version").asLong();
+            long version = JSON.readTree(OfficeClient.expect(eng.get("/api" + p), 200).body()).path("project").path("version").asLong();
             OfficeClient.expect(eng.json("POST", loads + "/point-loads", "{\"version\": " + version + ", \"label\": \"Route walk unit\", "
                     + "\"xLine\": \"1\", \"yLine\": \"A\", \"x\": 5, \"y\": 5, \"dead\": 500, \"live\": 0}"), 201);
         }
