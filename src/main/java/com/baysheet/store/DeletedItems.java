@@ -65,7 +65,7 @@ public final class DeletedItems {
                 try {
                     return ProjectStore.find(c, k.item.projectId()).version();
                 } catch (NotFound e) {
-                    throw new InputError("item", k.item.label(), "cannot be restored: its project was deleted since; restore the project first");
+                    throw new InputError("item", k.item.label(), "cannot be restored: its project was deleted after it (restoring the project brings it back as it was then, without this level)");
                 }
             });
             writes.change(who, "level restored: " + k.item.label(), k.item.projectId(), version, c -> {

@@ -109,7 +109,7 @@ final class LevelLoadRoutes<E> {
         m.put("kind", segment.replace('-', ' ').replaceAll("s$", ""));
         m.put("action", path(p, l) + "/" + load + "/delete");
         m.put("back", path(p, l));
-        m.put("form", form.value("version").isEmpty() ? fresh(p) : form);
+        m.put("form", form);
         ctx.render("levels/delete-load", m);
     }
 
