@@ -104,6 +104,13 @@ class DeletesTest {
         assertThat(Html.all(html, "#changed-since-issue")).isEmpty();
         assertThat(state(html)).isEqualTo("issued");
         assertThat(server.office.review().audit().page(50, 0)).anySatisfy(e -> assertThat(e.detail()).contains("level restored: " + levelName));
+
+        // its calculation is unchanged, yet the withdrawn issue no longer stands: the next revision is submitted
+        int issuedNumber = server.office.review().reviews().view(issued).current().revision().number();
+        assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
+        var next = server.office.review().reviews().view(issued).current().revision();
+        assertThat(next.number()).isEqualTo(issuedNumber + 1);
+        assertThat(next.state()).isEqualTo(SheetState.SUBMITTED);
     }
 
     @Test
@@ -183,8 +190,9 @@ class DeletesTest {
     }
 
     private static void issue(Client eng, Client chk) {
-        var now = server.office.review().reviews().view(server.ref()).current().revision();
-        if (now.state() == SheetState.ISSUED) return;
+        // once issued (whatever came after: withdrawn, a next revision submitted), the project has an issued revision
+        if (server.office.review().reviews().view(server.ref()).history().stream()
+                .anyMatch(r -> r.revision().state() == SheetState.ISSUED || r.revision().state() == SheetState.SUPERSEDED)) return;
         String sheet = server.sheetPath();
         String html = eng.get(sheet).body();
         assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
