@@ -86,6 +86,9 @@ public final class App {
         Clock clock = Clock.systemDefaultZone();
         Store store = Store.on(db.dataSource(), Derivation::derive, clock);
         Office office = Office.on(store, db.dataSource(), clock);
+        // deleted items are kept 30 days: those past it go at start, as whenever the administrator's list is read
+        int purged = store.deleted().purge();
+        if (purged > 0) LOG.info("deleted items past 30 days purged: " + purged);
         if (o.demo()) {
             int loaded = Demo.loadIfEmpty(store).size();
             Log.LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");

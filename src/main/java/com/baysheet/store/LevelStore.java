@@ -70,16 +70,46 @@ public final class LevelStore {
         });
     }
 
-    /** Removes a level with all its bays; the levels that were the same as it become independent copies first. */
+    /**
+     * Removes a level with all its bays, kept for 30 days ({@link DeletedItems}); the levels that were the same as it
+     * become independent copies first. Issued sheets of its members are withdrawn, not removed ({@link ModelWrites#removal}).
+     */
     public void delete(Editor who, long projectId, long version, long levelId) {
-        writes.change(who, c -> "level deleted: " + describe(find(c, projectId, levelId).info())
+        int members = writes.members(projectId, find(projectId, levelId).name());
+        writes.removal(who, c -> "level deleted: " + describe(find(c, projectId, levelId).info())
                 + TypicalLevels.releasedText(c, projectId, levelId), projectId, version, c -> {
+            StoredLevel l = find(c, projectId, levelId);
+            var p = ProjectStore.find(c, projectId);
+            DeletedItems.keep(c, new DeletedItem(0, projectId, p.info().jobNumber(), DeletedItem.LEVEL,
+                    l.name() + " of " + p.info().jobNumber() + " " + p.info().name(), members, who.username(), writes.sql().now()),
+                    LevelSnapshots.of(c, projectId, l));
+            TypicalLevels.release(c, projectId, levelId);
+            try (Handle h = Sql.on(c)) {
+                return h.createUpdate("DELETE FROM building_level WHERE id = :id").bind("id", levelId).execute();
+            }
+        });
+    }
+
+    /** The issued sheets deleting this level would withdraw or change, by name, without deleting it (for its confirmation). */
+    public List<String> touchedByDelete(long projectId, long version, long levelId) {
+        return writes.touched(projectId, version, c -> {
             find(c, projectId, levelId);
             TypicalLevels.release(c, projectId, levelId);
             try (Handle h = Sql.on(c)) {
                 return h.createUpdate("DELETE FROM building_level WHERE id = :id").bind("id", levelId).execute();
             }
         });
+    }
+
+    /** Puts a deleted level back with its own row id (its members' ids follow it), in the caller's change. */
+    static long insertAs(Connection c, long projectId, long id, LevelInfo info) throws SQLException {
+        SnowInput.checkRoof(ProjectStore.find(c, projectId).info(), info, "eaveToRidge");
+        try (Handle h = Sql.on(c)) {
+            bind(h.createUpdate("INSERT INTO building_level (id, project_id, name, elevation, is_roof, roof_slope, roof_shape, "
+                    + "roof_slippery, eave_to_ridge) VALUES (:id, :project, :name, :elevation, :roof, :roofSlope, :roofShape, "
+                    + ":slippery, :eaveToRidge)"), info).bind("id", id).bind("project", projectId).execute();
+            return id;
+        }
     }
 
     /** A level as a line of text for its audit entry. */
@@ -106,7 +136,7 @@ public final class LevelStore {
     }
 
     /** Two levels may share neither a name nor an elevation: the take-down orders them by elevation. */
-    private static void requireUnique(Connection c, long projectId, LevelInfo info, long self) {
+    static void requireUnique(Connection c, long projectId, LevelInfo info, long self) {
         for (StoredLevel other : findByProject(c, projectId)) {
             if (other.id() == self) continue;
             if (other.name().equalsIgnoreCase(info.name()))

@@ -53,9 +53,7 @@ public final class ModelExport {
         ObjectNode sub = out.putObject("submittal");
         sub.put("engineerOfRecord", site.engineerOfRecord()).put("licenceNumber", site.licenceNumber())
                 .put("licenceState", site.licenceState()).put("buildingCode", site.buildingCode()).put("codeYear", site.codeYear());
-        ObjectNode grid = out.putObject("grid");
-        axis(grid.putObject("x"), g.x());
-        axis(grid.putObject("y"), g.y());
+        out.set("grid", grid(g));
         List<StoredLevel> levels = LevelStore.findByProject(c, projectId);
         Map<Long, String> names = new LinkedHashMap<>();
         for (StoredLevel l : levels) names.put(l.id(), l.name());
@@ -65,10 +63,7 @@ public final class ModelExport {
             ObjectNode n = level(ls.addObject(), l.info());
             if (l.linked()) n.put("sameAs", names.get(l.typicalOf()));
             else bays(n.putArray("bays"), BayStore.findByLevel(c, l.id(), g));
-            ArrayNode loads = n.putArray("lineLoads");
-            for (StoredLineLoad w : LineLoadStore.findByLevel(c, l.id(), g)) lineLoad(loads.addObject(), w);
-            ArrayNode points = n.putArray("pointLoads");
-            for (GridPointLoad q : PointLoadStore.forBuilding(c, g, List.of(l))) pointLoad(points.addObject(), q, g);
+            loads(c, n, l, g);
             memberWeights(n, own, "L" + l.id());
         }
         return out;
@@ -84,6 +79,22 @@ public final class ModelExport {
         }
     }
 
+    /** The grid as the file writes it, its lines' stable ids included. */
+    static ObjectNode grid(Grid g) {
+        ObjectNode grid = JSON.createObjectNode();
+        axis(grid.putObject("x"), g.x());
+        axis(grid.putObject("y"), g.y());
+        return grid;
+    }
+
+    /** A level's line and point loads as the file writes them. */
+    static void loads(Connection c, ObjectNode n, StoredLevel l, Grid g) throws SQLException {
+        ArrayNode loads = n.putArray("lineLoads");
+        for (StoredLineLoad w : LineLoadStore.findByLevel(c, l.id(), g)) lineLoad(loads.addObject(), w);
+        ArrayNode points = n.putArray("pointLoads");
+        for (GridPointLoad q : PointLoadStore.forBuilding(c, g, List.of(l))) pointLoad(points.addObject(), q, g);
+    }
+
     private static void axis(ObjectNode n, GridAxis a) {
         ArrayNode names = n.putArray("names");
         for (String name : a.names()) names.add(name);
@@ -93,7 +104,7 @@ public final class ModelExport {
         for (int id : a.ids()) ids.add(id);
     }
 
-    private static ObjectNode level(ObjectNode n, LevelInfo i) {
+    static ObjectNode level(ObjectNode n, LevelInfo i) {
         n.put("name", i.name());
         n.put("elevation", i.elevation());
         n.put("roof", i.roof());
@@ -106,7 +117,7 @@ public final class ModelExport {
     }
 
     /** One entry per distinct bay, listing its cells in the order the level holds them (south row first). */
-    private static void bays(ArrayNode out, List<Bay> bays) {
+    static void bays(ArrayNode out, List<Bay> bays) {
         Map<ObjectNode, ArrayNode> byContent = new LinkedHashMap<>();
         for (Bay b : bays) {
             ObjectNode content = content(b);

@@ -48,6 +48,18 @@ public final class ModelImport {
                 });
     }
 
+    /** Brings a deleted project back from its kept model file, with its own job number; {@code also} runs in the same transaction. */
+    Project restore(Editor who, JsonNode file, String action, Sql.Work<?> also) {
+        ProjectInfo info = ModelJson.project(file.path("project"));
+        Grid grid = ModelJson.grid(file.path("grid"));
+        return writes.create(who, action, c -> {
+            long id = insert(c, info, grid, withIds(file.path("grid"), grid), file.path("levels"), writes.sql().stamp());
+            projectExtras(c, id, file);
+            also.run(c);
+            return id;
+        });
+    }
+
     private static long insert(Connection c, ProjectInfo info, Grid grid, Grid given, JsonNode levels, OffsetDateTime now) throws SQLException {
         long id = ProjectStore.insert(c, info, grid, now);
         if (given != null) GridStore.createAsGiven(c, id, given);

@@ -57,6 +57,19 @@ public final class ModelWrites {
      * of the work, so that it can say what the model held before ("... was: unframed").
      */
     public <T> T change(Editor who, Sql.Work<String> action, long projectId, long version, Sql.Work<T> work) {
+        return change(who, action, projectId, version, work, false);
+    }
+
+    /**
+     * As {@link #change(Editor, Sql.Work, long, long, Sql.Work)} for a change that deletes members (a level): the
+     * issued sheets it removes are withdrawn in the same transaction (kept, no longer in force, withdrawn for good),
+     * and the audit entry names them.
+     */
+    public <T> T removal(Editor who, Sql.Work<String> action, long projectId, long version, Sql.Work<T> work) {
+        return change(who, action, projectId, version, work, true);
+    }
+
+    private <T> T change(Editor who, Sql.Work<String> action, long projectId, long version, Sql.Work<T> work, boolean withdraw) {
         Results.Computed[] done = new Results.Computed[1];
         T out = sql.tx(c -> {
             Instant at = sql.now();
@@ -69,10 +82,13 @@ public final class ModelWrites {
             String diff = ModelDiff.between(was, m);
             Derived d = checked(m);
             done[0] = new Results.Computed(m, d);
-            List<String> changed = issuedAfter(c, projectId, d, before, MarkBook.reconcile(c, projectId, d, at));
+            IssuedChanges.Snapshot after = IssuedChanges.snapshot(c, projectId, d, MarkBook.reconcile(c, projectId, d, at));
+            List<String> withdrawn = withdraw ? IssuedChanges.withdrawGone(c, projectId, before, after, at) : List.of();
+            List<String> changed = IssuedChanges.between(before, after).stream().filter(n -> !withdrawn.contains(n)).toList();
             append(c, who, subject(m.project()), said
                     + "; model version " + version + " → " + next + (diff.isEmpty() ? "" : "; " + diff)
-                    + (changed.isEmpty() ? "" : "; changed since issue: " + String.join(", ", changed)), at);
+                    + (changed.isEmpty() ? "" : "; changed since issue: " + String.join(", ", changed))
+                    + (withdrawn.isEmpty() ? "" : "; issued sheets withdrawn (kept): " + String.join(", ", withdrawn)), at);
             return result;
         });
         // the building this change derived is the next page's: committed, it need not be derived again on read
@@ -199,4 +215,10 @@ public final class ModelWrites {
     }
 
     Sql sql() { return sql; }
+
+    /** How many members the project's current building has at the level of this name (every level: null). */
+    int members(long projectId, String level) {
+        if (results == null) return 0;
+        return (int) results.of(projectId).derived().members().stream().filter(m -> level == null || m.level().equals(level)).count();
+    }
 }

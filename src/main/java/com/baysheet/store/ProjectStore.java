@@ -106,10 +106,25 @@ public final class ProjectStore {
         });
     }
 
+    /** Whether any sheet or package of the project was ever issued: such a project cannot be deleted. */
+    public boolean issued(long id) {
+        return sql.tx(c -> com.baysheet.store.review.IssuedChanges.everIssued(c, id));
+    }
+
+    /**
+     * Deletes a project that has never issued a sheet (one that has is refused, saying so), kept for 30 days as a
+     * model file ({@link DeletedItems}); its reviews and audit subject stay with the office.
+     */
     public void delete(Editor who, long id, long version) {
+        int members = writes.members(id, null);
         sql.tx(c -> {
             touch(c, id, version, sql.now());
-            ModelWrites.append(c, who, ModelWrites.subject(find(c, id)), "project deleted at version " + version, sql.now());
+            Project p = find(c, id);
+            if (com.baysheet.store.review.IssuedChanges.everIssued(c, id))
+                throw new InputError("project", p.info().jobNumber(), "cannot be deleted: it has issued sheets, which stay with the office");
+            DeletedItems.keep(c, new DeletedItem(0, id, p.info().jobNumber(), DeletedItem.PROJECT,
+                    p.info().jobNumber() + " " + p.info().name(), members, who.username(), sql.now()), ModelExport.write(c, id));
+            ModelWrites.append(c, who, ModelWrites.subject(p), "project deleted at version " + version + " (kept 30 days)", sql.now());
             try (PreparedStatement ps = c.prepareStatement("DELETE FROM project WHERE id = ?")) {
                 ps.setLong(1, id);
                 return ps.executeUpdate();

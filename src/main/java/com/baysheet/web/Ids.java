@@ -15,6 +15,8 @@ final class Ids {
 
     static long pointLoad(Context ctx) { return id(ctx, "pointLoad"); }
 
+    static long item(Context ctx) { return id(ctx, "item"); }
+
     private static long id(Context ctx, String name) {
         String text = ctx.pathParam(name);
         try {

@@ -17,7 +17,8 @@ import java.util.function.ToLongFunction;
 
 /**
  * The pages of one kind of load placed on a level (line loads, point loads): listed with the form to add one,
- * added, and deleted only with the confirmation box ticked (the load leaves every member that carried it).
+ * added, and deleted only through its confirmation page, whose form carries {@code confirm=yes} (the load leaves every
+ * member that carried it).
  *
  * @param <E> what the add form reads
  */
@@ -27,6 +28,9 @@ final class LevelLoadRoutes<E> {
         List<?> findByLevel(long project, long level);
 
         Object add(Editor who, long project, long version, long level, E entry);
+
+        /** The load in the user's words ("North parapet (D, 1-5)"), or empty where the level has no load of this id. */
+        java.util.Optional<String> describe(long project, long level, long id);
 
         void delete(Editor who, long project, long version, long level, long id);
     }
@@ -57,13 +61,14 @@ final class LevelLoadRoutes<E> {
         String base = "/projects/{project}/levels/{level}/" + segment;
         r.get(base, this::list, Admit.OFFICE);
         r.post(base, this::add, Admit.PREPARER);
+        r.get(base + "/{" + idParameter + "}/delete", this::confirmDelete, Admit.OFFICE);
         r.post(base + "/{" + idParameter + "}/delete", this::delete, Admit.PREPARER);
     }
 
     void list(Context ctx) {
         Project p = store.projects().find(Ids.project(ctx));
         StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
-        render(ctx, p, l, fresh(p), Form.filled(Map.of()));
+        render(ctx, p, l, fresh(p));
     }
 
     void add(Context ctx) {
@@ -74,19 +79,38 @@ final class LevelLoadRoutes<E> {
         E e = read.apply(form, p.info().units());
         form.attempt(() -> loads.add(Editors.of(ctx), p.id(), version, l.id(), e))
                 .ifPresentOrElse(saved -> Pages.seeOther(ctx, path(p, l)),
-                        () -> render(ctx.status(form.stale() ? 409 : 422), p, l, form, Form.filled(Map.of())));
+                        () -> render(ctx.status(form.stale() ? 409 : 422), p, l, form));
+    }
+
+    void confirmDelete(Context ctx) {
+        Project p = store.projects().find(Ids.project(ctx));
+        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
+        renderConfirm(ctx, p, l, id.applyAsLong(ctx), fresh(p));
     }
 
     void delete(Context ctx) {
+        Form form = Form.of(ctx);
+        Confirmed.require(form);
         Project p = store.projects().find(Ids.project(ctx));
         StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
         long load = id.applyAsLong(ctx);
-        Form form = Form.of(ctx);
         long version = form.version();
-        if (!form.checked("confirm")) form.reject("confirm", "tick the box to confirm the deletion");
         form.attempt(() -> { loads.delete(Editors.of(ctx), p.id(), version, l.id(), load); return load; })
                 .ifPresentOrElse(done -> Pages.seeOther(ctx, path(p, l)),
-                        () -> render(ctx.status(form.stale() ? 409 : 422), p, l, fresh(p), form));
+                        () -> renderConfirm(ctx.status(form.stale() ? 409 : 422), store.projects().find(p.id()), l, load, form));
+    }
+
+    private void renderConfirm(Context ctx, Project p, StoredLevel l, long load, Form form) {
+        String what = loads.describe(p.id(), l.id(), load).orElseThrow(() -> new com.baysheet.store.NotFound(segment, load));
+        Map<String, Object> m = new HashMap<>();
+        m.put("project", p);
+        m.put("level", l);
+        m.put("what", what);
+        m.put("kind", segment.replace('-', ' ').replaceAll("s$", ""));
+        m.put("action", path(p, l) + "/" + load + "/delete");
+        m.put("back", path(p, l));
+        m.put("form", form);
+        ctx.render("levels/delete-load", m);
     }
 
     private Form fresh(Project p) {
@@ -95,7 +119,7 @@ final class LevelLoadRoutes<E> {
         return Form.filled(values);
     }
 
-    private void render(Context ctx, Project p, StoredLevel l, Form form, Form deleteForm) {
+    private void render(Context ctx, Project p, StoredLevel l, Form form) {
         var computed = store.results().of(p.id());
         Map<String, Object> m = new HashMap<>();
         m.put("project", computed.project());
@@ -104,7 +128,6 @@ final class LevelLoadRoutes<E> {
         m.put("grid", computed.model().building().grid());
         m.put("loads", loads.findByLevel(p.id(), l.id()));
         m.put("form", form);
-        m.put("deleteForm", deleteForm);
         m.put("units", UnitLabels.of(p.info().units()));
         m.put("occupancies", computed.model().building().context().catalogue().all());
         ctx.render(template, m);

@@ -10,7 +10,7 @@ import io.javalin.http.Context;
 import java.util.HashMap;
 import java.util.Map;
 
-/** Levels and grid: the grid lines with their spacings, the list of levels, adding, editing and removing a level. */
+/** Levels and grid: the grid lines with their spacings, the list of levels, adding and editing a level (removing one: {@link DeleteRoutes}). */
 final class LevelRoutes {
     private final Store store;
 
@@ -25,7 +25,6 @@ final class LevelRoutes {
         r.post("/projects/{project}/levels/csv", this::fromTable, Admit.PREPARER);
         r.get("/projects/{project}/levels/{level}/edit", this::editForm, Admit.OFFICE);
         r.post("/projects/{project}/levels/{level}", this::update, Admit.PREPARER);
-        r.post("/projects/{project}/levels/{level}/delete", this::delete, Admit.PREPARER);
     }
 
     void show(Context ctx) {
@@ -84,18 +83,6 @@ final class LevelRoutes {
         LevelForm.Values v = LevelForm.read(form, p.info().units());
         form.attempt(() -> {
             store.levels().update(Editors.of(ctx), p.id(), version, l.id(), v.info());
-            return l;
-        }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
-                () -> renderEdit(ctx.status(form.stale() ? 409 : 422), p, l, form));
-    }
-
-    void delete(Context ctx) {
-        Project p = store.projects().find(Ids.project(ctx));
-        StoredLevel l = store.levels().find(p.id(), Ids.level(ctx));
-        Form form = Form.of(ctx);
-        long version = form.version();
-        form.attempt(() -> {
-            store.levels().delete(Editors.of(ctx), p.id(), version, l.id());
             return l;
         }).ifPresentOrElse(saved -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
                 () -> renderEdit(ctx.status(form.stale() ? 409 : 422), p, l, form));

@@ -9,7 +9,7 @@ import io.javalin.config.RoutesConfig;
 import java.util.List;
 import java.util.Map;
 
-/** A level's line loads (cladding, walls, parapets along grid lines): listed, added, and deleted after a confirmation. */
+/** A level's line loads (cladding, walls, parapets along grid lines): listed, added, and deleted after its confirmation page. */
 final class LineLoadRoutes {
     private final LevelLoadRoutes<LineLoadEntry> pages;
 
@@ -21,6 +21,10 @@ final class LineLoadRoutes {
 
                     public Object add(Editor who, long project, long version, long level, LineLoadEntry e) {
                         return loads.add(who, project, version, level, e);
+                    }
+
+                    public java.util.Optional<String> describe(long project, long level, long id) {
+                        return loads.findByLevel(project, level).stream().filter(l -> l.id() == id).findFirst().map(l -> l.label() + " (" + l.segment() + ")");
                     }
 
                     public void delete(Editor who, long project, long version, long level, long id) {

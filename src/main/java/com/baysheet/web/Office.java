@@ -153,6 +153,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new ModelFileRoutes(store).install(r); // before ProjectRoutes: /projects/import is not a project id
         new ProjectRoutes(store).install(r);
         new LevelRoutes(store).install(r);
+        new DeleteRoutes(store).install(r);
+        new DeletedRoutes(store).install(r);
         new TypicalRoutes(store).install(r);
         new UnitRoutes(store).install(r);
         new BayRoutes(store).install(r);

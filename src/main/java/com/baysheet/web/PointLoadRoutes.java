@@ -9,7 +9,7 @@ import io.javalin.config.RoutesConfig;
 import java.util.List;
 import java.util.Map;
 
-/** A level's point loads (rooftop units, tanks, hung equipment, in a bay or on a member): listed, added, and deleted after a confirmation. */
+/** A level's point loads (rooftop units, tanks, hung equipment, in a bay or on a member): listed, added, and deleted after its confirmation page. */
 final class PointLoadRoutes {
     private final LevelLoadRoutes<PointLoadEntry> pages;
 
@@ -21,6 +21,10 @@ final class PointLoadRoutes {
 
                     public Object add(Editor who, long project, long version, long level, PointLoadEntry e) {
                         return loads.add(who, project, version, level, e);
+                    }
+
+                    public java.util.Optional<String> describe(long project, long level, long id) {
+                        return loads.findByLevel(project, level).stream().filter(l -> l.id() == id).findFirst().map(l -> l.label() + " (" + l.where() + ")");
                     }
 
                     public void delete(Editor who, long project, long version, long level, long id) {

@@ -12,7 +12,9 @@ public enum Saved {
     PROJECT("project", "Saved: project settings."),
     SUBMITTAL("submittal", "Saved: submittal data."),
     PASSWORD("password", "Saved: your new password. Your other logins were ended."),
-    USER("user", "Saved: user account.");
+    USER("user", "Saved: user account."),
+    DELETED("deleted", "Deleted. It is kept for 30 days, and the administrator can restore it (Deleted items)."),
+    RESTORED("restored", "Restored: it is back where it was, and the audit trail records it.");
 
     /** The request attribute the layout reads the message by. */
     public static final String ATTRIBUTE = "saved";

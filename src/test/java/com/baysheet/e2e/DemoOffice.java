@@ -88,13 +88,24 @@ final class DemoOffice implements AutoCloseable {
         String project = first(eng, "/api/projects", "id");
         ids.put("project", project);
         String p = "/projects/" + project;
-        ids.put("level", first(eng, "/api" + p + "/levels", "id"));
-        ids.put("lineLoad", firstLineLoad(eng, "/api" + p, "line-loads"));
-        ids.put("pointLoad", firstLineLoad(eng, "/api" + p, "point-loads"));
+        // one level with a load of each kind, so that a load's pages under its level (its delete confirmation) render:
+        // the first level with a line load, given a point load in a bay where it has none
+        String level = levelWith(eng, "/api" + p, "line-loads");
+        ids.put("level", level);
+        String loads = "/api" + p + "/levels/" + level;
+        ids.put("lineLoad", first(eng, loads + "/line-loads", "id"));
+        if (JSON.readTree(OfficeClient.expect(eng.get(loads + "/point-loads"), 200).body()).isEmpty()) {
+            long version = JSON.readTree(OfficeClient.expect(eng.get("/api" + p), 200).body()).path("project").path("version").asLong();
+            OfficeClient.expect(eng.json("POST", loads + "/point-loads", "{\"version\": " + version + ", \"label\": \"Route walk unit\", "
+                    + "\"xLine\": \"1\", \"yLine\": \"A\", \"x\": 5, \"y\": 5, \"dead\": 500, \"live\": 0}"), 201);
+        }
+        ids.put("pointLoad", first(eng, loads + "/point-loads", "id"));
         String member = first(eng, "/api" + p + "/members", "id");
         ids.put("member", member);
         ids.put("stack", first(eng, "/api" + p + "/takedowns", "id"));
         ids.put("package", find(eng.get("/review" + p).body(), "/review" + p + "/packages/([A-Za-z0-9_.~-]+)\"", "package"));
+        // the demo keeps no deleted item: an id that names none, so restoring it is answered 404 (a 4xx, never a fault)
+        ids.put("item", "999999");
         ids.put("user", find(client(Role.ADMINISTRATOR).get("/admin/users").body(),
                 "<td>" + usernames.get(Role.ADMINISTRATOR) + "</td>.*?/admin/users/(\\d+)/role", "the administrator's user id"));
 
@@ -159,10 +170,11 @@ final class DemoOffice implements AutoCloseable {
 
     /** A field of the first element of the JSON list at this path. */
     /** The demo's first line load (or point load: {@code kind}), on whichever level carries one. */
-    private static String firstLineLoad(OfficeClient c, String project, String kind) throws IOException {
+    /** The id of the project's first level that holds a load of this kind. */
+    private static String levelWith(OfficeClient c, String project, String kind) throws IOException {
         for (JsonNode level : JSON.readTree(OfficeClient.expect(c.get(project + "/levels"), 200).body())) {
             JsonNode loads = JSON.readTree(OfficeClient.expect(c.get(project + "/levels/" + level.path("id").asText() + "/" + kind), 200).body());
-            if (!loads.isEmpty()) return loads.get(0).path("id").asText();
+            if (!loads.isEmpty()) return level.path("id").asText();
         }
         throw new IllegalStateException(project + " has no " + kind + " in the demo");
     }

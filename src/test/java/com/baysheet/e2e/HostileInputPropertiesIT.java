@@ -77,7 +77,7 @@ class HostileInputPropertiesIT {
                         "elevation", "140", "roof", "", "roofSlope", "")),
                 new FormCase("edit level", engineer, l, fields("version", "VERSION", "name", "Level 1", "elevation", "0",
                         "roofSlope", "")),
-                new FormCase("remove level", engineer, l + "/delete", fields("version", "-1")),
+                new FormCase("remove level", engineer, l + "/delete", fields("version", "-1", "confirm", "yes")),
                 new FormCase("bays", engineer, l + "/bays", fields("version", "VERSION", "cells", "0,0", "action", "assign",
                         "occupancy", "office", "deadLoad", "60", "beams", "Y", "infillBeams", "2", "cantilevers.south", "",
                         "cantileverOccupancy", "")),

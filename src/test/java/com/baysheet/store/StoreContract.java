@@ -30,7 +30,8 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 /** The store's behaviour, run against each database with the real migrations. */
-abstract class StoreContract implements LineLoadContract, FloorMethodContract, TypicalLevelContract, ModelFileContract {
+abstract class StoreContract implements LineLoadContract, FloorMethodContract, TypicalLevelContract, ModelFileContract,
+        DeletedItemContract {
     protected Database db;
     protected Store store;
 

@@ -140,12 +140,16 @@ class LineLoadPagesTest {
         assertThat(server.post(page("Roof"), parapet).statusCode()).isEqualTo(303);
         StoredLineLoad demo = loads("Roof").stream().filter(l -> l.label().equals("North parapet")).findFirst().orElseThrow();
         String delete = page("Roof") + "/" + demo.id() + "/delete";
-        HttpResponse<String> unconfirmed = server.post(delete, server.versioned(project(), entry("lineLoad", String.valueOf(demo.id()))));
-        assertThat(unconfirmed.statusCode()).isEqualTo(422);
-        assertThat(Html.shown(unconfirmed.body())).contains("tick the box to confirm");
+        // the list leads to the confirmation page, which names the load and carries confirm=yes
+        assertThat(Html.one(server.get(page("Roof")).body(), "#line-load-" + demo.id() + " a[href$=/delete]").attr("href")).isEqualTo(delete);
+        String confirm = server.get(delete).body();
+        assertThat(Html.text(confirm, "#what-goes")).contains("North parapet (D, 1-5)").contains("Roof");
+        assertThat(Html.one(confirm, "form[action$=/delete] input[name=confirm]").val()).isEqualTo("yes");
+        HttpResponse<String> unconfirmed = server.post(delete, server.versioned(project()));
+        assertThat(unconfirmed.statusCode()).isEqualTo(400);
+        assertThat(Html.shown(unconfirmed.body())).contains("confirm").contains("must be yes");
         assertThat(loads("Roof")).contains(demo);
-        HttpResponse<String> confirmed = server.post(delete, server.versioned(project(),
-                entry("lineLoad", String.valueOf(demo.id())), entry("confirm", "yes")));
+        HttpResponse<String> confirmed = server.post(delete, server.versioned(project(), entry("confirm", "yes")));
         assertThat(confirmed.statusCode()).isEqualTo(303);
         assertThat(loads("Roof")).doesNotContain(demo);
     }

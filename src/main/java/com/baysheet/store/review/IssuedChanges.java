@@ -68,6 +68,31 @@ public final class IssuedChanges {
         return out;
     }
 
+    /**
+     * Withdraws the issued sheets the change removed (in force before, not in the model after): they are kept, no
+     * longer in force, and stay withdrawn if their members come back. Returns their names as they printed.
+     */
+    public static List<String> withdrawGone(Connection c, long projectId, Snapshot before, Snapshot after, java.time.Instant at)
+            throws SQLException {
+        List<String> out = new ArrayList<>();
+        for (var e : after.fingerprints().entrySet()) {
+            if (e.getValue() != null || !before.fingerprints().containsKey(e.getKey())) continue;
+            Revisions.withdraw(c, projectId, e.getKey(), at);
+            out.add(before.names().getOrDefault(e.getKey(), e.getKey()));
+        }
+        return out;
+    }
+
+    /** The subjects of the project's sheets whose issued revision is withdrawn. */
+    public static java.util.Set<String> withdrawn(Connection c, long projectId) throws SQLException {
+        return Revisions.withdrawn(c, projectId);
+    }
+
+    /** Whether any sheet or package of the project was ever issued: such a project is not deleted. */
+    public static boolean everIssued(Connection c, long projectId) throws SQLException {
+        return Revisions.everIssued(c, projectId);
+    }
+
     private static boolean counted(SheetRef ref) {
         return ref.isPackage() || MarkSheets.markId(ref.subject()).isPresent();
     }

@@ -28,7 +28,8 @@ import java.util.function.UnaryOperator;
  */
 public final class Reviews {
     /** What a sheet's page shows: the current revision, its markups and all revisions. */
-    public record SheetView(StoredRevision current, List<MarkupNote> markups, List<StoredRevision> history) {}
+    /** @param withdrawn whether the issued revision in force was withdrawn (its members were deleted): kept, no longer in force */
+    public record SheetView(StoredRevision current, List<MarkupNote> markups, List<StoredRevision> history, boolean withdrawn) {}
 
     private final Sql sql;
 
@@ -40,8 +41,13 @@ public final class Reviews {
         return sql.tx(c -> {
             StoredRevision cur = current(c, ref);
             List<MarkupNote> m = cur.stored() ? Markups.forRevision(c, cur.id()) : List.of();
-            return new SheetView(cur, m, Revisions.history(c, ref));
+            return new SheetView(cur, m, Revisions.history(c, ref), Revisions.withdrawn(c, ref.projectId()).contains(ref.subject()));
         });
+    }
+
+    /** The subjects of the project's sheets whose issued revision was withdrawn. */
+    public java.util.Set<String> withdrawn(long projectId) {
+        return sql.tx(c -> Revisions.withdrawn(c, projectId));
     }
 
     public List<StoredRevision> latestOf(long projectId) {
@@ -65,7 +71,11 @@ public final class Reviews {
     public void submit(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current) {
         String fp = CalcFingerprint.of(current);
         // on an issued sheet changed since issue, the submission opens the next revision; the issued one stays in force
-        step(ref, version, who, "submit", r -> (r.state() == SheetState.ISSUED ? r.reopen(fp) : r).submit(who.actor(), fp, today),
+        // a withdrawn sheet (its members were deleted, then restored) opens the next revision even if unchanged:
+        // the withdrawn one never stands again. The flag, once set, is never cleared, so reading it first is safe.
+        boolean withdrawn = sql.tx(c -> Revisions.withdrawn(c, ref.projectId()).contains(ref.subject()));
+        step(ref, version, who, "submit", r -> (r.state() == SheetState.ISSUED
+                        ? (withdrawn ? SheetRevision.opened(r.number() + 1) : r.reopen(fp)) : r).submit(who.actor(), fp, today),
                 RecordSnapshot.write(current), null);
     }
 

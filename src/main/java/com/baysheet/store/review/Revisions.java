@@ -46,9 +46,46 @@ final class Revisions {
                 + "(SELECT MAX(x.revision_no) FROM sheet_revision x WHERE x.sheet_id = r.sheet_id) ORDER BY s.subject", projectId);
     }
 
-    /** The revision in force of every sheet of a project that has one: its latest issued revision. */
+    /** The revision in force of every sheet of a project that has one: its latest issued revision, unless withdrawn. */
     static List<StoredRevision> inForce(Connection c, long projectId) throws SQLException {
-        return list(c, SELECT + "WHERE s.project_id = ? AND r.state = 'ISSUED' ORDER BY s.subject, r.revision_no", projectId);
+        return list(c, SELECT + "WHERE s.project_id = ? AND r.state = 'ISSUED' AND r.withdrawn_at IS NULL ORDER BY s.subject, r.revision_no", projectId);
+    }
+
+    /** Withdraws the sheet's issued revision: kept, no longer in force, and withdrawn for good. */
+    static void withdraw(Connection c, long projectId, String subject, Instant at) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("UPDATE sheet_revision SET withdrawn_at = ?, version = version + 1 "
+                + "WHERE state = 'ISSUED' AND withdrawn_at IS NULL AND sheet_id = "
+                + "(SELECT s.id FROM review_sheet s WHERE s.project_id = ? AND s.subject = ?)")) {
+            ps.setObject(1, Sql.stamp(at));
+            ps.setLong(2, projectId);
+            ps.setString(3, subject);
+            ps.executeUpdate();
+        }
+    }
+
+    /** The subjects of the project's sheets whose issued revision was withdrawn. */
+    static java.util.Set<String> withdrawn(Connection c, long projectId) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT s.subject FROM sheet_revision r JOIN review_sheet s ON s.id = r.sheet_id "
+                + "WHERE s.project_id = ? AND r.state = 'ISSUED' AND r.withdrawn_at IS NOT NULL")) {
+            ps.setLong(1, projectId);
+            java.util.Set<String> out = new java.util.TreeSet<>();
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) out.add(rs.getString(1));
+            }
+            return out;
+        }
+    }
+
+    /** Whether any sheet or package of the project has ever been issued (a withdrawn or superseded issue counts). */
+    static boolean everIssued(Connection c, long projectId) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT COUNT(*) FROM sheet_revision r JOIN review_sheet s ON s.id = r.sheet_id "
+                + "WHERE s.project_id = ? AND r.state IN ('ISSUED', 'SUPERSEDED')")) {
+            ps.setLong(1, projectId);
+            try (ResultSet rs = ps.executeQuery()) {
+                rs.next();
+                return rs.getLong(1) > 0;
+            }
+        }
     }
 
     /** After a revision is issued: the sheet's earlier issued revision is superseded by it. */

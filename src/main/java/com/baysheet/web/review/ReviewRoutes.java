@@ -64,6 +64,7 @@ public final class ReviewRoutes {
         m.put("marks", store.marks().of(project, computed.derived()).all());
         m.put("packages", PackageScope.all(computed.derived()));
         m.put("sheets", latestBySubject(project));
+        m.put("withdrawn", reviews().withdrawn(project));
         ctx.render("review/list", m);
     }
 
@@ -96,7 +97,9 @@ public final class ReviewRoutes {
         Map<String, Object> m = new HashMap<>();
         m.put("project", store.results().of(project).project());
         m.put("mark", mark);
-        m.put("history", reviews().view(new com.baysheet.review.SheetRef(project, com.baysheet.review.MarkSheets.PREFIX + mark.id())).history());
+        var view = reviews().view(new com.baysheet.review.SheetRef(project, com.baysheet.review.MarkSheets.PREFIX + mark.id()));
+        m.put("history", view.history());
+        m.put("withdrawn", view.withdrawn());
         ctx.render("review/retired-mark", m);
     }
 

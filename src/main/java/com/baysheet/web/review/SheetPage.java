@@ -17,7 +17,7 @@ import java.util.List;
  * only a convenience: every action is checked again by the review rules when posted.
  */
 record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChanged, boolean changedSinceIssue,
-                 List<MarkupNote> markups, List<StoredRevision> history, Offer offer) {
+                 boolean withdrawn, List<MarkupNote> markups, List<StoredRevision> history, Offer offer) {
     /** The buttons shown to this user. */
     record Offer(boolean submit, boolean resubmit, boolean check, boolean issue, boolean reply) {}
 
@@ -28,8 +28,11 @@ record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChange
         String now = CalcFingerprint.of(currentRecord);
         boolean changed = r.fingerprint() != null && !r.state().frozen() && !r.fingerprint().equals(now);
         // an issued revision stays in force until the next is issued: a change only flags it
-        boolean sinceIssue = r.outdatedBy(now);
-        return new SheetPage(cur, shown, changed, sinceIssue, v.markups(), v.history(), offer(r, user, changed, sinceIssue));
+        // a withdrawn issue no longer stands, changed or not: the next revision may be submitted
+        boolean withdrawn = v.withdrawn() && r.state() == SheetState.ISSUED;
+        boolean sinceIssue = r.outdatedBy(now) && !withdrawn;
+        return new SheetPage(cur, shown, changed, sinceIssue, withdrawn, v.markups(), v.history(),
+                offer(r, user, changed, sinceIssue || withdrawn));
     }
 
     private static Offer offer(SheetRevision r, User u, boolean changed, boolean sinceIssue) {
