@@ -88,7 +88,7 @@ public final class App {
         Office office = Office.on(store, db.dataSource(), clock);
         // deleted items are kept 30 days: those past it go at start, as whenever the administrator's list is read
         int purged = store.deleted().purge();
-        if (purged > 0) LOG.info("deleted items past 30 days purged: " + purged);
+        if (purged > 0) Log.LOG.info("deleted items past 30 days purged: " + purged);
         if (o.demo()) {
             int loaded = Demo.loadIfEmpty(store).size();
             Log.LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");
