@@ -78,7 +78,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
             cfg.http.maxRequestSize = 1_000_000L;
             cfg.jetty.multipartConfig.maxFileSize(50, SizeUnit.MB);
             cfg.jetty.multipartConfig.maxTotalRequestSize(51, SizeUnit.MB);
-            cfg.fileRenderer(new Views());
+            Views views = new Views();
+            cfg.fileRenderer(views);
             cfg.staticFiles.add(sf -> {
                 sf.hostedPath = "/static";
                 sf.directory = "/static";
@@ -90,7 +91,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
             cfg.routes.after(Headers::charset);
             cfg.routes.after(CsrfForms::after);
             exceptions(cfg.routes, access, recorder);
-            routes(cfg.routes, recorder);
+            routes(cfg.routes, recorder, new PageCache(store, views));
         });
     }
 
@@ -135,7 +136,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
     }
 
     /** The routes of every feature; each declares its roles beside its path. */
-    private void routes(RoutesConfig r, AuditRecorder recorder) {
+    private void routes(RoutesConfig r, AuditRecorder recorder, PageCache pages) {
         new Health(ds).install(r);
         new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
         new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
@@ -149,9 +150,9 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new LineLoadRoutes(store).install(r);
         new PointLoadRoutes(store).install(r);
         new SelfWeightRoutes(store).install(r);
-        new PlanRoutes(store).install(r);
-        new MemberRoutes(store).install(r);
-        new TakeDownRoutes(store).install(r);
+        new PlanRoutes(pages).install(r);
+        new MemberRoutes(pages).install(r);
+        new TakeDownRoutes(pages).install(r);
         new MethodRoutes(store).install(r);
         new ScheduleRoutes(store).install(r);
         new SubmittalRoutes(store).install(r);
