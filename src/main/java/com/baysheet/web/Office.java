@@ -99,7 +99,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
     private static void filters(RoutesConfig r, boolean behindTls) {
         // first: a refusal halts the request with a redirect that needs the headers too
         r.before(ctx -> Headers.apply(ctx, behindTls));
-        // pages show live project state: never let a browser or proxy reuse an old copy
+        // pages show live project state: never let a browser or proxy reuse an old copy (the kept result pages
+        // replace this with private, no-cache and an ETag: the browser asks again every time; PageCache)
         r.before(ctx -> {
             if (!ctx.path().startsWith("/static/")) ctx.header("Cache-Control", "no-store");
         });
