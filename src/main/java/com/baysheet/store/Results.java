@@ -71,6 +71,15 @@ public final class Results {
         }
     }
 
+    /**
+     * Whether this is the building held for its own versions: then it was read whole at them (a result read
+     * while a save raced it is handed out but never held), so whatever is rendered from it is exactly of them.
+     */
+    public boolean kept(Computed c) {
+        Model m = c.model();
+        synchronized (cache) { return cache.get(new Key(m.project().id(), m.project().version(), m.catalogueVersion(), m.firmVersion())) == c; }
+    }
+
     /** How many derived buildings are held, for tests of the cache. */
     public int cachedCount() {
         synchronized (cache) { return cache.size(); }
@@ -85,11 +94,14 @@ public final class Results {
     }
 
     private static Key key(Connection c, long projectId) {
-        long version;
+        return new Key(projectId, modelVersion(c, projectId), OccupancyStore.catalogueVersion(c), firmVersion(c));
+    }
+
+    /** The project's version alone (every model write bumps it); not found when there is no such project. */
+    static long modelVersion(Connection c, long projectId) {
         try (Handle h = Sql.on(c)) {
-            version = h.createQuery("SELECT version FROM project WHERE id = :id").bind("id", projectId).mapTo(Long.class)
+            return h.createQuery("SELECT version FROM project WHERE id = :id").bind("id", projectId).mapTo(Long.class)
                     .findOne().orElseThrow(() -> new NotFound("project", projectId));
         }
-        return new Key(projectId, version, OccupancyStore.catalogueVersion(c), firmVersion(c));
     }
 }

@@ -12,7 +12,8 @@ public record Store(ProjectStore projects, GridStore grids, LevelStore levels, B
                     OccupancyStore occupancies, Results results, LineLoadStore lineLoads,
                     com.baysheet.store.review.MarkBook marks, PointLoadStore pointLoads, SelfWeightStore selfWeights,
                     TypicalLevels typicals, ModelExport exports, ModelImport imports,
-                    UnitConversion conversions, LayoutImport layouts, DeletedItems deleted) {
+                    UnitConversion conversions, LayoutImport layouts, DeletedItems deleted,
+                    ProjectVersions versions) {
 
     /**
      * @param derive the framing derivation, run to validate each model change, to supersede what it changes
@@ -28,6 +29,7 @@ public record Store(ProjectStore projects, GridStore grids, LevelStore levels, B
                 new BayStore(writes, occupancies), occupancies, results,
                 new LineLoadStore(writes), new com.baysheet.store.review.MarkBook(sql),
                 new PointLoadStore(writes), new SelfWeightStore(writes), new TypicalLevels(writes), new ModelExport(sql),
-                new ModelImport(writes), new UnitConversion(writes), new LayoutImport(writes), new DeletedItems(writes));
+                new ModelImport(writes), new UnitConversion(writes), new LayoutImport(writes), new DeletedItems(writes),
+                new ProjectVersions(sql, results));
     }
 }

@@ -8,7 +8,7 @@ import com.baysheet.framing.model.Level;
 import com.baysheet.review.MarkSheets;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
-import com.baysheet.store.Store;
+import com.baysheet.store.ProjectVersions;
 import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
@@ -19,10 +19,10 @@ import java.util.Map;
 
 /** Derived members: the filtered list with governing numbers, and a member's whole calculation record with its plan. */
 final class MemberRoutes {
-    private final Store store;
+    private final PageCache pages;
 
-    MemberRoutes(Store store) {
-        this.store = store;
+    MemberRoutes(PageCache pages) {
+        this.pages = pages;
     }
 
     void install(RoutesConfig r) {
@@ -31,11 +31,15 @@ final class MemberRoutes {
     }
 
     void list(Context ctx) {
-        Results.Computed c = store.results().of(Ids.project(ctx));
+        pages.serve(ctx, s -> list(ctx, s));
+    }
+
+    private PageCache.View list(Context ctx, ProjectVersions.State s) {
+        Results.Computed c = s.computed();
         MemberFilter filter = MemberFilter.of(ctx);
         UnitLabels units = UnitLabels.of(c.project().info().units());
         String href = "/projects/" + c.project().id() + "/members/";
-        MarkSheets marks = store.marks().of(c.project().id(), c.derived());
+        MarkSheets marks = s.marks();
         List<DerivedMember> shown = filter.apply(c.derived().members());
         if ("mark".equals(ctx.queryParam("group"))) shown = byMark(shown, marks);
         List<MemberRow> rows = shown.stream().map(m -> MemberRow.of(m, href + m.id(), units)).toList();
@@ -47,23 +51,23 @@ final class MemberRoutes {
         m.put("roles", MemberRole.values());
         m.put("kinds", MemberKind.values());
         m.put("kllClause", kllClause(c));
-        ctx.render("members/list", m);
+        return new PageCache.View("members/list", m);
     }
 
     void show(Context ctx) {
-        render(ctx, store, null);
+        pages.serve(ctx, s -> page(ctx, s, null));
     }
 
     /** The member page, with the own-weight form as submitted where it comes back refused (else its stored value). */
-    static void render(Context ctx, Store store, Form weightForm) {
-        Results.Computed c = store.results().of(Ids.project(ctx));
+    static PageCache.View page(Context ctx, ProjectVersions.State s, Form weightForm) {
+        Results.Computed c = s.computed();
         DerivedMember member = c.derived().member(ctx.pathParam("member"))
                 .orElseThrow(() -> new NotFound("member", ctx.pathParam("member")));
         Level level = c.model().building().levels().stream().filter(l -> l.name().equals(member.level())).findFirst().orElseThrow();
         String href = "/projects/" + c.project().id() + "/members/{id}";
         Map<String, Object> m = base(c);
         m.put("member", member);
-        MarkSheets marks = store.marks().of(c.project().id(), c.derived());
+        MarkSheets marks = s.marks();
         m.put("mark", marks.ofMember(member.id()).orElse(null));
         m.put("record", member.result().record());
         UnitLabels units = UnitLabels.of(c.project().info().units());
@@ -78,7 +82,7 @@ final class MemberRoutes {
                 c.model().building().context().catalogue(), href, c.model().building().lineLoads(),
                 DriftZones.of(c.model().building(), level.name()), c.model().building().pointLoads(), marks.labels()));
         MemberWeightRoutes.put(m, c, member, weightForm);
-        ctx.render("members/show", m);
+        return new PageCache.View("members/show", m);
     }
 
     /** The members in the order of their marks (reading order), each mark's locations together. */

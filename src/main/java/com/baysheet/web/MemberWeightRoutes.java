@@ -43,7 +43,10 @@ final class MemberWeightRoutes {
             store.selfWeights().setMember(Editors.of(ctx), c.project().id(), version, member.id(), member.name(), w);
             return member.id();
         }).ifPresentOrElse(done -> Pages.seeOther(ctx, "/projects/" + c.project().id() + "/members/" + member.id() + "#own-weight"),
-                () -> MemberRoutes.render(ctx.status(form.stale() ? 409 : 422), store, form));
+                () -> {
+                    PageCache.View v = MemberRoutes.page(ctx, store.versions().state(c.project().id()), form);
+                    ctx.status(form.stale() ? 409 : 422).render(v.template(), v.model());
+                });
     }
 
     /** The form's values and what the member carries now, for the member page. */

@@ -88,7 +88,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
             cfg.http.maxRequestSize = 1_000_000L;
             cfg.jetty.multipartConfig.maxFileSize(50, SizeUnit.MB);
             cfg.jetty.multipartConfig.maxTotalRequestSize(51, SizeUnit.MB);
-            cfg.fileRenderer(new Views());
+            Views views = new Views();
+            cfg.fileRenderer(views);
             cfg.staticFiles.add(sf -> {
                 sf.hostedPath = "/static";
                 sf.directory = "/static";
@@ -100,7 +101,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
             cfg.routes.after(Headers::charset);
             cfg.routes.after(CsrfForms::after);
             exceptions(cfg.routes, access, recorder);
-            routes(cfg.routes, recorder);
+            routes(cfg.routes, recorder, new PageCache(store, views));
         });
     }
 
@@ -108,7 +109,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
     private static void filters(RoutesConfig r, boolean behindTls) {
         // first: a refusal halts the request with a redirect that needs the headers too
         r.before(ctx -> Headers.apply(ctx, behindTls));
-        // pages show live project state: never let a browser or proxy reuse an old copy
+        // pages show live project state: never let a browser or proxy reuse an old copy (the kept result pages
+        // replace this with private, no-cache and an ETag: the browser asks again every time; PageCache)
         r.before(ctx -> {
             if (!ctx.path().startsWith("/static/")) ctx.header("Cache-Control", "no-store");
         });
@@ -145,7 +147,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
     }
 
     /** The routes of every feature; each declares its roles beside its path. */
-    private void routes(RoutesConfig r, AuditRecorder recorder) {
+    private void routes(RoutesConfig r, AuditRecorder recorder, PageCache pages) {
         new Health(ds).install(r);
         new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
         new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
@@ -161,11 +163,11 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new LineLoadRoutes(store).install(r);
         new PointLoadRoutes(store).install(r);
         new SelfWeightRoutes(store).install(r);
-        new PlanRoutes(store).install(r);
-        new MemberRoutes(store).install(r);
+        new PlanRoutes(pages).install(r);
+        new MemberRoutes(pages).install(r);
         new MemberWeightRoutes(store).install(r);
         new ApiWeightRoutes(store).install(r);
-        new TakeDownRoutes(store).install(r);
+        new TakeDownRoutes(pages).install(r);
         new MethodRoutes(store).install(r);
         new ScheduleRoutes(store).install(r);
         new SubmittalRoutes(store).install(r);

@@ -5,7 +5,7 @@ import com.baysheet.framing.model.Level;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
 import com.baysheet.project.StoredLevel;
-import com.baysheet.store.Store;
+import com.baysheet.store.ProjectVersions;
 import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
@@ -14,10 +14,10 @@ import java.util.Map;
 
 /** The framing plan of a level, drawn from the model as SVG. */
 final class PlanRoutes {
-    private final Store store;
+    private final PageCache pages;
 
-    PlanRoutes(Store store) {
-        this.store = store;
+    PlanRoutes(PageCache pages) {
+        this.pages = pages;
     }
 
     void install(RoutesConfig r) {
@@ -26,7 +26,11 @@ final class PlanRoutes {
 
     /** ?level=ID picks the level; without it, the lowest level that has a floor. */
     void show(Context ctx) {
-        Results.Computed c = store.results().of(Ids.project(ctx));
+        pages.serve(ctx, s -> show(ctx, s));
+    }
+
+    private PageCache.View show(Context ctx, ProjectVersions.State s) {
+        Results.Computed c = s.computed();
         Map<String, Object> m = MemberRoutes.base(c);
         String wanted = ctx.queryParam("level");
         StoredLevel stored = c.model().levels().stream()
@@ -41,7 +45,7 @@ final class PlanRoutes {
                     c.model().building().context().catalogue(), "/projects/" + c.project().id() + "/members/{id}",
                     c.model().building().lineLoads(),
                 DriftZones.of(c.model().building(), level.name()), c.model().building().pointLoads(),
-                store.marks().of(c.project().id(), c.derived()).labels()));
-        ctx.render("plan/show", m);
+                s.marks().labels()));
+        return new PageCache.View("plan/show", m);
     }
 }

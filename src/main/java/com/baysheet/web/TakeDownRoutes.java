@@ -3,7 +3,6 @@ package com.baysheet.web;
 import com.baysheet.framing.TakeDown;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Results;
-import com.baysheet.store.Store;
 import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
@@ -12,10 +11,10 @@ import java.util.Map;
 
 /** Column take-downs: the stacks of the project, and one stack level by level from the top down. */
 final class TakeDownRoutes {
-    private final Store store;
+    private final PageCache pages;
 
-    TakeDownRoutes(Store store) {
-        this.store = store;
+    TakeDownRoutes(PageCache pages) {
+        this.pages = pages;
     }
 
     void install(RoutesConfig r) {
@@ -24,14 +23,18 @@ final class TakeDownRoutes {
     }
 
     void list(Context ctx) {
-        Results.Computed c = store.results().of(Ids.project(ctx));
-        Map<String, Object> m = MemberRoutes.base(c);
-        m.put("takeDowns", c.derived().takeDowns());
-        ctx.render("takedowns/list", m);
+        pages.serve(ctx, s -> {
+            Map<String, Object> m = MemberRoutes.base(s.computed());
+            m.put("takeDowns", s.computed().derived().takeDowns());
+            return new PageCache.View("takedowns/list", m);
+        });
     }
 
     void show(Context ctx) {
-        Results.Computed c = store.results().of(Ids.project(ctx));
+        pages.serve(ctx, s -> show(ctx, s.computed()));
+    }
+
+    private PageCache.View show(Context ctx, Results.Computed c) {
         TakeDown t = c.derived().takeDown(ctx.pathParam("stack")).orElseThrow(() -> new NotFound("column stack", ctx.pathParam("stack")));
         Map<String, Object> m = MemberRoutes.base(c);
         m.put("takeDown", t);
@@ -42,6 +45,6 @@ final class TakeDownRoutes {
         // the column below each level under every floor reduction method the project could choose
         var columns = t.rows().stream().map(r -> c.derived().member(r.member())).flatMap(java.util.Optional::stream).toList();
         m.put("methods", MethodTable.of(columns, "/projects/" + c.project().id() + "/members/", UnitLabels.of(c.project().info().units())));
-        ctx.render("takedowns/show", m);
+        return new PageCache.View("takedowns/show", m);
     }
 }

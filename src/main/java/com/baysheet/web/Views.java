@@ -12,6 +12,7 @@ import org.thymeleaf.web.servlet.JakartaServletWebApplication;
 import java.util.HashMap;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 
 /** Thymeleaf templates from classpath:templates/, rendered with a WebContext so that @{...} links work. */
 final class Views implements FileRenderer {
@@ -31,8 +32,16 @@ final class Views implements FileRenderer {
     @NotNull
     @Override
     public String render(@NotNull String template, @NotNull Map<String, ?> model, @NotNull Context ctx) {
+        return engine.process(template, context(model, ctx));
+    }
+
+    /** One fragment of a template ({@code th:fragment="name"}) alone, for the parts of a kept page rendered per request. */
+    String fragment(String template, String fragment, Map<String, ?> model, Context ctx) {
+        return engine.process(template, Set.of(fragment), context(model, ctx));
+    }
+
+    private WebContext context(Map<String, ?> model, Context ctx) {
         if (application == null) application = JakartaServletWebApplication.buildApplication(ctx.req().getServletContext());
-        WebContext wc = new WebContext(application.buildExchange(ctx.req(), ctx.res()), Locale.US, new HashMap<>(model));
-        return engine.process(template, wc);
+        return new WebContext(application.buildExchange(ctx.req(), ctx.res()), Locale.US, new HashMap<>(model));
     }
 }

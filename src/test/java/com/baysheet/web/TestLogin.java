@@ -104,6 +104,11 @@ public final class TestLogin {
             return send(HttpRequest.newBuilder(uri(path)).GET().build());
         }
 
+        /** A GET with these request headers, name and value in turn ("If-None-Match", tag). */
+        public HttpResponse<String> get(String path, String... headers) {
+            return send(HttpRequest.newBuilder(uri(path)).headers(headers).GET().build());
+        }
+
         public HttpResponse<byte[]> getBytes(String path) {
             try {
                 return http.send(HttpRequest.newBuilder(uri(path)).GET().build(), HttpResponse.BodyHandlers.ofByteArray());

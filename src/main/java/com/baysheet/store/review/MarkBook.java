@@ -40,9 +40,26 @@ public final class MarkBook {
 
     /** The marks of this derivation of the project, read on the caller's connection; writes nothing. */
     public static MarkSheets read(Connection c, long projectId, Derived d) throws SQLException {
+        return fingerprinted(c, projectId, d).sheets();
+    }
+
+    /** Marks as read, with the fingerprint of the stored rows they were given from (see {@link #fingerprint}). */
+    public record Read(MarkSheets sheets, String fingerprint) {}
+
+    /** {@link #read}, and the fingerprint of exactly the stored rows the marks were given from. */
+    public static Read fingerprinted(Connection c, long projectId, Derived d) throws SQLException {
         List<Mark> stored = MarkRows.all(c, projectId);
         List<TypicalGroup> groups = d.members().isEmpty() ? List.of() : Typicals.of(d);
-        return sheets(MarkAssignment.of(groups, stored, MarkRows.carried(c, projectId)), stored);
+        return new Read(sheets(MarkAssignment.of(groups, stored, MarkRows.carried(c, projectId)), stored), MarkPrint.of(stored));
+    }
+
+    /**
+     * The fingerprint of the project's stored marks, every column of them: a rename changes a mark's text and no
+     * version, so a page labelled by marks is keyed by this beside the model's version. Which member carries which
+     * mark changes only in a model write (with the version), so it is not part of it.
+     */
+    public static String fingerprint(Connection c, long projectId) throws SQLException {
+        return MarkPrint.of(MarkRows.all(c, projectId));
     }
 
     /** A stored mark by id, carried or not (a mark no member carries keeps its sheet's history). */

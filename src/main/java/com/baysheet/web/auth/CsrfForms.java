@@ -14,7 +14,11 @@ public final class CsrfForms {
 
     private CsrfForms() {}
 
+    /** The request attribute that says this response's forms carry the token already (a kept page, filled in). */
+    private static final String FILLED = "csrfFilled";
+
     public static void after(Context ctx) {
+        if (ctx.attribute(FILLED) != null) return;
         String token = ctx.attribute(Access.CSRF);
         String type = ctx.res().getContentType();
         if (token == null || type == null || !type.startsWith("text/html")) return;
@@ -23,7 +27,18 @@ public final class CsrfForms {
         ctx.result(insert(html, token));
     }
 
-    static String insert(String html, String token) {
+    /** The request's form token (the session's, or before login the form cookie's); null on an open route. */
+    public static String token(Context ctx) {
+        return ctx.attribute(Access.CSRF);
+    }
+
+    /** Marks this response as one whose forms already carry the token, so that the after-filter leaves it alone. */
+    public static void filled(Context ctx) {
+        ctx.attribute(FILLED, Boolean.TRUE);
+    }
+
+    /** The page with the hidden token field {@code token} in every POST form. */
+    public static String insert(String html, String token) {
         String field = "<input type=\"hidden\" name=\"" + Access.CSRF_FIELD + "\" value=\"" + token + "\">";
         // find each "<form" tag by plain search and match only the tag itself: running the case-insensitive
         // pattern over a whole page took a quarter of a member page's time under load
