@@ -69,7 +69,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
      */
     public Javalin server(String trustedProxy, boolean behindTls) {
         AuditRecorder recorder = new AuditRecorder(review.audit(), clock);
-        Access access = new Access(accounts.logins(), () -> review.firm().get(), recorder);
+        Access access = new Access(accounts.logins(), accounts.tokens(), () -> review.firm().get(), recorder);
         return Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
             cfg.contextResolver.ip = ctx -> ClientAddress.of(ctx.req().getRemoteAddr(), ctx.header("X-Forwarded-For"), trustedProxy);
