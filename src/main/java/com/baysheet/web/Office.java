@@ -18,6 +18,7 @@ import com.baysheet.web.auth.AuditRecorder;
 import com.baysheet.web.auth.AuthRoutes;
 import com.baysheet.web.auth.BackupRoutes;
 import com.baysheet.web.auth.CsrfForms;
+import com.baysheet.web.auth.TokenRoutes;
 import com.baysheet.web.review.IssuedRoutes;
 import com.baysheet.web.review.MarkRoutes;
 import com.baysheet.web.review.MarkupRoutes;
@@ -139,6 +140,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new Health(ds).install(r);
         new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
         new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
+        new TokenRoutes(accounts.tokens()).install(r);
         new BackupRoutes(ds, review.audit(), clock).install(r);
         new ModelFileRoutes(store).install(r); // before ProjectRoutes: /projects/import is not a project id
         new ProjectRoutes(store).install(r);

@@ -12,7 +12,8 @@ public enum Saved {
     PROJECT("project", "Saved: project settings."),
     SUBMITTAL("submittal", "Saved: submittal data."),
     PASSWORD("password", "Saved: your new password. Your other logins were ended."),
-    USER("user", "Saved: user account.");
+    USER("user", "Saved: user account."),
+    TOKEN_REVOKED("token", "Revoked: that API token no longer opens anything.");
 
     /** The request attribute the layout reads the message by. */
     public static final String ATTRIBUTE = "saved";

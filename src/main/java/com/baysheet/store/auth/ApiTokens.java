@@ -16,8 +16,11 @@ import java.time.Duration;
 import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.time.temporal.ChronoUnit;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.stream.Collectors;
 
 /**
  * Personal API tokens: a person makes one for a program that reads or changes the office's work in their name,
@@ -83,6 +86,17 @@ public final class ApiTokens {
             try (Handle h = Sql.on(c)) {
                 return h.createQuery("SELECT id, user_id, name, created_at, last_used_at FROM api_token WHERE user_id = :user "
                         + "ORDER BY created_at DESC, id DESC").bind("user", userId).map((rs, ctx) -> listed(rs)).list();
+            }
+        });
+    }
+
+    /** Every user's tokens, by user id, for the administrator's users page (one read, however many users). */
+    public Map<Long, List<Listed>> byUser() {
+        return sql.tx(c -> {
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT id, user_id, name, created_at, last_used_at FROM api_token ORDER BY user_id, created_at DESC, id DESC")
+                        .map((rs, ctx) -> listed(rs)).list().stream()
+                        .collect(Collectors.groupingBy(Listed::userId, LinkedHashMap::new, Collectors.toList()));
             }
         });
     }
