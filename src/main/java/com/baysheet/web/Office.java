@@ -71,7 +71,8 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
     public Javalin server(String trustedProxy, boolean behindTls) {
         AuditRecorder recorder = new AuditRecorder(review.audit(), clock);
         Access access = new Access(accounts.logins(), accounts.tokens(), () -> review.firm().get(), recorder);
-        return Javalin.create(cfg -> {
+        ApiDescription description = new ApiDescription();
+        Javalin app = Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
             cfg.contextResolver.ip = ctx -> ClientAddress.of(ctx.req().getRemoteAddr(), ctx.header("X-Forwarded-For"), trustedProxy);
             // request-size limits: a form or JSON body is a few kilobytes (a 413 past 1 MB, before it is read
@@ -92,7 +93,10 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
             cfg.routes.after(CsrfForms::after);
             exceptions(cfg.routes, access, recorder);
             routes(cfg.routes, recorder);
+            description.install(cfg.routes);
         });
+        description.describe(app); // the description is read from the finished route table
+        return app;
     }
 
     /** Before-filters of every request, matched or not (the access check runs after them, on matched routes). */
