@@ -24,10 +24,10 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 /**
- * {@code GET /api/openapi.json}: an OpenAPI 3.0 description of the API, made from the server's own route table
+ * {@code GET /api/openapi.json}: an OpenAPI description of the API, made from the server's own route table
  * (so no route can be left out of it or described after it is gone) and the summaries in
  * {@code api/openapi-summaries.json}, one per route ({@code "GET /api/projects"}; an object adds query parameters
- * and what the body holds). Who may call each route comes from the roles the route declares. docs/api.md is the
+ * and what the body holds), beside the version of the OpenAPI format it is written in. Who may call each route comes from the roles the route declares. docs/api.md is the
  * full reference; this is the machine-readable outline of the same paths.
  * Served to the signed-in office (a login or an API token), like every other API read: it reveals no data, but a
  * stranger learns no paths from this server.
@@ -74,10 +74,14 @@ public final class ApiDescription {
         }
     }
 
-    /** The OpenAPI document of these routes with these summaries (a route with none is named by its method and path). */
-    static ObjectNode of(List<Endpoint> routes, JsonNode summaries) {
+    /**
+     * The OpenAPI document of these routes with the summaries of {@code described} ({@code openapi}: the version of
+     * the OpenAPI format written; {@code routes}: a summary per route; a route with none is named by its method and path).
+     */
+    static ObjectNode of(List<Endpoint> routes, JsonNode described) {
+        JsonNode summaries = described.path("routes");
         ObjectNode doc = F.objectNode();
-        doc.put("openapi", "3.0.3");
+        doc.put("openapi", described.path("openapi").asText());
         doc.putObject("info").put("title", "Baysheet API").put("version", "1")
                 .put("description", "The office's projects, models and calculation results as JSON; see docs/api.md. "
                         + "Results must be checked by a licensed engineer, and the locally adopted building code governs.");
