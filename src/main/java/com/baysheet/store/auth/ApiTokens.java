@@ -65,6 +65,9 @@ public final class ApiTokens {
         Instant now = now();
         sql.tx(c -> {
             try (Handle h = Sql.on(c)) {
+                // the owner's row is locked first, so two makes at once cannot both pass the count
+                h.createQuery("SELECT id FROM app_user WHERE id = :user FOR UPDATE").bind("user", owner.id()).mapTo(Long.class)
+                        .findOne().orElseThrow(() -> new NotFound("user", owner.id()));
                 int held = h.createQuery("SELECT COUNT(*) FROM api_token WHERE user_id = :user").bind("user", owner.id())
                         .mapTo(Integer.class).one();
                 if (held >= MAX_PER_USER)
