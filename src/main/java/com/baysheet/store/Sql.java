@@ -108,7 +108,7 @@ public final class Sql {
      * A Jdbi handle on a connection of {@link #tx}: its statements run in that transaction. Closing the handle
      * (try-with-resources) releases its statements and leaves the connection and the transaction as they are.
      */
-    static Handle on(Connection c) {
+    public static Handle on(Connection c) {
         OPENING.set(c);
         try {
             return JDBI.open();
@@ -118,7 +118,7 @@ public final class Sql {
     }
 
     /** A time bound as the TIMESTAMP WITH TIME ZONE columns take it, by the same JDBC call as a hand-bound one. */
-    static Argument stampOf(Instant at) {
+    public static Argument stampOf(Instant at) {
         OffsetDateTime t = stamp(at);
         return (position, statement, ctx) -> statement.setObject(position, t);
     }

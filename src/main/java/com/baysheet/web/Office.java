@@ -21,6 +21,7 @@ import com.baysheet.web.auth.AuditRecorder;
 import com.baysheet.web.auth.AuthRoutes;
 import com.baysheet.web.auth.BackupRoutes;
 import com.baysheet.web.auth.CsrfForms;
+import com.baysheet.web.auth.TokenRoutes;
 import com.baysheet.web.review.IssuedRoutes;
 import com.baysheet.web.review.MarkRoutes;
 import com.baysheet.web.review.MarkupRoutes;
@@ -76,9 +77,10 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
      */
     public Javalin server(String trustedProxy, boolean behindTls) {
         AuditRecorder recorder = new AuditRecorder(review.audit(), clock);
-        Access access = new Access(accounts.logins(), () -> review.firm().get(), recorder);
+        Access access = new Access(accounts.logins(), accounts.tokens(), () -> review.firm().get(), recorder);
         PackageWorker worker = new PackageWorker(packages, PackageWorker.leaseFromSystem());
-        return Javalin.create(cfg -> {
+        ApiDescription description = new ApiDescription();
+        Javalin app = Javalin.create(cfg -> {
             cfg.startup.showJavalinBanner = false;
             cfg.events.serverStarted(worker::start);
             cfg.events.serverStopping(worker::stop);
@@ -102,7 +104,10 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
             cfg.routes.after(CsrfForms::after);
             exceptions(cfg.routes, access, recorder);
             routes(cfg.routes, recorder, new PageCache(store, views));
+            description.install(cfg.routes);
         });
+        description.describe(app); // the description is read from the finished route table
+        return app;
     }
 
     /** Before-filters of every request, matched or not (the access check runs after them, on matched routes). */
@@ -151,6 +156,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new Health(ds).install(r);
         new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
         new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
+        new TokenRoutes(accounts.tokens()).install(r);
         new BackupRoutes(ds, review.audit(), clock).install(r);
         new ModelFileRoutes(store).install(r); // before ProjectRoutes: /projects/import is not a project id
         new ProjectRoutes(store).install(r);

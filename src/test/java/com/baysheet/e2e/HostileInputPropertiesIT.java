@@ -94,11 +94,13 @@ class HostileInputPropertiesIT {
                         "initials", "FU", "role", "engineer", "password", "a long enough password")),
                 new FormCase("user role", admin, "/admin/users/999999/role", fields("role", "checker")),
                 new FormCase("firm settings", admin, "/admin/firm", fields("firmName", "Firm", "logoText", "F",
-                        "defaultEdition", "ASCE 7-16", "version", "-1")));
+                        "defaultEdition", "ASCE 7-16", "version", "-1")),
+                new FormCase("API token", engineer, "/account/tokens", fields("name", "fuzz script")),
+                new FormCase("API token revoke", engineer, "/account/tokens/revoke", fields("token", "999999")));
     }
 
     @Property(tries = 200)
-    void formsRefuseHostileValuesWithoutFaultOrChange(@ForAll @IntRange(min = 0, max = 14) int which,
+    void formsRefuseHostileValuesWithoutFaultOrChange(@ForAll @IntRange(min = 0, max = 16) int which,
                                                       @ForAll("hostileFields") List<String> hostile, @ForAll int mask) {
         FormCase f = forms().get(which);
         Snapshot before = Snapshot.take();

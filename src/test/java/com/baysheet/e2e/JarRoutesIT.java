@@ -136,6 +136,7 @@ class JarRoutesIT {
                     ? null : "expected to be sent to log in";
             case SET_UP -> "set-up is done; nothing should ask for it";
             case FORM_TOKEN, CHANGE_PASSWORD -> "the demo's people have their own passwords and send the form token";
+            case TOKEN -> "no API token is sent here; the roles alone never refuse one";
         };
     }
 

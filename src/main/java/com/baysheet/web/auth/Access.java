@@ -3,6 +3,7 @@ package com.baysheet.web.auth;
 import com.baysheet.auth.Role;
 import com.baysheet.auth.Tokens;
 import com.baysheet.auth.User;
+import com.baysheet.store.auth.ApiTokens;
 import com.baysheet.store.auth.Logins;
 import com.baysheet.store.auth.SignedIn;
 import com.baysheet.project.Firm;
@@ -22,13 +23,17 @@ import java.util.function.Supplier;
  * admits it, and refuses any state-changing request whose form token (field {@code _csrf}, or header
  * {@code X-CSRF-Token} for the API) is not the session's, or before login the one of the form cookie.
  * A login whose password was set by someone else reaches only routes that admit {@link Admit#ACCOUNT} or
- * anyone until it is changed. Handlers read the login with {@link #user(Context)}.
+ * anyone until it is changed. A request to the API may instead present a personal API token ({@link Bearer}):
+ * then the token alone says who it is (the cookie is not read) and no form token is asked for.
+ * Handlers read the login with {@link #user(Context)}.
  */
 public final class Access {
     public static final String SIGNED_IN = "signedIn";
     static final String CSRF = "csrf";
     static final String CSRF_FIELD = "_csrf";
     static final String CSRF_HEADER = "X-CSRF-Token";
+    /** Set on a request whose login is an API token's. */
+    static final String BY_TOKEN = "byApiToken";
     private static final Duration FORM_COOKIE_AGE = Duration.ofHours(12);
     public static final String CHANGE_PASSWORD_PAGE = "/account/password";
     public static final String CHANGE_FIRST = "Your password was set by someone else: choose your own password before going on.";
@@ -36,6 +41,7 @@ public final class Access {
     private static final Set<RouteRole> UNKNOWN_PATH = Set.of(Admit.OFFICE);
 
     private final Logins logins;
+    private final ApiTokens tokens;
     private final Supplier<Firm> firm;
     private final AuditRecorder recorder;
     /** Set-up is done once and never undone, so after the first yes we stop asking the database. */
@@ -45,8 +51,9 @@ public final class Access {
      * @param firm the firm's settings, put on every request let through for the page header and new projects
      * @param recorder where refused privileged attempts and form-token failures are recorded (null: nowhere)
      */
-    public Access(Logins logins, Supplier<Firm> firm, AuditRecorder recorder) {
+    public Access(Logins logins, ApiTokens tokens, Supplier<Firm> firm, AuditRecorder recorder) {
         this.logins = logins;
+        this.tokens = tokens;
         this.firm = firm;
         this.recorder = recorder;
     }
@@ -108,13 +115,21 @@ public final class Access {
             case LOGIN -> "Please log in to continue.";
             case SET_UP -> "Baysheet has no administrator yet: set it up first.";
             case CHANGE_PASSWORD -> CHANGE_FIRST;
+            case TOKEN -> Bearer.REFUSED;
             case FORBIDDEN, FORM_TOKEN -> role == null ? "Nobody is let in here."
                     : "Your role (" + role.label() + ") does not allow this. Ask your administrator if you need it.";
         });
     }
 
-    /** The login of the session cookie on the request, and the form token its forms carry. */
+    /** The login of the API token or else the session cookie on the request, and the form token its forms carry. */
     private Optional<SignedIn> identify(Context ctx) {
+        Optional<String> token = Bearer.presented(ctx);
+        if (token.isPresent()) {
+            SignedIn t = Bearer.signedIn(ctx, token.get(), tokens);
+            ctx.attribute(SIGNED_IN, t);
+            ctx.attribute(BY_TOKEN, Boolean.TRUE);
+            return Optional.of(t);
+        }
         Optional<SignedIn> s = logins.session(Cookies.token(ctx, Cookies.SESSION));
         s.ifPresent(x -> {
             ctx.attribute(SIGNED_IN, x);
@@ -144,6 +159,7 @@ public final class Access {
     private static void checkFormToken(Context ctx) {
         String m = ctx.method().name();
         if (m.equals("GET") || m.equals("HEAD") || m.equals("OPTIONS")) return;
+        if (Boolean.TRUE.equals(ctx.attribute(BY_TOKEN))) return; // no cookie was used: see Bearer
         String sent = ctx.header(CSRF_HEADER);
         if (sent == null) sent = ctx.formParam(CSRF_FIELD);
         if (!Tokens.same(sent, ctx.attribute(CSRF)))

@@ -1,9 +1,9 @@
 package com.baysheet.web.auth;
 
 /** A request the access filter stops: nobody logged in, a role that may not, a form without its token,
- * or a password set by someone else not yet changed. */
+ * a password set by someone else not yet changed, or an API token that opens nothing here. */
 public final class AccessRefused extends RuntimeException {
-    public enum Why { LOGIN, FORBIDDEN, FORM_TOKEN, SET_UP, CHANGE_PASSWORD }
+    public enum Why { LOGIN, FORBIDDEN, FORM_TOKEN, SET_UP, CHANGE_PASSWORD, TOKEN }
 
     private final Why why;
 
@@ -16,7 +16,7 @@ public final class AccessRefused extends RuntimeException {
 
     public int status() {
         return switch (why) {
-            case LOGIN -> 401;
+            case LOGIN, TOKEN -> 401;
             case FORBIDDEN, FORM_TOKEN, CHANGE_PASSWORD -> 403;
             case SET_UP -> 503;
         };

@@ -66,6 +66,7 @@ public final class AdminRoutes {
         m.put("roles", Role.values());
         m.put("me", Access.user(ctx));
         m.put("waiting", accounts.logins().waiting());
+        m.put("tokens", accounts.tokens().byUser());
         ctx.render("auth/users", m);
     }
 

@@ -39,11 +39,12 @@ public final class AuditRecorder {
         this.clock = clock;
     }
 
-    /** Records a refusal worth keeping (forbidden by role, or a missing or wrong form token); others pass. */
+    /** Records a refusal worth keeping (forbidden by role, a missing or wrong form token, an API token refused); others pass. */
     public void refused(Context ctx, AccessRefused e) {
         String action = switch (e.why()) {
             case FORBIDDEN -> "access refused";
             case FORM_TOKEN -> "form token refused";
+            case TOKEN -> "API token refused";
             default -> null;
         };
         if (action == null) return;

@@ -30,6 +30,9 @@ public final class Refusals {
             ctx.redirect(Access.CHANGE_PASSWORD_PAGE, HttpStatus.SEE_OTHER);
         } else if (!api(ctx) && e.why() == AccessRefused.Why.SET_UP) {
             ctx.redirect("/setup", HttpStatus.SEE_OTHER);
+        } else if (e.why() == AccessRefused.Why.TOKEN) {
+            ctx.header("WWW-Authenticate", "Bearer realm=\"baysheet\", error=\"invalid_token\""); // RFC 6750 section 3
+            respond(ctx, e.status(), "API token refused", e.getMessage());
         } else {
             respond(ctx, e.status(), e.why() == AccessRefused.Why.LOGIN ? "Log in" : "Not allowed", e.getMessage());
         }

@@ -31,9 +31,9 @@ import static org.assertj.core.api.Assertions.assertThat;
 class RouteRolesTest {
     private static final Set<HandlerType> METHODS = Set.of(HandlerType.GET, HandlerType.POST, HandlerType.PUT,
             HandlerType.PATCH, HandlerType.DELETE);
-    /** The changes that are not a preparer's or the administrator's work: signing in and out, one's own password, a PDF to verify. */
+    /** The changes that are not a preparer's or the administrator's work: signing in and out, one's own password and API tokens, a PDF to verify. */
     private static final Set<String> PERSONAL = Set.of("POST /login", "POST /setup", "POST /logout", "POST /account/password", "POST /account/reset",
-            "POST /verify");
+            "POST /account/tokens", "POST /account/tokens/revoke", "POST /verify");
 
     record Route(String method, String path, Set<RouteRole> roles) {
         @Override
