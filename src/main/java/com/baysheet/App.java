@@ -2,10 +2,14 @@ package com.baysheet;
 
 import com.baysheet.cli.CalcCommand;
 import com.baysheet.framing.Derivation;
+import com.baysheet.sheet.signing.OfficeKey;
+import com.baysheet.sheet.signing.PdfSigner;
 import com.baysheet.store.BackupPort;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
+import com.baysheet.store.Sql;
 import com.baysheet.store.Store;
+import com.baysheet.store.review.FirmStore;
 import com.baysheet.web.Office;
 import com.baysheet.web.ServerOptions;
 import io.javalin.Javalin;
@@ -71,13 +75,14 @@ public final class App {
      * the lines meant for whoever started the server (the set-up code, the demo accounts' passwords).
      */
     static Running start(ServerOptions o, Consumer<String> console) throws IOException {
+        // the key is read before anything is served: a named key that cannot be read stops the start, saying why
         if (o.embedded()) Database.prepareDataDir(o.dataDir());
         Database db = Database.open(o.dbUrl(), o.dbPassword());
         if (o.embedded()) Database.restrictFiles(o.dataDir());
         // one clock for the whole office: the store stamps its rows in UTC from it, sheets are dated in its zone
         Clock clock = Clock.systemDefaultZone();
         Store store = Store.on(db.dataSource(), Derivation::derive, clock);
-        Office office = Office.on(store, db.dataSource(), clock);
+        Office office = Office.on(store, db.dataSource(), clock, new PdfSigner(signingKey(o, db, clock, console)));
         if (o.demo()) {
             int loaded = Demo.loadIfEmpty(store).size();
             LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");
@@ -94,5 +99,19 @@ public final class App {
             console.accept("set-up code: " + office.setupCode().code() + " (asked for once, by the set-up page at /setup, "
                     + "to make the first administrator)");
         return running;
+    }
+
+    /**
+     * The office's signing key: the file named, or the one beside the data directory, made there on the first start
+     * (its certificate naming the firm as set then). Its fingerprint goes to the console, for the office to hand out.
+     */
+    private static OfficeKey signingKey(ServerOptions o, Database db, Clock clock, Consumer<String> console) {
+        char[] password = o.signingKeyPassword().toCharArray();
+        boolean made = !o.signingKeyNamed() && !java.nio.file.Files.exists(o.signingKey());
+        OfficeKey key = o.signingKeyNamed() ? OfficeKey.read(o.signingKey(), password)
+                : OfficeKey.readOrCreate(o.signingKey(), password, new FirmStore(new Sql(db.dataSource(), clock)).get().name(), clock);
+        console.accept("signing issued PDFs with " + o.signingKey() + (made ? " (made now: keep a copy of it apart from the database backups)" : "")
+                + ", certificate " + key.subject() + ", SHA-256 fingerprint " + key.fingerprint());
+        return key;
     }
 }

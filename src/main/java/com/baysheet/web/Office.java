@@ -3,6 +3,7 @@ package com.baysheet.web;
 import com.baysheet.auth.LoginRefused;
 import com.baysheet.auth.SetupCode;
 import com.baysheet.issue.Issuing;
+import com.baysheet.sheet.signing.PdfSigner;
 import com.baysheet.review.ReviewRefused;
 import com.baysheet.store.Sql;
 import com.baysheet.store.Store;
@@ -49,16 +50,19 @@ import java.util.Set;
 public record Office(Store store, Accounts accounts, ReviewStore review, Issuing issuing, SetupCode setupCode, DataSource ds,
                      Clock clock) {
 
-    /** The office over this database: the store's clock for every stamp and date, the given login policy. */
-    public static Office on(Store store, DataSource ds, Clock clock, Logins.Policy policy, SetupCode setupCode) {
+    /**
+     * The office over this database: the store's clock for every stamp and date, the given login policy, and the
+     * office's key signing every issued PDF.
+     */
+    public static Office on(Store store, DataSource ds, Clock clock, Logins.Policy policy, SetupCode setupCode, PdfSigner signer) {
         Sql sql = new Sql(ds, clock);
         ReviewStore review = ReviewStore.on(sql);
-        return new Office(store, Accounts.on(sql, review.audit(), policy), review, new Issuing(review, clock), setupCode, ds, clock);
+        return new Office(store, Accounts.on(sql, review.audit(), policy), review, new Issuing(review, clock, signer), setupCode, ds, clock);
     }
 
     /** The office's production wiring: bcrypt at full strength, working-day sessions, the office throttle. */
-    public static Office on(Store store, DataSource ds, Clock clock) {
-        return on(store, ds, clock, Logins.Policy.office(clock), SetupCode.random());
+    public static Office on(Store store, DataSource ds, Clock clock, PdfSigner signer) {
+        return on(store, ds, clock, Logins.Policy.office(clock), SetupCode.random(), signer);
     }
 
     /**
@@ -138,7 +142,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
     private void routes(RoutesConfig r, AuditRecorder recorder) {
         new Health(ds).install(r);
         new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
-        new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
+        new AdminRoutes(accounts, review, issuing.signingKey(), who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
         new BackupRoutes(ds, review.audit(), clock).install(r);
         new ModelFileRoutes(store).install(r); // before ProjectRoutes: /projects/import is not a project id
         new ProjectRoutes(store).install(r);

@@ -101,7 +101,8 @@ public record OfficeKey(PrivateKey privateKey, X509Certificate certificate) {
         return k;
     }
 
-    static OfficeKey generate(String firm, Instant now) {
+    /** A new key pair and a self-signed certificate naming the firm, valid from a day before {@code now}. */
+    public static OfficeKey generate(String firm, Instant now) {
         try {
             KeyPairGenerator g = KeyPairGenerator.getInstance("RSA");
             g.initialize(BITS, new SecureRandom());
