@@ -75,14 +75,24 @@ public final class App {
      * the lines meant for whoever started the server (the set-up code, the demo accounts' passwords).
      */
     static Running start(ServerOptions o, Consumer<String> console) throws IOException {
-        // the key is read before anything is served: a named key that cannot be read stops the start, saying why
+        // a named key is read first: one that cannot be read stops the start, saying why, before the database is opened
+        OfficeKey named = o.signingKeyNamed() ? OfficeKey.read(o.signingKey(), o.signingKeyPassword().toCharArray()) : null;
         if (o.embedded()) Database.prepareDataDir(o.dataDir());
         Database db = Database.open(o.dbUrl(), o.dbPassword());
         if (o.embedded()) Database.restrictFiles(o.dataDir());
         // one clock for the whole office: the store stamps its rows in UTC from it, sheets are dated in its zone
         Clock clock = Clock.systemDefaultZone();
         Store store = Store.on(db.dataSource(), Derivation::derive, clock);
-        Office office = Office.on(store, db.dataSource(), clock, new PdfSigner(signingKey(o, db, clock, console)));
+        OfficeKey key;
+        try {
+            key = named != null ? named : madeOrRead(o, db, clock, console);
+        } catch (RuntimeException e) {
+            db.close();
+            throw e;
+        }
+        console.accept("signing issued PDFs with " + o.signingKey() + ", certificate " + key.subject()
+                + ", SHA-256 fingerprint " + key.fingerprint());
+        Office office = Office.on(store, db.dataSource(), clock, new PdfSigner(key));
         if (o.demo()) {
             int loaded = Demo.loadIfEmpty(store).size();
             LOG.info(loaded > 0 ? "demo: loaded " + loaded + " projects" : "demo: database has projects already, nothing loaded");
@@ -102,16 +112,14 @@ public final class App {
     }
 
     /**
-     * The office's signing key: the file named, or the one beside the data directory, made there on the first start
-     * (its certificate naming the firm as set then). Its fingerprint goes to the console, for the office to hand out.
+     * The key file beside the data directory, made there on the first start, its certificate naming the firm as set
+     * then; the console says when it was made, for a copy to be kept apart from the database backups.
      */
-    private static OfficeKey signingKey(ServerOptions o, Database db, Clock clock, Consumer<String> console) {
-        char[] password = o.signingKeyPassword().toCharArray();
-        boolean made = !o.signingKeyNamed() && !java.nio.file.Files.exists(o.signingKey());
-        OfficeKey key = o.signingKeyNamed() ? OfficeKey.read(o.signingKey(), password)
-                : OfficeKey.readOrCreate(o.signingKey(), password, new FirmStore(new Sql(db.dataSource(), clock)).get().name(), clock);
-        console.accept("signing issued PDFs with " + o.signingKey() + (made ? " (made now: keep a copy of it apart from the database backups)" : "")
-                + ", certificate " + key.subject() + ", SHA-256 fingerprint " + key.fingerprint());
+    private static OfficeKey madeOrRead(ServerOptions o, Database db, Clock clock, Consumer<String> console) {
+        boolean made = !java.nio.file.Files.exists(o.signingKey());
+        OfficeKey key = OfficeKey.readOrCreate(o.signingKey(), o.signingKeyPassword().toCharArray(),
+                new FirmStore(new Sql(db.dataSource(), clock)).get().name(), clock);
+        if (made) console.accept("signing key made at " + o.signingKey() + ": keep a copy of it apart from the database backups");
         return key;
     }
 }
