@@ -73,6 +73,8 @@ class SignedIssueTest {
         assertThat(Html.text(page, "section#verdict h2")).isEqualTo("Matches an issued revision, signed by this office");
         assertThat(Html.text(page, "#signature")).contains("intact, made with this office's key", TestKeys.key().fingerprint());
         assertThat(Html.text(eng.get("/verify").body(), "#office-fingerprint")).isEqualTo(TestKeys.key().fingerprint());
+        String firm = server.as("admin", Role.ADMINISTRATOR).get("/admin/firm").body();
+        assertThat(Html.text(firm, "#signing-fingerprint")).isEqualTo(TestKeys.key().fingerprint());
     }
 
     @Test
