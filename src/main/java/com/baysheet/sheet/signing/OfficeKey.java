@@ -97,8 +97,8 @@ public record OfficeKey(PrivateKey privateKey, X509Certificate certificate) {
     public static OfficeKey readOrCreate(Path file, char[] password, String firm, Clock clock) {
         if (Files.exists(file)) return read(file, password);
         OfficeKey k = generate(firm, clock.instant());
-        k.write(file, password);
-        return k;
+        // another server starting beside the same folder may have made it meanwhile: then that one is the office's
+        return k.write(file, password) ? k : read(file, password);
     }
 
     /** A new key pair and a self-signed certificate naming the firm, valid from a day before {@code now}. */
@@ -121,8 +121,11 @@ public record OfficeKey(PrivateKey privateKey, X509Certificate certificate) {
         }
     }
 
-    /** Writes the key as PKCS#12, the file created readable and writable by its owner only where the system allows. */
-    void write(Path file, char[] password) {
+    /**
+     * Writes the key as PKCS#12, the file created readable and writable by its owner only where the system allows;
+     * false when a file appeared there meanwhile (it is left as it is).
+     */
+    boolean write(Path file, char[] password) {
         try {
             Path dir = file.toAbsolutePath().getParent();
             if (dir != null) Files.createDirectories(dir);
@@ -134,7 +137,13 @@ public record OfficeKey(PrivateKey privateKey, X509Certificate certificate) {
             try (OutputStream out = Files.newOutputStream(tmp)) {
                 ks.store(out, password);
             }
-            Files.move(tmp, file);
+            try {
+                Files.move(tmp, file);
+                return true;
+            } catch (java.nio.file.FileAlreadyExistsException e) {
+                Files.deleteIfExists(tmp);
+                return false;
+            }
         } catch (IOException | GeneralSecurityException e) {
             throw new Unusable("signing key " + file + " cannot be written: " + e.getMessage());
         }
