@@ -2,10 +2,14 @@ package com.baysheet;
 
 import com.baysheet.cli.CalcCommand;
 import com.baysheet.framing.Derivation;
+import com.baysheet.sheet.signing.OfficeKey;
+import com.baysheet.sheet.signing.PdfSigner;
 import com.baysheet.store.BackupPort;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
+import com.baysheet.store.Sql;
 import com.baysheet.store.Store;
+import com.baysheet.store.review.FirmStore;
 import com.baysheet.web.Office;
 import com.baysheet.web.ServerOptions;
 import io.javalin.Javalin;
@@ -79,13 +83,24 @@ public final class App {
      * the lines meant for whoever started the server (the set-up code, the demo accounts' passwords).
      */
     static Running start(ServerOptions o, Consumer<String> console) throws IOException {
+        // a named key is read first: one that cannot be read stops the start, saying why, before the database is opened
+        OfficeKey named = o.signingKeyNamed() ? OfficeKey.read(o.signingKey(), o.signingKeyPassword().toCharArray()) : null;
         if (o.embedded()) Database.prepareDataDir(o.dataDir());
         Database db = Database.open(o.dbUrl(), o.dbPassword());
         if (o.embedded()) Database.restrictFiles(o.dataDir());
         // one clock for the whole office: the store stamps its rows in UTC from it, sheets are dated in its zone
         Clock clock = Clock.systemDefaultZone();
         Store store = Store.on(db.dataSource(), Derivation::derive, clock);
-        Office office = Office.on(store, db.dataSource(), clock);
+        OfficeKey key;
+        try {
+            key = named != null ? named : madeOrRead(o, db, clock, console);
+        } catch (RuntimeException e) {
+            db.close();
+            throw e;
+        }
+        console.accept("signing issued PDFs with " + o.signingKey() + ", certificate " + key.subject()
+                + ", SHA-256 fingerprint " + key.fingerprint());
+        Office office = Office.on(store, db.dataSource(), clock, new PdfSigner(key));
         // deleted items are kept 30 days: those past it go at start, as whenever the administrator's list is read
         int purged = store.deleted().purge();
         if (purged > 0) Log.LOG.info("deleted items past 30 days purged: " + purged);
@@ -105,5 +120,17 @@ public final class App {
             console.accept("set-up code: " + office.setupCode().code() + " (asked for once, by the set-up page at /setup, "
                     + "to make the first administrator)");
         return running;
+    }
+
+    /**
+     * The key file beside the data directory, made there on the first start, its certificate naming the firm as set
+     * then; the console says when it was made, for a copy to be kept apart from the database backups.
+     */
+    private static OfficeKey madeOrRead(ServerOptions o, Database db, Clock clock, Consumer<String> console) {
+        boolean made = !java.nio.file.Files.exists(o.signingKey());
+        OfficeKey key = OfficeKey.readOrCreate(o.signingKey(), o.signingKeyPassword().toCharArray(),
+                new FirmStore(new Sql(db.dataSource(), clock)).get().name(), clock);
+        if (made) console.accept("signing key made at " + o.signingKey() + ": keep a copy of it apart from the database backups");
+        return key;
     }
 }

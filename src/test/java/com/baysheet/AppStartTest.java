@@ -85,4 +85,46 @@ class AppStartTest {
                             && !l.contains("not shown"));
         }
     }
+
+    @Test
+    void theSigningKeyIsMadeOnceBesideTheDataFolderAndReusedWithItsFingerprintPrinted(@TempDir Path dir) throws Exception {
+        Path data = dir.resolve("data");
+        String[] args = {"--port", "0", "--data", data.toString()};
+        List<String> first = new ArrayList<>(), second = new ArrayList<>();
+        String fingerprint;
+        try (App.Running r = App.start(ServerOptions.parse(args, Map.of()), first::add)) {
+            fingerprint = r.office().issuing().signingKey().fingerprint();
+        }
+        Path key = dir.resolve("baysheet-signing.p12");
+        assertThat(key).isRegularFile();
+        try (var inData = Files.walk(data)) {
+            assertThat(inData.filter(f -> f.toString().endsWith(".p12"))).as("nothing of the key in the data folder").isEmpty();
+        }
+        byte[] made = Files.readAllBytes(key);
+        try (App.Running r = App.start(ServerOptions.parse(args, Map.of()), second::add)) {
+            assertThat(r.office().issuing().signingKey().fingerprint()).isEqualTo(fingerprint);
+        }
+        assertThat(Files.readAllBytes(key)).as("read, not made again").isEqualTo(made);
+        assertThat(first).contains("signing key made at " + key + ": keep a copy of it apart from the database backups");
+        assertThat(first).anySatisfy(l -> assertThat(l).contains("signing issued PDFs with " + key, "SHA-256 fingerprint " + fingerprint));
+        assertThat(second).anySatisfy(l -> assertThat(l).contains("signing issued PDFs with " + key, "SHA-256 fingerprint " + fingerprint))
+                .noneMatch(l -> l.startsWith("signing key made"));
+    }
+
+    @Test
+    void aNamedSigningKeyIsReadWithItsPasswordFromTheEnvironmentAndAMissingOneStopsTheStart(@TempDir Path dir) throws Exception {
+        Path key = dir.resolve("office.p12");
+        String fingerprint = com.baysheet.sheet.signing.OfficeKey.readOrCreate(key, "s3cret".toCharArray(), "Harbor Structural",
+                java.time.Clock.systemUTC()).fingerprint();
+        String[] args = {"--port", "0", "--data", dir.resolve("data").toString(), "--signing-key", key.toString()};
+        try (App.Running r = App.start(ServerOptions.parse(args, Map.of("BAYSHEET_SIGNING_KEY_PASSWORD", "s3cret")), l -> {})) {
+            assertThat(r.office().issuing().signingKey().fingerprint()).isEqualTo(fingerprint);
+        }
+        assertThat(dir.resolve("baysheet-signing.p12")).as("no key made when one is named").doesNotExist();
+        String[] missing = {"--port", "0", "--data", dir.resolve("data").toString(), "--signing-key", dir.resolve("none.p12").toString()};
+        assertThatThrownBy(() -> App.start(ServerOptions.parse(missing, Map.of()), l -> {}))
+                .hasMessageContaining("none.p12").hasMessageContaining("does not exist");
+        assertThatThrownBy(() -> App.start(ServerOptions.parse(args, Map.of("BAYSHEET_SIGNING_KEY_PASSWORD", "wrong")), l -> {}))
+                .hasMessageContaining("wrong password");
+    }
 }

@@ -6,6 +6,9 @@ import com.baysheet.review.ReviewAction;
 import com.baysheet.review.ReviewRefused;
 import com.baysheet.review.SheetRevision;
 import com.baysheet.review.SheetState;
+import com.baysheet.sheet.signing.OfficeKey;
+import com.baysheet.sheet.signing.PdfSigner;
+import com.baysheet.sheet.signing.SignatureCheck;
 import com.baysheet.store.review.ConcurrentChange;
 import com.baysheet.store.review.ReviewStore;
 import com.baysheet.store.review.Reviews;
@@ -22,10 +25,13 @@ import java.time.LocalDate;
 public final class Issuing {
     private final ReviewStore review;
     private final Clock clock;
+    private final PdfSigner signer;
 
-    public Issuing(ReviewStore review, Clock clock) {
+    /** @param signer the office's key, which signs every issued copy before it is stored */
+    public Issuing(ReviewStore review, Clock clock, PdfSigner signer) {
         this.review = review;
         this.clock = clock;
+        this.signer = signer;
     }
 
     /**
@@ -42,8 +48,10 @@ public final class Issuing {
         String said = SheetRevision.description(description);
         LocalDate today = today();
         String head = review.audit().head().printed(); // the trail as it stands at the issue, printed on the copy
-        byte[] pdf = s instanceof SheetSubject.OfMark m ? SheetPdfs.issued(review.firm().get(), m, cur, v.history(), today, said, head).bytes()
+        byte[] rendered = s instanceof SheetSubject.OfMark m ? SheetPdfs.issued(review.firm().get(), m, cur, v.history(), today, said, head).bytes()
                 : PackagePdfs.issued(review.firm().get(), site, (SheetSubject.OfPackage) s, v, reviews().latestOf(s.ref().projectId()), today, said, head);
+        // signed before it is stored: the SHA-256 the store keeps, and /verify compares, is of the signed file
+        byte[] pdf = signer.sign(rendered, clock.instant(), "Issued: " + s.name() + ", revision " + cur.label());
         reviews().issue(s.ref(), version, caller, today, s.current(), pdf, said);
     }
 
@@ -52,6 +60,12 @@ public final class Issuing {
         Reviews.SheetView v = reviews().view(s.ref());
         return SheetPdfs.checking(review.firm().get(), s, v.current(), v.history(), v.markups(), today()).bytes();
     }
+
+    /** The key that signs issued copies. */
+    public OfficeKey signingKey() { return signer.key(); }
+
+    /** Whether a PDF's signature is intact over the whole file, and whether it is this office's key that made it. */
+    public SignatureCheck checkSignature(byte[] pdf) { return SignatureCheck.of(pdf, signer.key().certificate()); }
 
     public LocalDate today() { return LocalDate.now(clock); }
 

@@ -15,6 +15,9 @@ final class ClosingBlock {
             + "for its use. It records gravity dead and live loads, live load reductions, member actions and load "
             + "combinations from the inputs shown; member sizing, strength and serviceability are outside it. "
             + "The adopted local building code and its amendments govern over the edition cited here.";
+    /** Printed on issued copies, which are signed as they are issued. */
+    static final String SIGNED = "This file is digitally signed by the office: the signature attests that the file is as "
+            + "issued, not the engineer's seal.";
     static final float STAMP = 144;   // 2 in square: room for a seal with signature and date
 
     private final Fonts fonts;
@@ -40,8 +43,10 @@ final class ClosingBlock {
         t.setSpacingBefore(8);
         t.setKeepTogether(true);
         Phrase words = new Phrase(DISCLAIMER, fonts.body());
-        if (!checking && !auditHead.isEmpty())
-            words.add(new Chunk("\n\nAudit trail at issue: " + auditHead, fonts.smallGrey()));
+        if (!checking && !auditHead.isEmpty()) {
+            words.add(new Chunk("\n\n" + SIGNED, fonts.smallGrey()));
+            words.add(new Chunk("\nAudit trail at issue: " + auditHead, fonts.smallGrey()));
+        }
         if (checking) words.add(new Chunk("\n\n" + wording.closing, fonts.mark()));
         PdfPCell left = new PdfPCell();
         if (lead != null) left.addElement(lead);

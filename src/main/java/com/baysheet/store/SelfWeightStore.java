@@ -19,7 +19,7 @@ import org.jdbi.v3.core.Handle;
 /**
  * The self weights a project's members carry: the project's own where it states them (every sheet says "project
  * value"), else the firm's defaults by role (V109; "firm default"), converted exactly for an SI project; and a single
- * member's own weight where the engineer entered one (V122; "entered for this member").
+ * member's own weight where the engineer entered one (V121; "entered for this member").
  */
 public final class SelfWeightStore {
     private final ModelWrites writes;

@@ -5,6 +5,7 @@ import com.baysheet.auth.SetupCode;
 import com.baysheet.issue.Issuing;
 import com.baysheet.issue.PackageJobs;
 import com.baysheet.issue.PackageWorker;
+import com.baysheet.sheet.signing.PdfSigner;
 import com.baysheet.review.ReviewRefused;
 import com.baysheet.store.PackageJobStore;
 import com.baysheet.store.Sql;
@@ -54,17 +55,21 @@ import java.util.Set;
 public record Office(Store store, Accounts accounts, ReviewStore review, Issuing issuing, PackageJobs packages, SetupCode setupCode,
                      DataSource ds, Clock clock) {
 
-    /** The office over this database: the store's clock for every stamp and date, the given login policy. */
-    public static Office on(Store store, DataSource ds, Clock clock, Logins.Policy policy, SetupCode setupCode) {
+    /**
+     * The office over this database: the store's clock for every stamp and date, the given login policy, and the
+     * office's key signing every issued PDF.
+     */
+    public static Office on(Store store, DataSource ds, Clock clock, Logins.Policy policy, SetupCode setupCode, PdfSigner signer) {
         Sql sql = new Sql(ds, clock);
         ReviewStore review = ReviewStore.on(sql);
         PackageJobs packages = new PackageJobs(store, review, new PackageJobStore(sql), clock);
-        return new Office(store, Accounts.on(sql, review.audit(), policy), review, new Issuing(review, clock), packages, setupCode, ds, clock);
+        return new Office(store, Accounts.on(sql, review.audit(), policy), review, new Issuing(review, clock, signer), packages,
+                setupCode, ds, clock);
     }
 
     /** The office's production wiring: bcrypt at full strength, working-day sessions, the office throttle. */
-    public static Office on(Store store, DataSource ds, Clock clock) {
-        return on(store, ds, clock, Logins.Policy.office(clock), SetupCode.random());
+    public static Office on(Store store, DataSource ds, Clock clock, PdfSigner signer) {
+        return on(store, ds, clock, Logins.Policy.office(clock), SetupCode.random(), signer);
     }
 
     /**
@@ -155,7 +160,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
     private void routes(RoutesConfig r, AuditRecorder recorder, PageCache pages) {
         new Health(ds).install(r);
         new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
-        new AdminRoutes(accounts, review, who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
+        new AdminRoutes(accounts, review, issuing.signingKey(), who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
         new TokenRoutes(accounts.tokens()).install(r);
         new BackupRoutes(ds, review.audit(), clock).install(r);
         new ModelFileRoutes(store).install(r); // before ProjectRoutes: /projects/import is not a project id

@@ -54,7 +54,7 @@ final class RouteTable {
         try (Database db = Database.open("jdbc:h2:mem:routes" + UUID.randomUUID().toString().replace("-", "")
                 + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1")) {
             Store store = Store.on(db.dataSource(), Derivation::derive, java.time.Clock.systemUTC());
-            Javalin app = Office.on(store, db.dataSource(), java.time.Clock.systemUTC()).server(null, false);
+            Javalin app = Office.on(store, db.dataSource(), java.time.Clock.systemUTC(), com.baysheet.TestKeys.signer()).server(null, false);
             return app.unsafe.internalRouter.allHttpHandlers().stream().map(p -> p.endpoint)
                     .filter(e -> METHODS.contains(e.method)).map(RouteTable::route).distinct()
                     .sorted(Comparator.comparing(Route::path).thenComparing(Route::method)).toList();

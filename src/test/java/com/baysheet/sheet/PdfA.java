@@ -12,14 +12,14 @@ import java.io.ByteArrayInputStream;
 import java.util.List;
 
 /** veraPDF's PDF/A-1b verdict on a PDF: the failed rules, empty when it complies. */
-final class PdfA {
+public final class PdfA {
     private PdfA() {}
 
     static {
         VeraGreenfieldFoundryProvider.initialise();
     }
 
-    static List<String> failures(byte[] pdf) {
+    public static List<String> failures(byte[] pdf) {
         PDFAFlavour flavour = PDFAFlavour.fromString("1b");
         try (PDFAParser parser = Foundries.defaultInstance().createParser(new ByteArrayInputStream(pdf), flavour);
              PDFAValidator validator = Foundries.defaultInstance().createValidator(flavour, false)) {

@@ -52,4 +52,26 @@ class ServerOptionsTest {
         assertThat(ServerOptions.parse(new String[]{"--behind-tls"}, Map.of()).behindTls()).isTrue();
         assertThat(ServerOptions.parse(NONE, Map.of("BAYSHEET_BEHIND_TLS", "true")).behindTls()).isTrue();
     }
+
+    @Test
+    void theSigningKeyLiesBesideTheDataFolderUnlessNamedAndItsPasswordIsNeverPrinted(@TempDir Path dir) throws Exception {
+        ServerOptions d = ServerOptions.parse(new String[]{"--data", dir.resolve("data").toString()}, Map.of());
+        assertThat(d.signingKey()).isEqualTo(dir.resolve("baysheet-signing.p12").toAbsolutePath());
+        assertThat(d.signingKeyNamed()).isFalse();
+        assertThat(d.signingKeyPassword()).isEmpty();
+        Path pw = dir.resolve("key-password");
+        Files.writeString(pw, "k3y pass\n");
+        ServerOptions named = ServerOptions.parse(new String[]{"--signing-key", dir.resolve("office.p12").toString(),
+                "--signing-key-password-file", pw.toString()}, Map.of());
+        assertThat(named.signingKey()).isEqualTo(dir.resolve("office.p12").toAbsolutePath());
+        assertThat(named.signingKeyNamed()).isTrue();
+        assertThat(named.signingKeyPassword()).isEqualTo("k3y pass");
+        assertThat(named.toString()).doesNotContain("k3y pass").contains("signingKeyPassword=(hidden)");
+        ServerOptions fromEnv = ServerOptions.parse(NONE, Map.of("BAYSHEET_SIGNING_KEY", dir.resolve("e.p12").toString(),
+                "BAYSHEET_SIGNING_KEY_PASSWORD", "from env"));
+        assertThat(fromEnv.signingKeyNamed()).isTrue();
+        assertThat(fromEnv.signingKeyPassword()).isEqualTo("from env");
+        assertThatThrownBy(() -> ServerOptions.parse(new String[]{"--signing-key-password-file", dir.resolve("missing").toString()}, Map.of()))
+                .isInstanceOf(ServerOptions.BadOption.class).hasMessageContaining("--signing-key-password-file");
+    }
 }

@@ -45,7 +45,7 @@ public final class TestLogin {
     /** The whole office over this database (the same wiring as the server's), with bcrypt at its cheapest and the given clock. */
     public static Office office(Store store, Database db, Clock clock) {
         Logins.Policy policy = new Logins.Policy(new Passwords(4), SessionPolicy.OFFICE, LoginThrottle.OFFICE, clock);
-        return Office.on(store, db.dataSource(), clock, policy, new SetupCode(() -> SETUP_CODE));
+        return Office.on(store, db.dataSource(), clock, policy, new SetupCode(() -> SETUP_CODE), com.baysheet.TestKeys.signer());
     }
 
     /** A user of this role (set-up done first if nobody exists), logged in: a client with their session. */

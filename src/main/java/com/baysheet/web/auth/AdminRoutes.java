@@ -1,5 +1,7 @@
 package com.baysheet.web.auth;
 
+import com.baysheet.sheet.signing.OfficeKey;
+
 import com.baysheet.auth.NewUser;
 import com.baysheet.auth.Role;
 import com.baysheet.auth.User;
@@ -37,9 +39,12 @@ public final class AdminRoutes {
     private final Accounts accounts;
     private final ReviewStore review;
     private final Consumer<Editor> firmChanged;
+    private final OfficeKey signingKey;
 
     /** @param firmChanged run after the firm's settings are saved (names, in every project's audit entry, the issued sheets they changed) */
-    public AdminRoutes(Accounts accounts, ReviewStore review, Consumer<Editor> firmChanged) {
+    /** @param signingKey the key that signs issued PDFs, whose certificate's fingerprint the firm page shows */
+    public AdminRoutes(Accounts accounts, ReviewStore review, OfficeKey signingKey, Consumer<Editor> firmChanged) {
+        this.signingKey = signingKey;
         this.firmChanged = firmChanged;
         this.accounts = accounts;
         this.review = review;
@@ -115,7 +120,8 @@ public final class AdminRoutes {
                 "defaultEdition", firm.defaultEdition(), "version", String.valueOf(firm.version()),
                 "infillBeamWeight", plain(firm.infillBeamWeight()), "gridBeamWeight", plain(firm.gridBeamWeight()),
                 "girderWeight", plain(firm.girderWeight()), "columnWeight", plain(firm.columnWeight())));
-        ctx.render("auth/firm", Map.of("form", shown, "editions", Editions.builtIn().ids()));
+        ctx.render("auth/firm", Map.of("form", shown, "editions", Editions.builtIn().ids(),
+                "signingFingerprint", signingKey.fingerprint(), "signingSubject", signingKey.subject()));
     }
 
     void updateFirm(Context ctx) {

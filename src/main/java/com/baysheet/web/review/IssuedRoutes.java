@@ -49,7 +49,8 @@ public final class IssuedRoutes {
         r.get("/review/revisions/{revision}/issued.pdf", this::issuedPdf, Admit.OFFICE);
         r.get(MARK + "/checking.pdf", this::checkingPdf, Admit.OFFICE);
         for (String base : SHEETS) r.get(base + "/compare", this::compare, Admit.OFFICE);
-        r.get("/verify", ctx -> ctx.render("review/verify", new HashMap<>()), Admit.OFFICE);
+        r.get("/verify", ctx -> ctx.render("review/verify", new HashMap<>(Map.of("fingerprint", issuing.signingKey().fingerprint()))),
+                Admit.OFFICE);
         r.post("/verify", this::verify, Admit.OFFICE);
     }
 
@@ -83,7 +84,10 @@ public final class IssuedRoutes {
         ctx.render("review/compare", m);
     }
 
-    /** The verdict on an upload: which issued revisions it is, byte for byte, or that it is not a PDF at all. */
+    /**
+     * The verdict on an upload: which issued revisions it is, byte for byte, whether its signature is intact and the
+     * office's, or that it is not a PDF at all.
+     */
     void verify(Context ctx) {
         UploadedFile f = ctx.uploadedFile("pdf");
         if (f == null || f.size() == 0) throw new InputError("pdf", "nothing", "choose the PDF file to verify");
@@ -98,8 +102,11 @@ public final class IssuedRoutes {
             return;
         }
         String sha = Tokens.sha256(bytes);
+        List<IssuedMatch> matches = review.reviews().withPdf(sha).stream().map(r -> IssuedMatch.of(store, r)).toList();
         m.put("sha256", sha);
-        m.put("matches", review.reviews().withPdf(sha).stream().map(r -> IssuedMatch.of(store, r)).toList());
+        m.put("matches", matches);
+        m.put("verdict", Verdict.of(matches, issuing.checkSignature(bytes)));
+        m.put("fingerprint", issuing.signingKey().fingerprint());
         ctx.render("review/verify", m);
     }
 

@@ -47,7 +47,7 @@ class RouteRolesTest {
         try (Database db = Database.open("jdbc:h2:mem:roles" + UUID.randomUUID().toString().replace("-", "")
                 + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1")) {
             Store store = Store.on(db.dataSource(), Derivation::derive, Clock.systemUTC());
-            routes = routesOf(Office.on(store, db.dataSource(), Clock.systemUTC()).server(null, false));
+            routes = routesOf(Office.on(store, db.dataSource(), Clock.systemUTC(), com.baysheet.TestKeys.signer()).server(null, false));
         }
     }
 

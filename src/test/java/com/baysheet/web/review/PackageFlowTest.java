@@ -107,6 +107,10 @@ class PackageFlowTest {
             assertThat(text).contains(scope.title(), server.mark().text(), "Index of sheets", "Revision log", "First issue",
                     chk.user.initials()).doesNotContain("CHECK PRINT", "CHECKING COPY");
         }
+        // the issued package is signed with the office's key over the whole file, and still PDF/A
+        assertThat(com.baysheet.sheet.signing.SignatureCheck.of(pdf.body(), com.baysheet.TestKeys.key().certificate()).status())
+                .isEqualTo(com.baysheet.sheet.signing.SignatureCheck.Status.OFFICE);
+        assertThat(com.baysheet.sheet.PdfA.failures(pdf.body())).isEmpty();
         String verdict = eng.upload("/verify", "pdf", "package.pdf", pdf.body()).body();
         assertThat(Html.shown(verdict)).contains("Matches an issued revision", sha);
         assertThat(Html.all(verdict, "a").eachAttr("href")).contains(pkg);

@@ -1,0 +1,34 @@
+package com.baysheet.web.review;
+
+import com.baysheet.sheet.signing.SignatureCheck;
+
+import java.util.List;
+
+/**
+ * What /verify concludes from the two checks of an upload: whether its SHA-256 is that of an issued revision stored
+ * here, and whether its signature is intact and this office's. Only both together say the file is as issued: a
+ * stored hash alone could have been written into the database with the file, and a signature alone says the office
+ * signed it, not that the revision is on record.
+ *
+ * @param verified both checks pass
+ */
+public record Verdict(String headline, boolean verified, SignatureCheck signature) {
+    static Verdict of(List<IssuedMatch> matches, SignatureCheck sig) {
+        boolean stored = !matches.isEmpty(), ours = sig.status() == SignatureCheck.Status.OFFICE;
+        String headline = stored && ours ? "Matches an issued revision, signed by this office"
+                : stored ? "Not verified: the file matches a stored revision, but its signature is not this office's"
+                : ours ? "Signed by this office, but no issued revision here is this file"
+                : "No match";
+        return new Verdict(headline, stored && ours, sig);
+    }
+
+    /** The signature's state in a few words. */
+    public String signatureState() {
+        return switch (signature.status()) {
+            case OFFICE -> "intact, made with this office's key";
+            case OTHER_KEY -> "intact, but made with a key that is not this office's";
+            case BROKEN -> "broken: " + signature.why();
+            case UNSIGNED -> "none: " + signature.why();
+        };
+    }
+}
