@@ -36,7 +36,7 @@ final class TransferOffice {
         Clock clock = Clock.systemUTC();
         this.store = Store.on(db.dataSource(), Derivation::derive, clock);
         this.review = ReviewStore.on(new Sql(db.dataSource(), clock));
-        this.issuing = new Issuing(review, clock);
+        this.issuing = new Issuing(review, clock, com.baysheet.TestKeys.signer());
         this.engineer = Caller.of(engineer, "127.0.0.1");
         this.checker = Caller.of(checker, "127.0.0.1");
     }
