@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.TimeUnit;
 
 /**
@@ -43,13 +44,26 @@ final class ChildServer implements AutoCloseable {
 
     /** Starts the server on this data directory and waits until its health check answers. */
     static ChildServer start(Path dataDir, boolean demo) throws IOException, InterruptedException {
+        return start(dataDir, demo, List.of(), List.of(), Map.of());
+    }
+
+    /**
+     * The same with JVM options ({@code -Dname=value}) before {@code -jar}, server options after the usual ones
+     * (such as {@code --db-url}), and environment variables added to this process's (such as the database password).
+     */
+    static ChildServer start(Path dataDir, boolean demo, List<String> jvmOptions, List<String> options, Map<String, String> env)
+            throws IOException, InterruptedException {
         int port = freePort();
         Path log = dataDir.resolveSibling(dataDir.getFileName() + "-server-" + System.nanoTime() + ".log");
-        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-Xmx512m", "-jar", jar().toString(),
+        List<String> cmd = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-Xmx512m"));
+        cmd.addAll(jvmOptions);
+        cmd.addAll(List.of("-jar", jar().toString(),
                 "--port", String.valueOf(port), "--bind", "127.0.0.1", "--data", dataDir.toString()));
+        cmd.addAll(options);
         if (demo) cmd.add("--demo");
-        Process p = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile()).start();
+        ProcessBuilder b = new ProcessBuilder(cmd).redirectErrorStream(true).redirectOutput(log.toFile());
+        b.environment().putAll(env);
+        Process p = b.start();
         ChildServer s = new ChildServer(p, port, log);
         s.awaitHealthy();
         return s;
