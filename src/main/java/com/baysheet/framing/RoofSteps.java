@@ -65,18 +65,9 @@ final class RoofSteps {
         if (!low.roof() || ctx.snow() == null || !plan.belowAnother) return NONE;
         Grid g = plan.grid;
         int nx = plan.xCells(), ny = plan.yCells();
-        double[][] top = new double[nx][ny];
-        for (double[] row : top) java.util.Arrays.fill(row, Double.NaN);
-        for (Level l : all) {
-            if (l.elevation() <= low.elevation()) continue;
-            LevelPlan p = new LevelPlan("", l, g);
-            for (int c = 0; c < nx; c++)
-                for (int r = 0; r < ny; r++)
-                    if (p.floored(c, r) != null && !(top[c][r] >= l.elevation())) top[c][r] = l.elevation();
-        }
+        double[][] top = SkyExposure.cover(plan, all);
         SnowRoof roof = low.surface().roof(low.roofSlope());
-        boolean[][] exposed = new boolean[nx][ny];
-        for (int c = 0; c < nx; c++) for (int r = 0; r < ny; r++) exposed[c][r] = plan.floored(c, r) != null && Double.isNaN(top[c][r]);
+        boolean[][] exposed = SkyExposure.exposed(plan, top);
         List<WallEnds.Placed> out = new ArrayList<>();
         int[][] sides = {{0, 1}, {0, -1}, {1, 0}, {-1, 0}};
         for (int c = 0; c < nx; c++)
