@@ -48,7 +48,7 @@ final class ColumnTakeDown {
         double slope = Double.NaN, floorArea = 0;
         ColumnClass cls = null;
         boolean cant = false;
-        List<String> open = new ArrayList<>();   // floor bays open to the sky carried so far, each with its level
+        List<String> open = new ArrayList<>();   // the floor levels' open bays carried so far, as the records name them
         for (int k = 0; k < plans.size(); k++) {
             LevelPlan p = plans.get(k);
             var shares = framings.get(k).atPoint[i][j];
@@ -63,7 +63,7 @@ final class ColumnTakeDown {
             total.add(here);
             MemberKind kind = cls.kind(cant);
             if (floorHere > 0) supported.add(new SupportedFloor(p.level.name(), kind, floorShares(here)));
-            if (shares != null) for (String bay : framings.get(k).openAmong(bays(p, i, j))) open.add(bay + " on " + p.level.name());
+            if (shares != null) open.addAll(framings.get(k).openAmong(bays(p, i, j)));
             String name = "Column " + point + " below " + p.level.name();
             double height = storeyBelow(k), own = weights.column() * height;
             MemberInput in = new MemberInput(name + " (" + cls.label() + ")", kind, new Support.Axial(), Math.max(1, floors), List.of(),

@@ -37,17 +37,17 @@ final class LevelFraming {
     private final List<GridLineLoad> lineLoads;
     private final RoofSteps steps;
     private final List<GridPointLoad> pointLoads;
-    /** A floor level's bays that no higher level covers (see {@link SkyExposure#openFloorBays}); empty for a roof. */
-    private final java.util.Set<String> open;
+    /** A floor level's bays that no higher level covers (see {@link SkyExposure#openFloorBays}); none for a roof. */
+    private final SkyExposure.Open open;
 
     @SuppressWarnings("unchecked")
     LevelFraming(MemberCache cache, LevelPlan plan) {
-        this(cache, plan, SelfWeights.NONE, List.of(), RoofSteps.NONE, List.of(), List.of());
+        this(cache, plan, SelfWeights.NONE, List.of(), RoofSteps.NONE, List.of(), SkyExposure.Open.NONE);
     }
 
     LevelFraming(MemberCache cache, LevelPlan plan, SelfWeights weights, List<GridLineLoad> lineLoads, RoofSteps steps,
-                 List<GridPointLoad> pointLoads, List<String> openBays) {
-        this.open = java.util.Set.copyOf(openBays);
+                 List<GridPointLoad> pointLoads, SkyExposure.Open open) {
+        this.open = open;
         this.steps = steps;
         this.pointLoads = pointLoads;
         this.cache = cache;
@@ -166,10 +166,8 @@ final class LevelFraming {
         return cache.calculate(in.withSnow(snow(line, List.of(trib))).withOpenToSky(openAmong(List.of(bay))));
     }
 
-    /** Those of a member's tributary bays that are open to the sky on this floor level, in the member's order. */
-    List<String> openAmong(List<String> bays) {
-        return open.isEmpty() ? List.of() : bays.stream().filter(open::contains).toList();
-    }
+    /** This floor level's open bays as the records name them, where any of a member's tributary bays is one. */
+    List<String> openAmong(List<String> bays) { return open.among(bays); }
 
     /**
      * A roof level's snow on a member's strips (the snow site itself is the project's, in the context), with the

@@ -26,9 +26,9 @@ import java.util.List;
  * @param lineLoads       beams only: uniform line loads along part of the span (cladding, walls), not areas
  * @param snow            the roof whose snow load the member's strips carry (with the project's snow site of the
  *                        context), or null: no snow on the strips (snow in point loads is carried either way)
- * @param openToSky       beams and girders of a floor level (not a roof), and the columns below it: the names of the
- *                        member's tributary bays that no higher level covers, open to the sky yet carrying no roof
- *                        live load and no snow (the record cautions); empty where none
+ * @param openToSky       where the member (a beam or girder of a floor level, not a roof, or a column below one) carries
+ *                        floor bays that no higher level covers, open to the sky yet with no roof live load and no
+ *                        snow: each level's open bays as the record names them ("every bay of F2"); empty where none
  */
 public record MemberInput(String subject, MemberKind kind, Support support, int floorsSupported,
                           List<AreaStrip> strips, List<AreaLoad> areas, List<PointLoad> pointLoads,
@@ -165,7 +165,7 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
                 onRoof, floors, selfWeightSource, columnHeight, lineLoads, s, openToSky);
     }
 
-    /** The member's tributary bays of a floor level that nothing covers (see {@code openToSky}). */
+    /** The floor bays open to the sky this member carries, as the record names them (see {@code openToSky}). */
     public MemberInput withOpenToSky(List<String> bays) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness,
                 onRoof, floors, selfWeightSource, columnHeight, lineLoads, snow, bays);

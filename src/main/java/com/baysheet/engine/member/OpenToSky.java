@@ -22,20 +22,19 @@ public final class OpenToSky {
     }
 
     /**
-     * @param bays   the bays open to the sky: on a beam or girder, of its own level ("A-B/1-2"); on a column, of every
-     *               level it carries, each with its level ("A-B/1-2 on Level 3")
+     * @param where  the floor levels' bays open to the sky that the member carries, each as the framing names them
+     *               ("every bay of F2", "bays A-B/1-2, B-C/1-2 of F1"): the level's, not the member's own, so that
+     *               identical members keep identical records
      * @param column the record is a column's or a column take-down's
      */
-    public static void caution(CalcContext ctx, List<String> bays, boolean column, RecordBuilder rec) {
-        int n = bays.size();
-        if (n == 0) return;
+    public static void caution(CalcContext ctx, List<String> where, boolean column, RecordBuilder rec) {
+        if (where.isEmpty()) return;
         Edition ed = ctx.edition();
         boolean snow = ctx.snow() != null;
         String loads = snow ? "no roof live load and no snow" : "no roof live load";
-        String which = (n == 1 ? "bay " : "bays ") + String.join(", ", bays) + (column ? " that this column carries" : " of this floor level");
-        rec.caution("Open to the sky: " + which + (n == 1 ? " has" : " have") + " no higher level over " + (n == 1 ? "it" : "them")
-                + ", but a floor level carries its floor occupancy only: " + loads + " is applied there. Where a bay is open to"
-                + " the sky, model it as a roof level (the roof rows of " + ed.clause("loads.table").label()
+        rec.caution("Open to the sky: this " + (column ? "column" : "member") + " carries floor bays that no higher level covers ("
+                + String.join("; ", where) + "). A floor level carries its floor occupancy only: " + loads + " is applied there."
+                + " Where a bay is open to the sky, model it as a roof level (the roof rows of " + ed.clause("loads.table").label()
                 + (snow ? ", and the roof's snow" : "") + ") or, where people use it (a terrace, a roof garden), as an occupiable"
                 + " roof (" + ed.clause("roof.occupiable").label() + ").", ed.clause("roof.occupiable"));
     }
