@@ -53,10 +53,10 @@ final class SnowJson {
             int k = 0;
             for (var n : s.array("drift")) {
                 String p = "snow.drift[" + k++ + "]";
-                JsonFields d = JsonFields.strict(n, p, Set.of("parallel", "from", "to", "width", "nearFrom", "nearTo"));
+                JsonFields d = JsonFields.strict(n, p, Set.of("parallel", "from", "to", "width", "nearFrom", "nearTo", "cutOff"));
                 boolean parallel = d.flag("parallel", false);
                 strips.add(JsonFields.at(p, () -> new DriftStrip(parallel, d.number("from"), d.number("to"), d.number("width"),
-                        d.number("nearFrom"), parallel ? d.number("nearFrom") : d.number("nearTo"))));
+                        d.number("nearFrom"), parallel ? d.number("nearFrom") : d.number("nearTo"), d.number("cutOff", 0))));
             }
             drifts.add(new StepDrift(step, "roof step given in the input", strips));
         } else if (s.has("drift")) {

@@ -48,6 +48,7 @@ final class ColumnTakeDown {
         double slope = Double.NaN, floorArea = 0;
         ColumnClass cls = null;
         boolean cant = false;
+        List<String> open = new ArrayList<>();   // the floor levels' open bays carried so far, as the records name them
         for (int k = 0; k < plans.size(); k++) {
             LevelPlan p = plans.get(k);
             var shares = framings.get(k).atPoint[i][j];
@@ -62,12 +63,13 @@ final class ColumnTakeDown {
             total.add(here);
             MemberKind kind = cls.kind(cant);
             if (floorHere > 0) supported.add(new SupportedFloor(p.level.name(), kind, floorShares(here)));
+            if (shares != null) open.addAll(framings.get(k).openAmong(bays(p, i, j)));
             String name = "Column " + point + " below " + p.level.name();
             String id = p.id + "-c" + p.at(i, j);
             double perLength = weights.of(id, weights.column()), height = storeyBelow(k), own = perLength * height;
             MemberInput in = new MemberInput(name + " (" + cls.label() + ")", kind, new Support.Axial(), Math.max(1, floors), List.of(),
                     List.of(), List.of(total.asPointLoad()), 0, slope, Double.NaN, false, supported)
-                    .withSelfWeight(perLength, weights.originOf(id, "columns"), height);
+                    .withSelfWeight(perLength, weights.originOf(id, "columns"), height).withOpenToSky(List.copyOf(open));
             MemberResult res = cache.calculate(in);
             total.dead += own; // the column below this level weighs on every level beneath it
             here.dead += own;
@@ -78,8 +80,9 @@ final class ColumnTakeDown {
         }
         if (rows.isEmpty()) return null;
         CalcContext c = ctx; // the writer keeps only what it needs, not this take-down's working state
+        List<String> openAll = List.copyOf(open);
         return new TakeDown("c" + plans.get(0).at(i, j), point, rows,
-                () -> TakeDownRecord.write(c, point, rows, records));
+                () -> TakeDownRecord.write(c, point, rows, records, openAll));
     }
 
     /**

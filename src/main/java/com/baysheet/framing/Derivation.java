@@ -41,7 +41,8 @@ public final class Derivation {
             LevelFraming f = new LevelFraming(cache, plan, b.selfWeights(),
                     b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList(),
                     RoofSteps.of(b.context(), plan, b.levels()),
-                    b.pointLoads().stream().filter(x -> x.level().equals(l.name())).toList()).derive();
+                    b.pointLoads().stream().filter(x -> x.level().equals(l.name())).toList(),
+                    SkyExposure.openFloorBays(plan, b.levels())).derive();
             plans.add(plan);
             framings.add(f);
             members.addAll(f.members);

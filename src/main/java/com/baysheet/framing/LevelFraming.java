@@ -37,14 +37,17 @@ final class LevelFraming {
     private final List<GridLineLoad> lineLoads;
     private final RoofSteps steps;
     private final List<GridPointLoad> pointLoads;
+    /** A floor level's bays that no higher level covers (see {@link SkyExposure#openFloorBays}); none for a roof. */
+    private final SkyExposure.Open open;
 
     @SuppressWarnings("unchecked")
     LevelFraming(MemberCache cache, LevelPlan plan) {
-        this(cache, plan, SelfWeights.NONE, List.of(), RoofSteps.NONE, List.of());
+        this(cache, plan, SelfWeights.NONE, List.of(), RoofSteps.NONE, List.of(), SkyExposure.Open.NONE);
     }
 
     LevelFraming(MemberCache cache, LevelPlan plan, SelfWeights weights, List<GridLineLoad> lineLoads, RoofSteps steps,
-                 List<GridPointLoad> pointLoads) {
+                 List<GridPointLoad> pointLoads, SkyExposure.Open open) {
+        this.open = open;
         this.steps = steps;
         this.pointLoads = pointLoads;
         this.cache = cache;
@@ -98,7 +101,7 @@ final class LevelFraming {
             String id = plan.id + "-bay" + plan.at(c, r) + "-b" + k;
             String title = "Beam " + name + " #" + k;
             MemberResult res = calc(id, title, MemberKind.INTERIOR_BEAM, beamLength, List.of(new AreaStrip(b.occupancy(), s, 0, beamLength, b.deadLoad())),
-                    line, trib, points.getOrDefault(k, List.of()));
+                    line, trib, points.getOrDefault(k, List.of()), name);
             members.add(new DerivedMember(id, title, plan.level.name(), MemberRole.INFILL_BEAM, MemberKind.INTERIOR_BEAM, line,
                     beamLength, s, Map.of(b.occupancy(), s * beamLength), s * beamLength, List.of(name), List.of(trib), res));
             PlanRect startHalf = beamsAlongX ? new PlanRect(x0, y0 + t - s / 2, (x0 + x1) / 2, y0 + t + s / 2) : new PlanRect(x0 + t - s / 2, y0, x0 + t + s / 2, (y0 + y1) / 2);
@@ -144,7 +147,7 @@ final class LevelFraming {
                 .withLineLoads(s.lineLoads);
         PlanLine pl = s.alongX ? new PlanLine(plan.x(i), plan.y(j), plan.x(i + 1), plan.y(j))
                 : new PlanLine(plan.x(i), plan.y(j), plan.x(i), plan.y(j + 1));
-        MemberResult res = cache.calculate(in.withSnow(snow(pl, s.stripRects)));
+        MemberResult res = cache.calculate(in.withSnow(snow(pl, s.stripRects)).withOpenToSky(openAmong(s.bays)));
         Map<String, Double> areas = new java.util.LinkedHashMap<>();
         for (AreaStrip st : s.strips) areas.merge(st.occupancy(), st.area(), Double::sum);
         for (var p : s.points) for (var a : p.areas()) areas.merge(a.occupancy(), a.area(), Double::sum);
@@ -157,12 +160,15 @@ final class LevelFraming {
     }
 
     private MemberResult calc(String id, String title, MemberKind kind, double span, List<AreaStrip> strips, PlanLine line, PlanRect trib,
-                              List<PointLoad> applied) {
+                              List<PointLoad> applied, String bay) {
         MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(span), 1, strips, List.of(),
                 applied, 0, roofSlope(), Double.NaN, plan.level.roof())
                 .withSelfWeight(weights.of(id, weights.infillBeam()), weights.originOf(id, "infill beams"), 0);
-        return cache.calculate(in.withSnow(snow(line, List.of(trib))));
+        return cache.calculate(in.withSnow(snow(line, List.of(trib))).withOpenToSky(openAmong(List.of(bay))));
     }
+
+    /** This floor level's open bays as the records name them, where any of a member's tributary bays is one. */
+    List<String> openAmong(List<String> bays) { return open.among(bays); }
 
     /**
      * A roof level's snow on a member's strips (the snow site itself is the project's, in the context), with the

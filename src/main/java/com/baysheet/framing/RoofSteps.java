@@ -46,10 +46,12 @@ final class RoofSteps {
 
     /**
      * A rectangle of the lower roof the wall's drift profile loads: along the wall's line from {@code from} to
-     * {@code to}, across from the wall's line to {@code depth} into the lower roof; {@code pastEnd} where it lies
-     * beyond an end of the wall.
+     * {@code to}, across from the wall's line to {@code depth} into the lower roof (the drift's extent there: w, or the
+     * lower roof's {@code edge} where nearer); {@code edge} is the run of the lower roof's exposed bays from the wall's
+     * line there, where the drift is cut off (ASCE 7-16 7.7.1): ℓl along the wall itself, and past an end of the wall
+     * ({@code pastEnd}) the run at each cell beyond it.
      */
-    record Reach(double from, double to, double depth, boolean pastEnd) {}
+    record Reach(double from, double to, double depth, double edge, boolean pastEnd) {}
 
     static final RoofSteps NONE = new RoofSteps(List.of());
 
@@ -63,18 +65,9 @@ final class RoofSteps {
         if (!low.roof() || ctx.snow() == null || !plan.belowAnother) return NONE;
         Grid g = plan.grid;
         int nx = plan.xCells(), ny = plan.yCells();
-        double[][] top = new double[nx][ny];
-        for (double[] row : top) java.util.Arrays.fill(row, Double.NaN);
-        for (Level l : all) {
-            if (l.elevation() <= low.elevation()) continue;
-            LevelPlan p = new LevelPlan("", l, g);
-            for (int c = 0; c < nx; c++)
-                for (int r = 0; r < ny; r++)
-                    if (p.floored(c, r) != null && !(top[c][r] >= l.elevation())) top[c][r] = l.elevation();
-        }
+        double[][] top = SkyExposure.cover(plan, all);
         SnowRoof roof = low.surface().roof(low.roofSlope());
-        boolean[][] exposed = new boolean[nx][ny];
-        for (int c = 0; c < nx; c++) for (int r = 0; r < ny; r++) exposed[c][r] = plan.floored(c, r) != null && Double.isNaN(top[c][r]);
+        boolean[][] exposed = SkyExposure.exposed(plan, top);
         List<WallEnds.Placed> out = new ArrayList<>();
         int[][] sides = {{0, 1}, {0, -1}, {1, 0}, {-1, 0}};
         for (int c = 0; c < nx; c++)
@@ -158,10 +151,10 @@ final class RoofSteps {
         double near = Math.max(0, Math.min(da, db)), far = Math.min(reach.depth(), Math.max(da, db));
         if (far <= near) return null;
         double mStart = memberAlongX ? m.x1() : m.y1();
-        if (memberAlongX == w.alongX) return new DriftStrip(true, lo - mStart, hi - mStart, far - near, near, near);
+        if (memberAlongX == w.alongX) return new DriftStrip(true, lo - mStart, hi - mStart, far - near, near, near, reach.edge());
         double a = w.at + w.toward * near, b = w.at + w.toward * far;   // the stretch of the member within the reach
         return new DriftStrip(false, Math.min(a, b) - mStart, Math.max(a, b) - mStart, hi - lo,
-                w.toward > 0 ? near : far, w.toward > 0 ? far : near);
+                w.toward > 0 ? near : far, w.toward > 0 ? far : near, reach.edge());
     }
 
     private static String show(double v, CalcContext ctx) { return Display.of(v, Quantity.LENGTH, ctx.system()); }

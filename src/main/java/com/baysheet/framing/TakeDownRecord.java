@@ -2,6 +2,7 @@ package com.baysheet.framing;
 
 import com.baysheet.engine.Tolerances;
 import com.baysheet.engine.member.MemberResult;
+import com.baysheet.engine.member.OpenToSky;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Clause;
 import com.baysheet.engine.record.RecordBuilder;
@@ -24,7 +25,7 @@ final class TakeDownRecord {
     private static final double SAME_AREA = 1e-9;
 
     /** @param point the grid point of the stack ("B/2"): the text refers a reader to each level's column by it, never by id */
-    static CalcRecord write(CalcContext ctx, String point, List<TakeDown.Row> rows, List<MemberResult> columns) {
+    static CalcRecord write(CalcContext ctx, String point, List<TakeDown.Row> rows, List<MemberResult> columns, List<String> openToSky) {
         String title = "Column " + point + " take-down";
         var ed = ctx.edition();
         RecordBuilder rec = new RecordBuilder(title, ed.id(), ctx.system());
@@ -64,6 +65,7 @@ final class TakeDownRecord {
            .result(ResultKey.axial("LRFD"), "Factored axial load at the base (" + base.lrfdCombination() + ")", base.lrfd(), Quantity.FORCE)
            .result(ResultKey.axial("ASD"), "Service axial load at the base (" + base.asdCombination() + ")", base.asd(), Quantity.FORCE)
            .governs(ResultKey.axial("LRFD")).governs(ResultKey.axial("ASD"));
+        OpenToSky.caution(ctx, openToSky, true, rec);
         notes(rec, ctx);
         return rec.build();
     }

@@ -13,10 +13,12 @@ import java.util.Map;
  * ASCE 7-16 7.7.1 gives no rule at the ends of a wall. Snow drifting in the lee of the higher roof does not stop where
  * the wall stops, so stopping the surcharge there would under-load the lower roof's members just beyond each end.
  * <b>Our choice (common practice, conservative):</b> at each free end the drift continues along the wall's line for
- * the drift width w, with the wall's own profile (p_d at the wall line, linear to 0 at w, cut where the drift at the
- * wall is cut), over the lower roof's exposed bays only: it stops at the first cell along the line that is not an
- * exposed bay of this roof (the roof's edge, an opening, a cell a higher level covers) and, across, at the end of the
- * run of exposed bays from the wall line. An end is not free where the wall continues along the same line into a wall
+ * the drift width w, with the wall's own h_d, w and p_d (p_d at the wall line, linear to 0 at w), over the lower
+ * roof's exposed bays only: it stops at the first cell along the line that is not an exposed bay of this roof (the
+ * roof's edge, an opening, a cell a higher level covers) and, across, at each cell its own cut-off: the run of exposed
+ * bays from the wall line there, never beyond w (the drift truncated at the far edge of the lower roof there, ASCE 7-16
+ * 7.7.1). The wall's own ℓl is not used past its end: where the lower roof beside the wall is shallower than w and the
+ * roof beyond the end is deeper, the band between them is loaded. An end is not free where the wall continues along the same line into a wall
  * of the same step facing the same lower roof; an extension never runs into such a wall's own length (no drift counted
  * twice along one line). Where it runs past a wall of another step (another height or roof lengths) both drifts are
  * applied there, summed, as at a corner: conservative.
@@ -44,7 +46,7 @@ final class WallEnds {
         for (Placed p : walls) {
             RoofSteps.Wall w = p.wall;
             List<RoofSteps.Reach> r = new ArrayList<>();
-            r.add(new RoofSteps.Reach(w.start(), w.end(), w.drift().extent(), false));
+            r.add(new RoofSteps.Reach(w.start(), w.end(), w.drift().extent(), w.step().lowerLength(), false));
             r.addAll(ends.past(p, -1));
             r.addAll(ends.past(p, +1));
             out.add(w.withReaches(r));
@@ -64,7 +66,9 @@ final class WallEnds {
             double lo = p.alongX() ? plan.x(c) : plan.y(r), hi = p.alongX() ? plan.x(c + 1) : plan.y(r + 1);
             double from = e > 0 ? lo : Math.max(lo, limit), to = e > 0 ? Math.min(hi, limit) : hi;
             if (to <= from) break;
-            out.add(new RoofSteps.Reach(from, to, Math.min(w.drift().extent(), run(c, r, -p.dc, -p.dr)), true));
+            // cut off where the lower roof ends across the line at this cell, not at the wall's own ℓl (ASCE 7-16 7.7.1)
+            double edge = run(c, r, -p.dc, -p.dr);
+            out.add(new RoofSteps.Reach(from, to, Math.min(w.drift().width(), edge), edge, true));
         }
         return out;
     }

@@ -26,32 +26,39 @@ import static org.assertj.core.api.Assertions.within;
 /**
  * The drift at a roof step is carried once: the drift loads on the members add up to the drift's area load (its
  * resultant per length of wall, ASCE 7-16 7.7.1, × the loaded length: the walls' length plus, at each free end, the
- * extension of w along the wall's line cut at the lower roof's edge, our choice), and the column bases carry every
+ * extension of w along the wall's line cut at the lower roof's edge along it, our choice, and across it at the
+ * lower roof's depth at each cell past the end, which may differ from ℓl at the wall), and the column bases carry every
  * roof's uniform snow plus that drift, whatever the framing.
  */
 class RoofDriftProperties {
     @Property(tries = 60)
     void driftOnMembersSumsToTheDriftAreaLoadAndReachesTheColumnsOnce(
-            @ForAll @DoubleRange(min = 12, max = 40) double lowSpan, @ForAll @DoubleRange(min = 12, max = 60) double highSpan,
+            @ForAll @DoubleRange(min = 3, max = 40) double lowSpan, @ForAll @DoubleRange(min = 12, max = 60) double highSpan,
             @ForAll @DoubleRange(min = 3, max = 40) double a0, @ForAll @DoubleRange(min = 12, max = 40) double a1,
             @ForAll @DoubleRange(min = 3, max = 40) double a2, @ForAll @DoubleRange(min = 12, max = 40) double a3,
             @ForAll @IntRange(min = 1, max = 4) int cells, @ForAll @IntRange(min = 0, max = 3) int first,
             @ForAll @IntRange(min = 1, max = 4) int covered, @ForAll @IntRange(min = 0, max = 3) int beams,
             @ForAll boolean beamsAlongX, @ForAll boolean stepAlongX, @ForAll boolean highFirst,
-            @ForAll @DoubleRange(min = 4, max = 20) double height, @ForAll @DoubleRange(min = 21, max = 60) double pg) {
+            @ForAll @DoubleRange(min = 4, max = 20) double height, @ForAll @DoubleRange(min = 21, max = 60) double pg,
+            @ForAll @DoubleRange(min = 3, max = 30) double farSpan, @ForAll boolean farAtWall, @ForAll @IntRange(min = 0, max = 15) int farMask) {
         // p_g above 20 psf: a flat roof needs no W for rain-on-snow (7.10), which the check here does not give
-        // two rows of cells across the wall: the low roof's row (every cell along), and the row the high roof covers in
-        // part (cells from..to along); the wall runs between them, one step (one height, ℓu and ℓl) all along
+        // three rows of cells across the wall: the row the high roof covers in part (cells from..to along), the low roof's
+        // row beside it (every cell along), and a farther row of low roof that makes the lower roof deeper in some cells:
+        // under the wall in all its cells or none (one step, one height and ℓu, ℓl all along), past the wall's ends in
+        // the cells farMask picks, so the depth of the lower roof past an end varies from cell to cell
         double[] along = java.util.Arrays.copyOf(new double[] {a0, a1, a2, a3}, cells);
         int from = Math.min(first, cells - 1), to = Math.min(cells, from + covered);
-        double[] run = highFirst ? new double[] {highSpan, lowSpan} : new double[] {lowSpan, highSpan};
+        boolean[] far = new boolean[cells];
+        for (int k = 0; k < cells; k++) far[k] = k >= from && k < to ? farAtWall : (farMask >> k & 1) == 1;
+        double[] run = highFirst ? new double[] {highSpan, lowSpan, farSpan} : new double[] {farSpan, lowSpan, highSpan};
         Grid g = stepAlongX ? Buildings.grid(along, run) : Buildings.grid(run, along);
-        int low = highFirst ? 1 : 0, high = 1 - low;
+        int low = 1, high = highFirst ? 0 : 2, farRow = 2 - high;
         Framing f = new Framing(beamsAlongX ? Direction.X : Direction.Y, beams);
         List<Bay> lowBays = new java.util.ArrayList<>(), highBays = new java.util.ArrayList<>();
         for (int k = 0; k < cells; k++) {
-            lowBays.add(stepAlongX ? Bay.floor(k, low, "roof-ordinary", 20, f) : Bay.floor(low, k, "roof-ordinary", 20, f));
-            if (k >= from && k < to) highBays.add(stepAlongX ? Bay.floor(k, high, "roof-ordinary", 20, f) : Bay.floor(high, k, "roof-ordinary", 20, f));
+            lowBays.add(bay(stepAlongX, k, low, f));
+            if (far[k]) lowBays.add(bay(stepAlongX, k, farRow, f));
+            if (k >= from && k < to) highBays.add(bay(stepAlongX, k, high, f));
         }
         Level lowRoof = Level.roof("Low", 10, 0.25, lowBays);
         Level highRoof = Level.roof("High", 10 + height, 0.25, highBays);
@@ -59,17 +66,30 @@ class RoofDriftProperties {
         Derived d = Derivation.derive(b);
 
         CalcContext ctx = b.context();
+        double lowerAtWall = lowSpan + (farAtWall ? farSpan : 0);
         SnowLoads expected = RoofSnow.calculate(ctx, ctx.snow(), SnowRoof.of(SnowRoof.Shape.MONOSLOPE, 0.25, false, Double.NaN)
-                .withStep(new RoofStep(height, highSpan, lowSpan)), RecordBuilder.numbersOnly("check", ctx.edition().id(), ctx.system()));
+                .withStep(new RoofStep(height, highSpan, lowerAtWall)), RecordBuilder.numbersOnly("check", ctx.edition().id(), ctx.system()));
         DriftSurcharge drift = expected.drift();
-        double wall = 0, before = 0, after = 0;
+        // the drift's area load: p_d w/2 (cut at ℓl) along the wall; past each end, over w along the line, each cell
+        // with the drift cut at the depth of the lower roof there, never beyond w (ASCE 7-16 7.7.1)
+        double start = 0, end = 0, lowArea = 0, driftArea = 0;
         for (int k = 0; k < cells; k++) {
-            if (k < from) before += along[k];
-            else if (k < to) wall += along[k];
-            else after += along[k];
+            if (k < from) start += along[k];
+            if (k < to) end += along[k];
+            lowArea += along[k] * (lowSpan + (far[k] ? farSpan : 0));
         }
-        double loaded = !drift.required() ? 0 : wall + Math.min(drift.width(), before) + Math.min(drift.width(), after);
-        double driftArea = drift.resultant() * loaded;
+        if (drift.required()) {
+            driftArea = drift.resultant() * (end - start);
+            double x = 0;
+            for (int k = 0; k < cells; k++) {
+                double lo = x, hi = x + along[k];
+                x = hi;
+                if (k >= from && k < to) continue;
+                double reach = k < from ? Math.max(0, Math.min(hi, start) - Math.max(lo, start - drift.width()))
+                        : Math.max(0, Math.min(hi, end + drift.width()) - Math.max(lo, end));
+                driftArea += reach * drift.cutAt(lowSpan + (far[k] ? farSpan : 0)).resultant();
+            }
+        }
 
         double onMembers = 0;
         for (DerivedMember m : d.members()) {
@@ -84,7 +104,11 @@ class RoofDriftProperties {
 
         double base = 0;
         for (TakeDown t : d.takeDowns()) base += t.rows().get(t.rows().size() - 1).snow();
-        double uniform = expected.uniform() * (lowSpan * (before + wall + after) + highSpan * wall);
+        double uniform = expected.uniform() * (lowArea + highSpan * (end - start));
         assertThat(base).isCloseTo(uniform + driftArea, within(1e-9 * (uniform + driftArea)));
+    }
+
+    private static Bay bay(boolean stepAlongX, int along, int across, Framing f) {
+        return stepAlongX ? Bay.floor(along, across, "roof-ordinary", 20, f) : Bay.floor(across, along, "roof-ordinary", 20, f);
     }
 }

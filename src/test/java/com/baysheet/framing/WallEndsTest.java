@@ -139,4 +139,30 @@ class WallEndsTest {
                 List.of(new int[] {0, 1}), List.of(new int[] {1, 1}), Direction.Y, 4);
         assertThat(driftOnMembers(d)).isCloseTo((60 + 2 * W) * PER_FT, within(1e-6));
     }
+
+    @Test
+    void pastTheEndTheDriftIsCutWhereTheLowerRoofEndsThereNotAtTheWallsLowerRoofLength() {
+        // y bays 30, 5, 30: the high roof over the west column's north bay, the wall on Y3 (y = 35) from x = 0 to 30; beside
+        // the wall the low roof is one 5 ft bay deep (ℓl = 5 ft < w: the drift there is cut at 5 ft), but past the wall's
+        // east end the low roof runs 35 ft south (the east column's two bays): there the extension is w deep, the band
+        // from 5 ft to w loaded too (the drift truncated only at the far edge of the lower roof there, ASCE 7-16 7.7.1).
+        // Leeward governs (ℓu = 30 ft): h_d, w and p_d as in RoofDriftTest
+        Derived d = build(new double[] {30, 30}, new double[] {30, 5, 30},
+                List.of(new int[] {0, 1}, new int[] {1, 0}, new int[] {1, 1}), List.of(new int[] {0, 2}), Direction.Y, 4);
+        double p5 = PD * (1 - 5 / W);
+        double atWall = (PD + p5) / 2 * 5;                  // per ft of wall, cut at ℓl = 5 ft
+        double band = PD * (W - 5) * (W - 5) / (2 * W);     // per ft, from 5 ft to w
+        assertThat(driftOnMembers(d)).isCloseTo(30 * atWall + W * PER_FT, within(1e-6));
+        assertThat(DriftZones.of(d.building(), "Low roof")).extracting(DriftZones.Zone::area)
+                .containsExactly(new PlanRect(0, 30, 30, 35), new PlanRect(30, 35 - W, 30 + W, 35));
+        // the beam at x = 36 in the east column's south bay (strip 33 to 39 ft) lies in the band: 33 to 37.44 ft along,
+        // 5 ft to w across; cut at the wall's ℓl it would carry nothing
+        CalcRecord inBand = RoofDriftTest.member(d, "Beam Y1-Y2/2-3 #1", "Low roof").result().record();
+        assertThat(inBand.result("snow.drift.load")).isCloseTo((30 + W - 33) * band, within(1e-6));
+        // the one beside it in the 5 ft bay (y 30 to 35) carries the drift from 0 to 5 ft, and its record names the cut-off
+        CalcRecord near = RoofDriftTest.member(d, "Beam Y2-Y3/2-3 #1", "Low roof").result().record();
+        assertThat(near.result("snow.drift.load")).isCloseTo((30 + W - 33) * atWall, within(1e-6));
+        assertThat(near.steps()).anySatisfy(st -> assertThat(st.description()).contains("the lower roof across this strip ends 35")
+                .contains("cut off at 7.44 ft"));
+    }
 }

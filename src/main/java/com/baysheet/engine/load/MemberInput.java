@@ -26,12 +26,15 @@ import java.util.List;
  * @param lineLoads       beams only: uniform line loads along part of the span (cladding, walls), not areas
  * @param snow            the roof whose snow load the member's strips carry (with the project's snow site of the
  *                        context), or null: no snow on the strips (snow in point loads is carried either way)
+ * @param openToSky       where the member (a beam or girder of a floor level, not a roof, or a column below one) carries
+ *                        floor bays that no higher level covers, open to the sky yet with no roof live load and no
+ *                        snow: each level's open bays as the record names them ("every bay of F2"); empty where none
  */
 public record MemberInput(String subject, MemberKind kind, Support support, int floorsSupported,
                           List<AreaStrip> strips, List<AreaLoad> areas, List<PointLoad> pointLoads,
                           double selfWeight, double roofSlope, double stiffness, boolean onRoof,
                           List<SupportedFloor> floors, String selfWeightSource, double columnHeight,
-                          List<LineLoad> lineLoads, SnowOnRoof snow) {
+                          List<LineLoad> lineLoads, SnowOnRoof snow, List<String> openToSky) {
     public MemberInput {
         Check.text("subject", subject);
         Check.present("kind", kind);
@@ -77,6 +80,16 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
             for (int i = 0; i < floors.size(); i++)
                 if (!names.add(floors.get(i).name())) throw new InputError("floors[" + i + "].name", floors.get(i).name(), "two floors have this name");
         }
+        openToSky = List.copyOf(openToSky == null ? List.of() : openToSky);
+    }
+
+    /** No bay open to the sky. */
+    public MemberInput(String subject, MemberKind kind, Support support, int floorsSupported, List<AreaStrip> strips,
+                       List<AreaLoad> areas, List<PointLoad> pointLoads, double selfWeight, double roofSlope,
+                       double stiffness, boolean onRoof, List<SupportedFloor> floors, String selfWeightSource,
+                       double columnHeight, List<LineLoad> lineLoads, SnowOnRoof snow) {
+        this(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors,
+                selfWeightSource, columnHeight, lineLoads, snow, List.of());
     }
 
     /** No self weight source stated, no column height, no line loads, no snow on the strips. */
@@ -123,37 +136,43 @@ public record MemberInput(String subject, MemberKind kind, Support support, int 
 
     public MemberInput withSubject(String s) {
         return new MemberInput(s, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness, onRoof, floors,
-                selfWeightSource, columnHeight, lineLoads, snow);
+                selfWeightSource, columnHeight, lineLoads, snow, openToSky);
     }
 
     public MemberInput withRoofSlope(double slope) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, slope, stiffness, onRoof, floors,
-                selfWeightSource, columnHeight, lineLoads, snow);
+                selfWeightSource, columnHeight, lineLoads, snow, openToSky);
     }
 
     public MemberInput withFloors(List<SupportedFloor> f) {
         return new MemberInput(subject, kind, support, f.isEmpty() ? floorsSupported : f.size(), strips, areas, pointLoads,
-                selfWeight, roofSlope, stiffness, onRoof, f, selfWeightSource, columnHeight, lineLoads, snow);
+                selfWeight, roofSlope, stiffness, onRoof, f, selfWeightSource, columnHeight, lineLoads, snow, openToSky);
     }
 
     /** The member's own weight per length and where that figure comes from; for a column, over {@code height}. */
     public MemberInput withSelfWeight(double perLength, String source, double height) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, perLength, roofSlope, stiffness,
-                onRoof, floors, source, height, lineLoads, snow);
+                onRoof, floors, source, height, lineLoads, snow, openToSky);
     }
 
     public MemberInput withLineLoads(List<LineLoad> loads) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness,
-                onRoof, floors, selfWeightSource, columnHeight, loads, snow);
+                onRoof, floors, selfWeightSource, columnHeight, loads, snow, openToSky);
     }
 
     public MemberInput withSnow(SnowOnRoof s) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness,
-                onRoof, floors, selfWeightSource, columnHeight, lineLoads, s);
+                onRoof, floors, selfWeightSource, columnHeight, lineLoads, s, openToSky);
+    }
+
+    /** The floor bays open to the sky this member carries, as the record names them (see {@code openToSky}). */
+    public MemberInput withOpenToSky(List<String> bays) {
+        return new MemberInput(subject, kind, support, floorsSupported, strips, areas, pointLoads, selfWeight, roofSlope, stiffness,
+                onRoof, floors, selfWeightSource, columnHeight, lineLoads, snow, bays);
     }
 
     public MemberInput withPointLoads(List<PointLoad> loads) {
         return new MemberInput(subject, kind, support, floorsSupported, strips, areas, loads, selfWeight, roofSlope, stiffness, onRoof, floors,
-                selfWeightSource, columnHeight, lineLoads, snow);
+                selfWeightSource, columnHeight, lineLoads, snow, openToSky);
     }
 }

@@ -44,6 +44,7 @@ public final class MemberCalculation {
         Inputs.record(ctx, in, book, rec);
         OwnWeight.record(ctx, in, rec);
         boolean snow = MemberSnow.record(ctx, in, book, rec);
+        OpenToSky.record(ctx, in, rec);
         LiveFactors[] reduction = new LiveFactors[1];
         Map<String, Double> factors = factors(ctx, in, book, rec, reduction);
         BeamLoads floor0 = book.combined(null, false), floor = book.combined(factors, false);

@@ -23,10 +23,13 @@ final class MemberDrift {
     private MemberDrift() {}
 
     /** Adds the strip's drift to {@code snow}; returns the load added (lb or kN). */
-    static double strip(Edition ed, DriftSurcharge d, DriftStrip s, String label, RecordBuilder rec, BeamLoads snow,
+    static double strip(Edition ed, DriftSurcharge step, DriftStrip s, String label, RecordBuilder rec, BeamLoads snow,
                         java.util.List<Sketch.Drift> sketch) {
         Clause c = ed.clause("snow.driftShape");
+        DriftSurcharge d = s.on(step);   // cut off where the lower roof ends across this strip (past a wall's end: its own depth)
         double ext = d.extent();
+        String cut = ext == step.extent() ? "" : "; the lower roof across this strip ends " + rec.show(d.lowerLength(), Quantity.LENGTH)
+                + " from the step's line, so the drift here is cut off at " + rec.show(ext, Quantity.LENGTH) + " (min(w, that depth))";
         if (s.parallel()) {
             double a = s.nearFrom(), b = s.nearFrom() + s.width();
             double w = d.over(a, b);
@@ -35,7 +38,7 @@ final class MemberDrift {
             sketch.add(new Sketch.Drift(s.from(), s.to(), w, w));
             rec.step("w_S,drift" + label, "Drift surcharge on the strip " + rec.show(Math.max(0, a), Quantity.LENGTH) + " to "
                             + rec.show(Math.min(b, ext), Quantity.LENGTH) + " from the step (parallel to it), uniform along the member from x = "
-                            + rec.show(s.from(), Quantity.LENGTH) + " to " + rec.show(s.to(), Quantity.LENGTH),
+                            + rec.show(s.from(), Quantity.LENGTH) + " to " + rec.show(s.to(), Quantity.LENGTH) + cut,
                     "w = (p(d₁) + p(d₂)) / 2 × (d₂ − d₁), p(d) = p_d (1 − d / w)",
                     "(" + rec.num(d.at(Math.max(0, a)), Quantity.PRESSURE) + " + " + rec.num(d.at(Math.min(b, ext)), Quantity.PRESSURE) + ") / 2 × "
                             + rec.num(Math.min(b, ext) - Math.max(0, a), Quantity.LENGTH), w, Quantity.LINE_LOAD, c);
@@ -59,7 +62,7 @@ final class MemberDrift {
         rec.step("W_S,drift" + label, "Drift surcharge on a strip " + rec.show(s.width(), Quantity.LENGTH) + " wide running away from the step: "
                         + (Math.min(wLo, wHi) <= 0 ? "triangular" : "trapezoidal") + " load from " + rec.show(wLo, Quantity.LINE_LOAD) + " at x = "
                         + rec.show(lo, Quantity.LENGTH) + " to " + rec.show(wHi, Quantity.LINE_LOAD) + " at x = " + rec.show(hi, Quantity.LENGTH)
-                        + ", put on the member as " + PIECES + " uniform pieces, each the surcharge integrated over its length",
+                        + ", put on the member as " + PIECES + " uniform pieces, each the surcharge integrated over its length" + cut,
                 "W = b (p(d₁) + p(d₂)) / 2 × |d₂ − d₁|",
                 rec.num(s.width(), Quantity.LENGTH) + " × (" + rec.num(d.at(dLo), Quantity.PRESSURE) + " + " + rec.num(d.at(dHi), Quantity.PRESSURE)
                         + ") / 2 × " + rec.num(hi - lo, Quantity.LENGTH), total, Quantity.FORCE, c);

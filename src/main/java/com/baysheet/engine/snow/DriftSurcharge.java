@@ -18,6 +18,15 @@ public record DriftSurcharge(boolean required, double density, double balancedHe
         if (required && width <= 0) throw new IllegalArgumentException("a required drift has a width");
     }
 
+    /**
+     * The same drift (h_d, w, p_d) cut off at {@code edge} from the step instead of at the step's lower roof length:
+     * where the lower roof has another depth across the step's line than at the wall (past a free end of the wall).
+     */
+    public DriftSurcharge cutAt(double edge) {
+        if (!(edge > 0) || !Double.isFinite(edge)) throw new IllegalArgumentException("the lower roof's edge lies a finite distance past the step");
+        return new DriftSurcharge(required, density, balancedHeight, clearHeight, height, width, peak, edge, windward);
+    }
+
     /** Distance from the step over which the surcharge acts: w, or the lower roof length where shorter. */
     public double extent() { return required ? Math.min(width, lowerLength) : 0; }
 
