@@ -5,8 +5,11 @@ import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
 import com.baysheet.project.StoredLevel;
 
+import org.jdbi.v3.core.Handle;
+import org.jdbi.v3.core.argument.Argument;
+import org.jdbi.v3.core.statement.PreparedBatch;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.ResultSetMetaData;
 import java.sql.SQLException;
@@ -132,9 +135,10 @@ final class BayRegrid {
         for (StoredLevel l : LevelStore.findByProject(c, projectId)) {
             levelNames.put(l.id(), l.name());
             Map<List<Integer>, Map<String, Object>> rows = new LinkedHashMap<>();
-            try (PreparedStatement ps = c.prepareStatement("SELECT * FROM bay WHERE level_id = ?")) {
-                ps.setLong(1, l.id());
-                try (ResultSet rs = ps.executeQuery()) {
+            try (Handle h = Sql.on(c)) {
+                // the whole result set, with its column types, even where the level has no bays
+                h.createQuery("SELECT * FROM bay WHERE level_id = :level").bind("level", l.id()).scanResultSet((result, ctx) -> {
+                    ResultSet rs = result.get();
                     ResultSetMetaData md = rs.getMetaData();
                     for (int i = 1; i <= md.getColumnCount(); i++) types.put(md.getColumnLabel(i).toLowerCase(), md.getColumnType(i));
                     while (rs.next()) {
@@ -144,32 +148,34 @@ final class BayRegrid {
                         row.put("y_line", rs.getInt("y_line"));
                         rows.put(key(row), row);
                     }
-                }
+                    return rows;
+                });
             }
             bays.put(l.id(), rows);
         }
     }
 
+    /** Every level's bays written back, each column bound by its own name as it was read (a NULL with the column's type). */
     private void write(Connection c) throws SQLException {
         if (types.isEmpty()) return;
         List<String> cols = List.copyOf(types.keySet());
-        try (PreparedStatement del = c.prepareStatement("DELETE FROM bay WHERE level_id = ?");
-             PreparedStatement ins = c.prepareStatement("INSERT INTO bay (" + String.join(", ", cols) + ") VALUES ("
-                     + String.join(", ", java.util.Collections.nCopies(cols.size(), "?")) + ")")) {
+        try (Handle h = Sql.on(c)) {
+            PreparedBatch ins = h.prepareBatch("INSERT INTO bay (" + String.join(", ", cols) + ") VALUES ("
+                    + String.join(", ", cols.stream().map(col -> ":" + col).toList()) + ")");
             for (Map.Entry<Long, Map<List<Integer>, Map<String, Object>>> level : bays.entrySet()) {
-                del.setLong(1, level.getKey());
-                del.executeUpdate();
+                h.createUpdate("DELETE FROM bay WHERE level_id = :level").bind("level", level.getKey()).execute();
                 for (Map<String, Object> row : level.getValue().values()) {
-                    for (int i = 0; i < cols.size(); i++) {
-                        Object v = row.get(cols.get(i));
-                        if (v == null) ins.setNull(i + 1, types.get(cols.get(i)));
-                        else ins.setObject(i + 1, v);
-                    }
-                    ins.addBatch();
+                    for (String col : cols) ins.bind(col, column(row.get(col), types.get(col)));
+                    ins.add();
                 }
             }
-            ins.executeBatch();
+            if (ins.size() > 0) ins.execute();
         }
+    }
+
+    private static Argument column(Object v, int type) {
+        return v == null ? (position, statement, ctx) -> statement.setNull(position, type)
+                : (position, statement, ctx) -> statement.setObject(position, v);
     }
 
     private static List<Integer> key(Map<String, Object> row) {

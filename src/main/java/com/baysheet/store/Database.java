@@ -3,6 +3,7 @@ package com.baysheet.store;
 import com.zaxxer.hikari.HikariConfig;
 import com.zaxxer.hikari.HikariDataSource;
 import org.flywaydb.core.Flyway;
+import org.jdbi.v3.core.Handle;
 
 import javax.sql.DataSource;
 import java.io.IOException;
@@ -11,6 +12,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
+import java.sql.Connection;
 import java.util.Set;
 import java.util.stream.Stream;
 
@@ -92,6 +94,18 @@ public final class Database implements AutoCloseable {
     }
 
     public DataSource dataSource() { return pool; }
+
+    /**
+     * Whether the database answers a {@code SELECT 1} within {@code timeoutSeconds} (the server's health check): a
+     * connection that cannot be had, a closed pool or a statement past its timeout is a no, never an exception.
+     */
+    public static boolean answers(DataSource ds, int timeoutSeconds) {
+        try (Connection c = ds.getConnection(); Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT 1").setQueryTimeout(timeoutSeconds).mapTo(Integer.class).findFirst().orElse(0) == 1;
+        } catch (Exception e) {
+            return false;
+        }
+    }
 
     @Override
     public void close() { pool.close(); }

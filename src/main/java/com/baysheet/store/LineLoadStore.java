@@ -8,11 +8,11 @@ import com.baysheet.project.LineLoadEntry;
 import com.baysheet.project.StoredLevel;
 import com.baysheet.project.StoredLineLoad;
 
+import org.jdbi.v3.core.Handle;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Statement;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -47,10 +47,9 @@ public final class LineLoadStore {
     public void delete(Editor who, long projectId, long version, long levelId, long id) {
         change(who, "line load " + id + " deleted", projectId, version, c -> {
             LevelStore.find(c, projectId, levelId);
-            try (PreparedStatement ps = c.prepareStatement("DELETE FROM line_load WHERE id = ? AND level_id = ?")) {
-                ps.setLong(1, id);
-                ps.setLong(2, levelId);
-                if (ps.executeUpdate() == 0) throw new NotFound("line load", id);
+            try (Handle h = Sql.on(c)) {
+                if (h.createUpdate("DELETE FROM line_load WHERE id = :id AND level_id = :level")
+                        .bind("id", id).bind("level", levelId).execute() == 0) throw new NotFound("line load", id);
             }
             return id;
         });
@@ -71,50 +70,32 @@ public final class LineLoadStore {
         for (StoredLineLoad other : findByLevel(c, levelId, g))
             if (other.label().equalsIgnoreCase(e.label()))
                 throw new InputError("label", e.label(), "is already the label of a line load on this level");
-        try (PreparedStatement ps = c.prepareStatement("INSERT INTO line_load (level_id, axis, line_id, from_line_id, "
-                + "to_line_id, label, dead_load, dead_pressure, height, live_load, live_occupancy, partition_wall) "
-                + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
-            ps.setLong(1, levelId);
-            ps.setString(2, ref.axis());
-            ps.setInt(3, ref.line());
-            ps.setInt(4, ref.from());
-            ps.setInt(5, ref.to());
-            ps.setString(6, e.label());
-            ps.setDouble(7, e.deadLoad());
-            Sql.setDouble(ps, 8, e.deadPressure());
-            Sql.setDouble(ps, 9, e.height());
-            ps.setDouble(10, e.live());
-            ps.setString(11, e.liveOccupancy());
-            ps.setBoolean(12, e.partitionWall());
-            ps.executeUpdate();
-            try (ResultSet keys = ps.getGeneratedKeys()) {
-                keys.next();
-                return keys.getLong(1);
-            }
+        try (Handle h = Sql.on(c)) {
+            return h.createUpdate("INSERT INTO line_load (level_id, axis, line_id, from_line_id, to_line_id, label, dead_load, "
+                            + "dead_pressure, height, live_load, live_occupancy, partition_wall) VALUES (:level, :axis, :line, :from, "
+                            + ":to, :label, :dead, :deadPressure, :height, :live, :liveOccupancy, :partitionWall)")
+                    .bind("level", levelId).bind("axis", ref.axis()).bind("line", ref.line()).bind("from", ref.from())
+                    .bind("to", ref.to()).bind("label", e.label()).bind("dead", e.deadLoad())
+                    .bind("deadPressure", Sql.orNull(e.deadPressure())).bind("height", Sql.orNull(e.height()))
+                    .bind("live", e.live()).bind("liveOccupancy", e.liveOccupancy()).bind("partitionWall", e.partitionWall())
+                    .executeAndReturnGeneratedKeys("id").mapTo(Long.class).one();
         }
     }
 
     static List<StoredLineLoad> findByLevel(Connection c, long levelId, Grid g) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT * FROM line_load WHERE level_id = ? ORDER BY id")) {
-            ps.setLong(1, levelId);
-            List<StoredLineLoad> out = new ArrayList<>();
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) out.add(read(rs, g));
-            }
-            return out;
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT * FROM line_load WHERE level_id = :level ORDER BY id").bind("level", levelId)
+                    .map((rs, ctx) -> read(rs, g)).list();
         }
     }
 
     /** The building's line loads on these levels, by line position (levels named as the building names them). */
     static List<GridLineLoad> forBuilding(Connection c, Grid g, List<StoredLevel> levels) throws SQLException {
         List<GridLineLoad> out = new ArrayList<>();
-        for (StoredLevel level : levels) {
-            try (PreparedStatement ps = c.prepareStatement("SELECT * FROM line_load WHERE level_id = ? ORDER BY id")) {
-                ps.setLong(1, level.id());
-                try (ResultSet rs = ps.executeQuery()) {
-                    while (rs.next()) out.add(LineRef.of(rs).onGrid(g, level.name(), rs));
-                }
-            }
+        try (Handle h = Sql.on(c)) {
+            for (StoredLevel level : levels)
+                out.addAll(h.createQuery("SELECT * FROM line_load WHERE level_id = :level ORDER BY id").bind("level", level.id())
+                        .map((rs, ctx) -> LineRef.of(rs).onGrid(g, level.name(), rs)).list());
         }
         return out;
     }
@@ -124,23 +105,26 @@ public final class LineLoadStore {
      * engineer deletes the load first, so nothing is dropped silently.
      */
     static void requireLines(Connection c, long projectId, Grid before, Grid after) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT b.name AS level_name, ll.label, ll.axis, ll.line_id, "
-                + "ll.from_line_id, ll.to_line_id FROM line_load ll JOIN building_level b ON b.id = ll.level_id "
-                + "WHERE b.project_id = ? ORDER BY ll.id")) {
-            ps.setLong(1, projectId);
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) {
-                    boolean onX = rs.getString("axis").equals("x");
-                    GridAxis own = onX ? before.x() : before.y(), across = onX ? before.y() : before.x();
-                    GridAxis ownAfter = onX ? after.x() : after.y(), acrossAfter = onX ? after.y() : after.x();
-                    String where = "line load \"" + rs.getString("label") + "\" on " + rs.getString("level_name");
-                    if (ownAfter.indexOf(rs.getInt("line_id")) < 0) throw kept(own, rs.getInt("line_id"), "runs along it", where);
-                    for (String end : List.of("from_line_id", "to_line_id"))
-                        if (acrossAfter.indexOf(rs.getInt(end)) < 0) throw kept(across, rs.getInt(end), "ends at it", where);
-                }
-            }
+        List<Placed> loads;
+        try (Handle h = Sql.on(c)) {
+            loads = h.createQuery("SELECT b.name AS level_name, ll.label, ll.axis, ll.line_id, ll.from_line_id, ll.to_line_id "
+                            + "FROM line_load ll JOIN building_level b ON b.id = ll.level_id WHERE b.project_id = :project ORDER BY ll.id")
+                    .bind("project", projectId).map((rs, ctx) -> new Placed(rs.getString("level_name"), rs.getString("label"), LineRef.of(rs)))
+                    .list();
+        }
+        for (Placed p : loads) {
+            boolean onX = p.ref().onX();
+            GridAxis own = onX ? before.x() : before.y(), across = onX ? before.y() : before.x();
+            GridAxis ownAfter = onX ? after.x() : after.y(), acrossAfter = onX ? after.y() : after.x();
+            String where = "line load \"" + p.label() + "\" on " + p.level();
+            if (ownAfter.indexOf(p.ref().line()) < 0) throw kept(own, p.ref().line(), "runs along it", where);
+            for (int end : List.of(p.ref().from(), p.ref().to()))
+                if (acrossAfter.indexOf(end) < 0) throw kept(across, end, "ends at it", where);
         }
     }
+
+    /** A stored load by the lines it lies on, with its level's name. */
+    private record Placed(String level, String label, LineRef ref) {}
 
     private static InputError kept(GridAxis a, int lineId, String how, String load) {
         String name = a.name(a.indexOf(lineId));

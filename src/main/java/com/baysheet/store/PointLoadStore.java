@@ -7,14 +7,16 @@ import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
 import com.baysheet.framing.model.GridPointLoad;
 
+import org.jdbi.v3.core.Handle;
+import org.jdbi.v3.core.statement.StatementContext;
+import org.jdbi.v3.core.statement.Update;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Statement;
-import java.sql.Types;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 
 /**
  * The point loads of a level, stored by the stable ids of their grid lines (as {@link LineLoadStore} stores line loads).
@@ -47,10 +49,9 @@ public final class PointLoadStore {
     public void delete(Editor who, long projectId, long version, long levelId, long id) {
         writes.change(who, "point load " + id + " deleted", projectId, version, c -> {
             LevelStore.find(c, projectId, levelId);
-            try (PreparedStatement ps = c.prepareStatement("DELETE FROM point_load WHERE id = ? AND level_id = ?")) {
-                ps.setLong(1, id);
-                ps.setLong(2, levelId);
-                if (ps.executeUpdate() == 0) throw new NotFound("point load", id);
+            try (Handle h = Sql.on(c)) {
+                if (h.createUpdate("DELETE FROM point_load WHERE id = :id AND level_id = :level")
+                        .bind("id", id).bind("level", levelId).execute() == 0) throw new NotFound("point load", id);
             }
             return id;
         });
@@ -64,42 +65,29 @@ public final class PointLoadStore {
         for (StoredPointLoad other : findByLevel(c, levelId, g))
             if (other.label().equalsIgnoreCase(e.label()))
                 throw new InputError("label", e.label(), "is already the label of a point load on this level");
-        try (PreparedStatement ps = c.prepareStatement("INSERT INTO point_load (level_id, label, in_bay, bay_x_line_id, bay_y_line_id, "
-                + "axis, line_id, from_line_id, to_line_id, x_offset, y_offset, dead_load, live_load, live_occupancy) "
-                + "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
-            ps.setLong(1, levelId);
-            ps.setString(2, e.label());
-            ps.setBoolean(3, e.inBay());
-            if (e.inBay()) {
-                ps.setInt(4, g.x().id(corner(g.x(), "xLine", e.xLine())));
-                ps.setInt(5, g.y().id(corner(g.y(), "yLine", e.yLine())));
-                ps.setNull(6, Types.VARCHAR);
-                for (int k = 7; k <= 9; k++) ps.setNull(k, Types.INTEGER);
-                ps.setDouble(10, e.x());
-                ps.setDouble(11, e.y());
-            } else {
-                LineRef ref = LineRef.resolve(g, new LineLoadEntry(e.axis(), e.line(), e.from(), e.to(), e.label(), 0, Double.NaN,
-                        Double.NaN, 1, "any", false));
-                GridAxis across = ref.onX() ? g.y() : g.x();
-                ps.setNull(4, Types.INTEGER);
-                ps.setNull(5, Types.INTEGER);
-                ps.setString(6, ref.axis());
-                ps.setInt(7, ref.line());
-                // kept as entered: the distance runs from the from line toward the to line
-                ps.setInt(8, across.id(across.names().indexOf(e.from())));
-                ps.setInt(9, across.id(across.names().indexOf(e.to())));
-                ps.setDouble(10, e.distance());
-                ps.setNull(11, Types.DOUBLE);
-            }
-            ps.setDouble(12, e.dead());
-            ps.setDouble(13, e.live());
-            ps.setString(14, e.liveOccupancy());
-            ps.executeUpdate();
-            try (ResultSet keys = ps.getGeneratedKeys()) {
-                keys.next();
-                return keys.getLong(1);
-            }
+        try (Handle h = Sql.on(c)) {
+            Update u = h.createUpdate("INSERT INTO point_load (level_id, label, in_bay, bay_x_line_id, bay_y_line_id, axis, line_id, "
+                    + "from_line_id, to_line_id, x_offset, y_offset, dead_load, live_load, live_occupancy) VALUES (:level, :label, "
+                    + ":inBay, :bayX, :bayY, :axis, :line, :from, :to, :xOffset, :yOffset, :dead, :live, :liveOccupancy)")
+                    .bind("level", levelId).bind("label", e.label()).bind("inBay", e.inBay())
+                    .bind("dead", e.dead()).bind("live", e.live()).bind("liveOccupancy", e.liveOccupancy());
+            return place(u, g, e).executeAndReturnGeneratedKeys("id").mapTo(Long.class).one();
         }
+    }
+
+    /** In a bay: its south-west corner and the offsets; on a line: the line, its two bounds and the distance. */
+    private static Update place(Update u, Grid g, PointLoadEntry e) {
+        if (e.inBay())
+            return u.bind("bayX", g.x().id(corner(g.x(), "xLine", e.xLine()))).bind("bayY", g.y().id(corner(g.y(), "yLine", e.yLine())))
+                    .bind("axis", (String) null).bind("line", (Integer) null).bind("from", (Integer) null).bind("to", (Integer) null)
+                    .bind("xOffset", e.x()).bind("yOffset", e.y());
+        LineRef ref = LineRef.resolve(g, new LineLoadEntry(e.axis(), e.line(), e.from(), e.to(), e.label(), 0, Double.NaN,
+                Double.NaN, 1, "any", false));
+        GridAxis across = ref.onX() ? g.y() : g.x();
+        // kept as entered: the distance runs from the from line toward the to line
+        return u.bind("bayX", (Integer) null).bind("bayY", (Integer) null).bind("axis", ref.axis()).bind("line", ref.line())
+                .bind("from", across.id(across.names().indexOf(e.from()))).bind("to", across.id(across.names().indexOf(e.to())))
+                .bind("xOffset", e.distance()).bind("yOffset", (Double) null);
     }
 
     /** A bay's west (or south) line by name: it must have a line after it, or there is no bay. */
@@ -133,41 +121,36 @@ public final class PointLoadStore {
 
     /** Refuses a grid change that would remove a line a point load is placed by, naming the load. */
     static void requireLines(Connection c, long projectId, Grid before, Grid after) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT b.name AS level_name, p.* FROM point_load p JOIN building_level b "
-                + "ON b.id = p.level_id WHERE b.project_id = ? ORDER BY p.id")) {
-            ps.setLong(1, projectId);
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) {
-                    Row r = Row.of(rs);
-                    String load = "point load \"" + r.label + "\" on " + rs.getString("level_name");
-                    for (int[] ref : r.lines()) {
-                        GridAxis a = ref[0] == 0 ? before.x() : before.y(), now = ref[0] == 0 ? after.x() : after.y();
-                        if (now.indexOf(ref[1]) < 0) {
-                            String name = a.name(a.indexOf(ref[1]));
-                            throw new InputError("grid." + a.axis() + ".names", name, "grid line " + name + " cannot be removed: the "
-                                    + load + " is placed by it. Delete that point load first (the level's point loads page)");
-                        }
-                    }
+        List<Map.Entry<String, Row>> loads;
+        try (Handle h = Sql.on(c)) {
+            loads = h.createQuery("SELECT b.name AS level_name, p.* FROM point_load p JOIN building_level b ON b.id = p.level_id "
+                            + "WHERE b.project_id = :project ORDER BY p.id")
+                    .bind("project", projectId).map((rs, ctx) -> Map.entry(rs.getString("level_name"), Row.of(rs, ctx))).list();
+        }
+        for (Map.Entry<String, Row> placed : loads) {
+            String load = "point load \"" + placed.getValue().label + "\" on " + placed.getKey();
+            for (int[] ref : placed.getValue().lines()) {
+                GridAxis a = ref[0] == 0 ? before.x() : before.y(), now = ref[0] == 0 ? after.x() : after.y();
+                if (now.indexOf(ref[1]) < 0) {
+                    String name = a.name(a.indexOf(ref[1]));
+                    throw new InputError("grid." + a.axis() + ".names", name, "grid line " + name + " cannot be removed: the "
+                            + load + " is placed by it. Delete that point load first (the level's point loads page)");
                 }
             }
         }
     }
 
     private static List<Row> rows(Connection c, long levelId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT * FROM point_load WHERE level_id = ? ORDER BY id")) {
-            ps.setLong(1, levelId);
-            List<Row> out = new ArrayList<>();
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) out.add(Row.of(rs));
-            }
-            return out;
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT * FROM point_load WHERE level_id = :level ORDER BY id").bind("level", levelId)
+                    .map(Row::of).list();
         }
     }
 
     /** A stored row, its lines by stable id. */
     private record Row(long id, String label, boolean inBay, int bayX, int bayY, String axis, int line, int from, int to,
                        double xOffset, double yOffset, double dead, double live, String liveOccupancy) {
-        static Row of(ResultSet rs) throws SQLException {
+        static Row of(ResultSet rs, StatementContext ctx) throws SQLException {
             return new Row(rs.getLong("id"), rs.getString("label"), rs.getBoolean("in_bay"), rs.getInt("bay_x_line_id"),
                     rs.getInt("bay_y_line_id"), rs.getString("axis"), rs.getInt("line_id"), rs.getInt("from_line_id"),
                     rs.getInt("to_line_id"), rs.getDouble("x_offset"), Sql.getDouble(rs, "y_offset"), rs.getDouble("dead_load"),

@@ -9,11 +9,13 @@ import com.baysheet.project.ProjectInfo;
 import com.baysheet.project.SnowInput;
 import com.baysheet.project.StoredLevel;
 
+import org.jdbi.v3.core.Handle;
+import org.jdbi.v3.core.statement.SqlStatement;
+import org.jdbi.v3.core.statement.StatementContext;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Statement;
 import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.util.ArrayList;
@@ -37,12 +39,8 @@ public final class ProjectStore {
 
     public List<Project> findAll() {
         return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM project ORDER BY job_number")) {
-                List<Project> out = new ArrayList<>();
-                try (ResultSet rs = ps.executeQuery()) {
-                    while (rs.next()) out.add(read(rs));
-                }
-                return out;
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT " + COLUMNS + " FROM project ORDER BY job_number").map(ProjectStore::read).list();
             }
         });
     }
@@ -65,17 +63,13 @@ public final class ProjectStore {
     static long insert(Connection c, ProjectInfo info, Grid grid, OffsetDateTime now) throws SQLException {
         requireFreeJobNumber(c, info.jobNumber(), -1);
         long id;
-        try (PreparedStatement ps = c.prepareStatement("INSERT INTO project (version, job_number, name, address, "
-                + "client, edition, unit_system, partition_allowance, reduce_partitions, uplift_reduced_dead, "
-                + SnowColumns.NAMES + ", floor_method, created_at, updated_at) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
-            int i = bind(ps, info);
-            ps.setObject(i++, now);
-            ps.setObject(i, now);
-            ps.executeUpdate();
-            try (ResultSet keys = ps.getGeneratedKeys()) {
-                keys.next();
-                id = keys.getLong(1);
-            }
+        try (Handle h = Sql.on(c)) {
+            id = bind(h.createUpdate("INSERT INTO project (version, job_number, name, address, client, edition, unit_system, "
+                    + "partition_allowance, reduce_partitions, uplift_reduced_dead, " + SnowColumns.NAMES + ", floor_method, "
+                    + "created_at, updated_at) VALUES (1, :jobNumber, :name, :address, :client, :edition, :units, :partitions, "
+                    + ":reducePartitions, :upliftReducedDead, " + SnowColumns.VALUES + ", :floorMethod, :now, :now)"), info)
+                    .bind("now", Sql.stampOf(now.toInstant()))
+                    .executeAndReturnGeneratedKeys("id").mapTo(Long.class).one();
         }
         GridStore.create(c, id, grid);
         return id;
@@ -95,12 +89,11 @@ public final class ProjectStore {
                 throw new InputError("units", info.units(), "cannot change once the project has levels: "
                         + "its lengths and loads are stored in " + old.info().units());
             for (StoredLevel l : LevelStore.findByProject(c, id)) SnowInput.checkRoof(info, l.info(), "groundSnow");
-            try (PreparedStatement ps = c.prepareStatement("UPDATE project SET job_number = ?, name = ?, address = ?, "
-                    + "client = ?, edition = ?, unit_system = ?, partition_allowance = ?, reduce_partitions = ?, "
-                    + "uplift_reduced_dead = ?, " + SnowColumns.SETS + ", floor_method = ? WHERE id = ?")) {
-                int i = bind(ps, info);
-                ps.setLong(i, id);
-                ps.executeUpdate();
+            try (Handle h = Sql.on(c)) {
+                bind(h.createUpdate("UPDATE project SET job_number = :jobNumber, name = :name, address = :address, "
+                        + "client = :client, edition = :edition, unit_system = :units, partition_allowance = :partitions, "
+                        + "reduce_partitions = :reducePartitions, uplift_reduced_dead = :upliftReducedDead, " + SnowColumns.SETS
+                        + ", floor_method = :floorMethod WHERE id = :id"), info).bind("id", id).execute();
             }
             return find(c, id);
         });
@@ -125,9 +118,8 @@ public final class ProjectStore {
             DeletedItems.keep(c, new DeletedItem(0, id, p.info().jobNumber(), DeletedItem.PROJECT,
                     p.info().jobNumber() + " " + p.info().name(), members, who.username(), sql.now()), ModelExport.write(c, id));
             ModelWrites.append(c, who, ModelWrites.subject(p), "project deleted at version " + version + " (kept 30 days)", sql.now());
-            try (PreparedStatement ps = c.prepareStatement("DELETE FROM project WHERE id = ?")) {
-                ps.setLong(1, id);
-                return ps.executeUpdate();
+            try (Handle h = Sql.on(c)) {
+                return h.createUpdate("DELETE FROM project WHERE id = :id").bind("id", id).execute();
             }
         });
     }
@@ -137,33 +129,25 @@ public final class ProjectStore {
      * an old version. Every write to a project or anything in it goes through here.
      */
     static long touch(Connection c, long id, long version, Instant at) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(
-                "UPDATE project SET version = version + 1, updated_at = ? WHERE id = ? AND version = ?")) {
-            ps.setObject(1, Sql.stamp(at));
-            ps.setLong(2, id);
-            ps.setLong(3, version);
-            if (ps.executeUpdate() == 1) return version + 1;
+        try (Handle h = Sql.on(c)) {
+            if (h.createUpdate("UPDATE project SET version = version + 1, updated_at = :at WHERE id = :id AND version = :version")
+                    .bind("at", Sql.stampOf(at)).bind("id", id).bind("version", version).execute() == 1) return version + 1;
         }
         throw new StaleVersion(id, version, find(c, id).version());
     }
 
     static Project find(Connection c, long id) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM project WHERE id = ?")) {
-            ps.setLong(1, id);
-            try (ResultSet rs = ps.executeQuery()) {
-                if (!rs.next()) throw new NotFound("project", id);
-                return read(rs);
-            }
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT " + COLUMNS + " FROM project WHERE id = :id").bind("id", id).map(ProjectStore::read)
+                    .findFirst().orElseThrow(() -> new NotFound("project", id));
         }
     }
 
     private static void requireFreeJobNumber(Connection c, String jobNumber, long self) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT name FROM project WHERE job_number = ? AND id <> ?")) {
-            ps.setString(1, jobNumber);
-            ps.setLong(2, self);
-            try (ResultSet rs = ps.executeQuery()) {
-                if (rs.next()) throw new Duplicate("jobNumber", jobNumber, "is already the job number of " + rs.getString(1));
-            }
+        try (Handle h = Sql.on(c)) {
+            var other = h.createQuery("SELECT name FROM project WHERE job_number = :jobNumber AND id <> :self")
+                    .bind("jobNumber", jobNumber).bind("self", self).mapTo(String.class).findFirst();
+            if (other.isPresent()) throw new Duplicate("jobNumber", jobNumber, "is already the job number of " + other.get());
         }
     }
 
@@ -189,22 +173,15 @@ public final class ProjectStore {
                 + (i.floorMethod() != null ? ", floor reduction " + i.floorMethod() : "");
     }
 
-    private static int bind(PreparedStatement ps, ProjectInfo p) throws SQLException {
-        ps.setString(1, p.jobNumber());
-        ps.setString(2, p.name());
-        ps.setString(3, p.address());
-        ps.setString(4, p.client());
-        ps.setString(5, p.edition());
-        ps.setString(6, p.units().name());
-        ps.setBoolean(7, p.partitionAllowance());
-        ps.setBoolean(8, p.reducePartitions());
-        ps.setBoolean(9, p.upliftReducedDead());
-        int i = SnowColumns.bind(ps, 10, p.snow());
-        ps.setString(i, p.floorMethod());
-        return i + 1;
+    private static <S extends SqlStatement<S>> S bind(S st, ProjectInfo p) {
+        return SnowColumns.bind(st, p.snow()).bind("jobNumber", p.jobNumber()).bind("name", p.name())
+                .bind("address", p.address()).bind("client", p.client()).bind("edition", p.edition())
+                .bind("units", p.units().name()).bind("partitions", p.partitionAllowance())
+                .bind("reducePartitions", p.reducePartitions()).bind("upliftReducedDead", p.upliftReducedDead())
+                .bind("floorMethod", p.floorMethod());
     }
 
-    private static Project read(ResultSet rs) throws SQLException {
+    private static Project read(ResultSet rs, StatementContext ctx) throws SQLException {
         return new Project(rs.getLong("id"), rs.getLong("version"), new ProjectInfo(rs.getString("job_number"),
                 rs.getString("name"), rs.getString("address"), rs.getString("client"), rs.getString("edition"),
                 UnitSystem.valueOf(rs.getString("unit_system")), rs.getBoolean("partition_allowance"),

@@ -6,10 +6,7 @@ import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.model.SelfWeights;
 
 import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Types;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
@@ -91,15 +88,12 @@ public final class SelfWeightStore {
 
     /** The project's own values (null: the firm's defaults), in the caller's change. */
     static void write(Connection c, long projectId, ProjectSelfWeights w) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(
-                "UPDATE project SET sw_infill_beam = ?, sw_grid_beam = ?, sw_girder = ?, sw_column = ? WHERE id = ?")) {
-            double[] v = w == null ? null : new double[] {w.infillBeam(), w.gridBeam(), w.girder(), w.column()};
-            for (int i = 0; i < 4; i++) {
-                if (v == null) ps.setNull(i + 1, Types.DOUBLE);
-                else ps.setDouble(i + 1, v[i]);
-            }
-            ps.setLong(5, projectId);
-            ps.executeUpdate();
+        try (Handle h = Sql.on(c)) {
+            h.createUpdate("UPDATE project SET sw_infill_beam = :infillBeam, sw_grid_beam = :gridBeam, sw_girder = :girder, "
+                            + "sw_column = :column WHERE id = :project")
+                    .bind("infillBeam", w == null ? null : w.infillBeam()).bind("gridBeam", w == null ? null : w.gridBeam())
+                    .bind("girder", w == null ? null : w.girder()).bind("column", w == null ? null : w.column())
+                    .bind("project", projectId).execute();
         }
     }
 
@@ -112,25 +106,26 @@ public final class SelfWeightStore {
     }
 
     static Optional<ProjectSelfWeights> own(Connection c, long projectId) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT sw_infill_beam, sw_grid_beam, sw_girder, sw_column FROM project WHERE id = ?")) {
-            ps.setLong(1, projectId);
-            try (ResultSet rs = ps.executeQuery()) {
-                if (!rs.next() || rs.getObject(1) == null) return Optional.empty();
-                return Optional.of(new ProjectSelfWeights(rs.getDouble(1), rs.getDouble(2), rs.getDouble(3), rs.getDouble(4)));
-            }
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT sw_infill_beam, sw_grid_beam, sw_girder, sw_column FROM project WHERE id = :project")
+                    .bind("project", projectId)
+                    .map((rs, ctx) -> rs.getObject(1) == null ? Optional.<ProjectSelfWeights>empty()
+                            : Optional.of(new ProjectSelfWeights(rs.getDouble(1), rs.getDouble(2), rs.getDouble(3), rs.getDouble(4))))
+                    .findFirst().flatMap(own -> own);
         }
     }
 
     /** The firm's self weights by role (plf), converted exactly for an SI project; all 0: not included, and said so. */
     static SelfWeights firm(Connection c, UnitSystem units) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(
-                "SELECT sw_infill_beam, sw_grid_beam, sw_girder, sw_column FROM firm_setting WHERE id = 1");
-             ResultSet rs = ps.executeQuery()) {
-            if (!rs.next()) return SelfWeights.NONE;
-            double k = units == UnitSystem.SI ? Convert.KN_PER_M_PER_PLF : 1;
-            double i = rs.getDouble(1), g = rs.getDouble(2), gi = rs.getDouble(3), col = rs.getDouble(4);
-            if (i == 0 && g == 0 && gi == 0 && col == 0) return SelfWeights.NONE;
-            return new SelfWeights(i * k, g * k, gi * k, col * k, "firm default");
+        double k = units == UnitSystem.SI ? Convert.KN_PER_M_PER_PLF : 1;
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT sw_infill_beam, sw_grid_beam, sw_girder, sw_column FROM firm_setting WHERE id = 1")
+                    .map((rs, ctx) -> {
+                        double i = rs.getDouble(1), g = rs.getDouble(2), gi = rs.getDouble(3), col = rs.getDouble(4);
+                        if (i == 0 && g == 0 && gi == 0 && col == 0) return SelfWeights.NONE;
+                        return new SelfWeights(i * k, g * k, gi * k, col * k, "firm default");
+                    })
+                    .findFirst().orElse(SelfWeights.NONE);
         }
     }
 

@@ -5,10 +5,10 @@ import com.baysheet.engine.snow.Importance;
 import com.baysheet.engine.snow.SnowSite;
 import com.baysheet.engine.snow.Thermal;
 
-import java.sql.PreparedStatement;
+import org.jdbi.v3.core.statement.SqlStatement;
+
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Types;
 
 /** A project's snow site in its columns (all NULL for no snow). */
 final class SnowColumns {
@@ -16,22 +16,23 @@ final class SnowColumns {
 
     static final String NAMES = "ground_snow, snow_terrain, snow_exposure, snow_exposure_factor, snow_thermal, "
             + "snow_thermal_factor, snow_risk_category";
-    static final String SETS = "ground_snow = ?, snow_terrain = ?, snow_exposure = ?, snow_exposure_factor = ?, "
-            + "snow_thermal = ?, snow_thermal_factor = ?, snow_risk_category = ?";
-    static final int COUNT = 7;
+    static final String VALUES = ":groundSnow, :snowTerrain, :snowExposure, :snowExposureFactor, :snowThermal, "
+            + ":snowThermalFactor, :snowRiskCategory";
+    static final String SETS = "ground_snow = :groundSnow, snow_terrain = :snowTerrain, snow_exposure = :snowExposure, "
+            + "snow_exposure_factor = :snowExposureFactor, snow_thermal = :snowThermal, snow_thermal_factor = :snowThermalFactor, "
+            + "snow_risk_category = :snowRiskCategory";
 
-    /** Binds the seven columns from {@code i}; returns the next index. */
-    static int bind(PreparedStatement ps, int i, SnowSite s) throws SQLException {
+    /** Binds the seven columns by the names of {@link #VALUES} and {@link #SETS}: a factor read from a table is NULL. */
+    static <S extends SqlStatement<S>> S bind(S st, SnowSite s) {
         Exposure e = s == null ? null : s.exposure();
         Thermal t = s == null ? null : s.thermal();
-        number(ps, i++, s == null ? Double.NaN : s.groundLoad());
-        ps.setString(i++, e == null || !e.fromTable() ? null : e.terrain().name());
-        ps.setString(i++, e == null || !e.fromTable() ? null : e.shelter().name());
-        number(ps, i++, e == null || e.fromTable() ? Double.NaN : e.given());
-        ps.setString(i++, t == null || !t.fromTable() ? null : t.condition().name());
-        number(ps, i++, t == null || t.fromTable() ? Double.NaN : t.given());
-        ps.setString(i++, s == null ? null : s.importance().category().name());
-        return i;
+        return st.bind("groundSnow", Sql.orNull(s == null ? Double.NaN : s.groundLoad()))
+                .bind("snowTerrain", e == null || !e.fromTable() ? null : e.terrain().name())
+                .bind("snowExposure", e == null || !e.fromTable() ? null : e.shelter().name())
+                .bind("snowExposureFactor", Sql.orNull(e == null || e.fromTable() ? Double.NaN : e.given()))
+                .bind("snowThermal", t == null || !t.fromTable() ? null : t.condition().name())
+                .bind("snowThermalFactor", Sql.orNull(t == null || t.fromTable() ? Double.NaN : t.given()))
+                .bind("snowRiskCategory", s == null ? null : s.importance().category().name());
     }
 
     static SnowSite read(ResultSet rs) throws SQLException {
@@ -43,10 +44,5 @@ final class SnowColumns {
         double ct = rs.getDouble("snow_thermal_factor");
         Thermal t = rs.wasNull() ? Thermal.of(Thermal.Condition.valueOf(rs.getString("snow_thermal"))) : Thermal.given(ct);
         return new SnowSite(pg, e, t, Importance.of(Importance.RiskCategory.valueOf(rs.getString("snow_risk_category"))));
-    }
-
-    private static void number(PreparedStatement ps, int i, double v) throws SQLException {
-        if (Double.isNaN(v)) ps.setNull(i, Types.DOUBLE);
-        else ps.setDouble(i, v);
     }
 }

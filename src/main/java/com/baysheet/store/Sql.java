@@ -9,9 +9,7 @@ import org.jdbi.v3.core.argument.Argument;
 
 import javax.sql.DataSource;
 import java.sql.Connection;
-import java.sql.PreparedStatement;
 import java.sql.SQLException;
-import java.sql.Types;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.OffsetDateTime;
@@ -126,12 +124,6 @@ public final class Sql {
     /** A value that may be absent as a bind: NaN or null becomes SQL NULL. */
     static Double orNull(Double v) {
         return v == null || v.isNaN() ? null : v;
-    }
-
-    /** Sets a parameter that may be absent (NaN or null becomes SQL NULL). */
-    static void setDouble(PreparedStatement ps, int i, Double v) throws SQLException {
-        if (v == null || v.isNaN()) ps.setNull(i, Types.DOUBLE);
-        else ps.setDouble(i, v);
     }
 
     /** Reads a nullable DOUBLE PRECISION column: NaN where NULL. */

@@ -1,14 +1,12 @@
 package com.baysheet.web;
 
+import com.baysheet.store.Database;
 import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
 
 import javax.sql.DataSource;
-import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
 import java.util.Map;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutorService;
@@ -47,7 +45,7 @@ public final class Health {
     }
 
     boolean databaseUp() {
-        CompletableFuture<Boolean> f = CompletableFuture.supplyAsync(this::selectOne, probe);
+        CompletableFuture<Boolean> f = CompletableFuture.supplyAsync(() -> Database.answers(ds, TIMEOUT_SECONDS), probe);
         try {
             return f.get(TIMEOUT_SECONDS, TimeUnit.SECONDS);
         } catch (InterruptedException e) {
@@ -55,17 +53,6 @@ public final class Health {
             return false;
         } catch (Exception e) {
             f.cancel(true);
-            return false;
-        }
-    }
-
-    private boolean selectOne() {
-        try (Connection c = ds.getConnection(); PreparedStatement ps = c.prepareStatement("SELECT 1")) {
-            ps.setQueryTimeout(TIMEOUT_SECONDS);
-            try (ResultSet rs = ps.executeQuery()) {
-                return rs.next() && rs.getInt(1) == 1;
-            }
-        } catch (Exception e) {
             return false;
         }
     }
