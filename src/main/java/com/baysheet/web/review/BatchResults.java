@@ -17,14 +17,14 @@ import java.util.Optional;
  * was done is also in the audit trail, one entry per sheet; this is only the answer to the person who asked. A
  * server that no longer holds it (restarted, or another server behind the same proxy) says so.
  */
-final class BatchResults {
+public final class BatchResults {
     static final Duration KEEP = Duration.ofMinutes(30);
     static final int MAX_HELD = 200;
 
-    record Held(long userId, Batch.Kind kind, List<Batch.Outcome> outcomes, Instant at) {
-        long done() { return outcomes.stream().filter(Batch.Outcome::done).count(); }
+    public record Held(long userId, Batch.Kind kind, List<Batch.Outcome> outcomes, Instant at) {
+        public long done() { return outcomes.stream().filter(Batch.Outcome::done).count(); }
 
-        long refused() { return outcomes.size() - done(); }
+        public long refused() { return outcomes.size() - done(); }
     }
 
     private final Clock clock;
