@@ -76,7 +76,7 @@ public final class Batch {
 
     private Outcome one(Kind kind, Results.Computed c, MarkSheets marks, Pick p, Caller who, String description, Submittal site) {
         Optional<MarkSheets.MarkSheet> found = marks.byId(p.markId());
-        if (found.isEmpty()) return new Outcome("mark " + p.markId(), p.markId(), false, "no member carries this mark now", null);
+        if (found.isEmpty()) return new Outcome("(a mark no longer in use)", p.markId(), false, "no member carries this mark now; reload the queue", null);
         SheetSubject.OfMark s = new SheetSubject.OfMark(c, marks, found.get(), found.get().ref(c.project().id()));
         try {
             switch (kind) {

@@ -47,6 +47,7 @@ public final class QueueRoutes {
     }
 
     public void install(RoutesConfig r) {
+        r.get("/review/queue", this::mine, Admit.OFFICE);
         r.get(QUEUE, this::show, Admit.OFFICE);
         r.post(BATCH + "/submit", ctx -> run(ctx, Batch.Kind.SUBMIT), Admit.PREPARER);
         r.post(BATCH + "/approve", ctx -> run(ctx, Batch.Kind.APPROVE), Admit.PREPARER);
@@ -54,6 +55,24 @@ public final class QueueRoutes {
         r.get(BATCH + "/issue", this::confirmIssue, Admit.OFFICE);
         r.post(BATCH + "/issue", this::issue, Admit.PREPARER);
     }
+
+    /** The person's own queue across the office: for each project, how many sheets wait for them and why. */
+    void mine(Context ctx) {
+        Actor me = Actor.of(Access.user(ctx));
+        List<ProjectWaiting> rows = new java.util.ArrayList<>();
+        for (var p : store.projects().findAll()) {
+            Results.Computed c = store.results().of(p.id());
+            var counts = CheckQueue.waitingCounts(QueueEntries.of(review.reviews(), p.id(), SheetContext.marks(store, c)), me);
+            rows.add(new ProjectWaiting(p, counts, counts.values().stream().mapToInt(Integer::intValue).sum()));
+        }
+        Map<String, Object> m = new HashMap<>();
+        m.put("rows", rows);
+        m.put("reasons", CheckQueue.Waiting.values());
+        ctx.render("review/my-queue", m);
+    }
+
+    /** One project's line on the person's queue. */
+    public record ProjectWaiting(com.baysheet.project.Project project, Map<CheckQueue.Waiting, Integer> counts, int total) {}
 
     void show(Context ctx) {
         long project = SheetContext.project(ctx);

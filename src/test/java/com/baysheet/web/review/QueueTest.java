@@ -58,6 +58,11 @@ class QueueTest {
         assertThat(listed(dora.get(queue()).body())).as("another checker also sees the one cleo prepared")
                 .containsExactlyInAnyOrder(id(a), id(b), id(own));
 
+        // the person's own queue across the office counts the same, and the header leads to it
+        String office = cleo.get("/review/queue").body();
+        assertThat(Html.text(office, "tr[data-project=" + server.project() + "] td[data-waiting=TO_CHECK]")).isEqualTo("2");
+        assertThat(Html.all(html, "nav.global a[href=/review/queue]")).isNotEmpty();
+
         String mine = eng.get(queue()).body();
         assertThat(listed(mine)).as("the engineer's queue: what nobody has submitted yet").contains(id(untouched))
                 .doesNotContain(id(a), id(b), id(own));
