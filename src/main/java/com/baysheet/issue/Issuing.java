@@ -45,6 +45,7 @@ public final class Issuing {
         if (cur.version() != version) throw new ConcurrentChange("The sheet " + s.name());
         if (cur.revision().state() != SheetState.APPROVED)
             throw new ReviewRefused.WrongState(ReviewAction.ISSUE, cur.revision().state(), "only an approved sheet is issued");
+        cur.revision().mayIssue(caller.actor());
         String said = SheetRevision.description(description);
         LocalDate today = today();
         String head = review.audit().head().printed(); // the trail as it stands at the issue, printed on the copy

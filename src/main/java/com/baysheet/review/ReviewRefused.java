@@ -22,7 +22,9 @@ public abstract class ReviewRefused extends RuntimeException {
     /** The four-eyes rule: the preparer may not check or approve their own sheet. */
     public static final class FourEyes extends ReviewRefused {
         public FourEyes(ReviewAction action) {
-            super(action, "you prepared this sheet, and a sheet must be checked by someone other than its preparer");
+            super(action, action == ReviewAction.ISSUE
+                    ? "you prepared this sheet, and a sheet is issued by someone other than its preparer"
+                    : "you prepared this sheet, and a sheet must be checked by someone other than its preparer");
         }
     }
 

@@ -85,7 +85,7 @@ public record SheetRevision(int number, SheetState state, Preparer preparer, Str
     /** Freezes the approved sheet: from here on its PDF, whose SHA-256 is given, is the issued copy. */
     public SheetRevision issue(Actor a, LocalDate on, String pdfSha256, String currentInputs, String description) {
         String said = description(description);
-        if (!a.role().mayCheck()) throw new NotPermitted(ReviewAction.ISSUE, "a checker issues approved sheets");
+        mayIssue(a);
         if (state != APPROVED) throw new WrongState(ReviewAction.ISSUE, state, "only an approved sheet is issued");
         if (!fingerprint.equals(currentInputs)) throw new InputsChanged(ReviewAction.ISSUE);
         if (pdfSha256 == null || !pdfSha256.matches("[0-9a-f]{64}"))
@@ -123,6 +123,15 @@ public record SheetRevision(int number, SheetState state, Preparer preparer, Str
     public SheetRevision supersededByNext() {
         if (state != ISSUED) throw new WrongState(ReviewAction.SUPERSEDE, state, "only an issued sheet is superseded, by the next issue");
         return new SheetRevision(number, SUPERSEDED, preparer, fingerprint, approval, issue);
+    }
+
+    /**
+     * Who may issue this revision: a checker, never its preparer (the four-eyes rule holds to the end, so that
+     * nobody sends out their own work alone). The issuing service asks before it renders the issued copy.
+     */
+    public void mayIssue(Actor a) {
+        if (!a.role().mayCheck()) throw new NotPermitted(ReviewAction.ISSUE, "a checker issues approved sheets");
+        if (isPreparer(a)) throw new FourEyes(ReviewAction.ISSUE);
     }
 
     /** The rules shared by everything a checker does: the role, and the four-eyes rule. */

@@ -2,6 +2,7 @@ package com.baysheet.web;
 
 import com.baysheet.auth.LoginRefused;
 import com.baysheet.auth.SetupCode;
+import com.baysheet.issue.Batch;
 import com.baysheet.issue.Issuing;
 import com.baysheet.issue.PackageJobs;
 import com.baysheet.issue.PackageWorker;
@@ -27,6 +28,7 @@ import com.baysheet.web.review.IssuedRoutes;
 import com.baysheet.web.review.MarkRoutes;
 import com.baysheet.web.review.MarkupRoutes;
 import com.baysheet.web.review.PackageRoutes;
+import com.baysheet.web.review.QueueRoutes;
 import com.baysheet.web.review.Refusals;
 import com.baysheet.web.review.ReviewRoutes;
 import io.javalin.Javalin;
@@ -187,6 +189,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new ApiTypicalRoutes(store).install(r);
         new ApiResultRoutes(store).install(r);
         new ReviewRoutes(store, review, issuing).install(r);
+        new QueueRoutes(store, review, new Batch(review, issuing), recorder, clock).install(r);
         new MarkRoutes(store).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
         new IssuedRoutes(store, review, issuing, recorder).install(r);

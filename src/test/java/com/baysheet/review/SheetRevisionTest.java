@@ -57,6 +57,14 @@ class SheetRevisionTest {
     }
 
     @Test
+    void thePreparerNeverIssuesTheirOwnSheetEvenOnceAnotherCheckerApprovedIt() {
+        SheetRevision approved = SheetRevision.opened(1).submit(CHECKER, FP, DAY).approve(SECOND_CHECKER, DAY, 0, FP);
+        assertThatThrownBy(() -> approved.issue(CHECKER, DAY, PDF, FP, "First issue")).isInstanceOf(FourEyes.class)
+                .hasMessageContaining("issued by someone other than its preparer");
+        assertThat(approved.issue(SECOND_CHECKER, DAY, PDF, FP, "First issue").state()).isEqualTo(SheetState.ISSUED);
+    }
+
+    @Test
     void onlyCheckersCheck() {
         for (Actor a : new Actor[]{OTHER_ENGINEER, ADMIN}) {
             assertThatThrownBy(() -> submitted().approve(a, DAY, 0, FP)).isInstanceOf(NotPermitted.class);

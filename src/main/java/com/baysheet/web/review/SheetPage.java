@@ -18,8 +18,11 @@ import java.util.List;
  */
 record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChanged, boolean changedSinceIssue,
                  boolean withdrawn, List<MarkupNote> markups, List<StoredRevision> history, Offer offer) {
-    /** The buttons shown to this user. */
-    record Offer(boolean submit, boolean resubmit, boolean check, boolean issue, boolean reply) {}
+    /**
+     * The buttons shown to this user. {@code resolve}: a checker other than the preparer resolves a markup while the
+     * check is open, also on a returned sheet, where a markup the preparer answered needs no change to the model.
+     */
+    record Offer(boolean submit, boolean resubmit, boolean check, boolean issue, boolean reply, boolean resolve) {}
 
     static SheetPage of(Reviews.SheetView v, CalcRecord currentRecord, User user) {
         StoredRevision cur = v.current();
@@ -42,8 +45,9 @@ record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChange
         return new Offer((s == SheetState.PREPARING || sinceIssue) && u.role().mayPrepare(),
                 preparer && (s == SheetState.RETURNED || (changed && (s.awaitingCheck() || s == SheetState.APPROVED))),
                 otherChecker && s.awaitingCheck(),
-                u.role().mayCheck() && s == SheetState.APPROVED,
-                (preparer || u.role().mayCheck()) && (s.awaitingCheck() || s == SheetState.RETURNED));
+                otherChecker && s == SheetState.APPROVED,
+                (preparer || u.role().mayCheck()) && (s.awaitingCheck() || s == SheetState.RETURNED),
+                otherChecker && (s.awaitingCheck() || s == SheetState.RETURNED));
     }
 
     /** The markups on one target code ("sheet", "input:KEY", "step:SYMBOL"). */
