@@ -5,11 +5,6 @@ package com.baysheet.project;
  * (kept, out of the default list, its model closed to changes until it is un-archived).
  */
 public record Project(long id, long version, ProjectInfo info, boolean archived) {
-    /** A current (not archived) project. */
-    public Project(long id, long version, ProjectInfo info) {
-        this(id, version, info, false);
-    }
-
     /** The project's state in a person's words, as pages and refusals name it. */
     public String state() {
         return archived ? "archived" : "current";

@@ -14,10 +14,10 @@ import java.util.Map;
  * (kept, out of the default list, its model closed) and un-archived. Archiving is a preparer's, like every change to
  * the work: it removes nothing and is undone by the same people, on the same settings page.
  */
-final class ProjectCopyRoutes {
+final class JobRoutes {
     private final Store store;
 
-    ProjectCopyRoutes(Store store) {
+    JobRoutes(Store store) {
         this.store = store;
     }
 
