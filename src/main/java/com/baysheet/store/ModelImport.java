@@ -29,23 +29,43 @@ public final class ModelImport {
 
     /** @param jobNumber the new project's job number, or blank for the file's own */
     public Project create(Editor who, JsonNode file, String jobNumber) {
+        return create(who, file, jobNumber, null, "project imported from a model file");
+    }
+
+    /**
+     * A new job from an old one: the project's model (settings, grid, levels, bays, loads, weights, submittal data)
+     * as its model file would carry it, under a new job number and, where given, a new name. Its reviews, revisions
+     * and marks' history stay with the old job; the new one starts with no sheets.
+     */
+    public Project copy(Editor who, long projectId, String jobNumber, String name) {
+        if (jobNumber == null || jobNumber.isBlank()) throw new InputError("jobNumber", "", "give the new job's number");
+        JsonNode file = writes.sql().tx(c -> ModelExport.write(c, projectId));
+        String from = file.path("project").path("jobNumber").asText();
+        return create(who, file, jobNumber, name, "project created as a copy of " + from);
+    }
+
+    private Project create(Editor who, JsonNode file, String jobNumber, String name, String how) {
         if (file == null || !file.isObject()) throw new InputError("file", "not a JSON object", "is not a model file");
         if (file.path("format").isIntegralNumber() && file.path("format").asInt() > ModelExport.FORMAT)
             throw new InputError("format", file.path("format"), "is a later model file than this server reads (" + ModelExport.FORMAT + ")");
         ProjectInfo read = ModelJson.project(file.path("project"));
-        ProjectInfo info = jobNumber == null || jobNumber.isBlank() ? read : new ProjectInfo(jobNumber, read.name(),
+        ProjectInfo info = new ProjectInfo(blank(jobNumber) ? read.jobNumber() : jobNumber, blank(name) ? read.name() : name,
                 read.address(), read.client(), read.edition(), read.units(), read.partitionAllowance(), read.reducePartitions(),
                 read.upliftReducedDead(), read.snow(), read.floorMethod());
         Grid grid = ModelJson.grid(file.path("grid"));
         JsonNode levels = file.path("levels");
         if (!levels.isMissingNode() && !levels.isArray()) throw new InputError("levels", levels.getNodeType(), "must be a list of levels");
         Limits.count("levels", levels.size(), Limits.MAX_LEVELS, "levels in a project");
-        return writes.create(who, "project imported from a model file: " + info.name() + ", " + levels.size() + " levels",
+        return writes.create(who, how + ": " + info.jobNumber() + " " + info.name() + ", " + levels.size() + " levels",
                 c -> {
                     long id = insert(c, info, grid, withIds(file.path("grid"), grid), levels, writes.sql().stamp());
                     projectExtras(c, id, file);
                     return id;
                 });
+    }
+
+    private static boolean blank(String s) {
+        return s == null || s.isBlank();
     }
 
     /** Brings a deleted project back from its kept model file, with its own job number; {@code also} runs in the same transaction. */

@@ -24,7 +24,7 @@ import java.util.List;
 /** Projects: listing, creating, settings, and the version that guards every change to a project. */
 public final class ProjectStore {
     private static final String COLUMNS = "id, version, job_number, name, address, client, edition, unit_system, "
-            + "partition_allowance, reduce_partitions, uplift_reduced_dead, " + SnowColumns.NAMES + ", floor_method";
+            + "partition_allowance, reduce_partitions, uplift_reduced_dead, " + SnowColumns.NAMES + ", floor_method, archived";
 
     private final Sql sql;
     private final ModelWrites writes;
@@ -37,12 +37,18 @@ public final class ProjectStore {
     /** The projects' submittal data: engineer of record, licence, building code as adopted. */
     public SubmittalStore submittals() { return new SubmittalStore(writes); }
 
+    /** Every project, archived ones too, by job number. */
     public List<Project> findAll() {
         return sql.tx(c -> {
             try (Handle h = Sql.on(c)) {
                 return h.createQuery("SELECT " + COLUMNS + " FROM project ORDER BY job_number").map(ProjectStore::read).list();
             }
         });
+    }
+
+    /** The projects in this state (archived or current), by job number. */
+    public List<Project> findAll(boolean archived) {
+        return findAll().stream().filter(p -> p.archived() == archived).toList();
     }
 
     public Project find(long id) {
@@ -125,10 +131,35 @@ public final class ProjectStore {
     }
 
     /**
+     * Archives a project (or un-archives it): it stays in the store, leaves the default list, and its model takes no
+     * change while archived ({@link Archived}). The version moves, so that every page kept for the old one is rendered
+     * again saying so; the audit entry records it.
+     */
+    public Project archive(Editor who, long id, long version, boolean archived) {
+        return sql.tx(c -> {
+            Instant at = sql.now();
+            Project was = find(c, id);
+            if (was.archived() == archived)
+                throw new InputError("archived", was.state(), "the project is " + was.state() + " already");
+            try (Handle h = Sql.on(c)) {
+                if (h.createUpdate("UPDATE project SET version = version + 1, updated_at = :at, archived = :archived "
+                        + "WHERE id = :id AND version = :version").bind("at", Sql.stampOf(at)).bind("archived", archived)
+                        .bind("id", id).bind("version", version).execute() != 1)
+                    throw new StaleVersion(id, version, was.version());
+            }
+            ModelWrites.append(c, who, ModelWrites.subject(was), (archived ? "project archived" : "project un-archived")
+                    + "; model version " + version + " → " + (version + 1), at);
+            return find(c, id);
+        });
+    }
+
+    /**
      * Claims the next version of a project for a change in this transaction, or refuses a change based on
-     * an old version. Every write to a project or anything in it goes through here.
+     * an old version or to an archived project. Every write to a project or anything in it goes through here.
      */
     static long touch(Connection c, long id, long version, Instant at) throws SQLException {
+        Project p = find(c, id);
+        if (p.archived()) throw new Archived(p.info().jobNumber() + " " + p.info().name());
         try (Handle h = Sql.on(c)) {
             if (h.createUpdate("UPDATE project SET version = version + 1, updated_at = :at WHERE id = :id AND version = :version")
                     .bind("at", Sql.stampOf(at)).bind("id", id).bind("version", version).execute() == 1) return version + 1;
@@ -186,6 +217,6 @@ public final class ProjectStore {
                 rs.getString("name"), rs.getString("address"), rs.getString("client"), rs.getString("edition"),
                 UnitSystem.valueOf(rs.getString("unit_system")), rs.getBoolean("partition_allowance"),
                 rs.getBoolean("reduce_partitions"), rs.getBoolean("uplift_reduced_dead"),
-                SnowColumns.read(rs), rs.getString("floor_method")));
+                SnowColumns.read(rs), rs.getString("floor_method")), rs.getBoolean("archived"));
     }
 }

@@ -37,6 +37,8 @@ final class Errors {
                 new ApiError(400, e.getMessage(), e.field(), e.value(), e.problem())));
         routes.exception(Duplicate.class, (e, ctx) -> respond(ctx, 409, "errors/bad-input",
                 new ApiError(409, e.getMessage(), e.field(), e.value(), e.problem())));
+        routes.exception(com.baysheet.store.Archived.class, (e, ctx) -> respond(ctx, 409, "errors/bad-input",
+                new ApiError(409, e.getMessage(), "project", "archived", e.getMessage())));
         routes.exception(TooBusy.class, (e, ctx) -> {
             ctx.header("Retry-After", String.valueOf(e.retryAfterSeconds()));
             respond(ctx, 429, "errors/bad-input", new ApiError(429, e.getMessage(), e.limit(), null, e.getMessage()));

@@ -191,6 +191,9 @@ public final class Form {
         } catch (StaleVersion e) {
             reject(GENERAL, "Not saved: " + e.getMessage() + ".");
             conflict = true;
+        } catch (com.baysheet.store.Archived e) {
+            // the project's state refuses it, not another save: answered 422 with the state named, no reload offered
+            reject(GENERAL, "Not saved: " + e.getMessage() + ".");
         } catch (Duplicate e) {
             reject(fieldFor(e.field()), fieldFor(e.field()).equals(GENERAL) ? "Not saved: " + e.getMessage() + "." : e.problem());
             conflict = true;

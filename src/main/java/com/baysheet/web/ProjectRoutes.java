@@ -34,7 +34,9 @@ final class ProjectRoutes {
     }
 
     void list(Context ctx) {
-        ctx.render("projects/list", Map.of("projects", store.projects().findAll()));
+        // the default list is the current work; ?archived=yes lists the archived projects instead
+        boolean archived = "yes".equals(ctx.queryParam("archived"));
+        ctx.render("projects/list", Map.of("projects", store.projects().findAll(archived), "archived", archived));
     }
 
     void newForm(Context ctx) {

@@ -15,7 +15,13 @@ public enum Saved {
     USER("user", "Saved: user account."),
     DELETED("deleted", "Deleted. It is kept for 30 days, and the administrator can restore it (Deleted items)."),
     RESTORED("restored", "Restored: it is back where it was, and the audit trail records it."),
-    TOKEN_REVOKED("token", "Revoked: that API token no longer opens anything.");
+    TOKEN_REVOKED("token", "Revoked: that API token no longer opens anything."),
+
+    COPIED("copied", "Copied: this is the new job, with the old one's model and no sheets yet; the old job keeps its reviews and revisions."),
+    ARCHIVED("archived", "Archived: the project is kept, out of the project list, and its model takes no change until it is un-archived."),
+    UNARCHIVED("unarchived", "Un-archived: the project is back in the list and its model can be changed again."),
+    OCCUPANCY("occupancy", "Saved: firm occupancy. Every project that uses it now computes with the new values."),
+    DELETED_OCCUPANCY("occupancy-deleted", "Deleted: the occupancy has left the firm's catalogue; the audit trail records its values.");
 
     /** The request attribute the layout reads the message by. */
     public static final String ATTRIBUTE = "saved";

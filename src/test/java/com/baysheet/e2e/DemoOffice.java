@@ -94,6 +94,7 @@ final class DemoOffice implements AutoCloseable {
         ids.put("level", level);
         String loads = "/api" + p + "/levels/" + level;
         ids.put("lineLoad", first(eng, loads + "/line-loads", "id"));
+        ids.put("occupancy", first(eng, "/api/occupancies", "id"));
         if (JSON.readTree(OfficeClient.expect(eng.get(loads + "/point-loads"), 200).body()).isEmpty()) {
             long version = JSON.readTree(OfficeClient.expect(eng.get("/api" + p), 200).body()).path("project").path("version").asLong();
             OfficeClient.expect(eng.json("POST", loads + "/point-loads", "{\"version\": " + version + ", \"label\": \"Route walk unit\", "

@@ -81,6 +81,44 @@ interface ModelFileContract {
     }
 
     @Test
+    default void aCopiedJobHasTheSameMembersAndRecordsAndATakenJobNumberStoresNothing() {
+        Project p = demo();
+        Project copy = store().imports().copy(Editor.DEMO, p.id(), "24-031-C", "Alder Street phase 2");
+        assertThat(copy.info().jobNumber()).isEqualTo("24-031-C");
+        assertThat(copy.info().name()).isEqualTo("Alder Street phase 2");
+        assertThat(copy.archived()).isFalse();
+        assertThat(records(copy)).hasSizeGreaterThan(50).isEqualTo(records(p));
+        ObjectNode again = store().exports().of(copy.id());
+        ((ObjectNode) again.get("project")).put("jobNumber", p.info().jobNumber()).put("name", p.info().name());
+        assertThat(RecordJson.write(again)).isEqualTo(RecordJson.write(store().exports().of(p.id())));
+
+        int before = store().projects().findAll().size();
+        assertThatThrownBy(() -> store().imports().copy(Editor.DEMO, p.id(), p.info().jobNumber(), ""))
+                .isInstanceOfSatisfying(Duplicate.class, e -> assertThat(e.field()).isEqualTo("jobNumber"));
+        assertThatThrownBy(() -> store().imports().copy(Editor.DEMO, p.id(), " ", ""))
+                .isInstanceOfSatisfying(InputError.class, e -> assertThat(e.field()).isEqualTo("jobNumber"));
+        assertThat(store().projects().findAll()).hasSize(before);
+    }
+
+    @Test
+    default void anArchivedProjectRefusesModelChangesUntilUnArchived() {
+        Project p = demo();
+        Project archived = store().projects().archive(Editor.DEMO, p.id(), p.version(), true);
+        assertThat(archived.archived()).isTrue();
+        assertThat(archived.version()).isEqualTo(p.version() + 1);
+        assertThat(store().projects().findAll(false)).extracting(Project::id).doesNotContain(p.id());
+        assertThat(store().projects().findAll(true)).extracting(Project::id).containsExactly(p.id());
+        assertThatThrownBy(() -> store().projects().update(Editor.DEMO, p.id(), archived.version(), p.info()))
+                .isInstanceOf(Archived.class).hasMessageContaining("is archived");
+        assertThatThrownBy(() -> store().projects().delete(Editor.DEMO, p.id(), archived.version())).isInstanceOf(Archived.class);
+        assertThat(store().projects().find(p.id()).version()).isEqualTo(archived.version());
+        Project back = store().projects().archive(Editor.DEMO, p.id(), archived.version(), false);
+        assertThat(back.archived()).isFalse();
+        assertThat(store().projects().findAll(false)).extracting(Project::id).contains(p.id());
+        assertThat(store().projects().update(Editor.DEMO, p.id(), back.version(), p.info()).version()).isEqualTo(back.version() + 1);
+    }
+
+    @Test
     default void convertingUsToSiAndBackReturnsTheModelWithinOnePartInABillion() {
         Project p = demo();
         ObjectNode us = store().exports().of(p.id());
