@@ -1,21 +1,37 @@
 package com.baysheet.framing;
 
 import com.baysheet.framing.model.Building;
+import com.baysheet.framing.model.GridLineLoad;
+import com.baysheet.framing.model.GridPointLoad;
 import com.baysheet.framing.model.Level;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
- * From a building model to every member and every column take-down. The whole building is recomputed on
- * each call (see docs/benchmarks.md for why that is fast enough); the result is immutable.
+ * From a building model to every member and every column take-down. {@link #derive} recomputes the whole
+ * building; {@link Rederivation} reuses the levels an earlier derivation framed from equal inputs and takes every
+ * column stack down again (docs/engine.md, Derivation and its caches). The result is immutable.
  */
 public final class Derivation {
     private Derivation() {}
 
     /** @throws com.baysheet.engine.InputError naming the level, grid line or bay where the model is wrong */
     public static Derived derive(Building b) {
+        return derive(b, new MemberCache(b.context()), null).derived();
+    }
+
+    /** A derivation and the framing of each level by its inputs (empty where no earlier levels were offered). */
+    record Framed(Derived derived, Map<LevelInputs, LevelFraming> levels) {}
+
+    /**
+     * @param earlier levels framed before in a building with the same {@link LevelInputs.Shared} inputs, by their
+     *                inputs (null: frame every level and keep no inputs)
+     */
+    static Framed derive(Building b, MemberCache cache, Map<LevelInputs, LevelFraming> earlier) {
         // before the model check, so that clearing the last bays beneath a line load names the load
         for (var l : b.lineLoads())
             if (b.levels().stream().noneMatch(v -> v.name().equals(l.level())))
@@ -33,15 +49,20 @@ public final class Derivation {
         List<LevelPlan> plans = new ArrayList<>();
         List<LevelFraming> framings = new ArrayList<>();
         List<DerivedMember> members = new ArrayList<>();
-        MemberCache cache = new MemberCache(b.context());
+        Map<LevelInputs, LevelFraming> framed = new LinkedHashMap<>();
         for (int k : order) {
             Level l = b.levels().get(k);
             boolean below = l.elevation() < b.levels().get(order.get(0)).elevation();
             LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid(), below);
-            LevelFraming f = new LevelFraming(cache, plan, b.selfWeights(),
-                    b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList(),
-                    RoofSteps.of(b.context(), plan, b.levels()),
-                    b.pointLoads().stream().filter(x -> x.level().equals(l.name())).toList()).derive();
+            List<GridLineLoad> lines = b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList();
+            List<GridPointLoad> points = b.pointLoads().stream().filter(x -> x.level().equals(l.name())).toList();
+            LevelInputs in = earlier == null ? null : LevelInputs.of(b, plan, lines, points);
+            LevelFraming f = in == null ? null : earlier.get(in);
+            if (f == null) {
+                // the level's point loads are checked against the catalogue in the framing, so a reused level was checked too
+                f = new LevelFraming(cache, plan, b.selfWeights(), lines, RoofSteps.of(b.context(), plan, b.levels()), points).derive();
+            }
+            if (in != null) framed.put(in, f);
             plans.add(plan);
             framings.add(f);
             members.addAll(f.members);
@@ -53,6 +74,6 @@ public final class Derivation {
                 TakeDown t = down.stack(i, j, members);
                 if (t != null) takeDowns.add(t);
             }
-        return new Derived(b, members, takeDowns);
+        return new Framed(new Derived(b, members, takeDowns), framed);
     }
 }

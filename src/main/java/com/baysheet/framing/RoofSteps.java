@@ -60,18 +60,10 @@ final class RoofSteps {
     /** The walls beside this level, where it is a roof of a snow project lower than another level; else none. */
     static RoofSteps of(CalcContext ctx, LevelPlan plan, List<Level> all) {
         Level low = plan.level;
-        if (!low.roof() || ctx.snow() == null || !plan.belowAnother) return NONE;
+        if (!reads(ctx, plan)) return NONE;
         Grid g = plan.grid;
         int nx = plan.xCells(), ny = plan.yCells();
-        double[][] top = new double[nx][ny];
-        for (double[] row : top) java.util.Arrays.fill(row, Double.NaN);
-        for (Level l : all) {
-            if (l.elevation() <= low.elevation()) continue;
-            LevelPlan p = new LevelPlan("", l, g);
-            for (int c = 0; c < nx; c++)
-                for (int r = 0; r < ny; r++)
-                    if (p.floored(c, r) != null && !(top[c][r] >= l.elevation())) top[c][r] = l.elevation();
-        }
+        double[][] top = cover(low, g, all);
         SnowRoof roof = low.surface().roof(low.roofSlope());
         boolean[][] exposed = new boolean[nx][ny];
         for (int c = 0; c < nx; c++) for (int r = 0; r < ny; r++) exposed[c][r] = plan.floored(c, r) != null && Double.isNaN(top[c][r]);
@@ -109,6 +101,29 @@ final class RoofSteps {
                 }
             }
         return new RoofSteps(WallEnds.reaches(plan, exposed, out));
+    }
+
+    /** Whether {@link #of} looks at the other levels for this level at all (else it has no steps whatever they are). */
+    static boolean reads(CalcContext ctx, LevelPlan plan) {
+        return plan.level.roof() && ctx.snow() != null && plan.belowAnother;
+    }
+
+    /**
+     * All that {@link #of} reads of the other levels: for each cell of the grid, the elevation of the highest level
+     * above {@code low} with a floored bay there (NaN where none covers it).
+     */
+    static double[][] cover(Level low, Grid g, List<Level> all) {
+        int nx = g.x().cells(), ny = g.y().cells();
+        double[][] top = new double[nx][ny];
+        for (double[] row : top) java.util.Arrays.fill(row, Double.NaN);
+        for (Level l : all) {
+            if (l.elevation() <= low.elevation()) continue;
+            LevelPlan p = new LevelPlan("", l, g);
+            for (int c = 0; c < nx; c++)
+                for (int r = 0; r < ny; r++)
+                    if (p.floored(c, r) != null && !(top[c][r] >= l.elevation())) top[c][r] = l.elevation();
+        }
+        return top;
     }
 
     boolean isEmpty() { return walls.isEmpty(); }
