@@ -21,17 +21,24 @@ public final class Derivation {
 
     /** @throws com.baysheet.engine.InputError naming the level, grid line or bay where the model is wrong */
     public static Derived derive(Building b) {
-        return derive(b, new MemberCache(b.context()), null).derived();
+        return derive(b, new MemberCache(b.context()), null, Map.of()).derived();
     }
 
-    /** A derivation and the framing of each level by its inputs (empty where no earlier levels were offered). */
-    record Framed(Derived derived, Map<LevelInputs, LevelFraming> levels) {}
+    /**
+     * A derivation, the framing of each level by its inputs and each grid point's stack with its inputs (empty where
+     * nothing earlier was offered).
+     */
+    record Framed(Derived derived, Map<LevelInputs, LevelFraming> levels, Map<Integer, Stack> stacks) {}
+
+    /** One grid point's take-down (null where no level frames into it) and its columns, and what they were taken from. */
+    record Stack(StackInputs inputs, TakeDown takeDown, List<DerivedMember> columns) {}
 
     /**
      * @param earlier levels framed before in a building with the same {@link LevelInputs.Shared} inputs, by their
      *                inputs (null: frame every level and keep no inputs)
+     * @param stacks  the stacks taken down before in that building, by grid point
      */
-    static Framed derive(Building b, MemberCache cache, Map<LevelInputs, LevelFraming> earlier) {
+    static Framed derive(Building b, MemberCache cache, Map<LevelInputs, LevelFraming> earlier, Map<Integer, Stack> stacks) {
         // before the model check, so that clearing the last bays beneath a line load names the load
         for (var l : b.lineLoads())
             if (b.levels().stream().noneMatch(v -> v.name().equals(l.level())))
@@ -69,11 +76,19 @@ public final class Derivation {
         }
         ColumnTakeDown down = new ColumnTakeDown(b.context(), cache, plans, framings, b.selfWeights());
         List<TakeDown> takeDowns = new ArrayList<>();
+        Map<Integer, Stack> taken = new java.util.HashMap<>();
+        int ny = b.grid().y().lines();
         for (int i = 0; i < b.grid().x().lines(); i++)
-            for (int j = 0; j < b.grid().y().lines(); j++) {
-                TakeDown t = down.stack(i, j, members);
-                if (t != null) takeDowns.add(t);
+            for (int j = 0; j < ny; j++) {
+                StackInputs in = earlier == null ? null : StackInputs.of(plans, framings, b.selfWeights(), i, j);
+                Stack was = in == null ? null : stacks.get(i * ny + j);
+                if (was == null || !was.inputs().equals(in)) {
+                    int first = members.size();
+                    was = new Stack(in, down.stack(i, j, members), List.copyOf(members.subList(first, members.size())));
+                } else members.addAll(was.columns());
+                if (was.takeDown() != null) takeDowns.add(was.takeDown());
+                if (in != null) taken.put(i * ny + j, was);
             }
-        return new Framed(new Derived(b, members, takeDowns), framed);
+        return new Framed(new Derived(b, members, takeDowns), framed, taken);
     }
 }

@@ -15,8 +15,9 @@ import java.util.Map;
  * by their levels' keys), the building, its result, the framing of each level by the level's inputs and the
  * engine's results by member input. A new state of that building with the same shared inputs
  * ({@link LevelInputs.Shared}: setting, grid, self weights by role) reuses the framing of every level whose own
- * inputs are equal, frames the others, and takes every column stack down again, its columns read from the kept
- * engine results where their inputs are equal (the stacks below a changed level get new inputs and are calculated).
+ * inputs are equal, frames the others, and keeps each column stack whose own inputs ({@link StackInputs}: what
+ * arrives at its grid point level by level, the bays around it, the storeys) are equal; the stacks below a changed
+ * level that it changed are taken down again, their columns read from the kept engine results where equal.
  * A change to a shared input derives the whole building, as does a building not seen before.
  *
  * <p>Every reuse is of a result computed from equal inputs by pure functions, so the result equals
@@ -28,7 +29,7 @@ public final class Rederivation {
     public static final int BUILDINGS = 16;
 
     private record Kept(Building building, Derived derived, LevelInputs.Shared shared, Map<LevelInputs, LevelFraming> levels,
-                        Map<MemberInput, MemberResult> results) {
+                        Map<Integer, Derivation.Stack> stacks, Map<MemberInput, MemberResult> results) {
         /** Shares a level key with {@code b} (the store's keys are row ids); where neither has keys, has its name. */
         boolean sameBuilding(Building b) {
             for (Level l : b.levels()) for (Level k : building.levels()) if (l.key() != null && l.key().equals(k.key())) return true;
@@ -50,8 +51,8 @@ public final class Rederivation {
         LevelInputs.Shared shared = LevelInputs.Shared.of(b);
         boolean reuse = before != null && before.shared.equals(shared);
         MemberCache cache = new MemberCache(b.context(), reuse ? before.results : Map.of());
-        Derivation.Framed f = Derivation.derive(b, cache, reuse ? before.levels : Map.of());
-        keep(before, new Kept(b, f.derived(), shared, f.levels(), cache.kept()));
+        Derivation.Framed f = Derivation.derive(b, cache, reuse ? before.levels : Map.of(), reuse ? before.stacks : Map.of());
+        keep(before, new Kept(b, f.derived(), shared, f.levels(), f.stacks(), cache.kept()));
         return f.derived();
     }
 
