@@ -17,8 +17,8 @@ import java.util.function.Function;
  * levels: the building is derived after a bay's dead load changes on one floor, then the edited bay's first infill
  * beam has its record written (what its page renders). Two ways: the whole building derived
  * ({@link Derivation#derive}) and derived again from the previous state ({@link Rederivation}). The edit alternates
- * between two dead loads, so each run is a real change. Not a test: prints milliseconds per edit.
- * Run: {@code mvn -B -ntp -Pbench compile exec:exec -Dbench=...} does not apply (JMH's main); use
+ * between two dead loads, so each run is a real change. Not a test: prints milliseconds per edit (docs/benchmarks.md,
+ * One-bay edit). Run, after building the class path as for the sheet benchmark:
  * {@code java -Xmx4g -cp target/classes:$(cat target/bench.cp) com.baysheet.bench.EditTiming [levels] [runs]}.
  */
 public final class EditTiming {
