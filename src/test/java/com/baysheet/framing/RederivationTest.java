@@ -119,4 +119,27 @@ class RederivationTest {
         }
         assertThat(again.remembered()).isEqualTo(Rederivation.BUILDINGS);
     }
+
+    /** The store reads a firm's catalogue afresh on every load: an equal catalogue is the same setting, another row is not. */
+    @Test
+    void aCatalogueReadAgainIsTheSameSettingAndAnotherRowDerivesTheWholeBuilding() {
+        java.util.function.DoubleFunction<Building> withFirmRow = psf -> {
+            Building b = typicalFloors(60);
+            var cat = b.context().catalogue().with(com.baysheet.engine.code.OccupancyCatalogue.custom("firm-lab", "Laboratory",
+                    com.baysheet.engine.units.UnitSystem.US, psf, 0, 30, com.baysheet.engine.code.ReductionRule.ORDINARY, false));
+            return new Building(b.name(), b.context().withCatalogue(cat), b.grid(), b.levels());
+        };
+        Rederivation again = new Rederivation();
+        Derived before = again.derive(withFirmRow.apply(100));
+        Building readAgain = withFirmRow.apply(100), edited = RederivationProperties.withBay(readAgain, readAgain.levels().get(0),
+                readAgain.levels().get(0).bays().get(0), Bay.floor(0, 0, "retail-first", 75, F));
+        Derived after = again.derive(edited);
+        Rederivations.assertSame(after, Rederivations.full(edited), "catalogue read again");
+        assertThat(Rederivations.reusedLevels(before, after)).containsExactlyInAnyOrder("F2", "F3", "R");
+
+        Building otherRow = withFirmRow.apply(125);
+        Derived changed = again.derive(otherRow);
+        Rederivations.assertSame(changed, Rederivations.full(otherRow), "another catalogue");
+        assertThat(Rederivations.reusedLevels(after, changed)).isEmpty();
+    }
 }
