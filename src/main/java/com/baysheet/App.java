@@ -1,7 +1,7 @@
 package com.baysheet;
 
 import com.baysheet.cli.CalcCommand;
-import com.baysheet.framing.Derivation;
+import com.baysheet.framing.Rederivation;
 import com.baysheet.sheet.signing.OfficeKey;
 import com.baysheet.sheet.signing.PdfSigner;
 import com.baysheet.store.BackupPort;
@@ -90,7 +90,8 @@ public final class App {
         if (o.embedded()) Database.restrictFiles(o.dataDir());
         // one clock for the whole office: the store stamps its rows in UTC from it, sheets are dated in its zone
         Clock clock = Clock.systemDefaultZone();
-        Store store = Store.on(db.dataSource(), Derivation::derive, clock);
+        // a change derives again only the levels it touches (framing.Rederivation), equal to deriving the whole building
+        Store store = Store.on(db.dataSource(), new Rederivation()::derive, clock);
         OfficeKey key;
         try {
             key = named != null ? named : madeOrRead(o, db, clock, console);

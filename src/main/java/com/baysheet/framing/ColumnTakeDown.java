@@ -131,7 +131,7 @@ final class ColumnTakeDown {
         return a >= 0 && b > a ? label.substring(a + 1, b) : "";
     }
 
-    private static List<String> bays(LevelPlan p, int i, int j) {
+    static List<String> bays(LevelPlan p, int i, int j) {
         List<String> out = new ArrayList<>();
         for (int di = -1; di <= 0; di++)
             for (int dj = -1; dj <= 0; dj++)

@@ -1,21 +1,44 @@
 package com.baysheet.framing;
 
 import com.baysheet.framing.model.Building;
+import com.baysheet.framing.model.GridLineLoad;
+import com.baysheet.framing.model.GridPointLoad;
 import com.baysheet.framing.model.Level;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
- * From a building model to every member and every column take-down. The whole building is recomputed on
- * each call (see docs/benchmarks.md for why that is fast enough); the result is immutable.
+ * From a building model to every member and every column take-down. {@link #derive} recomputes the whole
+ * building; {@link Rederivation} reuses the levels an earlier derivation framed from equal inputs and takes every
+ * column stack down again (docs/engine.md, Derivation and its caches). The result is immutable.
  */
 public final class Derivation {
     private Derivation() {}
 
     /** @throws com.baysheet.engine.InputError naming the level, grid line or bay where the model is wrong */
     public static Derived derive(Building b) {
+        return derive(b, new MemberCache(b.context()), null, Map.of()).derived();
+    }
+
+    /**
+     * A derivation, the framing of each level by its inputs and each grid point's stack with its inputs (empty where
+     * nothing earlier was offered).
+     */
+    record Framed(Derived derived, Map<LevelInputs, LevelFraming> levels, Map<Integer, Stack> stacks) {}
+
+    /** One grid point's take-down (null where no level frames into it) and its columns, and what they were taken from. */
+    record Stack(StackInputs inputs, TakeDown takeDown, List<DerivedMember> columns) {}
+
+    /**
+     * @param earlier levels framed before in a building with the same {@link LevelInputs.Shared} inputs, by their
+     *                inputs (null: frame every level and keep no inputs)
+     * @param stacks  the stacks taken down before in that building, by grid point
+     */
+    static Framed derive(Building b, MemberCache cache, Map<LevelInputs, LevelFraming> earlier, Map<Integer, Stack> stacks) {
         // before the model check, so that clearing the last bays beneath a line load names the load
         for (var l : b.lineLoads())
             if (b.levels().stream().noneMatch(v -> v.name().equals(l.level())))
@@ -33,27 +56,40 @@ public final class Derivation {
         List<LevelPlan> plans = new ArrayList<>();
         List<LevelFraming> framings = new ArrayList<>();
         List<DerivedMember> members = new ArrayList<>();
-        MemberCache cache = new MemberCache(b.context());
+        Map<LevelInputs, LevelFraming> framed = new LinkedHashMap<>();
         for (int k : order) {
             Level l = b.levels().get(k);
             boolean below = l.elevation() < b.levels().get(order.get(0)).elevation();
             LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid(), below);
-            LevelFraming f = new LevelFraming(cache, plan, b.selfWeights(),
-                    b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList(),
-                    RoofSteps.of(b.context(), plan, b.levels()),
-                    b.pointLoads().stream().filter(x -> x.level().equals(l.name())).toList(),
-                    SkyExposure.openFloorBays(plan, b.levels())).derive();
+            List<GridLineLoad> lines = b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList();
+            List<GridPointLoad> points = b.pointLoads().stream().filter(x -> x.level().equals(l.name())).toList();
+            LevelInputs in = earlier == null ? null : LevelInputs.of(b, plan, lines, points);
+            LevelFraming f = in == null ? null : earlier.get(in);
+            if (f == null) {
+                // the level's point loads are checked against the catalogue in the framing, so a reused level was checked too
+                f = new LevelFraming(cache, plan, b.selfWeights(), lines, RoofSteps.of(b.context(), plan, b.levels()), points,
+                        SkyExposure.openFloorBays(plan, b.levels())).derive();
+            }
+            if (in != null) framed.put(in, f);
             plans.add(plan);
             framings.add(f);
             members.addAll(f.members);
         }
         ColumnTakeDown down = new ColumnTakeDown(b.context(), cache, plans, framings, b.selfWeights());
         List<TakeDown> takeDowns = new ArrayList<>();
+        Map<Integer, Stack> taken = new java.util.HashMap<>();
+        int ny = b.grid().y().lines();
         for (int i = 0; i < b.grid().x().lines(); i++)
-            for (int j = 0; j < b.grid().y().lines(); j++) {
-                TakeDown t = down.stack(i, j, members);
-                if (t != null) takeDowns.add(t);
+            for (int j = 0; j < ny; j++) {
+                StackInputs in = earlier == null ? null : StackInputs.of(plans, framings, b.selfWeights(), i, j);
+                Stack was = in == null ? null : stacks.get(i * ny + j);
+                if (was == null || !was.inputs().equals(in)) {
+                    int first = members.size();
+                    was = new Stack(in, down.stack(i, j, members), List.copyOf(members.subList(first, members.size())));
+                } else members.addAll(was.columns());
+                if (was.takeDown() != null) takeDowns.add(was.takeDown());
+                if (in != null) taken.put(i * ny + j, was);
             }
-        return new Derived(b, members, takeDowns);
+        return new Framed(new Derived(b, members, takeDowns), framed, taken);
     }
 }

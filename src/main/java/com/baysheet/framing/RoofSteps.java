@@ -62,7 +62,7 @@ final class RoofSteps {
     /** The walls beside this level, where it is a roof of a snow project lower than another level; else none. */
     static RoofSteps of(CalcContext ctx, LevelPlan plan, List<Level> all) {
         Level low = plan.level;
-        if (!low.roof() || ctx.snow() == null || !plan.belowAnother) return NONE;
+        if (!reads(ctx, plan)) return NONE;
         Grid g = plan.grid;
         int nx = plan.xCells(), ny = plan.yCells();
         double[][] top = SkyExposure.cover(plan, all);
@@ -102,6 +102,11 @@ final class RoofSteps {
                 }
             }
         return new RoofSteps(WallEnds.reaches(plan, exposed, out));
+    }
+
+    /** Whether {@link #of} looks at the other levels for this level at all (else it has no steps whatever they are). */
+    static boolean reads(CalcContext ctx, LevelPlan plan) {
+        return plan.level.roof() && ctx.snow() != null && plan.belowAnother;
     }
 
     boolean isEmpty() { return walls.isEmpty(); }

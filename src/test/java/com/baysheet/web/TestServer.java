@@ -1,7 +1,6 @@
 package com.baysheet.web;
 
 import com.baysheet.auth.Role;
-import com.baysheet.framing.Derivation;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
 import com.baysheet.project.Project;
@@ -52,7 +51,8 @@ final class TestServer implements AutoCloseable, BeforeAllCallback, AfterAllCall
         db = Database.open("jdbc:h2:mem:w" + UUID.randomUUID().toString().replace("-", "")
                 + ";MODE=PostgreSQL;DATABASE_TO_LOWER=TRUE;DEFAULT_NULL_ORDERING=HIGH;DB_CLOSE_DELAY=-1");
         Clock clock = Clock.systemUTC();
-        store = Store.on(db.dataSource(), Derivation::derive, clock);
+        // the derivation App wires: a change derives again only what it touches
+        store = Store.on(db.dataSource(), new com.baysheet.framing.Rederivation()::derive, clock);
         demo = Demo.loadIfEmpty(store);
         office = TestLogin.office(store, db, clock);
         app = office.server(null, false).start("127.0.0.1", 0);

@@ -56,6 +56,16 @@ public final class OccupancyCatalogue {
 
     public BalconyRule balconyRule() { return balcony; }
 
+    /** Equal rows in the same order with the same balcony rule (the store reads a firm's catalogue afresh on every load). */
+    @Override
+    public boolean equals(Object o) {
+        return o == this || o instanceof OccupancyCatalogue c && c.byId.equals(byId) && java.util.Arrays.equals(c.order, order)
+                && c.balcony.equals(balcony);
+    }
+
+    @Override
+    public int hashCode() { return byId.hashCode(); }
+
     /** The balcony row serving an occupancy, or the occupancy itself where none derives (a roof). */
     public String balconyOf(String servedId) {
         String id = BalconyRule.idFor(servedId);
