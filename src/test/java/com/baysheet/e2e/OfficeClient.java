@@ -49,7 +49,8 @@ final class OfficeClient {
 
     /**
      * As an administrator: adds a user of this role, who has no password until they use the one-time set-up code
-     * the administrator is shown; the person then chooses {@code password} with it (never known to the administrator).
+     * the administrator is shown; the person then chooses {@code password} with it (never known to the administrator)
+     * and logs in once, being told of the code.
      */
     void addUser(String username, String role, String password) {
         get("/admin/users");
@@ -61,6 +62,12 @@ final class OfficeClient {
         person.get("/account/reset");
         expect(person.form("/account/reset", Map.of("username", username, "code", code.group(1),
                 "newPassword", password, "confirmPassword", password)), 303);
+        // the first login tells the person of the code they used; later logins go straight on
+        person.get("/login");
+        HttpResponse<String> told = expect(person.form("/login", Map.of("username", username, "password", password,
+                "next", "/projects")), 200);
+        if (!told.body().contains("made for you by"))
+            throw new IllegalStateException("a first login was not told of the set-up code: " + told.body());
     }
 
     /** Logs in (a fresh cookie jar's worth), and reads the session's form token from a page. */
