@@ -36,8 +36,6 @@ class BrowserStoryIT {
     private static final String ADMIN_PASSWORD = "harbour lights 42";
     private static final String ENGINEER_PASSWORD = "gravel path 1987";
     private static final String CHECKER_PASSWORD = "slate roof 2231";
-    /** What the administrator's first password for a person starts with; the person replaces it at first login. */
-    private static final String FIRST = "from admin ";
     private static final String MARKUP = "Is this K_LL right for a girder? <script>alert('x')</script>";
     private static final String REPLY = "Yes: interior girder, K_LL = 2 (Table 4.7-1).";
 
@@ -81,15 +79,17 @@ class BrowserStoryIT {
 
     private void story() throws Exception {
         setUpAdministratorByKeyboard();
-        addUser("erin", "Erin Marsh", "EM", "engineer", FIRST + ENGINEER_PASSWORD);
-        addUser("chris", "Chris Vale", "CV", "checker", FIRST + CHECKER_PASSWORD);
+        String erinCode = addUser("erin", "Erin Marsh", "EM", "engineer");
+        String chrisCode = addUser("chris", "Chris Vale", "CV", "checker");
         assertThat(page.text()).contains("Erin Marsh").contains("Chris Vale");
         page.press("Log out");
         assertThat(page.path()).startsWith("/login");
 
-        firstLogInByKeyboard("chris", FIRST + CHECKER_PASSWORD, CHECKER_PASSWORD);
+        firstPasswordWithCode("chris", chrisCode, CHECKER_PASSWORD);
+        firstLogInByKeyboard("chris", CHECKER_PASSWORD);
         page.press("Log out");
-        firstLogInByKeyboard("erin", FIRST + ENGINEER_PASSWORD, ENGINEER_PASSWORD);
+        firstPasswordWithCode("erin", erinCode, ENGINEER_PASSWORD);
+        firstLogInByKeyboard("erin", ENGINEER_PASSWORD);
         enterProject();
         enterGridAndLevels();
         enterBays();
@@ -147,31 +147,45 @@ class BrowserStoryIT {
         assertThat(page.path()).startsWith("/admin/users");
     }
 
-    private void addUser(String username, String fullName, String initials, String role, String password) {
+    /** Adds a person with no password: the one-time set-up code the page shows once is returned for them. */
+    private String addUser(String username, String fullName, String initials, String role) {
         WebElement f = page.form("#add-user");
         page.type(f, "username", username);
         page.type(f, "fullName", fullName);
         page.type(f, "initials", initials);
         page.choose(f, "role", role);
-        page.type(f, "password", password);
+        assertThat(f.findElements(By.cssSelector("input[type='password']"))).as("the administrator sets no password").isEmpty();
         page.press(f, "Add user");
+        assertThat(page.text()).contains(fullName, "you never see");
+        String code = page.form("#setup-code code").getText().strip();
+        assertThat(code).matches("[2-9A-Z]{4}(-[2-9A-Z]{4}){4}");
+        page.follow("Back to users");
         assertThat(page.path()).startsWith("/admin/users");
-        assertThat(page.text()).contains(fullName);
+        assertThat(page.text()).contains(fullName).doesNotContain(code);
+        return code;
     }
 
-    /** A first login with the administrator's password: the person is sent to choose their own, then goes on. */
-    private void firstLogInByKeyboard(String username, String first, String own) {
+    /** The person, not logged in, chooses their own password with the code from the administrator. */
+    private void firstPasswordWithCode(String username, String code, String own) {
         if (!page.path().startsWith("/login")) page.open("/login");
-        page.tabTo("username");
-        page.keys(username, Keys.TAB, first);
-        page.keysThenWait(Keys.ENTER);
-        assertThat(page.path()).as("a password set by the administrator is changed first").startsWith("/account/password");
-        WebElement f = page.form("form[action='/account/password']");
-        page.type(f, "currentPassword", first);
+        page.follow("choose your password");
+        assertThat(page.path()).startsWith("/account/reset");
+        WebElement f = page.form("#reset-form");
+        page.type(f, "username", username);
+        page.type(f, "code", code);
         page.type(f, "newPassword", own);
         page.type(f, "confirmPassword", own);
-        page.press(f, "Change password");
-        page.open("/projects");
+        page.press(f, "Set my password");
+        assertThat(page.path()).as("back at the login, to log in as usual").startsWith("/login");
+    }
+
+    /** The first login is told of the code the person used (made by the administrator), then goes on. */
+    private void firstLogInByKeyboard(String username, String own) {
+        page.tabTo("username");
+        page.keys(username, Keys.TAB, own);
+        page.keysThenWait(Keys.ENTER);
+        assertThat(page.text()).contains("made for you by admin", "to set a new password");
+        page.follow("Continue");
         assertThat(page.path()).as("logged in as " + username).startsWith("/projects");
     }
 

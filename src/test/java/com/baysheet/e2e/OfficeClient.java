@@ -45,24 +45,29 @@ final class OfficeClient {
         return this;
     }
 
+    private static final Pattern SETUP_CODE = Pattern.compile("id=\"setup-code\"[^>]*>\\s*<code>([^<]+)</code>");
+
     /**
-     * As an administrator: adds a user of this role with a first password of the administrator's, which the
-     * person then replaces with {@code password} at their first login (a password set by someone else must be
-     * changed before anything else is reached).
+     * As an administrator: adds a user of this role, who has no password until they use the one-time set-up code
+     * the administrator is shown; the person then chooses {@code password} with it (never known to the administrator)
+     * and logs in once, being told of the code.
      */
     void addUser(String username, String role, String password) {
-        String first = password + " (set by the administrator)";
         get("/admin/users");
-        expect(form("/admin/users", Map.of("username", username, "fullName", "User " + username,
-                "initials", username.substring(0, 2).toUpperCase(), "role", role, "password", first)), 303);
+        HttpResponse<String> added = expect(form("/admin/users", Map.of("username", username, "fullName", "User " + username,
+                "initials", username.substring(0, 2).toUpperCase(), "role", role)), 200);
+        Matcher code = SETUP_CODE.matcher(added.body());
+        if (!code.find()) throw new IllegalStateException("no set-up code shown for " + username + ": " + added.body());
         OfficeClient person = new OfficeClient(base);
+        person.get("/account/reset");
+        expect(person.form("/account/reset", Map.of("username", username, "code", code.group(1),
+                "newPassword", password, "confirmPassword", password)), 303);
+        // the first login tells the person of the code they used; later logins go straight on
         person.get("/login");
-        HttpResponse<String> in = expect(person.form("/login", Map.of("username", username, "password", first, "next", "/projects")), 303);
-        if (!in.headers().firstValue("Location").orElse("").startsWith("/account/password"))
-            throw new IllegalStateException("a first login was not sent to choose a password: " + in.headers().map());
-        person.get("/account/password");
-        expect(person.form("/account/password", Map.of("currentPassword", first, "newPassword", password,
-                "confirmPassword", password)), 303);
+        HttpResponse<String> told = expect(person.form("/login", Map.of("username", username, "password", password,
+                "next", "/projects")), 200);
+        if (!told.body().contains("made for you by"))
+            throw new IllegalStateException("a first login was not told of the set-up code: " + told.body());
     }
 
     /** Logs in (a fresh cookie jar's worth), and reads the session's form token from a page. */

@@ -11,7 +11,7 @@ public record Accounts(UserStore users, SessionStore sessions, Logins logins, Us
         SessionStore sessions = new SessionStore(sql);
         ResetCodes resets = new ResetCodes(sql, users, policy.passwords(), policy.clock());
         Logins logins = new Logins(users, sessions, new LoginFailures(sql), audit, policy, resets);
-        return new Accounts(users, sessions, logins, new UserAdmin(users, sessions, audit, policy.passwords()), resets,
+        return new Accounts(users, sessions, logins, new UserAdmin(users, sessions, audit, policy.passwords(), resets), resets,
                 new ApiTokens(sql));
     }
 }

@@ -75,15 +75,25 @@ public final class AdminRoutes {
         ctx.render("auth/users", m);
     }
 
+    /**
+     * Adds a person with no password and shows their one-time set-up code on this response only (no redirect: it
+     * is stored nowhere to show again). A password posted along is ignored: the administrator never sets one.
+     */
     void addUser(Context ctx) {
         Form f = Form.of(ctx);
-        if (f.attempt(() -> accounts.admin().add(Access.user(ctx), new NewUser(f.text("username"), f.text("fullName"),
-                f.text("initials"), Role.parse("role", f.text("role"))), f.value("password"), ctx.ip())).isPresent()) {
-            ctx.redirect(Saved.USER.after("/admin/users"), HttpStatus.SEE_OTHER);
+        var issued = f.attempt(() -> accounts.admin().add(Access.user(ctx), new NewUser(f.text("username"), f.text("fullName"),
+                f.text("initials"), Role.parse("role", f.text("role"))), ctx.ip()));
+        if (issued.isPresent()) {
+            ctx.render("auth/first-code", codePage(issued.get()));
         } else {
             ctx.status(HttpStatus.BAD_REQUEST);
             users(ctx, f);
         }
+    }
+
+    private static Map<String, Object> codePage(ResetCodes.Issued issued) {
+        return Map.of("issued", issued,
+                "expires", issued.expiresAt().truncatedTo(java.time.temporal.ChronoUnit.MINUTES).toString().replace('T', ' '));
     }
 
     void setRole(Context ctx) {
@@ -110,8 +120,7 @@ public final class AdminRoutes {
         if (!"reset".equals(ctx.formParam("confirm")))
             throw new InputError("confirm", String.valueOf(ctx.formParam("confirm")), "must be \"reset\" to make a reset code");
         ResetCodes.Issued issued = accounts.resets().make(Access.user(ctx), userId(ctx), ctx.ip());
-        ctx.render("auth/reset-code", Map.of("issued", issued,
-                "expires", issued.expiresAt().truncatedTo(java.time.temporal.ChronoUnit.MINUTES).toString().replace('T', ' ')));
+        ctx.render("auth/reset-code", codePage(issued));
     }
 
     void firm(Context ctx, Form f) {
