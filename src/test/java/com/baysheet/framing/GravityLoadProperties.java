@@ -60,20 +60,20 @@ class GravityLoadProperties {
     }
 
     /** The column below a level runs to the next level down, or from the lowest level to elevation 0. */
-    private static double storeyBelow(List<Level> ascending, String level) {
+    static double storeyBelow(List<Level> ascending, String level) {
         for (int k = 0; k < ascending.size(); k++)
             if (ascending.get(k).name().equals(level))
                 return k == 0 ? Math.max(0, ascending.get(0).elevation()) : ascending.get(k).elevation() - ascending.get(k - 1).elevation();
         throw new AssertionError(level);
     }
 
-    private static double[] positions(com.baysheet.framing.model.GridAxis a) {
+    static double[] positions(com.baysheet.framing.model.GridAxis a) {
         double[] p = new double[a.lines()];
         for (int i = 0; i < p.length; i++) p[i] = a.position(i);
         return p;
     }
 
-    private static int index(double[] p, double v) {
+    static int index(double[] p, double v) {
         for (int i = 0; i < p.length; i++) if (Math.abs(p[i] - v) < 1e-9) return i;
         throw new AssertionError(v);
     }

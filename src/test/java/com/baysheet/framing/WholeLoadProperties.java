@@ -47,8 +47,8 @@ class WholeLoadProperties {
             if (rnd.nextDouble() < 0.2) own.put(m.id(), (double) rnd.nextInt(150));
             if (m.role() == MemberRole.INFILL_BEAM) continue;
             boolean onX = m.plan().x1() == m.plan().x2();
-            double[] along = positions(onX ? plain.grid().x() : plain.grid().y()), across = positions(onX ? plain.grid().y() : plain.grid().x());
-            int line = index(along, onX ? m.plan().x1() : m.plan().y1()), from = index(across, onX ? m.plan().y1() : m.plan().x1());
+            double[] along = GravityLoadProperties.positions(onX ? plain.grid().x() : plain.grid().y()), across = GravityLoadProperties.positions(onX ? plain.grid().y() : plain.grid().x());
+            int line = GravityLoadProperties.index(along, onX ? m.plan().x1() : m.plan().y1()), from = GravityLoadProperties.index(across, onX ? m.plan().y1() : m.plan().x1());
             if (rnd.nextDouble() < 0.4) {
                 double w = 1 + rnd.nextInt(400);
                 lines.add(GridLineLoad.dead(m.level(), onX, line, from, from + 1, "line " + n++, w));
@@ -84,7 +84,7 @@ class WholeLoadProperties {
                 case COLUMN -> w.column();
             };
             double perLength = w.of(m.id(), role);
-            expected += m.role() == MemberRole.COLUMN ? perLength * storeyBelow(byElevation, m.level()) : perLength * m.span();
+            expected += m.role() == MemberRole.COLUMN ? perLength * GravityLoadProperties.storeyBelow(byElevation, m.level()) : perLength * m.span();
         }
         double feetDead = 0, feetLive = 0, bareLive = 0;
         for (TakeDown t : d.takeDowns()) {
@@ -97,24 +97,5 @@ class WholeLoadProperties {
         assertThat(feetLive - bareLive).as("floor live, seed %d", seed).isCloseTo(live, within(1e-9 * Math.max(1, bareLive + live)));
         // the members are those of the plain model: loads and weights make and rename none
         assertThat(d.members().stream().map(DerivedMember::id).toList()).isEqualTo(bare.members().stream().map(DerivedMember::id).toList());
-    }
-
-    /** The column below a level runs to the next level down, or from the lowest level to elevation 0. */
-    private static double storeyBelow(List<Level> ascending, String level) {
-        for (int k = 0; k < ascending.size(); k++)
-            if (ascending.get(k).name().equals(level))
-                return k == 0 ? Math.max(0, ascending.get(0).elevation()) : ascending.get(k).elevation() - ascending.get(k - 1).elevation();
-        throw new AssertionError(level);
-    }
-
-    private static double[] positions(com.baysheet.framing.model.GridAxis a) {
-        double[] p = new double[a.lines()];
-        for (int i = 0; i < p.length; i++) p[i] = a.position(i);
-        return p;
-    }
-
-    private static int index(double[] p, double v) {
-        for (int i = 0; i < p.length; i++) if (Math.abs(p[i] - v) < 1e-9) return i;
-        throw new AssertionError(v);
     }
 }
