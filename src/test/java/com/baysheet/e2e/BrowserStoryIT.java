@@ -90,9 +90,14 @@ class BrowserStoryIT {
         page.press("Log out");
         firstPasswordWithCode("erin", erinCode, ENGINEER_PASSWORD);
         firstLogInByKeyboard("erin", ENGINEER_PASSWORD);
+        int before = page.posts;
         enterProject();
         enterGridAndLevels();
         enterBays();
+        int entry = page.posts - before;
+        System.out.println("BrowserStoryIT: the three-storey entry (project, grid, Level 2 and Roof, their bays) took "
+                + entry + " form submissions");
+        assertThat(entry).as("form submissions of the three-storey entry, one per press that posts a form").isPositive();
         String member = readMembersAndTakeDown(); // the girder's mark: its sheet is the mark's
         openSheet(member);
         Path checking = download("Checking copy (PDF)");

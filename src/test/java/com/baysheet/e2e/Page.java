@@ -35,6 +35,8 @@ final class Page {
     final WebDriver driver;
     final String base;
     final Map<String, List<String>> unlabelled = new LinkedHashMap<>();
+    /** Forms sent with method post so far (each button press or Enter that posts one): the cost of an entry in submissions. */
+    int posts;
 
     Page(WebDriver driver, String base) {
         this.driver = driver;
@@ -86,6 +88,7 @@ final class Page {
         WebElement b = form.findElements(By.tagName("button")).stream()
                 .filter(x -> x.getText().strip().equals(buttonText)).findFirst()
                 .orElseThrow(() -> new AssertionError("no button \"" + buttonText + "\" in the form on " + path()));
+        countIfPost(b);
         navigate(b::click);
     }
 
@@ -94,6 +97,7 @@ final class Page {
         WebElement b = driver.findElements(By.tagName("button")).stream()
                 .filter(x -> x.getText().strip().equals(buttonText)).findFirst()
                 .orElseThrow(() -> new AssertionError("no button \"" + buttonText + "\" on " + path()));
+        countIfPost(b);
         navigate(b::click);
     }
 
@@ -113,7 +117,14 @@ final class Page {
 
     /** Keys that end by submitting a form (Enter): waits for the next page. */
     void keysThenWait(CharSequence... keys) {
+        if (Boolean.TRUE.equals(js("var f = document.activeElement && document.activeElement.form;"
+                + " return !!f && f.method.toLowerCase() === 'post'"))) posts++;
         navigate(() -> keys(keys));
+    }
+
+    /** Counts a press of this button when it sends its form with method post. */
+    private void countIfPost(WebElement button) {
+        if (Boolean.TRUE.equals(js("var f = arguments[0].form; return !!f && f.method.toLowerCase() === 'post'", button))) posts++;
     }
 
     Object js(String script, Object... args) {
