@@ -24,7 +24,8 @@ import java.util.concurrent.TimeUnit;
  * while a timer renews its lease (and records the progress) every second or so. A job that is cancelled, or
  * whose lease another server took over, stops at the next sheet after the heartbeat finds it no longer running
  * for this server. Stopping the server puts a job under way back in the queue; a server that dies leaves it to
- * be claimed again when its lease runs out ({@value #LEASE_PROPERTY} seconds, 60 unless set).
+ * be claimed again when its lease runs out ({@value #LEASE_PROPERTY} seconds, 60 unless set). Packages render into
+ * this server's own {@link RenderFolder}, made at start (removing those a killed server left) and removed at stop.
  */
 public final class PackageWorker {
     public static final String LEASE_PROPERTY = "baysheet.packageLeaseSeconds";
@@ -37,11 +38,18 @@ public final class PackageWorker {
     private final Duration lease;
     private final Duration beat;
     private final String owner;
+    private final Path tempParent;
+    private RenderFolder folder;
     private volatile boolean running;
     private Thread thread;
     private ScheduledExecutorService heart;
 
     public PackageWorker(PackageJobs packages, Duration lease) {
+        this(packages, lease, RenderFolder.defaultParent());
+    }
+
+    /** @param tempParent where each server of the machine makes its folder for packages while they render */
+    PackageWorker(PackageJobs packages, Duration lease, Path tempParent) {
         if (lease.isNegative() || lease.isZero()) throw new IllegalArgumentException("lease: a positive time, not " + lease);
         this.packages = packages;
         this.jobs = packages.store();
@@ -49,6 +57,7 @@ public final class PackageWorker {
         // renewed well before it runs out: three beats to a lease, and at least each second for the progress bar
         this.beat = lease.dividedBy(3).compareTo(Duration.ofSeconds(1)) < 0 ? lease.dividedBy(3) : Duration.ofSeconds(1);
         this.owner = ownerName();
+        this.tempParent = tempParent;
     }
 
     /** The lease of {@value #LEASE_PROPERTY} (whole seconds, at least 1), 60 s when it is not set. */
@@ -65,6 +74,7 @@ public final class PackageWorker {
 
     public synchronized void start() {
         if (running) return;
+        folder = RenderFolder.open(tempParent, owner);
         running = true;
         heart = Executors.newSingleThreadScheduledExecutor(r -> daemon(r, "package-heartbeat"));
         thread = daemon(this::loop, "package-worker");
@@ -82,7 +92,12 @@ public final class PackageWorker {
             Thread.currentThread().interrupt();
         }
         heart.shutdownNow();
+        // a render still writing keeps its folder; the next start on this machine removes it once unlocked
+        if (!thread.isAlive()) folder.close();
     }
+
+    /** This server's folder for packages while they render (none before start). */
+    Path folder() { return folder == null ? null : folder.dir(); }
 
     public String owner() { return owner; }
 
@@ -112,7 +127,7 @@ public final class PackageWorker {
         ScheduledFuture<?> ticks = heart.scheduleAtFixedRate(b::tick, beat.toMillis(), beat.toMillis(), TimeUnit.MILLISECONDS);
         Path file = null;
         try {
-            file = Files.createTempFile("baysheet-package-", ".pdf");
+            file = folder.newFile();
             StreamedPdf pdf = packages.render(job, file, b);
             ticks.cancel(false);
             jobs.finish(job.id(), owner, file, pdf.sha256());

@@ -20,14 +20,23 @@ import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.time.Duration;
+import java.util.stream.Stream;
 import java.time.Instant;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-/** A server's package worker over a real database: a queued job rendered and stored; a scope the model lost fails by name. */
+/**
+ * A server's package worker over a real database: a queued job rendered and stored, leaving no file behind; a scope
+ * the model lost fails by name.
+ */
 class PackageWorkerTest {
+    @TempDir
+    Path temp;
     final TestClock clock = new TestClock(Instant.parse("2026-03-02T08:00:00Z"));
     Database db;
     Store store;
@@ -44,7 +53,7 @@ class PackageWorkerTest {
         Sql sql = new Sql(db.dataSource(), clock);
         jobs = new PackageJobStore(sql);
         packages = new PackageJobs(store, ReviewStore.on(sql), jobs, clock);
-        worker = new PackageWorker(packages, Duration.ofSeconds(3));
+        worker = new PackageWorker(packages, Duration.ofSeconds(3), temp);
     }
 
     @AfterEach
@@ -79,6 +88,25 @@ class PackageWorkerTest {
         assertThat(d.fileName()).isEqualTo(demo.info().jobNumber() + "-" + level + " package-checking-copy.pdf");
         try (PDDocument doc = Loader.loadPDF(d.pdf())) {
             assertThat(new PDFTextStripper().getText(doc)).contains("CHECK PRINT", level + " package");
+        }
+    }
+
+    @Test
+    void aRenderedPackageLeavesNoFileAndStoppingRemovesTheServersFolder() throws Exception {
+        Results.Computed c = store.results().of(demo.id());
+        String level = c.derived().members().get(0).level();
+        worker.start();
+        Path mine = worker.folder();
+        assertThat(mine.getParent()).isEqualTo(temp);
+        long id = packages.start(c, store.marks().of(demo.id(), c.derived()), PackageScope.ofLevel(level), "pia");
+        assertThat(finished(id).state()).isEqualTo(PackageJob.State.DONE);
+        try (Stream<Path> left = Files.list(mine)) {
+            assertThat(left.map(p -> p.getFileName().toString())).as("only the lock stays").containsExactly(RenderFolder.LOCK);
+        }
+        worker.stop();
+        worker = null;
+        try (Stream<Path> left = Files.list(temp)) {
+            assertThat(left).as("nothing of this server under the shared folder").isEmpty();
         }
     }
 

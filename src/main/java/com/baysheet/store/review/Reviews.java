@@ -68,6 +68,16 @@ public final class Reviews {
         return sql.tx(c -> Revisions.withPdf(c, sha256));
     }
 
+    /**
+     * Where an issued revision stands now: whether it was itself withdrawn, and its sheet's revision in force (none
+     * when the sheet's latest issue was withdrawn). A revision is superseded exactly when its state says so.
+     */
+    public record Standing(boolean withdrawn, Optional<StoredRevision> inForce) {}
+
+    public Standing standing(StoredRevision r) {
+        return sql.tx(c -> new Standing(Revisions.wasWithdrawn(c, r.id()), Revisions.inForce(c, r.sheet())));
+    }
+
     public void submit(SheetRef ref, long version, Caller who, LocalDate today, CalcRecord current) {
         String fp = CalcFingerprint.of(current);
         // on an issued sheet changed since issue, the submission opens the next revision; the issued one stays in force

@@ -103,6 +103,23 @@ final class Revisions {
         return list(c, SELECT + "WHERE r.pdf_sha256 = ? ORDER BY s.project_id, s.subject, r.revision_no", sha256);
     }
 
+    /** Whether this revision was withdrawn (its members were deleted while it was in force). */
+    static boolean wasWithdrawn(Connection c, long revisionId) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("SELECT COUNT(*) FROM sheet_revision WHERE id = ? AND withdrawn_at IS NOT NULL")) {
+            ps.setLong(1, revisionId);
+            try (ResultSet rs = ps.executeQuery()) {
+                rs.next();
+                return rs.getLong(1) > 0;
+            }
+        }
+    }
+
+    /** The sheet's revision in force: its issued revision, unless withdrawn. */
+    static Optional<StoredRevision> inForce(Connection c, SheetRef ref) throws SQLException {
+        return list(c, SELECT + "WHERE s.project_id = ? AND s.subject = ? AND r.state = 'ISSUED' AND r.withdrawn_at IS NULL",
+                ref.projectId(), ref.subject()).stream().findFirst();
+    }
+
     static Optional<byte[]> pdf(Connection c, long revisionId) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("SELECT pdf FROM sheet_revision WHERE id = ? AND pdf IS NOT NULL")) {
             ps.setLong(1, revisionId);

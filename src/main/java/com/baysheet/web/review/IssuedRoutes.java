@@ -58,7 +58,7 @@ public final class IssuedRoutes {
         long id = id(ctx.pathParam("revision"), "revision");
         StoredRevision r = review.reviews().revision(id);
         byte[] pdf = review.reviews().issuedPdf(id).orElseThrow(() -> new NotFound("issued copy of revision", id));
-        IssuedMatch match = IssuedMatch.of(store, r);
+        IssuedMatch match = IssuedMatch.of(store, review.reviews(), r);
         if (recorder != null) recorder.downloaded(ctx, r.sheet().label(), "revision " + r.revision().number() + ", " + match.fileName());
         pdf(ctx, pdf, match.fileName());
     }
@@ -85,8 +85,8 @@ public final class IssuedRoutes {
     }
 
     /**
-     * The verdict on an upload: which issued revisions it is, byte for byte, whether its signature is intact and the
-     * office's, or that it is not a PDF at all.
+     * The verdict on an upload: which issued revisions it is, byte for byte, whether each still stands (or was
+     * superseded or withdrawn), whether its signature is intact and the office's, or that it is not a PDF at all.
      */
     void verify(Context ctx) {
         UploadedFile f = ctx.uploadedFile("pdf");
@@ -102,7 +102,7 @@ public final class IssuedRoutes {
             return;
         }
         String sha = Tokens.sha256(bytes);
-        List<IssuedMatch> matches = review.reviews().withPdf(sha).stream().map(r -> IssuedMatch.of(store, r)).toList();
+        List<IssuedMatch> matches = review.reviews().withPdf(sha).stream().map(r -> IssuedMatch.of(store, review.reviews(), r)).toList();
         m.put("sha256", sha);
         m.put("matches", matches);
         m.put("verdict", Verdict.of(matches, issuing.checkSignature(bytes)));
