@@ -2,14 +2,17 @@ package com.baysheet.review;
 
 import com.baysheet.engine.InputError;
 
-import java.util.Arrays;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 /**
- * A text search over a project's mark sheets: each word typed must appear, in any case, in the sheet's mark, its
- * members' role, or one of the locations it lists (level and grid place, the member's name: "L2: Beam A-B/1-2 #1").
- * Words narrow the search, so "L2 G" finds the girders on L2. Blank text admits every sheet.
+ * A text search over a project's mark sheets, in any case: each word typed must appear in the sheet's mark or its
+ * members' role, or else all the remaining words in one of the locations it lists (level and grid place, the
+ * member's name: "Level 2: Girder A/1-2"), so that "Level 2" A/1-2 finds the girder on that line of that level and
+ * not one on another level. Words in double quotes are one phrase ("Level 2"). Blank text admits every sheet.
  */
 public record SheetSearch(String text, List<String> words) {
     /** The longest search text taken; a longer one is refused, naming the field. */
@@ -20,6 +23,9 @@ public record SheetSearch(String text, List<String> words) {
         words = List.copyOf(words);
     }
 
+    /** A phrase in double quotes, or a run of anything but blanks and quotes. */
+    private static final Pattern WORD = Pattern.compile("\"([^\"]*)\"?|([^\\s\"]+)");
+
     public static final SheetSearch ANY = of("");
 
     /** The search the person typed in the field {@code q}. */
@@ -27,8 +33,12 @@ public record SheetSearch(String text, List<String> words) {
         String t = typed == null ? "" : typed.strip();
         if (t.length() > MAX_LENGTH)
             throw new InputError("q", t.length() + " characters", "a search is at most " + MAX_LENGTH + " characters");
-        List<String> words = t.isEmpty() ? List.of()
-                : Arrays.stream(t.toLowerCase(Locale.ROOT).split("\\s+")).distinct().toList();
+        List<String> words = new ArrayList<>();
+        Matcher m = WORD.matcher(t.toLowerCase(Locale.ROOT));
+        while (m.find()) {
+            String w = (m.group(1) != null ? m.group(1) : m.group(2)).strip().replaceAll("\\s+", " ");
+            if (!w.isEmpty() && !words.contains(w)) words.add(w);
+        }
         return new SheetSearch(t, words);
     }
 
@@ -36,13 +46,9 @@ public record SheetSearch(String text, List<String> words) {
 
     public boolean admits(MarkSheets.MarkSheet s) {
         if (words.isEmpty()) return true;
-        String hay = haystack(s);
-        return words.stream().allMatch(hay::contains);
-    }
-
-    /** What a sheet is found by: mark, role in words, and every location, one per line so no word spans two. */
-    private static String haystack(MarkSheets.MarkSheet s) {
-        String role = s.group().role().name().replace('_', ' ');
-        return (s.text() + "\n" + role + "\n" + String.join("\n", s.group().locations())).toLowerCase(Locale.ROOT);
+        String named = (s.text() + "\n" + s.group().role().name().replace('_', ' ')).toLowerCase(Locale.ROOT);
+        List<String> rest = words.stream().filter(w -> !named.contains(w)).toList();
+        if (rest.isEmpty()) return true;
+        return s.group().locations().stream().map(l -> l.toLowerCase(Locale.ROOT)).anyMatch(l -> rest.stream().allMatch(l::contains));
     }
 }
