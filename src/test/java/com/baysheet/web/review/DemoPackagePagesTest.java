@@ -23,7 +23,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /**
  * The demo building's whole package (the largest demo project), counted page by page (read back with PDFBox):
- * before, one sheet per member with the take-downs alone; now, as the server renders a project package, one sheet
+ * before, one sheet per member with the take-downs alone (no plans or schedules); now, as the server renders a project package, one sheet
  * per mark with the criteria page, the framing plans, the schedules and the take-downs, labelled by marks. The
  * figures printed are those of docs/benchmarks.md.
  */
