@@ -57,17 +57,23 @@ public final class CheckQueue {
 
     /**
      * What the person asked to see: blank text means any; {@code state} null means any; {@code mine} only what
-     * waits for them.
+     * waits for them; {@code search} the words typed (mark, level, grid place, member names).
      */
-    public record Filter(String level, String role, SheetState state, String preparer, boolean mine) {
+    public record Filter(String level, String role, SheetState state, String preparer, boolean mine, SheetSearch search) {
         public Filter {
             level = blank(level);
             role = blank(role);
             preparer = blank(preparer);
+            search = search == null ? SheetSearch.ANY : search;
+        }
+
+        public Filter(String level, String role, SheetState state, String preparer, boolean mine) {
+            this(level, role, state, preparer, mine, SheetSearch.ANY);
         }
 
         boolean admitsAllButState(Entry e) {
-            return (level.isEmpty() || e.level().equals(level))
+            return search.admits(e.sheet())
+                    && (level.isEmpty() || e.level().equals(level))
                     && (role.isEmpty() || e.role().name().equalsIgnoreCase(role))
                     && (preparer.isEmpty() || e.preparerInitials().equalsIgnoreCase(preparer));
         }

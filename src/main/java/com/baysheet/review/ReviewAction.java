@@ -5,6 +5,7 @@ public enum ReviewAction {
     SUBMIT("submit for check"),
     RETURN("return with markups"),
     RESUBMIT("resubmit"),
+    TAKE_BACK("take back"),
     APPROVE("approve"),
     ISSUE("issue"),
     SUPERSEDE("supersede"),

@@ -66,6 +66,22 @@ public record SheetRevision(int number, SheetState state, Preparer preparer, Str
         return new SheetRevision(number, RESUBMITTED, new Preparer(a.userId(), a.initials(), on), inputs, null, null);
     }
 
+    /**
+     * Takes a submitted sheet back to being prepared, by its preparer, before any checker has acted on it: no markup
+     * on it yet. A resubmitted sheet was acted on already (returned with markups), so it stays with its checker.
+     */
+    public SheetRevision takeBack(Actor a, int markups) {
+        mayPrepare(ReviewAction.TAKE_BACK, a);
+        if (state != SUBMITTED)
+            throw new WrongState(ReviewAction.TAKE_BACK, state, "only a sheet submitted for check, before any checker has acted on it, is taken back");
+        if (!isPreparer(a))
+            throw new NotPermitted(ReviewAction.TAKE_BACK, "only its preparer (" + preparer.initials() + ") takes a submitted sheet back");
+        if (markups > 0)
+            throw new Markups(ReviewAction.TAKE_BACK, "a checker has begun: " + markups
+                    + " markup(s) are on it; ask the checker to return it instead");
+        return opened(number);
+    }
+
     public SheetRevision returnWithMarkups(Actor a, int openMarkups) {
         checker(ReviewAction.RETURN, a);
         if (!state.awaitingCheck()) throw new WrongState(ReviewAction.RETURN, state, "only a sheet awaiting its check is returned");

@@ -86,6 +86,19 @@ class SheetRevisionTest {
     }
 
     @Test
+    void thePreparerTakesASubmittedSheetBackUntilACheckerActsOnIt() {
+        SheetRevision back = submitted().takeBack(ENGINEER, 0);
+        assertThat(back).isEqualTo(SheetRevision.opened(submitted().number()));
+        assertThat(back.submit(ENGINEER, FP2, DAY).state()).isEqualTo(SheetState.SUBMITTED);
+        assertThatThrownBy(() -> submitted().takeBack(CHECKER, 0)).isInstanceOf(NotPermitted.class).hasMessageContaining("EP");
+        assertThatThrownBy(() -> submitted().takeBack(OTHER_ENGINEER, 0)).isInstanceOf(NotPermitted.class);
+        assertThatThrownBy(() -> submitted().takeBack(ADMIN, 0)).isInstanceOf(NotPermitted.class);
+        assertThatThrownBy(() -> submitted().takeBack(ENGINEER, 1)).isInstanceOf(Markups.class)
+                .hasMessageContaining("a checker has begun: 1 markup(s)");
+        assertThatThrownBy(() -> approved().takeBack(ENGINEER, 0)).isInstanceOf(WrongState.class).hasMessageContaining("approved");
+    }
+
+    @Test
     void returningNeedsAnOpenMarkupAndApprovingNeedsNone() {
         assertThatThrownBy(() -> submitted().returnWithMarkups(CHECKER, 0)).isInstanceOf(Markups.class);
         assertThatThrownBy(() -> submitted().approve(CHECKER, DAY, 1, FP)).isInstanceOf(Markups.class)
@@ -111,6 +124,7 @@ class SheetRevisionTest {
         expect(s.awaitingCheck(), () -> r.returnWithMarkups(CHECKER, 1));
         expect(s.awaitingCheck(), () -> r.approve(CHECKER, DAY, 0, FP));
         expect(s == SheetState.RETURNED, () -> r.resubmit(ENGINEER, FP, DAY));
+        expect(s == SheetState.SUBMITTED, () -> r.takeBack(ENGINEER, 0));
         expect(s == SheetState.APPROVED, () -> r.issue(CHECKER, DAY, PDF, FP, "First issue"));
         expect(s == SheetState.ISSUED, () -> r.reopen(FP2));
         expect(s == SheetState.ISSUED, r::supersededByNext);

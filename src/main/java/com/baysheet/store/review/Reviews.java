@@ -94,6 +94,15 @@ public final class Reviews {
         step(ref, version, who, "resubmit", r -> r.resubmit(who.actor(), fp, today), RecordSnapshot.write(current), null);
     }
 
+    /** The preparer takes their submitted sheet back to being prepared; the calculation as submitted is dropped with it. */
+    public void takeBack(SheetRef ref, long version, Caller who) {
+        sql.tx(c -> {
+            StoredRevision cur = current(c, ref);
+            int markups = cur.stored() ? Markups.forRevision(c, cur.id()).size() : 0;
+            return apply(c, cur, version, who, "take back", r -> r.takeBack(who.actor(), markups), null, null, sql.now());
+        });
+    }
+
     public void returnWithMarkups(SheetRef ref, long version, Caller who) {
         sql.tx(c -> {
             StoredRevision cur = current(c, ref);

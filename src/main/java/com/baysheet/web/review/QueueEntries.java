@@ -40,11 +40,11 @@ final class QueueEntries {
         return out;
     }
 
-    /** The queue's filter from the query: level, role, state, preparer's initials, and {@code show=all} for every sheet. */
+    /** The queue's filter from the query: level, role, state, preparer's initials, search words, and {@code show=all} for every sheet. */
     static CheckQueue.Filter filter(Context ctx) {
         String state = ctx.queryParam("state");
         return new CheckQueue.Filter(ctx.queryParam("level"), ctx.queryParam("role"), state(state),
-                ctx.queryParam("preparer"), !"all".equals(ctx.queryParam("show")));
+                ctx.queryParam("preparer"), !"all".equals(ctx.queryParam("show")), com.baysheet.review.SheetSearch.of(ctx.queryParam("q")));
     }
 
     private static SheetState state(String text) {

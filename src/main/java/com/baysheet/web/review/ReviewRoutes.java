@@ -50,6 +50,7 @@ public final class ReviewRoutes {
         for (String base : SHEETS) {
             r.post(base + "/submit", ctx -> act(ctx, (s, v) -> reviews().submit(s.ref(), v, caller(ctx), today(), s.current())), Admit.PREPARER);
             r.post(base + "/resubmit", ctx -> act(ctx, (s, v) -> reviews().resubmit(s.ref(), v, caller(ctx), today(), s.current())), Admit.PREPARER);
+            r.post(base + "/take-back", ctx -> act(ctx, (s, v) -> reviews().takeBack(s.ref(), v, caller(ctx))), Admit.PREPARER);
             r.post(base + "/return", ctx -> act(ctx, (s, v) -> reviews().returnWithMarkups(s.ref(), v, caller(ctx))), Admit.PREPARER);
             r.post(base + "/approve", ctx -> act(ctx, (s, v) -> reviews().approve(s.ref(), v, caller(ctx), today(), s.current())), Admit.PREPARER);
             r.post(base + "/issue", this::issue, Admit.PREPARER);
@@ -61,7 +62,9 @@ public final class ReviewRoutes {
         var computed = store.results().of(project);
         Map<String, Object> m = new HashMap<>();
         m.put("project", computed.project());
-        m.put("marks", store.marks().of(project, computed.derived()).all());
+        var search = com.baysheet.review.SheetSearch.of(ctx.queryParam("q"));
+        m.put("search", search);
+        m.put("marks", store.marks().of(project, computed.derived()).all().stream().filter(search::admits).toList());
         m.put("packages", PackageScope.all(computed.derived()));
         m.put("sheets", latestBySubject(project));
         m.put("withdrawn", reviews().withdrawn(project));

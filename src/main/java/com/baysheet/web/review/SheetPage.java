@@ -21,8 +21,9 @@ record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChange
     /**
      * The buttons shown to this user. {@code resolve}: a checker other than the preparer resolves a markup while the
      * check is open, also on a returned sheet, where a markup the preparer answered needs no change to the model.
+     * {@code takeBack}: the preparer takes their submitted sheet back while no checker has acted on it (no markup).
      */
-    record Offer(boolean submit, boolean resubmit, boolean check, boolean issue, boolean reply, boolean resolve) {}
+    record Offer(boolean submit, boolean resubmit, boolean check, boolean issue, boolean reply, boolean resolve, boolean takeBack) {}
 
     static SheetPage of(Reviews.SheetView v, CalcRecord currentRecord, User user) {
         StoredRevision cur = v.current();
@@ -35,10 +36,10 @@ record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChange
         boolean withdrawn = v.withdrawn() && r.state() == SheetState.ISSUED;
         boolean sinceIssue = r.outdatedBy(now) && !withdrawn;
         return new SheetPage(cur, shown, changed, sinceIssue, withdrawn, v.markups(), v.history(),
-                offer(r, user, changed, sinceIssue || withdrawn));
+                offer(r, user, changed, sinceIssue || withdrawn, v.markups().isEmpty()));
     }
 
-    private static Offer offer(SheetRevision r, User u, boolean changed, boolean sinceIssue) {
+    private static Offer offer(SheetRevision r, User u, boolean changed, boolean sinceIssue, boolean noMarkups) {
         boolean preparer = r.preparer() != null && r.preparer().userId() == u.id();
         boolean otherChecker = u.role().mayCheck() && !preparer;
         SheetState s = r.state();
@@ -47,7 +48,8 @@ record SheetPage(StoredRevision current, CalcRecord record, boolean inputsChange
                 otherChecker && s.awaitingCheck(),
                 otherChecker && s == SheetState.APPROVED,
                 (preparer || u.role().mayCheck()) && (s.awaitingCheck() || s == SheetState.RETURNED),
-                otherChecker && (s.awaitingCheck() || s == SheetState.RETURNED));
+                otherChecker && (s.awaitingCheck() || s == SheetState.RETURNED),
+                preparer && s == SheetState.SUBMITTED && noMarkups);
     }
 
     /** The markups on one target code ("sheet", "input:KEY", "step:SYMBOL"). */

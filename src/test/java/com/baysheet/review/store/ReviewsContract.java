@@ -126,6 +126,28 @@ abstract class ReviewsContract {
     }
 
     @Test
+    void theNextRevisionTakenBackLeavesTheIssuedOneInForceAndIsSubmittedAgain() {
+        throughIssue(record(20));
+        reviews().submit(ref, current().version(), engineer, DAY, record(24));
+        assertThatThrownBy(() -> reviews().takeBack(ref, version(), checker)).isInstanceOf(ReviewRefused.NotPermitted.class);
+        reviews().takeBack(ref, version(), engineer);
+        List<StoredRevision> h = reviews().view(ref).history();
+        assertThat(h).extracting(s -> s.revision().number()).containsExactly(1, 2);
+        assertThat(h.get(0).revision().state()).as("the issued revision stays in force").isEqualTo(SheetState.ISSUED);
+        assertThat(h.get(1).revision().state()).isEqualTo(SheetState.PREPARING);
+        assertThat(h.get(1).revision().preparer()).isNull();
+        assertThat(h.get(1).record()).as("the calculation as submitted goes with the submission").isEmpty();
+        assertThat(store.audit().all()).filteredOn(e -> e.action().equals("take back")).hasSize(1)
+                .allMatch(e -> e.actorUsername().equals("eve") && e.detail().equals("revision 2 now being prepared"));
+
+        reviews().submit(ref, version(), engineer, DAY, record(24));
+        h = reviews().view(ref).history();
+        assertThat(h).extracting(s -> s.revision().number()).as("submitted again as the same revision").containsExactly(1, 2);
+        assertThat(h.get(1).revision().state()).isEqualTo(SheetState.SUBMITTED);
+        assertThat(h.get(1).record()).contains(record(24));
+    }
+
+    @Test
     void issuedWorkRefusesEveryChangeAndStaysAsItWas() {
         throughIssue(record(20));
         StoredRevision before = current();
