@@ -13,7 +13,8 @@ import java.util.List;
 /**
  * Loads the invented demo projects of demo-data/ (listed in demo-data/index.json) through the same store
  * calls and validation a user's entries go through. Bays are assigned in file order, so a file lists
- * cantilevers after the bays that make their edge an edge, and a level's line and point loads after its bays.
+ * cantilevers after the bays that make their edge an edge, and a level's line and point loads after its bays; a
+ * project's own self weights by role, where the file gives them, are set first.
  */
 public final class Demo {
     private static final ObjectMapper JSON = new ObjectMapper();
@@ -38,6 +39,10 @@ public final class Demo {
             store.projects().submittals().save(Editor.DEMO, id, version(store, id), new com.baysheet.framing.model.Submittal(made.info().address(),
                     made.info().client(), sub.path("engineerOfRecord").asText(""), sub.path("licenceNumber").asText(""),
                     sub.path("licenceState").asText(""), sub.path("buildingCode").asText(""), sub.path("codeYear").asText("")));
+        JsonNode own = p.path("selfWeights");
+        if (own.isObject())
+            store.selfWeights().set(Editor.DEMO, id, version(store, id), new ProjectSelfWeights(own.path("infillBeam").asDouble(),
+                    own.path("gridBeam").asDouble(), own.path("girder").asDouble(), own.path("column").asDouble()));
         store.grids().save(Editor.DEMO, id, version(store, id), ModelJson.grid(p.path("grid")));
         for (JsonNode l : p.path("levels")) {
             long levelId = store.levels().add(Editor.DEMO, id, version(store, id), ModelJson.level(l)).id();

@@ -23,6 +23,8 @@ class SelfWeightPagesTest {
 
     @Test
     void projectValuesOverrideTheFirmDefaultsAndTheSheetsSaySo() {
+        // the demo project states its own self weights: start from the firm's defaults
+        server.store.selfWeights().set(com.baysheet.store.Editor.DEMO, project(), server.version(project()), null);
         String settings = "/projects/" + project() + "/settings";
         assertThat(server.get(settings).body()).contains("Self weight of the members", "takes the firm", "licensed engineer");
         assertThat(member("GIRDER")).doesNotContain("project value for girders");
