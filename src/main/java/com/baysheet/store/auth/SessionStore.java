@@ -6,7 +6,6 @@ import org.jdbi.v3.core.statement.Update;
 
 import java.time.Instant;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.Optional;
 import java.util.function.Function;
 
@@ -70,9 +69,5 @@ public final class SessionStore {
                 return binds.apply(h.createUpdate(statement)).execute();
             }
         });
-    }
-
-    static OffsetDateTime at(Instant t) {
-        return t.atOffset(ZoneOffset.UTC);
     }
 }
