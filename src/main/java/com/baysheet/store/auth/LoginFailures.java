@@ -4,17 +4,15 @@ import com.baysheet.auth.LoginThrottle;
 import com.baysheet.store.Duplicate;
 import com.baysheet.store.Sql;
 
-import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
+import org.jdbi.v3.core.Handle;
+import org.jdbi.v3.core.statement.Update;
+
 import java.sql.SQLException;
 import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
-
-import static com.baysheet.store.auth.SessionStore.at;
 
 /**
  * The throttle's counters per username and per client address, in the database so that every server
@@ -42,19 +40,19 @@ public final class LoginFailures {
         ensure(USER, u, now);
         ensure(ADDRESS, a, now);
         return sql.tx(c -> {
-            // locked in one order (address, then user) by every transaction, so two attempts cannot deadlock
-            Row ra = lock(c, ADDRESS, a, now, t), ru = lock(c, USER, u, now, t);
-            Instant until = ra.waitUntil.isAfter(ru.waitUntil) ? ra.waitUntil : ru.waitUntil;
-            if (until.isAfter(now)) {
-                update(c, "refused = refused + 1, attempts = attempts + 1", ADDRESS, a, null);
-                update(c, "refused = refused + 1, attempts = attempts + 1", USER, u, null);
-                return new Gate(Optional.of(until), 0, 0);
+            try (Handle h = Sql.on(c)) {
+                // locked in one order (address, then user) by every transaction, so two attempts cannot deadlock
+                Row ra = lock(h, ADDRESS, a, now, t), ru = lock(h, USER, u, now, t);
+                Instant until = ra.waitUntil.isAfter(ru.waitUntil) ? ra.waitUntil : ru.waitUntil;
+                if (until.isAfter(now)) {
+                    update(h, "refused = refused + 1, attempts = attempts + 1", ADDRESS, a).execute();
+                    update(h, "refused = refused + 1, attempts = attempts + 1", USER, u).execute();
+                    return new Gate(Optional.of(until), 0, 0);
+                }
+                failed(h, ADDRESS, a, now, now.plus(t.waitForAddress(ra.failures + 1)));
+                failed(h, USER, u, now, now.plus(t.waitForUser(ru.failures + 1)));
+                return new Gate(Optional.empty(), ru.refused, ra.refused);
             }
-            update(c, "failures = failures + 1, attempts = attempts + 1, refused = 0, last_failure = ?, wait_until = ?",
-                    ADDRESS, a, new Instant[]{now, now.plus(t.waitForAddress(ra.failures + 1))});
-            update(c, "failures = failures + 1, attempts = attempts + 1, refused = 0, last_failure = ?, wait_until = ?",
-                    USER, u, new Instant[]{now, now.plus(t.waitForUser(ru.failures + 1))});
-            return new Gate(Optional.empty(), ru.refused, ra.refused);
         });
     }
 
@@ -65,17 +63,13 @@ public final class LoginFailures {
     public int succeeded(String username, String address) {
         String u = clip(username), a = clip(address);
         return sql.tx(c -> {
-            update(c, "failures = failures - 1, attempts = attempts - 1", ADDRESS, a, null);
-            int before = 0;
-            try (PreparedStatement ps = c.prepareStatement("SELECT attempts FROM login_attempt WHERE kind = ? AND subject = ? FOR UPDATE")) {
-                ps.setString(1, USER);
-                ps.setString(2, u);
-                try (ResultSet rs = ps.executeQuery()) {
-                    if (rs.next()) before = rs.getInt(1) - 1;
-                }
+            try (Handle h = Sql.on(c)) {
+                update(h, "failures = failures - 1, attempts = attempts - 1", ADDRESS, a).execute();
+                int before = attempts(h, u).map(n -> n - 1).orElse(0);
+                h.createUpdate("DELETE FROM login_attempt WHERE kind = :kind AND subject = :subject").bind("kind", USER)
+                        .bind("subject", u).execute();
+                return Math.max(0, before);
             }
-            delete(c, u);
-            return Math.max(0, before);
         });
     }
 
@@ -86,16 +80,11 @@ public final class LoginFailures {
     public int unlock(String username, Instant now) {
         String u = clip(username);
         return sql.tx(c -> {
-            int n = 0;
-            try (PreparedStatement ps = c.prepareStatement("SELECT attempts FROM login_attempt WHERE kind = ? AND subject = ? FOR UPDATE")) {
-                ps.setString(1, USER);
-                ps.setString(2, u);
-                try (ResultSet rs = ps.executeQuery()) {
-                    if (rs.next()) n = rs.getInt(1);
-                }
+            try (Handle h = Sql.on(c)) {
+                int n = attempts(h, u).orElse(0);
+                update(h, "failures = 0, refused = 0, wait_until = :until", USER, u).bind("until", Sql.stampOf(now)).execute();
+                return n;
             }
-            update(c, "failures = 0, refused = 0, wait_until = ?", USER, u, new Instant[]{now});
-            return n;
         });
     }
 
@@ -103,13 +92,11 @@ public final class LoginFailures {
     public Map<String, Waiting> waiting(Instant now) {
         return sql.tx(c -> {
             Map<String, Waiting> out = new HashMap<>();
-            try (PreparedStatement ps = c.prepareStatement(
-                    "SELECT subject, attempts, wait_until FROM login_attempt WHERE kind = ? AND wait_until > ?")) {
-                ps.setString(1, USER);
-                ps.setObject(2, at(now));
-                try (ResultSet rs = ps.executeQuery()) {
-                    while (rs.next()) out.put(rs.getString(1), new Waiting(rs.getInt(2), rs.getObject(3, OffsetDateTime.class).toInstant()));
-                }
+            try (Handle h = Sql.on(c)) {
+                h.createQuery("SELECT subject, attempts, wait_until FROM login_attempt WHERE kind = :kind AND wait_until > :now")
+                        .bind("kind", USER).bind("now", Sql.stampOf(now))
+                        .map((rs, ctx) -> Map.entry(rs.getString(1), new Waiting(rs.getInt(2), rs.getObject(3, OffsetDateTime.class).toInstant())))
+                        .forEach(e -> out.put(e.getKey(), e.getValue()));
             }
             return out;
         });
@@ -118,69 +105,57 @@ public final class LoginFailures {
     /** The counts before the attempt; a count untouched for the throttle's forget time starts again. */
     private record Row(int failures, int refused, Instant waitUntil) {}
 
-    private static Row lock(Connection c, String kind, String subject, Instant now, LoginThrottle t) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(
-                "SELECT failures, refused, last_failure, wait_until FROM login_attempt WHERE kind = ? AND subject = ? FOR UPDATE")) {
-            ps.setString(1, kind);
-            ps.setString(2, subject);
-            try (ResultSet rs = ps.executeQuery()) {
-                rs.next();
-                Instant last = rs.getObject(3, OffsetDateTime.class).toInstant();
-                Instant until = rs.getObject(4, OffsetDateTime.class).toInstant();
-                if (!last.plus(t.forgetAfter()).isBefore(now) || until.isAfter(now)) return new Row(rs.getInt(1), rs.getInt(2), until);
-            }
-        }
-        update(c, "failures = 0, refused = 0, attempts = 0", kind, subject, null);
+    private record Stored(int failures, int refused, Instant lastFailure, Instant waitUntil) {}
+
+    private static Row lock(Handle h, String kind, String subject, Instant now, LoginThrottle t) throws SQLException {
+        Stored s = h.createQuery("SELECT failures, refused, last_failure, wait_until FROM login_attempt "
+                        + "WHERE kind = :kind AND subject = :subject FOR UPDATE").bind("kind", kind).bind("subject", subject)
+                .map((rs, ctx) -> new Stored(rs.getInt(1), rs.getInt(2), rs.getObject(3, OffsetDateTime.class).toInstant(),
+                        rs.getObject(4, OffsetDateTime.class).toInstant()))
+                .findFirst().orElseThrow(() -> new SQLException("no login_attempt row for " + kind + " " + subject + " to lock"));
+        if (!s.lastFailure.plus(t.forgetAfter()).isBefore(now) || s.waitUntil.isAfter(now)) return new Row(s.failures, s.refused, s.waitUntil);
+        update(h, "failures = 0, refused = 0, attempts = 0", kind, subject).execute();
         return new Row(0, 0, now);
+    }
+
+    /** The username's attempts, its row locked until the transaction ends; empty if it has none. */
+    private static Optional<Integer> attempts(Handle h, String username) {
+        return h.createQuery("SELECT attempts FROM login_attempt WHERE kind = :kind AND subject = :subject FOR UPDATE")
+                .bind("kind", USER).bind("subject", username).mapTo(Integer.class).findFirst();
     }
 
     /** Drops the counts nobody has touched for the forget time (typed usernames that are nobody's, old addresses). */
     public void prune(Instant now, LoginThrottle t) {
         sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("DELETE FROM login_attempt WHERE last_failure < ? AND wait_until < ?")) {
-                ps.setObject(1, at(now.minus(t.forgetAfter())));
-                ps.setObject(2, at(now));
-                return ps.executeUpdate();
+            try (Handle h = Sql.on(c)) {
+                return h.createUpdate("DELETE FROM login_attempt WHERE last_failure < :forgotten AND wait_until < :now")
+                        .bind("forgotten", Sql.stampOf(now.minus(t.forgetAfter()))).bind("now", Sql.stampOf(now)).execute();
             }
         });
     }
 
-    private static void update(Connection c, String set, String kind, String subject, Instant[] times) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("UPDATE login_attempt SET " + set + " WHERE kind = ? AND subject = ?")) {
-            int i = 1;
-            if (times != null) for (Instant t : times) ps.setObject(i++, at(t));
-            ps.setString(i++, kind);
-            ps.setString(i, subject);
-            ps.executeUpdate();
-        }
+    /** A failed attempt counted, and the wait it starts. */
+    private static void failed(Handle h, String kind, String subject, Instant now, Instant waitUntil) {
+        update(h, "failures = failures + 1, attempts = attempts + 1, refused = 0, last_failure = :last, wait_until = :until",
+                kind, subject).bind("last", Sql.stampOf(now)).bind("until", Sql.stampOf(waitUntil)).execute();
     }
 
-    private static void delete(Connection c, String username) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("DELETE FROM login_attempt WHERE kind = ? AND subject = ?")) {
-            ps.setString(1, USER);
-            ps.setString(2, username);
-            ps.executeUpdate();
-        }
+    /** An update of one counter row; the caller binds any further names in {@code set} and runs it. */
+    private static Update update(Handle h, String set, String kind, String subject) {
+        return h.createUpdate("UPDATE login_attempt SET " + set + " WHERE kind = :kind AND subject = :subject")
+                .bind("kind", kind).bind("subject", subject);
     }
 
     /** Makes the row to lock; two attempts making it at once both go on (the second insert loses, harmlessly). */
     private void ensure(String kind, String subject, Instant now) {
         try {
             sql.tx(c -> {
-                try (PreparedStatement q = c.prepareStatement("SELECT 1 FROM login_attempt WHERE kind = ? AND subject = ?")) {
-                    q.setString(1, kind);
-                    q.setString(2, subject);
-                    try (ResultSet rs = q.executeQuery()) {
-                        if (rs.next()) return 0;
-                    }
-                }
-                try (PreparedStatement ps = c.prepareStatement("INSERT INTO login_attempt (kind, subject, failures, refused, "
-                        + "attempts, last_failure, wait_until) VALUES (?, ?, 0, 0, 0, ?, ?)")) {
-                    ps.setString(1, kind);
-                    ps.setString(2, subject);
-                    ps.setObject(3, at(now));
-                    ps.setObject(4, at(now));
-                    return ps.executeUpdate();
+                try (Handle h = Sql.on(c)) {
+                    if (h.createQuery("SELECT 1 FROM login_attempt WHERE kind = :kind AND subject = :subject").bind("kind", kind)
+                            .bind("subject", subject).mapTo(Integer.class).findFirst().isPresent()) return 0;
+                    return h.createUpdate("INSERT INTO login_attempt (kind, subject, failures, refused, attempts, last_failure, "
+                                    + "wait_until) VALUES (:kind, :subject, 0, 0, 0, :now, :now)").bind("kind", kind)
+                            .bind("subject", subject).bind("now", Sql.stampOf(now)).execute();
                 }
             });
         } catch (Duplicate raced) {

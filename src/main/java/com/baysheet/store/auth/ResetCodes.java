@@ -7,14 +7,12 @@ import com.baysheet.engine.InputError;
 import com.baysheet.review.AuditEvent;
 import com.baysheet.store.Sql;
 import com.baysheet.store.review.AuditTrail;
+import org.jdbi.v3.core.Handle;
 
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
 import java.time.Clock;
 import java.time.Duration;
 import java.time.Instant;
 import java.time.OffsetDateTime;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
@@ -51,21 +49,13 @@ public final class ResetCodes {
         Instant now = now(), expires = now.plus(LIFETIME);
         sql.tx(c -> {
             // one live code per person: a new one voids any earlier one not yet used
-            try (PreparedStatement ps = c.prepareStatement("UPDATE password_reset SET expires_at = ? WHERE user_id = ? "
-                    + "AND used_at IS NULL AND expires_at > ?")) {
-                ps.setObject(1, Sql.stamp(now));
-                ps.setLong(2, u.id());
-                ps.setObject(3, Sql.stamp(now));
-                ps.executeUpdate();
-            }
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO password_reset (code_hash, user_id, made_by, made_at, "
-                    + "expires_at, told) VALUES (?, ?, ?, ?, ?, FALSE)")) {
-                ps.setString(1, ResetCode.hash(code));
-                ps.setLong(2, u.id());
-                ps.setString(3, admin.username());
-                ps.setObject(4, Sql.stamp(now));
-                ps.setObject(5, Sql.stamp(expires));
-                ps.executeUpdate();
+            try (Handle h = Sql.on(c)) {
+                h.createUpdate("UPDATE password_reset SET expires_at = :now WHERE user_id = :user AND used_at IS NULL "
+                        + "AND expires_at > :now").bind("now", Sql.stampOf(now)).bind("user", u.id()).execute();
+                h.createUpdate("INSERT INTO password_reset (code_hash, user_id, made_by, made_at, expires_at, told) "
+                                + "VALUES (:hash, :user, :madeBy, :now, :expires, FALSE)").bind("hash", ResetCode.hash(code))
+                        .bind("user", u.id()).bind("madeBy", admin.username()).bind("now", Sql.stampOf(now))
+                        .bind("expires", Sql.stampOf(expires)).execute();
             }
             AuditTrail.append(c, AuditEvent.of(admin.id(), admin.username(), "reset code made", "user " + u.username(),
                     "one-time code valid until " + expires.truncatedTo(java.time.temporal.ChronoUnit.SECONDS)
@@ -91,27 +81,19 @@ public final class ResetCodes {
         sql.tx(c -> {
             String madeBy;
             // the claim and the new password commit together: a code is spent exactly when it set a password
-            try (PreparedStatement ps = c.prepareStatement("SELECT made_by FROM password_reset WHERE code_hash = ? "
-                    + "AND user_id = ? AND used_at IS NULL AND expires_at > ? FOR UPDATE")) {
-                ps.setString(1, ResetCode.hash(code));
-                ps.setLong(2, u.id());
-                ps.setObject(3, Sql.stamp(now));
-                try (ResultSet rs = ps.executeQuery()) {
-                    if (!rs.next()) throw new InputError("code", "(hidden)", REFUSED);
-                    madeBy = rs.getString(1);
-                }
-            }
-            try (PreparedStatement ps = c.prepareStatement("UPDATE password_reset SET used_at = ?, used_from = ?, told = FALSE "
-                    + "WHERE code_hash = ? AND used_at IS NULL")) {
-                ps.setObject(1, Sql.stamp(now));
-                ps.setString(2, address);
-                ps.setString(3, ResetCode.hash(code));
-                if (ps.executeUpdate() != 1) throw new InputError("code", "(hidden)", REFUSED);
+            try (Handle h = Sql.on(c)) {
+                madeBy = h.createQuery("SELECT made_by FROM password_reset WHERE code_hash = :hash AND user_id = :user "
+                                + "AND used_at IS NULL AND expires_at > :now FOR UPDATE").bind("hash", ResetCode.hash(code))
+                        .bind("user", u.id()).bind("now", Sql.stampOf(now)).map((rs, ctx) -> rs.getString(1)).findFirst()
+                        .orElseThrow(() -> new InputError("code", "(hidden)", REFUSED));
+                if (h.createUpdate("UPDATE password_reset SET used_at = :now, used_from = :address, told = FALSE "
+                                + "WHERE code_hash = :hash AND used_at IS NULL").bind("now", Sql.stampOf(now))
+                        .bind("address", address).bind("hash", ResetCode.hash(code)).execute() != 1)
+                    throw new InputError("code", "(hidden)", REFUSED);
             }
             UserStore.setPassword(c, u.id(), hash, false); // chosen by the person themselves
-            try (PreparedStatement ps = c.prepareStatement("DELETE FROM user_session WHERE user_id = ?")) {
-                ps.setLong(1, u.id());
-                ps.executeUpdate();
+            try (Handle h = Sql.on(c)) {
+                h.createUpdate("DELETE FROM user_session WHERE user_id = :user").bind("user", u.id()).execute();
             }
             AuditTrail.append(c, AuditEvent.of(u.id(), u.username(), "password reset", "user " + u.username(),
                     "chosen by the person with a one-time code made by " + madeBy, address), now);
@@ -122,20 +104,15 @@ public final class ResetCodes {
     /** What the person is told at login about resets made for them since they were last told; marks them told. */
     public List<String> notices(long userId) {
         return sql.tx(c -> {
-            List<String> out = new ArrayList<>();
-            try (PreparedStatement ps = c.prepareStatement("SELECT made_by, made_at, used_at, used_from FROM password_reset "
-                    + "WHERE user_id = ? AND told = FALSE ORDER BY made_at")) {
-                ps.setLong(1, userId);
-                try (ResultSet rs = ps.executeQuery()) {
-                    while (rs.next()) out.add(notice(rs.getString(1), rs.getObject(2, OffsetDateTime.class),
-                            rs.getObject(3, OffsetDateTime.class), rs.getString(4)));
-                }
+            try (Handle h = Sql.on(c)) {
+                List<String> out = h.createQuery("SELECT made_by, made_at, used_at, used_from FROM password_reset "
+                                + "WHERE user_id = :user AND told = FALSE ORDER BY made_at").bind("user", userId)
+                        .map((rs, ctx) -> notice(rs.getString(1), rs.getObject(2, OffsetDateTime.class),
+                                rs.getObject(3, OffsetDateTime.class), rs.getString(4))).list();
+                h.createUpdate("UPDATE password_reset SET told = TRUE WHERE user_id = :user AND told = FALSE").bind("user", userId)
+                        .execute();
+                return out;
             }
-            try (PreparedStatement ps = c.prepareStatement("UPDATE password_reset SET told = TRUE WHERE user_id = ? AND told = FALSE")) {
-                ps.setLong(1, userId);
-                ps.executeUpdate();
-            }
-            return out;
         });
     }
 

@@ -1,13 +1,13 @@
 package com.baysheet.store.auth;
 
 import com.baysheet.store.Sql;
+import org.jdbi.v3.core.Handle;
+import org.jdbi.v3.core.statement.Update;
 
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
 import java.time.Instant;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.Optional;
+import java.util.function.Function;
 
 /** Logged-in sessions by the SHA-256 of their cookie value. */
 public final class SessionStore {
@@ -21,64 +21,53 @@ public final class SessionStore {
     }
 
     public void create(StoredSession s) {
-        sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO user_session (token_hash, user_id, csrf_token, "
-                    + "created_at, expires_at) VALUES (?, ?, ?, ?, ?)")) {
-                ps.setString(1, s.tokenHash());
-                ps.setLong(2, s.userId());
-                ps.setString(3, s.csrfToken());
-                ps.setObject(4, at(s.createdAt()));
-                ps.setObject(5, at(s.expiresAt()));
-                return ps.executeUpdate();
-            }
-        });
+        run("INSERT INTO user_session (token_hash, user_id, csrf_token, created_at, expires_at) "
+                + "VALUES (:hash, :user, :csrf, :createdAt, :expiresAt)", u -> u.bind("hash", s.tokenHash())
+                .bind("user", s.userId()).bind("csrf", s.csrfToken()).bind("createdAt", Sql.stampOf(s.createdAt()))
+                .bind("expiresAt", Sql.stampOf(s.expiresAt())));
     }
 
     public Optional<StoredSession> find(String tokenHash) {
         return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT token_hash, user_id, csrf_token, created_at, expires_at "
-                    + "FROM user_session WHERE token_hash = ?")) {
-                ps.setString(1, tokenHash);
-                try (ResultSet rs = ps.executeQuery()) {
-                    if (!rs.next()) return Optional.empty();
-                    return Optional.of(new StoredSession(rs.getString(1), rs.getLong(2), rs.getString(3),
-                            rs.getObject(4, OffsetDateTime.class).toInstant(), rs.getObject(5, OffsetDateTime.class).toInstant()));
-                }
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT token_hash, user_id, csrf_token, created_at, expires_at FROM user_session "
+                                + "WHERE token_hash = :hash").bind("hash", tokenHash)
+                        .map((rs, ctx) -> new StoredSession(rs.getString(1), rs.getLong(2), rs.getString(3),
+                                rs.getObject(4, OffsetDateTime.class).toInstant(), rs.getObject(5, OffsetDateTime.class).toInstant()))
+                        .findFirst();
             }
         });
     }
 
     public void extend(String tokenHash, Instant expiresAt) {
-        run("UPDATE user_session SET expires_at = ? WHERE token_hash = ?", at(expiresAt), tokenHash);
+        run("UPDATE user_session SET expires_at = :expiresAt WHERE token_hash = :hash",
+                u -> u.bind("expiresAt", Sql.stampOf(expiresAt)).bind("hash", tokenHash));
     }
 
     public void delete(String tokenHash) {
-        run("DELETE FROM user_session WHERE token_hash = ?", tokenHash);
+        run("DELETE FROM user_session WHERE token_hash = :hash", u -> u.bind("hash", tokenHash));
     }
 
     /** Ends every session of a user but one (after a password change, the other browsers are logged out). */
     public void deleteOthers(long userId, String keepTokenHash) {
-        run("DELETE FROM user_session WHERE user_id = ? AND token_hash <> ?", userId, keepTokenHash);
+        run("DELETE FROM user_session WHERE user_id = :user AND token_hash <> :keep",
+                u -> u.bind("user", userId).bind("keep", keepTokenHash));
     }
 
     public void deleteAll(long userId) {
-        run("DELETE FROM user_session WHERE user_id = ?", userId);
+        run("DELETE FROM user_session WHERE user_id = :user", u -> u.bind("user", userId));
     }
 
     public void deleteExpired(Instant now) {
-        run("DELETE FROM user_session WHERE expires_at <= ?", at(now));
+        run("DELETE FROM user_session WHERE expires_at <= :now", u -> u.bind("now", Sql.stampOf(now)));
     }
 
-    private void run(String statement, Object... args) {
+    /** One statement in a transaction of its own, its values bound by name. */
+    private void run(String statement, Function<Update, Update> binds) {
         sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement(statement)) {
-                for (int i = 0; i < args.length; i++) ps.setObject(i + 1, args[i]);
-                return ps.executeUpdate();
+            try (Handle h = Sql.on(c)) {
+                return binds.apply(h.createUpdate(statement)).execute();
             }
         });
-    }
-
-    static OffsetDateTime at(Instant t) {
-        return t.atOffset(ZoneOffset.UTC);
     }
 }

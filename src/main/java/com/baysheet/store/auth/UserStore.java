@@ -6,14 +6,12 @@ import com.baysheet.auth.User;
 import com.baysheet.engine.InputError;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Sql;
+import org.jdbi.v3.core.Handle;
 
 import java.sql.Connection;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Statement;
 import java.time.OffsetDateTime;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
@@ -32,10 +30,8 @@ public final class UserStore {
 
     public long count() {
         return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT COUNT(*) FROM app_user");
-                 ResultSet rs = ps.executeQuery()) {
-                rs.next();
-                return rs.getLong(1);
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT COUNT(*) FROM app_user").mapTo(Long.class).one();
             }
         });
     }
@@ -56,9 +52,9 @@ public final class UserStore {
     /** The firm's name as its sheets print it: a password may not be that. */
     public String firmName() {
         return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT firm_name FROM firm_setting WHERE id = 1");
-                 ResultSet rs = ps.executeQuery()) {
-                return rs.next() ? rs.getString(1) : "";
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT firm_name FROM firm_setting WHERE id = 1").map((rs, ctx) -> rs.getString(1))
+                        .findFirst().orElse("");
             }
         });
     }
@@ -70,9 +66,9 @@ public final class UserStore {
     public Optional<User> createFirstAdministrator(NewUser u, String passwordHash) {
         if (u.role() != Role.ADMINISTRATOR) throw new IllegalArgumentException("role: the first user is the administrator");
         return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement(
-                    "UPDATE firm_setting SET setup_done = TRUE, version = version + 1 WHERE id = 1 AND setup_done = FALSE")) {
-                if (ps.executeUpdate() == 0) return Optional.empty();
+            try (Handle h = Sql.on(c)) {
+                if (h.createUpdate("UPDATE firm_setting SET setup_done = TRUE, version = version + 1 WHERE id = 1 AND setup_done = FALSE")
+                        .execute() == 0) return Optional.empty();
             }
             return Optional.of(insert(c, u, passwordHash, sql.stamp()));
         });
@@ -80,32 +76,29 @@ public final class UserStore {
 
     public boolean setupDone() {
         return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT setup_done FROM firm_setting WHERE id = 1");
-                 ResultSet rs = ps.executeQuery()) {
-                return rs.next() && rs.getBoolean(1);
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT setup_done FROM firm_setting WHERE id = 1").map((rs, ctx) -> rs.getBoolean(1))
+                        .findFirst().orElse(false);
             }
         });
     }
 
     public Optional<WithHash> findByUsername(String username) {
-        return sql.tx(c -> one(c, "username = ?", username));
+        return sql.tx(c -> one(c, "username", username));
     }
 
     public WithHash findById(long id) {
-        return sql.tx(c -> one(c, "id = ?", id)).orElseThrow(() -> new NotFound("user", id));
+        return sql.tx(c -> one(c, "id", id)).orElseThrow(() -> new NotFound("user", id));
     }
 
     public User find(long id) {
-        return sql.tx(c -> one(c, "id = ?", id)).map(WithHash::user).orElseThrow(() -> new NotFound("user", id));
+        return sql.tx(c -> one(c, "id", id)).map(WithHash::user).orElseThrow(() -> new NotFound("user", id));
     }
 
     public List<User> findAll() {
         return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM app_user ORDER BY username");
-                 ResultSet rs = ps.executeQuery()) {
-                List<User> out = new ArrayList<>();
-                while (rs.next()) out.add(read(rs).user());
-                return out;
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT " + COLUMNS + " FROM app_user ORDER BY username").map((rs, ctx) -> read(rs).user()).list();
             }
         });
     }
@@ -118,66 +111,56 @@ public final class UserStore {
         });
     }
 
-    static void setPassword(Connection c, long id, String hash, boolean mustChange) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("UPDATE app_user SET password_hash = ?, "
-                + "must_change_password = ?, version = version + 1 WHERE id = ?")) {
-            ps.setString(1, hash);
-            ps.setBoolean(2, mustChange);
-            ps.setLong(3, id);
-            if (ps.executeUpdate() == 0) throw new NotFound("user", id);
+    static void setPassword(Connection c, long id, String hash, boolean mustChange) {
+        try (Handle h = Sql.on(c)) {
+            if (h.createUpdate("UPDATE app_user SET password_hash = :hash, must_change_password = :mustChange, "
+                    + "version = version + 1 WHERE id = :id").bind("hash", hash).bind("mustChange", mustChange).bind("id", id)
+                    .execute() == 0) throw new NotFound("user", id);
         }
     }
 
     /** Whether the user's password was set by someone else and must be changed before going on. */
     public boolean mustChangePassword(long id) {
-        return sql.tx(c -> one(c, "id = ?", id)).map(WithHash::mustChangePassword).orElse(false);
+        return sql.tx(c -> one(c, "id", id)).map(WithHash::mustChangePassword).orElse(false);
     }
 
     public void setRole(long id, Role role) {
-        update(id, "role = ?", role.name());
+        update(id, "role", role.name());
     }
 
     public void setActive(long id, boolean active) {
-        update(id, "active = ?", active);
+        update(id, "active", active);
     }
 
-    private void update(long id, String assignment, Object v) {
+    /** Sets one column of a user's row; {@code column} is one of ours, never typed by anyone. */
+    private void update(long id, String column, Object v) {
         sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement(
-                    "UPDATE app_user SET " + assignment + ", version = version + 1 WHERE id = ?")) {
-                ps.setObject(1, v);
-                ps.setLong(2, id);
-                if (ps.executeUpdate() == 0) throw new NotFound("user", id);
+            try (Handle h = Sql.on(c)) {
+                if (h.createUpdate("UPDATE app_user SET " + column + " = :value, version = version + 1 WHERE id = :id")
+                        .bind("value", v).bind("id", id).execute() == 0) throw new NotFound("user", id);
                 return null;
             }
         });
     }
 
-    private static User insert(Connection c, NewUser u, String hash, OffsetDateTime at) throws SQLException {
-        if (one(c, "username = ?", u.username()).isPresent())
+    private static User insert(Connection c, NewUser u, String hash, OffsetDateTime at) {
+        if (one(c, "username", u.username()).isPresent())
             throw new InputError("username", "\"" + u.username() + "\"", "is taken by another user");
-        try (PreparedStatement ps = c.prepareStatement("INSERT INTO app_user (username, full_name, initials, role, "
-                + "password_hash, active, version, created_at) VALUES (?, ?, ?, ?, ?, TRUE, 1, ?)", Statement.RETURN_GENERATED_KEYS)) {
-            ps.setString(1, u.username());
-            ps.setString(2, u.fullName());
-            ps.setString(3, u.initials());
-            ps.setString(4, u.role().name());
-            ps.setString(5, hash);
-            ps.setObject(6, at);
-            ps.executeUpdate();
-            try (ResultSet keys = ps.getGeneratedKeys()) {
-                keys.next();
-                return new User(keys.getLong(1), u.username(), u.fullName(), u.initials(), u.role(), true);
-            }
+        try (Handle h = Sql.on(c)) {
+            long id = h.createUpdate("INSERT INTO app_user (username, full_name, initials, role, password_hash, active, version, "
+                            + "created_at) VALUES (:username, :fullName, :initials, :role, :hash, TRUE, 1, :at)")
+                    .bind("username", u.username()).bind("fullName", u.fullName()).bind("initials", u.initials())
+                    .bind("role", u.role().name()).bind("hash", hash).bind("at", Sql.stampOf(at.toInstant()))
+                    .executeAndReturnGeneratedKeys("id").mapTo(Long.class).one();
+            return new User(id, u.username(), u.fullName(), u.initials(), u.role(), true);
         }
     }
 
-    private static Optional<WithHash> one(Connection c, String where, Object arg) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM app_user WHERE " + where)) {
-            ps.setObject(1, arg);
-            try (ResultSet rs = ps.executeQuery()) {
-                return rs.next() ? Optional.of(read(rs)) : Optional.empty();
-            }
+    /** The user whose {@code column} (id or username, ours, never typed by anyone) holds {@code value}. */
+    private static Optional<WithHash> one(Connection c, String column, Object value) {
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT " + COLUMNS + " FROM app_user WHERE " + column + " = :value").bind("value", value)
+                    .map((rs, ctx) -> read(rs)).findFirst();
         }
     }
 
