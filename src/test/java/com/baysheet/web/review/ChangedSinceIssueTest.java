@@ -153,12 +153,7 @@ class ChangedSinceIssueTest {
         var now = server.office.review().reviews().view(server.ref()).current().revision();
         if (now.state() == SheetState.ISSUED && !now.outdatedBy(com.baysheet.review.CalcFingerprint.of(server.mark().record()))) return;
         String sheet = server.sheetPath();
-        String html = eng.get(sheet).body();
-        assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
-        html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
-        html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")), Map.entry("description", "First issue"))).statusCode()).isEqualTo(303);
+        Pages.submitApproveIssue(eng, chk, sheet, "First issue");
         assertThat(state(eng.get(sheet).body())).isEqualTo("issued");
     }
 }

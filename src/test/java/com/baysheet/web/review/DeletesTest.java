@@ -194,12 +194,7 @@ class DeletesTest {
         if (server.office.review().reviews().view(server.ref()).history().stream()
                 .anyMatch(r -> r.revision().state() == SheetState.ISSUED || r.revision().state() == SheetState.SUPERSEDED)) return;
         String sheet = server.sheetPath();
-        String html = eng.get(sheet).body();
-        assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
-        html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
-        html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")), Map.entry("description", "First issue"))).statusCode()).isEqualTo(303);
+        Pages.submitApproveIssue(eng, chk, sheet, "First issue");
         assertThat(state(eng.get(sheet).body())).isEqualTo("issued");
     }
 }

@@ -15,7 +15,6 @@ import java.util.Map;
 import java.util.TreeMap;
 
 import static com.baysheet.web.review.Pages.state;
-import static com.baysheet.web.review.Pages.version;
 import static org.assertj.core.api.Assertions.assertThat;
 
 /**
@@ -85,12 +84,7 @@ class GridChangeSheetTest {
     }
 
     private static void issue(Client eng, Client chk, String sheet) {
-        String html = eng.get(sheet).body();
-        assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
-        html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
-        html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")), Map.entry("description", "First issue"))).statusCode()).isEqualTo(303);
+        Pages.submitApproveIssue(eng, chk, sheet, "First issue");
         assertThat(state(eng.get(sheet).body())).isEqualTo("issued");
     }
 

@@ -1,10 +1,16 @@
 package com.baysheet.web.review;
 
 import com.baysheet.web.Html;
+import com.baysheet.web.TestLogin.Client;
 import org.jsoup.nodes.Element;
+
+import java.util.List;
+import java.util.Map;
 
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+
+import static org.assertj.core.api.Assertions.assertThat;
 
 /** Reading what a test needs from the rendered HTML, parsed as HTML (see {@link Html}). */
 final class Pages {
@@ -34,5 +40,16 @@ final class Pages {
     /** The form token of the page's (first) post form. */
     static String token(String html) {
         return Html.one(html, "form[method=post] input[name=_csrf]").val();
+    }
+
+    /** Submits (as the engineer), approves and issues (as the checker) the sheet at {@code sheet} through its page's forms. */
+    static void submitApproveIssue(Client eng, Client chk, String sheet, String description) {
+        String html = eng.get(sheet).body();
+        assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
+        html = chk.get(sheet).body();
+        assertThat(chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
+        html = chk.get(sheet).body();
+        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")),
+                Map.entry("description", description))).statusCode()).isEqualTo(303);
     }
 }

@@ -71,13 +71,7 @@ class VerifyStandingTest {
     /** Submits, approves and issues the mark's sheet as it is now; the issued copy's bytes. */
     private static byte[] issue(ReviewServer server, Client eng, Client chk, String description) {
         String sheet = server.sheetPath();
-        String html = eng.get(sheet).body();
-        assertThat(eng.post(sheet + "/submit", List.of(Map.entry("version", version(html, "/submit")))).statusCode()).isEqualTo(303);
-        html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/approve", List.of(Map.entry("version", version(html, "/approve")))).statusCode()).isEqualTo(303);
-        html = chk.get(sheet).body();
-        assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")),
-                Map.entry("description", description))).statusCode()).isEqualTo(303);
+        Pages.submitApproveIssue(eng, chk, sheet, description);
         assertThat(state(eng.get(sheet).body())).isEqualTo("issued");
         long issued = server.office.review().reviews().view(server.ref()).current().id();
         return eng.getBytes("/review/revisions/" + issued + "/issued.pdf").body();
