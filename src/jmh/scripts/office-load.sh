@@ -21,4 +21,6 @@ for _ in $(seq 1 240); do
 done
 echo "machine: $(nproc) cores, $(grep -m1 'model name' /proc/cpuinfo | cut -d: -f2 | xargs), $(java -version 2>&1 | head -1)"
 echo "server: pid $pid, ${SERVER_JAVA_OPTS:--Xmx1g}; load average before: $(cut -d' ' -f1-3 /proc/loadavg)"
-java -cp target/office-load com.baysheet.bench.OfficeLoad --base "http://127.0.0.1:$port" --pid "$pid" "$@"
+# the first administrator is made with the one-time set-up code the server prints at start
+code=$(grep -o 'set-up code: [A-Z0-9]*' target/office-load/server.log | head -1 | cut -d' ' -f3)
+java -cp target/office-load com.baysheet.bench.OfficeLoad --base "http://127.0.0.1:$port" --pid "$pid" --setup-code "$code" "$@"

@@ -78,7 +78,7 @@ public final class OfficeLoad {
     }
 
     private void run() throws Exception {
-        OfficeLoadSession admin = OfficeLoadSession.setUp(http, base, PASSWORD);
+        OfficeLoadSession admin = OfficeLoadSession.setUp(http, base, PASSWORD, opt.get("setup-code"));
         int accounts = Math.max(1, users / 4);
         for (int a = 0; a < accounts; a++) admin.addUser("load" + a, PASSWORD);
         String projects = admin.get("/api/projects").body();

@@ -30,18 +30,30 @@ final class OfficeLoadSession {
     }
 
     /** The first administrator of a new office, who then adds the users that will log in. */
-    static OfficeLoadSession setUp(HttpClient http, String base, String password) throws IOException, InterruptedException {
+    static OfficeLoadSession setUp(HttpClient http, String base, String password, String setupCode) throws IOException, InterruptedException {
         OfficeLoadSession s = new OfficeLoadSession(http, base);
         s.get("/setup");
-        s.expect(s.form("/setup", Map.of("username", "admin", "fullName", "Load Administrator", "initials", "LA",
-                "password", password, "confirmPassword", password)), 303);
+        s.expect(s.form("/setup", Map.of("setupCode", setupCode, "username", "admin", "fullName", "Load Administrator",
+                "initials", "LA", "password", password, "confirmPassword", password)), 303);
         s.get("/admin/users");
         return s;
     }
 
+    private static final Pattern SETUP_CODE = Pattern.compile("id=\"setup-code\"[^>]*>\\s*<code>([^<]+)</code>");
+
+    /** Adds a person, who sets their password with the one-time set-up code shown, then logs in once (told of the code). */
     void addUser(String username, String password) throws IOException, InterruptedException {
-        expect(form("/admin/users", Map.of("username", username, "fullName", "Load user " + username, "initials", "LU",
-                "role", "engineer", "password", password)), 303);
+        get("/admin/users");
+        HttpResponse<String> added = expect(form("/admin/users", Map.of("username", username, "fullName", "Load user " + username,
+                "initials", "LU", "role", "engineer")), 200);
+        java.util.regex.Matcher code = SETUP_CODE.matcher(added.body());
+        if (!code.find()) throw new IllegalStateException("no set-up code shown for " + username);
+        OfficeLoadSession person = new OfficeLoadSession(http, base);
+        person.get("/account/reset");
+        person.expect(person.form("/account/reset", Map.of("username", username, "code", code.group(1),
+                "newPassword", password, "confirmPassword", password)), 303);
+        person.get("/login");
+        person.expect(person.form("/login", Map.of("username", username, "password", password, "next", "/projects")), 200);
     }
 
     static OfficeLoadSession logIn(HttpClient http, String base, String username, String password) throws IOException, InterruptedException {
