@@ -156,10 +156,24 @@ final class RoofSteps {
         double near = Math.max(0, Math.min(da, db)), far = Math.min(reach.depth(), Math.max(da, db));
         if (far <= near) return null;
         double mStart = memberAlongX ? m.x1() : m.y1();
-        if (memberAlongX == w.alongX) return new DriftStrip(true, lo - mStart, hi - mStart, far - near, near, near, reach.edge());
+        double length = Math.abs((memberAlongX ? m.x2() : m.y2()) - mStart);
+        if (memberAlongX == w.alongX)
+            return new DriftStrip(true, onMember(lo - mStart, length), onMember(hi - mStart, length), far - near, near, near, reach.edge());
         double a = w.at + w.toward * near, b = w.at + w.toward * far;   // the stretch of the member within the reach
-        return new DriftStrip(false, Math.min(a, b) - mStart, Math.max(a, b) - mStart, hi - lo,
-                w.toward > 0 ? near : far, w.toward > 0 ? far : near, reach.edge());
+        double from = onMember(Math.min(a, b) - mStart, length), to = onMember(Math.max(a, b) - mStart, length);
+        if (to <= from) return null;
+        return new DriftStrip(false, from, to, hi - lo, w.toward > 0 ? near : far, w.toward > 0 ? far : near, reach.edge());
+    }
+
+    /**
+     * A position along the member, measured from its start, with the rounding of plan coordinates taken off at its
+     * ends: a strip that starts where the member starts must not start 4e-16 ft before it.
+     */
+    static double onMember(double x, double length) {
+        double tolerance = 1e-9 * Math.max(1, length);
+        if (Math.abs(x) <= tolerance) return 0;
+        if (Math.abs(x - length) <= tolerance) return length;
+        return x;
     }
 
     private static String show(double v, CalcContext ctx) { return Display.of(v, Quantity.LENGTH, ctx.system()); }
