@@ -57,14 +57,17 @@ public final class LoginFailures {
     }
 
     /**
-     * A right password: the user's count is cleared and the address's takes this attempt back.
+     * A right password: the user's count is cleared and the address's takes this attempt back. A wait that the
+     * address's count started only while right logins were still being checked (many people behind one address
+     * logging in at once) ends with them: it stays only while the failures left are past the free ones.
      * @return the failed and refused attempts on the username before this login
      */
-    public int succeeded(String username, String address) {
+    public int succeeded(String username, String address, LoginThrottle t) {
         String u = clip(username), a = clip(address);
         return sql.tx(c -> {
             try (Handle h = Sql.on(c)) {
-                update(h, "failures = failures - 1, attempts = attempts - 1", ADDRESS, a).execute();
+                update(h, "failures = failures - 1, attempts = attempts - 1, wait_until = CASE WHEN failures - 1 < :free "
+                        + "THEN last_failure ELSE wait_until END", ADDRESS, a).bind("free", t.freeFailuresPerAddress()).execute();
                 int before = attempts(h, u).map(n -> n - 1).orElse(0);
                 h.createUpdate("DELETE FROM login_attempt WHERE kind = :kind AND subject = :subject").bind("kind", USER)
                         .bind("subject", u).execute();

@@ -75,7 +75,7 @@ public final class Logins {
             throw LoginRefused.badCredentials();
         }
         if (oldToken != null) sessions.delete(Tokens.sha256(oldToken));
-        int before = failures.succeeded(name, address);
+        int before = failures.succeeded(name, address, policy.throttle());
         failures.prune(now, policy.throttle());
         User u = found.get().user();
         audit.append(AuditEvent.of(u.id(), u.username(), "login", "user " + u.username(),

@@ -10,6 +10,7 @@ import com.baysheet.engine.InputError;
 import com.baysheet.store.Database;
 import com.baysheet.store.Sql;
 import com.baysheet.store.auth.Accounts;
+import com.baysheet.store.auth.LoginFailures;
 import com.baysheet.store.auth.Logins;
 import com.baysheet.store.auth.SignedIn;
 import com.baysheet.store.review.AuditTrail;
@@ -113,6 +114,31 @@ abstract class LoginsContract {
         clock.advance(Duration.ofMinutes(1));
         SignedIn in = logins().login("ada", PASSWORD, "10.0.0.9", null);
         assertThat(in.failedAttempts()).isEqualTo(n);
+    }
+
+    @Test
+    void rightLoginsCheckedAtOnceFromOneAddressLeaveItNoWait() {
+        // ten people behind one office address log in at the same moment: every attempt is counted before its
+        // password is checked, so the tenth count starts the address's wait; once all ten prove right, none is left
+        LoginFailures counts = new LoginFailures(new Sql(db.dataSource()));
+        LoginThrottle t = new LoginThrottle(3, 10, Duration.ofMinutes(1), Duration.ofMinutes(15), Duration.ofHours(24));
+        Instant now = clock.instant();
+        for (int i = 0; i < 10; i++) assertThat(counts.claim("person" + i, "10.0.0.7", now, t).waitUntil()).isEmpty();
+        assertThat(counts.claim("person10", "10.0.0.7", now, t).waitUntil()).as("ten in flight, the eleventh waits").isPresent();
+        for (int i = 0; i < 10; i++) counts.succeeded("person" + i, "10.0.0.7", t);
+        assertThat(counts.claim("person11", "10.0.0.7", now, t).waitUntil()).isEmpty();
+    }
+
+    @Test
+    void failuresPastTheFreeOnesKeepTheAddressWaitingThoughARightLoginEndsAmongThem() {
+        LoginFailures counts = new LoginFailures(new Sql(db.dataSource()));
+        LoginThrottle t = new LoginThrottle(3, 10, Duration.ofMinutes(1), Duration.ofMinutes(15), Duration.ofHours(24));
+        Instant now = clock.instant();
+        for (int i = 0; i < 10; i++) counts.claim("guess" + i, "10.0.0.8", now, t);   // ten wrong names: the address waits
+        Instant later = now.plus(Duration.ofMinutes(1));
+        assertThat(counts.claim("guess10", "10.0.0.8", later, t).waitUntil()).isEmpty();  // its wait over, an eleventh
+        counts.succeeded("guess10", "10.0.0.8", t);                                        // ... proves right
+        assertThat(counts.claim("someone", "10.0.0.8", later, t).waitUntil()).as("ten failures remain: the wait holds").isPresent();
     }
 
     @Test
