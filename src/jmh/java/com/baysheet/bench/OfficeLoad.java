@@ -45,6 +45,8 @@ public final class OfficeLoad {
     private final int[] mix;
     private long project;
     private List<String> members;
+    /** The mark sheet of each member's sheet address, read once at set-up: checking copies are printed per mark. */
+    private final Map<String, String> markSheets = new java.util.concurrent.ConcurrentHashMap<>();
 
     private OfficeLoad(Map<String, String> opt) {
         this.opt = opt;
@@ -84,13 +86,20 @@ public final class OfficeLoad {
         String projects = admin.get("/api/projects").body();
         project = Long.parseLong(first(ID, projects));
         members = all(ID, admin.get("/api/projects/" + project + "/members").body());
+        for (String m : members) {
+            HttpResponse<String> r = admin.get("/review/projects/" + project + "/members/" + m);
+            r.headers().firstValue("Location").ifPresent(sheet -> markSheets.put(m, sheet));
+        }
         System.out.printf("office: %d users on %d accounts; demo project %d with %d members; mix %s (member:other:save:pdf)%n",
                 users, accounts, project, members.size(), opt.getOrDefault("mix", "80:10:8:2"));
         ExecutorService pool = Executors.newFixedThreadPool(users);
+        // people log in one after another, as they arrive: the throttle counts a login from the moment it is
+        // sent until its password proves right, so dozens in the same instant from one address would be slowed
         List<Future<User>> logins = new ArrayList<>();
         for (int u = 0; u < users; u++) {
             int n = u;
-            logins.add(pool.submit(() -> newUser(n, "load" + (n % accounts))));
+            OfficeLoadSession s = OfficeLoadSession.logIn(http, base, "load" + (n % accounts), PASSWORD);
+            logins.add(pool.submit(() -> newUser(n, s)));
         }
         List<User> office = new ArrayList<>();
         for (Future<User> f : logins) office.add(f.get());
@@ -103,8 +112,7 @@ public final class OfficeLoad {
         System.exit(0);
     }
 
-    private User newUser(int n, String account) throws IOException, InterruptedException {
-        OfficeLoadSession s = OfficeLoadSession.logIn(http, base, account, PASSWORD);
+    private User newUser(int n, OfficeLoadSession s) throws IOException, InterruptedException {
         String p = s.expect(s.json("POST", "/api/projects", "{\"jobNumber\": \"LOAD-" + n + "\", \"name\": \"Load project " + n
                 + "\", \"units\": \"US\"}"), 201).body();
         long id = Long.parseLong(first(ID, p));
@@ -178,7 +186,9 @@ public final class OfficeLoad {
     }
 
     private boolean pdf(User u, String member) throws IOException, InterruptedException {
-        HttpResponse<byte[]> r = u.session.getBytes("/review/projects/" + project + "/members/" + member + "/checking.pdf");
+        String sheet = markSheets.get(member);
+        if (sheet == null) return false;
+        HttpResponse<byte[]> r = u.session.getBytes(sheet + "/checking.pdf");
         return r.statusCode() == 200 && r.body().length > 4 && r.body()[0] == '%' && r.body()[1] == 'P';
     }
 
