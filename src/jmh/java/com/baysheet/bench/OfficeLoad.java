@@ -81,6 +81,15 @@ public final class OfficeLoad {
 
     private void run() throws Exception {
         OfficeLoadSession admin = OfficeLoadSession.setUp(http, base, PASSWORD, opt.get("setup-code"));
+        if (opt.containsKey("print-session")) {
+            // for a side-by-side run with another load tool: one member page address and the cookie to fetch it with
+            String projects = admin.get("/api/projects").body();
+            String p = first(ID, projects);
+            String m = first(ID, admin.get("/api/projects/" + p + "/members").body());
+            System.out.println("page=/projects/" + p + "/members/" + m);
+            System.out.println("cookie=" + admin.cookieHeader());
+            System.exit(0);
+        }
         int accounts = Math.max(1, users / 4);
         for (int a = 0; a < accounts; a++) admin.addUser("load" + a, PASSWORD);
         String projects = admin.get("/api/projects").body();

@@ -56,6 +56,13 @@ final class OfficeLoadSession {
         person.expect(person.form("/login", Map.of("username", username, "password", password, "next", "/projects")), 200);
     }
 
+    /** The session's cookies as a {@code Cookie} header value, for another load tool to send. */
+    String cookieHeader() {
+        synchronized (cookies) {
+            return cookies.entrySet().stream().map(e -> e.getKey() + "=" + e.getValue()).collect(Collectors.joining("; "));
+        }
+    }
+
     static OfficeLoadSession logIn(HttpClient http, String base, String username, String password) throws IOException, InterruptedException {
         OfficeLoadSession s = new OfficeLoadSession(http, base);
         s.get("/login");

@@ -3,20 +3,21 @@ package com.baysheet.store;
 import com.baysheet.project.Model;
 import com.baysheet.review.MarkSheets;
 import com.baysheet.store.review.MarkBook;
+import org.jdbi.v3.core.Handle;
 
 /**
  * Every version a page of a project's results (members, take-downs, the framing plan) is rendered from, read
  * from the database on each request, so that several servers over one database agree on it: the project's
  * version (every model write bumps it), the firm's catalogue and settings versions (firm occupancies and self
- * weights load every project), and the fingerprint of the project's stored marks (a rename changes a mark's
- * text and no version). A page kept under a {@link Version} is exactly the page of that state.
+ * weights load every project), and the count of the project's mark renames (a rename changes a mark's text and
+ * no model version). A page kept under a {@link Version} is exactly the page of that state.
  */
 public final class ProjectVersions {
     /** A read of the marks races a concurrent save at most this often before the page is rendered and not kept. */
     private static final int READ_ATTEMPTS = 3;
 
     /** What a result page of the project is a function of, besides its address and the viewer. */
-    public record Version(long project, long model, long catalogue, long firm, String marks) {}
+    public record Version(long project, long model, long catalogue, long firm, long marks) {}
 
     /**
      * A project's results and marks, and the version they are exactly of; {@code version} is null when a save
@@ -32,10 +33,21 @@ public final class ProjectVersions {
         this.results = results;
     }
 
-    /** The versions as they stand: four small reads in one transaction; not found when there is no such project. */
+    /**
+     * The versions as they stand, in one statement (it runs on every request for a kept page); not found when there
+     * is no such project. The same columns as {@link Results#modelVersion}, {@link OccupancyStore#catalogueVersion},
+     * {@link Results#firmVersion} and {@link MarkBook#version} read one by one.
+     */
     public Version of(long projectId) {
-        return sql.tx(c -> new Version(projectId, Results.modelVersion(c, projectId), OccupancyStore.catalogueVersion(c),
-                Results.firmVersion(c), MarkBook.fingerprint(c, projectId)));
+        return sql.tx(c -> {
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT p.version, (SELECT catalogue_version FROM firm_state WHERE id = 1), "
+                                + "COALESCE((SELECT version FROM firm_setting WHERE id = 1), 0), p.marks_version "
+                                + "FROM project p WHERE p.id = :id").bind("id", projectId)
+                        .map((rs, ctx) -> new Version(projectId, rs.getLong(1), rs.getLong(2), rs.getLong(3), rs.getLong(4)))
+                        .findOne().orElseThrow(() -> new NotFound("project", projectId));
+            }
+        });
     }
 
     /** The results and marks to render a page from, with the version they are exactly of when no save raced them. */
@@ -46,12 +58,13 @@ public final class ProjectVersions {
             State s = sql.tx(c -> {
                 // which member carries which mark is written with the version: the same version before and after
                 // the marks are read means they are the marks of this model
-                long before = Results.modelVersion(c, projectId);
-                MarkBook.Read marks = MarkBook.fingerprinted(c, projectId, computed.derived());
-                long after = Results.modelVersion(c, projectId);
-                boolean exact = before == m.project().version() && after == before && results.kept(computed);
-                return new State(computed, marks.sheets(), !exact ? null
-                        : new Version(projectId, m.project().version(), m.catalogueVersion(), m.firmVersion(), marks.fingerprint()));
+                long before = Results.modelVersion(c, projectId), renamesBefore = MarkBook.version(c, projectId);
+                MarkSheets marks = MarkBook.read(c, projectId, computed.derived());
+                long after = Results.modelVersion(c, projectId), renamesAfter = MarkBook.version(c, projectId);
+                boolean exact = before == m.project().version() && after == before && renamesAfter == renamesBefore
+                        && results.kept(computed);
+                return new State(computed, marks, !exact ? null
+                        : new Version(projectId, m.project().version(), m.catalogueVersion(), m.firmVersion(), renamesBefore));
             });
             if (s.version() != null || attempt == READ_ATTEMPTS) return s;
         }

@@ -11,6 +11,7 @@ import com.baysheet.review.MarkAssignment;
 import com.baysheet.review.MarkSheets;
 import com.baysheet.store.NotFound;
 import com.baysheet.store.Sql;
+import org.jdbi.v3.core.Handle;
 
 import java.sql.Connection;
 import java.sql.SQLException;
@@ -40,26 +41,21 @@ public final class MarkBook {
 
     /** The marks of this derivation of the project, read on the caller's connection; writes nothing. */
     public static MarkSheets read(Connection c, long projectId, Derived d) throws SQLException {
-        return fingerprinted(c, projectId, d).sheets();
-    }
-
-    /** Marks as read, with the fingerprint of the stored rows they were given from (see {@link #fingerprint}). */
-    public record Read(MarkSheets sheets, String fingerprint) {}
-
-    /** {@link #read}, and the fingerprint of exactly the stored rows the marks were given from. */
-    public static Read fingerprinted(Connection c, long projectId, Derived d) throws SQLException {
         List<Mark> stored = MarkRows.all(c, projectId);
         List<TypicalGroup> groups = d.members().isEmpty() ? List.of() : Typicals.of(d);
-        return new Read(sheets(MarkAssignment.of(groups, stored, MarkRows.carried(c, projectId)), stored), MarkPrint.of(stored));
+        return sheets(MarkAssignment.of(groups, stored, MarkRows.carried(c, projectId)), stored);
     }
 
     /**
-     * The fingerprint of the project's stored marks, every column of them: a rename changes a mark's text and no
-     * version, so a page labelled by marks is keyed by this beside the model's version. Which member carries which
-     * mark changes only in a model write (with the version), so it is not part of it.
+     * How many times the project's marks have been renamed: a rename changes a mark's text and no model version, so
+     * a page labelled by marks is keyed by this beside the model's version. Which member carries which mark, and
+     * which marks there are, change only in a model write (with the model's version), so they need no count.
      */
-    public static String fingerprint(Connection c, long projectId) throws SQLException {
-        return MarkPrint.of(MarkRows.all(c, projectId));
+    public static long version(Connection c, long projectId) {
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT marks_version FROM project WHERE id = :id").bind("id", projectId).mapTo(Long.class)
+                    .findOne().orElseThrow(() -> new NotFound("project", projectId));
+        }
     }
 
     /** A stored mark by id, carried or not (a mark no member carries keeps its sheet's history). */
@@ -100,6 +96,9 @@ public final class MarkBook {
                     throw new InputError("mark", to, "is taken by another typical member of this project" + (other.active() ? "" : " (one no member carries now)"));
             if (m.text().equals(to)) return null;
             MarkRows.rename(c, markId, to);
+            try (Handle h = Sql.on(c)) {
+                h.createUpdate("UPDATE project SET marks_version = marks_version + 1 WHERE id = :id").bind("id", projectId).execute();
+            }
             AuditTrail.append(c, AuditEvent.of(who.actor().userId(), who.username(), "rename mark", "project " + projectId + " mark " + m.text(),
                     "renamed " + m.text() + " → " + to, who.address()), sql.now());
             return null;

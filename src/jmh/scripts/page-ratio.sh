@@ -1,0 +1,40 @@
+#!/usr/bin/env bash
+# Member page against the stylesheet in one run (a benchmark, never part of the tests): starts the shipped jar
+# on the demo over a throw-away data directory, logs in once, and drives both addresses with wrk at the same
+# connections one after the other, printing each one's requests/s, its latency spread and the ratio.
+# WRK_CONNECTIONS (default 32), WRK_SECONDS (default 20), WRK_THREADS (default 2), PORT (default 7092).
+set -euo pipefail
+cd "$(dirname "$0")/../../.."
+command -v wrk >/dev/null || { echo "wrk is not installed (Debian: apt-get install wrk)"; exit 1; }
+mvn -B -ntp -q package -DskipTests
+mkdir -p target/office-load
+javac -d target/office-load src/jmh/java/com/baysheet/bench/OfficeLoad*.java
+data=$(mktemp -d)
+port=${PORT:-7092}
+conns=${WRK_CONNECTIONS:-32}
+secs=${WRK_SECONDS:-20}
+threads=${WRK_THREADS:-2}
+java ${SERVER_JAVA_OPTS:--Xmx1g} -jar target/baysheet.jar --demo --bind 127.0.0.1 --port "$port" --data "$data" \
+  > target/office-load/ratio-server.log 2>&1 &
+pid=$!
+trap 'kill "$pid" 2>/dev/null; wait "$pid" 2>/dev/null; rm -rf "$data"' EXIT
+for _ in $(seq 1 240); do
+  curl -sf "http://127.0.0.1:$port/health" >/dev/null 2>&1 && break
+  sleep 0.25
+done
+code=$(grep -o 'set-up code: [A-Z0-9]*' target/office-load/ratio-server.log | head -1 | cut -d' ' -f3)
+session=$(java -cp target/office-load com.baysheet.bench.OfficeLoad --base "http://127.0.0.1:$port" --setup-code "$code" --print-session yes)
+page=$(echo "$session" | sed -n 's/^page=//p')
+cookie=$(echo "$session" | sed -n 's/^cookie=//p')
+base="http://127.0.0.1:$port"
+echo "machine: $(nproc) cores; load average before: $(cut -d' ' -f1-3 /proc/loadavg); page $page"
+# warm both (the page's cache entry, the JIT) before either is measured
+wrk -t "$threads" -c "$conns" -d 5s -H "Cookie: $cookie" "$base$page" >/dev/null
+wrk -t "$threads" -c "$conns" -d 5s "$base/static/baysheet.css" >/dev/null
+css=$(wrk -t "$threads" -c "$conns" -d "${secs}s" --latency "$base/static/baysheet.css")
+member=$(wrk -t "$threads" -c "$conns" -d "${secs}s" --latency -H "Cookie: $cookie" "$base$page")
+echo "== stylesheet"; echo "$css" | grep -E "Requests/sec|Non-2xx|50%|90%|99%"
+echo "== member page"; echo "$member" | grep -E "Requests/sec|Non-2xx|50%|90%|99%"
+a=$(echo "$css" | awk '/Requests\/sec/ {print $2}'); b=$(echo "$member" | awk '/Requests\/sec/ {print $2}')
+echo "ratio member page / stylesheet: $(awk -v a="$a" -v b="$b" 'BEGIN {printf "%.2f", b / a}')"
+echo "load average after: $(cut -d' ' -f1-3 /proc/loadavg)"
