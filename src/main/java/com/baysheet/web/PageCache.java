@@ -36,10 +36,20 @@ final class PageCache {
 
     private record Key(String path, String query, Role role, ProjectVersions.Version version) {}
 
+    /**
+     * What the header's firm-and-user part is a function of (the firm's settings, the viewer's role and initials):
+     * rendered once per such triple, not once per request, and given the request's form token as it is sent.
+     */
+    private record Who(Object firm, Role role, String initials) {}
+
+    /** Header parts kept; a handful per office (one per person, role and firm settings), dropped wholesale past this. */
+    static final int MAX_HEADERS = 512;
+
     private final Store store;
     private final Views views;
     private final KeptPage.Places places = KeptPage.Places.random();
     private final PageLru<Key> kept;
+    private final Map<Who, String> headers = new java.util.concurrent.ConcurrentHashMap<>();
 
     PageCache(Store store, Views views) {
         this(store, views, MAX_PAGES, MAX_BYTES, MAX_PAGE_BYTES);
@@ -73,7 +83,7 @@ final class PageCache {
 
     private void send(Context ctx, KeptPage p) {
         String token = CsrfForms.token(ctx);
-        String who = CsrfForms.insert(views.fragment("fragments/header", "who", Map.of(), ctx), token);
+        String who = CsrfForms.insert(header(ctx), token);
         String notice = ctx.attribute(Saved.ATTRIBUTE) == null ? "" : views.fragment("fragments/header", "notice", Map.of(), ctx);
         KeptPage.Parts parts = KeptPage.Parts.of(who, notice, token);
         String etag = p.etag(parts);
@@ -86,6 +96,17 @@ final class PageCache {
         }
         ctx.contentType("text/html; charset=utf-8");
         ctx.result(p.filled(parts));
+    }
+
+    private String header(Context ctx) {
+        var user = Access.user(ctx);
+        Who w = new Who(ctx.attribute(FirmOnPage.ATTRIBUTE), user.role(), user.initials());
+        String kept = headers.get(w);
+        if (kept != null) return kept;
+        String rendered = views.fragment("fragments/header", "who", Map.of(), ctx);
+        if (headers.size() >= MAX_HEADERS) headers.clear();
+        headers.put(w, rendered);
+        return rendered;
     }
 
     /** Whether If-None-Match names this tag (weak comparison, RFC 9110 13.1.2: a W/ prefix is ignored). */
