@@ -23,7 +23,8 @@ import java.util.function.Consumer;
 
 /**
  * Entry point: {@code calc ...} runs the command-line calculation, {@code backup ...} and {@code restore ...} copy the
- * embedded database out and back, {@code transfer ...} moves an H2 office onto PostgreSQL; anything else starts the office server.
+ * embedded database out and back, {@code transfer ...} moves an H2 office onto PostgreSQL, {@code warm-up} makes a start's
+ * class archive (see {@link WarmUpCommand}); anything else starts the office server.
  */
 public final class App {
     /** Made at first use, not when App loads: slf4j-simple reads its level once, and a command may lower it first. */
@@ -43,6 +44,10 @@ public final class App {
             // the command's own lines are its answer: the pool's and the migrations' progress would bury them
             System.setProperty("org.slf4j.simpleLogger.defaultLogLevel", "warn");
             System.exit(TransferCommand.run(Arrays.copyOfRange(args, 1, args.length), System.getenv(), System.out, System.err));
+        }
+        if (args.length > 0 && args[0].equals("warm-up")) {
+            System.setProperty("org.slf4j.simpleLogger.defaultLogLevel", "warn");
+            System.exit(WarmUpCommand.run(Arrays.copyOfRange(args, 1, args.length), System.out, System.err));
         }
         ServerOptions options;
         try {
