@@ -73,8 +73,14 @@ public final class BayStore {
         if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
             throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
         requireCantileverOccupancy(c, a);
+        List<Bay> bays = placed(c, levelId, a, g);
         delete(c, levelId, a.cells(), g);
-        insert(c, levelId, a, g);
+        insert(c, levelId, bays, g);
+    }
+
+    /** The bays an assignment puts in its cells on this level as it stands (cantilevers on the edge only, if asked). */
+    static List<Bay> placed(Connection c, long levelId, BayAssignment a, Grid g) {
+        return a.bays(a.onEdges() ? findByLevel(c, levelId, g) : List.of(), g.x().cells(), g.y().cells());
     }
 
     private Sql.Work<Void> clearing(long projectId, long levelId, List<Cell> cells) {
@@ -116,14 +122,13 @@ public final class BayStore {
         }
     }
 
-    private static void insert(Connection c, long levelId, BayAssignment a, Grid g) {
+    static void insert(Connection c, long levelId, List<Bay> bays, Grid g) {
         try (Handle h = Sql.on(c)) {
             PreparedBatch batch = h.prepareBatch("INSERT INTO bay (level_id, x_line, y_line, is_opening, occupancy, dead_load, "
                     + "beam_direction, infill_beams, cantilever_north, cantilever_south, cantilever_east, cantilever_west, "
                     + "cantilever_occupancy) VALUES (:level, :xLine, :yLine, :opening, :occupancy, :deadLoad, :beams, :infillBeams, "
                     + ":cantilever_north, :cantilever_south, :cantilever_east, :cantilever_west, :cantileverOccupancy)");
-            for (Cell cell : a.cells()) {
-                Bay b = a.bayAt(cell);
+            for (Bay b : bays) {
                 batch.bind("level", levelId).bind("xLine", g.x().id(b.col())).bind("yLine", g.y().id(b.row()))
                         .bind("opening", b.opening()).bind("occupancy", b.occupancy())
                         .bind("deadLoad", b.opening() ? null : Sql.orNull(b.deadLoad()))
