@@ -45,9 +45,29 @@ public final class BayStore {
         writes.change(who, c -> BayText.assigned(c, projectId, levelId, a), projectId, version, assigning(projectId, levelId, a));
     }
 
-    /** Leaves the selected cells unframed at this level (no bay at all, unlike an opening). */
+    /**
+     * Leaves the selected cells unframed at this level (no bay at all, unlike an opening). What they held is kept for
+     * 30 days ({@link DeletedItems}, restorable into the same cells); issued sheets of the members that go are
+     * withdrawn, not removed ({@link ModelWrites#removal}).
+     */
     public void clear(Editor who, long projectId, long version, long levelId, List<Cell> cells) {
-        writes.change(who, c -> BayText.cleared(c, projectId, levelId, cells), projectId, version, clearing(projectId, levelId, cells));
+        writes.removal(who, c -> BayText.cleared(c, projectId, levelId, cells), projectId, version, c -> {
+            keep(c, who, projectId, levelId, cells);
+            return clearing(projectId, levelId, cells).run(c);
+        });
+    }
+
+    private void keep(Connection c, Editor who, long projectId, long levelId, List<Cell> cells) throws SQLException {
+        var level = LevelStore.find(c, projectId, levelId);
+        var snapshot = BaySnapshots.of(c, projectId, level, cells);
+        if (snapshot == null) return;
+        List<String> names = new ArrayList<>();
+        for (var b : snapshot.path("bays")) names.add(b.path("name").asText());
+        var p = ProjectStore.find(c, projectId);
+        String label = (names.size() == 1 ? "Bay " : "Bays ") + String.join(", ", names) + " of " + level.name() + ", "
+                + p.info().jobNumber() + " " + p.info().name();
+        DeletedItems.keep(c, new DeletedItem(0, projectId, p.info().jobNumber(), DeletedItem.BAYS, label,
+                writes.membersOf(projectId, level.name(), new java.util.HashSet<>(names)), who.username(), writes.sql().now()), snapshot);
     }
 
     /** The issued sheets {@link #assign} would change, by name, found by trying it and saving nothing. */

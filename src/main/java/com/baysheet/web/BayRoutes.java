@@ -60,7 +60,8 @@ final class BayRoutes {
                 yield form.attempt(() -> { store.bays().assign(Editors.of(ctx), p.id(), version, l.id(), v.assignment(cells)); return action; });
             }
         };
-        String then = "/projects/" + p.id() + "/levels/" + l.id() + "/bays" + BayForm.kept(form) + report;
+        String bays = "/projects/" + p.id() + "/levels/" + l.id() + "/bays" + BayForm.kept(form) + report;
+        String then = action.equals("clear") ? Saved.CLEARED.after(bays) : bays;
         done.ifPresentOrElse(a -> Pages.seeOther(ctx, then),
                 () -> render(ctx.status(form.stale() ? 409 : 422), p, l, form));
     }
