@@ -68,10 +68,13 @@ public final class DeletedItems {
                     throw new InputError("item", k.item.label(), "cannot be restored: its project was deleted after it (restoring the project brings it back as it was then, without this " + k.item.kind() + ")");
                 }
             });
-            boolean bays = k.item.kind().equals(DeletedItem.BAYS);
-            writes.change(who, (bays ? "bays restored: " : "level restored: ") + k.item.label(), k.item.projectId(), version, c -> {
-                if (bays) BaySnapshots.restore(c, k.item.projectId(), k.snapshot, k.item.label());
-                else LevelSnapshots.restore(c, k.item.projectId(), k.snapshot);
+            String kind = k.item.kind();
+            writes.change(who, kind + " restored: " + k.item.label(), k.item.projectId(), version, c -> {
+                switch (kind) {
+                    case DeletedItem.BAYS -> BaySnapshots.restore(c, k.item.projectId(), k.snapshot, k.item.label());
+                    case DeletedItem.LINE_LOAD, DeletedItem.POINT_LOAD -> LoadSnapshots.restore(c, k.item.projectId(), k.snapshot, k.item.label());
+                    default -> LevelSnapshots.restore(c, k.item.projectId(), k.snapshot);
+                }
                 forget(c, itemId);
                 return null;
             });
