@@ -13,7 +13,7 @@ import java.util.List;
 /**
  * A deleted line load or point load is kept in {@code deleted_item} like a level, so {@code kind} may also be
  * 'line load' or 'point load'. V119 declared the kind's CHECK without a name, which H2 and PostgreSQL name each in
- * their own way: this finds it in the information schema by its clause (the one naming 'project') and replaces it
+ * their own way: this finds it in the information schema by its clause (the one naming 'project'), in the schema being migrated, and replaces it
  * with a named one. Plain JDBC, no application class.
  */
 public class V123__Deleted_line_and_point_loads extends BaseJavaMigration {
@@ -24,7 +24,7 @@ public class V123__Deleted_line_and_point_loads extends BaseJavaMigration {
         try (PreparedStatement ps = c.prepareStatement("SELECT tc.constraint_name, cc.check_clause FROM information_schema.table_constraints tc "
                 + "JOIN information_schema.check_constraints cc ON cc.constraint_name = tc.constraint_name "
                 + "AND cc.constraint_schema = tc.constraint_schema WHERE LOWER(tc.table_name) = 'deleted_item' "
-                + "AND tc.constraint_type = 'CHECK'")) {
+                + "AND tc.table_schema = CURRENT_SCHEMA AND tc.constraint_type = 'CHECK'")) {
             try (ResultSet rs = ps.executeQuery()) {
                 while (rs.next()) if (rs.getString(2).toLowerCase().contains("'project'")) names.add(rs.getString(1));
             }
