@@ -46,20 +46,14 @@ public final class LineLoadStore {
 
     /** Deletes a line load, kept for 30 days ({@link DeletedItems}) whether the pages or the API delete it. */
     public void delete(Editor who, long projectId, long version, long levelId, long id) {
-        writes.change(who, c -> "line load deleted: " + labelOf(c, projectId, levelId, id), projectId, version, c -> {
+        writes.change(who, c -> "line load deleted: " + LoadSnapshots.lineLabel(c, projectId, levelId, id), projectId, version, c -> {
             LoadSnapshots.keep(c, who, projectId, LevelStore.find(c, projectId, levelId), LoadSnapshots.LINE,
-                    labelOf(c, projectId, levelId, id), writes.sql().now());
+                    LoadSnapshots.lineLabel(c, projectId, levelId, id), writes.sql().now());
             try (Handle h = Sql.on(c)) {
                 h.createUpdate("DELETE FROM line_load WHERE id = :id AND level_id = :level").bind("id", id).bind("level", levelId).execute();
             }
             return id;
         });
-    }
-
-    private static String labelOf(Connection c, long projectId, long levelId, long id) throws SQLException {
-        LevelStore.find(c, projectId, levelId);
-        return findByLevel(c, levelId, GridStore.find(c, projectId)).stream().filter(w -> w.id() == id).map(StoredLineLoad::label)
-                .findFirst().orElseThrow(() -> new NotFound("line load", id));
     }
 
     /** The one place this store changes the model (the project's version is claimed there). */

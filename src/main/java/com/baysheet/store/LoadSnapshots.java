@@ -36,6 +36,19 @@ final class LoadSnapshots {
         return null;
     }
 
+    /** The label of the level's line load of this id (the label names it on its level, where the id names it nowhere a person reads). */
+    static String lineLabel(Connection c, long projectId, long levelId, long id) throws SQLException {
+        LevelStore.find(c, projectId, levelId);
+        return LineLoadStore.findByLevel(c, levelId, GridStore.find(c, projectId)).stream().filter(w -> w.id() == id)
+                .map(com.baysheet.project.StoredLineLoad::label).findFirst().orElseThrow(() -> new NotFound("line load", id));
+    }
+
+    static String pointLabel(Connection c, long projectId, long levelId, long id) throws SQLException {
+        LevelStore.find(c, projectId, levelId);
+        return PointLoadStore.findByLevel(c, levelId, GridStore.find(c, projectId)).stream().filter(q -> q.id() == id)
+                .map(StoredPointLoad::label).findFirst().orElseThrow(() -> new NotFound("point load", id));
+    }
+
     /** Keeps the load of this label before it is deleted, in the deleting change's transaction. */
     static void keep(Connection c, Editor who, long projectId, StoredLevel l, String array, String label, java.time.Instant at)
             throws SQLException {

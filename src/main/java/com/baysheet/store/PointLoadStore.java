@@ -48,20 +48,14 @@ public final class PointLoadStore {
 
     /** Deletes a point load, kept for 30 days ({@link DeletedItems}) whether the pages or the API delete it. */
     public void delete(Editor who, long projectId, long version, long levelId, long id) {
-        writes.change(who, c -> "point load deleted: " + labelOf(c, projectId, levelId, id), projectId, version, c -> {
+        writes.change(who, c -> "point load deleted: " + LoadSnapshots.pointLabel(c, projectId, levelId, id), projectId, version, c -> {
             LoadSnapshots.keep(c, who, projectId, LevelStore.find(c, projectId, levelId), LoadSnapshots.POINT,
-                    labelOf(c, projectId, levelId, id), writes.sql().now());
+                    LoadSnapshots.pointLabel(c, projectId, levelId, id), writes.sql().now());
             try (Handle h = Sql.on(c)) {
                 h.createUpdate("DELETE FROM point_load WHERE id = :id AND level_id = :level").bind("id", id).bind("level", levelId).execute();
             }
             return id;
         });
-    }
-
-    private static String labelOf(Connection c, long projectId, long levelId, long id) throws SQLException {
-        LevelStore.find(c, projectId, levelId);
-        return findByLevel(c, levelId, GridStore.find(c, projectId)).stream().filter(q -> q.id() == id).map(StoredPointLoad::label)
-                .findFirst().orElseThrow(() -> new NotFound("point load", id));
     }
 
     static long insert(Connection c, long projectId, long levelId, PointLoadEntry e) throws SQLException {
