@@ -18,9 +18,10 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 /**
  * A ten-storey office entered through the pages alone, in a real browser against the shipped jar, as a new user
- * would do it with the shortcuts the pages offer: the grid and the three distinct levels from a pasted table, the
- * typical office floor entered once (whole floor, a north cantilever slab, a stair opening) and repeated above
- * itself as linked levels, the ground floor and the roof. Then the pages are read: every level has its members, a
+ * would do it with the shortcuts the pages offer: the grid, the three distinct levels and the typical floor's eight
+ * linked repeats from one pasted table (its repeat column), the typical office floor entered once (the whole floor with
+ * a north cantilever slab in one Apply, which lands on the north row alone; a stair opening), the ground floor and the
+ * roof. Then the pages are read: every level has its members, a
  * corner column's take-down runs through all eleven levels, and Level 7 (a linked level) carries the typical's
  * cantilever and opening. The form submissions of the entry are counted and printed (docs/benchmarks.md).
  */
