@@ -45,9 +45,29 @@ public final class BayStore {
         writes.change(who, c -> BayText.assigned(c, projectId, levelId, a), projectId, version, assigning(projectId, levelId, a));
     }
 
-    /** Leaves the selected cells unframed at this level (no bay at all, unlike an opening). */
+    /**
+     * Leaves the selected cells unframed at this level (no bay at all, unlike an opening). What they held is kept for
+     * 30 days ({@link DeletedItems}, restorable into the same cells); issued sheets of the members that go are
+     * withdrawn, not removed ({@link ModelWrites#removal}).
+     */
     public void clear(Editor who, long projectId, long version, long levelId, List<Cell> cells) {
-        writes.change(who, c -> BayText.cleared(c, projectId, levelId, cells), projectId, version, clearing(projectId, levelId, cells));
+        writes.removal(who, c -> BayText.cleared(c, projectId, levelId, cells), projectId, version, c -> {
+            keep(c, who, projectId, levelId, cells);
+            return clearing(projectId, levelId, cells).run(c);
+        });
+    }
+
+    private void keep(Connection c, Editor who, long projectId, long levelId, List<Cell> cells) throws SQLException {
+        var level = LevelStore.find(c, projectId, levelId);
+        var snapshot = BaySnapshots.of(c, projectId, level, cells);
+        if (snapshot == null) return;
+        List<String> names = new ArrayList<>();
+        for (var b : snapshot.path("bays")) names.add(b.path("name").asText());
+        var p = ProjectStore.find(c, projectId);
+        String label = (names.size() == 1 ? "Bay " : "Bays ") + String.join(", ", names) + " of " + level.name() + ", "
+                + p.info().jobNumber() + " " + p.info().name();
+        DeletedItems.keep(c, new DeletedItem(0, projectId, p.info().jobNumber(), DeletedItem.BAYS, label,
+                writes.membersOf(projectId, level.name(), new java.util.HashSet<>(names)), who.username(), writes.sql().now()), snapshot);
     }
 
     /** The issued sheets {@link #assign} would change, by name, found by trying it and saving nothing. */
@@ -73,8 +93,14 @@ public final class BayStore {
         if (!a.opening() && !OccupancyStore.catalogue(c).contains(a.occupancy()))
             throw new InputError("occupancy", a.occupancy(), "is not in the occupancy catalogue");
         requireCantileverOccupancy(c, a);
+        List<Bay> bays = placed(c, levelId, a, g);
         delete(c, levelId, a.cells(), g);
-        insert(c, levelId, a, g);
+        insert(c, levelId, bays, g);
+    }
+
+    /** The bays an assignment puts in its cells on this level as it stands (cantilevers on the edge only, if asked). */
+    static List<Bay> placed(Connection c, long levelId, BayAssignment a, Grid g) {
+        return a.bays(a.onEdges() ? findByLevel(c, levelId, g) : List.of(), g.x().cells(), g.y().cells());
     }
 
     private Sql.Work<Void> clearing(long projectId, long levelId, List<Cell> cells) {
@@ -116,14 +142,13 @@ public final class BayStore {
         }
     }
 
-    private static void insert(Connection c, long levelId, BayAssignment a, Grid g) {
+    static void insert(Connection c, long levelId, List<Bay> bays, Grid g) {
         try (Handle h = Sql.on(c)) {
             PreparedBatch batch = h.prepareBatch("INSERT INTO bay (level_id, x_line, y_line, is_opening, occupancy, dead_load, "
                     + "beam_direction, infill_beams, cantilever_north, cantilever_south, cantilever_east, cantilever_west, "
                     + "cantilever_occupancy) VALUES (:level, :xLine, :yLine, :opening, :occupancy, :deadLoad, :beams, :infillBeams, "
                     + ":cantilever_north, :cantilever_south, :cantilever_east, :cantilever_west, :cantileverOccupancy)");
-            for (Cell cell : a.cells()) {
-                Bay b = a.bayAt(cell);
+            for (Bay b : bays) {
                 batch.bind("level", levelId).bind("xLine", g.x().id(b.col())).bind("yLine", g.y().id(b.row()))
                         .bind("opening", b.opening()).bind("occupancy", b.occupancy())
                         .bind("deadLoad", b.opening() ? null : Sql.orNull(b.deadLoad()))

@@ -21,9 +21,18 @@ final class BayText {
     /** "bays assigned on Level 2: 1-2/A-B, 2-3/A-B: office, dead 50, beams X + 2; was: 1-2/A-B unframed, ..." */
     static String assigned(Connection c, long projectId, long levelId, BayAssignment a) throws SQLException {
         Grid g = GridStore.find(c, projectId);
-        String now = a.opening() ? "opening" : bay(a.bayAt(a.cells().get(0)));
+        String now = a.opening() ? "opening" : bay(a.bayAt(a.cells().get(0))) + onEdges(c, levelId, a, g);
         return "bays assigned on " + LevelStore.find(c, projectId, levelId).name() + ": " + cells(g, a.cells()) + ": " + now
                 + "; was: " + before(c, levelId, g, a.cells()) + TypicalLevels.alsoText(c, projectId, levelId);
+    }
+
+    /** " (cantilevers only on the building edge: none on 1-2/A-B, ...)" where the edge rule left some bays without. */
+    private static String onEdges(Connection c, long levelId, BayAssignment a, Grid g) {
+        if (!a.onEdges() || a.cantilevers().isEmpty()) return "";
+        List<String> without = new ArrayList<>();
+        for (Bay b : BayStore.placed(c, levelId, a, g))
+            if (b.cantilevers().size() < a.cantilevers().size()) without.add(cell(g, new Cell(b.col(), b.row())));
+        return without.isEmpty() ? "" : " (cantilevers only on the building edge: not all of them on " + String.join(", ", without) + ")";
     }
 
     static String cleared(Connection c, long projectId, long levelId, List<Cell> cells) throws SQLException {

@@ -65,11 +65,16 @@ public final class DeletedItems {
                 try {
                     return ProjectStore.find(c, k.item.projectId()).version();
                 } catch (NotFound e) {
-                    throw new InputError("item", k.item.label(), "cannot be restored: its project was deleted after it (restoring the project brings it back as it was then, without this level)");
+                    throw new InputError("item", k.item.label(), "cannot be restored: its project was deleted after it (restoring the project brings it back as it was then, without this " + k.item.kind() + ")");
                 }
             });
-            writes.change(who, "level restored: " + k.item.label(), k.item.projectId(), version, c -> {
-                LevelSnapshots.restore(c, k.item.projectId(), k.snapshot);
+            String kind = k.item.kind();
+            writes.change(who, kind + " restored: " + k.item.label(), k.item.projectId(), version, c -> {
+                switch (kind) {
+                    case DeletedItem.BAYS -> BaySnapshots.restore(c, k.item.projectId(), k.snapshot, k.item.label());
+                    case DeletedItem.LINE_LOAD, DeletedItem.POINT_LOAD -> LoadSnapshots.restore(c, k.item.projectId(), k.snapshot, k.item.label());
+                    default -> LevelSnapshots.restore(c, k.item.projectId(), k.snapshot);
+                }
                 forget(c, itemId);
                 return null;
             });

@@ -17,8 +17,15 @@ import java.util.Map;
  * same as it. A level whose name is taken is refused: a file adds levels, it does not overwrite them.
  */
 public final class LayoutImport {
-    /** A level of the table: its fields and the name of the level it is the same as (null: none). */
-    public record Row(LevelInfo level, String sameAs) {}
+    /**
+     * A level of the table: its fields, the name of the level it is the same as (null: none) and the typical levels to
+     * add above it (null: none).
+     */
+    public record Row(LevelInfo level, String sameAs, TypicalRepeat above) {
+        public Row(LevelInfo level, String sameAs) { this(level, sameAs, null); }
+
+        String describe() { return LevelStore.describe(level) + (above == null ? "" : ", and " + above.describe()); }
+    }
 
     private final ModelWrites writes;
 
@@ -30,7 +37,7 @@ public final class LayoutImport {
     public void apply(Editor who, long projectId, long version, Grid grid, List<Row> levels) {
         if (grid == null && levels.isEmpty()) throw new InputError("csv", "no rows", "gives neither grid lines nor levels");
         String action = "grid and levels from a table: " + (grid == null ? "grid kept" : "grid " + GridStore.describe(grid))
-                + (levels.isEmpty() ? "" : "; levels added: " + String.join(", ", levels.stream().map(r -> LevelStore.describe(r.level())).toList()));
+                + (levels.isEmpty() ? "" : "; levels added: " + String.join(", ", levels.stream().map(Row::describe).toList()));
         writes.change(who, action, projectId, version, c -> {
             if (grid != null) GridStore.replace(c, projectId, grid);
             add(c, projectId, levels);
@@ -56,6 +63,8 @@ public final class LayoutImport {
             if (typical == null) throw new InputError("levels[" + r.level().name() + "].sameAs", r.sameAs(), "names no level of the project");
             TypicalLevels.linkIn(c, projectId, typical, added.get(key(r.level().name())));
         }
+        // after every row is in, so that a repeated level's name or elevation is checked against the whole table
+        for (Row r : rows) if (r.above() != null) r.above().addAbove(c, projectId, added.get(key(r.level().name())));
     }
 
     private static String key(String name) { return name.strip().toLowerCase(); }

@@ -39,7 +39,17 @@ public final class LevelStore {
     }
 
     public StoredLevel add(Editor who, long projectId, long version, LevelInfo info) {
-        return writes.change(who, "level added: " + describe(info), projectId, version, c -> insert(c, projectId, info));
+        return add(who, projectId, version, info, null);
+    }
+
+    /** Adds a level and, with {@code above} (null: none), that many typical levels above it the same as it, in one change. */
+    public StoredLevel add(Editor who, long projectId, long version, LevelInfo info, TypicalRepeat above) {
+        String action = "level added: " + describe(info) + (above == null ? "" : ", and " + above.describe());
+        return writes.change(who, action, projectId, version, c -> {
+            StoredLevel l = insert(c, projectId, info);
+            if (above != null) above.addAbove(c, projectId, l.id());
+            return l;
+        });
     }
 
     /** Adds a level with bays of its own, refusing a name or elevation another level has, in the caller's change. */

@@ -44,12 +44,13 @@ public final class LineLoadStore {
         }
     }
 
+    /** Deletes a line load, kept for 30 days ({@link DeletedItems}) whether the pages or the API delete it. */
     public void delete(Editor who, long projectId, long version, long levelId, long id) {
-        change(who, "line load " + id + " deleted", projectId, version, c -> {
-            LevelStore.find(c, projectId, levelId);
+        writes.change(who, c -> "line load deleted: " + LoadSnapshots.lineLabel(c, projectId, levelId, id), projectId, version, c -> {
+            LoadSnapshots.keep(c, who, projectId, LevelStore.find(c, projectId, levelId), LoadSnapshots.LINE,
+                    LoadSnapshots.lineLabel(c, projectId, levelId, id), writes.sql().now());
             try (Handle h = Sql.on(c)) {
-                if (h.createUpdate("DELETE FROM line_load WHERE id = :id AND level_id = :level")
-                        .bind("id", id).bind("level", levelId).execute() == 0) throw new NotFound("line load", id);
+                h.createUpdate("DELETE FROM line_load WHERE id = :id AND level_id = :level").bind("id", id).bind("level", levelId).execute();
             }
             return id;
         });

@@ -216,6 +216,13 @@ public final class ModelWrites {
 
     Sql sql() { return sql; }
 
+    /** How many members of the level of this name carry only these bays (by name), and so go when they are cleared. */
+    int membersOf(long projectId, String level, java.util.Set<String> bays) {
+        if (results == null) return 0;
+        return (int) results.of(projectId).derived().members().stream()
+                .filter(m -> m.level().equals(level) && !m.bays().isEmpty() && bays.containsAll(m.bays())).count();
+    }
+
     /** How many members the project's current building has at the level of this name (every level: null). */
     int members(long projectId, String level) {
         if (results == null) return 0;

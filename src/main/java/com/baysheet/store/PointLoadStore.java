@@ -46,12 +46,13 @@ public final class PointLoadStore {
         }
     }
 
+    /** Deletes a point load, kept for 30 days ({@link DeletedItems}) whether the pages or the API delete it. */
     public void delete(Editor who, long projectId, long version, long levelId, long id) {
-        writes.change(who, "point load " + id + " deleted", projectId, version, c -> {
-            LevelStore.find(c, projectId, levelId);
+        writes.change(who, c -> "point load deleted: " + LoadSnapshots.pointLabel(c, projectId, levelId, id), projectId, version, c -> {
+            LoadSnapshots.keep(c, who, projectId, LevelStore.find(c, projectId, levelId), LoadSnapshots.POINT,
+                    LoadSnapshots.pointLabel(c, projectId, levelId, id), writes.sql().now());
             try (Handle h = Sql.on(c)) {
-                if (h.createUpdate("DELETE FROM point_load WHERE id = :id AND level_id = :level")
-                        .bind("id", id).bind("level", levelId).execute() == 0) throw new NotFound("point load", id);
+                h.createUpdate("DELETE FROM point_load WHERE id = :id AND level_id = :level").bind("id", id).bind("level", levelId).execute();
             }
             return id;
         });

@@ -49,22 +49,10 @@ public final class TypicalLevels {
      * typical floors entered once. Names count on from the typical's ("Level 3" gives "Level 4", "Level 5", ...).
      */
     public List<StoredLevel> repeat(Editor who, long projectId, long version, long typicalId, int count, double storeyHeight) {
-        if (count < 1 || count > com.baysheet.framing.model.Limits.MAX_LEVELS)
-            throw new InputError("count", count, "must be 1 to " + com.baysheet.framing.model.Limits.MAX_LEVELS);
-        com.baysheet.engine.Check.positive("storeyHeight", storeyHeight);
+        TypicalRepeat r = new TypicalRepeat(count, storeyHeight, "count", "storeyHeight");
         return writes.change(who, c -> "typical level " + LevelStore.find(c, projectId, typicalId).name() + " repeated "
-                + count + " times, " + com.baysheet.engine.units.Display.plain(storeyHeight) + " apart", projectId, version, c -> {
-            StoredLevel typical = TypicalRules.typical(c, projectId, typicalId);
-            List<StoredLevel> added = new ArrayList<>();
-            for (int k = 1; k <= count; k++) {
-                LevelInfo info = new LevelInfo(TypicalRules.nameAbove(typical.name(), k), typical.info().elevation() + k * storeyHeight,
-                        typical.info().roof(), typical.info().roofSlope(), typical.info().surface());
-                StoredLevel l = LevelStore.insert(c, projectId, info);
-                setTypical(c, l.id(), typical.id());
-                added.add(new StoredLevel(l.id(), projectId, info, typical.id()));
-            }
-            return added;
-        });
+                + count + " times, " + com.baysheet.engine.units.Display.plain(storeyHeight) + " apart", projectId, version,
+                c -> r.addAbove(c, projectId, typicalId));
     }
 
     /** Makes a linked level an independent copy of its typical's bays as they stand; later edits to the typical leave it. */

@@ -87,7 +87,7 @@ final class BayForm {
                   String cantileverOccupancy) {
         BayAssignment assignment(List<Cell> cells) {
             return new BayAssignment(cells, false, occupancy, deadLoad,
-                    new Framing(Direction.valueOf(beams), infillBeams), cantilevers, cantileverOccupancy);
+                    new Framing(Direction.valueOf(beams), infillBeams), cantilevers, cantileverOccupancy).cantileversOnEdges();
         }
     }
 }

@@ -50,15 +50,19 @@ final class BayRoutes {
             count(ctx, p, l, form, version, cells);
             return;
         }
+        String report = "";
         Optional<Object> done = switch (action) {
             case "clear" -> form.attempt(() -> { store.bays().clear(Editors.of(ctx), p.id(), version, l.id(), cells); return action; });
             case "opening" -> form.attempt(() -> { store.bays().assign(Editors.of(ctx), p.id(), version, l.id(), BayAssignment.opening(cells)); return action; });
             default -> {
                 BayForm.Values v = BayForm.read(form, p.info().units());
+                report = CantileverReport.param(form, cells, store.grids().find(p.id()));
                 yield form.attempt(() -> { store.bays().assign(Editors.of(ctx), p.id(), version, l.id(), v.assignment(cells)); return action; });
             }
         };
-        done.ifPresentOrElse(a -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels/" + l.id() + "/bays" + BayForm.kept(form)),
+        String bays = "/projects/" + p.id() + "/levels/" + l.id() + "/bays" + BayForm.kept(form) + report;
+        String then = action.equals("clear") ? Saved.CLEARED.after(bays) : bays;
+        done.ifPresentOrElse(a -> Pages.seeOther(ctx, then),
                 () -> render(ctx.status(form.stale() ? 409 : 422), p, l, form));
     }
 
@@ -90,6 +94,10 @@ final class BayRoutes {
         var loads = computed.model().building().lineLoads().stream().filter(w -> w.level().equals(l.name())).toList();
         m.put("table", BayGridView.of(computed.model().building().grid(), bays, loads, catalogue, new HashSet<>(form.values("cells")),
                 UnitLabels.of(p.info().units())));
+        Map<String, String> kept = new HashMap<>();
+        for (String f : BayForm.FIELDS) kept.put(f, form.value(f));
+        m.put("cantileverReport", CantileverReport.lines(ctx.queryParam(CantileverReport.PARAM), kept,
+                computed.model().building().grid(), bays, UnitLabels.of(p.info().units())));
         m.put("slabLimit", UnitLabels.of(p.info().units()).length(com.baysheet.framing.model.SlabSpan.limit(p.info().units())));
         ctx.render("bays/edit", m);
     }

@@ -7,7 +7,8 @@ import java.util.Map;
 
 /** Where each named column of a table is, from its header row. */
 final class Columns {
-    static final List<String> NAMES = List.of("kind", "name", "spacing", "elevation", "roof", "roof_slope", "same_as");
+    static final List<String> NAMES = List.of("kind", "name", "spacing", "elevation", "roof", "roof_slope", "same_as", "repeat",
+            "storey_height");
 
     private final Map<String, Integer> at;
 

@@ -5,6 +5,7 @@ import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.model.Grid;
 import com.baysheet.framing.model.GridAxis;
 import com.baysheet.store.LayoutImport;
+import com.baysheet.store.TypicalRepeat;
 import com.baysheet.project.LevelInfo;
 import com.baysheet.web.entry.EntryRefused;
 import com.baysheet.web.entry.LengthField;
@@ -17,9 +18,9 @@ import java.util.Locale;
 
 /**
  * A grid and levels as a table (docs/api.md): a header row naming the columns {@code kind, name, spacing, elevation,
- * roof, roof_slope, same_as} in any order (the last four may be left out), then one row per grid line ({@code kind} x
+ * roof, roof_slope, same_as, repeat, storey_height} in any order (the last six may be left out), then one row per grid line ({@code kind} x
  * or y, in order west to east or south to north, {@code spacing} to the next line and blank on the last) or per level
- * ({@code kind} level). Lengths and slopes are read as on the forms (30'-6", 9.1 m, 1/4, 2%). Blank lines and lines
+ * ({@code kind} level; {@code repeat} N with a {@code storey_height} adds N levels above it, the same as it). Lengths and slopes are read as on the forms (30'-6", 9.1 m, 1/4, 2%). Blank lines and lines
  * starting with # are skipped. Every refusal is collected, naming its row, so a file is corrected in one go.
  */
 record LayoutCsv(Grid grid, List<LayoutImport.Row> levels, List<String> refusals) {
@@ -87,12 +88,28 @@ record LayoutCsv(Grid grid, List<LayoutImport.Row> levels, List<String> refusals
                 throw new InputError("roof", roofText, "must be yes or no");
             double slope = roof ? Slopes.read(cols.get(row, "roof_slope"), "roof_slope", units) : Double.NaN;
             String sameAs = cols.get(row, "same_as");
-            out.add(new LayoutImport.Row(new LevelInfo(name, elevation, roof, slope), sameAs.isEmpty() ? null : sameAs));
+            TypicalRepeat above = above(cols, row, name, units);
+            if (above != null && !sameAs.isEmpty())
+                throw new InputError("repeat", above.count(), "cannot go with same_as: give the repeat on the row of " + sameAs);
+            out.add(new LayoutImport.Row(new LevelInfo(name, elevation, roof, slope), sameAs.isEmpty() ? null : sameAs, above));
         } catch (EntryRefused e) {
             refusals.add(at + e.getMessage());
         } catch (InputError e) {
             refusals.add(at + e.getMessage());
         }
+    }
+
+    /** The repeat column: that many levels above this one, the same as it, storey_height apart (blank: none). */
+    private static TypicalRepeat above(Columns cols, String[] row, String name, UnitSystem units) {
+        String count = cols.get(row, "repeat").strip();
+        if (count.isEmpty() || count.equals("0")) {
+            if (!cols.get(row, "storey_height").isBlank()) throw new InputError("storey_height", cols.get(row, "storey_height"),
+                    "is given without a repeat count");
+            return null;
+        }
+        if (!count.matches("\\d{1,9}")) throw new InputError("repeat", count, "must be a whole number of levels (blank for none)");
+        double height = Lengths.read(cols.get(row, "storey_height"), LengthField.span("storey_height"), units);
+        return new TypicalRepeat(Integer.parseInt(count), height, "levels[" + name + "].repeat", "levels[" + name + "].storey_height");
     }
 
     private static GridAxis axis(String axis, List<String> names, List<String> spacings, List<Integer> rows, UnitSystem units,

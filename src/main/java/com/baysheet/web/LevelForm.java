@@ -47,6 +47,27 @@ final class LevelForm {
         return new Values(name, elevation, roof, slope, shape.isEmpty() ? "MONOSLOPE" : shape, f.checked("slippery"), w);
     }
 
+    /**
+     * "And N more like it above" on the add-a-level form: how many (blank or 0 for none) and the storey height between
+     * them; the count and height are checked again, with the project's caps, when the levels are added.
+     */
+    static Repeat repeat(Form f, UnitSystem units) {
+        if (f.text("repeat").isEmpty() || f.text("repeat").equals("0")) return new Repeat(0, Double.NaN);
+        int count = f.integer("repeat");
+        if (count < 0) f.reject("repeat", "must be a count of levels, 1 or more (blank for none)");
+        double height = f.length("repeatHeight", LengthField.span("Storey height"), units);
+        Repeat r = new Repeat(count, height);
+        if (count > 0 && !Double.isNaN(height)) f.check("repeat", r::rule);
+        return r;
+    }
+
+    /** The levels to add above the new one; {@code count} 0 for none. */
+    record Repeat(int count, double storeyHeight) {
+        com.baysheet.store.TypicalRepeat rule() {
+            return count == 0 ? null : new com.baysheet.store.TypicalRepeat(count, storeyHeight, "repeat", "repeatHeight");
+        }
+    }
+
     /** The roof's snow surface: shape (default monoslope), slippery (default not), W (blank: not given). */
     record Values(String name, double elevation, boolean roof, double roofSlope, String roofShape, boolean slippery, double eaveToRidge) {
         LevelInfo info() {

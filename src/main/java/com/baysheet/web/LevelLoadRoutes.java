@@ -96,7 +96,7 @@ final class LevelLoadRoutes<E> {
         long load = id.applyAsLong(ctx);
         long version = form.version();
         form.attempt(() -> { loads.delete(Editors.of(ctx), p.id(), version, l.id(), load); return load; })
-                .ifPresentOrElse(done -> Pages.seeOther(ctx, path(p, l)),
+                .ifPresentOrElse(done -> Pages.seeOther(ctx, Saved.DELETED.after(path(p, l))),
                         () -> renderConfirm(ctx.status(form.stale() ? 409 : 422), store.projects().find(p.id()), l, load, form));
     }
 

@@ -49,7 +49,8 @@ final class LevelRoutes {
         Form form = Form.of(ctx);
         long version = form.version();
         LevelForm.Values v = LevelForm.read(form, p.info().units());
-        form.attempt(() -> store.levels().add(Editors.of(ctx), p.id(), version, v.info()))
+        LevelForm.Repeat repeat = LevelForm.repeat(form, p.info().units());
+        form.attempt(() -> store.levels().add(Editors.of(ctx), p.id(), version, v.info(), repeat.rule()))
                 .ifPresentOrElse(l -> Pages.seeOther(ctx, "/projects/" + p.id() + "/levels"),
                         () -> renderPage(ctx.status(form.stale() ? 409 : 422), p, Form.filled(gridValues(p)), form));
     }

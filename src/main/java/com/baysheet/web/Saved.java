@@ -14,6 +14,7 @@ public enum Saved {
     PASSWORD("password", "Saved: your new password. Your other logins were ended."),
     USER("user", "Saved: user account."),
     DELETED("deleted", "Deleted. It is kept for 30 days, and the administrator can restore it (Deleted items)."),
+    CLEARED("cleared", "Cleared. Whatever bays they held are kept for 30 days, and the administrator can restore them (Deleted items)."),
     RESTORED("restored", "Restored: it is back where it was, and the audit trail records it."),
     TOKEN_REVOKED("token", "Revoked: that API token no longer opens anything."),
 

@@ -31,7 +31,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 /** The store's behaviour, run against each database with the real migrations. */
 abstract class StoreContract implements LineLoadContract, FloorMethodContract, TypicalLevelContract, ModelFileContract,
-        DeletedItemContract {
+        DeletedItemContract, DeletedPartsContract {
     protected Database db;
     protected Store store;
 
