@@ -50,6 +50,10 @@ final class BayRoutes {
             count(ctx, p, l, form, version, cells);
             return;
         }
+        if (action.equals("clear") && !cells.isEmpty() && !"yes".equals(form.text("confirm"))) {
+            ClearBaysPage.render(ctx, store, p, l, form, cells);
+            return;
+        }
         String report = "";
         Optional<Object> done = switch (action) {
             case "clear" -> form.attempt(() -> { store.bays().clear(Editors.of(ctx), p.id(), version, l.id(), cells); return action; });

@@ -38,7 +38,7 @@ class ClearedBaysTest {
 
     private static HttpResponse<String> clear(Client eng, long p, StoredLevel l, List<String> cells) {
         List<Map.Entry<String, String>> f = new ArrayList<>(List.of(Map.entry("version", String.valueOf(server.store.projects().find(p).version())),
-                Map.entry("action", "clear")));
+                Map.entry("action", "clear"), Map.entry("confirm", "yes")));
         cells.forEach(c -> f.add(Map.entry("cells", c)));
         return eng.post("/projects/" + p + "/levels/" + l.id() + "/bays", f);
     }
@@ -74,6 +74,40 @@ class ClearedBaysTest {
         assertThat(records(p)).as("the same members, ids and records").isEqualTo(before);
         assertThat(server.store.deleted().list()).noneMatch(i -> i.id() == item.id());
         assertThat(server.office.review().audit().page(5, 0)).anySatisfy(e -> assertThat(e.detail()).contains("bays restored: Bays B-C/1-2"));
+    }
+
+    @Test
+    void leavingBaysUnframedIsConfirmedFirstAndTheConfirmationNamesTheBays() {
+        Client eng = server.as("erin", Role.ENGINEER), admin = server.as("admin", Role.ADMINISTRATOR);
+        long p = server.project();
+        StoredLevel l = level(p, "Level 2");
+        List<Bay> bays = server.store.bays().findByLevel(p, l.id());
+        long version = server.store.projects().find(p).version();
+        Grid grid = server.store.grids().find(p);
+
+        List<Map.Entry<String, String>> f = new ArrayList<>(List.of(Map.entry("version", String.valueOf(version)),
+                Map.entry("action", "clear"), Map.entry("cells", "0,1"), Map.entry("cells", "1,1"), Map.entry("occupancy", "office")));
+        HttpResponse<String> asked = eng.post("/projects/" + p + "/levels/" + l.id() + "/bays", f);
+        assertThat(asked.statusCode()).isEqualTo(200);
+        assertThat(Html.texts(asked.body(), "#bays-to-clear tbody td:first-child"))
+                .containsExactly(grid.bayName(0, 1), grid.bayName(1, 1));
+        assertThat(Html.shown(asked.body())).contains("kept for 30 days", "licensed engineer");
+        assertThat(server.store.bays().findByLevel(p, l.id())).as("nothing cleared yet").isEqualTo(bays);
+        assertThat(server.store.projects().find(p).version()).isEqualTo(version);
+
+        // the confirmation's own form, sent as it stands
+        List<Map.Entry<String, String>> confirm = new ArrayList<>();
+        for (var input : Html.all(asked.body(), "form.danger input[type=hidden]"))
+            if (!input.attr("name").equals("_csrf")) confirm.add(Map.entry(input.attr("name"), input.attr("value")));
+        assertThat(confirm).contains(Map.entry("confirm", "yes"), Map.entry("occupancy", "office"));
+        HttpResponse<String> done = eng.post("/projects/" + p + "/levels/" + l.id() + "/bays", confirm);
+        assertThat(done.statusCode()).as(done.body()).isEqualTo(303);
+        assertThat(done.headers().firstValue("Location").orElseThrow()).contains("occupancy=office");
+        assertThat(server.store.bays().findByLevel(p, l.id())).hasSize(bays.size() - 2);
+
+        DeletedItem item = kept(p);
+        assertThat(admin.post("/admin/deleted/" + item.id() + "/restore", List.of()).statusCode()).isEqualTo(303);
+        assertThat(server.store.bays().findByLevel(p, l.id())).isEqualTo(bays);
     }
 
     @Test
