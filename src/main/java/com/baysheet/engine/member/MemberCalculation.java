@@ -9,7 +9,6 @@ import com.baysheet.engine.load.AreaShare;
 import com.baysheet.engine.load.LiveShare;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
-import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.reduction.LiveFactors;
@@ -33,11 +32,14 @@ public final class MemberCalculation {
     public static MemberResult calculate(CalcContext ctx, MemberInput in) {
         RecordBuilder rec = RecordBuilder.numbersOnly(in.subject(), ctx.edition().id(), ctx.system());
         Outcome o = run(ctx, in, rec);
-        return new MemberResult(o.record, o.left, o.right, o.reduction, () -> run(ctx, in, new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system())).record,
-                () -> MethodComparison.of(ctx, in));
+        return new MemberResult(rec.numbers(), o.left, o.right, o.reduction, () -> {
+                    RecordBuilder text = new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system());
+                    run(ctx, in, text);
+                    return text.build();
+                }, () -> MethodComparison.of(ctx, in));
     }
 
-    private record Outcome(CalcRecord record, EndShare left, EndShare right, LiveFactors reduction) {}
+    private record Outcome(EndShare left, EndShare right, LiveFactors reduction) {}
 
     private static Outcome run(CalcContext ctx, MemberInput in, RecordBuilder rec) {
         LoadBook book = LoadBook.of(ctx, in);
@@ -52,10 +54,12 @@ public final class MemberCalculation {
         boolean halfL = halfLAllowed(ctx, book);
         if (in.kind().isColumn()) AxialActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, snow, rec);
         else BendingActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, snow, rec);
-        rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1), book.driftSketch));
-        BalconyNote.record(ctx, book, rec);
-        Cautions.standard(ctx, book, rec);
-        return new Outcome(rec.build(), share(ctx, in, book, true), in.kind().isColumn()
+        if (rec.writesText()) { // the sketch and the notes are for reading
+            rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1), book.driftSketch));
+            BalconyNote.record(ctx, book, rec);
+            Cautions.standard(ctx, book, rec);
+        }
+        return new Outcome(share(ctx, in, book, true), in.kind().isColumn()
                 || in.support() instanceof Support.Cantilever ? null : share(ctx, in, book, false), reduction[0]);
     }
 
