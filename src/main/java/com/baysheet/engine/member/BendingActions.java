@@ -43,6 +43,8 @@ final class BendingActions {
             OVERHANG = List.of(Effect.RA, Effect.RB, Effect.V, Effect.MPOS, Effect.MNEG),
             SIMPLE = List.of(Effect.RA, Effect.RB, Effect.V, Effect.MPOS);
 
+    private static final double[] ZEROS = new double[Effect.values().length];
+
     static List<Effect> effects(Support s) {
         if (s instanceof Support.Cantilever) return CANTILEVER;
         if (s instanceof Support.Overhang) return OVERHANG;
@@ -113,14 +115,15 @@ final class BendingActions {
         double ei = in.stiffness();
         // statics of the dead load: no code clause (the beam formulas are those of any handbook)
         double[] d = caseEffects(rec, DEAD, s, List.of(book.dead), effects, ei, Clause.NONE);
-        double[] l = new double[effects.size()];
+        // a case the member does not carry has no effects: the shared zeros, read only (concentrated() copies them)
+        double[] l = ZEROS;
         if (!floor0.isEmpty()) {
             caseEffects(rec, UNREDUCED, s, List.of(floor0), effects, Double.NaN, ed.clause("loads.table"));
             l = caseEffects(rec, REDUCED, s, patterns(s, floor), effects, ei, ReductionMethods.of(ctx).clause(ctx));
         }
-        double[] lr = new double[effects.size()];
+        double[] lr = ZEROS;
         if (!roof.isEmpty()) lr = caseEffects(rec, ROOF, s, patterns(s, roof), effects, ei, ed.clause("roof.reduction"));
-        double[] sn = new double[effects.size()];
+        double[] sn = ZEROS;
         if (snow) sn = caseEffects(rec, SNOW, s, patterns(s, book.snow), effects, ei, ed.clause("snow.sloped"));
         if (s instanceof Support.Overhang && !(floor.isEmpty() && roof.isEmpty()))
             rec.info("Live load placed on the back span, on the overhang and on both; the worst of the three is used for each effect.",

@@ -16,7 +16,7 @@ import com.baysheet.engine.reduction.ReductionMethods;
 import com.baysheet.engine.reduction.RoofLiveLoad;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -48,7 +48,7 @@ public final class MemberCalculation {
         boolean snow = MemberSnow.record(ctx, in, book, rec);
         OpenToSky.record(ctx, in, rec);
         LiveFactors[] reduction = new LiveFactors[1];
-        Map<String, Double> factors = factors(ctx, in, book, rec, reduction);
+        double[] factors = factors(ctx, in, book, rec, reduction);
         BeamLoads floor0 = book.combined(null, false), floor = book.combined(factors, false);
         BeamLoads roof0 = book.combined(null, true), roof = book.combined(factors, true);
         boolean halfL = halfLAllowed(ctx, book);
@@ -63,15 +63,18 @@ public final class MemberCalculation {
                 || in.support() instanceof Support.Cantilever ? null : share(ctx, in, book, false), reduction[0]);
     }
 
-    /** Multipliers on every live source: floor reduction for floor sources, Lr/L0 for roof sources. */
-    private static Map<String, Double> factors(CalcContext ctx, MemberInput in, LoadBook book, RecordBuilder rec, LiveFactors[] reduction) {
-        Map<String, Double> f = new LinkedHashMap<>();
+    /**
+     * Multipliers on every live source, in the order of {@code book.live}: floor reduction for floor sources, Lr/L0 for
+     * roof sources, 1 for the rest (a line load's live, never reduced, or a partition share handed down with the option now off).
+     */
+    private static double[] factors(CalcContext ctx, MemberInput in, LoadBook book, RecordBuilder rec, LiveFactors[] reduction) {
+        Map<String, Double> floor = Map.of(), roofs = Map.of();
         if (!book.floorAreas.isEmpty()) {
             if (in.onRoof())
                 rec.info("Occupiable roof: its live load follows the floor rules.", ctx.edition().clause("roof.occupiable"));
             LiveFactors lf = ReductionMethods.of(ctx).reduce(ctx, in.kind(), book.floorAreas, in.floors(),
                     in.floorsSupported(), in.support().span(), book.supportedDead, rec);
-            f.putAll(lf.bySource());
+            floor = lf.bySource();
             reduction[0] = lf;
             if (!in.kind().isColumn() && carriesDeliveredArea(in))
                 rec.info("A_T includes the tributary areas delivered by the members this one carries, each counted once, "
@@ -87,13 +90,19 @@ public final class MemberCalculation {
             if (area > 0 && book.roofAreas.size() > 1 && area < book.roofAreas.values().stream().mapToDouble(Double::doubleValue).sum())
                 rec.info("Mixed roof: R1 comes from the ordinary roof area only; the other roof loads are added unreduced "
                         + "(common practice, no code clause).", ctx.edition().clause("roof.reduction"));
+            roofs = new HashMap<>();
             for (String id : book.roofAreas.keySet()) {
                 Occupancy o = ctx.catalogue().get(id);
-                f.put(id, RoofLiveLoad.factor(ctx, o, area, in.roofSlope(), rec));
+                roofs.put(id, RoofLiveLoad.factor(ctx, o, area, in.roofSlope(), rec));
             }
         }
-        for (String source : book.live.keySet())
-            if (!f.containsKey(source)) f.put(source, 1.0); // a line load's live (never reduced), or a partition share handed down with the option now off
+        double[] f = new double[book.live.size()];
+        int i = 0;
+        for (String source : book.live.keySet()) {
+            Double v = roofs.get(source);
+            if (v == null) v = floor.get(source);
+            f[i++] = v == null ? 1 : v;
+        }
         return f;
     }
 
