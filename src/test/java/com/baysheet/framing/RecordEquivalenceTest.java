@@ -1,6 +1,17 @@
 package com.baysheet.framing;
 
+import com.baysheet.engine.CalcContext;
+import com.baysheet.engine.code.MemberKind;
+import com.baysheet.engine.load.AreaLoad;
+import com.baysheet.engine.load.AreaStrip;
+import com.baysheet.engine.load.LineLoad;
+import com.baysheet.engine.load.MemberInput;
+import com.baysheet.engine.load.PointLoad;
+import com.baysheet.engine.load.Support;
+import com.baysheet.engine.member.MemberCalculation;
+import com.baysheet.engine.member.MemberResult;
 import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.engine.record.Entry;
 import com.baysheet.engine.record.RecordJson;
 import com.baysheet.engine.record.Step;
@@ -41,8 +52,9 @@ import static org.assertj.core.api.Assertions.fail;
 
 /**
  * The engine's records and numbers stay what they were when the engine's numbers pass was made leaner: for the demo
- * projects and for random models (the generators of the derivation properties, at fixed seeds, so that every run
- * draws the same models), each member's full record as text, byte for byte, and its numbers (every value in the
+ * projects, for random models (the generators of the derivation properties, at fixed seeds, so that every run
+ * draws the same models) and for random members straight through the engine (overhangs among them, which the framing
+ * model never makes), each member's full record as text, byte for byte, and its numbers (every value in the
  * record, the numbers-only results read through {@code value}, {@code label} and {@code stepValue}, the end shares
  * handed down) and every take-down row, within 1e-12 relative where a scan of positions was replaced by statics.
  *
@@ -92,6 +104,7 @@ class RecordEquivalenceTest {
         } finally {
             db.close();
         }
+        engineMembers(out);
         Random seeds = new Random(20261203);
         for (int i = 0; i < RANDOM_MODELS; i++) {
             long seed = seeds.nextLong();
@@ -100,6 +113,67 @@ class RecordEquivalenceTest {
             capture("rich " + seed, RederivationProperties.model(new Random(seed), seed), out);
         }
         return out;
+    }
+
+    static final String[] FLOORS = {"office", "office-corridor", "retail-upper", "hospital-operating", "stairs", "assembly-other",
+            "storage-heavy", "garage-passenger", "library-stacks", "balcony-residential", "school-classroom"};
+
+    /**
+     * Members the framing model never makes, straight through the engine: overhanging beams (the framing has none),
+     * cantilevers and simple spans with part-length strips, roof strips, point and line loads and stiffness, and columns,
+     * in US and SI units (the generators of the engine's member properties and of the engine benchmark's batch).
+     */
+    static void engineMembers(Map<String, Capture> out) {
+        Random rnd = new Random(20261204);
+        for (int i = 0; i < 600; i++) {
+            CalcContext ctx = rnd.nextInt(4) == 0 ? CalcContext.of(UnitSystem.SI) : CalcContext.of(UnitSystem.US);
+            double unit = ctx.system() == UnitSystem.SI ? 0.3048 : 1;
+            int kind = rnd.nextInt(5);
+            double span = (3 + rnd.nextInt(150) / 4.0) * unit;
+            String occ = rnd.nextInt(5) == 0 ? "roof-ordinary" : FLOORS[rnd.nextInt(FLOORS.length)];
+            double dead = (10 + rnd.nextInt(90)) * (unit == 1 ? 1 : 0.04788);
+            double width = (0.5 + rnd.nextInt(30) / 2.0) * unit;
+            MemberInput in;
+            if (kind == 4) {
+                in = MemberInput.column("C" + i, MemberKind.INTERIOR_COLUMN, 1 + rnd.nextInt(6),
+                        List.of(new AreaLoad(occ, (50 + rnd.nextInt(2000)) * unit * unit, dead)));
+            } else {
+                Support s = switch (kind) {
+                    case 0 -> new Support.Simple(span);
+                    case 1, 2 -> new Support.Overhang(span, span * (0.05 + rnd.nextInt(30) / 20.0)); // overhang up to 1.5 ℓ
+                    default -> new Support.Cantilever(span);
+                };
+                double len = s.length();
+                List<AreaStrip> strips = new ArrayList<>();
+                strips.add(new AreaStrip(occ, width, 0, len, dead));
+                if (rnd.nextBoolean()) {
+                    double a = len * rnd.nextInt(8) / 8, b = a + (len - a) * (1 + rnd.nextInt(4)) / 4;
+                    String other = occ.startsWith("roof") ? occ : FLOORS[rnd.nextInt(FLOORS.length)];
+                    strips.add(new AreaStrip(other, width / 2, a, b, dead));
+                }
+                List<PointLoad> points = rnd.nextInt(3) == 0 && !occ.startsWith("roof")
+                        ? List.of(PointLoad.applied("unit", len * rnd.nextInt(9) / 8, 500 * unit, 300 * unit, occ)) : List.of();
+                double slope = occ.startsWith("roof") ? rnd.nextInt(13) / 2.0 : Double.NaN;
+                double ei = rnd.nextBoolean() ? Double.NaN : (1e5 + rnd.nextInt(1000) * 1e4) * (unit == 1 ? 1 : 0.004214);
+                MemberKind mk = kind == 3 ? MemberKind.CANTILEVER_BEAM : kind == 0 ? MemberKind.INTERIOR_BEAM : MemberKind.EDGE_BEAM;
+                in = new MemberInput("B" + i, mk, s, 1, strips, List.of(), points, 0, slope, ei, false);
+                if (rnd.nextInt(4) == 0) in = in.withLineLoads(List.of(new LineLoad("wall", 0, len / 2, 200 * unit, 0, "", false)));
+            }
+            capture("engine " + i, in, ctx, out);
+        }
+    }
+
+    static void capture(String key, MemberInput in, CalcContext ctx, Map<String, Capture> out) {
+        MemberResult m;
+        CalcRecord r;
+        try {
+            m = MemberCalculation.calculate(ctx, in);
+            r = m.record();
+        } catch (RuntimeException e) {
+            put(out, key + " refused", new StringBuilder(e.getClass().getName() + ": " + e.getMessage()), new Numbers());
+            return;
+        }
+        capture(key, m, r, out);
     }
 
     /** A model the derivation refuses is captured by its message: a refusal must stay a refusal. */
@@ -115,21 +189,7 @@ class RecordEquivalenceTest {
     }
 
     static void capture(String source, Derived d, Map<String, Capture> out) {
-        for (DerivedMember m : d.members()) {
-            CalcRecord r = m.result().record();
-            Numbers n = new Numbers();
-            StringBuilder text = new StringBuilder();
-            walk(RecordJson.mapper().valueToTree(r), "", text, n);
-            // the numbers-only pass, read as the framing model reads it
-            for (Entry e : r.results()) {
-                n.add(m.result().value(e.key()));
-                text.append("label ").append(m.result().label(e.key())).append('\n');
-            }
-            for (Step s : r.steps()) n.add(m.result().stepValue(s.symbol()));
-            walk(RecordJson.mapper().valueToTree(m.result().left()), "left", text, n);
-            if (m.result().right() != null) walk(RecordJson.mapper().valueToTree(m.result().right()), "right", text, n);
-            put(out, source + " " + m.id(), text, n);
-        }
+        for (DerivedMember m : d.members()) capture(source + " " + m.id(), m.result(), m.result().record(), out);
         for (TakeDown t : d.takeDowns()) {
             Numbers n = new Numbers();
             StringBuilder text = new StringBuilder();
@@ -139,7 +199,25 @@ class RecordEquivalenceTest {
         }
     }
 
+    static void capture(String key, MemberResult m, CalcRecord r, Map<String, Capture> out) {
+        Numbers n = new Numbers();
+        StringBuilder text = new StringBuilder();
+        walk(RecordJson.mapper().valueToTree(r), "", text, n);
+        // the numbers-only pass, read as the framing model reads it
+        for (Entry e : r.results()) {
+            n.add(m.value(e.key()));
+            text.append("label ").append(m.label(e.key())).append('\n');
+        }
+        for (Step s : r.steps()) n.add(m.stepValue(s.symbol()));
+        walk(RecordJson.mapper().valueToTree(m.left()), "left", text, n);
+        if (m.right() != null) walk(RecordJson.mapper().valueToTree(m.right()), "right", text, n);
+        put(out, key, text, n);
+    }
+
     private static void put(Map<String, Capture> out, String key, StringBuilder text, Numbers n) {
+        // -Dequivalence.show=KEY,KEY prints what a member's digest is taken over, to find what differs
+        if (List.of(System.getProperty("equivalence.show", "").split(",")).contains(key))
+            System.out.println("equivalence.show " + key + "\n" + text);
         if (out.put(key, new Capture(sha256(text.toString()), n.toArray())) != null) throw new IllegalStateException("captured twice: " + key);
     }
 
