@@ -1,6 +1,7 @@
 package com.baysheet.bench;
 
 import com.baysheet.engine.code.MemberKind;
+import com.baysheet.engine.code.Occupancy;
 import com.baysheet.engine.load.AreaLoad;
 import com.baysheet.engine.load.AreaStrip;
 import com.baysheet.engine.load.MemberInput;
@@ -29,8 +30,8 @@ import java.util.concurrent.TimeUnit;
 
 /**
  * One member calculation with its full record, and a batch of 10,000 varied members (simple beams, overhangs,
- * cantilevers and columns), on one thread. Run with {@code mvn -B -ntp -Pbench compile exec:java
- * -Dexec.args="EngineBenchmark -f 1 -wi 3 -i 5"}; see docs/benchmarks.md.
+ * cantilevers and columns), on one thread, and the one member's numbers as bare arithmetic for the ratio. Run with
+ * {@code mvn -B -ntp -Pbench compile exec:exec -Dbench="EngineBenchmark -f 1 -wi 3 -i 5 -w 2s -r 2s -t 1"}; see docs/benchmarks.md.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -44,12 +45,19 @@ public class EngineBenchmark {
     CalcContext ctx;
     MemberInput officeBeam;
     List<MemberInput> members;
+    /** The baseline's inputs, read from fields so that the compiler cannot fold them, and its output slots. */
+    double[] bare;
+    final double[] bareOut = new double[BareMember.SLOTS];
 
     @Setup
     public void setUp() {
         ctx = CalcContext.of(UnitSystem.US);
-        officeBeam = MemberInput.beam("B-1", MemberKind.INTERIOR_BEAM, new Support.Simple(30),
-                List.of(new AreaStrip("office", 10, 0, 30, 65)));
+        officeBeam = MemberInput.beam("B-1", MemberKind.INTERIOR_BEAM, new Support.Simple(BareMember.SPAN),
+                List.of(new AreaStrip("office", BareMember.WIDTH, 0, BareMember.SPAN, BareMember.DEAD)));
+        Occupancy office = ctx.catalogue().get("office");
+        bare = new double[] {BareMember.SPAN, BareMember.WIDTH, BareMember.DEAD, office.uniform(ctx.system()),
+                ctx.edition().kll(MemberKind.INTERIOR_BEAM), office.concentrated(ctx.system()), office.contactSide(ctx.system()),
+                ctx.constant("threshold"), ctx.edition().constant("limit.oneFloor")};
         Random r = new Random(20240601);
         String[] floors = {"office", "retail-upper", "school-classroom", "storage-heavy", "assembly-other"};
         members = new ArrayList<>(BATCH);
@@ -67,6 +75,17 @@ public class EngineBenchmark {
                         List.of(new AreaLoad(occ, 200 + r.nextInt(2000), 80)));
             });
         }
+    }
+
+    /**
+     * The same member's numbers as bare arithmetic ({@link BareMember}: the formulas inline, plain doubles, no record):
+     * the floor under the engine's numbers pass, which the engine's figure is given as a ratio of.
+     */
+    @Benchmark
+    public void oneMemberBareArithmetic(Blackhole bh) {
+        double[] in = bare;
+        BareMember.calculate(in[0], in[1], in[2], in[3], in[4], in[5], in[6], in[7], in[8], bareOut);
+        bh.consume(bareOut);
     }
 
     @Benchmark

@@ -35,8 +35,9 @@ public final class BeamSolver {
 
         double[] xs = events(loads, length, span, cantilever);
         int n = xs.length;
-        // state at the start of each segment, kept for the deflection pass
-        double[] mStart = new double[n], vStart = new double[n], wSeg = new double[n];
+        // state at the start of each segment, kept for the deflection pass (none without a stiffness)
+        boolean deflect = !Double.isNaN(stiffness);
+        double[] mStart = deflect ? new double[n] : null, vStart = deflect ? new double[n] : null, wSeg = deflect ? new double[n] : null;
         double v = 0, m = fixed;
         double maxV = 0, maxVAt = 0, maxM = Double.NEGATIVE_INFINITY, maxMAt = 0, minM = Double.POSITIVE_INFINITY, minMAt = 0;
         double tol = Tolerances.SAME_POSITION * length;
@@ -49,7 +50,7 @@ public final class BeamSolver {
             if (Math.abs(v) > Math.abs(maxV)) { maxV = v; maxVAt = xi; }
             if (m > maxM) { maxM = m; maxMAt = xi; }
             if (m < minM) { minM = m; minMAt = xi; }
-            mStart[i] = m; vStart[i] = v; wSeg[i] = w;
+            if (deflect) { mStart[i] = m; vStart[i] = v; wSeg[i] = w; }
             if (i == n - 1) break;
             double s = xs[i + 1] - xi;
             if (w > 0 && v > 0 && v / w < s) {
@@ -67,7 +68,7 @@ public final class BeamSolver {
         if (Math.abs(minM) < Tolerances.ZERO_MOMENT * Math.max(1, Math.abs(total) * length)) minM = 0;
 
         double dMax = Double.NaN, dAt = Double.NaN, tip = Double.NaN;
-        if (!Double.isNaN(stiffness)) {
+        if (deflect) {
             double[] d = deflection(xs, mStart, vStart, wSeg, span, cantilever, stiffness);
             dMax = d[0]; dAt = d[1]; tip = d[2];
         }

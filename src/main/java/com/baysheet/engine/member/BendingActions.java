@@ -14,7 +14,6 @@ import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.reduction.ReductionMethods;
 import com.baysheet.engine.units.Quantity;
 
-import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -40,10 +39,72 @@ final class BendingActions {
         Quantity q() { return this == MPOS || this == MNEG ? Quantity.MOMENT : Quantity.FORCE; }
     }
 
+    private static final List<Effect> CANTILEVER = List.of(Effect.RA, Effect.V, Effect.MNEG),
+            OVERHANG = List.of(Effect.RA, Effect.RB, Effect.V, Effect.MPOS, Effect.MNEG),
+            SIMPLE = List.of(Effect.RA, Effect.RB, Effect.V, Effect.MPOS);
+
+    private static final double[] ZEROS = new double[Effect.values().length];
+
     static List<Effect> effects(Support s) {
-        if (s instanceof Support.Cantilever) return List.of(Effect.RA, Effect.V, Effect.MNEG);
-        if (s instanceof Support.Overhang) return List.of(Effect.RA, Effect.RB, Effect.V, Effect.MPOS, Effect.MNEG);
-        return List.of(Effect.RA, Effect.RB, Effect.V, Effect.MPOS);
+        if (s instanceof Support.Cantilever) return CANTILEVER;
+        if (s instanceof Support.Overhang) return OVERHANG;
+        return SIMPLE;
+    }
+
+    /**
+     * A load case's names on the record, written once rather than per member: the step symbol ("R_A.D"), result key
+     * ("D.RA") and label ("Left reaction R_A, dead load") of each effect, by {@link Effect#ordinal}.
+     */
+    static final class Case {
+        final String name, what, total, totalTitle, deflection, deflectionKey, deflectionTitle;
+        final String[] symbol = new String[Effect.values().length], key = new String[symbol.length], label = new String[symbol.length];
+
+        Case(String name, String what) {
+            this.name = name;
+            this.what = what;
+            total = "W." + name;
+            totalTitle = "Total " + what;
+            deflection = "Δ." + name;
+            deflectionKey = ResultKey.of(name, "Δ").text();
+            deflectionTitle = "Deflection, " + what;
+            for (Effect e : Effect.values()) {
+                symbol[e.ordinal()] = e.symbol + "." + name;
+                key[e.ordinal()] = ResultKey.of(name, e.key).text();
+                label[e.ordinal()] = e.title + ", " + what;
+            }
+        }
+    }
+
+    static final Case DEAD = new Case("D", "dead load"), UNREDUCED = new Case("L0", "floor live load, unreduced"),
+            REDUCED = new Case("L", "floor live load, reduced"), ROOF = new Case("Lr", "roof live load"),
+            SNOW = new Case("S", "snow load, not reduced");
+
+    /** The combination results' keys and labels by effect: design live load, factored, service. */
+    private static final String[] DESIGN_KEY = new String[Effect.values().length], DESIGN_LABEL = new String[DESIGN_KEY.length],
+            FACTORED_KEY = new String[DESIGN_KEY.length], SERVICE_KEY = new String[DESIGN_KEY.length];
+    /** "Left reaction R_A, factored (LRFD 2)" by effect and combination, for members without snow (the label names the combination alone). */
+    private static final String[][] COMBINED_LABEL = new String[DESIGN_KEY.length][LoadCombinations.GRAVITY.size()];
+
+    static {
+        for (Effect e : Effect.values()) {
+            int i = e.ordinal();
+            DESIGN_KEY[i] = ResultKey.of("Ldes", e.key).text();
+            DESIGN_LABEL[i] = e.title + ", design live load";
+            FACTORED_KEY[i] = ResultKey.of("LRFD", e.key).text();
+            SERVICE_KEY[i] = ResultKey.of("ASD", e.key).text();
+            for (int c = 0; c < LoadCombinations.GRAVITY.size(); c++) {
+                var combination = LoadCombinations.GRAVITY.get(c);
+                COMBINED_LABEL[i][c] = e.title + (combination.strength() ? ", factored (" : ", service (") + combination.name() + ")";
+            }
+        }
+    }
+
+    private static String combinedLabel(Effect e, LoadCombinations.Governing g, boolean strength) {
+        if (g.formula().isEmpty()) {
+            int c = LoadCombinations.GRAVITY.indexOf(g.combination());
+            if (c >= 0) return COMBINED_LABEL[e.ordinal()][c];
+        }
+        return e.title + (strength ? ", factored (" : ", service (") + g.label() + ")";
     }
 
     static void record(CalcContext ctx, MemberInput in, LoadBook book, BeamLoads floor0, BeamLoads floor,
@@ -53,34 +114,35 @@ final class BendingActions {
         List<Effect> effects = effects(s);
         double ei = in.stiffness();
         // statics of the dead load: no code clause (the beam formulas are those of any handbook)
-        double[] d = caseEffects(rec, "D", "dead load", s, List.of(book.dead), effects, ei, Clause.NONE);
-        double[] l = new double[effects.size()];
+        double[] d = caseEffects(rec, DEAD, s, List.of(book.dead), effects, ei, Clause.NONE);
+        // a case the member does not carry has no effects: the shared zeros, read only (concentrated() copies them)
+        double[] l = ZEROS;
         if (!floor0.isEmpty()) {
-            caseEffects(rec, "L0", "floor live load, unreduced", s, List.of(floor0), effects, Double.NaN, ed.clause("loads.table"));
-            l = caseEffects(rec, "L", "floor live load, reduced", s, patterns(s, floor), effects, ei, ReductionMethods.of(ctx).clause(ctx));
+            caseEffects(rec, UNREDUCED, s, List.of(floor0), effects, Double.NaN, ed.clause("loads.table"));
+            l = caseEffects(rec, REDUCED, s, patterns(s, floor), effects, ei, ReductionMethods.of(ctx).clause(ctx));
         }
-        double[] lr = new double[effects.size()];
-        if (!roof.isEmpty()) lr = caseEffects(rec, "Lr", "roof live load", s, patterns(s, roof), effects, ei, ed.clause("roof.reduction"));
-        double[] sn = new double[effects.size()];
-        if (snow) sn = caseEffects(rec, "S", "snow load, not reduced", s, patterns(s, book.snow), effects, ei, ed.clause("snow.sloped"));
+        double[] lr = ZEROS;
+        if (!roof.isEmpty()) lr = caseEffects(rec, ROOF, s, patterns(s, roof), effects, ei, ed.clause("roof.reduction"));
+        double[] sn = ZEROS;
+        if (snow) sn = caseEffects(rec, SNOW, s, patterns(s, book.snow), effects, ei, ed.clause("snow.sloped"));
         if (s instanceof Support.Overhang && !(floor.isEmpty() && roof.isEmpty()))
             rec.info("Live load placed on the back span, on the overhang and on both; the worst of the three is used for each effect.",
                     ed.clause("reduction.basic"));
 
         double[] design = concentrated(ctx, book.floorAreas.keySet(), s, effects, l, ConcentratedCheck.FLOOR, rec);
         double[] lrDesign = concentrated(ctx, book.roofAreas.keySet(), s, effects, lr, ConcentratedCheck.ROOF, rec);
+        Clause lrfd = ed.clause("combo.lrfd"), asd = ed.clause("combo.asd");
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
+            int k = e.ordinal();
             double si = snow ? sn[i] : Double.NaN;
-            var cases = new LoadCombinations.Unfactored(e.lower, d[i], design[i], lrDesign[i], si, halfL, e.q(),
-                    ed.clause("combo.lrfd"), ed.clause("combo.asd"));
-            ResultKey factored = ResultKey.of("LRFD", e.key), service = ResultKey.of("ASD", e.key);
-            var u = LoadCombinations.govern(true, factored.text(), cases, rec);
-            var a = LoadCombinations.govern(false, service.text(), cases, rec);
-            rec.result(ResultKey.of("Ldes", e.key), e.title + ", design live load", design[i], e.q())
-               .result(factored, e.title + ", factored (" + u.label() + ")", u.value(), e.q())
-               .result(service, e.title + ", service (" + a.label() + ")", a.value(), e.q())
-               .governs(factored);
+            var cases = new LoadCombinations.Unfactored(e.lower, d[i], design[i], lrDesign[i], si, halfL, e.q(), lrfd, asd);
+            var u = LoadCombinations.govern(true, FACTORED_KEY[k], cases, rec);
+            var a = LoadCombinations.govern(false, SERVICE_KEY[k], cases, rec);
+            rec.result(DESIGN_KEY[k], DESIGN_LABEL[k], design[i], e.q())
+               .result(FACTORED_KEY[k], combinedLabel(e, u, true), u.value(), e.q())
+               .result(SERVICE_KEY[k], combinedLabel(e, a, false), a.value(), e.q())
+               .governs(FACTORED_KEY[k]);
         }
         if (s instanceof Support.Overhang o && !(floor0.isEmpty() && roof0.isEmpty()))
             MinimumReactions.record(ctx, o, book, floor0, roof0, rec);
@@ -88,7 +150,8 @@ final class BendingActions {
         if (!Double.isNaN(ei)) {
             BeamLoads total = new BeamLoads().add(book.dead, 1).add(floor, 1).add(roof, 1);
             BeamActions t = MemberCalculation.solve(s, total, ei);
-            rec.step("Δ.total", "Deflection under D + L + Lr (all spans loaded)", "Δ from ∫∫ M/EI", "at x = " + rec.show(t.maxDeflectionAt(), Quantity.LENGTH),
+            rec.step("Δ.total", "Deflection under D + L + Lr (all spans loaded)", "Δ from ∫∫ M/EI",
+                    rec.writesText() ? "at x = " + rec.show(t.maxDeflectionAt(), Quantity.LENGTH) : "",
                     t.maxDeflection(), Quantity.SMALL_LENGTH, Clause.NONE);
             rec.result("Δ.total", "Deflection, D + L + Lr", t.maxDeflection(), Quantity.SMALL_LENGTH);
         }
@@ -101,38 +164,65 @@ final class BendingActions {
     }
 
     /** Records the effects of one load case, worst over its patterns, and returns them in the order of {@code effects}. */
-    private static double[] caseEffects(RecordBuilder rec, String c, String what, Support s, List<BeamLoads> patterns,
+    private static double[] caseEffects(RecordBuilder rec, Case c, Support s, List<BeamLoads> patterns,
                                         List<Effect> effects, double ei, Clause clause) {
-        List<BeamActions> acts = new ArrayList<>();
-        for (BeamLoads p : patterns) acts.add(MemberCalculation.solve(s, p, ei));
-        BeamActions full = acts.get(0);
+        boolean text = rec.writesText();
+        BeamActions[] acts = new BeamActions[patterns.size()];
+        for (int j = 0; j < acts.length; j++) acts[j] = MemberCalculation.solve(s, patterns.get(j), ei);
+        BeamActions full = acts[0];
         double w = patterns.get(0).total();
-        rec.step("W." + c, "Total " + what, "W = Σ w·ℓ + Σ P", StaticsText.total(rec, patterns.get(0)), w, Quantity.FORCE, clause);
+        rec.step(c.total, c.totalTitle, "W = Σ w·ℓ + Σ P", StaticsText.total(rec, patterns.get(0)), w, Quantity.FORCE, clause);
         double[] out = new double[effects.size()];
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
             double best = 0;
             int k = 0;
-            for (int j = 0; j < acts.size(); j++) {
-                double v = value(acts.get(j), e, s);
+            for (int j = 0; j < acts.length; j++) {
+                double v = value(acts[j], e, s);
                 // M− is the most negative; every other effect the largest (a reaction's uplift is not a gravity design value)
                 if (e == Effect.MNEG ? v < best : v > best) { best = v; k = j; }
             }
             out[i] = best;
-            String placed = patterns.size() > 1 && k > 0 ? " (" + PATTERNS[k] + ")" : "";
-            boolean closed = StaticsText.simpleUniform(s, patterns.get(k));
-            String sub = substituted(rec, e, s, patterns.get(k), acts.get(k), closed);
-            if ((e == Effect.RA || e == Effect.RB) && value(acts.get(k), e, s) < 0 && rec.writesText()) sub += " < 0, taken as 0 (see the least reactions)";
-            rec.step(e.symbol + "." + c, e.title + ", " + what + placed, formula(e, s, closed), sub, best, e.q(), clause);
-            rec.result(ResultKey.of(c, e.key), e.title + ", " + what, best, e.q());
+            String label = c.label[e.ordinal()];
+            if (text) {
+                String placed = patterns.size() > 1 && k > 0 ? " (" + PATTERNS[k] + ")" : "";
+                boolean closed = StaticsText.simpleUniform(s, patterns.get(k));
+                String sub = substituted(rec, e, s, patterns.get(k), acts[k], closed);
+                if ((e == Effect.RA || e == Effect.RB) && value(acts[k], e, s) < 0) sub += " < 0, taken as 0 (see the least reactions)";
+                rec.step(c.symbol[e.ordinal()], label + placed, formula(e, s, closed), sub, best, e.q(), clause);
+            } else rec.step(c.symbol[e.ordinal()], label, "", "", best, e.q(), clause);
+            rec.result(c.key[e.ordinal()], label, best, e.q());
         }
-        if (!Double.isNaN(ei) && !c.equals("L0")) {
-            rec.step("Δ." + c, "Deflection, " + what, "Δ from ∫∫ M/EI", "at x = " + rec.show(full.maxDeflectionAt(), Quantity.LENGTH),
+        if (!Double.isNaN(ei) && c != UNREDUCED) {
+            rec.step(c.deflection, c.deflectionTitle, "Δ from ∫∫ M/EI", text ? "at x = " + rec.show(full.maxDeflectionAt(), Quantity.LENGTH) : "",
                     full.maxDeflection(), Quantity.SMALL_LENGTH, clause);
-            rec.result(ResultKey.of(c, "Δ"), "Deflection, " + what, full.maxDeflection(), Quantity.SMALL_LENGTH);
+            rec.result(c.deflectionKey, c.deflectionTitle, full.maxDeflection(), Quantity.SMALL_LENGTH);
         }
         return out;
     }
+
+    /** The names of one concentrated-load check on the record, by {@link Effect#ordinal}, written once. */
+    private static final class ConcentratedText {
+        final String[] symbol = new String[Effect.values().length], key = new String[symbol.length], label = new String[symbol.length],
+                governsKey = new String[symbol.length], governsLabel = new String[symbol.length],
+                designKey = new String[symbol.length], designLabel = new String[symbol.length];
+
+        ConcentratedText(ConcentratedCheck.Keys k) {
+            for (Effect e : Effect.values()) {
+                int n = e.ordinal();
+                symbol[n] = e.symbol + "." + k.step();
+                key[n] = ResultKey.of(k.step(), e.key).text();
+                label[n] = e.title + ", " + k.concentrated();
+                governsKey[n] = ResultKey.of(k.governs(), e.key).text();
+                governsLabel[n] = e.title + ": governing " + k.live();
+                designKey[n] = ResultKey.of(k.design(), e.key).text();
+                designLabel[n] = e.title + ", design " + k.live();
+            }
+        }
+    }
+
+    private static final ConcentratedText FLOOR_CHECK = new ConcentratedText(ConcentratedCheck.FLOOR),
+            ROOF_CHECK = new ConcentratedText(ConcentratedCheck.ROOF);
 
     /** The placements of {@link #patterns}, as the record names them. */
     static final String[] PATTERNS = {"live load on the whole member", "live load on the back span only", "live load on the overhang only"};
@@ -182,10 +272,13 @@ final class BendingActions {
         if (worst == null) return design;
         Edition ed = ctx.edition();
         double p = worst.concentrated(ctx.system()), side = worst.contactSide(ctx.system());
-        rec.step(k.load(), "Concentrated load, " + worst.name() + ", on a " + rec.show(side, Quantity.LENGTH) + " square, not reduced",
-                k.load(), rec.num(p, Quantity.FORCE), p, Quantity.FORCE, ed.clause("concentrated"));
+        boolean text = rec.writesText();
+        Clause clause = ed.clause("concentrated");
+        rec.step(k.load(), text ? "Concentrated load, " + worst.name() + ", on a " + rec.show(side, Quantity.LENGTH) + " square, not reduced" : "",
+                k.load(), rec.num(p, Quantity.FORCE), p, Quantity.FORCE, clause);
         rec.info("The full concentrated load is taken on this member (no spread to neighbouring members: common practice, conservative).",
-                ed.clause("concentrated"));
+                clause);
+        ConcentratedText names = k == ConcentratedCheck.FLOOR ? FLOOR_CHECK : ROOF_CHECK;
         for (int i = 0; i < effects.size(); i++) {
             Effect e = effects.get(i);
             ConcentratedCheck.Effect ce = switch (e) {
@@ -197,14 +290,15 @@ final class BendingActions {
             };
             ConcentratedCheck.Placement pl = ConcentratedCheck.place(s, p, side, ce);
             double v = e == Effect.MNEG ? Math.min(0, pl.effect()) : e == Effect.MPOS ? Math.max(0, pl.effect()) : Math.abs(pl.effect());
-            rec.step(e.symbol + "." + k.step(), e.title + ", " + k.concentrated(), "placed for the largest effect",
-                    "centre at x = " + rec.show(pl.at(), Quantity.LENGTH), v, e.q(), ed.clause("concentrated"));
-            rec.result(ResultKey.of(k.step(), e.key), e.title + ", " + k.concentrated(), v, e.q());
+            int n = e.ordinal();
+            rec.step(names.symbol[n], names.label[n], "placed for the largest effect",
+                    text ? "centre at x = " + rec.show(pl.at(), Quantity.LENGTH) : "", v, e.q(), clause);
+            rec.result(names.key[n], names.label[n], v, e.q());
             boolean conc = Math.abs(v) > Math.abs(l[i]);
             if (conc) design[i] = e == Effect.RA || e == Effect.RB ? Math.copySign(v, l[i] == 0 ? 1 : l[i]) : v;
-            rec.resultText(ResultKey.of(k.governs(), e.key), e.title + ": governing " + k.live(), conc ? "concentrated" : "uniform");
+            rec.resultText(names.governsKey[n], names.governsLabel[n], conc ? "concentrated" : "uniform");
             // the floor's design live load is recorded with the combinations, for every member
-            if (k == ConcentratedCheck.ROOF) rec.result(ResultKey.of(k.design(), e.key), e.title + ", design " + k.live(), design[i], e.q());
+            if (k == ConcentratedCheck.ROOF) rec.result(names.designKey[n], names.designLabel[n], design[i], e.q());
         }
         return design;
     }

@@ -129,14 +129,17 @@ final class LoadBook {
         return k < 0 ? source : source.substring(0, k);
     }
 
-    /** The sum of each source's loads times its multiplier, for floor or roof sources. */
-    BeamLoads combined(Map<String, Double> factors, boolean roof) {
+    /**
+     * The sum of each source's loads times its multiplier, for floor or roof sources; {@code factors} by source in the
+     * order of {@link #live} (null: each 1).
+     */
+    BeamLoads combined(double[] factors, boolean roof) {
+        if (factors != null && factors.length != live.size()) throw new IllegalStateException("a factor for each of " + live.keySet());
         BeamLoads out = new BeamLoads();
-        for (Map.Entry<String, BeamLoads> e : live.entrySet()) {
-            if (isRoofSource(e.getKey()) != roof) continue;
-            Double f = factors == null ? Double.valueOf(1) : factors.get(e.getKey());
-            if (f == null) throw new IllegalStateException("no factor for " + e.getKey());
-            out.add(e.getValue(), f);
+        int i = 0;
+        for (BeamLoads l : live.values()) {
+            if (roofSource[i] == roof) out.add(l, factors == null ? 1 : factors[i]);
+            i++;
         }
         return out;
     }
@@ -153,7 +156,18 @@ final class LoadBook {
 
     private double partition() { return ctx.constant("partition"); }
 
-    private BeamLoads source(String key) { return live.computeIfAbsent(key, k -> new BeamLoads()); }
+    /** Whether each source of {@link #live}, in its order, is a roof source (read once, when the source is first met). */
+    private boolean[] roofSource = new boolean[4];
+
+    private BeamLoads source(String key) {
+        BeamLoads l = live.get(key);
+        if (l == null) {
+            if (live.size() == roofSource.length) roofSource = java.util.Arrays.copyOf(roofSource, roofSource.length * 2);
+            roofSource[live.size()] = isRoofSource(key);
+            live.put(key, l = new BeamLoads());
+        }
+        return l;
+    }
 
     private void area(Occupancy o, double a, double centroid) {
         (o.isRoof() ? roofAreas : floorAreas).merge(o.id(), a, Double::sum);

@@ -110,7 +110,7 @@ public final class LoadCombinations {
         }
         // the label leaves out L on a member that carries none (a roof member): the value is the same either way
         String formula = snow ? brief(best, l == 0 ? 0 : fl, term) : "";
-        rec.step(symbol, (strength ? "Factored " : "Service ") + e.what() + ", " + best.name + " governs"
+        rec.step(symbol, !rec.writesText() ? "" : (strength ? "Factored " : "Service ") + e.what() + ", " + best.name + " governs"
                         + (snow && best.lr != 0 ? " (" + term + " as the roof load)" : ""),
                 snow ? formula : best.formula(halfAllowed, rec), sub, bestV, q, strength ? e.lrfd() : e.asd());
         return new Governing(bestV, best, term, formula);

@@ -9,7 +9,6 @@ import com.baysheet.engine.load.AreaShare;
 import com.baysheet.engine.load.LiveShare;
 import com.baysheet.engine.load.MemberInput;
 import com.baysheet.engine.load.Support;
-import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.RecordBuilder;
 import com.baysheet.engine.CalcContext;
 import com.baysheet.engine.reduction.LiveFactors;
@@ -17,7 +16,7 @@ import com.baysheet.engine.reduction.ReductionMethods;
 import com.baysheet.engine.reduction.RoofLiveLoad;
 
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -33,11 +32,14 @@ public final class MemberCalculation {
     public static MemberResult calculate(CalcContext ctx, MemberInput in) {
         RecordBuilder rec = RecordBuilder.numbersOnly(in.subject(), ctx.edition().id(), ctx.system());
         Outcome o = run(ctx, in, rec);
-        return new MemberResult(o.record, o.left, o.right, o.reduction, () -> run(ctx, in, new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system())).record,
-                () -> MethodComparison.of(ctx, in));
+        return new MemberResult(rec.numbers(), o.left, o.right, o.reduction, () -> {
+                    RecordBuilder text = new RecordBuilder(in.subject(), ctx.edition().id(), ctx.system());
+                    run(ctx, in, text);
+                    return text.build();
+                }, () -> MethodComparison.of(ctx, in));
     }
 
-    private record Outcome(CalcRecord record, EndShare left, EndShare right, LiveFactors reduction) {}
+    private record Outcome(EndShare left, EndShare right, LiveFactors reduction) {}
 
     private static Outcome run(CalcContext ctx, MemberInput in, RecordBuilder rec) {
         LoadBook book = LoadBook.of(ctx, in);
@@ -46,28 +48,33 @@ public final class MemberCalculation {
         boolean snow = MemberSnow.record(ctx, in, book, rec);
         OpenToSky.record(ctx, in, rec);
         LiveFactors[] reduction = new LiveFactors[1];
-        Map<String, Double> factors = factors(ctx, in, book, rec, reduction);
+        double[] factors = factors(ctx, in, book, rec, reduction);
         BeamLoads floor0 = book.combined(null, false), floor = book.combined(factors, false);
         BeamLoads roof0 = book.combined(null, true), roof = book.combined(factors, true);
         boolean halfL = halfLAllowed(ctx, book);
         if (in.kind().isColumn()) AxialActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, snow, rec);
         else BendingActions.record(ctx, in, book, floor0, floor, roof0, roof, halfL, snow, rec);
-        rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1), book.driftSketch));
-        BalconyNote.record(ctx, book, rec);
-        Cautions.standard(ctx, book, rec);
-        return new Outcome(rec.build(), share(ctx, in, book, true), in.kind().isColumn()
+        if (rec.writesText()) { // the sketch and the notes are for reading
+            rec.sketch(Sketches.of(in.support(), book.dead, new BeamLoads().add(floor, 1).add(roof, 1), book.driftSketch));
+            BalconyNote.record(ctx, book, rec);
+            Cautions.standard(ctx, book, rec);
+        }
+        return new Outcome(share(ctx, in, book, true), in.kind().isColumn()
                 || in.support() instanceof Support.Cantilever ? null : share(ctx, in, book, false), reduction[0]);
     }
 
-    /** Multipliers on every live source: floor reduction for floor sources, Lr/L0 for roof sources. */
-    private static Map<String, Double> factors(CalcContext ctx, MemberInput in, LoadBook book, RecordBuilder rec, LiveFactors[] reduction) {
-        Map<String, Double> f = new LinkedHashMap<>();
+    /**
+     * Multipliers on every live source, in the order of {@code book.live}: floor reduction for floor sources, Lr/L0 for
+     * roof sources, 1 for the rest (a line load's live, never reduced, or a partition share handed down with the option now off).
+     */
+    private static double[] factors(CalcContext ctx, MemberInput in, LoadBook book, RecordBuilder rec, LiveFactors[] reduction) {
+        Map<String, Double> floor = Map.of(), roofs = Map.of();
         if (!book.floorAreas.isEmpty()) {
             if (in.onRoof())
                 rec.info("Occupiable roof: its live load follows the floor rules.", ctx.edition().clause("roof.occupiable"));
             LiveFactors lf = ReductionMethods.of(ctx).reduce(ctx, in.kind(), book.floorAreas, in.floors(),
                     in.floorsSupported(), in.support().span(), book.supportedDead, rec);
-            f.putAll(lf.bySource());
+            floor = lf.bySource();
             reduction[0] = lf;
             if (!in.kind().isColumn() && carriesDeliveredArea(in))
                 rec.info("A_T includes the tributary areas delivered by the members this one carries, each counted once, "
@@ -83,13 +90,19 @@ public final class MemberCalculation {
             if (area > 0 && book.roofAreas.size() > 1 && area < book.roofAreas.values().stream().mapToDouble(Double::doubleValue).sum())
                 rec.info("Mixed roof: R1 comes from the ordinary roof area only; the other roof loads are added unreduced "
                         + "(common practice, no code clause).", ctx.edition().clause("roof.reduction"));
+            roofs = new HashMap<>();
             for (String id : book.roofAreas.keySet()) {
                 Occupancy o = ctx.catalogue().get(id);
-                f.put(id, RoofLiveLoad.factor(ctx, o, area, in.roofSlope(), rec));
+                roofs.put(id, RoofLiveLoad.factor(ctx, o, area, in.roofSlope(), rec));
             }
         }
-        for (String source : book.live.keySet())
-            if (!f.containsKey(source)) f.put(source, 1.0); // a line load's live (never reduced), or a partition share handed down with the option now off
+        double[] f = new double[book.live.size()];
+        int i = 0;
+        for (String source : book.live.keySet()) {
+            Double v = roofs.get(source);
+            if (v == null) v = floor.get(source);
+            f[i++] = v == null ? 1 : v;
+        }
         return f;
     }
 

@@ -1,6 +1,7 @@
 package com.baysheet.engine.member;
 
 import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.engine.record.RecordNumbers;
 import com.baysheet.engine.record.ResultKey;
 import com.baysheet.engine.reduction.LiveFactors;
 
@@ -12,12 +13,13 @@ import java.util.function.Supplier;
  * A member's calculation: its record (what every page and sheet renders) and the unreduced end shares
  * that the framing model passes down the load path. For a column or a cantilever only {@code left} is set.
  *
- * <p>The numbers come first: {@link #value} and {@link #stepValue} read a record with every number but no
- * shown text. The full record is written on the first call to {@link #record()}, by the same calculation
+ * <p>The numbers come first: {@link #value}, {@link #label} and {@link #stepValue} read the numbers-only pass's
+ * results and steps ({@link RecordNumbers}: keys, labels and values, no shown text; the subject is not among them, so a
+ * member under another subject shares them). The full record is written on the first call to {@link #record()}, by the same calculation
  * (deterministic, so identical), since most members of a large building are never displayed.
  */
 public final class MemberResult {
-    private final CalcRecord numbers;
+    private final RecordNumbers numbers;
     private final EndShare left;
     private final EndShare right;
     private final LiveFactors reduction;
@@ -26,7 +28,7 @@ public final class MemberResult {
     private final Supplier<List<MethodComparison.Row>> comparer;
     private volatile List<MethodComparison.Row> methods;
 
-    MemberResult(CalcRecord numbers, EndShare left, EndShare right, LiveFactors reduction, Supplier<CalcRecord> writer,
+    MemberResult(RecordNumbers numbers, EndShare left, EndShare right, LiveFactors reduction, Supplier<CalcRecord> writer,
                  Supplier<List<MethodComparison.Row>> comparer) {
         this.comparer = comparer;
         this.numbers = numbers;
@@ -74,25 +76,19 @@ public final class MemberResult {
     /** A result by key without writing the record's text; NaN when absent. */
     public double value(String key) { return numbers.result(key); }
 
-    public double value(ResultKey key) { return numbers.result(key); }
+    public double value(ResultKey key) { return numbers.result(key.text()); }
 
     /** The label of a result (it names the governing combination), or "" when absent. */
     public String label(ResultKey key) { return label(key.text()); }
 
-    public String label(String key) {
-        for (var e : numbers.results()) if (e.key().equals(key)) return e.label();
-        return "";
-    }
+    public String label(String key) { return numbers.label(key); }
 
     /** A step's result by symbol, or NaN when the calculation had no such step. */
-    public double stepValue(String symbol) {
-        for (var s : numbers.steps()) if (s.symbol().equals(symbol)) return s.result();
-        return Double.NaN;
-    }
+    public double stepValue(String symbol) { return numbers.step(symbol); }
 
     /** The same calculation under another subject. */
     public MemberResult withSubject(String subject) {
         MemberResult base = this;
-        return new MemberResult(numbers.withSubject(subject), left, right, reduction, () -> base.record().withSubject(subject), base::methods);
+        return new MemberResult(numbers, left, right, reduction, () -> base.record().withSubject(subject), base::methods);
     }
 }

@@ -42,6 +42,7 @@ final class OwnWeight {
                 rec.step("P_L,point" + (i + 1), "Point load " + (i + 1) + ", " + p.label() + ": live load, unreduced", "P given",
                         "at x = " + rec.show(p.x(), Quantity.LENGTH), p.liveTotal(), Quantity.FORCE, Clause.NONE);
         }
+        if (!rec.writesText()) return; // the notes below are for reading
         if (in.pointLoads().stream().anyMatch(p -> p.applied() && p.liveTotal() > 0))
             rec.info("A point load has no tributary area: its live load is not reduced and adds to no A_T (our choice).", Clause.NONE);
         if (in.lineLoads().stream().anyMatch(l -> l.live() > 0))

@@ -10,7 +10,9 @@ import java.util.List;
 /**
  * Collects the steps of a calculation as it runs; the engine's only way of explaining itself.
  * A builder made {@link #numbersOnly} keeps every number but writes no shown text, for callers (the framing
- * model) that need the values of thousands of members and the text of the few someone reads.
+ * model) that need the values of thousands of members and the text of the few someone reads: it keeps the results
+ * (key, value, label) and the steps (symbol, value) as arrays ({@link #numbers}); inputs, notes and the sketch are
+ * for reading and are not kept.
  */
 public final class RecordBuilder {
     private final String subject;
@@ -23,6 +25,8 @@ public final class RecordBuilder {
     private final List<Note> notes = new ArrayList<>();
     private Sketch sketch = Sketch.NONE;
     private final boolean text;
+    /** The numbers-only pass's store; null when writing text. */
+    private final RecordNumbers numbers;
 
     public RecordBuilder(String subject, String edition, UnitSystem system) {
         this(subject, edition, system, true);
@@ -33,6 +37,7 @@ public final class RecordBuilder {
         this.edition = edition;
         this.system = system;
         this.text = text;
+        this.numbers = text ? null : new RecordNumbers();
     }
 
     /** A builder whose shown strings are left empty: same steps, same numbers. */
@@ -58,24 +63,29 @@ public final class RecordBuilder {
     public String num(double base, Quantity q) { return text ? Display.sig3(q.unit(system).fromBase(base)) : ""; }
 
     public RecordBuilder input(String key, String label, double base, Quantity q) {
-        inputs.add(entry(key, label, base, q));
+        if (text) inputs.add(entry(key, label, base, q));
         return this;
     }
 
     public RecordBuilder inputText(String key, String label, String text) {
-        inputs.add(Entry.unitless(key, label, Double.NaN, text));
+        if (this.text) inputs.add(Entry.unitless(key, label, Double.NaN, text));
         return this;
     }
 
     public double step(String symbol, String description, String formula, String substituted,
                        double base, Quantity q, Clause clause) {
+        if (!text) {
+            numbers.step(symbol, base);
+            return base;
+        }
         steps.add(new Step(symbol, description, formula, substituted, base, q.base(system).symbol(), show(base, q),
                 q.unit(system).symbol(), clause));
         return base;
     }
 
     public RecordBuilder result(String key, String label, double base, Quantity q) {
-        results.add(entry(key, label, base, q));
+        if (!text) numbers.result(key, label, base);
+        else results.add(entry(key, label, base, q));
         return this;
     }
 
@@ -88,7 +98,8 @@ public final class RecordBuilder {
     }
 
     public RecordBuilder resultText(String key, String label, String text) {
-        results.add(Entry.unitless(key, label, Double.NaN, text));
+        if (!this.text) numbers.result(key, label, Double.NaN);
+        else results.add(Entry.unitless(key, label, Double.NaN, text));
         return this;
     }
 
@@ -102,17 +113,17 @@ public final class RecordBuilder {
     }
 
     public RecordBuilder governs(String key) {
-        governing.add(key);
+        if (text) governing.add(key);
         return this;
     }
 
     public RecordBuilder info(String text, Clause clause) {
-        notes.add(new Note(Note.Level.INFO, text, clause));
+        if (this.text) notes.add(new Note(Note.Level.INFO, text, clause));
         return this;
     }
 
     public RecordBuilder caution(String text, Clause clause) {
-        notes.add(new Note(Note.Level.CAUTION, text, clause));
+        if (this.text) notes.add(new Note(Note.Level.CAUTION, text, clause));
         return this;
     }
 
@@ -121,7 +132,15 @@ public final class RecordBuilder {
         return this;
     }
 
+    /** The numbers of a numbers-only pass (results and steps); only for a builder made {@link #numbersOnly}. */
+    public RecordNumbers numbers() {
+        if (numbers == null) throw new IllegalStateException("a builder that writes text builds a record: use build()");
+        return numbers;
+    }
+
+    /** The record written; a numbers-only builder's record has no inputs, notes or sketch and empty shown text. */
     public CalcRecord build() {
+        if (!text) throw new IllegalStateException("a numbers-only builder keeps its numbers: use numbers()");
         return new CalcRecord(subject, edition, system.name(), inputs, steps, results, governing, notes, sketch);
     }
 }

@@ -32,19 +32,22 @@ final class Asce7BasicReduction implements FloorReductionMethod {
         Edition ed = ctx.edition();
         boolean perFloor = SupportedFloor.kllVaries(ed, kind, byFloor);
         double kll = perFloor ? InfluenceArea.floorFactors(ctx, kind, byFloor, rec)
-                : rec.step("K_LL", "Live load element factor, " + kind.title().toLowerCase(), "K_LL",
+                : rec.step("K_LL", rec.writesText() ? "Live load element factor, " + kind.title().toLowerCase() : "", "K_LL",
                 "Table value", ed.kll(kind), Quantity.RATIO, ed.clause("reduction.kll"));
 
         double total = 0, reducible = 0;
-        StringBuilder sum = new StringBuilder();
+        StringBuilder sum = rec.writesText() ? new StringBuilder() : null;
         for (Map.Entry<String, Double> e : areas.entrySet()) {
             Occupancy o = ctx.catalogue().get(e.getKey());
-            total += e.getValue();
-            if (sum.length() > 0) sum.append(" + ");
-            sum.append(rec.num(e.getValue(), Quantity.AREA));
-            if (reducible(effectiveRule(ctx, o, rec), floors)) reducible += e.getValue();
+            double a = e.getValue();
+            total += a;
+            if (sum != null) {
+                if (sum.length() > 0) sum.append(" + ");
+                sum.append(rec.num(a, Quantity.AREA));
+            }
+            if (reducible(effectiveRule(ctx, o, rec), floors)) reducible += a;
         }
-        rec.step("A_T", "Floor tributary area", "A_T = Σ A_i", sum.toString(), total, Quantity.AREA,
+        rec.step("A_T", "Floor tributary area", "A_T = Σ A_i", sum == null ? "" : sum.toString(), total, Quantity.AREA,
                 ed.clause("reduction.basic"));
         if (areas.size() > 1)
             rec.info("Mixed occupancy: one factor from K_LL times the reducible tributary area reduces the reducible "
@@ -74,8 +77,9 @@ final class Asce7BasicReduction implements FloorReductionMethod {
             double f = occupancyFactor(ctx, o, effectiveRule(ctx, o, null), floors, factor, rec);
             bySource.put(id, f);
             double l0 = o.uniform(ctx.system());
-            rec.step("L[" + id + "]", "Design uniform live load, " + o.name(), "L = L0 × f",
-                    rec.num(l0, Quantity.PRESSURE) + " × " + rec.fmt(f), l0 * f, Quantity.PRESSURE,
+            boolean text = rec.writesText();
+            rec.step("L[" + id + "]", text ? "Design uniform live load, " + o.name() : "", "L = L0 × f",
+                    text ? rec.num(l0, Quantity.PRESSURE) + " × " + rec.fmt(f) : "", l0 * f, Quantity.PRESSURE,
                     ed.clause("reduction.eq"));
             partition(ctx, o, f, bySource, rec);
         }
@@ -92,12 +96,13 @@ final class Asce7BasicReduction implements FloorReductionMethod {
             return 1;
         }
         double base = ed.constant("reduction.base"), coef = ctx.constant("reduction.coef");
-        double eq = rec.step("f_eq", "Reduction factor", "f = " + rec.plain(base) + " + " + rec.plain(coef) + "/√(K_LL·A_T)",
-                rec.plain(base) + " + " + rec.plain(coef) + "/√" + rec.num(kat, Quantity.AREA), Math.min(1, base + coef / Math.sqrt(kat)),
+        boolean text = rec.writesText();
+        double eq = rec.step("f_eq", "Reduction factor", text ? "f = " + rec.plain(base) + " + " + rec.plain(coef) + "/√(K_LL·A_T)" : "",
+                text ? rec.plain(base) + " + " + rec.plain(coef) + "/√" + rec.num(kat, Quantity.AREA) : "", Math.min(1, base + coef / Math.sqrt(kat)),
                 Quantity.RATIO, ed.clause("reduction.eq"));
         double limit = ed.constant(floors == 1 ? "limit.oneFloor" : "limit.multiFloor");
-        double f = rec.step("f", "Reduction factor with its lower limit (" + (floors == 1 ? "one floor" : "two or more floors") + ")",
-                "f = max(f_eq, " + rec.plain(limit) + ")", "max(" + rec.fmt(eq) + ", " + rec.fmt(limit) + ")",
+        double f = rec.step("f", text ? "Reduction factor with its lower limit (" + (floors == 1 ? "one floor" : "two or more floors") + ")" : "",
+                text ? "f = max(f_eq, " + rec.plain(limit) + ")" : "", text ? "max(" + rec.fmt(eq) + ", " + rec.fmt(limit) + ")" : "",
                 Math.max(eq, limit), Quantity.RATIO, ed.clause("reduction.basic"));
         if (eq < limit)
             rec.info("Lower limit governs: L not less than " + rec.fmt(limit) + " L0.", ed.clause("reduction.basic"));

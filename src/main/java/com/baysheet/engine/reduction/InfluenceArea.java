@@ -33,8 +33,9 @@ final class InfluenceArea {
 
     static double single(CalcContext ctx, double kll, double reducible, double total, RecordBuilder rec) {
         String area = reducible < total ? "A_T,r" : "A_T";
-        return rec.step("K_LL·A_T", "Influence area", "K_LL × " + area,
-                rec.fmt(kll) + " × " + rec.num(reducible, Quantity.AREA), kll * reducible, Quantity.AREA,
+        boolean text = rec.writesText();
+        return rec.step("K_LL·A_T", "Influence area", text ? "K_LL × " + area : "",
+                text ? rec.fmt(kll) + " × " + rec.num(reducible, Quantity.AREA) : "", kll * reducible, Quantity.AREA,
                 ctx.edition().clause("reduction.basic"));
     }
 
