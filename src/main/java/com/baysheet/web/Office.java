@@ -166,7 +166,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new TokenRoutes(accounts.tokens()).install(r);
         new BackupRoutes(ds, review.audit(), clock).install(r);
         new ModelFileRoutes(store).install(r); // before ProjectRoutes: /projects/import is not a project id
-        new ProjectRoutes(store).install(r);
+        new ProjectRoutes(store, review).install(r);
         new JobRoutes(store).install(r);
         new LevelRoutes(store).install(r);
         new DeleteRoutes(store).install(r);

@@ -59,20 +59,11 @@ public final class QueueRoutes {
     /** The person's own queue across the office: for each project, how many sheets wait for them and why. */
     void mine(Context ctx) {
         Actor me = Actor.of(Access.user(ctx));
-        List<ProjectWaiting> rows = new java.util.ArrayList<>();
-        for (var p : store.projects().findAll()) {
-            Results.Computed c = store.results().of(p.id());
-            var counts = CheckQueue.waitingCounts(QueueEntries.of(review.reviews(), p.id(), SheetContext.marks(store, c)), me);
-            rows.add(new ProjectWaiting(p, counts, counts.values().stream().mapToInt(Integer::intValue).sum()));
-        }
         Map<String, Object> m = new HashMap<>();
-        m.put("rows", rows);
+        m.put("rows", OfficeQueue.of(store, review, store.projects().findAll(), me).rows());
         m.put("reasons", CheckQueue.Waiting.values());
         ctx.render("review/my-queue", m);
     }
-
-    /** One project's line on the person's queue. */
-    public record ProjectWaiting(com.baysheet.project.Project project, Map<CheckQueue.Waiting, Integer> counts, int total) {}
 
     void show(Context ctx) {
         long project = SheetContext.project(ctx);
