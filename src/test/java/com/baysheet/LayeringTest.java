@@ -44,7 +44,7 @@ class LayeringTest {
             new Layer(REVIEW, PROJECT, SHEET, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
             new Layer(AUTH, FRAMING, PROJECT, SHEET, REVIEW, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
             new Layer(NOTICE, FRAMING, PROJECT, SHEET, REVIEW, AUTH, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
-            new Layer(STORE, SHEET, NOTICE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, PDF, TEMPLATES),
+            new Layer(STORE, SHEET, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, PDF, TEMPLATES),
             new Layer(ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
             new Layer(CLI, FRAMING, PROJECT, SHEET, REVIEW, AUTH, STORE, ISSUE, WEB, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES),
             new Layer(WEB, CLI, "com.baysheet"));

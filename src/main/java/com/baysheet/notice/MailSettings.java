@@ -12,8 +12,11 @@ import java.util.Locale;
  *
  * @param port     the server's port, 1 to 65535 (587 for STARTTLS and 465 for TLS are the usual ones)
  * @param username the account to log in with, blank for a server that takes mail without a login
+ * @param officeAddress the address people reach this server at ({@code https://calc.firm.example}), for the links in
+ *                      notices; blank for notices without a link (never taken from a request, whose Host anyone sets)
  */
-public record MailSettings(boolean on, String host, int port, Security security, String username, String fromAddress) {
+public record MailSettings(boolean on, String host, int port, Security security, String username, String fromAddress,
+                           String officeAddress) {
     /** How the connection to the server is protected. */
     public enum Security {
         /** Plain SMTP: for a server on the office's own machine or network only. */
@@ -36,12 +39,15 @@ public record MailSettings(boolean on, String host, int port, Security security,
     }
 
     /** No notices: the settings of an office that has not set up its mail server. */
-    public static final MailSettings OFF = new MailSettings(false, "", 587, Security.STARTTLS, "", "");
+    public static final MailSettings OFF = new MailSettings(false, "", 587, Security.STARTTLS, "", "", "");
 
     public MailSettings {
         host = host == null ? "" : host.strip();
         username = username == null ? "" : username.strip();
         fromAddress = fromAddress == null ? "" : fromAddress.strip();
+        officeAddress = officeAddress == null ? "" : officeAddress.strip().replaceAll("/+$", "");
+        if (!officeAddress.isEmpty() && !officeAddress.matches("https?://[A-Za-z0-9.\\-\\[\\]:]+(/[A-Za-z0-9._~\\-/]*)?") || officeAddress.length() > 200)
+            throw new InputError("officeAddress", "\"" + officeAddress + "\"", "must be the server's address as people reach it, such as https://calc.firm.example");
         if (security == null) throw new InputError("security", "nothing", "must be one of NONE, STARTTLS, TLS");
         if (port < 1 || port > 65535) throw new InputError("port", String.valueOf(port), "must be a port number from 1 to 65535");
         if (!host.isEmpty() && !host.matches("[A-Za-z0-9.:\\-\\[\\]]{1,253}"))
@@ -63,6 +69,9 @@ public record MailSettings(boolean on, String host, int port, Security security,
             throw new InputError(field, "\"" + text + "\"", "must be one e-mail address, such as checks@firm.example");
         }
     }
+
+    /** The address of a page of this server for a notice's link, or blank when the office gave no address. */
+    public String link(String path) { return officeAddress.isEmpty() ? "" : officeAddress + path; }
 
     /** The host and port as the last error names them. */
     public String server() { return host + ":" + port + " (" + security.label().toLowerCase(Locale.ROOT) + ")"; }

@@ -7,7 +7,7 @@ import java.util.List;
  * and who is told. A batch makes one notice for all the sheets it moved, not one per sheet.
  *
  * @param sheets the sheets' names as their pages give them (marks, packages), at least one
- * @param link   the address of the page that lists them (the project's check queue), absolute
+ * @param link   the address of the page that lists them (the project's check queue), absolute; blank for none
  * @param to     the addresses told, at least one
  */
 public record Notice(Kind kind, String project, List<String> sheets, String by, String link, List<String> to) {
@@ -50,7 +50,7 @@ public record Notice(Kind kind, String project, List<String> sheets, String by, 
                 .append(kind.said()).append(" by ").append(by).append(" in ").append(project).append(":\n\n");
         sheets.stream().limit(LISTED).forEach(s -> b.append("  ").append(s).append('\n'));
         if (sheets.size() > LISTED) b.append("  and ").append(sheets.size() - LISTED).append(" more\n");
-        b.append("\nThe check queue: ").append(link).append('\n')
+        b.append(link.isEmpty() ? "\nThey are in the project's check queue.\n" : "\nThe check queue: " + link + "\n")
                 .append("\nResults must be checked by a licensed engineer; the adopted local code governs.\n")
                 .append("This notice was sent by the office's calculation server; the sheets' pages are the record.\n");
         return b.toString();

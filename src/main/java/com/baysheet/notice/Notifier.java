@@ -64,6 +64,12 @@ public final class Notifier implements AutoCloseable {
         }
     }
 
+    /** Whether the server was given an SMTP password (what it is is never shown). */
+    public boolean hasPassword() {
+        String p = password.get();
+        return p != null && !p.isEmpty();
+    }
+
     /** The last send that failed since the server started, if any. */
     public Optional<Failure> lastFailure() { return Optional.ofNullable(last.get()); }
 

@@ -28,7 +28,7 @@ class NotifierTest {
     private static final Duration WAIT = Duration.ofSeconds(20);
 
     private static MailSettings plain(boolean on, String user) {
-        return new MailSettings(on, "127.0.0.1", smtp.getSmtp().getPort(), MailSettings.Security.NONE, user, "Checks <office@firm.example>");
+        return new MailSettings(on, "127.0.0.1", smtp.getSmtp().getPort(), MailSettings.Security.NONE, user, "Checks <office@firm.example>", "");
     }
 
     private static Notice submitted(List<String> sheets, String... to) {
@@ -80,7 +80,7 @@ class NotifierTest {
             closed = s.getLocalPort();
         }
         AtomicReference<MailSettings> settings = new AtomicReference<>(
-                new MailSettings(true, "127.0.0.1", closed, MailSettings.Security.NONE, "", "office@firm.example"));
+                new MailSettings(true, "127.0.0.1", closed, MailSettings.Security.NONE, "", "office@firm.example", ""));
         try (Notifier n = new Notifier(settings::get, () -> "", Clock.systemUTC(), f -> { })) {
             n.post(submitted(List.of("G1"), "chris@firm.example"));
             assertThat(n.idle(WAIT)).isTrue();
@@ -122,14 +122,18 @@ class NotifierTest {
 
     @Test
     void settingsNameTheFieldTheyRefuse() {
-        assertThatThrownBy(() -> new MailSettings(true, "", 587, MailSettings.Security.STARTTLS, "", "office@firm.example"))
+        assertThatThrownBy(() -> new MailSettings(true, "", 587, MailSettings.Security.STARTTLS, "", "office@firm.example", ""))
                 .isInstanceOf(InputError.class).hasMessageStartingWith("host: ");
-        assertThatThrownBy(() -> new MailSettings(false, "mail.firm.example", 0, MailSettings.Security.TLS, "", ""))
+        assertThatThrownBy(() -> new MailSettings(false, "mail.firm.example", 0, MailSettings.Security.TLS, "", "", ""))
                 .isInstanceOf(InputError.class).hasMessageStartingWith("port: ");
-        assertThatThrownBy(() -> new MailSettings(true, "mail.firm.example", 465, MailSettings.Security.TLS, "", "not an address"))
+        assertThatThrownBy(() -> new MailSettings(true, "mail.firm.example", 465, MailSettings.Security.TLS, "", "not an address", ""))
                 .isInstanceOf(InputError.class).hasMessageStartingWith("fromAddress: ");
-        assertThatThrownBy(() -> new MailSettings(false, "mail firm", 25, MailSettings.Security.NONE, "", ""))
+        assertThatThrownBy(() -> new MailSettings(false, "mail firm", 25, MailSettings.Security.NONE, "", "", ""))
                 .isInstanceOf(InputError.class).hasMessageStartingWith("host: ");
+        assertThatThrownBy(() -> new MailSettings(false, "mail.firm.example", 25, MailSettings.Security.NONE, "", "", "calc.firm.example"))
+                .isInstanceOf(InputError.class).hasMessageStartingWith("officeAddress: ");
+        assertThat(new MailSettings(false, "", 25, MailSettings.Security.NONE, "", "", "https://calc.firm.example/").link("/review/queue"))
+                .isEqualTo("https://calc.firm.example/review/queue");
         assertThatThrownBy(() -> MailSettings.Security.parse("security", "SSLv3"))
                 .isInstanceOf(InputError.class).hasMessageStartingWith("security: ");
         assertThat(MailSettings.OFF.on()).isFalse();
@@ -137,10 +141,10 @@ class NotifierTest {
 
     @Test
     void starttlsIsRequiredNotMerelyTriedAndTlsChecksTheServersName() {
-        var starttls = Mailer.properties(new MailSettings(true, "mail.firm.example", 587, MailSettings.Security.STARTTLS, "u", "o@firm.example"));
+        var starttls = Mailer.properties(new MailSettings(true, "mail.firm.example", 587, MailSettings.Security.STARTTLS, "u", "o@firm.example", ""));
         assertThat(starttls).containsEntry("mail.smtp.starttls.enable", "true").containsEntry("mail.smtp.starttls.required", "true")
                 .containsEntry("mail.smtp.auth", "true").containsEntry("mail.smtp.ssl.checkserveridentity", "true");
-        var tls = Mailer.properties(new MailSettings(true, "mail.firm.example", 465, MailSettings.Security.TLS, "", "o@firm.example"));
+        var tls = Mailer.properties(new MailSettings(true, "mail.firm.example", 465, MailSettings.Security.TLS, "", "o@firm.example", ""));
         assertThat(tls).containsEntry("mail.smtp.ssl.enable", "true").containsEntry("mail.smtp.auth", "false")
                 .doesNotContainKey("mail.smtp.starttls.enable");
         assertThat(tls.get("mail.smtp.timeout")).isEqualTo(String.valueOf(Mailer.TIMEOUT_MS));
