@@ -79,6 +79,8 @@ public final class MailRoutes {
     void setAddress(Context ctx) {
         long id = userId(ctx);
         Form f = Form.of(ctx);
+        // blank clears the address; a post without the field at all is not a clearing but a broken form
+        if (!f.checked("email")) f.reject("email", "the address is missing from the form (blank clears it)");
         String text = f.text("email");
         if (f.attempt(() -> text.isEmpty() ? "" : MailSettings.address("email", text).getAddress()).map(email -> {
             User admin = Access.user(ctx);

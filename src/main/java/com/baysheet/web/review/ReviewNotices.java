@@ -10,6 +10,9 @@ import com.baysheet.review.SheetRevision;
 import com.baysheet.store.review.MailStore;
 import com.baysheet.store.review.ReviewStore;
 
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
+
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -23,6 +26,7 @@ import java.util.Optional;
  * the step: the addresses are read and the notice queued; sending is the {@link Notifier}'s, off the request.
  */
 public final class ReviewNotices {
+    private static final Logger LOG = LoggerFactory.getLogger(ReviewNotices.class);
     private final ReviewStore review;
     private final Notifier notifier;
 
@@ -31,19 +35,32 @@ public final class ReviewNotices {
         this.notifier = notifier;
     }
 
-    /** After these sheets of one project went through this step, done by {@code who}. */
+    /**
+     * After these sheets of one project went through this step, done by {@code who}. The step has committed: should
+     * the addresses not be read, that is logged and the step still answered as done.
+     */
     public void after(Notice.Kind kind, Project project, List<? extends SheetSubject> sheets, Caller who) {
         if (sheets.isEmpty()) return;
+        try {
+            post(kind, project, sheets, who);
+        } catch (RuntimeException e) {
+            LOG.warn("no e-mail notice of \"{}\" for {} sheet(s): {}", kind.said(), sheets.size(), e.toString());
+        }
+    }
+
+    private void post(Notice.Kind kind, Project project, List<? extends SheetSubject> sheets, Caller who) {
         MailStore mail = review.mail();
         MailSettings settings = mail.get().settings();
         if (!settings.on()) return;
         Map<String, List<String>> byAddress = new LinkedHashMap<>();
         Map<Long, String> addresses = mail.addresses();
+        Map<Long, List<String>> checkers = new java.util.HashMap<>(); // by preparer: a batch is mostly one person's
         for (SheetSubject s : sheets) {
             Optional<SheetRevision.Preparer> preparer = Optional.ofNullable(review.reviews().view(s.ref()).current().revision().preparer());
             List<String> to = switch (kind) {
                 case RETURNED -> preparer.map(p -> addresses.get(p.userId())).stream().filter(a -> a != null).toList();
-                case SUBMITTED, APPROVED -> mail.checkersOtherThan(preparer.map(SheetRevision.Preparer::userId).orElse(-1L));
+                case SUBMITTED, APPROVED -> checkers.computeIfAbsent(preparer.map(SheetRevision.Preparer::userId).orElse(-1L),
+                        mail::checkersOtherThan);
             };
             String mine = addresses.get(who.actor().userId());
             for (String a : to) if (!a.equals(mine)) byAddress.computeIfAbsent(a, k -> new ArrayList<>()).add(s.name());

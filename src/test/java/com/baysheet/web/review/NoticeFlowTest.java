@@ -153,6 +153,7 @@ class NoticeFlowTest {
         assertThat(Html.shown(r.body())).contains("must be one e-mail address");
         assertThat(server.office.review().mail().get().version()).isEqualTo(before);
         assertThat(admin.post("/admin/mail/addresses/" + admin.user.id(), List.of(Map.entry("email", "nobody"))).statusCode()).isEqualTo(400);
+        assertThat(admin.post("/admin/mail/addresses/" + admin.user.id(), List.of()).statusCode()).as("the field missing").isEqualTo(400);
         assertThat(server.as("cleo", Role.CHECKER).get("/admin/mail").statusCode()).as("the administrator's alone").isEqualTo(403);
     }
 }
