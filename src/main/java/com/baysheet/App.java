@@ -106,7 +106,7 @@ public final class App {
         }
         console.accept("signing issued PDFs with " + o.signingKey() + ", certificate " + key.subject()
                 + ", SHA-256 fingerprint " + key.fingerprint());
-        Office office = Office.on(store, db.dataSource(), clock, new PdfSigner(key));
+        Office office = Office.on(store, db.dataSource(), clock, new PdfSigner(key), o.smtpPassword());
         // deleted items are kept 30 days: those past it go at start, as whenever the administrator's list is read
         int purged = store.deleted().purge();
         if (purged > 0) Log.LOG.info("deleted items past 30 days purged: " + purged);

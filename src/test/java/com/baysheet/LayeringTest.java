@@ -26,7 +26,7 @@ class LayeringTest {
     private static final String ENGINE = "com.baysheet.engine..", FRAMING = "com.baysheet.framing..",
             PROJECT = "com.baysheet.project..",
             SHEET = "com.baysheet.sheet..", REVIEW = "com.baysheet.review..", AUTH = "com.baysheet.auth..",
-            STORE = "com.baysheet.store..", ISSUE = "com.baysheet.issue..", WEB = "com.baysheet.web..", CLI = "com.baysheet.cli..";
+            NOTICE = "com.baysheet.notice..", STORE = "com.baysheet.store..", ISSUE = "com.baysheet.issue..", WEB = "com.baysheet.web..", CLI = "com.baysheet.cli..";
 
     /** One row of the table: the package and what it may not depend on. */
     record Layer(String pkg, String... forbidden) {
@@ -43,6 +43,7 @@ class LayeringTest {
             new Layer(SHEET, PROJECT, REVIEW, AUTH, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, TEMPLATES, MIGRATIONS, POOL),
             new Layer(REVIEW, PROJECT, SHEET, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
             new Layer(AUTH, FRAMING, PROJECT, SHEET, REVIEW, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
+            new Layer(NOTICE, FRAMING, PROJECT, SHEET, REVIEW, AUTH, STORE, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
             new Layer(STORE, SHEET, ISSUE, WEB, CLI, "com.baysheet", JAVALIN, PDF, TEMPLATES),
             new Layer(ISSUE, WEB, CLI, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES, MIGRATIONS, POOL),
             new Layer(CLI, FRAMING, PROJECT, SHEET, REVIEW, AUTH, STORE, ISSUE, WEB, "com.baysheet", JAVALIN, SQL, JDBC, PDF, TEMPLATES),

@@ -8,6 +8,7 @@ import com.baysheet.issue.PackageJobs;
 import com.baysheet.issue.PackageWorker;
 import com.baysheet.sheet.signing.PdfSigner;
 import com.baysheet.review.ReviewRefused;
+import com.baysheet.notice.Notifier;
 import com.baysheet.store.PackageJobStore;
 import com.baysheet.store.Sql;
 import com.baysheet.store.Store;
@@ -29,6 +30,8 @@ import com.baysheet.web.review.MarkRoutes;
 import com.baysheet.web.review.MarkupRoutes;
 import com.baysheet.web.review.PackageRoutes;
 import com.baysheet.web.review.QueueRoutes;
+import com.baysheet.web.review.ReviewNotices;
+import com.baysheet.web.auth.MailRoutes;
 import com.baysheet.web.review.Refusals;
 import com.baysheet.web.review.ReviewRoutes;
 import io.javalin.Javalin;
@@ -53,25 +56,38 @@ import java.util.Set;
  * @param setupCode what the first-start set-up asks for (printed in the console by the server)
  * @param ds        what {@code /health} asks whether the database answers, and what backups copy
  * @param clock     what refusals and downloads are recorded by
+ * @param notifier  sends the review steps' e-mail notices, after their commit and off the request threads
  */
 public record Office(Store store, Accounts accounts, ReviewStore review, Issuing issuing, PackageJobs packages, SetupCode setupCode,
-                     DataSource ds, Clock clock) {
+                     DataSource ds, Clock clock, Notifier notifier) {
 
     /**
      * The office over this database: the store's clock for every stamp and date, the given login policy, and the
      * office's key signing every issued PDF.
      */
     public static Office on(Store store, DataSource ds, Clock clock, Logins.Policy policy, SetupCode setupCode, PdfSigner signer) {
+        return on(store, ds, clock, policy, setupCode, signer, "");
+    }
+
+    /** The same, with the SMTP password the notices log in with (kept as the server's other secrets: read from a file at start). */
+    public static Office on(Store store, DataSource ds, Clock clock, Logins.Policy policy, SetupCode setupCode, PdfSigner signer,
+                            String smtpPassword) {
         Sql sql = new Sql(ds, clock);
         ReviewStore review = ReviewStore.on(sql);
         PackageJobs packages = new PackageJobs(store, review, new PackageJobStore(sql), clock);
+        Notifier notifier = new Notifier(() -> review.mail().get().settings(), () -> smtpPassword, clock, review.mail()::failed);
         return new Office(store, Accounts.on(sql, review.audit(), policy), review, new Issuing(review, clock, signer), packages,
-                setupCode, ds, clock);
+                setupCode, ds, clock, notifier);
     }
 
     /** The office's production wiring: bcrypt at full strength, working-day sessions, the office throttle. */
     public static Office on(Store store, DataSource ds, Clock clock, PdfSigner signer) {
-        return on(store, ds, clock, Logins.Policy.office(clock), SetupCode.random(), signer);
+        return on(store, ds, clock, signer, "");
+    }
+
+    /** The production wiring, with the SMTP password of the e-mail notices. */
+    public static Office on(Store store, DataSource ds, Clock clock, PdfSigner signer, String smtpPassword) {
+        return on(store, ds, clock, Logins.Policy.office(clock), SetupCode.random(), signer, smtpPassword);
     }
 
     /**
@@ -166,7 +182,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new TokenRoutes(accounts.tokens()).install(r);
         new BackupRoutes(ds, review.audit(), clock).install(r);
         new ModelFileRoutes(store).install(r); // before ProjectRoutes: /projects/import is not a project id
-        new ProjectRoutes(store).install(r);
+        new ProjectRoutes(store, review).install(r);
         new JobRoutes(store).install(r);
         new LevelRoutes(store).install(r);
         new DeleteRoutes(store).install(r);
@@ -189,8 +205,10 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
         new ApiRoutes(store).install(r);
         new ApiTypicalRoutes(store).install(r);
         new ApiResultRoutes(store).install(r);
-        new ReviewRoutes(store, review, issuing).install(r);
-        new QueueRoutes(store, review, new Batch(review, issuing), recorder, clock).install(r);
+        ReviewNotices notices = new ReviewNotices(review, notifier);
+        new MailRoutes(review, accounts.users(), notifier).install(r);
+        new ReviewRoutes(store, review, issuing, notices).install(r);
+        new QueueRoutes(store, review, new Batch(review, issuing), recorder, clock, notices).install(r);
         new MarkRoutes(store).install(r);
         new MarkupRoutes(store, review.markups()).install(r);
         new IssuedRoutes(store, review, issuing, recorder).install(r);

@@ -8,7 +8,12 @@ import com.baysheet.project.SnowInput;
 import com.baysheet.engine.snow.SnowSite;
 import com.baysheet.engine.units.Display;
 import com.baysheet.store.Store;
+import com.baysheet.auth.User;
+import com.baysheet.review.Actor;
+import com.baysheet.store.review.ReviewStore;
+import com.baysheet.web.auth.Access;
 import com.baysheet.web.auth.Admit;
+import com.baysheet.web.review.OfficeQueue;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
@@ -18,9 +23,11 @@ import java.util.Map;
 /** Projects: the list, a new project, its overview and its settings. */
 final class ProjectRoutes {
     private final Store store;
+    private final ReviewStore review;
 
-    ProjectRoutes(Store store) {
+    ProjectRoutes(Store store, ReviewStore review) {
         this.store = store;
+        this.review = review;
     }
 
     void install(RoutesConfig r) {
@@ -36,7 +43,12 @@ final class ProjectRoutes {
     void list(Context ctx) {
         // the default list is the current work; ?archived=yes lists the archived projects instead
         boolean archived = "yes".equals(ctx.queryParam("archived"));
-        ctx.render("projects/list", Map.of("projects", store.projects().findAll(archived), "archived", archived));
+        var projects = store.projects().findAll(archived);
+        Map<String, Object> m = new HashMap<>(Map.of("projects", projects, "archived", archived));
+        // the home page says what waits for whoever prepares or checks: their own check queue, counted
+        User user = Access.user(ctx);
+        if (!archived && user.role().mayPrepare()) m.put("waiting", OfficeQueue.of(store, review, projects, Actor.of(user)));
+        ctx.render("projects/list", m);
     }
 
     void newForm(Context ctx) {

@@ -9,6 +9,7 @@ import io.javalin.http.Context;
  */
 public enum Saved {
     FIRM("firm", "Saved: firm settings."),
+    MAIL("mail", "Saved: e-mail notice settings. The next notice is sent with them."),
     PROJECT("project", "Saved: project settings."),
     SUBMITTAL("submittal", "Saved: submittal data."),
     PASSWORD("password", "Saved: your new password. Your other logins were ended."),

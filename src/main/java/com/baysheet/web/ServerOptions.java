@@ -22,13 +22,14 @@ import java.util.Map;
  * file whose key signs issued PDFs, which must exist; when none is named, {@code baysheet-signing.p12} beside the data
  * directory, generated on the first start), its password from {@code --signing-key-password-file FILE}
  * (BAYSHEET_SIGNING_KEY_PASSWORD_FILE) or BAYSHEET_SIGNING_KEY_PASSWORD, never the command line (none: an empty
- * password, the file protected by its owner-only permissions alone).
+ * password, the file protected by its owner-only permissions alone); the e-mail notices' SMTP password from
+ * {@code --smtp-password-file FILE} (BAYSHEET_SMTP_PASSWORD_FILE) or BAYSHEET_SMTP_PASSWORD, the same way (none: empty).
  *
  * @param signingKeyNamed whether the office named its key file (then it must exist; else it is made when missing)
  */
 public record ServerOptions(int port, String bind, Path dataDir, String dbUrl, String dbPassword, boolean demo,
                             String trustedProxy, boolean behindTls, Path signingKey, boolean signingKeyNamed,
-                            String signingKeyPassword) {
+                            String signingKeyPassword, String smtpPassword) {
     /** The key file made on the first start when none is named: beside the data directory, never in it. */
     public static final String DEFAULT_SIGNING_KEY = "baysheet-signing.p12";
 
@@ -39,7 +40,7 @@ public record ServerOptions(int port, String bind, Path dataDir, String dbUrl, S
 
     public static final String USAGE = "usage: baysheet [--port N] [--bind ADDR] [--data DIR] [--db-url JDBC_URL] "
             + "[--db-password-file FILE] [--demo] [--trusted-proxy ADDR] [--behind-tls] [--signing-key FILE] "
-            + "[--signing-key-password-file FILE] | calc FILE";
+            + "[--signing-key-password-file FILE] [--smtp-password-file FILE] | calc FILE";
 
     public static ServerOptions parse(String[] args, Map<String, String> env) throws BadOption {
         String port = env.getOrDefault("BAYSHEET_PORT", "7070");
@@ -52,6 +53,7 @@ public record ServerOptions(int port, String bind, Path dataDir, String dbUrl, S
         boolean tls = "true".equalsIgnoreCase(env.getOrDefault("BAYSHEET_BEHIND_TLS", "false"));
         String key = env.get("BAYSHEET_SIGNING_KEY");
         String keyPasswordFile = env.get("BAYSHEET_SIGNING_KEY_PASSWORD_FILE");
+        String smtpPasswordFile = env.get("BAYSHEET_SMTP_PASSWORD_FILE");
         for (int i = 0; i < args.length; i++) {
             switch (args[i]) {
                 case "--port" -> port = value(args, ++i, "--port");
@@ -64,6 +66,7 @@ public record ServerOptions(int port, String bind, Path dataDir, String dbUrl, S
                 case "--behind-tls" -> tls = true;
                 case "--signing-key" -> key = value(args, ++i, "--signing-key");
                 case "--signing-key-password-file" -> keyPasswordFile = value(args, ++i, "--signing-key-password-file");
+                case "--smtp-password-file" -> smtpPasswordFile = value(args, ++i, "--smtp-password-file");
                 default -> throw new BadOption("unknown option " + args[i] + "; " + USAGE);
             }
         }
@@ -76,9 +79,11 @@ public record ServerOptions(int port, String bind, Path dataDir, String dbUrl, S
         Path keyFile = named ? Path.of(key).toAbsolutePath().normalize() : dir.resolveSibling(DEFAULT_SIGNING_KEY);
         String keyPassword = keyPasswordFile != null ? readPassword(keyPasswordFile, "--signing-key-password-file")
                 : env.getOrDefault("BAYSHEET_SIGNING_KEY_PASSWORD", "");
+        String smtpPassword = smtpPasswordFile != null ? readPassword(smtpPasswordFile, "--smtp-password-file")
+                : env.getOrDefault("BAYSHEET_SMTP_PASSWORD", "");
         return new ServerOptions(port(port), bind, dir, url == null ? Database.h2Url(dir) : url,
                 password == null || password.isEmpty() ? null : password, demo,
-                proxy == null || proxy.isBlank() ? null : proxy.strip(), tls, keyFile, named, keyPassword);
+                proxy == null || proxy.isBlank() ? null : proxy.strip(), tls, keyFile, named, keyPassword, smtpPassword);
     }
 
     /** Whether the database is the embedded file under the data directory (which must then exist). */
@@ -90,7 +95,7 @@ public record ServerOptions(int port, String bind, Path dataDir, String dbUrl, S
         return "ServerOptions[port=" + port + ", bind=" + bind + ", dataDir=" + dataDir + ", dbUrl=" + (embedded() ? dbUrl : "(given)")
                 + ", dbPassword=" + (dbPassword == null ? "none" : "(hidden)") + ", demo=" + demo + ", trustedProxy=" + trustedProxy
                 + ", behindTls=" + behindTls + ", signingKey=" + signingKey + ", signingKeyPassword="
-                + (signingKeyPassword.isEmpty() ? "none" : "(hidden)") + "]";
+                + (signingKeyPassword.isEmpty() ? "none" : "(hidden)") + ", smtpPassword=" + (smtpPassword.isEmpty() ? "none" : "(hidden)") + "]";
     }
 
     /** The file's first line (a trailing newline, as an editor leaves it, is not part of the password). */

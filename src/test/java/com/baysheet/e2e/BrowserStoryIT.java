@@ -28,7 +28,9 @@ import static org.assertj.core.api.Assertions.assertThat;
  * every template and static file as packaged): the administrator's set-up, two users,
  * an engineer entering a project, its grid, levels and bays, reading members and a take-down, downloading
  * and submitting a sheet; a checker marking up a step and returning it; the engineer answering and
- * resubmitting; the checker approving and issuing; the issued PDF downloaded and verified by upload.
+ * resubmitting; the checker approving and issuing; the issued PDF downloaded and verified by upload; then the rest of
+ * the level by the batch ({@link BatchCheck}): submitted at once, counted on the checker's home page, a selection
+ * approved in one action and issued in another, where the sheet not yet approved is refused saying why.
  * Along the way every page is checked for unlabelled form fields, and the set-up and login forms are filled
  * and sent with the keyboard alone.
  */
@@ -138,6 +140,17 @@ class BrowserStoryIT {
         Path issued = download("Issued copy (PDF)");
         assertThat(Tokens.sha256(Files.readAllBytes(issued))).as("the downloaded issued revision is the frozen one").isEqualTo(sha);
         verifyByUpload(issued, sha);
+        page.press("Log out");
+
+        // then the rest of Level 2 by the batch: submitted at once, approved and issued in one action each
+        BatchCheck batch = new BatchCheck(page);
+        logInByKeyboard("erin", ENGINEER_PASSWORD);
+        int submitted = batch.submitLevel("Level 2");
+        System.out.println("BrowserStoryIT: the rest of Level 2 went by the batch: " + submitted + " sheets submitted at once");
+        page.press("Log out");
+        logInByKeyboard("chris", CHECKER_PASSWORD);
+        String left = batch.approveAllButOne(submitted);
+        batch.issueWithOneRefused(submitted, left, "Level 2 first issue");
         page.press("Log out");
     }
 

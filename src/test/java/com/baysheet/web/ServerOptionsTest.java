@@ -74,4 +74,18 @@ class ServerOptionsTest {
         assertThatThrownBy(() -> ServerOptions.parse(new String[]{"--signing-key-password-file", dir.resolve("missing").toString()}, Map.of()))
                 .isInstanceOf(ServerOptions.BadOption.class).hasMessageContaining("--signing-key-password-file");
     }
+
+    @Test
+    void theSmtpPasswordComesFromAFileOrTheEnvironmentAndIsNeverPrinted(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("smtp-password");
+        Files.writeString(file, "mail s3cret\n");
+        ServerOptions fromFile = ServerOptions.parse(new String[]{"--smtp-password-file", file.toString()}, Map.of());
+        assertThat(fromFile.smtpPassword()).isEqualTo("mail s3cret");
+        assertThat(fromFile.toString()).doesNotContain("s3cret").contains("smtpPassword=(hidden)");
+        assertThat(ServerOptions.parse(NONE, Map.of("BAYSHEET_SMTP_PASSWORD_FILE", file.toString())).smtpPassword()).isEqualTo("mail s3cret");
+        assertThat(ServerOptions.parse(NONE, Map.of("BAYSHEET_SMTP_PASSWORD", "env s3cret")).smtpPassword()).isEqualTo("env s3cret");
+        assertThat(ServerOptions.parse(NONE, Map.of()).smtpPassword()).isEmpty();
+        assertThatThrownBy(() -> ServerOptions.parse(new String[]{"--smtp-password-file", dir.resolve("missing").toString()}, Map.of()))
+                .isInstanceOf(ServerOptions.BadOption.class).hasMessageContaining("--smtp-password-file");
+    }
 }

@@ -2,6 +2,9 @@ package com.baysheet.web.review;
 
 import com.baysheet.framing.MemberRole;
 import com.baysheet.issue.Batch;
+import com.baysheet.issue.SheetSubject;
+import com.baysheet.notice.Notice;
+import com.baysheet.review.MarkSheets;
 import com.baysheet.review.Actor;
 import com.baysheet.review.CheckQueue;
 import com.baysheet.review.SheetState;
@@ -37,8 +40,10 @@ public final class QueueRoutes {
     private final Batch batch;
     private final BatchResults results;
     private final AuditRecorder recorder;
+    private final ReviewNotices notices;
 
-    public QueueRoutes(Store store, ReviewStore review, Batch batch, AuditRecorder recorder, java.time.Clock clock) {
+    public QueueRoutes(Store store, ReviewStore review, Batch batch, AuditRecorder recorder, java.time.Clock clock, ReviewNotices notices) {
+        this.notices = notices;
         this.store = store;
         this.review = review;
         this.batch = batch;
@@ -59,20 +64,11 @@ public final class QueueRoutes {
     /** The person's own queue across the office: for each project, how many sheets wait for them and why. */
     void mine(Context ctx) {
         Actor me = Actor.of(Access.user(ctx));
-        List<ProjectWaiting> rows = new java.util.ArrayList<>();
-        for (var p : store.projects().findAll()) {
-            Results.Computed c = store.results().of(p.id());
-            var counts = CheckQueue.waitingCounts(QueueEntries.of(review.reviews(), p.id(), SheetContext.marks(store, c)), me);
-            rows.add(new ProjectWaiting(p, counts, counts.values().stream().mapToInt(Integer::intValue).sum()));
-        }
         Map<String, Object> m = new HashMap<>();
-        m.put("rows", rows);
+        m.put("rows", OfficeQueue.of(store, review, store.projects().findAll(), me).rows());
         m.put("reasons", CheckQueue.Waiting.values());
         ctx.render("review/my-queue", m);
     }
-
-    /** One project's line on the person's queue. */
-    public record ProjectWaiting(com.baysheet.project.Project project, Map<CheckQueue.Waiting, Integer> counts, int total) {}
 
     void show(Context ctx) {
         long project = SheetContext.project(ctx);
@@ -142,6 +138,13 @@ public final class QueueRoutes {
                 ctx.formParam("description"), kind == Batch.Kind.ISSUE ? store.projects().submittals().find(project) : null);
         // a refusal for the person's rights is recorded as the single action's is
         outcomes.forEach(o -> o.rulesRefusal().ifPresent(e -> recorder.refusedReview(ctx, e)));
+        // each sheet's step has committed: one notice per person for the sheets done
+        Notice.Kind told = kind == Batch.Kind.SUBMIT ? Notice.Kind.SUBMITTED : kind == Batch.Kind.APPROVE ? Notice.Kind.APPROVED : null;
+        if (told != null) {
+            MarkSheets marks = SheetContext.marks(store, c);
+            notices.after(told, c.project(), outcomes.stream().filter(Batch.Outcome::done).map(o -> marks.byId(o.markId()).orElseThrow())
+                    .map(m -> new SheetSubject.OfMark(c, marks, m, m.ref(project))).toList(), ReviewRoutes.caller(ctx));
+        }
         String key = results.keep(Access.user(ctx).id(), kind, outcomes);
         ctx.redirect("/review/projects/" + project + "/queue?show=all&batch=" + key, HttpStatus.SEE_OTHER);
     }

@@ -3,6 +3,7 @@ package com.baysheet.web.review;
 import com.baysheet.engine.InputError;
 import com.baysheet.issue.Issuing;
 import com.baysheet.issue.SheetSubject;
+import com.baysheet.notice.Notice;
 import com.baysheet.review.Caller;
 import com.baysheet.review.PackageScope;
 import com.baysheet.store.Store;
@@ -35,11 +36,13 @@ public final class ReviewRoutes {
     private final Store store;
     private final ReviewStore review;
     private final Issuing issuing;
+    private final ReviewNotices notices;
 
-    public ReviewRoutes(Store store, ReviewStore review, Issuing issuing) {
+    public ReviewRoutes(Store store, ReviewStore review, Issuing issuing, ReviewNotices notices) {
         this.store = store;
         this.review = review;
         this.issuing = issuing;
+        this.notices = notices;
     }
 
     public void install(RoutesConfig r) {
@@ -48,11 +51,11 @@ public final class ReviewRoutes {
         r.get(MARK, this::show, Admit.OFFICE);
         r.get(PACKAGE, this::showPackage, Admit.OFFICE);
         for (String base : SHEETS) {
-            r.post(base + "/submit", ctx -> act(ctx, (s, v) -> reviews().submit(s.ref(), v, caller(ctx), today(), s.current())), Admit.PREPARER);
-            r.post(base + "/resubmit", ctx -> act(ctx, (s, v) -> reviews().resubmit(s.ref(), v, caller(ctx), today(), s.current())), Admit.PREPARER);
-            r.post(base + "/take-back", ctx -> act(ctx, (s, v) -> reviews().takeBack(s.ref(), v, caller(ctx))), Admit.PREPARER);
-            r.post(base + "/return", ctx -> act(ctx, (s, v) -> reviews().returnWithMarkups(s.ref(), v, caller(ctx))), Admit.PREPARER);
-            r.post(base + "/approve", ctx -> act(ctx, (s, v) -> reviews().approve(s.ref(), v, caller(ctx), today(), s.current())), Admit.PREPARER);
+            r.post(base + "/submit", ctx -> act(ctx, (s, v) -> reviews().submit(s.ref(), v, caller(ctx), today(), s.current()), Notice.Kind.SUBMITTED), Admit.PREPARER);
+            r.post(base + "/resubmit", ctx -> act(ctx, (s, v) -> reviews().resubmit(s.ref(), v, caller(ctx), today(), s.current()), Notice.Kind.SUBMITTED), Admit.PREPARER);
+            r.post(base + "/take-back", ctx -> act(ctx, (s, v) -> reviews().takeBack(s.ref(), v, caller(ctx)), null), Admit.PREPARER);
+            r.post(base + "/return", ctx -> act(ctx, (s, v) -> reviews().returnWithMarkups(s.ref(), v, caller(ctx)), Notice.Kind.RETURNED), Admit.PREPARER);
+            r.post(base + "/approve", ctx -> act(ctx, (s, v) -> reviews().approve(s.ref(), v, caller(ctx), today(), s.current()), Notice.Kind.APPROVED), Admit.PREPARER);
             r.post(base + "/issue", this::issue, Admit.PREPARER);
         }
     }
@@ -127,9 +130,11 @@ public final class ReviewRoutes {
     }
 
     /** An action on the sheet at the version the page showed, then back to the sheet page. */
-    private void act(Context ctx, Action a) {
+    /** Runs the step (its own transaction), then, once it has committed, posts its notice ({@code notice} null: none). */
+    private void act(Context ctx, Action a, Notice.Kind notice) {
         SheetSubject s = SheetContext.of(store, ctx);
         a.run(s, version(ctx));
+        if (notice != null) notices.after(notice, s.computed().project(), List.of(s), caller(ctx));
         ctx.redirect(s.path(), HttpStatus.SEE_OTHER);
     }
 

@@ -103,4 +103,33 @@ class QueueTest {
         assertThat(eng.post(path(s) + "/resubmit", List.of(Map.entry("version", version(html, "/resubmit")))).statusCode()).isEqualTo(303);
         assertThat(Pages.state(chk.get(path(s)).body())).isEqualTo("resubmitted");
     }
+
+    @Test
+    void theHomePageCountsWhatWaitsForEachPersonAsTheirQueuesDo() {
+        Client eng = server.as("rhea", Role.ENGINEER), chk = server.as("saul", Role.CHECKER), admin = server.as("admin", Role.ADMINISTRATOR);
+        MarkSheets.MarkSheet s = sheets().get(7);
+        String before = Html.text(chk.get(queue()).body(), "#waiting-counts li[data-waiting=TO_CHECK] strong");
+        submit(eng, s);
+
+        String home = chk.get("/projects").body();
+        String queue = chk.get(queue()).body();
+        String toCheck = Html.text(queue, "#waiting-counts li[data-waiting=TO_CHECK] strong");
+        assertThat(Integer.parseInt(toCheck)).isEqualTo(Integer.parseInt(before) + 1);
+        var row = Html.all(home, "table.list tbody tr").stream()
+                .filter(r -> r.selectFirst("td.waiting a[href=/review/projects/" + server.project() + "/queue]") != null).toList();
+        assertThat(row).as("the project's line leads to its queue").hasSize(1);
+        int total = Html.all(queue, "#waiting-counts li strong").stream().mapToInt(e -> Integer.parseInt(e.text())).sum();
+        assertThat(row.get(0).selectFirst("td.waiting").text()).isEqualTo(String.valueOf(total));
+        // the office-wide sums: every project's queue, this one's among them
+        String office = chk.get("/review/queue").body();
+        int everywhere = Html.texts(office, "td[data-waiting=TO_CHECK]").stream().mapToInt(Integer::parseInt).sum();
+        assertThat(Html.text(home, "#waiting li[data-waiting=TO_CHECK] strong")).isEqualTo(String.valueOf(everywhere));
+        assertThat(everywhere).isGreaterThanOrEqualTo(Integer.parseInt(toCheck));
+
+        assertThat(Html.all(eng.get("/projects").body(), "#waiting li[data-waiting=TO_CHECK]"))
+                .as("an engineer checks nothing").isEmpty();
+        String adminHome = admin.get("/projects").body();
+        assertThat(Html.all(adminHome, "#waiting")).as("the administrator neither prepares nor checks").isEmpty();
+        assertThat(Html.all(adminHome, "td.waiting")).isEmpty();
+    }
 }

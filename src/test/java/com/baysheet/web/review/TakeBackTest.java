@@ -4,6 +4,7 @@ import com.baysheet.auth.Role;
 import com.baysheet.review.AuditEvent;
 import com.baysheet.review.MarkSheets;
 import com.baysheet.review.SheetState;
+import com.baysheet.store.review.StoredRevision;
 import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin.Client;
 import org.junit.jupiter.api.Test;
@@ -17,7 +18,10 @@ import static com.baysheet.web.review.Pages.state;
 import static com.baysheet.web.review.Pages.version;
 import static org.assertj.core.api.Assertions.assertThat;
 
-/** The preparer takes a submitted sheet back to being prepared, before any checker has acted on it; nobody else does. */
+/**
+ * The preparer takes a submitted sheet back to being prepared, before any checker has acted on it; nobody else does.
+ * A next revision taken back leaves the issued one in force.
+ */
 class TakeBackTest {
     @RegisterExtension
     static final ReviewServer server = ReviewServer.perClass();
@@ -112,5 +116,63 @@ class TakeBackTest {
         assertThat(Html.shown(refused.body())).contains("Cannot take back: the sheet is approved; only a sheet submitted for check");
         assertThat(stateOf(s)).isEqualTo(SheetState.APPROVED);
         assertThat(entries("take back", s)).isEmpty();
+    }
+
+    @Test
+    void aNextRevisionTakenBackLeavesTheIssuedRevisionInForceAndLeavesTheCheckersQueue() {
+        Client eng = server.as("tomas", Role.ENGINEER), chk = server.as("celia", Role.CHECKER);
+        MarkSheets.MarkSheet s = lastOnTheChangedLevel();
+        Pages.submitApproveIssue(eng, chk, path(s), "First issue");
+        StoredRevision issued = server.office.review().reviews().view(s.ref(server.project())).current();
+        assertThat(issued.revision().state()).isEqualTo(SheetState.ISSUED);
+        byte[] pdf = eng.getBytes("/review/revisions/" + issued.id() + "/issued.pdf").body();
+
+        server.heavierFloor(5); // the member changes: the next submission opens revision 1
+        int waiting = toCheck(chk);
+        assertThat(act(eng, s, "submit").statusCode()).isEqualTo(303);
+        String html = eng.get(path(s)).body();
+        assertThat(state(html)).isEqualTo("submitted for check");
+        assertThat(Html.texts(html, "#revisions td:eq(0)")).containsExactly("0", "1");
+        assertThat(toCheck(chk)).as("the next revision awaits the checker").isEqualTo(waiting + 1);
+
+        assertThat(act(eng, s, "take-back").statusCode()).isEqualTo(303);
+
+        html = eng.get(path(s)).body();
+        assertThat(state(html)).as("back in the preparer's hands").isEqualTo("being prepared");
+        assertThat(Html.all(html, "form[action$=/submit]")).as("the preparer may submit it again").hasSize(1);
+        assertThat(Html.all(html, "form#take-back")).isEmpty();
+        assertThat(Html.texts(html, "#revisions tr")).containsExactly("0 issued " + issued.revision().issue().on() + " First issue issued PDF",
+                "1 being prepared");
+        assertThat(Html.all(html, "a[href=/review/revisions/" + issued.id() + "/issued.pdf]")).as("its issued copy still offered")
+                .isNotEmpty();
+        var view = server.office.review().reviews().view(s.ref(server.project()));
+        assertThat(view.history()).extracting(r -> r.revision().state()).containsExactly(SheetState.ISSUED, SheetState.PREPARING);
+        assertThat(server.office.review().reviews().standing(issued).inForce()).map(StoredRevision::id)
+                .as("revision 0 is still the one in force").hasValue(issued.id());
+        assertThat(Html.one(eng.upload("/verify", "pdf", "rev0.pdf", pdf).body(), "section#verdict h2").text())
+                .isEqualTo("Matches an issued revision, signed by this office");
+        assertThat(toCheck(chk)).as("no longer in the checker's queue").isEqualTo(waiting);
+        String mine = eng.get(queue() + "?level=" + java.net.URLEncoder.encode(s.group().first().level(), java.nio.charset.StandardCharsets.UTF_8)).body();
+        assertThat(Html.text(mine, "table#queue tr[data-mark=" + s.mark().id() + "] td.waiting")).isEqualTo("not yet submitted");
+        assertThat(entries("take back", s)).singleElement().satisfies(e -> {
+            assertThat(e.actorUsername()).isEqualTo("tomas");
+            assertThat(e.detail()).endsWith(" now being prepared");
+        });
+    }
+
+    /** The last stored sheet on the level {@link ReviewServer#heavierFloor} changes, far from the ones the other tests use. */
+    private static MarkSheets.MarkSheet lastOnTheChangedLevel() {
+        var c = server.store.results().of(server.project());
+        List<MarkSheets.MarkSheet> on = server.store.marks().of(server.project(), c.derived()).all().stream()
+                .filter(MarkSheets.MarkSheet::stored).filter(m -> m.group().first().level().equals(server.member().level())).toList();
+        assertThat(on.size()).isGreaterThan(3);
+        return on.get(on.size() - 1);
+    }
+
+    private static String queue() { return "/review/projects/" + server.project() + "/queue"; }
+
+    /** How many sheets the checker's queue says await their check. */
+    private static int toCheck(Client chk) {
+        return Integer.parseInt(Html.text(chk.get(queue()).body(), "#waiting-counts li[data-waiting=TO_CHECK] strong"));
     }
 }
