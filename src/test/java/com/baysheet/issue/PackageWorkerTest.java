@@ -86,7 +86,7 @@ class PackageWorkerTest {
         assertThat(d.sha256()).isEqualTo(Tokens.sha256(d.pdf()));
         assertThat(d.fileName()).isEqualTo(demo.info().jobNumber() + "-" + level + " package-checking-copy.pdf");
         List<String> cover = PdfText.pages(d.pdf()).get(0);
-        assertThat(cover).contains("CHECK PRINT — NOT FOR CONSTRUCTION");
+        assertThat(cover).anySatisfy(l -> assertThat(l).startsWith("Printed ").endsWith(" CHECK PRINT — NOT FOR CONSTRUCTION"));
         assertThat(PdfText.after(cover, "Subject")).isEqualTo(level + " package");
     }
 

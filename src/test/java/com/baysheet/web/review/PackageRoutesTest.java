@@ -45,12 +45,16 @@ class PackageRoutesTest {
         assertThat(pdf.headers().firstValue("X-Content-SHA256")).hasValue(Tokens.sha256(pdf.body()));
         List<List<String>> pages = PdfText.pages(pdf.body());
         List<String> lines = pages.stream().flatMap(List::stream).toList();
-        assertThat(lines).contains("CHECK PRINT — NOT FOR CONSTRUCTION", "Index of sheets");
+        assertThat(lines).anySatisfy(l -> assertThat(l).startsWith("Index of sheets"));
         assertThat(lines).anySatisfy(l -> assertThat(l).contains(server.member().name()));
-        // every page's footer counts it among all of them
+        // every page is marked a check print on its printed line, and its title block and footer count it among all
         for (int i = 0; i < pages.size(); i++) {
-            String footer = "Page " + (i + 1) + " of " + pages.size();
-            assertThat(pages.get(i)).as("page %d", i + 1).anySatisfy(l -> assertThat(l).endsWith(footer));
+            List<String> page = pages.get(i);
+            String of = (i + 1) + " of " + pages.size();
+            assertThat(page).as("page %d", i + 1)
+                    .anySatisfy(l -> assertThat(l).startsWith("Printed ").endsWith(" CHECK PRINT — NOT FOR CONSTRUCTION"))
+                    .anySatisfy(l -> assertThat(l).endsWith(" Page " + of));
+            assertThat(PdfText.after(page, "Sheet")).as("page %d", i + 1).isEqualTo(of);
         }
     }
 
