@@ -13,6 +13,7 @@ import java.util.List;
  * A PDF's text as lines, page by page, as PDFBox extracts it: a test asserts that a line says something, or that
  * the line after a title block's label holds a value, where a substring of the whole text would also match the
  * same characters inside a longer word, a number or another cell ("of 3" inside "of 30", a mark "B1" inside "B12").
+ * The diagonal watermark comes out as scattered letters; a page's mark is read from its printed line instead.
  */
 public final class PdfText {
     private PdfText() {}
