@@ -16,13 +16,7 @@ import java.util.HashMap;
 import java.util.Map;
 
 /** Projects: the list, a new project, its overview and its settings. */
-final class ProjectRoutes {
-    private final Store store;
-
-    ProjectRoutes(Store store) {
-        this.store = store;
-    }
-
+record ProjectRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/", ctx -> ctx.redirect("/projects"), Admit.OFFICE);
         r.get("/projects", this::list, Admit.OFFICE);

@@ -8,9 +8,9 @@ import org.jdbi.v3.core.statement.PreparedBatch;
 
 import java.sql.Connection;
 import java.time.Instant;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.stream.Collectors;
 
 /** Rows of member_mark and member_mark_location, on the caller's connection. */
 final class MarkRows {
@@ -33,13 +33,11 @@ final class MarkRows {
 
     /** Each member id of the project and the id of the mark it carries. */
     static Map<String, Long> carried(Connection c, long projectId) {
-        Map<String, Long> out = new HashMap<>();
         try (Handle h = Sql.on(c)) {
-            h.createQuery("SELECT member_id, mark_id FROM member_mark_location WHERE project_id = :project")
+            return h.createQuery("SELECT member_id, mark_id FROM member_mark_location WHERE project_id = :project")
                     .bind("project", projectId).map((rs, ctx) -> Map.entry(rs.getString(1), rs.getLong(2)))
-                    .forEach(e -> out.put(e.getKey(), e.getValue()));
+                    .collect(Collectors.toMap(Map.Entry::getKey, Map.Entry::getValue));
         }
-        return out;
     }
 
     static long insert(Connection c, long projectId, Mark m, Instant at) {
