@@ -1,5 +1,7 @@
 package com.baysheet.store;
 
+import org.jdbi.v3.core.Handle;
+
 import java.sql.Connection;
 import java.sql.DatabaseMetaData;
 import java.sql.PreparedStatement;
@@ -24,6 +26,12 @@ import java.util.Set;
  * Copies tables between two databases by what their metadata says (tables, columns, keys, foreign keys), not by a
  * list of our own, so that a table a later migration adds is carried too. Values go across typed: bytes as bytes,
  * text as text, times with their zone as {@link OffsetDateTime}, doubles (NaN among them) as doubles, NULL as NULL.
+ * <p>
+ * The rows themselves are copied with plain JDBC, on purpose: the statement is built from the columns the source's
+ * result set reports, each value is read by the JDBC type that metadata gives and a NULL is bound with the target
+ * column's own type. There is no fixed list of names to bind and no row to map to a value of ours, which is what Jdbi
+ * would add; its argument factories would pick a type from the Java value instead, and lose the target's type for
+ * NULL. The fixed-SQL reads of the catalogue go through Jdbi like the rest of the store.
  */
 final class TableCopy {
     /** Flyway's own bookkeeping: each database keeps the one its migrations wrote. */
@@ -56,15 +64,12 @@ final class TableCopy {
     }
 
     private static List<String> names(Connection c) throws SQLException {
-        List<String> out = new ArrayList<>();
-        try (PreparedStatement ps = c.prepareStatement("SELECT table_name FROM information_schema.tables "
-                + "WHERE table_schema = ? AND table_type = 'BASE TABLE' ORDER BY table_name")) {
-            ps.setString(1, c.getSchema());
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) if (!rs.getString(1).equalsIgnoreCase(HISTORY)) out.add(rs.getString(1));
-            }
+        String schema = c.getSchema();
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT table_name FROM information_schema.tables "
+                            + "WHERE table_schema = :schema AND table_type = 'BASE TABLE' ORDER BY table_name")
+                    .bind("schema", schema).mapTo(String.class).stream().filter(t -> !t.equalsIgnoreCase(HISTORY)).toList();
         }
-        return out;
     }
 
     static long count(Connection c, String table) throws SQLException {

@@ -4,12 +4,13 @@ import com.baysheet.auth.Tokens;
 import com.baysheet.review.ChainCheck;
 import com.baysheet.store.review.AuditTrail;
 import org.flywaydb.core.api.MigrationVersion;
+import org.jdbi.v3.core.Handle;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+
 import java.sql.Connection;
 import java.sql.DriverManager;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
@@ -161,12 +162,12 @@ public final class Transfer {
     /** Every identity column restarts past its largest id, so the next row the server adds takes a new one. */
     private static int advanceIdentities(Connection c) throws SQLException {
         Map<String, String> columns = new LinkedHashMap<>();
-        try (PreparedStatement ps = c.prepareStatement("SELECT table_name, column_name FROM information_schema.columns "
-                + "WHERE table_schema = ? AND is_identity = 'YES' ORDER BY table_name, column_name")) {
-            ps.setString(1, c.getSchema());
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) columns.put(rs.getString(1) + "." + rs.getString(2), rs.getString(2));
-            }
+        String schema = c.getSchema();
+        try (Handle h = Sql.on(c)) {
+            h.createQuery("SELECT table_name, column_name FROM information_schema.columns "
+                            + "WHERE table_schema = :schema AND is_identity = 'YES' ORDER BY table_name, column_name")
+                    .bind("schema", schema).map((rs, ctx) -> new String[] {rs.getString(1), rs.getString(2)})
+                    .forEach(tc -> columns.put(tc[0] + "." + tc[1], tc[1]));
         }
         for (var e : columns.entrySet()) {
             String table = e.getKey().substring(0, e.getKey().indexOf('.')), col = TableCopy.quote(e.getValue());

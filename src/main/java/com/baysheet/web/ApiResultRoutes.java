@@ -11,13 +11,7 @@ import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
 
 /** The JSON API for results: members (filtered as on the member list), their calculation records, and take-downs. */
-final class ApiResultRoutes {
-    private final Store store;
-
-    ApiResultRoutes(Store store) {
-        this.store = store;
-    }
-
+record ApiResultRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/api/projects/{project}/members", this::members, Admit.OFFICE);
         r.get("/api/projects/{project}/members/{member}", ctx -> {

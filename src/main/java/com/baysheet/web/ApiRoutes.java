@@ -12,13 +12,7 @@ import io.javalin.http.Context;
 import java.util.Map;
 
 /** The JSON API for the model: projects, grid, levels, bays, line loads and the firm's occupancies. See docs/api.md. */
-final class ApiRoutes {
-    private final Store store;
-
-    ApiRoutes(Store store) {
-        this.store = store;
-    }
-
+record ApiRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/api/projects", ctx -> Json.send(ctx, store.projects().findAll()), Admit.OFFICE);
         r.post("/api/projects", this::createProject, Admit.PREPARER);

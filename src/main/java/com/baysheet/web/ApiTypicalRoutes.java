@@ -12,14 +12,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 /** Typical levels in the JSON API: link levels to a typical, repeat it above, copy its bays, unlink. See docs/api.md. */
-final class ApiTypicalRoutes {
+record ApiTypicalRoutes(Store store) {
     private static final String LEVEL = "/api/projects/{project}/levels/{level}";
-
-    private final Store store;
-
-    ApiTypicalRoutes(Store store) {
-        this.store = store;
-    }
 
     void install(RoutesConfig r) {
         r.post(LEVEL + "/typical", ctx -> answer(ctx, b -> store.typicals().link(Editors.of(ctx), Ids.project(ctx),

@@ -15,7 +15,7 @@ import io.javalin.http.Context;
 import java.util.Map;
 
 /** Self weights in the JSON API: what a project's members carry by role and by member, and one member's own. See docs/api.md. */
-final class ApiWeightRoutes {
+record ApiWeightRoutes(Store store) {
     /** The weights as the members carry them (plf or kN/m), where the role figures come from, and those entered per member. */
     record WeightsJson(String units, double infillBeam, double gridBeam, double girder, double column, String origin,
                        Map<String, Double> members) {
@@ -24,12 +24,6 @@ final class ApiWeightRoutes {
             return new WeightsJson(UnitLabels.of(c.project().info().units()).perLength(), w.infillBeam(), w.gridBeam(), w.girder(),
                     w.column(), w.origin(), w.members());
         }
-    }
-
-    private final Store store;
-
-    ApiWeightRoutes(Store store) {
-        this.store = store;
     }
 
     void install(RoutesConfig r) {

@@ -17,13 +17,7 @@ import java.util.Map;
 import java.util.Optional;
 
 /** The bay editor of a level: select several bays, then give them an occupancy and framing, make them an opening, or clear them. */
-final class BayRoutes {
-    private final Store store;
-
-    BayRoutes(Store store) {
-        this.store = store;
-    }
-
+record BayRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/projects/{project}/levels/{level}/bays", this::edit, Admit.OFFICE);
         r.post("/projects/{project}/levels/{level}/bays", this::apply, Admit.PREPARER);

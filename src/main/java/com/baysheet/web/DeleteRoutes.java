@@ -18,13 +18,7 @@ import java.util.TreeSet;
  * members and which marks, the issued sheets withdrawn) and its form carries {@code confirm=yes} ({@link Confirmed}).
  * What is deleted is kept for 30 days; the administrator restores it ({@link DeletedRoutes}).
  */
-final class DeleteRoutes {
-    private final Store store;
-
-    DeleteRoutes(Store store) {
-        this.store = store;
-    }
-
+record DeleteRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/projects/{project}/levels/{level}/delete", this::confirmLevel, Admit.OFFICE);
         r.post("/projects/{project}/levels/{level}/delete", this::deleteLevel, Admit.PREPARER);

@@ -13,13 +13,7 @@ import java.util.Map;
  * The administrator's list of what was deleted in the last 30 days ({@link DeletedItems}), each with a button that
  * restores it; a restore the model refuses (a level of that name or elevation exists now) is shown above the list.
  */
-final class DeletedRoutes {
-    private final Store store;
-
-    DeletedRoutes(Store store) {
-        this.store = store;
-    }
-
+record DeletedRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/admin/deleted", ctx -> render(ctx, Form.filled(Map.of())), Admit.ADMINISTRATOR);
         r.post("/admin/deleted/{item}/restore", this::restore, Admit.ADMINISTRATOR);

@@ -14,13 +14,7 @@ import java.util.Map;
  * (kept, out of the default list, its model closed) and un-archived. Archiving is a preparer's, like every change to
  * the work: it removes nothing and is undone by the same people, on the same settings page.
  */
-final class JobRoutes {
-    private final Store store;
-
-    JobRoutes(Store store) {
-        this.store = store;
-    }
-
+record JobRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/projects/{project}/copy", this::copyForm, Admit.OFFICE);
         r.post("/projects/{project}/copy", this::copy, Admit.PREPARER);

@@ -21,8 +21,12 @@ import java.util.function.ToLongFunction;
  * member that carried it).
  *
  * @param <E> what the add form reads
+ * @param segment the path under the level ({@code line-loads})
+ * @param id the load's id from its path parameter
+ * @param start the add form's starting choices besides the version
  */
-final class LevelLoadRoutes<E> {
+record LevelLoadRoutes<E>(Store store, String segment, String template, Map<String, String> start,
+                          BiFunction<Form, UnitSystem, E> read, ToLongFunction<Context> id, Loads<E> loads) {
     /** Where the loads of this kind are kept. */
     interface Loads<E> {
         List<?> findByLevel(long project, long level);
@@ -33,28 +37,6 @@ final class LevelLoadRoutes<E> {
         java.util.Optional<String> describe(long project, long level, long id);
 
         void delete(Editor who, long project, long version, long level, long id);
-    }
-
-    private final Store store;
-    private final String segment, template;
-    private final Map<String, String> start;
-    private final BiFunction<Form, UnitSystem, E> read;
-    private final ToLongFunction<Context> id;
-    private final Loads<E> loads;
-
-    /**
-     * @param segment the path under the level ({@code line-loads}) and {@code id} the load's id from its path parameter
-     * @param start   the add form's starting choices besides the version
-     */
-    LevelLoadRoutes(Store store, String segment, String template, Map<String, String> start, BiFunction<Form, UnitSystem, E> read,
-                    ToLongFunction<Context> id, Loads<E> loads) {
-        this.store = store;
-        this.segment = segment;
-        this.template = template;
-        this.start = start;
-        this.read = read;
-        this.id = id;
-        this.loads = loads;
     }
 
     void install(RoutesConfig r, String idParameter) {

@@ -11,13 +11,7 @@ import java.util.HashMap;
 import java.util.Map;
 
 /** Levels and grid: the grid lines with their spacings, the list of levels, adding and editing a level (removing one: {@link DeleteRoutes}). */
-final class LevelRoutes {
-    private final Store store;
-
-    LevelRoutes(Store store) {
-        this.store = store;
-    }
-
+record LevelRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/projects/{project}/levels", this::show, Admit.OFFICE);
         r.post("/projects/{project}/grid", this::updateGrid, Admit.PREPARER);

@@ -18,13 +18,7 @@ import java.util.List;
 import java.util.Map;
 
 /** Derived members: the filtered list with governing numbers, and a member's whole calculation record with its plan. */
-final class MemberRoutes {
-    private final PageCache pages;
-
-    MemberRoutes(PageCache pages) {
-        this.pages = pages;
-    }
-
+record MemberRoutes(PageCache pages) {
     void install(RoutesConfig r) {
         r.get("/projects/{project}/members", this::list, Admit.OFFICE);
         r.get("/projects/{project}/members/{member}", this::show, Admit.OFFICE);

@@ -18,14 +18,8 @@ import java.util.Map;
  * project value) on its record, which then says "entered for this member"; a blank goes back to the role's. A
  * member of a typical group that is given its own weight becomes a typical member of its own (its input differs).
  */
-final class MemberWeightRoutes {
+record MemberWeightRoutes(Store store) {
     static final String FIELD = "ownWeight";
-
-    private final Store store;
-
-    MemberWeightRoutes(Store store) {
-        this.store = store;
-    }
 
     void install(RoutesConfig r) {
         r.post("/projects/{project}/members/{member}/weight", this::update, Admit.PREPARER);

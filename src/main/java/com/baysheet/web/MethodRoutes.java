@@ -10,13 +10,7 @@ import io.javalin.http.Context;
 import java.util.Map;
 
 /** A level's members under every floor reduction method the project could choose: a page and its CSV. */
-final class MethodRoutes {
-    private final Store store;
-
-    MethodRoutes(Store store) {
-        this.store = store;
-    }
-
+record MethodRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/projects/{project}/levels/{level}/methods", this::show, Admit.OFFICE);
         r.get("/projects/{project}/levels/{level}/methods.csv", this::csv, Admit.OFFICE);

@@ -22,15 +22,9 @@ import java.util.Map;
  * and the API alike), in the shape docs/api.md gives. Installed ahead of the project routes, so that
  * /projects/import is this page and not a project.
  */
-final class ModelFileRoutes {
+record ModelFileRoutes(Store store) {
     /** A model file larger than this is refused before it is read (a JSON tree takes several times its text in memory). */
     static final long MAX_FILE = 5_000_000;
-
-    private final Store store;
-
-    ModelFileRoutes(Store store) {
-        this.store = store;
-    }
 
     void install(RoutesConfig r) {
         r.get("/projects/{project}/model.json", this::download, Admit.OFFICE);

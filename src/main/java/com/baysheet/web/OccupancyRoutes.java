@@ -21,13 +21,7 @@ import java.util.function.Consumer;
  * results of every project that uses one, as the edit page says before it is saved) and deleted (a confirmation page;
  * refused, naming the projects, while one is in use).
  */
-final class OccupancyRoutes {
-    private final Store store;
-
-    OccupancyRoutes(Store store) {
-        this.store = store;
-    }
-
+record OccupancyRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/occupancies", this::list, Admit.OFFICE);
         r.post("/occupancies", this::create, Admit.PREPARER);

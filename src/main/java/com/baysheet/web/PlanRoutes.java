@@ -13,13 +13,7 @@ import io.javalin.http.Context;
 import java.util.Map;
 
 /** The framing plan of a level, drawn from the model as SVG. */
-final class PlanRoutes {
-    private final PageCache pages;
-
-    PlanRoutes(PageCache pages) {
-        this.pages = pages;
-    }
-
+record PlanRoutes(PageCache pages) {
     void install(RoutesConfig r) {
         r.get("/projects/{project}/plan", this::show, Admit.OFFICE);
     }

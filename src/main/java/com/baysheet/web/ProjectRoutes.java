@@ -21,15 +21,7 @@ import java.util.HashMap;
 import java.util.Map;
 
 /** Projects: the list, a new project, its overview and its settings. */
-final class ProjectRoutes {
-    private final Store store;
-    private final ReviewStore review;
-
-    ProjectRoutes(Store store, ReviewStore review) {
-        this.store = store;
-        this.review = review;
-    }
-
+record ProjectRoutes(Store store, ReviewStore review) {
     void install(RoutesConfig r) {
         r.get("/", ctx -> ctx.redirect("/projects"), Admit.OFFICE);
         r.get("/projects", this::list, Admit.OFFICE);

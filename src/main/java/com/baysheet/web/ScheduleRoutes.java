@@ -28,7 +28,7 @@ import java.util.function.BiFunction;
  * as a CSV and an XLSX download, and each in the JSON API. All read from the current derivation's take-downs
  * and records.
  */
-final class ScheduleRoutes {
+record ScheduleRoutes(Store store) {
     /** The schedules by the key their paths and file names use, in the order the page shows them. */
     static final Map<String, BiFunction<Derived, MemberLabels, LoadSchedule>> SCHEDULES = new LinkedHashMap<>();
 
@@ -37,12 +37,6 @@ final class ScheduleRoutes {
         SCHEDULES.put("foundation-reactions", (d, marks) -> ColumnSchedules.foundations(d, t -> true, marks));
         SCHEDULES.put("marks", MarkSchedule::of);
         SCHEDULES.put("members", MemberSchedule::of);
-    }
-
-    private final Store store;
-
-    ScheduleRoutes(Store store) {
-        this.store = store;
     }
 
     void install(RoutesConfig r) {

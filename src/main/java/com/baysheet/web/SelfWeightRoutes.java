@@ -17,14 +17,8 @@ import java.util.Map;
  * A project's own self weights by role, on its settings page: all four given override the firm's defaults (every sheet
  * then says "project value"), all four blank go back to the firm's ("firm default").
  */
-final class SelfWeightRoutes {
+record SelfWeightRoutes(Store store) {
     static final List<String> FIELDS = List.of("swInfillBeam", "swGridBeam", "swGirder", "swColumn");
-
-    private final Store store;
-
-    SelfWeightRoutes(Store store) {
-        this.store = store;
-    }
 
     void install(RoutesConfig r) {
         r.post("/projects/{project}/self-weights", this::update, Admit.PREPARER);

@@ -13,13 +13,7 @@ import java.util.Map;
  * The submittal data of a project (engineer of record, licence, building code as adopted), a form of its own
  * on the settings page: saved over the project's version, refused beside the field it names.
  */
-final class SubmittalRoutes {
-    private final Store store;
-
-    SubmittalRoutes(Store store) {
-        this.store = store;
-    }
-
+record SubmittalRoutes(Store store) {
     void install(RoutesConfig r) {
         r.post("/projects/{project}/settings/submittal", this::update, Admit.PREPARER);
     }

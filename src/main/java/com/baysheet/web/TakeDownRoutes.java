@@ -10,13 +10,7 @@ import io.javalin.http.Context;
 import java.util.Map;
 
 /** Column take-downs: the stacks of the project, and one stack level by level from the top down. */
-final class TakeDownRoutes {
-    private final PageCache pages;
-
-    TakeDownRoutes(PageCache pages) {
-        this.pages = pages;
-    }
-
+record TakeDownRoutes(PageCache pages) {
     void install(RoutesConfig r) {
         r.get("/projects/{project}/takedowns", this::list, Admit.OFFICE);
         r.get("/projects/{project}/takedowns/{stack}", this::show, Admit.OFFICE);

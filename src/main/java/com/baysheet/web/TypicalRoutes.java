@@ -16,13 +16,7 @@ import java.util.Optional;
  * Typical levels from a level's page: make other levels the same as this one, add levels above it that are the
  * same, copy its bays to other levels once, or unlink it from its typical. Each answers with the level's page.
  */
-final class TypicalRoutes {
-    private final Store store;
-
-    TypicalRoutes(Store store) {
-        this.store = store;
-    }
-
+record TypicalRoutes(Store store) {
     void install(RoutesConfig r) {
         r.post("/projects/{project}/levels/{level}/typical", ctx -> act(ctx, (f, p, l) -> {
             List<Long> ids = levelIds(f);

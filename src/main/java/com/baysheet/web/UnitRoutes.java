@@ -11,13 +11,7 @@ import java.util.HashMap;
 import java.util.Map;
 
 /** Converting a project between US and SI units: a page that says what changes, and the confirmed conversion. */
-final class UnitRoutes {
-    private final Store store;
-
-    UnitRoutes(Store store) {
-        this.store = store;
-    }
-
+record UnitRoutes(Store store) {
     void install(RoutesConfig r) {
         r.get("/projects/{project}/units", ctx -> {
             Project p = store.projects().find(Ids.project(ctx));

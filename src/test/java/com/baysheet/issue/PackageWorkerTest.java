@@ -6,6 +6,7 @@ import com.baysheet.project.Project;
 import com.baysheet.review.PackageScope;
 import com.baysheet.review.store.ReviewDatabases;
 import com.baysheet.review.store.TestClock;
+import com.baysheet.sheet.PdfText;
 import com.baysheet.store.Database;
 import com.baysheet.store.Demo;
 import com.baysheet.store.PackageJob;
@@ -14,9 +15,6 @@ import com.baysheet.store.Results;
 import com.baysheet.store.Sql;
 import com.baysheet.store.Store;
 import com.baysheet.store.review.ReviewStore;
-import org.apache.pdfbox.Loader;
-import org.apache.pdfbox.pdmodel.PDDocument;
-import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -25,6 +23,7 @@ import org.junit.jupiter.api.io.TempDir;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.List;
 import java.util.stream.Stream;
 import java.time.Instant;
 
@@ -86,9 +85,9 @@ class PackageWorkerTest {
         PackageJobs.Download d = packages.file(demo.id(), String.valueOf(id)).orElseThrow();
         assertThat(d.sha256()).isEqualTo(Tokens.sha256(d.pdf()));
         assertThat(d.fileName()).isEqualTo(demo.info().jobNumber() + "-" + level + " package-checking-copy.pdf");
-        try (PDDocument doc = Loader.loadPDF(d.pdf())) {
-            assertThat(new PDFTextStripper().getText(doc)).contains("CHECK PRINT", level + " package");
-        }
+        List<String> cover = PdfText.pages(d.pdf()).get(0);
+        assertThat(cover).anySatisfy(l -> assertThat(l).startsWith("Printed ").endsWith(" CHECK PRINT — NOT FOR CONSTRUCTION"));
+        assertThat(PdfText.after(cover, "Subject")).isEqualTo(level + " package");
     }
 
     @Test

@@ -3,6 +3,7 @@ package com.baysheet.review;
 import com.baysheet.auth.Tokens;
 import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.engine.record.Entry;
+import com.baysheet.engine.record.RecordJson;
 import com.baysheet.engine.record.Step;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -34,7 +35,9 @@ class FirstRecordFormTest {
         assertThat(CalcFingerprint.of(read)).isEqualTo(Tokens.sha256(json));
         // written again in today's form (as the next revision stores it) the fingerprint still agrees
         String today = RecordSnapshot.write(read);
-        assertThat(today).isNotEqualTo(json).contains("\"shownUnit\"");
+        assertThat(today).isNotEqualTo(json);
+        assertThat(RecordJson.mapper().readTree(today).path("inputs")).as("every input written with its shown unit")
+                .isNotEmpty().allSatisfy(in -> assertThat(in.has("shownUnit")).as(in.toString()).isTrue());
         assertThat(CalcFingerprint.of(RecordSnapshot.read(today))).isEqualTo(Tokens.sha256(json));
         String fp = Tokens.sha256(json);
         SheetRevision issued = SheetRevision.opened(1).submit(Sheets.ENGINEER, fp, Sheets.DAY)

@@ -20,13 +20,20 @@ class CheckingCopyTest {
     @Test
     void checkingCopyIsMarkedOnEveryPageAndListsItsMarkups() {
         RenderedPdf pdf = SheetRenderer.checking(MemberSheet.of(SheetFixtures.unchecked("Girder G1"), girder), markups);
-        for (int p = 1; p <= pdf.pages(); p++)
-            assertThat(SheetFixtures.page(pdf.bytes(), p)).contains(Wording.US.mark);
-        String text = SheetFixtures.squash(SheetFixtures.text(pdf.bytes()));
-        assertThat(text).contains("Checker'smarkups").contains("M1").contains("M2").contains("OPEN").contains("resolved")
-                .contains(SheetFixtures.squash("Confirm K_LL: is this girder on an edge?"))
-                .contains(SheetFixtures.squash("JQR: Interior: see the key plan.")).contains("Nottobesealed")
-                .contains("notyetchecked");
+        List<List<String>> pages = PdfText.pages(pdf.bytes());
+        assertThat(pages).hasSize(pdf.pages());
+        for (List<String> page : pages) {
+            assertThat(page).anySatisfy(l -> assertThat(l).startsWith("Printed ").endsWith(" " + Wording.US.mark));
+            assertThat(PdfText.after(page, "Checked by")).isEqualTo("not yet checked");
+        }
+        // the markups table: a row per markup (number, target, author, status, text), each reply on the line below it
+        List<String> lines = pages.stream().flatMap(List::stream).toList();
+        int table = lines.indexOf("Checker's markups");
+        assertThat(table).as("the markups table's heading").isNotNegative();
+        assertThat(lines.subList(table + 1, table + 5)).containsExactly("No. On By Status Markup and replies",
+                "M1 f MKL OPEN Confirm K_LL: is this girder on an edge?", "JQR: Interior: see the key plan.",
+                "M2 span MKL resolved Span to the column centrelines?");
+        assertThat(lines).contains("Not to be sealed");
     }
 
     @Test

@@ -12,6 +12,7 @@ import com.baysheet.engine.snow.DriftStrip;
 import com.baysheet.engine.snow.RoofStep;
 import com.baysheet.engine.snow.SnowRoof;
 import com.baysheet.engine.snow.StepDrift;
+import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.Test;
 
 import java.util.List;
@@ -42,8 +43,10 @@ class DriftSheetTest {
     }
 
     @Test
-    void aRecordWithoutDriftKeepsItsJsonWithoutADriftField() {
-        assertThat(RecordJson.write(beam(false))).doesNotContain("\"drift\"");
-        assertThat(RecordJson.write(beam(true))).contains("\"drift\"");
+    void aRecordWithoutDriftKeepsItsJsonWithoutADriftField() throws Exception {
+        assertThat(RecordJson.mapper().readTree(RecordJson.write(beam(false))).path("sketch").has("drift")).isFalse();
+        JsonNode drift = RecordJson.mapper().readTree(RecordJson.write(beam(true))).path("sketch").path("drift");
+        assertThat(drift.isArray()).as("the sketch's drift pieces: %s", drift).isTrue();
+        assertThat(drift).hasSize(beam(true).sketch().drift().size());
     }
 }

@@ -50,7 +50,10 @@ class SheetRendererTest {
 
     @Test
     void textHoldsInitialsCautionsDisclaimerAndStampBox() {
-        assertThat(text).contains("JQR").contains("2025-05-28").contains("MKL").contains("2025-05-30");
+        for (List<String> page : PdfText.pages(issued.bytes())) {
+            assertThat(PdfText.words(PdfText.after(page, "Prepared by"))).containsExactly("JQR", "2025-05-28");
+            assertThat(PdfText.words(PdfText.after(page, "Checked by"))).containsExactly("MKL", "2025-05-30");
+        }
         for (Note n : beam.notes()) assertThat(text).contains(sq(n.text()));
         assertThat(text).contains("CAUTION").contains(sq("licensed professional engineer"))
                 .contains(sq("adopted local building code")).contains(sq("Engineer's seal and signature"));
@@ -84,8 +87,12 @@ class SheetRendererTest {
     void everyPageCountsItselfOfTheTotal() {
         int n = SheetFixtures.pages(issued.bytes());
         assertThat(issued.pages()).isEqualTo(n).isGreaterThanOrEqualTo(2);
-        for (int p = 1; p <= n; p++)
-            assertThat(SheetFixtures.page(issued.bytes(), p)).contains(p + " of " + n).contains("Page " + p + " of " + n);
+        List<List<String>> pages = PdfText.pages(issued.bytes());
+        for (int p = 1; p <= n; p++) {
+            String of = p + " of " + n;
+            assertThat(PdfText.after(pages.get(p - 1), "Sheet")).as("the title block of page %d", p).isEqualTo(of);
+            assertThat(pages.get(p - 1)).as("the footer of page %d", p).anySatisfy(l -> assertThat(l).endsWith(" Page " + of));
+        }
     }
 
     @Test

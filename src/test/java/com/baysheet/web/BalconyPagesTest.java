@@ -97,13 +97,19 @@ class BalconyPagesTest {
         for (JsonNode m : members) if (m.get("areas").has("balcony:office")) edge = m.get("id").asText();
         assertThat(edge).isNotNull();
         JsonNode notes = json(server.get("/api/projects/" + project() + "/members/" + edge)).get("record").get("notes");
-        assertThat(notes.toString()).contains("Balcony or deck serving Offices", "Table 4.3-1");
+        assertThat(notes).anySatisfy(n -> {
+            assertThat(n.path("text").asText()).startsWith("Balcony or deck serving Offices: L0 = ");
+            assertThat(n.path("clause").path("ref").asText()).isEqualTo("Table 4.3-1");
+        });
 
         HttpResponse<String> given = server.json("POST", at, "{\"version\": " + json(byDefault).get("version").asLong() + body
                 + ", \"cantileverOccupancy\": \"balcony:retail-upper\"}");
         assertThat(given.statusCode()).isEqualTo(200);
         assertThat(json(given).get("saved").get(0).get("cantileverOccupancy").asText()).isEqualTo("balcony:retail-upper");
         JsonNode listed = json(server.get(at));
-        assertThat(listed.toString()).contains("\"cantileverOccupancy\":\"balcony:retail-upper\"");
+        List<String> atOrigin = new ArrayList<>();
+        for (JsonNode bay : listed)
+            if (bay.path("col").asInt() == 0 && bay.path("row").asInt() == 0) atOrigin.add(bay.path("cantileverOccupancy").asText());
+        assertThat(atOrigin).as("the bay at column 0, row 0 as listed").containsExactly("balcony:retail-upper");
     }
 }

@@ -41,7 +41,8 @@ class ConflictTest {
         assertThat(ok.statusCode()).isEqualTo(201);
         HttpResponse<String> stale = server.json("POST", "/api/projects/" + p + "/levels", level.replace("Upper", "Top").formatted(v));
         assertThat(stale.statusCode()).isEqualTo(409);
-        assertThat(stale.body()).contains("\"field\" : \"version\"", "changed by another save");
+        assertThat(JsonBody.of(stale).path("field").asText()).isEqualTo("version");
+        assertThat(JsonBody.of(stale).path("error").asText()).contains("changed by another save");
         assertThat(server.store.levels().findByProject(p)).extracting(StoredLevel::name).containsExactly("Deck", "Upper deck");
     }
 }

@@ -77,7 +77,7 @@ class ProjectCopyPagesTest {
         settings.put("version", version);
         HttpResponse<String> api = server.json("PUT", "/api/projects/" + p.id(), RecordJson.write(settings));
         assertThat(api.statusCode()).isEqualTo(409);
-        assertThat(api.body()).contains("is archived");
+        assertThat(JsonBody.of(api).path("error").asText()).contains("is archived");
 
         assertThat(server.post("/projects/" + p.id() + "/unarchive", server.versioned(p.id())).statusCode()).isEqualTo(303);
         assertThat(jobsListed("/projects")).contains("26-005");

@@ -1,5 +1,6 @@
 package com.baysheet.web;
 
+import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
@@ -32,7 +33,7 @@ class SelfWeightPagesTest {
         HttpResponse<String> partial = server.post("/projects/" + project() + "/self-weights",
                 List.of(entry("version", v), entry("swInfillBeam", "30")));
         assertThat(partial.statusCode()).isEqualTo(422);
-        assertThat(partial.body()).contains("id=\"error-swGirder\"", "give all four");
+        assertThat(Html.text(partial.body(), "#error-swGirder")).contains("give all four");
         assertThat(server.store.selfWeights().find(project())).isEmpty();
         HttpResponse<String> ok = server.post("/projects/" + project() + "/self-weights", List.of(entry("version", v),
                 entry("swInfillBeam", "30"), entry("swGridBeam", "35"), entry("swGirder", "90"), entry("swColumn", "120")));
@@ -63,7 +64,8 @@ class SelfWeightPagesTest {
         assertThat(server.post(post, List.of(entry("version", v), entry("ownWeight", "85"))).statusCode()).isEqualTo(303);
         assertThat(server.store.selfWeights().members(project())).containsEntry(id, 85.0);
         assertThat(Html.text(server.get(page).body(), "#weight-now")).contains("85", "entered for this member");
-        assertThat(server.get("/api/projects/" + project() + "/members/" + id).body()).contains("entered for this member");
+        // the API's record says where the weight came from on its self-weight step, as the page does
+        assertThat(ownWeightSteps(id)).singleElement().asString().endsWith("(entered for this member)");
         // the form's version is now stale: another save in between is refused, nothing changes
         assertThat(server.post(post, List.of(entry("version", v), entry("ownWeight", "95"))).statusCode()).isEqualTo(409);
         assertThat(server.store.selfWeights().members(project())).containsEntry(id, 85.0);
@@ -82,13 +84,21 @@ class SelfWeightPagesTest {
         long v = server.version(project());
         HttpResponse<String> bad = server.json("PUT", at, "{\"version\": " + v + ", \"ownWeight\": \"heavy\"}");
         assertThat(bad.statusCode()).isEqualTo(400);
-        assertThat(bad.body()).contains("ownWeight");
+        assertThat(JsonBody.of(bad).path("field").asText()).isEqualTo("ownWeight");
         HttpResponse<String> ok = server.json("PUT", at, "{\"version\": " + v + ", \"ownWeight\": 150}");
         assertThat(ok.statusCode()).isEqualTo(200);
-        var listed = new com.fasterxml.jackson.databind.ObjectMapper().readTree(server.get("/api/projects/" + project() + "/self-weights").body());
+        JsonNode listed = JsonBody.of(server.get("/api/projects/" + project() + "/self-weights"));
         assertThat(listed.path("members").path(id).asDouble()).isEqualTo(150.0);
         assertThat(listed.path("units").asText()).isEqualTo("plf");
         assertThat(server.json("PUT", at, "{\"version\": " + server.version(project()) + ", \"ownWeight\": null}").statusCode()).isEqualTo(200);
         assertThat(server.store.selfWeights().members(project())).isEmpty();
+    }
+
+    /** The descriptions of the self-weight steps ({@code w_sw}, or {@code P_sw} on a column) of a member's record, as the API gives it. */
+    private List<String> ownWeightSteps(String memberId) {
+        List<String> out = new java.util.ArrayList<>();
+        for (JsonNode step : JsonBody.of(server.get("/api/projects/" + project() + "/members/" + memberId)).path("record").path("steps"))
+            if (List.of("w_sw", "P_sw").contains(step.path("symbol").asText())) out.add(step.path("description").asText());
+        return out;
     }
 }

@@ -5,16 +5,16 @@ import com.baysheet.review.AuditEvent;
 import com.baysheet.review.ChainCheck;
 import com.baysheet.store.Sql;
 
+import org.jdbi.v3.core.Handle;
+
 import java.sql.Connection;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Statement;
-import java.sql.Types;
 import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.function.Consumer;
 
 /**
@@ -51,37 +51,28 @@ public final class AuditTrail {
     public static AuditEvent append(Connection c, AuditEvent e, Instant at) throws SQLException {
         Head head = lockHead(c);
         Instant stamped = at.truncatedTo(AuditChain.PRECISION);
-        long id;
-        try (PreparedStatement ps = c.prepareStatement("INSERT INTO audit_event (occurred_at, actor_id, actor_username, "
-                + "action, subject, detail, address) VALUES (?, ?, ?, ?, ?, ?, ?)", Statement.RETURN_GENERATED_KEYS)) {
-            ps.setObject(1, Sql.stamp(stamped));
-            if (e.actorId() == null) ps.setNull(2, Types.BIGINT);
-            else ps.setLong(2, e.actorId());
-            ps.setString(3, e.actorUsername());
-            ps.setString(4, e.action());
-            ps.setString(5, e.subject());
-            ps.setString(6, e.detail());
-            ps.setString(7, e.address());
-            ps.executeUpdate();
-            try (ResultSet k = ps.getGeneratedKeys()) {
-                k.next();
-                id = k.getLong(1);
-            }
+        try (Handle h = Sql.on(c)) {
+            // the time is bound exactly as it is hashed: truncated to the chain's precision, in UTC
+            long id = h.createUpdate("INSERT INTO audit_event (occurred_at, actor_id, actor_username, action, subject, detail, "
+                            + "address) VALUES (:at, :actor, :username, :action, :subject, :detail, :address)")
+                    .bind("at", Sql.stampOf(stamped)).bind("actor", e.actorId()).bind("username", e.actorUsername())
+                    .bind("action", e.action()).bind("subject", e.subject()).bind("detail", e.detail())
+                    .bind("address", e.address()).executeAndReturnGeneratedKeys("id").mapTo(Long.class).one();
+            AuditEvent stored = e.stored(id, stamped, null);
+            String hash = AuditChain.link(head.hash(), stored);
+            h.createUpdate("UPDATE audit_event SET entry_hash = :hash WHERE id = :id").bind("hash", hash).bind("id", id).execute();
+            h.createUpdate("UPDATE audit_chain SET head_id = :id, head_hash = :hash WHERE id = 1").bind("id", id).bind("hash", hash)
+                    .execute();
+            return stored.stored(id, stamped, hash);
         }
-        AuditEvent stored = e.stored(id, stamped, null);
-        String hash = AuditChain.link(head.hash(), stored);
-        update(c, "UPDATE audit_event SET entry_hash = ? WHERE id = ?", hash, id);
-        update(c, "UPDATE audit_chain SET head_id = ?, head_hash = ? WHERE id = 1", id, hash);
-        return stored.stored(id, stamped, hash);
     }
 
     /** The chain's head now, as the head row holds it (what an issued PDF quotes). */
     public Head head() {
         return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT head_id, head_hash FROM audit_chain WHERE id = 1");
-                 ResultSet rs = ps.executeQuery()) {
-                rs.next();
-                return new Head(rs.getLong(1), rs.getString(2));
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT head_id, head_hash FROM audit_chain WHERE id = 1")
+                        .map((rs, ctx) -> new Head(rs.getLong(1), rs.getString(2))).one();
             }
         });
     }
@@ -118,14 +109,9 @@ public final class AuditTrail {
     /** Newest first, a page at a time. */
     public List<AuditEvent> page(int limit, int offset) {
         return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM audit_event ORDER BY id DESC LIMIT ? OFFSET ?")) {
-                ps.setInt(1, limit);
-                ps.setInt(2, offset);
-                List<AuditEvent> out = new ArrayList<>();
-                try (ResultSet rs = ps.executeQuery()) {
-                    while (rs.next()) out.add(read(rs));
-                }
-                return out;
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT " + COLUMNS + " FROM audit_event ORDER BY id DESC LIMIT :limit OFFSET :offset")
+                        .bind("limit", limit).bind("offset", offset).map((rs, ctx) -> read(rs)).list();
             }
         });
     }
@@ -140,11 +126,10 @@ public final class AuditTrail {
     /** Every entry oldest first, one at a time, never the whole trail in memory (the CSV export, verification). */
     public void forEach(Consumer<AuditEvent> each) {
         sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT " + COLUMNS + " FROM audit_event ORDER BY id")) {
-                ps.setFetchSize(FETCH);
-                try (ResultSet rs = ps.executeQuery()) {
-                    while (rs.next()) each.accept(read(rs));
-                }
+            try (Handle h = Sql.on(c)) {
+                // mapped row by row as the cursor moves: the trail is never held whole
+                h.createQuery("SELECT " + COLUMNS + " FROM audit_event ORDER BY id").setFetchSize(FETCH)
+                        .map((rs, ctx) -> read(rs)).forEach(each);
             }
             return null;
         });
@@ -152,25 +137,18 @@ public final class AuditTrail {
 
     public long count() {
         return sql.tx(c -> {
-            try (PreparedStatement ps = c.prepareStatement("SELECT COUNT(*) FROM audit_event"); ResultSet rs = ps.executeQuery()) {
-                rs.next();
-                return rs.getLong(1);
+            try (Handle h = Sql.on(c)) {
+                return h.createQuery("SELECT COUNT(*) FROM audit_event").mapTo(Long.class).one();
             }
         });
     }
 
     private static Head lockHead(Connection c) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement("SELECT head_id, head_hash FROM audit_chain WHERE id = 1 FOR UPDATE");
-             ResultSet rs = ps.executeQuery()) {
-            if (!rs.next()) throw new SQLException("the audit chain has no head row (migration V116 not applied)");
-            return new Head(rs.getLong(1), rs.getString(2));
-        }
-    }
-
-    private static void update(Connection c, String q, Object... args) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(q)) {
-            for (int i = 0; i < args.length; i++) ps.setObject(i + 1, args[i]);
-            ps.executeUpdate();
+        try (Handle h = Sql.on(c)) {
+            Optional<Head> head = h.createQuery("SELECT head_id, head_hash FROM audit_chain WHERE id = 1 FOR UPDATE")
+                    .map((rs, ctx) -> new Head(rs.getLong(1), rs.getString(2))).findOne();
+            if (head.isEmpty()) throw new SQLException("the audit chain has no head row (migration V116 not applied)");
+            return head.get();
         }
     }
 

@@ -7,41 +7,43 @@ import com.baysheet.review.SheetRevision.Issue;
 import com.baysheet.review.SheetRevision.Preparer;
 import com.baysheet.review.SheetState;
 
+import org.jdbi.v3.core.statement.SqlStatement;
+
 import java.sql.Date;
-import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Types;
 import java.time.LocalDate;
 
-/** How a {@link SheetRevision} maps onto the columns of sheet_revision, both ways. */
+/** How a {@link SheetRevision} maps onto the columns of sheet_revision, both ways, by name. */
 final class RevisionColumns {
     static final String NAMES = "state, preparer_id, preparer_initials, prepared_on, inputs_sha256, approver_id, "
             + "approver_initials, approved_on, issuer_id, issued_on, pdf_sha256, description";
-    static final String MARKS = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?";
-    static final String ASSIGN = "state = ?, preparer_id = ?, preparer_initials = ?, prepared_on = ?, inputs_sha256 = ?, "
-            + "approver_id = ?, approver_initials = ?, approved_on = ?, issuer_id = ?, issued_on = ?, pdf_sha256 = ?, description = ?";
+    static final String VALUES = ":state, :preparerId, :preparerInitials, :preparedOn, :inputsSha256, :approverId, "
+            + ":approverInitials, :approvedOn, :issuerId, :issuedOn, :pdfSha256, :description";
+    static final String ASSIGN = "state = :state, preparer_id = :preparerId, preparer_initials = :preparerInitials, "
+            + "prepared_on = :preparedOn, inputs_sha256 = :inputsSha256, approver_id = :approverId, "
+            + "approver_initials = :approverInitials, approved_on = :approvedOn, issuer_id = :issuerId, "
+            + "issued_on = :issuedOn, pdf_sha256 = :pdfSha256, description = :description";
 
     private RevisionColumns() {}
 
-    /** Binds the twelve columns from {@code i}; returns the next index. */
-    static int bind(PreparedStatement ps, int i, SheetRevision r) throws SQLException {
+    /** Binds the twelve columns of {@link #VALUES} and {@link #ASSIGN}; an absent part of the revision binds typed NULLs. */
+    static <S extends SqlStatement<S>> S bind(S st, SheetRevision r) {
         Preparer p = r.preparer();
         Approval a = r.approval();
         Issue s = r.issue();
-        ps.setString(i++, r.state().name());
-        i = id(ps, i, p == null ? null : p.userId());
-        ps.setString(i++, p == null ? null : p.initials());
-        i = date(ps, i, p == null ? null : p.on());
-        ps.setString(i++, r.fingerprint());
-        i = id(ps, i, a == null ? null : a.checkerId());
-        ps.setString(i++, a == null ? null : a.initials());
-        i = date(ps, i, a == null ? null : a.on());
-        i = id(ps, i, s == null ? null : s.issuerId());
-        i = date(ps, i, s == null ? null : s.on());
-        ps.setString(i++, s == null ? null : s.pdfSha256());
-        ps.setString(i++, s == null ? null : s.description());
-        return i;
+        return st.bind("state", r.state().name())
+                .bind("preparerId", p == null ? null : p.userId())
+                .bind("preparerInitials", p == null ? null : p.initials())
+                .bindByType("preparedOn", p == null ? null : p.on(), LocalDate.class)
+                .bind("inputsSha256", r.fingerprint())
+                .bind("approverId", a == null ? null : a.checkerId())
+                .bind("approverInitials", a == null ? null : a.initials())
+                .bindByType("approvedOn", a == null ? null : a.on(), LocalDate.class)
+                .bind("issuerId", s == null ? null : s.issuerId())
+                .bindByType("issuedOn", s == null ? null : s.on(), LocalDate.class)
+                .bind("pdfSha256", s == null ? null : s.pdfSha256())
+                .bind("description", s == null ? null : s.description());
     }
 
     static StoredRevision read(ResultSet rs) throws SQLException {
@@ -55,18 +57,6 @@ final class RevisionColumns {
                 rs.getString("inputs_sha256"), a, s);
         return new StoredRevision(rs.getLong("id"), new SheetRef(rs.getLong("project_id"), rs.getString("subject")),
                 rs.getLong("version"), r, rs.getString("record_json"));
-    }
-
-    private static int id(PreparedStatement ps, int i, Long v) throws SQLException {
-        if (v == null) ps.setNull(i, Types.BIGINT);
-        else ps.setLong(i, v);
-        return i + 1;
-    }
-
-    private static int date(PreparedStatement ps, int i, LocalDate d) throws SQLException {
-        if (d == null) ps.setNull(i, Types.DATE);
-        else ps.setDate(i, Date.valueOf(d));
-        return i + 1;
     }
 
     private static LocalDate day(ResultSet rs, String col) throws SQLException {

@@ -32,23 +32,14 @@ import java.util.HashMap;
 import java.util.Map;
 import java.util.function.Consumer;
 
-/** The administrator's pages, all under /admin, each declared for the administrator alone. */
-public final class AdminRoutes {
+/**
+ * The administrator's pages, all under /admin, each declared for the administrator alone.
+ *
+ * @param signingKey the key that signs issued PDFs, whose certificate's fingerprint the firm page shows
+ * @param firmChanged run after the firm's settings are saved (names, in every project's audit entry, the issued sheets they changed)
+ */
+public record AdminRoutes(Accounts accounts, ReviewStore review, OfficeKey signingKey, Consumer<Editor> firmChanged) {
     private static final int AUDIT_PAGE = 100;
-
-    private final Accounts accounts;
-    private final ReviewStore review;
-    private final Consumer<Editor> firmChanged;
-    private final OfficeKey signingKey;
-
-    /** @param firmChanged run after the firm's settings are saved (names, in every project's audit entry, the issued sheets they changed) */
-    /** @param signingKey the key that signs issued PDFs, whose certificate's fingerprint the firm page shows */
-    public AdminRoutes(Accounts accounts, ReviewStore review, OfficeKey signingKey, Consumer<Editor> firmChanged) {
-        this.signingKey = signingKey;
-        this.firmChanged = firmChanged;
-        this.accounts = accounts;
-        this.review = review;
-    }
 
     public void install(RoutesConfig r) {
         r.get("/admin/users", ctx -> users(ctx, Form.filled(Map.of("role", "engineer"))), Admit.ADMINISTRATOR);

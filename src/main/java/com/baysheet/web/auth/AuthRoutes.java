@@ -21,19 +21,9 @@ import java.util.Optional;
  * Logging in and out, the one-time set-up of the first administrator (which asks for the code the server
  * printed in its console), a password change, and a password chosen with a one-time reset code.
  */
-public final class AuthRoutes {
+public record AuthRoutes(Logins logins, SetupCode setupCode, ResetCodes resets) {
     /** Where a person uses a one-time reset code; open without a login. */
     public static final String RESET_PAGE = "/account/reset";
-
-    private final Logins logins;
-    private final SetupCode setupCode;
-    private final ResetCodes resets;
-
-    public AuthRoutes(Logins logins, SetupCode setupCode, ResetCodes resets) {
-        this.logins = logins;
-        this.setupCode = setupCode;
-        this.resets = resets;
-    }
 
     public void install(RoutesConfig r) {
         r.get("/login", this::loginForm, Admit.ANYONE);

@@ -27,18 +27,8 @@ import java.util.Map;
  * office works on ({@link Backups}), written to a temporary file readable by the server alone, streamed, deleted,
  * and recorded in the audit trail. A database server (PostgreSQL) is backed up with its own tools: the page says so.
  */
-public final class BackupRoutes {
+public record BackupRoutes(DataSource ds, AuditTrail audit, Clock clock) {
     private static final DateTimeFormatter NAME = DateTimeFormatter.ofPattern("uuuuMMdd-HHmm");
-
-    private final DataSource ds;
-    private final AuditTrail audit;
-    private final Clock clock;
-
-    public BackupRoutes(DataSource ds, AuditTrail audit, Clock clock) {
-        this.ds = ds;
-        this.audit = audit;
-        this.clock = clock;
-    }
 
     public void install(RoutesConfig r) {
         r.get("/admin/backup", this::page, Admit.ADMINISTRATOR);

@@ -18,14 +18,8 @@ import java.util.Optional;
  * One's own API tokens (any signed-in member of the office: each token acts with its owner's role), and the
  * administrator revoking anyone's from the users page. The token's id is a form field, not a path parameter.
  */
-public final class TokenRoutes {
+public record TokenRoutes(ApiTokens tokens) {
     public static final String PAGE = "/account/tokens";
-
-    private final ApiTokens tokens;
-
-    public TokenRoutes(ApiTokens tokens) {
-        this.tokens = tokens;
-    }
 
     public void install(RoutesConfig r) {
         r.get(PAGE, ctx -> page(ctx, Form.filled(Map.of()), null), Admit.OFFICE);

@@ -27,23 +27,14 @@ import java.util.Map;
 import static com.baysheet.web.review.ReviewRoutes.MARK;
 import static com.baysheet.web.review.ReviewRoutes.SHEETS;
 
-/** PDFs (the frozen issued copy, a checking copy), revision comparison, and verifying an uploaded PDF. */
-public final class IssuedRoutes {
+/**
+ * PDFs (the frozen issued copy, a checking copy), revision comparison, and verifying an uploaded PDF.
+ *
+ * @param recorder where each download of an issued copy is recorded (null: nowhere)
+ */
+public record IssuedRoutes(Store store, ReviewStore review, Issuing issuing, AuditRecorder recorder) {
     /** A member sheet is tens of kilobytes; a package a few megabytes. Anything bigger is not one of ours. */
     private static final long MAX_UPLOAD = 50L * 1024 * 1024;
-
-    private final Store store;
-    private final ReviewStore review;
-    private final Issuing issuing;
-    private final AuditRecorder recorder;
-
-    /** @param recorder where each download of an issued copy is recorded (null: nowhere) */
-    public IssuedRoutes(Store store, ReviewStore review, Issuing issuing, AuditRecorder recorder) {
-        this.store = store;
-        this.review = review;
-        this.issuing = issuing;
-        this.recorder = recorder;
-    }
 
     public void install(RoutesConfig r) {
         r.get("/review/revisions/{revision}/issued.pdf", this::issuedPdf, Admit.OFFICE);

@@ -11,13 +11,7 @@ import static com.baysheet.web.review.ReviewRoutes.MARK;
 import static com.baysheet.web.review.ReviewRoutes.caller;
 
 /** Renaming a typical member's mark (the firm's own scheme, "B1" to "B1A"): unique within the project. */
-public final class MarkRoutes {
-    private final Store store;
-
-    public MarkRoutes(Store store) {
-        this.store = store;
-    }
-
+public record MarkRoutes(Store store) {
     public void install(RoutesConfig r) {
         r.post(MARK + "/rename", this::rename, Admit.PREPARER);
     }

@@ -17,15 +17,7 @@ import static com.baysheet.web.review.ReviewRoutes.version;
  * Markups on a sheet or a package: add one on an input, a step or the whole sheet (on a package: one of its
  * sheets, or the package as a whole); reply; resolve or reopen.
  */
-public final class MarkupRoutes {
-    private final Store store;
-    private final ReviewMarkups markups;
-
-    public MarkupRoutes(Store store, ReviewMarkups markups) {
-        this.store = store;
-        this.markups = markups;
-    }
-
+public record MarkupRoutes(Store store, ReviewMarkups markups) {
     public void install(RoutesConfig r) {
         for (String base : SHEETS) {
             r.post(base + "/markups", this::add, Admit.PREPARER);

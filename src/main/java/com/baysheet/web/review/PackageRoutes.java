@@ -20,16 +20,8 @@ import java.util.Map;
  * Calculation packages of a level or of the whole project, as checking copies: queue one (post), follow
  * its progress, cancel it, download it. Issued sheets come from the sheet check, one member at a time.
  */
-public final class PackageRoutes {
+public record PackageRoutes(Store store, PackageJobs packages) {
     private static final String BASE = "/projects/{project}/packages";
-
-    private final Store store;
-    private final PackageJobs packages;
-
-    public PackageRoutes(Store store, PackageJobs packages) {
-        this.store = store;
-        this.packages = packages;
-    }
 
     public void install(RoutesConfig r) {
         r.get(BASE, this::list, Admit.OFFICE);

@@ -25,25 +25,13 @@ import java.util.Map;
  * The check in the browser: the list of a project's sheets (one per mark) and packages, a mark's sheet page, and
  * the lifecycle actions (post, then redirect) that mark sheets and packages share.
  */
-public final class ReviewRoutes {
+public record ReviewRoutes(Store store, ReviewStore review, Issuing issuing, ReviewNotices notices) {
     /** A member's sheet before marks came in: now the way to its mark's sheet. */
     static final String SHEET = "/review/projects/{project}/members/{member}";
     static final String MARK = "/review/projects/{project}/marks/{mark}";
     static final String PACKAGE = "/review/projects/{project}/packages/{package}";
     /** Where the shared actions and markups are installed: a typical member's sheet under its mark, and a package. */
     static final List<String> SHEETS = List.of(MARK, PACKAGE);
-
-    private final Store store;
-    private final ReviewStore review;
-    private final Issuing issuing;
-    private final ReviewNotices notices;
-
-    public ReviewRoutes(Store store, ReviewStore review, Issuing issuing, ReviewNotices notices) {
-        this.store = store;
-        this.review = review;
-        this.issuing = issuing;
-        this.notices = notices;
-    }
 
     public void install(RoutesConfig r) {
         r.get("/review/projects/{project}", this::list, Admit.OFFICE);

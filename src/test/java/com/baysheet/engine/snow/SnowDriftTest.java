@@ -1,9 +1,14 @@
 package com.baysheet.engine.snow;
 
+import com.baysheet.engine.record.RecordJson;
 import com.baysheet.engine.snow.SnowFixtures.Run;
 import com.baysheet.engine.units.Convert;
 import com.baysheet.engine.units.Quantity;
+import com.fasterxml.jackson.databind.JsonNode;
 import org.junit.jupiter.api.Test;
+
+import java.util.ArrayList;
+import java.util.List;
 
 import static com.baysheet.engine.snow.SnowFixtures.*;
 import static org.assertj.core.api.Assertions.assertThat;
@@ -117,14 +122,22 @@ class SnowDriftTest {
     }
 
     @Test
-    void recordCarriesEveryStepWithItsClauseAndWritesAsJson() {
+    void recordCarriesEveryStepWithItsClauseAndWritesAsJson() throws Exception {
         Run r = drift(10, 100, 50);
         for (String sym : new String[]{"Ce", "Ct", "Is", "pf", "θ", "Cs", "ps", "pm", "Sb", "γ", "hb", "hc", "hc/hb", "hd,lee", "hd,wind", "hd", "w", "pd"})
             assertThat(r.record().step(sym).clause().isNone()).as(sym).isFalse();
         assertThat(r.record().step("γ").unit()).isEqualTo("pcf");
         assertThat(r.record().step("θ").unit()).isEqualTo("°");
         assertThat(r.record().step("hd").clause().ref()).isEqualTo("7.7.1, Fig. 7.7-1");
-        String json = com.baysheet.engine.record.RecordJson.write(r.record());
-        assertThat(json).contains("\"snow.drift.pd\"").doesNotContain("Infinity");
+        String json = RecordJson.write(r.record());
+        assertThat(json).doesNotContain("Infinity");
+        // the drift surcharge is among the results as written, as a number and with the record's value
+        List<JsonNode> pd = new ArrayList<>();
+        for (JsonNode result : RecordJson.mapper().readTree(json).path("results"))
+            if (result.path("key").asText().equals("snow.drift.pd")) pd.add(result);
+        assertThat(pd).singleElement().satisfies(n -> {
+            assertThat(n.path("value").isNumber()).as("p_d written as a number").isTrue();
+            assertThat(n.path("value").asDouble()).isEqualTo(r.record().result("snow.drift.pd"));
+        });
     }
 }

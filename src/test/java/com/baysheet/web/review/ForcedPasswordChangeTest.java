@@ -1,5 +1,6 @@
 package com.baysheet.web.review;
 
+import com.baysheet.web.JsonBody;
 import com.baysheet.auth.NewUser;
 import com.baysheet.auth.Role;
 import com.baysheet.web.Html;
@@ -43,7 +44,7 @@ class ForcedPasswordChangeTest {
             assertThat(eve.get(page).headers().firstValue("Location")).as(page).hasValue("/account/password");
         HttpResponse<String> api = eve.get("/api/projects");
         assertThat(api.statusCode()).isEqualTo(403);
-        assertThat(api.body()).contains("choose your own password before going on");
+        assertThat(JsonBody.of(api).path("error").asText()).contains("choose your own password before going on");
         assertThat(eve.get("/static/app.css").statusCode()).as("static files").isNotEqualTo(303);
         String form = eve.get("/account/password").body();
         assertThat(Html.text(form, "#must-change")).contains("choose your own password before going on");

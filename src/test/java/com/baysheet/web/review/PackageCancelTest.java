@@ -6,6 +6,8 @@ import com.baysheet.store.PackageJobStore;
 import com.baysheet.store.Sql;
 import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin.Client;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.BooleanNode;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
@@ -73,7 +75,9 @@ class PackageCancelTest {
         String after = eng.get(page).body();
         assertThat(Html.text(after, "#package-cancelled")).startsWith("Cancelled");
         assertThat(Html.all(after, "form#package-cancel")).as("no cancel button on a finished job").isEmpty();
-        assertThat(eng.get(page + "?format=json").body()).contains("\"finished\":true").contains("\"cancelled\":true");
+        JsonNode state = Pages.jobState(eng, page);
+        assertThat(state.path("finished")).isEqualTo(BooleanNode.TRUE);
+        assertThat(state.path("cancelled")).isEqualTo(BooleanNode.TRUE);
         assertThat(jobs().find(server.project(), id).orElseThrow().state()).isEqualTo(PackageJob.State.CANCELLED);
         assertThat(jobs().heartbeat(id, ELSEWHERE, Duration.ofSeconds(60), 3, 9)).as("the other server is told to stop").isFalse();
         assertThat(eng.get(page + "/file").statusCode()).as("nothing to download").isEqualTo(404);

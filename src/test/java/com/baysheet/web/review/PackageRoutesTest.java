@@ -2,11 +2,12 @@ package com.baysheet.web.review;
 
 import com.baysheet.auth.Role;
 import com.baysheet.auth.Tokens;
+import com.baysheet.sheet.PdfText;
 import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin.Client;
-import org.apache.pdfbox.Loader;
-import org.apache.pdfbox.pdmodel.PDDocument;
-import org.apache.pdfbox.text.PDFTextStripper;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.BooleanNode;
+import com.fasterxml.jackson.databind.node.TextNode;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
 
@@ -33,22 +34,27 @@ class PackageRoutesTest {
         String job = started.headers().firstValue("Location").orElseThrow();
         assertThat(job).startsWith(base + "/");
 
-        String state = "";
-        for (int i = 0; i < 600 && !state.contains("\"finished\":true"); i++) { // bounded wait for the worker
-            state = eng.get(job + "?format=json").body();
-            if (!state.contains("\"finished\":true")) Thread.sleep(100);
-        }
-        assertThat(state).contains("\"finished\":true").contains("\"error\":\"\"");
+        JsonNode state = Pages.finished(eng, job);
+        assertThat(state.path("error")).as("the job's error").isEqualTo(TextNode.valueOf(""));
+        assertThat(state.path("cancelled")).isEqualTo(BooleanNode.FALSE);
         assertThat(Html.shown(eng.get(job).body())).contains("download the checking copy");
 
         HttpResponse<byte[]> pdf = eng.getBytes(job + "/file");
         assertThat(pdf.statusCode()).isEqualTo(200);
         assertThat(pdf.headers().firstValue("Content-Type").orElse("")).startsWith("application/pdf");
         assertThat(pdf.headers().firstValue("X-Content-SHA256")).hasValue(Tokens.sha256(pdf.body()));
-        try (PDDocument doc = Loader.loadPDF(pdf.body())) {
-            String text = new PDFTextStripper().getText(doc);
-            assertThat(text).contains("CHECK PRINT — NOT FOR CONSTRUCTION", server.member().name(), "Index of sheets");
-            assertThat(text).contains("of " + doc.getNumberOfPages());
+        List<List<String>> pages = PdfText.pages(pdf.body());
+        List<String> lines = pages.stream().flatMap(List::stream).toList();
+        assertThat(lines).anySatisfy(l -> assertThat(l).startsWith("Index of sheets"));
+        assertThat(lines).anySatisfy(l -> assertThat(l).contains(server.member().name()));
+        // every page is marked a check print on its printed line, and its title block and footer count it among all
+        for (int i = 0; i < pages.size(); i++) {
+            List<String> page = pages.get(i);
+            String of = (i + 1) + " of " + pages.size();
+            assertThat(page).as("page %d", i + 1)
+                    .anySatisfy(l -> assertThat(l).startsWith("Printed ").endsWith(" CHECK PRINT — NOT FOR CONSTRUCTION"))
+                    .anySatisfy(l -> assertThat(l).endsWith(" Page " + of));
+            assertThat(PdfText.after(page, "Sheet")).as("page %d", i + 1).isEqualTo(of);
         }
     }
 

@@ -5,6 +5,8 @@ import com.baysheet.framing.DerivedMember;
 import com.baysheet.review.PackageScope;
 import com.baysheet.web.Html;
 import com.baysheet.web.TestLogin.Client;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.TextNode;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
@@ -92,12 +94,8 @@ class PackageTitleBlocksTest {
     private static String job(Client c, String level) throws InterruptedException {
         String base = "/projects/" + server.project() + "/packages";
         String job = c.post(base, List.of(Map.entry("scope", level))).headers().firstValue("Location").orElseThrow();
-        String state = "";
-        for (int i = 0; i < 600 && !state.contains("\"finished\":true"); i++) {
-            state = c.get(job + "?format=json").body();
-            if (!state.contains("\"finished\":true")) Thread.sleep(100);
-        }
-        assertThat(state).contains("\"finished\":true", "\"error\":\"\"");
+        JsonNode state = Pages.finished(c, job);
+        assertThat(state.path("error")).as("the job's error").isEqualTo(TextNode.valueOf(""));
         return job;
     }
 

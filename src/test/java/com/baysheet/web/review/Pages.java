@@ -1,7 +1,9 @@
 package com.baysheet.web.review;
 
 import com.baysheet.web.Html;
+import com.baysheet.web.JsonBody;
 import com.baysheet.web.TestLogin.Client;
+import com.fasterxml.jackson.databind.JsonNode;
 import org.jsoup.nodes.Element;
 
 import java.util.List;
@@ -12,7 +14,7 @@ import java.util.regex.Pattern;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-/** Reading what a test needs from the rendered HTML, parsed as HTML (see {@link Html}). */
+/** Reading what a test needs from the rendered HTML, parsed as HTML (see {@link Html}), and a job's state as JSON. */
 final class Pages {
     private Pages() {}
 
@@ -51,5 +53,21 @@ final class Pages {
         html = chk.get(sheet).body();
         assertThat(chk.post(sheet + "/issue", List.of(Map.entry("version", version(html, "/issue")),
                 Map.entry("description", description))).statusCode()).isEqualTo(303);
+    }
+
+    /** A package job's state as its JSON says it ({@code done}, {@code total}, {@code finished}, {@code cancelled}, {@code error}). */
+    static JsonNode jobState(Client c, String job) {
+        return JsonBody.of(c.get(job + "?format=json"));
+    }
+
+    /** Waits, bounded (a minute), for the package job at {@code job} to finish and gives its last state; fails if it never does. */
+    static JsonNode finished(Client c, String job) throws InterruptedException {
+        JsonNode state = jobState(c, job);
+        for (int i = 0; i < 600 && !state.path("finished").asBoolean(); i++) {
+            Thread.sleep(100);
+            state = jobState(c, job);
+        }
+        assertThat(state.path("finished").asBoolean()).as("the job finished within a minute: %s", state).isTrue();
+        return state;
     }
 }
