@@ -33,8 +33,9 @@ wrk -t "$threads" -c "$conns" -d 5s -H "Cookie: $cookie" "$base$page" >/dev/null
 wrk -t "$threads" -c "$conns" -d 5s "$base/static/baysheet.css" >/dev/null
 css=$(wrk -t "$threads" -c "$conns" -d "${secs}s" --latency "$base/static/baysheet.css")
 member=$(wrk -t "$threads" -c "$conns" -d "${secs}s" --latency -H "Cookie: $cookie" "$base$page")
-echo "== stylesheet"; echo "$css" | grep -E "Requests/sec|Non-2xx|50%|90%|99%"
-echo "== member page"; echo "$member" | grep -E "Requests/sec|Non-2xx|50%|90%|99%"
+echo "== stylesheet"; echo "$css" | grep -E "Requests/sec|Non-2xx|50%|90%|99%|Transfer/sec|requests in"
+echo "== member page"; echo "$member" | grep -E "Requests/sec|Non-2xx|50%|90%|99%|Transfer/sec|requests in"
+curl -s -o /dev/null -w "member page as fetched once: HTTP %{http_code}, %{size_download} bytes\n" -H "Cookie: $cookie" "$base$page"
 a=$(echo "$css" | awk '/Requests\/sec/ {print $2}'); b=$(echo "$member" | awk '/Requests\/sec/ {print $2}')
 echo "ratio member page / stylesheet: $(awk -v a="$a" -v b="$b" 'BEGIN {printf "%.2f", b / a}')"
 echo "load average after: $(cut -d' ' -f1-3 /proc/loadavg)"
