@@ -57,10 +57,11 @@ public final class Derivation {
         List<LevelFraming> framings = new ArrayList<>();
         List<DerivedMember> members = new ArrayList<>();
         Map<LevelInputs, LevelFraming> framed = new LinkedHashMap<>();
+        GridNames names = new GridNames(b.grid());
         for (int k : order) {
             Level l = b.levels().get(k);
             boolean below = l.elevation() < b.levels().get(order.get(0)).elevation();
-            LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid(), below);
+            LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid(), below, names);
             List<GridLineLoad> lines = b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList();
             List<GridPointLoad> points = b.pointLoads().stream().filter(x -> x.level().equals(l.name())).toList();
             LevelInputs in = earlier == null ? null : LevelInputs.of(b, plan, lines, points);

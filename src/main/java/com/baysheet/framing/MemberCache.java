@@ -16,7 +16,8 @@ import java.util.Map;
  * and the input, so an earlier result of an equal input is the result.
  */
 final class MemberCache {
-    private static final String ANY = "member";
+    /** The subject every cached input is calculated under; callers that build an input under it save a copy of it. */
+    static final String NEUTRAL = "member";
     private final CalcContext ctx;
     private final Map<MemberInput, MemberResult> earlier;
     private final Map<MemberInput, MemberResult> done = new HashMap<>();
@@ -31,12 +32,20 @@ final class MemberCache {
 
     CalcContext context() { return ctx; }
 
-    MemberResult calculate(MemberInput in) {
-        MemberResult r = done.computeIfAbsent(in.withSubject(ANY), k -> {
+    MemberResult calculate(MemberInput in) { return calculate(in.subject(), in.withSubject(NEUTRAL)); }
+
+    /**
+     * The result of {@code neutral}, an input built under the subject {@link #NEUTRAL}, named {@code subject}: the same
+     * as {@link #calculate(MemberInput)} of that input under {@code subject}, with one input built instead of two.
+     */
+    MemberResult calculate(String subject, MemberInput neutral) { return neutral(neutral).withSubject(subject); }
+
+    /** The result of {@code neutral}, an input built under the subject {@link #NEUTRAL}, under that subject. */
+    MemberResult neutral(MemberInput neutral) {
+        return done.computeIfAbsent(neutral, k -> {
             MemberResult e = earlier.get(k);
             return e != null ? e : MemberCalculation.calculate(ctx, k);
         });
-        return r.withSubject(in.subject());
     }
 
     int distinct() { return done.size(); }

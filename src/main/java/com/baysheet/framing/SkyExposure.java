@@ -48,8 +48,14 @@ final class SkyExposure {
 
         /** The phrase, where any of a member's tributary {@code carried} bays is open; else nothing. */
         List<String> among(List<String> carried) {
+            if (bays.isEmpty()) return List.of();
             for (String b : carried) if (bays.contains(b)) return List.of(phrase);
             return List.of();
+        }
+
+        /** The phrase, where the one bay {@code carried} is open; else nothing. */
+        List<String> among(String carried) {
+            return !bays.isEmpty() && bays.contains(carried) ? List.of(phrase) : List.of();
         }
     }
 
@@ -65,7 +71,7 @@ final class SkyExposure {
         for (int r = 0; r < open[0].length; r++)
             for (int c = 0; c < open.length; c++) {
                 if (plan.floored(c, r) != null) floored++;
-                if (open[c][r]) names.add(plan.grid.bayName(c, r));
+                if (open[c][r]) names.add(plan.bayName(c, r));
             }
         if (names.isEmpty()) return Open.NONE;
         String phrase = names.size() == floored ? "every bay of " + plan.level.name()
