@@ -28,6 +28,8 @@ import java.util.Map;
  */
 final class LevelFraming {
     final List<DerivedMember> members = new ArrayList<>();
+    /** Each member's result under the cache's neutral subject, in the order of {@link #members}. */
+    final List<MemberResult> neutrals = new ArrayList<>();
     /** End shares arriving at each grid point, indexed [x line][y line]. */
     final List<EndShare>[][] atPoint;
     private final MemberCache cache;
@@ -60,6 +62,19 @@ final class LevelFraming {
         alongY = new Segment[nx + 1][ny];
         for (int i = 0; i < nx; i++) for (int j = 0; j <= ny; j++) alongX[i][j] = new Segment(true, i, j, plan.x(i + 1) - plan.x(i));
         for (int i = 0; i <= nx; i++) for (int j = 0; j < ny; j++) alongY[i][j] = new Segment(false, i, j, plan.y(j + 1) - plan.y(j));
+    }
+
+    /** A level framed as another of the same shape was ({@link TypicalFloor}): its end shares, members to be added. */
+    LevelFraming(LevelPlan plan, List<EndShare>[][] atPoint) {
+        this.atPoint = atPoint;
+        this.plan = plan;
+        this.cache = null;
+        this.alongX = this.alongY = null;
+        this.weights = SelfWeights.NONE;
+        this.lineLoads = List.of();
+        this.pointLoads = List.of();
+        this.steps = RoofSteps.NONE;
+        this.open = SkyExposure.Open.NONE;
     }
 
     LevelFraming derive() {
@@ -146,7 +161,8 @@ final class LevelFraming {
         MemberInput in = new MemberInput(MemberCache.NEUTRAL, kind, new Support.Simple(s.length), 1, s.strips, List.of(), carried,
                 weights.of(id, girder ? weights.girder() : weights.gridBeam()), roofSlope(), Double.NaN, plan.level.roof(), List.of(),
                 weights.originOf(id, girder ? "girders" : "grid beams"), 0, s.lineLoads, snow(pl, s.stripRects), openAmong(s.bays));
-        MemberResult res = cache.calculate(title + ", " + plan.level.name(), in);
+        MemberResult neutral = cache.neutral(in), res = neutral.withSubject(title + ", " + plan.level.name());
+        neutrals.add(neutral);
         Map<String, Double> areas = new java.util.LinkedHashMap<>();
         for (AreaStrip st : s.strips) areas.merge(st.occupancy(), st.area(), Double::sum);
         for (var p : s.points) for (var a : p.areas()) areas.merge(a.occupancy(), a.area(), Double::sum);
@@ -163,7 +179,9 @@ final class LevelFraming {
         MemberInput in = new MemberInput(MemberCache.NEUTRAL, kind, new Support.Simple(span), 1, strips, List.of(), applied,
                 weights.of(id, weights.infillBeam()), roofSlope(), Double.NaN, plan.level.roof(), List.of(),
                 weights.originOf(id, "infill beams"), 0, List.of(), snow(line, List.of(trib)), open.among(bay));
-        return cache.calculate(title + ", " + plan.level.name(), in);
+        MemberResult neutral = cache.neutral(in);
+        neutrals.add(neutral);
+        return neutral.withSubject(title + ", " + plan.level.name());
     }
 
     /** This floor level's open bays as the records name them, where any of a member's tributary bays is one. */
