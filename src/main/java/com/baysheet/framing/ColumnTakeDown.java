@@ -35,6 +35,7 @@ final class ColumnTakeDown {
     private final SelfWeights weights;
     /** Every storey taken down so far, by the storey above it and what it reads at its level (see {@link ColumnStorey}). */
     private final Map<ColumnStorey.Key, ColumnStorey> storeys = new HashMap<>();
+    private String columnOrigin;
 
     ColumnTakeDown(CalcContext ctx, MemberCache cache, List<LevelPlan> plans, List<LevelFraming> framings, SelfWeights weights) {
         this.ctx = ctx;
@@ -77,7 +78,7 @@ final class ColumnTakeDown {
             List<String> openHere = shares != null ? framings.get(k).openAmong(around) : List.of();
             open.addAll(openHere);
             String name = "Column " + point + " below " + p.level.name(), subject = name + " (" + cls.label() + ")";
-            String id = p.id + "-c" + p.at(i, j), origin = weights.originOf(id, "columns");
+            String id = p.id + "-c" + p.at(i, j), origin = origin(id);
             double perLength = weights.of(id, weights.column()), height = storeyBelow(k), own = perLength * height;
             var key = new ColumnStorey.Key(above, shares, p.level.roofSlope(), p.level.name(), place, cantHere, openHere, perLength, origin, height);
             ColumnStorey storey = storeys.get(key);
@@ -111,6 +112,13 @@ final class ColumnTakeDown {
         List<String> openAll = List.copyOf(open);
         return new TakeDown("c" + plans.get(0).at(i, j), point, rows,
                 () -> TakeDownRecord.write(c, point, rows, records, openAll));
+    }
+
+    /** {@link SelfWeights#originOf} a column: the role's origin, written once, where none was entered for the column. */
+    private String origin(String id) {
+        if (weights.members().containsKey(id)) return weights.originOf(id, "columns");
+        if (columnOrigin == null) columnOrigin = weights.originOf(id, "columns");
+        return columnOrigin;
     }
 
     /**

@@ -1,5 +1,6 @@
 package com.baysheet.framing;
 
+import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Level;
 
 import java.util.ArrayList;
@@ -22,10 +23,11 @@ final class SkyExposure {
         for (double[] row : top) Arrays.fill(row, Double.NaN);
         for (Level l : all) {
             if (l.elevation() <= plan.level.elevation()) continue;
-            LevelPlan p = new LevelPlan("", l, plan.grid);
-            for (int c = 0; c < nx; c++)
-                for (int r = 0; r < ny; r++)
-                    if (p.floored(c, r) != null && !(top[c][r] >= l.elevation())) top[c][r] = l.elevation();
+            // the level's floored bays as they are listed (a validated level gives each cell once, inside the grid)
+            for (Bay b : l.bays()) {
+                int c = b.col(), r = b.row();
+                if (!b.opening() && c < nx && r < ny && !(top[c][r] >= l.elevation())) top[c][r] = l.elevation();
+            }
         }
         return top;
     }
