@@ -16,7 +16,10 @@ import java.util.Map;
  * and the input, so an earlier result of an equal input is the result.
  */
 final class MemberCache {
-    /** The subject every cached input is calculated under; callers that build an input under it save a copy of it. */
+    /**
+     * The subject every cached input is built and calculated under; the caller gives each member its own subject on
+     * the result ({@code MemberResult.withSubject}), so one input is built per member.
+     */
     static final String NEUTRAL = "member";
     private final CalcContext ctx;
     private final Map<MemberInput, MemberResult> earlier;
@@ -31,14 +34,6 @@ final class MemberCache {
     }
 
     CalcContext context() { return ctx; }
-
-    MemberResult calculate(MemberInput in) { return calculate(in.subject(), in.withSubject(NEUTRAL)); }
-
-    /**
-     * The result of {@code neutral}, an input built under the subject {@link #NEUTRAL}, named {@code subject}: the same
-     * as {@link #calculate(MemberInput)} of that input under {@code subject}, with one input built instead of two.
-     */
-    MemberResult calculate(String subject, MemberInput neutral) { return neutral(neutral).withSubject(subject); }
 
     /** The result of {@code neutral}, an input built under the subject {@link #NEUTRAL}, under that subject. */
     MemberResult neutral(MemberInput neutral) {
