@@ -13,6 +13,8 @@ import com.baysheet.engine.reduction.LiveFactors;
 import com.baysheet.framing.model.SelfWeights;
 
 import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.Map;
 import java.util.List;
 
 /**
@@ -22,12 +24,18 @@ import java.util.List;
  * column's place on that floor (its influence area is Σ K_LL,i A_T,i). Roof live load stays Lr.
  */
 final class ColumnTakeDown {
+    // the keys each row reads, built once
+    private static final ResultKey DEAD = ResultKey.axial("D"), LIVE_UNREDUCED = ResultKey.axial("L0"), LIVE = ResultKey.axial("L"),
+            ROOF_LIVE = ResultKey.axial("Lr"), SNOW = ResultKey.axial("S"), LRFD = ResultKey.axial("LRFD"), ASD = ResultKey.axial("ASD");
     private final CalcContext ctx;
     private final MemberCache cache;
     private final List<LevelPlan> plans;        // top down
     private final List<LevelFraming> framings;  // same order
 
     private final SelfWeights weights;
+    /** Every storey taken down so far, by the storey above it and what it reads at its level (see {@link ColumnStorey}). */
+    private final Map<ColumnStorey.Key, ColumnStorey> storeys = new HashMap<>();
+    private String columnOrigin;
 
     ColumnTakeDown(CalcContext ctx, MemberCache cache, List<LevelPlan> plans, List<LevelFraming> framings, SelfWeights weights) {
         this.ctx = ctx;
@@ -49,6 +57,7 @@ final class ColumnTakeDown {
         ColumnClass cls = null;
         boolean cant = false;
         List<String> open = new ArrayList<>();   // the floor levels' open bays carried so far, as the records name them
+        ColumnStorey above = null;
         for (int k = 0; k < plans.size(); k++) {
             LevelPlan p = plans.get(k);
             var shares = framings.get(k).atPoint[i][j];
@@ -59,23 +68,43 @@ final class ColumnTakeDown {
             if (floorHere > 0) floors++;
             floorArea += floorHere;
             if (areaHere - floorHere > 0) slope = Double.isNaN(slope) ? p.level.roofSlope() : Math.min(slope, p.level.roofSlope());
-            if (p.flooredAround(i, j) > 0) { cls = ColumnClass.at(p, i, j); cant = ColumnClass.cantileverTouches(p, i, j); }
+            ColumnClass place = null;
+            boolean cantHere = false;
+            if (p.flooredAround(i, j) > 0) { cls = place = ColumnClass.at(p, i, j); cant = cantHere = ColumnClass.cantileverTouches(p, i, j); }
             total.add(here);
             MemberKind kind = cls.kind(cant);
             if (floorHere > 0) supported.add(new SupportedFloor(p.level.name(), kind, floorShares(here)));
-            if (shares != null) open.addAll(framings.get(k).openAmong(bays(p, i, j)));
-            String name = "Column " + point + " below " + p.level.name();
-            String id = p.id + "-c" + p.at(i, j);
+            List<String> around = bays(p, i, j);
+            List<String> openHere = shares != null ? framings.get(k).openAmong(around) : List.of();
+            open.addAll(openHere);
+            String name = "Column " + point + " below " + p.level.name(), subject = name + " (" + cls.label() + ")";
+            String id = p.id + "-c" + p.at(i, j), origin = origin(id);
             double perLength = weights.of(id, weights.column()), height = storeyBelow(k), own = perLength * height;
-            MemberInput in = new MemberInput(name + " (" + cls.label() + ")", kind, new Support.Axial(), Math.max(1, floors), List.of(),
-                    List.of(), List.of(total.asPointLoad()), 0, slope, Double.NaN, false, supported)
-                    .withSelfWeight(perLength, weights.originOf(id, "columns"), height).withOpenToSky(List.copyOf(open));
-            MemberResult res = cache.calculate(in);
-            total.dead += own; // the column below this level weighs on every level beneath it
-            here.dead += own;
+            var key = new ColumnStorey.Key(above, shares, p.level.roofSlope(), p.level.name(), place, cantHere, openHere, perLength, origin, height);
+            ColumnStorey storey = storeys.get(key);
+            MemberResult res;
+            TakeDown.Row row;
+            if (storey == null) {
+                // one input, built under the cache's neutral subject (each copy of an input copies its list of floors)
+                MemberInput in = new MemberInput(MemberCache.NEUTRAL, kind, new Support.Axial(), Math.max(1, floors), List.of(),
+                        List.of(), List.of(total.asPointLoad()), perLength, slope, Double.NaN, false, supported, origin, height,
+                        List.of(), null, open);
+                MemberResult neutral = cache.neutral(in);
+                res = neutral.withSubject(subject);
+                total.dead += own; // the column below this level weighs on every level beneath it
+                here.dead += own;
+                row = row(p, id, res, areaHere, floorArea, kind, floors, here.dead, own);
+                storeys.put(key, storey = new ColumnStorey(neutral, row));
+            } else { // the same storey as one taken down before: the same input, so the same result and row
+                res = storey.neutral.withSubject(subject);
+                total.dead += own;
+                here.dead += own;
+                row = storey.rowOf(id);
+            }
+            above = storey;
             out.add(new DerivedMember(id, name, p.level.name(), MemberRole.COLUMN, kind,
-                    new PlanLine(p.x(i), p.y(j), p.x(i), p.y(j)), 0, 0, here.areas, 0, bays(p, i, j), outline(p, i, j), res));
-            rows.add(row(p, id, res, areaHere, floorArea, kind, floors, here.dead, own));
+                    new PlanLine(p.x(i), p.y(j), p.x(i), p.y(j)), 0, 0, here.areas, 0, around, outline(p, i, j), res));
+            rows.add(row);
             records.add(res);
         }
         if (rows.isEmpty()) return null;
@@ -83,6 +112,13 @@ final class ColumnTakeDown {
         List<String> openAll = List.copyOf(open);
         return new TakeDown("c" + plans.get(0).at(i, j), point, rows,
                 () -> TakeDownRecord.write(c, point, rows, records, openAll));
+    }
+
+    /** {@link SelfWeights#originOf} a column: the role's origin, written once, where none was entered for the column. */
+    private String origin(String id) {
+        if (weights.members().containsKey(id)) return weights.originOf(id, "columns");
+        if (columnOrigin == null) columnOrigin = weights.originOf(id, "columns");
+        return columnOrigin;
     }
 
     /**
@@ -101,14 +137,13 @@ final class ColumnTakeDown {
         double reducible = lf.map(LiveFactors::reducibleArea).orElse(0.0), influence = lf.map(LiveFactors::influenceArea).orElse(0.0);
         return new TakeDown.Row(p.level.name(), id, areaHere, cumArea, reducible, ctx.edition().kll(kind), influence, floors,
                 lf.map(LiveFactors::factor).orElse(1.0),
-                deadHere, selfWeight, r.value(ResultKey.axial("D")), r.value(ResultKey.axial("L0")), r.value(ResultKey.axial("L")),
-                r.value(ResultKey.axial("Lr")), snowOf(r), r.value(ResultKey.axial("LRFD")), combo(r, ResultKey.axial("LRFD")),
-                r.value(ResultKey.axial("ASD")), combo(r, ResultKey.axial("ASD")));
+                deadHere, selfWeight, r.value(DEAD), r.value(LIVE_UNREDUCED), r.value(LIVE),
+                r.value(ROOF_LIVE), snowOf(r), r.value(LRFD), combo(r, LRFD), r.value(ASD), combo(r, ASD));
     }
 
     /** The column's unfactored S (0 where it carries no snow). */
     private static double snowOf(MemberResult r) {
-        double s = r.value(ResultKey.axial("S"));
+        double s = r.value(SNOW);
         return Double.isNaN(s) ? 0 : s;
     }
 
@@ -135,7 +170,7 @@ final class ColumnTakeDown {
         List<String> out = new ArrayList<>();
         for (int di = -1; di <= 0; di++)
             for (int dj = -1; dj <= 0; dj++)
-                if (p.floored(i + di, j + dj) != null) out.add(p.grid.bayName(i + di, j + dj));
+                if (p.floored(i + di, j + dj) != null) out.add(p.bayName(i + di, j + dj));
         return out;
     }
 

@@ -57,18 +57,28 @@ public final class Derivation {
         List<LevelFraming> framings = new ArrayList<>();
         List<DerivedMember> members = new ArrayList<>();
         Map<LevelInputs, LevelFraming> framed = new LinkedHashMap<>();
+        GridNames names = new GridNames(b.grid());
+        Map<TypicalFloor.Shape, Integer> typical = new java.util.HashMap<>(); // the first plain level of each shape, by place
         for (int k : order) {
             Level l = b.levels().get(k);
             boolean below = l.elevation() < b.levels().get(order.get(0)).elevation();
-            LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid(), below);
+            LevelPlan plan = new LevelPlan(l.key() != null ? l.key() : "L" + k, l, b.grid(), below, names);
             List<GridLineLoad> lines = b.lineLoads().stream().filter(x -> x.level().equals(l.name())).toList();
             List<GridPointLoad> points = b.pointLoads().stream().filter(x -> x.level().equals(l.name())).toList();
             LevelInputs in = earlier == null ? null : LevelInputs.of(b, plan, lines, points);
             LevelFraming f = in == null ? null : earlier.get(in);
             if (f == null) {
-                // the level's point loads are checked against the catalogue in the framing, so a reused level was checked too
-                f = new LevelFraming(cache, plan, b.selfWeights(), lines, RoofSteps.of(b.context(), plan, b.levels()), points,
-                        SkyExposure.openFloorBays(plan, b.levels())).derive();
+                RoofSteps steps = RoofSteps.of(b.context(), plan, b.levels());
+                SkyExposure.Open open = SkyExposure.openFloorBays(plan, b.levels());
+                var shape = TypicalFloor.plain(plan, !lines.isEmpty() || !points.isEmpty(), steps, open, b.selfWeights())
+                        ? TypicalFloor.Shape.of(plan) : null;
+                Integer same = shape == null ? null : typical.get(shape);
+                if (same != null) f = TypicalFloor.as(framings.get(same), plans.get(same), plan);
+                else {
+                    // the level's point loads are checked against the catalogue in the framing, so a reused level was checked too
+                    f = new LevelFraming(cache, plan, b.selfWeights(), lines, steps, points, open).derive();
+                    if (shape != null) typical.put(shape, plans.size());
+                }
             }
             if (in != null) framed.put(in, f);
             plans.add(plan);

@@ -16,13 +16,16 @@ public final class Derived {
     private final Building building;
     private final List<DerivedMember> members;
     private final List<TakeDown> takeDowns;
-    private final Map<String, DerivedMember> memberById = new HashMap<>();
-    private final Map<String, TakeDown> takeDownById = new HashMap<>();
+    private final Map<String, DerivedMember> memberById;
+    private final Map<String, TakeDown> takeDownById;
 
     public Derived(Building building, List<DerivedMember> members, List<TakeDown> takeDowns) {
         this.building = building;
         this.members = List.copyOf(members);
         this.takeDowns = List.copyOf(takeDowns);
+        // sized once: a large building has a few hundred thousand members
+        memberById = new HashMap<>(this.members.size() * 4 / 3 + 1);
+        takeDownById = new HashMap<>(this.takeDowns.size() * 4 / 3 + 1);
         for (DerivedMember m : this.members) memberById.putIfAbsent(m.id(), m);
         for (TakeDown t : this.takeDowns) takeDownById.putIfAbsent(t.id(), t);
     }

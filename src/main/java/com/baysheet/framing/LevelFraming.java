@@ -28,6 +28,8 @@ import java.util.Map;
  */
 final class LevelFraming {
     final List<DerivedMember> members = new ArrayList<>();
+    /** Each member's result under the cache's neutral subject, in the order of {@link #members}. */
+    final List<MemberResult> neutrals = new ArrayList<>();
     /** End shares arriving at each grid point, indexed [x line][y line]. */
     final List<EndShare>[][] atPoint;
     private final MemberCache cache;
@@ -62,6 +64,19 @@ final class LevelFraming {
         for (int i = 0; i <= nx; i++) for (int j = 0; j < ny; j++) alongY[i][j] = new Segment(false, i, j, plan.y(j + 1) - plan.y(j));
     }
 
+    /** A level framed as another of the same shape was ({@link TypicalFloor}): its end shares, members to be added. */
+    LevelFraming(LevelPlan plan, List<EndShare>[][] atPoint) {
+        this.atPoint = atPoint;
+        this.plan = plan;
+        this.cache = null;
+        this.alongX = this.alongY = null;
+        this.weights = SelfWeights.NONE;
+        this.lineLoads = List.of();
+        this.pointLoads = List.of();
+        this.steps = RoofSteps.NONE;
+        this.open = SkyExposure.Open.NONE;
+    }
+
     LevelFraming derive() {
         for (GridPointLoad p : pointLoads) PointLoads.check(plan, p, cache.context().catalogue());
         for (int c = 0; c < plan.xCells(); c++)
@@ -79,7 +94,7 @@ final class LevelFraming {
     private void bay(Bay b) {
         int c = b.col(), r = b.row();
         double x0 = plan.x(c), x1 = plan.x(c + 1), y0 = plan.y(r), y1 = plan.y(r + 1);
-        String name = plan.grid.bayName(c, r);
+        String name = plan.bayName(c, r);
         boolean beamsAlongX = b.framing().beams() == Direction.X;
         int n = b.framing().infillBeams();
         double beamLength = beamsAlongX ? x1 - x0 : y1 - y0;
@@ -140,14 +155,14 @@ final class LevelFraming {
         String id = plan.id + (s.alongX ? "-h" : "-v") + plan.at(i, j);
         List<PointLoad> carried = new ArrayList<>(s.points);
         carried.addAll(s.applied);
-        MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(s.length), 1, s.strips,
-                List.of(), carried, 0, roofSlope(), Double.NaN, plan.level.roof())
-                .withSelfWeight(weights.of(id, girder ? weights.girder() : weights.gridBeam()),
-                        weights.originOf(id, girder ? "girders" : "grid beams"), 0)
-                .withLineLoads(s.lineLoads);
         PlanLine pl = s.alongX ? new PlanLine(plan.x(i), plan.y(j), plan.x(i + 1), plan.y(j))
                 : new PlanLine(plan.x(i), plan.y(j), plan.x(i), plan.y(j + 1));
-        MemberResult res = cache.calculate(in.withSnow(snow(pl, s.stripRects)).withOpenToSky(openAmong(s.bays)));
+        // one input, built under the cache's neutral subject (each copy of an input copies its lists)
+        MemberInput in = new MemberInput(MemberCache.NEUTRAL, kind, new Support.Simple(s.length), 1, s.strips, List.of(), carried,
+                weights.of(id, girder ? weights.girder() : weights.gridBeam()), roofSlope(), Double.NaN, plan.level.roof(), List.of(),
+                weights.originOf(id, girder ? "girders" : "grid beams"), 0, s.lineLoads, snow(pl, s.stripRects), openAmong(s.bays));
+        MemberResult neutral = cache.neutral(in), res = neutral.withSubject(title + ", " + plan.level.name());
+        neutrals.add(neutral);
         Map<String, Double> areas = new java.util.LinkedHashMap<>();
         for (AreaStrip st : s.strips) areas.merge(st.occupancy(), st.area(), Double::sum);
         for (var p : s.points) for (var a : p.areas()) areas.merge(a.occupancy(), a.area(), Double::sum);
@@ -161,10 +176,12 @@ final class LevelFraming {
 
     private MemberResult calc(String id, String title, MemberKind kind, double span, List<AreaStrip> strips, PlanLine line, PlanRect trib,
                               List<PointLoad> applied, String bay) {
-        MemberInput in = new MemberInput(title + ", " + plan.level.name(), kind, new Support.Simple(span), 1, strips, List.of(),
-                applied, 0, roofSlope(), Double.NaN, plan.level.roof())
-                .withSelfWeight(weights.of(id, weights.infillBeam()), weights.originOf(id, "infill beams"), 0);
-        return cache.calculate(in.withSnow(snow(line, List.of(trib))).withOpenToSky(openAmong(List.of(bay))));
+        MemberInput in = new MemberInput(MemberCache.NEUTRAL, kind, new Support.Simple(span), 1, strips, List.of(), applied,
+                weights.of(id, weights.infillBeam()), roofSlope(), Double.NaN, plan.level.roof(), List.of(),
+                weights.originOf(id, "infill beams"), 0, List.of(), snow(line, List.of(trib)), open.among(bay));
+        MemberResult neutral = cache.neutral(in);
+        neutrals.add(neutral);
+        return neutral.withSubject(title + ", " + plan.level.name());
     }
 
     /** This floor level's open bays as the records name them, where any of a member's tributary bays is one. */

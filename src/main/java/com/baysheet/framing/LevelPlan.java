@@ -11,13 +11,18 @@ final class LevelPlan {
     final Grid grid;
     final String id;
     private final Bay[][] cells;
+    private final GridNames names;
 
     /** Another level of the building is higher than this one (a roof here has a step up to it). */
     final boolean belowAnother;
 
     LevelPlan(String id, Level level, Grid grid) { this(id, level, grid, false); }
 
-    LevelPlan(String id, Level level, Grid grid, boolean belowAnother) {
+    LevelPlan(String id, Level level, Grid grid, boolean belowAnother) { this(id, level, grid, belowAnother, new GridNames(grid)); }
+
+    /** @param names the grid's names, shared by the levels of one derivation */
+    LevelPlan(String id, Level level, Grid grid, boolean belowAnother, GridNames names) {
+        this.names = names;
         this.belowAnother = belowAnother;
         this.id = id;
         this.level = level;
@@ -46,7 +51,10 @@ final class LevelPlan {
     }
 
     /** "3x7": the stable ids of x line i and y line j, as member ids name a grid point or a bay's corner. */
-    String at(int i, int j) { return grid.x().id(i) + "x" + grid.y().id(j); }
+    String at(int i, int j) { return names.at(i, j); }
+
+    /** The bay's name, {@link Grid#bayName}. */
+    String bayName(int col, int row) { return names.bay(col, row); }
 
     double x(int line) { return xs[line]; }
 

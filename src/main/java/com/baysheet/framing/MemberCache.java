@@ -16,7 +16,11 @@ import java.util.Map;
  * and the input, so an earlier result of an equal input is the result.
  */
 final class MemberCache {
-    private static final String ANY = "member";
+    /**
+     * The subject every cached input is built and calculated under; the caller gives each member its own subject on
+     * the result ({@code MemberResult.withSubject}), so one input is built per member.
+     */
+    static final String NEUTRAL = "member";
     private final CalcContext ctx;
     private final Map<MemberInput, MemberResult> earlier;
     private final Map<MemberInput, MemberResult> done = new HashMap<>();
@@ -31,12 +35,12 @@ final class MemberCache {
 
     CalcContext context() { return ctx; }
 
-    MemberResult calculate(MemberInput in) {
-        MemberResult r = done.computeIfAbsent(in.withSubject(ANY), k -> {
+    /** The result of {@code neutral}, an input built under the subject {@link #NEUTRAL}, under that subject. */
+    MemberResult neutral(MemberInput neutral) {
+        return done.computeIfAbsent(neutral, k -> {
             MemberResult e = earlier.get(k);
             return e != null ? e : MemberCalculation.calculate(ctx, k);
         });
-        return r.withSubject(in.subject());
     }
 
     int distinct() { return done.size(); }

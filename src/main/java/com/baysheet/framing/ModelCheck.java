@@ -23,15 +23,16 @@ public final class ModelCheck {
         if (b.levels().isEmpty()) throw new InputError("levels", 0, "a building needs at least one level");
         Set<String> names = new HashSet<>();
         Set<Double> elevations = new HashSet<>();
+        GridNames bayNames = new GridNames(b.grid()); // written once, not once a level
         for (Level l : b.levels()) {
             if (!names.add(l.name())) throw new InputError("levels", l.name(), "two levels have this name");
             if (!elevations.add(l.elevation()))
                 throw new InputError("levels[" + l.name() + "].elevation", l.elevation(), "another level has this elevation");
-            level(b, l);
+            level(b, l, bayNames);
         }
     }
 
-    private static void level(Building b, Level l) {
+    private static void level(Building b, Level l, GridNames bayNames) {
         Grid g = b.grid();
         String at = "levels[" + l.name() + "]";
         Set<Long> cells = new HashSet<>();
@@ -40,7 +41,7 @@ public final class ModelCheck {
             if (bay.col() >= g.x().cells() || bay.row() >= g.y().cells())
                 throw new InputError(at + ".bays[" + bay.col() + "," + bay.row() + "]", bay.col() + "," + bay.row(),
                         "bay lies outside the grid (" + g.x().cells() + " × " + g.y().cells() + " bays)");
-            String name = g.bayName(bay.col(), bay.row());
+            String name = bayNames.bay(bay.col(), bay.row());
             if (!cells.add((long) bay.col() << 32 | bay.row()))
                 throw new InputError(at + ".bays[" + name + "]", name, "bay given twice on this level");
             if (bay.opening()) continue;
@@ -49,7 +50,7 @@ public final class ModelCheck {
                 throw new InputError(at + ".bays[" + name + "].occupancy", bay.occupancy(), "is not in the occupancy catalogue");
             if (b.context().catalogue().get(bay.occupancy()).isRoof() && Double.isNaN(l.roofSlope()))
                 throw new InputError(at + ".roofSlope", "nothing", "is required: bay " + name + " carries a roof live load");
-            cantileverUse(b, l, bay, at + ".bays[" + name + "]");
+            if (!bay.cantilevers().isEmpty() || bay.cantileverOccupancy() != null) cantileverUse(b, l, bay, at + ".bays[" + name + "]");
         }
         if (!anyFloor) throw new InputError(at + ".bays", l.bays().size(), "level " + l.name() + " has no floor at all");
         LevelPlan plan = new LevelPlan("", l, g);

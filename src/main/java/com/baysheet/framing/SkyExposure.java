@@ -1,5 +1,6 @@
 package com.baysheet.framing;
 
+import com.baysheet.framing.model.Bay;
 import com.baysheet.framing.model.Level;
 
 import java.util.ArrayList;
@@ -22,10 +23,11 @@ final class SkyExposure {
         for (double[] row : top) Arrays.fill(row, Double.NaN);
         for (Level l : all) {
             if (l.elevation() <= plan.level.elevation()) continue;
-            LevelPlan p = new LevelPlan("", l, plan.grid);
-            for (int c = 0; c < nx; c++)
-                for (int r = 0; r < ny; r++)
-                    if (p.floored(c, r) != null && !(top[c][r] >= l.elevation())) top[c][r] = l.elevation();
+            // the level's floored bays as they are listed (a validated level gives each cell once, inside the grid)
+            for (Bay b : l.bays()) {
+                int c = b.col(), r = b.row();
+                if (!b.opening() && c < nx && r < ny && !(top[c][r] >= l.elevation())) top[c][r] = l.elevation();
+            }
         }
         return top;
     }
@@ -48,8 +50,14 @@ final class SkyExposure {
 
         /** The phrase, where any of a member's tributary {@code carried} bays is open; else nothing. */
         List<String> among(List<String> carried) {
+            if (bays.isEmpty()) return List.of();
             for (String b : carried) if (bays.contains(b)) return List.of(phrase);
             return List.of();
+        }
+
+        /** The phrase, where the one bay {@code carried} is open; else nothing. */
+        List<String> among(String carried) {
+            return !bays.isEmpty() && bays.contains(carried) ? List.of(phrase) : List.of();
         }
     }
 
@@ -65,7 +73,7 @@ final class SkyExposure {
         for (int r = 0; r < open[0].length; r++)
             for (int c = 0; c < open.length; c++) {
                 if (plan.floored(c, r) != null) floored++;
-                if (open[c][r]) names.add(plan.grid.bayName(c, r));
+                if (open[c][r]) names.add(plan.bayName(c, r));
             }
         if (names.isEmpty()) return Open.NONE;
         String phrase = names.size() == floored ? "every bay of " + plan.level.name()

@@ -67,6 +67,33 @@ class MemberWeightTest {
     }
 
     @Test
+    void aColumnsOwnWeightCountsInAStackLikeOneTakenDownBefore() {
+        // three equal bays in a row: the two interior stacks on each y line carry the same loads to the last digit, so
+        // the later one is taken down storey by storey as the earlier one was (ColumnStorey)
+        Grid row = Buildings.grid(new double[] {30, 30, 30}, new double[] {20});
+        List<Level> ls = new ArrayList<>();
+        for (int k = 1; k <= 3; k++)
+            ls.add(Level.floor("F" + k, 13.0 * k, Buildings.everyBay(row, (c, r) -> Bay.floor(c, r, "office", 50, new Framing(Direction.X, 2)))));
+        Building b = Buildings.building(row, ls).withSelfWeights(ROLES);
+        Derived before = Derivation.derive(b);
+        List<TakeDown> ts = before.takeDowns();
+        int twin = -1, of = -1;
+        for (int n = 1; n < ts.size() && twin < 0; n++)
+            for (int m = 0; m < n && twin < 0; m++)
+                if (dead(ts.get(n)).equals(dead(ts.get(m)))) { twin = n; of = m; }
+        assertThat(twin).as("a stack taken down like an earlier one").isPositive();
+        String f2 = ts.get(twin).rows().get(1).member();
+        Derived after = Derivation.derive(b.withSelfWeights(ROLES.withMembers(Map.of(f2, 150.0))));
+        TakeDown u = after.takeDowns().get(twin);
+        assertThat(u.rows()).extracting(TakeDown.Row::selfWeightAtLevel).containsExactly(650.0, 1_950.0, 650.0);
+        assertThat(u.rows().get(2).dead() - ts.get(twin).rows().get(2).dead()).isCloseTo(1_300.0, within(1e-6));
+        assertThat(after.takeDowns().get(of).rows()).isEqualTo(ts.get(of).rows());
+        assertThat(after.member(f2).orElseThrow().result().record().step("P_sw").description()).contains(SelfWeights.ENTERED);
+    }
+
+    private static List<Double> dead(TakeDown t) { return t.rows().stream().map(TakeDown.Row::dead).toList(); }
+
+    @Test
     void aColumnsOwnWeightIsPerLengthOverTheStoreyBelowItsLevel() {
         Building b = floor(3);
         Derived before = Derivation.derive(b);
