@@ -1,48 +1,116 @@
 package com.baysheet.engine.units;
 
+import java.nio.charset.StandardCharsets;
+
 /**
  * Three significant figures, the usual precision of a calculation sheet. Full precision stays in the
  * record's numbers; only the shown text is rounded. Whole numbers of four or more digits are rounded
  * to three significant figures too (12,345 lb shows as 12300).
+ *
+ * <p>A record shows a few hundred numbers, so the digits are written straight into one buffer rather than through
+ * string concatenation; the rounding arithmetic is the same double arithmetic as it always was (only {@code Math.pow}
+ * of 10 to a small whole power is read from a table, which the Java specification makes exact either way). The
+ * property test {@code DisplayProperties} holds every method to the original writing, character for character.
  */
 public final class Display {
     private Display() {}
 
     private static final int FIGURES = 3;
 
-    public static String sig3(double v) {
-        if (Double.isNaN(v)) return "NaN";
-        if (Double.isInfinite(v)) return v > 0 ? "∞" : "-∞";
-        if (v == 0) return "0";
-        double a = Math.abs(v);
-        int exp = (int) Math.floor(Math.log10(a));
-        int decimals = FIGURES - 1 - exp;
-        double scale = Math.pow(10, decimals);
-        double rounded = Math.round(a * scale) / scale;
-        // rounding can carry into the next decade (9.996 -> 10.0): recompute the decimals
-        if (rounded >= Math.pow(10, exp + 1)) {
-            decimals--;
-            scale = Math.pow(10, decimals);
-            rounded = Math.round(a * scale) / scale;
+    /** 10^0 to 10^22, every one exactly representable, as Math.pow returns them for whole powers. */
+    private static final double[] POW10 = {1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13,
+            1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22};
+    /** Beyond 18 decimals the fraction no longer fits a long as written: such tiny values take the original path. */
+    private static final int MAX_DECIMALS = 18;
+    /** " " and each unit's symbol in Latin-1, by {@link Unit#ordinal}; null where the symbol is empty or not Latin-1. */
+    private static final byte[][] SUFFIX = new byte[Unit.values().length][];
+
+    static {
+        for (Unit u : Unit.values()) {
+            String s = " " + u.symbol();
+            if (!u.symbol().isEmpty() && StandardCharsets.ISO_8859_1.newEncoder().canEncode(s))
+                SUFFIX[u.ordinal()] = s.getBytes(StandardCharsets.ISO_8859_1);
         }
-        String body = decimals > 0 ? fixed(rounded, decimals) : Long.toString(Math.round(rounded));
-        return v < 0 ? "-" + body : body;
+    }
+
+    public static String sig3(double v) { return sig3(v, null); }
+
+    /** A value in the system base unit shown in the sheet unit of its quantity, with the symbol. */
+    public static String of(double base, Quantity q, UnitSystem system) {
+        Unit u = q.unit(system);
+        if (u.symbol().isEmpty()) return sig3(u.fromBase(base));
+        byte[] suffix = SUFFIX[u.ordinal()];
+        return suffix != null ? sig3(u.fromBase(base), suffix) : sig3(u.fromBase(base)) + " " + u.symbol();
     }
 
     /** A constant of an equation as printed: no trailing zeros (15, 4.57, 0.25). */
     public static String plain(double v) {
         if (v == Math.rint(v) && Math.abs(v) < 1e15) return Long.toString((long) v);
+        // BigDecimal.valueOf reads Double.toString: a plain decimal ending in a non-zero digit is already stripped
+        String s = Double.toString(v);
+        if (s.indexOf('E') < 0 && s.charAt(s.length() - 1) != '0' && Double.isFinite(v)) return s;
         return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 
-    /** A value in the system base unit shown in the sheet unit of its quantity, with the symbol. */
-    public static String of(double base, Quantity q, UnitSystem system) {
-        Unit u = q.unit(system);
-        String n = sig3(u.fromBase(base));
-        return u.symbol().isEmpty() ? n : n + " " + u.symbol();
+    /** Three figures, followed by {@code suffix} (Latin-1 bytes) when it is not null. */
+    private static String sig3(double v, byte[] suffix) {
+        if (Double.isNaN(v) || Double.isInfinite(v) || v == 0) return join(shownSpecial(v), suffix);
+        double a = Math.abs(v);
+        int exp = (int) Math.floor(Math.log10(a));
+        int decimals = FIGURES - 1 - exp;
+        double scale = pow10(decimals);
+        double rounded = Math.round(a * scale) / scale;
+        // rounding can carry into the next decade (9.996 -> 10.0): recompute the decimals
+        if (rounded >= pow10(exp + 1)) {
+            decimals--;
+            scale = pow10(decimals);
+            rounded = Math.round(a * scale) / scale;
+        }
+        if (decimals > MAX_DECIMALS) {
+            String body = fixedOriginal(rounded, decimals);
+            return join(v < 0 ? "-" + body : body, suffix);
+        }
+        long whole, frac = 0;
+        if (decimals > 0) {
+            whole = (long) Math.floor(rounded);
+            frac = Math.round((rounded - whole) * pow10(decimals));
+            long limit = (long) pow10(decimals);
+            if (frac >= limit) { whole++; frac -= limit; }
+        } else {
+            whole = Math.round(rounded);
+        }
+        return write(v < 0, whole, frac, Math.max(decimals, 0), suffix);
     }
 
-    private static String fixed(double v, int decimals) {
+    private static String shownSpecial(double v) {
+        if (Double.isNaN(v)) return "NaN";
+        if (Double.isInfinite(v)) return v > 0 ? "∞" : "-∞";
+        return "0";
+    }
+
+    private static String join(String shown, byte[] suffix) {
+        return suffix == null ? shown : shown + new String(suffix, StandardCharsets.ISO_8859_1);
+    }
+
+    private static double pow10(int n) { return n >= 0 && n < POW10.length ? POW10[n] : Math.pow(10, n); }
+
+    /** "-whole.frac" with {@code frac} zero-padded to {@code decimals} digits (none when 0), then the suffix. */
+    private static String write(boolean negative, long whole, long frac, int decimals, byte[] suffix) {
+        int tail = suffix == null ? 0 : suffix.length;
+        byte[] b = new byte[41 + tail];
+        int end = b.length - tail, i = end;
+        if (tail > 0) System.arraycopy(suffix, 0, b, end, tail);
+        if (decimals > 0) {
+            for (int k = 0; k < decimals; k++) { b[--i] = (byte) ('0' + frac % 10); frac /= 10; }
+            b[--i] = '.';
+        }
+        do { b[--i] = (byte) ('0' + whole % 10); whole /= 10; } while (whole > 0);
+        if (negative) b[--i] = '-';
+        return new String(b, i, b.length - i, StandardCharsets.ISO_8859_1);
+    }
+
+    /** The original writing of the fixed digits, for more decimals than a long holds. */
+    private static String fixedOriginal(double v, int decimals) {
         long whole = (long) Math.floor(v);
         long frac = Math.round((v - whole) * Math.pow(10, decimals));
         long limit = (long) Math.pow(10, decimals);
