@@ -56,7 +56,7 @@ public final class Display {
     private static String sig3(double v, byte[] suffix) {
         if (Double.isNaN(v) || Double.isInfinite(v) || v == 0) return join(shownSpecial(v), suffix);
         double a = Math.abs(v);
-        int exp = (int) Math.floor(Math.log10(a));
+        int exp = decade(a);
         int decimals = FIGURES - 1 - exp;
         double scale = pow10(decimals);
         double rounded = Math.round(a * scale) / scale;
@@ -92,6 +92,26 @@ public final class Display {
         return suffix == null ? shown : shown + new String(suffix, StandardCharsets.ISO_8859_1);
     }
 
+    /** 10^-22 to 10^22 as the double literals, for finding a value's decade by comparison. */
+    private static final double[] DECADE = new double[45];
+
+    static {
+        for (int n = -22; n <= 22; n++) DECADE[n + 22] = Double.parseDouble("1e" + n);
+    }
+
+    /**
+     * floor(log10(a)) as Math.log10 gives it. Found by comparison with the powers of ten; only within a relative
+     * 1e-13 of a power (where log10's last bit decides, and 10^n for n < 0 is itself not exact) is log10 asked.
+     */
+    private static int decade(double a) {
+        if (!(a >= 1e-21 && a < 1e21)) return (int) Math.floor(Math.log10(a));
+        int n = (int) Math.floor((Math.getExponent(a) + 1) * 0.30102999566398120) - 1; // at or below the decade
+        while (DECADE[n + 23] <= a) n++;
+        double low = DECADE[n + 22], high = DECADE[n + 23];
+        if (a < low * (1 + 1e-13) || a > high * (1 - 1e-13)) return (int) Math.floor(Math.log10(a));
+        return n;
+    }
+
     private static double pow10(int n) { return n >= 0 && n < POW10.length ? POW10[n] : Math.pow(10, n); }
 
     /** "-whole.frac" with {@code frac} zero-padded to {@code decimals} digits (none when 0), then the suffix. */
@@ -101,12 +121,25 @@ public final class Display {
         int end = b.length - tail, i = end;
         if (tail > 0) System.arraycopy(suffix, 0, b, end, tail);
         if (decimals > 0) {
-            for (int k = 0; k < decimals; k++) { b[--i] = (byte) ('0' + frac % 10); frac /= 10; }
+            i = digits(b, i, frac, decimals);
             b[--i] = '.';
         }
-        do { b[--i] = (byte) ('0' + whole % 10); whole /= 10; } while (whole > 0);
+        i = digits(b, i, whole, 1);
         if (negative) b[--i] = '-';
         return new String(b, i, b.length - i, StandardCharsets.ISO_8859_1);
+    }
+
+    /**
+     * Writes {@code n} (not negative) right to left ending before {@code end}, at least {@code width} digits with
+     * leading zeros; returns where it starts. In int arithmetic while the value fits, as a long division costs far more.
+     */
+    private static int digits(byte[] b, int end, long n, int width) {
+        int i = end;
+        while (n > Integer.MAX_VALUE) { b[--i] = (byte) ('0' + n % 10); n /= 10; }
+        int m = (int) n;
+        do { int q = m / 10; b[--i] = (byte) ('0' + (m - q * 10)); m = q; } while (m > 0);
+        while (end - i < width) b[--i] = '0';
+        return i;
     }
 
     /** The original writing of the fixed digits, for more decimals than a long holds. */
