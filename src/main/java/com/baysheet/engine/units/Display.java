@@ -1,7 +1,5 @@
 package com.baysheet.engine.units;
 
-import java.nio.charset.StandardCharsets;
-
 /**
  * Three significant figures, the usual precision of a calculation sheet. Full precision stays in the
  * record's numbers; only the shown text is rounded. Whole numbers of four or more digits are rounded
@@ -22,15 +20,11 @@ public final class Display {
             1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22};
     /** Beyond 18 decimals the fraction no longer fits a long as written: such tiny values take the original path. */
     private static final int MAX_DECIMALS = 18;
-    /** " " and each unit's symbol in Latin-1, by {@link Unit#ordinal}; null where the symbol is empty or not Latin-1. */
-    private static final byte[][] SUFFIX = new byte[Unit.values().length][];
+    /** " " and each unit's symbol, by {@link Unit#ordinal}; null where the symbol is empty. */
+    private static final char[][] SUFFIX = new char[Unit.values().length][];
 
     static {
-        for (Unit u : Unit.values()) {
-            String s = " " + u.symbol();
-            if (!u.symbol().isEmpty() && StandardCharsets.ISO_8859_1.newEncoder().canEncode(s))
-                SUFFIX[u.ordinal()] = s.getBytes(StandardCharsets.ISO_8859_1);
-        }
+        for (Unit u : Unit.values()) if (!u.symbol().isEmpty()) SUFFIX[u.ordinal()] = (" " + u.symbol()).toCharArray();
     }
 
     public static String sig3(double v) { return sig3(v, null); }
@@ -38,9 +32,7 @@ public final class Display {
     /** A value in the system base unit shown in the sheet unit of its quantity, with the symbol. */
     public static String of(double base, Quantity q, UnitSystem system) {
         Unit u = q.unit(system);
-        if (u.symbol().isEmpty()) return sig3(u.fromBase(base));
-        byte[] suffix = SUFFIX[u.ordinal()];
-        return suffix != null ? sig3(u.fromBase(base), suffix) : sig3(u.fromBase(base)) + " " + u.symbol();
+        return sig3(u.fromBase(base), SUFFIX[u.ordinal()]);
     }
 
     /** A constant of an equation as printed: no trailing zeros (15, 4.57, 0.25). */
@@ -52,8 +44,8 @@ public final class Display {
         return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 
-    /** Three figures, followed by {@code suffix} (Latin-1 bytes) when it is not null. */
-    private static String sig3(double v, byte[] suffix) {
+    /** Three figures, followed by {@code suffix} when it is not null. */
+    private static String sig3(double v, char[] suffix) {
         if (Double.isNaN(v) || Double.isInfinite(v) || v == 0) return join(shownSpecial(v), suffix);
         double a = Math.abs(v);
         int exp = decade(a);
@@ -88,8 +80,8 @@ public final class Display {
         return "0";
     }
 
-    private static String join(String shown, byte[] suffix) {
-        return suffix == null ? shown : shown + new String(suffix, StandardCharsets.ISO_8859_1);
+    private static String join(String shown, char[] suffix) {
+        return suffix == null ? shown : shown + new String(suffix);
     }
 
     /** 10^-22 to 10^22 as the double literals, for finding a value's decade by comparison. */
@@ -115,9 +107,9 @@ public final class Display {
     private static double pow10(int n) { return n >= 0 && n < POW10.length ? POW10[n] : Math.pow(10, n); }
 
     /** "-whole.frac" with {@code frac} zero-padded to {@code decimals} digits (none when 0), then the suffix. */
-    private static String write(boolean negative, long whole, long frac, int decimals, byte[] suffix) {
+    private static String write(boolean negative, long whole, long frac, int decimals, char[] suffix) {
         int tail = suffix == null ? 0 : suffix.length;
-        byte[] b = new byte[41 + tail];
+        char[] b = new char[(negative ? 1 : 0) + length(whole) + (decimals > 0 ? decimals + 1 : 0) + tail];
         int end = b.length - tail, i = end;
         if (tail > 0) System.arraycopy(suffix, 0, b, end, tail);
         if (decimals > 0) {
@@ -126,18 +118,25 @@ public final class Display {
         }
         i = digits(b, i, whole, 1);
         if (negative) b[--i] = '-';
-        return new String(b, i, b.length - i, StandardCharsets.ISO_8859_1);
+        return new String(b); // compacted to Latin-1 where every character allows
+    }
+
+    /** The number of decimal digits of {@code n} (not negative). */
+    private static int length(long n) {
+        int d = 1;
+        for (long p = 10; d < 19 && n >= p; p *= 10) d++;
+        return d;
     }
 
     /**
      * Writes {@code n} (not negative) right to left ending before {@code end}, at least {@code width} digits with
      * leading zeros; returns where it starts. In int arithmetic while the value fits, as a long division costs far more.
      */
-    private static int digits(byte[] b, int end, long n, int width) {
+    private static int digits(char[] b, int end, long n, int width) {
         int i = end;
-        while (n > Integer.MAX_VALUE) { b[--i] = (byte) ('0' + n % 10); n /= 10; }
+        while (n > Integer.MAX_VALUE) { b[--i] = (char) ('0' + n % 10); n /= 10; }
         int m = (int) n;
-        do { int q = m / 10; b[--i] = (byte) ('0' + (m - q * 10)); m = q; } while (m > 0);
+        do { int q = m / 10; b[--i] = (char) ('0' + (m - q * 10)); m = q; } while (m > 0);
         while (end - i < width) b[--i] = '0';
         return i;
     }
