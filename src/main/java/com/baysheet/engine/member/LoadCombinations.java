@@ -32,9 +32,9 @@ public final class LoadCombinations {
         String formula(boolean halfAllowed, RecordBuilder rec) {
             if (!rec.writesText()) return "";
             double fl = halfL && halfAllowed ? 0.5 : l;
-            StringBuilder s = new StringBuilder(Display.sig3(d)).append("D");
-            if (fl != 0) s.append(" + ").append(Display.sig3(fl)).append("L");
-            if (lr != 0) s.append(" + ").append(Display.sig3(lr)).append("Lr");
+            StringBuilder s = new StringBuilder(24).append(shown(d)).append("D");
+            if (fl != 0) s.append(" + ").append(shown(fl)).append("L");
+            if (lr != 0) s.append(" + ").append(shown(lr)).append("Lr");
             return s.toString();
         }
     }
@@ -104,9 +104,10 @@ public final class LoadCombinations {
         String sub = "";
         double fl = best.halfL && halfAllowed ? 0.5 : best.l;
         if (rec.writesText()) {
-            sub = Display.sig3(best.d) + " × " + rec.num(d, q);
-            if (fl != 0) sub += " + " + Display.sig3(fl) + " × " + rec.num(l, q);
-            if (best.lr != 0) sub += " + " + Display.sig3(best.lr) + " × " + rec.num(bestRoof, q);
+            StringBuilder b = new StringBuilder(48).append(shown(best.d)).append(" × ").append(rec.num(d, q));
+            if (fl != 0) b.append(" + ").append(shown(fl)).append(" × ").append(rec.num(l, q));
+            if (best.lr != 0) b.append(" + ").append(shown(best.lr)).append(" × ").append(rec.num(bestRoof, q));
+            sub = b.toString();
         }
         // the label leaves out L on a member that carries none (a roof member): the value is the same either way
         String formula = snow ? brief(best, l == 0 ? 0 : fl, term) : "";
@@ -114,6 +115,20 @@ public final class LoadCombinations {
                         + (snow && best.lr != 0 ? " (" + term + " as the roof load)" : ""),
                 snow ? formula : best.formula(halfAllowed, rec), sub, bestV, q, strength ? e.lrfd() : e.asd());
         return new Governing(bestV, best, term, formula);
+    }
+
+    /** The load factors of {@link #GRAVITY} and 0.5 L, with their shown text written once. */
+    private static final double[] FACTORS = {0, 0.5, 0.75, 1.0, 1.2, 1.4, 1.6};
+    private static final String[] FACTOR_SHOWN = new String[FACTORS.length];
+
+    static {
+        for (int i = 0; i < FACTORS.length; i++) FACTOR_SHOWN[i] = Display.sig3(FACTORS[i]);
+    }
+
+    /** A load factor to three figures, as {@link Display#sig3} writes it. */
+    static String shown(double f) {
+        for (int i = 0; i < FACTORS.length; i++) if (FACTORS[i] == f) return FACTOR_SHOWN[i];
+        return Display.sig3(f);
     }
 
     /** "1.2D + 1.6S + 0.5L": the roof term first where its factor leads, as the standard writes combination 3. */

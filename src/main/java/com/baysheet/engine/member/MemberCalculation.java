@@ -41,6 +41,7 @@ public final class MemberCalculation {
 
     private record Outcome(EndShare left, EndShare right, LiveFactors reduction) {}
 
+    /** Runs the calculation into {@code rec}; the end shares only in the numbers pass (null when writing text). */
     private static Outcome run(CalcContext ctx, MemberInput in, RecordBuilder rec) {
         LoadBook book = LoadBook.of(ctx, in);
         Inputs.record(ctx, in, book, rec);
@@ -59,6 +60,7 @@ public final class MemberCalculation {
             BalconyNote.record(ctx, book, rec);
             Cautions.standard(ctx, book, rec);
         }
+        if (rec.writesText()) return null; // the end shares and the reduction are the numbers pass's, already kept
         return new Outcome(share(ctx, in, book, true), in.kind().isColumn()
                 || in.support() instanceof Support.Cantilever ? null : share(ctx, in, book, false), reduction[0]);
     }

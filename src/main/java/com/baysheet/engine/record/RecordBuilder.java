@@ -18,11 +18,13 @@ public final class RecordBuilder {
     private final String subject;
     private final String edition;
     private final UnitSystem system;
-    private final List<Entry> inputs = new ArrayList<>();
-    private final List<Step> steps = new ArrayList<>();
-    private final List<Entry> results = new ArrayList<>();
-    private final List<String> governing = new ArrayList<>();
-    private final List<Note> notes = new ArrayList<>();
+    // sized for a beam's record (about 15 inputs, 35 steps, 35 results) so that they are not grown step by step;
+    // a numbers-only builder adds to none of them
+    private final List<Entry> inputs;
+    private final List<Step> steps;
+    private final List<Entry> results;
+    private final List<String> governing;
+    private final List<Note> notes;
     private Sketch sketch = Sketch.NONE;
     private final boolean text;
     /** The numbers-only pass's store; null when writing text. */
@@ -38,6 +40,11 @@ public final class RecordBuilder {
         this.system = system;
         this.text = text;
         this.numbers = text ? null : new RecordNumbers();
+        this.inputs = text ? new ArrayList<>(24) : List.of();
+        this.steps = text ? new ArrayList<>(64) : List.of();
+        this.results = text ? new ArrayList<>(64) : List.of();
+        this.governing = text ? new ArrayList<>(8) : List.of();
+        this.notes = text ? new ArrayList<>(8) : List.of();
     }
 
     /** A builder whose shown strings are left empty: same steps, same numbers. */
