@@ -99,9 +99,11 @@ final class LoadBook {
         for (int i = 0; i < in.floors().size(); i++) {
             var areas = in.floors().get(i).areas();
             for (int j = 0; j < areas.size(); j++) {
-                String field = "floors[" + i + "].areas[" + j + "].occupancy";
-                Occupancy o = occupancy(field, areas.get(j).occupancy());
-                if (o.isRoof()) throw new com.baysheet.engine.InputError(field, o.id(), "is a roof occupancy; a supported floor lists floor areas only");
+                // the field's name is written only for a refusal: a column low in a tall stack lists every floor above
+                String id = areas.get(j).occupancy();
+                if (!ctx.catalogue().contains(id)) occupancy(floorField(i, j), id);
+                Occupancy o = ctx.catalogue().get(id);
+                if (o.isRoof()) throw new com.baysheet.engine.InputError(floorField(i, j), o.id(), "is a roof occupancy; a supported floor lists floor areas only");
                 listed.merge(o.id(), areas.get(j).area(), Double::sum);
             }
         }
@@ -143,6 +145,8 @@ final class LoadBook {
         }
         return out;
     }
+
+    private static String floorField(int floor, int area) { return "floors[" + floor + "].areas[" + area + "].occupancy"; }
 
     private Occupancy occupancy(String field, String id) {
         if (!ctx.catalogue().contains(id))
