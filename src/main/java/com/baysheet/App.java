@@ -17,6 +17,9 @@ import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 
 import java.io.IOException;
+import java.nio.file.Files;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import java.time.Clock;
 import java.util.Arrays;
 import java.util.function.Consumer;
@@ -90,6 +93,10 @@ public final class App {
     static Running start(ServerOptions o, Consumer<String> console) throws IOException {
         // a named key is read first: one that cannot be read stops the start, saying why, before the database is opened
         OfficeKey named = o.signingKeyNamed() ? OfficeKey.read(o.signingKey(), o.signingKeyPassword().toCharArray()) : null;
+        // the office's own key, when it is there already, is read while the database opens and migrates: a first read
+        // loads the key store's cryptography, about a third of a second of a start
+        CompletableFuture<OfficeKey> early = named == null && Files.isRegularFile(o.signingKey())
+                ? CompletableFuture.supplyAsync(() -> OfficeKey.read(o.signingKey(), o.signingKeyPassword().toCharArray())) : null;
         if (o.embedded()) Database.prepareDataDir(o.dataDir());
         Database db = Database.open(o.dbUrl(), o.dbPassword());
         if (o.embedded()) Database.restrictFiles(o.dataDir());
@@ -99,7 +106,7 @@ public final class App {
         Store store = Store.on(db.dataSource(), new Rederivation()::derive, clock);
         OfficeKey key;
         try {
-            key = named != null ? named : madeOrRead(o, db, clock, console);
+            key = named != null ? named : early != null ? joined(early) : madeOrRead(o, db, clock, console);
         } catch (RuntimeException e) {
             db.close();
             throw e;
@@ -126,6 +133,16 @@ public final class App {
             console.accept("set-up code: " + office.setupCode().code() + " (asked for once, by the set-up page at /setup, "
                     + "to make the first administrator)");
         return running;
+    }
+
+    /** The key read beside the start, or the reason it could not be, as reading it in line would have thrown it. */
+    private static OfficeKey joined(CompletableFuture<OfficeKey> key) {
+        try {
+            return key.join();
+        } catch (CompletionException e) {
+            if (e.getCause() instanceof RuntimeException r) throw r;
+            throw e;
+        }
     }
 
     /**

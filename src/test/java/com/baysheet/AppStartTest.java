@@ -127,4 +127,18 @@ class AppStartTest {
         assertThatThrownBy(() -> App.start(ServerOptions.parse(args, Map.of("BAYSHEET_SIGNING_KEY_PASSWORD", "wrong")), l -> {}))
                 .hasMessageContaining("wrong password");
     }
+
+    @Test
+    void theOfficesOwnKeyReadBesideTheDatabaseStopsTheStartWithItsReasonWhenItsPasswordIsWrong(@TempDir Path dir) throws Exception {
+        // the key beside the data folder is read while the database opens: a refusal still stops the start, saying why
+        Path key = dir.resolve("baysheet-signing.p12");
+        com.baysheet.sheet.signing.OfficeKey.readOrCreate(key, "kept apart".toCharArray(), "Harbor Structural", java.time.Clock.systemUTC());
+        String[] args = {"--port", "0", "--data", dir.resolve("data").toString()};
+        assertThatThrownBy(() -> App.start(ServerOptions.parse(args, Map.of("BAYSHEET_SIGNING_KEY_PASSWORD", "not it")), l -> {}))
+                .isInstanceOf(com.baysheet.sheet.signing.OfficeKey.Unusable.class).hasMessageContaining("wrong password");
+        try (App.Running r = App.start(ServerOptions.parse(args, Map.of("BAYSHEET_SIGNING_KEY_PASSWORD", "kept apart")), l -> {})) {
+            assertThat(r.office().issuing().signingKey().fingerprint())
+                    .isEqualTo(com.baysheet.sheet.signing.OfficeKey.read(key, "kept apart".toCharArray()).fingerprint());
+        }
+    }
 }
