@@ -5,6 +5,8 @@ import com.baysheet.review.MarkSheets;
 import com.baysheet.store.review.MarkBook;
 import org.jdbi.v3.core.Handle;
 
+import java.sql.Connection;
+
 /**
  * Every version a page of a project's results (members, take-downs, the framing plan) is rendered from, read
  * from the database on each request, so that several servers over one database agree on it: the project's
@@ -33,21 +35,24 @@ public final class ProjectVersions {
         this.results = results;
     }
 
-    /**
-     * The versions as they stand, in one statement (it runs on every request for a kept page); not found when there
-     * is no such project. The same columns as {@link Results#modelVersion}, {@link OccupancyStore#catalogueVersion},
-     * {@link Results#firmVersion} and {@link MarkBook#version} read one by one.
-     */
+    /** The versions as they stand: not found when there is no such project. */
     public Version of(long projectId) {
-        return sql.tx(c -> {
-            try (Handle h = Sql.on(c)) {
-                return h.createQuery("SELECT p.version, (SELECT catalogue_version FROM firm_state WHERE id = 1), "
-                                + "COALESCE((SELECT version FROM firm_setting WHERE id = 1), 0), p.marks_version "
-                                + "FROM project p WHERE p.id = :id").bind("id", projectId)
-                        .map((rs, ctx) -> new Version(projectId, rs.getLong(1), rs.getLong(2), rs.getLong(3), rs.getLong(4)))
-                        .findOne().orElseThrow(() -> new NotFound("project", projectId));
-            }
-        });
+        return sql.tx(c -> read(c, projectId));
+    }
+
+    /**
+     * The versions in one statement (it runs on every request for a kept page). {@code marks_version} counts mark
+     * renames: a rename changes a mark's text and no model version; which member carries which mark, and which marks
+     * there are, change only in a model write, with the model's version.
+     */
+    private static Version read(Connection c, long projectId) {
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT p.version, (SELECT catalogue_version FROM firm_state WHERE id = 1), "
+                            + "COALESCE((SELECT version FROM firm_setting WHERE id = 1), 0), p.marks_version "
+                            + "FROM project p WHERE p.id = :id").bind("id", projectId)
+                    .map((rs, ctx) -> new Version(projectId, rs.getLong(1), rs.getLong(2), rs.getLong(3), rs.getLong(4)))
+                    .findOne().orElseThrow(() -> new NotFound("project", projectId));
+        }
     }
 
     /** The results and marks to render a page from, with the version they are exactly of when no save raced them. */
@@ -58,13 +63,13 @@ public final class ProjectVersions {
             State s = sql.tx(c -> {
                 // which member carries which mark is written with the version: the same version before and after
                 // the marks are read means they are the marks of this model
-                long before = Results.modelVersion(c, projectId), renamesBefore = MarkBook.version(c, projectId);
+                Version before = read(c, projectId);
                 MarkSheets marks = MarkBook.read(c, projectId, computed.derived());
-                long after = Results.modelVersion(c, projectId), renamesAfter = MarkBook.version(c, projectId);
-                boolean exact = before == m.project().version() && after == before && renamesAfter == renamesBefore
-                        && results.kept(computed);
+                Version after = read(c, projectId);
+                boolean exact = before.model() == m.project().version() && after.model() == before.model()
+                        && after.marks() == before.marks() && results.kept(computed);
                 return new State(computed, marks, !exact ? null
-                        : new Version(projectId, m.project().version(), m.catalogueVersion(), m.firmVersion(), renamesBefore));
+                        : new Version(projectId, m.project().version(), m.catalogueVersion(), m.firmVersion(), before.marks()));
             });
             if (s.version() != null || attempt == READ_ATTEMPTS) return s;
         }

@@ -29,21 +29,21 @@ final class ClearBaysPage {
 
     static void render(Context ctx, Store store, Project p, StoredLevel l, Form form, List<Cell> cells) {
         Grid grid = store.grids().find(p.id());
-        Map<String, Bay> held = new HashMap<>();
-        for (Bay b : store.bays().findByLevel(p.id(), l.id())) held.put(b.col() + "," + b.row(), b);
+        Map<Cell, Bay> held = new HashMap<>();
+        for (Bay b : store.bays().findByLevel(p.id(), l.id())) held.put(new Cell(b.col(), b.row()), b);
         UnitLabels units = UnitLabels.of(p.info().units());
         List<Line> lines = new ArrayList<>();
         int framed = 0;
         for (Cell c : cells) {
             if (c.col() >= grid.x().cells() || c.row() >= grid.y().cells()) continue;   // the store refuses these, naming them
-            Bay b = held.get(c.col() + "," + c.row());
+            Bay b = held.get(c);
             if (b != null) framed++;
             lines.add(new Line(grid.bayName(c.col(), c.row()), b == null ? "nothing yet" : b.opening() ? "an opening"
                     : b.occupancy() + ", " + units.pressure(b.deadLoad()) + " dead"));
         }
         List<Field> fields = new ArrayList<>(List.of(new Field("version", form.value("version")), new Field("action", "clear"),
                 new Field("confirm", "yes")));
-        for (Cell c : cells) fields.add(new Field("cells", c.col() + "," + c.row()));
+        for (Cell c : cells) fields.add(new Field("cells", c.key()));
         for (String f : BayForm.FIELDS) fields.add(new Field(f, form.value(f)));
         Map<String, Object> m = new HashMap<>();
         m.put("project", p);

@@ -101,8 +101,7 @@ final class LoadBook {
             for (int j = 0; j < areas.size(); j++) {
                 // the field's name is written only for a refusal: a column low in a tall stack lists every floor above
                 String id = areas.get(j).occupancy();
-                if (!ctx.catalogue().contains(id)) occupancy(floorField(i, j), id);
-                Occupancy o = ctx.catalogue().get(id);
+                Occupancy o = ctx.catalogue().contains(id) ? ctx.catalogue().get(id) : occupancy(floorField(i, j), id);
                 if (o.isRoof()) throw new com.baysheet.engine.InputError(floorField(i, j), o.id(), "is a roof occupancy; a supported floor lists floor areas only");
                 listed.merge(o.id(), areas.get(j).area(), Double::sum);
             }

@@ -46,18 +46,6 @@ public final class MarkBook {
         return sheets(MarkAssignment.of(groups, stored, MarkRows.carried(c, projectId)), stored);
     }
 
-    /**
-     * How many times the project's marks have been renamed: a rename changes a mark's text and no model version, so
-     * a page labelled by marks is keyed by this beside the model's version. Which member carries which mark, and
-     * which marks there are, change only in a model write (with the model's version), so they need no count.
-     */
-    public static long version(Connection c, long projectId) {
-        try (Handle h = Sql.on(c)) {
-            return h.createQuery("SELECT marks_version FROM project WHERE id = :id").bind("id", projectId).mapTo(Long.class)
-                    .findOne().orElseThrow(() -> new NotFound("project", projectId));
-        }
-    }
-
     /** A stored mark by id, carried or not (a mark no member carries keeps its sheet's history). */
     public java.util.Optional<Mark> stored(long projectId, long markId) {
         return sql.tx(c -> MarkRows.all(c, projectId).stream().filter(m -> m.id() == markId).findFirst());
