@@ -6,23 +6,13 @@
 set -euo pipefail
 cd "$(dirname "$0")/../../.."
 command -v wrk >/dev/null || { echo "wrk is not installed (Debian: apt-get install wrk)"; exit 1; }
-mvn -B -ntp -q package -DskipTests
-mkdir -p target/office-load
-javac -d target/office-load src/jmh/java/com/baysheet/bench/OfficeLoad*.java
-data=$(mktemp -d)
 port=${PORT:-7092}
 conns=${WRK_CONNECTIONS:-32}
 secs=${WRK_SECONDS:-20}
 threads=${WRK_THREADS:-2}
-java ${SERVER_JAVA_OPTS:--Xmx1g} -jar target/baysheet.jar --demo --bind 127.0.0.1 --port "$port" --data "$data" \
-  > target/office-load/ratio-server.log 2>&1 &
-pid=$!
-trap 'kill "$pid" 2>/dev/null; wait "$pid" 2>/dev/null; rm -rf "$data"' EXIT
-for _ in $(seq 1 240); do
-  curl -sf "http://127.0.0.1:$port/health" >/dev/null 2>&1 && break
-  sleep 0.25
-done
-code=$(grep -o 'set-up code: [A-Z0-9]*' target/office-load/ratio-server.log | head -1 | cut -d' ' -f3)
+# shellcheck source=demo-server.sh
+. src/jmh/scripts/demo-server.sh
+demo_server "$port" target/office-load/ratio-server.log
 session=$(java -cp target/office-load com.baysheet.bench.OfficeLoad --base "http://127.0.0.1:$port" --setup-code "$code" --print-session yes)
 page=$(echo "$session" | sed -n 's/^page=//p')
 cookie=$(echo "$session" | sed -n 's/^cookie=//p')
