@@ -29,6 +29,8 @@ public final class RecordBuilder {
     private final boolean text;
     /** The numbers-only pass's store; null when writing text. */
     private final RecordNumbers numbers;
+    /** The shown numbers written so far; null in a numbers-only pass. */
+    private final ShownNumbers shownNumbers;
 
     public RecordBuilder(String subject, String edition, UnitSystem system) {
         this(subject, edition, system, true);
@@ -40,6 +42,7 @@ public final class RecordBuilder {
         this.system = system;
         this.text = text;
         this.numbers = text ? null : new RecordNumbers();
+        this.shownNumbers = text ? new ShownNumbers(system) : null;
         this.inputs = text ? new ArrayList<>(24) : List.of();
         this.steps = text ? new ArrayList<>(64) : List.of();
         this.results = text ? new ArrayList<>(64) : List.of();
@@ -55,19 +58,19 @@ public final class RecordBuilder {
     public UnitSystem system() { return system; }
 
     /** Shows a base-unit value in its sheet unit, three significant figures. */
-    public String show(double base, Quantity q) { return text ? Display.of(base, q, system) : ""; }
+    public String show(double base, Quantity q) { return text ? shownNumbers.of(base, q) : ""; }
 
     /** Whether this builder writes shown text (false for a numbers-only pass). */
     public boolean writesText() { return text; }
 
     /** A ratio or factor to three significant figures, or "" in a numbers-only pass. */
-    public String fmt(double v) { return text ? Display.sig3(v) : ""; }
+    public String fmt(double v) { return text ? shownNumbers.sig3(v) : ""; }
 
     /** An equation constant as printed (15, 4.57), or "" in a numbers-only pass. */
     public String plain(double v) { return text ? Display.plain(v) : ""; }
 
     /** The number alone in the sheet unit, for substituted values. */
-    public String num(double base, Quantity q) { return text ? Display.sig3(q.unit(system).fromBase(base)) : ""; }
+    public String num(double base, Quantity q) { return text ? shownNumbers.sig3(q.unit(system).fromBase(base)) : ""; }
 
     public RecordBuilder input(String key, String label, double base, Quantity q) {
         if (text) inputs.add(entry(key, label, base, q));
