@@ -12,8 +12,9 @@ import java.util.Collection;
 
 /**
  * Places a concentrated load, spread over its contact length, along a member for the largest effect
- * (ASCE 7-16 4.4). Where statics gives the worst position outright it is used (one solve); otherwise a
- * bounded scan of positions, then a golden-section refinement around the best one.
+ * (ASCE 7-16 4.4). Where statics gives the worst position outright it is used (one solve): every effect on a simple
+ * span and a cantilever, and on an overhanging beam wherever the patch fits the span it acts on; otherwise a bounded
+ * scan of positions, then a golden-section refinement around the best one.
  *
  * <p>Floor and roof concentrated loads are checked apart: a floor occupancy's load against the reduced
  * floor load L, a roof row's (Table 4.3-1, roofs subject to maintenance workers) against the roof live load Lr,
@@ -65,12 +66,27 @@ final class ConcentratedCheck {
      * On a simple span the largest shear is the larger reaction and the largest moment, concave in x and
      * symmetric, peaks with the load centred (Pℓ/4 − Pc/8). On a cantilever the shear is P wherever the load
      * is, and the fixed-end moment −Px peaks at the free end. Ties keep the first position, as the scan does.
+     *
+     * <p>A beam overhanging its right support (back span ℓ, overhang a, patch c): load on the overhang only bends
+     * the back span the other way, so the largest sagging moment is the simple span's, the patch centred on the back
+     * span (where it fits there, c ≤ ℓ). The hogging moment at the support, −(P/c)∫(s − ℓ) over the patch's part on
+     * the overhang, is largest with the patch against the tip, wherever c falls; no section is more hogged than the
+     * support. With the patch wholly on the overhang (c ≤ a) the shear beside the support is P wherever it stands,
+     * and the back span's, R_A = P(x − ℓ)/ℓ, grows towards the tip; a patch reaching into the back span gives less
+     * than P on either side (where c ≤ ℓ as well): so the tip. Other overhangs (a patch longer than the overhang or the
+     * back span) are scanned.
      */
     static double worstPosition(Support s, double lo, double hi, Effect e) {
         if (e == Effect.LEFT_REACTION) return lo;
         if (e == Effect.RIGHT_REACTION) return s instanceof Support.Cantilever ? lo : hi;
         if (s instanceof Support.Simple) return e == Effect.MAX_MOMENT ? (lo + hi) / 2 : lo;
         if (s instanceof Support.Cantilever) return e == Effect.MIN_MOMENT ? hi : lo;
+        if (s instanceof Support.Overhang o) {
+            double patch = 2 * lo; // lo is half the patch
+            if (e == Effect.MIN_MOMENT) return hi;
+            if (e == Effect.MAX_MOMENT && patch <= o.span()) return o.span() / 2;
+            if (e == Effect.SHEAR && patch <= o.overhang() && patch <= o.span()) return hi;
+        }
         return Double.NaN;
     }
 

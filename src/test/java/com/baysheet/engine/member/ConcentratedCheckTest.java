@@ -45,8 +45,30 @@ class ConcentratedCheckTest {
 
     @Test
     void overhangHoggingMomentPeaksWithTheLoadAtTheTip() {
+        // statics: the moment at the support of the load's part on the overhang, −P(a − c/2) with the patch at the tip
         var m = ConcentratedCheck.place(new Support.Overhang(20, 5), P, C, ConcentratedCheck.Effect.MIN_MOMENT);
-        assertThat(m.effect()).isCloseTo(-P * (5 - C / 2), within(1e-6));
+        assertThat(m.effect()).isCloseTo(-P * (5 - C / 2), within(1e-9));
+        assertThat(m.at()).isCloseTo(25 - C / 2, within(1e-12));
+    }
+
+    @Test
+    void overhangSaggingMomentIsTheBackSpansWithTheLoadCentredOnIt() {
+        // load on the overhang only lifts the back span, so the simple span's Pℓ/4 − Pc/8 with the patch at ℓ/2
+        var m = ConcentratedCheck.place(new Support.Overhang(20, 5), P, C, ConcentratedCheck.Effect.MAX_MOMENT);
+        assertThat(m.effect()).isCloseTo(P * 20 / 4 - P * C / 8, within(1e-9));
+        assertThat(m.at()).isCloseTo(10, within(1e-12));
+    }
+
+    @Test
+    void overhangShearIsTheWholeLoadWithThePatchOnTheOverhang() {
+        // beside the support the shear is P with the patch wholly on the overhang; the back span's, P(x − ℓ)/ℓ, is
+        // less here (a − c/2 < ℓ) and largest at the tip, where the load is placed
+        var v = ConcentratedCheck.place(new Support.Overhang(20, 5), P, C, ConcentratedCheck.Effect.SHEAR);
+        assertThat(v.effect()).isCloseTo(P, within(1e-9));
+        assertThat(v.at()).isCloseTo(25 - C / 2, within(1e-12));
+        // an overhang longer than the back span: the back span's shear at the tip exceeds P
+        var longer = ConcentratedCheck.place(new Support.Overhang(8, 12), P, C, ConcentratedCheck.Effect.SHEAR);
+        assertThat(Math.abs(longer.effect())).isCloseTo(P * (12 - C / 2) / 8, within(1e-9)); // the left support lifts
     }
 
     @Test
