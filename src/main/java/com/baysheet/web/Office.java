@@ -38,12 +38,10 @@ import io.javalin.Javalin;
 import io.javalin.config.RoutesConfig;
 import org.eclipse.jetty.http.HttpException;
 import io.javalin.config.SizeUnit;
-import io.javalin.http.staticfiles.Location;
 
 import javax.sql.DataSource;
 import java.time.Clock;
 import java.util.Optional;
-import java.util.Set;
 
 /**
  * The whole office server, wired in this one place: the store, the accounts, the review store and the issuing
@@ -115,12 +113,6 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
             cfg.jetty.multipartConfig.maxTotalRequestSize(51, SizeUnit.MB);
             Views views = new Views();
             cfg.fileRenderer(views);
-            cfg.staticFiles.add(sf -> {
-                sf.hostedPath = "/static";
-                sf.directory = "/static";
-                sf.location = Location.CLASSPATH;
-                sf.roles = Set.of(Admit.OPEN);
-            });
             filters(cfg.routes, behindTls);
             cfg.routes.beforeMatched(access::check);
             cfg.routes.after(Headers::charset);
@@ -177,6 +169,7 @@ public record Office(Store store, Accounts accounts, ReviewStore review, Issuing
     /** The routes of every feature; each declares its roles beside its path. */
     private void routes(RoutesConfig r, AuditRecorder recorder, PageCache pages) {
         new Health(ds).install(r);
+        new StaticFiles().install(r);
         new AuthRoutes(accounts.logins(), setupCode, accounts.resets()).install(r);
         new AdminRoutes(accounts, review, issuing.signingKey(), who -> store.projects().firmChanged(who, "firm settings saved")).install(r);
         new TokenRoutes(accounts.tokens()).install(r);

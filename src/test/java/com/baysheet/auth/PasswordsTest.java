@@ -25,6 +25,15 @@ class PasswordsTest {
     }
 
     @Test
+    void theDecoyAnUnknownUserIsCheckedAgainstCostsWhatAPasswordOfTheSameStrengthDoes() {
+        // the kept decoy at the office strength is a real bcrypt hash of the decoy password, at that strength
+        assertThat(new org.springframework.security.crypto.bcrypt.BCryptPasswordEncoder(Passwords.DEFAULT_STRENGTH)
+                .matches(Passwords.DECOY_PASSWORD, Passwords.DECOY_AT_DEFAULT)).isTrue();
+        assertThat(new Passwords(Passwords.DEFAULT_STRENGTH).decoyStrength()).isEqualTo(Passwords.DEFAULT_STRENGTH);
+        assertThat(passwords.decoyStrength()).isEqualTo(4);
+    }
+
+    @Test
     void refusesShortAndOverlongPasswordsNamingTheField() {
         assertThatThrownBy(() -> Passwords.acceptable("newPassword", "short")).isInstanceOf(InputError.class)
                 .hasMessageStartingWith("newPassword:").hasMessageContaining("at least 10");
