@@ -105,6 +105,8 @@ final class DemoOffice implements AutoCloseable {
         ids.put("member", member);
         ids.put("stack", first(eng, "/api" + p + "/takedowns", "id"));
         ids.put("package", find(eng.get("/review" + p).body(), "/review" + p + "/packages/([A-Za-z0-9_.~-]+)\"", "package"));
+        // the stylesheet, which every page links
+        ids.put("name", "baysheet.css");
         // the demo keeps no deleted item: an id that names none, so restoring it is answered 404 (a 4xx, never a fault)
         ids.put("item", "999999");
         ids.put("user", find(client(Role.ADMINISTRATOR).get("/admin/users").body(),
