@@ -4,6 +4,7 @@ import com.baysheet.framing.Derived;
 import com.baysheet.framing.model.Building;
 import com.baysheet.project.Model;
 import com.baysheet.project.Project;
+import com.baysheet.review.MarkSheets;
 
 import org.jdbi.v3.core.Handle;
 
@@ -39,6 +40,15 @@ public final class Results {
         protected boolean removeEldestEntry(Map.Entry<Key, Computed> eldest) { return size() > CACHE_SIZE; }
     };
 
+    /** The marks a model write gave the building it derived, at the count of mark renames then committed. */
+    private record Marked(Computed computed, long renames, MarkSheets marks) {}
+
+    /** The last write's marks of each project, held for as many projects as the cache. */
+    private final Map<Long, Marked> marked = new LinkedHashMap<>(CACHE_SIZE, 0.75f, true) {
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<Long, Marked> eldest) { return size() > CACHE_SIZE; }
+    };
+
     public Results(Sql sql, Function<Building, Derived> derive) {
         this.sql = sql;
         this.derive = derive;
@@ -63,6 +73,23 @@ public final class Results {
     void offer(Computed c) {
         Model m = c.model();
         synchronized (cache) { cache.put(new Key(m.project().id(), m.project().version(), m.catalogueVersion(), m.firmVersion()), c); }
+    }
+
+    /**
+     * As {@link #offer(Computed)}, with the marks the write gave the building ({@code MarkBook.reconcile}) and the count of
+     * mark renames committed with it: a page of this building at that count has exactly these marks.
+     */
+    void offer(Computed c, MarkSheets marks, long renames) {
+        offer(c);
+        synchronized (cache) { marked.put(c.project().id(), new Marked(c, renames, marks)); }
+    }
+
+    /** The marks a model write gave this very building, if it was the project's last write and no mark was renamed since; else null. */
+    MarkSheets marks(Computed c, long renames) {
+        synchronized (cache) {
+            Marked m = marked.get(c.project().id());
+            return m != null && m.computed() == c && m.renames() == renames ? m.marks() : null;
+        }
     }
 
     static long firmVersion(Connection c) {
