@@ -48,9 +48,12 @@ public final class EditPage {
         long level = e.levels().get(floor - 1);
         String member = "L" + level + "-bay" + e.xLines().get(COL) + "x" + e.yLines().get(ROW) + "-b1";
         String page = "/projects/" + e.project() + "/members/" + member;
+        double entry = (System.nanoTime() - t0) / 1e9;
+        // the members the server derived, to set beside the framing benchmark's own derivation of the plan
+        int all = count(s.expect(s.get("/api/projects/" + e.project() + "/members"), 200).body());
         int onFloor = count(s.expect(s.get("/api/projects/" + e.project() + "/members?level=F" + floor), 200).body());
-        System.out.printf("entered: project %d, %d levels, %d requests in %.1f s; F%d has %d members; %s; page %s%n",
-                e.project(), levels, e.requests(), (System.nanoTime() - t0) / 1e9, floor, onFloor, memory(opt.get("pid")), page);
+        System.out.printf("entered: project %d, %d levels, %d requests in %.1f s; %,d members, %,d on F%d; %s; page %s%n",
+                e.project(), levels, e.requests(), entry, all, onFloor, floor, memory(opt.get("pid")), page);
 
         String edit = "/api/projects/" + e.project() + "/levels/" + level + "/bays";
         long version = e.version();
