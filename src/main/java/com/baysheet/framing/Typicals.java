@@ -4,6 +4,7 @@ import com.baysheet.engine.record.CalcRecord;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -29,8 +30,20 @@ public final class Typicals {
         ordered.sort(reading);
         record Key(MemberRole role, CalcRecord calculation) {}
         Map<Key, List<DerivedMember>> groups = new LinkedHashMap<>();
-        for (DerivedMember m : ordered)
-            groups.computeIfAbsent(new Key(m.role(), m.result().record().withSubject(NEUTRAL)), k -> new ArrayList<>()).add(m);
+        // members made from one calculation share its record's parts: the record is compared by value (every step
+        // hashed) once for each calculation, not once for each member
+        record Made(MemberRole role, RecordParts parts) {}
+        Map<Made, List<DerivedMember>> made = new HashMap<>();
+        for (DerivedMember m : ordered) {
+            CalcRecord r = m.result().record();
+            Made k = new Made(m.role(), new RecordParts(r));
+            List<DerivedMember> group = made.get(k);
+            if (group == null) {
+                group = groups.computeIfAbsent(new Key(m.role(), r.withSubject(NEUTRAL)), x -> new ArrayList<>());
+                made.put(k, group);
+            }
+            group.add(m);
+        }
         List<TypicalGroup> out = new ArrayList<>();
         for (var e : groups.entrySet()) out.add(new TypicalGroup(e.getKey().role(), e.getValue()));
         return out;

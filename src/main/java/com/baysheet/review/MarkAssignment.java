@@ -1,14 +1,17 @@
 package com.baysheet.review;
 
+import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.framing.TypicalGroup;
 
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.HashSet;
+import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.function.Function;
 
 /**
  * Which mark each typical group of a derivation carries, given the marks stored so far and the mark each
@@ -36,10 +39,16 @@ public final class MarkAssignment {
 
     /** @param carried each member id and the id of the mark it carried before */
     public static Result of(List<TypicalGroup> groups, List<Mark> stored, Map<String, Long> carried) {
-        Map<TypicalGroup, Mark> chosen = new HashMap<>();
-        Map<TypicalGroup, String> calc = new HashMap<>();
+        return of(groups, stored, carried, CalcFingerprint::of);
+    }
+
+    /** As {@link #of(List, List, Map)}, each group's calculation fingerprinted by {@code fingerprint} (as {@link CalcFingerprint#of} does). */
+    public static Result of(List<TypicalGroup> groups, List<Mark> stored, Map<String, Long> carried, Function<CalcRecord, String> fingerprint) {
+        // keyed by the group itself: a group's own hash would hash every member it holds, and no two groups are equal
+        Map<TypicalGroup, Mark> chosen = new IdentityHashMap<>();
+        Map<TypicalGroup, String> calc = new IdentityHashMap<>();
         Set<Long> taken = new HashSet<>();
-        for (TypicalGroup g : groups) calc.put(g, CalcFingerprint.of(g.calculation()));
+        for (TypicalGroup g : groups) calc.put(g, fingerprint.apply(g.calculation()));
         Map<Long, Mark> byId = new HashMap<>();
         for (Mark m : stored) byId.put(m.id(), m);
         for (TypicalGroup g : groups) {

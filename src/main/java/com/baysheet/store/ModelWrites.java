@@ -7,6 +7,7 @@ import com.baysheet.project.Model;
 import com.baysheet.project.Project;
 import com.baysheet.project.StoredLevel;
 import com.baysheet.review.AuditEvent;
+import com.baysheet.review.Fingerprints;
 import com.baysheet.store.review.AuditTrail;
 import com.baysheet.store.review.IssuedChanges;
 import com.baysheet.store.review.MarkBook;
@@ -34,6 +35,8 @@ public final class ModelWrites {
     private final Sql sql;
     private final Function<Building, Derived> derive;
     private final Results results;
+    /** The calculations' fingerprints of each write, for the next write of the project to look up rather than work out. */
+    private final Fingerprints fingerprints = new Fingerprints();
 
     /** @param results where a change's derived building goes once committed (null: kept nowhere) */
     public ModelWrites(Sql sql, Function<Building, Derived> derive, Results results) {
@@ -71,6 +74,8 @@ public final class ModelWrites {
 
     private <T> T change(Editor who, Sql.Work<String> action, long projectId, long version, Sql.Work<T> work, boolean withdraw) {
         Results.Computed[] done = new Results.Computed[1];
+        MarkSheets[] marked = new MarkSheets[1];
+        long[] renames = new long[1];
         T out = sql.tx(c -> {
             Instant at = sql.now();
             long next = ProjectStore.touch(c, projectId, version, at);
@@ -82,7 +87,10 @@ public final class ModelWrites {
             String diff = ModelDiff.between(was, m);
             Derived d = checked(m);
             done[0] = new Results.Computed(m, d);
-            IssuedChanges.Snapshot after = IssuedChanges.snapshot(c, projectId, d, MarkBook.reconcile(c, projectId, d, at));
+            marked[0] = MarkBook.reconcile(c, projectId, d, at, r -> fingerprints.of(projectId, r));
+            fingerprints.turn(projectId);
+            renames[0] = ProjectVersions.read(c, projectId).marks();
+            IssuedChanges.Snapshot after = IssuedChanges.snapshot(c, projectId, d, marked[0]);
             List<String> withdrawn = withdraw ? IssuedChanges.withdrawGone(c, projectId, before, after, at) : List.of();
             List<String> changed = IssuedChanges.between(before, after).stream().filter(n -> !withdrawn.contains(n)).toList();
             append(c, who, subject(m.project()), said
@@ -91,8 +99,8 @@ public final class ModelWrites {
                     + (withdrawn.isEmpty() ? "" : "; issued sheets withdrawn (kept): " + String.join(", ", withdrawn)), at);
             return result;
         });
-        // the building this change derived is the next page's: committed, it need not be derived again on read
-        if (results != null) results.offer(done[0]);
+        // the building this change derived, and its marks, are the next page's: committed, neither need be worked out again on read
+        if (results != null) results.offer(done[0], marked[0], renames[0]);
         return out;
     }
 

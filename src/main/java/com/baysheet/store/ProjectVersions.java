@@ -45,7 +45,7 @@ public final class ProjectVersions {
      * renames: a rename changes a mark's text and no model version; which member carries which mark, and which marks
      * there are, change only in a model write, with the model's version.
      */
-    private static Version read(Connection c, long projectId) {
+    static Version read(Connection c, long projectId) {
         try (Handle h = Sql.on(c)) {
             return h.createQuery("SELECT p.version, (SELECT catalogue_version FROM firm_state WHERE id = 1), "
                             + "COALESCE((SELECT version FROM firm_setting WHERE id = 1), 0), p.marks_version "
@@ -64,7 +64,9 @@ public final class ProjectVersions {
                 // which member carries which mark is written with the version: the same version before and after
                 // the marks are read means they are the marks of this model
                 Version before = read(c, projectId);
-                MarkSheets marks = MarkBook.read(c, projectId, computed.derived());
+                // the marks the write of this very building gave it, unless a rename has come since; else assigned again
+                MarkSheets given = results.marks(computed, before.marks());
+                MarkSheets marks = given != null ? given : MarkBook.read(c, projectId, computed.derived());
                 Version after = read(c, projectId);
                 boolean exact = before.model() == m.project().version() && after.model() == before.model()
                         && after.marks() == before.marks() && results.kept(computed);

@@ -4,6 +4,7 @@ import com.baysheet.framing.Derived;
 import com.baysheet.framing.model.Building;
 import com.baysheet.project.Model;
 import com.baysheet.project.Project;
+import com.baysheet.review.MarkSheets;
 
 import org.jdbi.v3.core.Handle;
 
@@ -39,6 +40,15 @@ public final class Results {
         protected boolean removeEldestEntry(Map.Entry<Key, Computed> eldest) { return size() > CACHE_SIZE; }
     };
 
+    /** The marks a model write gave the building it derived, at the count of mark renames then committed. */
+    private record Marked(Computed computed, long renames, MarkSheets marks) {}
+
+    /** The last write's marks of each project, held for as many projects as the cache. */
+    private final Map<Long, Marked> marked = new LinkedHashMap<>(CACHE_SIZE, 0.75f, true) {
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<Long, Marked> eldest) { return size() > CACHE_SIZE; }
+    };
+
     public Results(Sql sql, Function<Building, Derived> derive) {
         this.sql = sql;
         this.derive = derive;
@@ -52,7 +62,7 @@ public final class Results {
             Key read = new Key(projectId, m.project().version(), m.catalogueVersion(), m.firmVersion());
             Computed computed = new Computed(m, derive(m.building()));
             if (read.equals(sql.tx(c -> key(c, projectId)))) {
-                synchronized (cache) { cache.put(read, computed); }
+                hold(read, computed);
                 return computed;
             }
             if (attempt == READ_ATTEMPTS) return computed;
@@ -62,7 +72,37 @@ public final class Results {
     /** Keeps a building derived from a committed model (by a model write), so that reading it does not derive it again. */
     void offer(Computed c) {
         Model m = c.model();
-        synchronized (cache) { cache.put(new Key(m.project().id(), m.project().version(), m.catalogueVersion(), m.firmVersion()), c); }
+        hold(new Key(m.project().id(), m.project().version(), m.catalogueVersion(), m.firmVersion()), c);
+    }
+
+    /**
+     * Holds a building under its key, and lets go of the project's buildings of earlier versions: versions only grow, so
+     * no read asks for those again, and a run of saves to one project would otherwise fill the cache with its past
+     * states (16 derived buildings of one large project, past a 1 GB heap at 7 levels of the varied benchmark plan).
+     */
+    private void hold(Key k, Computed c) {
+        synchronized (cache) {
+            cache.keySet().removeIf(o -> o.project() == k.project() && !o.equals(k)
+                    && o.version() <= k.version() && o.catalogue() <= k.catalogue() && o.firm() <= k.firm());
+            cache.put(k, c);
+        }
+    }
+
+    /**
+     * As {@link #offer(Computed)}, with the marks the write gave the building ({@code MarkBook.reconcile}) and the count of
+     * mark renames committed with it: a page of this building at that count has exactly these marks.
+     */
+    void offer(Computed c, MarkSheets marks, long renames) {
+        offer(c);
+        synchronized (cache) { marked.put(c.project().id(), new Marked(c, renames, marks)); }
+    }
+
+    /** The marks a model write gave this very building, if it was the project's last write and no mark was renamed since; else null. */
+    MarkSheets marks(Computed c, long renames) {
+        synchronized (cache) {
+            Marked m = marked.get(c.project().id());
+            return m != null && m.computed() == c && m.renames() == renames ? m.marks() : null;
+        }
     }
 
     static long firmVersion(Connection c) {

@@ -6,6 +6,8 @@ import com.baysheet.engine.units.UnitSystem;
 import com.baysheet.framing.Derivation;
 import com.baysheet.project.Firm;
 import com.baysheet.project.FirmOccupancy;
+import com.baysheet.project.BayAssignment;
+import com.baysheet.project.Cell;
 import com.baysheet.project.Project;
 import com.baysheet.review.Actor;
 import com.baysheet.review.AuditEvent;
@@ -16,6 +18,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 import java.time.Clock;
+import java.util.List;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
@@ -87,6 +90,23 @@ class ProjectVersionsTest {
         ProjectVersions.Version back = store.versions().of(project);
         assertThat(back.marks()).isGreaterThan(w.marks());
         assertThat(back).isEqualTo(new ProjectVersions.Version(project, v.model(), v.catalogue(), v.firm(), back.marks()));
+    }
+
+    @Test
+    void theMarksABayEditGaveItsBuildingAreThoseAReadAssignsAndARenameAfterItIsShown() {
+        var level = store.levels().findByProject(project).stream().filter(l -> l.typicalOf() == null).findFirst().orElseThrow();
+        var bay = store.bays().findByLevel(project, level.id()).stream().filter(b -> !b.opening()).findFirst().orElseThrow();
+        store.bays().assign(Editor.DEMO, project, store.projects().find(project).version(), level.id(), new BayAssignment(
+                List.of(new Cell(bay.col(), bay.row())), false, bay.occupancy(), bay.deadLoad() + 5, bay.framing(), bay.cantilevers(),
+                bay.cantileverOccupancy()));
+        ProjectVersions.State s = store.versions().state(project);
+        assertThat(s.version()).isNotNull();
+        assertThat(s.marks().all()).isEqualTo(store.marks().of(project, s.computed().derived()).all());
+        var mark = s.marks().all().get(0).mark();
+        Caller who = new Caller(new Actor(1, "TT", Role.ENGINEER), "tess", "127.0.0.1");
+        store.marks().rename(project, mark.id(), "ZQ8", who);
+        assertThat(store.versions().state(project).marks().byId(mark.id()).orElseThrow().text()).isEqualTo("ZQ8");
+        store.marks().rename(project, mark.id(), mark.text(), who);
     }
 
     @Test

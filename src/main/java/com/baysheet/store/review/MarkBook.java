@@ -1,10 +1,12 @@
 package com.baysheet.store.review;
 
 import com.baysheet.engine.InputError;
+import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.framing.Derived;
 import com.baysheet.framing.TypicalGroup;
 import com.baysheet.framing.Typicals;
 import com.baysheet.review.AuditEvent;
+import com.baysheet.review.CalcFingerprint;
 import com.baysheet.review.Caller;
 import com.baysheet.review.Mark;
 import com.baysheet.review.MarkAssignment;
@@ -20,6 +22,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Function;
 
 /**
  * The marks of a project's typical members. A model write stores them ({@link #reconcile}) in its own
@@ -53,20 +56,29 @@ public final class MarkBook {
 
     /** Gives every group of the derivation its mark and stores them, on the model write's connection; returns them. */
     public static MarkSheets reconcile(Connection c, long projectId, Derived d, Instant at) throws SQLException {
+        return reconcile(c, projectId, d, at, CalcFingerprint::of);
+    }
+
+    /** As {@link #reconcile(Connection, long, Derived, Instant)}, each calculation fingerprinted by {@code fingerprint}. */
+    public static MarkSheets reconcile(Connection c, long projectId, Derived d, Instant at, Function<CalcRecord, String> fingerprint)
+            throws SQLException {
         List<Mark> stored = MarkRows.all(c, projectId);
         List<TypicalGroup> groups = d.members().isEmpty() ? List.of() : Typicals.of(d);
-        MarkAssignment.Result r = MarkAssignment.of(groups, stored, MarkRows.carried(c, projectId));
-        for (Mark m : r.retired()) MarkRows.update(c, m);
+        Map<String, Long> before = MarkRows.carried(c, projectId);
+        MarkAssignment.Result r = MarkAssignment.of(groups, stored, before, fingerprint);
+        Map<Long, Mark> was = new HashMap<>();
+        for (Mark m : stored) was.put(m.id(), m);
+        for (Mark m : r.retired()) updateChanged(c, was, m);
         List<MarkAssignment.Assigned> saved = new ArrayList<>();
         Map<String, Long> carried = new HashMap<>();
         for (MarkAssignment.Assigned a : r.assigned()) {
             Mark m = a.mark();
             if (m.id() == 0) m = new Mark(MarkRows.insert(c, projectId, m, at), m.prefix(), m.seq(), m.text(), m.calc(), m.originId(), true);
-            else MarkRows.update(c, m);
+            else updateChanged(c, was, m);
             saved.add(new MarkAssignment.Assigned(a.group(), m));
             for (String id : a.group().memberIds()) carried.put(id, m.id());
         }
-        MarkRows.locate(c, projectId, carried);
+        MarkRows.locate(c, projectId, before, carried);
         return sheets(new MarkAssignment.Result(saved, r.retired()), MarkRows.all(c, projectId));
     }
 
@@ -91,6 +103,12 @@ public final class MarkBook {
                     "renamed " + m.text() + " → " + to, who.address()), sql.now());
             return null;
         });
+    }
+
+    /** Writes a stored mark's calculation and whether it is carried, where either differs from its row. */
+    private static void updateChanged(Connection c, Map<Long, Mark> stored, Mark m) {
+        Mark was = stored.get(m.id());
+        if (was == null || !java.util.Objects.equals(was.calc(), m.calc()) || was.active() != m.active()) MarkRows.update(c, m);
     }
 
     private static MarkSheets sheets(MarkAssignment.Result r, List<Mark> stored) {

@@ -64,16 +64,23 @@ final class MarkRows {
         }
     }
 
-    /** Replaces the project's member → mark rows. */
-    static void locate(Connection c, long projectId, Map<String, Long> carried) {
+    /**
+     * Brings the project's member → mark rows from {@code before} (as stored) to {@code after}, writing only the rows
+     * that differ: an edit of one bay moves a few members of a building of tens of thousands.
+     */
+    static void locate(Connection c, long projectId, Map<String, Long> before, Map<String, Long> after) {
         try (Handle h = Sql.on(c)) {
-            h.createUpdate("DELETE FROM member_mark_location WHERE project_id = :project").bind("project", projectId).execute();
-            if (carried.isEmpty()) return;
-            PreparedBatch batch = h.prepareBatch("INSERT INTO member_mark_location (project_id, member_id, mark_id) "
-                    + "VALUES (:project, :member, :mark)");
-            for (var e : carried.entrySet())
-                batch.bind("project", projectId).bind("member", e.getKey()).bind("mark", e.getValue()).add();
-            batch.execute();
+            PreparedBatch gone = h.prepareBatch("DELETE FROM member_mark_location WHERE project_id = :project AND member_id = :member");
+            PreparedBatch moved = h.prepareBatch("UPDATE member_mark_location SET mark_id = :mark WHERE project_id = :project AND member_id = :member");
+            PreparedBatch added = h.prepareBatch("INSERT INTO member_mark_location (project_id, member_id, mark_id) VALUES (:project, :member, :mark)");
+            for (String member : before.keySet())
+                if (!after.containsKey(member)) gone.bind("project", projectId).bind("member", member).add();
+            for (var e : after.entrySet()) {
+                Long was = before.get(e.getKey());
+                if (e.getValue().equals(was)) continue;
+                (was == null ? added : moved).bind("project", projectId).bind("member", e.getKey()).bind("mark", e.getValue()).add();
+            }
+            for (PreparedBatch b : new PreparedBatch[]{gone, moved, added}) if (b.size() > 0) b.execute();
         }
     }
 }
