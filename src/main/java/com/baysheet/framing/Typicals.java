@@ -21,13 +21,19 @@ public final class Typicals {
     private Typicals() {}
 
     public static List<TypicalGroup> of(Derived d) {
-        List<String> levels = d.members().stream().map(DerivedMember::level).distinct().toList();
-        Comparator<DerivedMember> reading = Comparator.comparingInt((DerivedMember m) -> levels.indexOf(m.level()))
-                .thenComparingDouble(m -> Math.min(m.plan().x1(), m.plan().x2()))
-                .thenComparingDouble(m -> Math.min(m.plan().y1(), m.plan().y2()))
-                .thenComparing(DerivedMember::id);
-        List<DerivedMember> ordered = new ArrayList<>(d.members());
-        ordered.sort(reading);
+        // each member's place in reading order worked out once, not in every comparison of the sort (a level's rank
+        // was looked up in the list of levels twice a comparison: about a million comparisons for a tall building)
+        Map<String, Integer> levels = new HashMap<>();
+        record Place(int level, double x, double y, DerivedMember member) {}
+        List<Place> places = new ArrayList<>(d.members().size());
+        for (DerivedMember m : d.members()) {
+            int level = levels.computeIfAbsent(m.level(), l -> levels.size());
+            places.add(new Place(level, Math.min(m.plan().x1(), m.plan().x2()), Math.min(m.plan().y1(), m.plan().y2()), m));
+        }
+        places.sort(Comparator.comparingInt(Place::level).thenComparingDouble(Place::x).thenComparingDouble(Place::y)
+                .thenComparing(p -> p.member().id()));
+        List<DerivedMember> ordered = new ArrayList<>(places.size());
+        for (Place p : places) ordered.add(p.member());
         record Key(MemberRole role, CalcRecord calculation) {}
         Map<Key, List<DerivedMember>> groups = new LinkedHashMap<>();
         // members made from one calculation share its record's parts: the record is compared by value (every step
