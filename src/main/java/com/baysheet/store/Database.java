@@ -13,6 +13,7 @@ import java.nio.file.Path;
 import java.nio.file.attribute.PosixFilePermission;
 import java.nio.file.attribute.PosixFilePermissions;
 import java.sql.Connection;
+import java.sql.Statement;
 import java.util.Set;
 import java.util.stream.Stream;
 
@@ -101,7 +102,16 @@ public final class Database implements AutoCloseable {
      */
     public static boolean answers(DataSource ds, int timeoutSeconds) {
         try (Connection c = ds.getConnection(); Handle h = Sql.on(c)) {
-            return h.createQuery("SELECT 1").setQueryTimeout(timeoutSeconds).mapTo(Integer.class).findFirst().orElse(0) == 1;
+            try {
+                return h.createQuery("SELECT 1").setQueryTimeout(timeoutSeconds).mapTo(Integer.class).findFirst().orElse(0) == 1;
+            } finally {
+                // H2 takes a statement's query timeout as its session's (SET QUERY_TIMEOUT), and the pool does not reset
+                // it: left, every later statement on this pooled connection past the probe's few seconds would be
+                // cancelled (a large save refused with a server error); on PostgreSQL this is the statement's own, a no-op
+                try (Statement s = c.createStatement()) {
+                    s.setQueryTimeout(0);
+                }
+            }
         } catch (Exception e) {
             return false;
         }
