@@ -36,6 +36,8 @@ public final class Health {
 
     public void install(RoutesConfig r) {
         r.get("/health", this::answer, Admit.OPEN);
+        // a monitor may ask with HEAD: the same check, the status alone
+        r.head("/health", this::answer, Admit.OPEN);
     }
 
     void answer(Context ctx) {
