@@ -53,7 +53,7 @@ public final class EditPage {
         int all = count(s.expect(s.get("/api/projects/" + e.project() + "/members"), 200).body());
         int onFloor = count(s.expect(s.get("/api/projects/" + e.project() + "/members?level=F" + floor), 200).body());
         System.out.printf("entered: project %d, %d levels, %d requests in %.1f s; %,d members, %,d on F%d; %s; page %s%n",
-                e.project(), levels, e.requests(), entry, all, onFloor, floor, memory(opt.get("pid")), page);
+                e.project(), levels, e.requests(), entry, all, onFloor, floor, OfficeLoad.serverMemory(opt.get("pid")), page);
 
         String edit = "/api/projects/" + e.project() + "/levels/" + level + "/bays";
         long version = e.version();
@@ -81,7 +81,7 @@ public final class EditPage {
             sumMs[k] = (c - a) / 1e6;
         }
         String after = loadAverage();
-        System.out.printf("%d edits after %d warm-up; member page %,d characters; %s%n", edits, warmup, bytes, memory(opt.get("pid")));
+        System.out.printf("%d edits after %d warm-up; member page %,d characters; %s%n", edits, warmup, bytes, OfficeLoad.serverMemory(opt.get("pid")));
         report("edit (POST bays)", editMs);
         report("member page (GET)", pageMs);
         report("edit + page", sumMs);
@@ -100,17 +100,6 @@ public final class EditPage {
         int n = 0;
         for (int i = members.indexOf("\"id\""); i >= 0; i = members.indexOf("\"id\"", i + 1)) n++;
         return n;
-    }
-
-    private static String memory(String pid) {
-        if (pid == null) return "server RSS unknown (no --pid)";
-        try {
-            for (String line : Files.readAllLines(Path.of("/proc", pid, "status")))
-                if (line.startsWith("VmRSS:")) return "server RSS " + line.substring(6).strip();
-        } catch (IOException e) {
-            return "server RSS unreadable: " + e.getMessage();
-        }
-        return "server RSS not reported";
     }
 
     private static String loadAverage() throws IOException {

@@ -201,8 +201,10 @@ public final class OfficeLoad {
         return r.statusCode() == 200 && r.body().length > 4 && r.body()[0] == '%' && r.body()[1] == 'P';
     }
 
-    private String memory() {
-        String pid = opt.get("pid");
+    private String memory() { return serverMemory(opt.get("pid")); }
+
+    /** The server's resident memory from /proc, for the process {@code pid} (null: not known). */
+    static String serverMemory(String pid) {
         if (pid == null) return "server RSS unknown (no --pid)";
         try {
             for (String line : Files.readAllLines(Path.of("/proc", pid, "status")))

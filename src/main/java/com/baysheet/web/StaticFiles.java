@@ -1,5 +1,6 @@
 package com.baysheet.web;
 
+import com.baysheet.auth.Tokens;
 import com.baysheet.web.auth.Admit;
 import io.javalin.config.RoutesConfig;
 import io.javalin.http.Context;
@@ -8,9 +9,6 @@ import io.javalin.http.HttpStatus;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.util.HexFormat;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.regex.Pattern;
@@ -70,11 +68,6 @@ final class StaticFiles {
     }
 
     private static String tag(byte[] bytes) {
-        try {
-            byte[] d = MessageDigest.getInstance("SHA-256").digest(bytes);
-            return "\"" + HexFormat.of().formatHex(d, 0, 12) + "\"";
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException(e);
-        }
+        return "\"" + Tokens.sha256(bytes).substring(0, 24) + "\"";
     }
 }

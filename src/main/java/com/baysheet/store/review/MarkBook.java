@@ -22,6 +22,7 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.function.Function;
 
 /**
@@ -108,7 +109,7 @@ public final class MarkBook {
     /** Writes a stored mark's calculation and whether it is carried, where either differs from its row. */
     private static void updateChanged(Connection c, Map<Long, Mark> stored, Mark m) {
         Mark was = stored.get(m.id());
-        if (was == null || !java.util.Objects.equals(was.calc(), m.calc()) || was.active() != m.active()) MarkRows.update(c, m);
+        if (was == null || !Objects.equals(was.calc(), m.calc()) || was.active() != m.active()) MarkRows.update(c, m);
     }
 
     private static MarkSheets sheets(MarkAssignment.Result r, List<Mark> stored) {
