@@ -56,6 +56,7 @@ public final class Derivation {
         List<LevelPlan> plans = new ArrayList<>();
         List<LevelFraming> framings = new ArrayList<>();
         List<DerivedMember> members = new ArrayList<>();
+        List<List<DerivedMember>> parts = new ArrayList<>();
         Map<LevelInputs, LevelFraming> framed = new LinkedHashMap<>();
         GridNames names = new GridNames(b.grid());
         Map<TypicalFloor.Shape, Integer> typical = new java.util.HashMap<>(); // the first plain level of each shape, by place
@@ -84,6 +85,7 @@ public final class Derivation {
             plans.add(plan);
             framings.add(f);
             members.addAll(f.members);
+            if (!f.members.isEmpty()) parts.add(f.part());
         }
         ColumnTakeDown down = new ColumnTakeDown(b.context(), cache, plans, framings, b.selfWeights());
         List<TakeDown> takeDowns = new ArrayList<>();
@@ -97,9 +99,10 @@ public final class Derivation {
                     int first = members.size();
                     was = new Stack(in, down.stack(i, j, members), List.copyOf(members.subList(first, members.size())));
                 } else members.addAll(was.columns());
+                if (!was.columns().isEmpty()) parts.add(was.columns());
                 if (was.takeDown() != null) takeDowns.add(was.takeDown());
                 if (in != null) taken.put(i * ny + j, was);
             }
-        return new Framed(new Derived(b, members, takeDowns), framed, taken);
+        return new Framed(Derived.ofParts(b, parts, takeDowns), framed, taken);
     }
 }

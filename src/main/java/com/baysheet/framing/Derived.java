@@ -2,6 +2,7 @@ package com.baysheet.framing;
 
 import com.baysheet.framing.model.Building;
 
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -15,13 +16,21 @@ import java.util.Optional;
 public final class Derived {
     private final Building building;
     private final List<DerivedMember> members;
+    private final List<List<DerivedMember>> parts;
     private final List<TakeDown> takeDowns;
     private final Map<String, DerivedMember> memberById;
     private final Map<String, TakeDown> takeDownById;
+    /** Each level's members in derivation order, made on first use (a member page draws its level's plan). */
+    private volatile Map<String, List<DerivedMember>> byLevel;
 
     public Derived(Building building, List<DerivedMember> members, List<TakeDown> takeDowns) {
+        this(building, List.copyOf(members), takeDowns, null);
+    }
+
+    private Derived(Building building, List<DerivedMember> members, List<TakeDown> takeDowns, List<List<DerivedMember>> parts) {
         this.building = building;
-        this.members = List.copyOf(members);
+        this.members = members;
+        this.parts = parts != null ? parts : members.isEmpty() ? List.of() : List.of(members);
         this.takeDowns = List.copyOf(takeDowns);
         // sized once: a large building has a few hundred thousand members
         memberById = new HashMap<>(this.members.size() * 4 / 3 + 1);
@@ -30,7 +39,20 @@ public final class Derived {
         for (TakeDown t : this.takeDowns) takeDownById.putIfAbsent(t.id(), t);
     }
 
+    /**
+     * A derivation made of parts (a level's framing, a column stack), their members in this order: a part another
+     * derivation of the building reused is the same list object in both, so what is worked out from a part can be kept by it.
+     */
+    static Derived ofParts(Building building, List<List<DerivedMember>> parts, List<TakeDown> takeDowns) {
+        List<DerivedMember> all = new ArrayList<>();
+        for (List<DerivedMember> p : parts) all.addAll(p);
+        return new Derived(building, List.copyOf(all), takeDowns, List.copyOf(parts));
+    }
+
     public Building building() { return building; }
+
+    /** The members by the parts they were derived in (one part for a derivation not made of parts), in the order of {@link #members}. */
+    public List<List<DerivedMember>> parts() { return parts; }
 
     public List<DerivedMember> members() { return members; }
 
@@ -40,8 +62,18 @@ public final class Derived {
 
     public Optional<TakeDown> takeDown(String id) { return Optional.ofNullable(takeDownById.get(id)); }
 
+    /** Whether no two members share an id (the framing's ids are unique; a hand-built derivation may repeat one). */
+    public boolean idsUnique() { return memberById.size() == members.size(); }
+
     public List<DerivedMember> onLevel(String level) {
-        return members.stream().filter(m -> m.level().equals(level)).toList();
+        Map<String, List<DerivedMember>> b = byLevel;
+        if (b == null) {
+            Map<String, List<DerivedMember>> made = new HashMap<>();
+            for (DerivedMember m : members) made.computeIfAbsent(m.level(), l -> new ArrayList<>()).add(m);
+            made.replaceAll((l, on) -> List.copyOf(on));
+            byLevel = b = made;
+        }
+        return b.getOrDefault(level, List.of());
     }
 
     @Override

@@ -32,6 +32,8 @@ final class LevelFraming {
     final List<MemberResult> neutrals = new ArrayList<>();
     /** End shares arriving at each grid point, indexed [x line][y line]. */
     final List<EndShare>[][] atPoint;
+    /** {@link #members} once framed, as the one list every derivation reusing this framing holds ({@link Derived#parts}). */
+    private volatile List<DerivedMember> part;
     private final MemberCache cache;
     private final LevelPlan plan;
     private final Segment[][] alongX, alongY;
@@ -75,6 +77,11 @@ final class LevelFraming {
         this.pointLoads = List.of();
         this.steps = RoofSteps.NONE;
         this.open = SkyExposure.Open.NONE;
+    }
+
+    List<DerivedMember> part() {
+        if (part == null) synchronized (this) { if (part == null) part = List.copyOf(members); }
+        return part;
     }
 
     LevelFraming derive() {

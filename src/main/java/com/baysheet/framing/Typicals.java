@@ -3,16 +3,27 @@ package com.baysheet.framing;
 import com.baysheet.engine.record.CalcRecord;
 
 import java.util.ArrayList;
-import java.util.Comparator;
+import java.util.Collections;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
+import java.util.HashSet;
+import java.util.IdentityHashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 /**
  * Groups a derivation's members into typical members: one group per role and calculation, the calculation
- * compared with the member's name removed (what {@link MemberCache} already computes once). Groups come in
- * reading order: by their first location, level from the top down, then west to east, then south to north.
+ * compared with the member's name removed (what {@link MemberCache} already computes once). A group's members are in
+ * reading order (level from the top down, then west to east, then south to north, then by id), and groups come in
+ * the reading order of their first members.
+ *
+ * <p>A {@link Grouping} keeps what the next state of the building is grouped from ({@link #grouped(Derived, Grouping)}).
+ * A derivation is made of parts (a level's framing, a column stack), and a part an edit left alone is the same list
+ * in the next derivation ({@link Derived#parts}). So only the members of the parts an edit made or dropped are placed
+ * and compared, only the groups they belong to are made again, and every other group is the very group object of the
+ * last grouping: an edit of one bay in a building of seventy thousand members regroups a few thousand. The groups are
+ * exactly those worked out from nothing (TypicalsProperties compares them on random edits).
  */
 public final class Typicals {
     /** The subject a group's calculation is compared under. */
@@ -20,38 +31,249 @@ public final class Typicals {
 
     private Typicals() {}
 
-    public static List<TypicalGroup> of(Derived d) {
-        // each member's place in reading order worked out once, not in every comparison of the sort (a level's rank
-        // was looked up in the list of levels twice a comparison: about a million comparisons for a tall building)
-        Map<String, Integer> levels = new HashMap<>();
-        record Place(int level, double x, double y, DerivedMember member) {}
-        List<Place> places = new ArrayList<>(d.members().size());
-        for (DerivedMember m : d.members()) {
-            int level = levels.computeIfAbsent(m.level(), l -> levels.size());
-            places.add(new Place(level, Math.min(m.plan().x1(), m.plan().x2()), Math.min(m.plan().y1(), m.plan().y2()), m));
+    /** A derivation's typical groups, and what grouping the next state of its building starts from. */
+    public static final class Grouping {
+        private static final Grouping NONE = new Grouping(List.of(), Map.of(), new IdentityHashMap<>(), Map.of(), List.of(), Map.of());
+
+        private final List<TypicalGroup> groups;
+        private final Map<String, Integer> levels;
+        private final Map<List<DerivedMember>, Part> parts;
+        private final Map<Key, Group> byKey;
+        private final List<Group> order;
+        private final Map<Made, Key> keys;
+
+        private Grouping(List<TypicalGroup> groups, Map<String, Integer> levels, Map<List<DerivedMember>, Part> parts,
+                         Map<Key, Group> byKey, List<Group> order, Map<Made, Key> keys) {
+            this.groups = groups;
+            this.levels = levels;
+            this.parts = parts;
+            this.byKey = byKey;
+            this.order = order;
+            this.keys = keys;
         }
-        places.sort(Comparator.comparingInt(Place::level).thenComparingDouble(Place::x).thenComparingDouble(Place::y)
-                .thenComparing(p -> p.member().id()));
-        List<DerivedMember> ordered = new ArrayList<>(places.size());
-        for (Place p : places) ordered.add(p.member());
-        record Key(MemberRole role, CalcRecord calculation) {}
-        Map<Key, List<DerivedMember>> groups = new LinkedHashMap<>();
-        // members made from one calculation share its record's parts: the record is compared by value (every step
-        // hashed) once for each calculation, not once for each member
-        record Made(MemberRole role, RecordParts parts) {}
-        Map<Made, List<DerivedMember>> made = new HashMap<>();
-        for (DerivedMember m : ordered) {
+
+        public List<TypicalGroup> groups() { return groups; }
+    }
+
+    public static List<TypicalGroup> of(Derived d) {
+        return grouped(d, null).groups();
+    }
+
+    /**
+     * The typical groups of {@code d}, worked out from {@code before}, the grouping of an earlier state of the building
+     * (null: none). A group {@code d} has just as {@code before} had it, same members and calculation, is the same object.
+     */
+    public static Grouping grouped(Derived d, Grouping before) {
+        if (before == null) before = Grouping.NONE;
+        // each part's levels, then the levels' ranks (the order they first appear in): a part is placed again only
+        // where the ranks moved (a level added, removed or reordered) or ids repeat (their order is the derivation's)
+        Map<List<DerivedMember>, Part> parts = new IdentityHashMap<>();
+        for (List<DerivedMember> p : d.parts()) {
+            Part was = before.parts.get(p);
+            parts.put(p, was != null ? was : new Part(p));
+        }
+        Map<String, Integer> levels = new HashMap<>();
+        for (List<DerivedMember> p : d.parts()) for (String l : parts.get(p).levels) levels.putIfAbsent(l, levels.size());
+        boolean reuse = before.levels.equals(levels) && d.idsUnique();
+        if (!reuse) {
+            before = Grouping.NONE;
+            parts.replaceAll((p, was) -> was.places == null ? was : new Part(p));
+        }
+        Keys keys = new Keys(before);
+        // what the parts made or dropped changes: the groups their members belong to
+        Set<Key> touched = new LinkedHashSet<>();
+        Map<Key, List<Place>> arriving = new HashMap<>();
+        int seq = 0;
+        for (List<DerivedMember> p : d.parts()) {
+            Part part = parts.get(p);
+            if (part.places == null) {
+                part.places = new ArrayList<>(p.size());
+                for (int k = 0; k < p.size(); k++) {
+                    DerivedMember m = p.get(k);
+                    Place at = new Place(levels.get(m.level()), Math.min(m.plan().x1(), m.plan().x2()),
+                            Math.min(m.plan().y1(), m.plan().y2()), m, keys.of(m), seq + k, part);
+                    part.places.add(at);
+                    touched.add(at.key);
+                    arriving.computeIfAbsent(at.key, x -> new ArrayList<>()).add(at);
+                }
+            }
+            seq += p.size();
+        }
+        Set<Part> dropped = Collections.newSetFromMap(new IdentityHashMap<>());
+        for (var e : before.parts.entrySet())
+            if (!parts.containsKey(e.getKey())) {
+                dropped.add(e.getValue());
+                for (Place at : e.getValue().places) touched.add(at.key);
+            }
+        return regrouped(before, levels, parts, keys, touched, arriving, dropped);
+    }
+
+    /** The groups: those no touched key names kept as they were, the touched ones made again from who stays and who arrives. */
+    private static Grouping regrouped(Grouping before, Map<String, Integer> levels, Map<List<DerivedMember>, Part> parts, Keys keys,
+                                      Set<Key> touched, Map<Key, List<Place>> arriving, Set<Part> dropped) {
+        Map<Key, Group> byKey = new HashMap<>(before.byKey.size() * 4 / 3 + touched.size() + 1);
+        List<Group> kept = new ArrayList<>(before.order.size());
+        for (Group g : before.order)
+            if (!touched.contains(g.key)) {
+                kept.add(g);
+                byKey.put(g.key, g);
+            }
+        List<Group> made = new ArrayList<>();
+        for (Key k : touched) {
+            Group was = before.byKey.get(k);
+            List<Place> stay = new ArrayList<>();
+            if (was != null) for (Place at : was.places) if (!dropped.contains(at.part)) stay.add(at);
+            List<Place> come = arriving.getOrDefault(k, new ArrayList<>());
+            come.sort(null);
+            List<Place> places = merged(stay, come);
+            if (places.isEmpty()) continue;
+            Group g = new Group(k, places);
+            made.add(g);
+            byKey.put(k, g);
+        }
+        made.sort((a, b) -> a.first.compareTo(b.first));
+        List<Group> order = merged(kept, made, (a, b) -> a.first.compareTo(b.first));
+        List<TypicalGroup> groups = new ArrayList<>(order.size());
+        for (Group g : order) groups.add(g.group);
+        return new Grouping(List.copyOf(groups), levels, parts, byKey, order, keys.kept(byKey));
+    }
+
+    private static List<Place> merged(List<Place> a, List<Place> b) {
+        return merged(a, b, Place::compareTo);
+    }
+
+    /** Two lists each in order, as one in order. */
+    private static <T> List<T> merged(List<T> a, List<T> b, java.util.Comparator<T> order) {
+        if (b.isEmpty()) return a;
+        List<T> out = new ArrayList<>(a.size() + b.size());
+        int j = 0;
+        for (T x : a) {
+            while (j < b.size() && order.compare(b.get(j), x) < 0) out.add(b.get(j++));
+            out.add(x);
+        }
+        while (j < b.size()) out.add(b.get(j++));
+        return out;
+    }
+
+    /** A calculation as members are made from it: members made from one share its record's parts. Hashed once. */
+    private static final class Made {
+        final MemberRole role;
+        final RecordParts parts;
+        final int hash;
+
+        Made(MemberRole role, RecordParts parts) {
+            this.role = role;
+            this.parts = parts;
+            this.hash = role.hashCode() * 31 + parts.hashCode();
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return this == o || o instanceof Made m && hash == m.hash && role == m.role && parts.equals(m.parts);
+        }
+
+        @Override
+        public int hashCode() { return hash; }
+    }
+
+    /** A group's identity: its role and its calculation by value, hashed once (a record hashes every step). */
+    private static final class Key {
+        final MemberRole role;
+        final CalcRecord calculation;
+        final int hash;
+
+        Key(MemberRole role, CalcRecord calculation) {
+            this.role = role;
+            this.calculation = calculation;
+            this.hash = role.hashCode() * 31 + calculation.hashCode();
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return this == o || o instanceof Key k && hash == k.hash && role == k.role && calculation.equals(k.calculation);
+        }
+
+        @Override
+        public int hashCode() { return hash; }
+    }
+
+    /**
+     * Each member's group key. A calculation is compared by value once: its members share its record's parts, and the
+     * key a calculation had in the last grouping is kept by them. One key object stands for each group, so that
+     * finding a group by its key compares no record.
+     */
+    private static final class Keys {
+        private final Map<Made, Key> made;
+        private final Map<Key, Group> groups;
+        private final Map<Key, Key> fresh = new HashMap<>();
+
+        Keys(Grouping before) {
+            made = new HashMap<>(before.keys);
+            groups = before.byKey;
+        }
+
+        Key of(DerivedMember m) {
             CalcRecord r = m.result().record();
             Made k = new Made(m.role(), new RecordParts(r));
-            List<DerivedMember> group = made.get(k);
-            if (group == null) {
-                group = groups.computeIfAbsent(new Key(m.role(), r.withSubject(NEUTRAL)), x -> new ArrayList<>());
-                made.put(k, group);
+            Key key = made.get(k);
+            if (key == null) {
+                key = new Key(m.role(), r.withSubject(NEUTRAL));
+                Group g = groups.get(key);
+                Key first = g != null ? g.key : fresh.putIfAbsent(key, key);
+                if (first != null) key = first;
+                made.put(k, key);
             }
-            group.add(m);
+            return key;
         }
-        List<TypicalGroup> out = new ArrayList<>();
-        for (var e : groups.entrySet()) out.add(new TypicalGroup(e.getKey().role(), e.getValue()));
-        return out;
+
+        /** The calculations for the next grouping: those of groups gone are let go once they outnumber the groups there. */
+        Map<Made, Key> kept(Map<Key, Group> now) {
+            if (made.size() > 2 * now.size() + 1024) made.values().removeIf(k -> !now.containsKey(k));
+            return made;
+        }
+    }
+
+    /** A part's levels in the order they appear in it, and each member's place (made once the levels are ranked). */
+    private static final class Part {
+        final List<String> levels;
+        List<Place> places;
+
+        Part(List<DerivedMember> members) {
+            Set<String> in = new LinkedHashSet<>();
+            for (DerivedMember m : members) in.add(m.level());
+            levels = List.copyOf(in);
+        }
+    }
+
+    /** One typical group, with its members' places in reading order. */
+    private static final class Group {
+        final Key key;
+        final List<Place> places;
+        final Place first;
+        final TypicalGroup group;
+
+        Group(Key key, List<Place> places) {
+            this.key = key;
+            this.places = places;
+            this.first = places.get(0);
+            List<DerivedMember> members = new ArrayList<>(places.size());
+            for (Place p : places) members.add(p.member);
+            group = new TypicalGroup(key.role, members);
+        }
+    }
+
+    /**
+     * A member's place in reading order, its group's key and the part it was derived in. {@code seq}, its place in the
+     * derivation, breaks a tie only where ids repeat (then the derivation's order stands, as a stable sort keeps it).
+     */
+    private record Place(int level, double x, double y, DerivedMember member, Key key, int seq, Part part) implements Comparable<Place> {
+        @Override
+        public int compareTo(Place o) {
+            int c = Integer.compare(level, o.level);
+            if (c == 0) c = Double.compare(x, o.x);
+            if (c == 0) c = Double.compare(y, o.y);
+            if (c == 0) c = member.id().compareTo(o.member.id());
+            return c != 0 ? c : Integer.compare(seq, o.seq);
+        }
     }
 }

@@ -1,7 +1,12 @@
 package com.baysheet.store;
 
 import com.baysheet.project.Model;
+import com.baysheet.framing.model.Building;
+import com.baysheet.framing.model.Level;
+import com.fasterxml.jackson.annotation.JsonIgnoreProperties;
 import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 
@@ -39,7 +44,7 @@ final class ModelDiff {
         int[] total = {0};
         walk("project", tree(before.project()), tree(after.project()), out, total);
         walk("levels", tree(before.levels()), tree(after.levels()), out, total);
-        walk("building", tree(before.building()), tree(after.building()), out, total);
+        walk("building", building(before.building(), after.building()), building(after.building(), before.building()), out, total);
         if (total[0] == 0) return "";
         return "changed: " + String.join("; ", out) + (total[0] > out.size() ? "; and " + (total[0] - out.size()) + " more" : "");
     }
@@ -47,6 +52,27 @@ final class ModelDiff {
     private static JsonNode tree(Object o) {
         return JSON.valueToTree(o);
     }
+
+    /**
+     * {@code b}'s tree as {@link #tree} writes it, but each level equal to {@code other}'s level at its place written as
+     * a placeholder that compares equal: an edit of one level of a tall building writes only that level's bays.
+     */
+    private static JsonNode building(Building b, Building other) {
+        ObjectNode t = WITHOUT_LEVELS.valueToTree(b);
+        ArrayNode levels = t.putArray("levels");
+        for (int k = 0; k < b.levels().size(); k++) {
+            Level l = b.levels().get(k);
+            levels.add(k < other.levels().size() && l.equals(other.levels().get(k)) ? SAME : JSON.valueToTree(l));
+        }
+        return t;
+    }
+
+    /** A building written without its levels (added one by one by {@link #building}). */
+    @JsonIgnoreProperties("levels")
+    private abstract static class NoLevels {}
+
+    private static final ObjectMapper WITHOUT_LEVELS = JSON.copy().addMixIn(Building.class, NoLevels.class);
+    private static final JsonNode SAME = JSON.getNodeFactory().textNode("(same level)");
 
     private static void walk(String path, JsonNode a, JsonNode b, List<String> out, int[] total) {
         if (a != null && b != null && a.equals(b)) return;

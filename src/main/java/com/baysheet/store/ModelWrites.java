@@ -37,6 +37,8 @@ public final class ModelWrites {
     private final Results results;
     /** The calculations' fingerprints of each write, for the next write of the project to look up rather than work out. */
     private final Fingerprints fingerprints = new Fingerprints();
+    /** What each project's last write left its marks as, for its next write to start from. */
+    private final KeptMarks kept = new KeptMarks();
 
     /** @param results where a change's derived building goes once committed (null: kept nowhere) */
     public ModelWrites(Sql sql, Function<Building, Derived> derive, Results results) {
@@ -46,6 +48,9 @@ public final class ModelWrites {
     }
 
     public ModelWrites(Sql sql, Function<Building, Derived> derive) { this(sql, derive, null); }
+
+    /** How many writes started from the marks the project's last write left (rather than from its rows), for tests. */
+    long keptStarts() { return kept.starts(); }
 
     /**
      * @param who    who asks for the change, as the audit entry names them
@@ -76,20 +81,29 @@ public final class ModelWrites {
         Results.Computed[] done = new Results.Computed[1];
         MarkSheets[] marked = new MarkSheets[1];
         long[] renames = new long[1];
+        KeptMarks.Entry[] left = new KeptMarks.Entry[1];
         T out = sql.tx(c -> {
             Instant at = sql.now();
+            ProjectVersions.Version start = ProjectVersions.read(c, projectId);
+            MarkBook.Kept from = kept.at(projectId, start);
             long next = ProjectStore.touch(c, projectId, version, at);
             String said = action.run(c);
-            Model was = BuildingMapper.load(c, projectId);
+            // the model as it stands before the change: the one derived at these versions where it is held (the same but
+            // for the project's version and time, which the change's own claim has just moved and the entry leaves out)
+            Model held = results == null ? null : results.modelAt(start);
+            Model was = held != null ? held : BuildingMapper.load(c, projectId);
             IssuedChanges.Snapshot before = issuedBefore(c, projectId, was);
             T result = work.run(c);
             Model m = BuildingMapper.load(c, projectId);
             String diff = ModelDiff.between(was, m);
             Derived d = checked(m);
             done[0] = new Results.Computed(m, d);
-            marked[0] = MarkBook.reconcile(c, projectId, d, at, r -> fingerprints.of(projectId, r));
+            MarkBook.Reconciled given = MarkBook.reconcile(c, projectId, d, at, r -> fingerprints.of(projectId, r), from);
+            marked[0] = given.sheets();
             fingerprints.turn(projectId);
-            renames[0] = ProjectVersions.read(c, projectId).marks();
+            ProjectVersions.Version now = ProjectVersions.read(c, projectId);
+            renames[0] = now.marks();
+            left[0] = new KeptMarks.Entry(now, given.kept());
             IssuedChanges.Snapshot after = IssuedChanges.snapshot(c, projectId, d, marked[0]);
             List<String> withdrawn = withdraw ? IssuedChanges.withdrawGone(c, projectId, before, after, at) : List.of();
             List<String> changed = IssuedChanges.between(before, after).stream().filter(n -> !withdrawn.contains(n)).toList();
@@ -101,6 +115,7 @@ public final class ModelWrites {
         });
         // the building this change derived, and its marks, are the next page's: committed, neither need be worked out again on read
         if (results != null) results.offer(done[0], marked[0], renames[0]);
+        kept.put(projectId, left[0]);
         return out;
     }
 
@@ -111,16 +126,20 @@ public final class ModelWrites {
      */
     public Project create(Editor who, String action, Sql.Work<Long> work) {
         Results.Computed[] done = new Results.Computed[1];
+        KeptMarks.Entry[] left = new KeptMarks.Entry[1];
         Project out = sql.tx(c -> {
             long id = work.run(c);
             Model m = BuildingMapper.load(c, id);
             Derived d = checked(m);
             done[0] = new Results.Computed(m, d);
-            MarkBook.reconcile(c, id, d, sql.now());
+            MarkBook.Kept given = MarkBook.reconcile(c, id, d, sql.now(), r -> fingerprints.of(id, r), null).kept();
+            fingerprints.turn(id);
+            left[0] = new KeptMarks.Entry(ProjectVersions.read(c, id), given);
             append(c, who, subject(m.project()), action, sql.now());
             return m.project();
         });
         if (results != null) results.offer(done[0]);
+        kept.put(out.id(), left[0]);
         return out;
     }
 

@@ -120,6 +120,12 @@ public final class Results {
         synchronized (cache) { return cache.get(new Key(m.project().id(), m.project().version(), m.catalogueVersion(), m.firmVersion())) == c; }
     }
 
+    /** The model held for exactly these versions of its project, or null. */
+    Model modelAt(ProjectVersions.Version v) {
+        Computed c = cached(new Key(v.project(), v.model(), v.catalogue(), v.firm()));
+        return c == null ? null : c.model();
+    }
+
     /** How many derived buildings are held, for tests of the cache. */
     public int cachedCount() {
         synchronized (cache) { return cache.size(); }

@@ -4,9 +4,12 @@ import com.baysheet.engine.record.CalcRecord;
 import com.baysheet.framing.model.Building;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
+import net.jqwik.api.constraints.IntRange;
+import com.baysheet.engine.InputError;
 
 import java.util.HashSet;
 import java.util.List;
+import java.util.Random;
 import java.util.Set;
 
 import static org.assertj.core.api.Assertions.assertThat;
@@ -56,6 +59,38 @@ class TypicalsProperties {
             assertThat(note).as("seed %d", seed).endsWith(": " + String.join("; ", g.locations()) + ".");
             assertThat(new HashSet<>(g.locations())).as("seed %d: no location twice", seed).hasSize(g.members().size());
             assertThat(g.record("X1").subject()).isEqualTo("X1");
+        }
+    }
+
+    /**
+     * Grouped from the grouping of the state before an edit (the derivation reusing the members the edit left alone),
+     * the groups are exactly those worked out from nothing: the same groups in the same order, the same members in
+     * the same order, each group's calculation equal.
+     */
+    @Property(tries = 60)
+    void aBuildingGroupedFromItsLastGroupingIsGroupedAsFromNothing(@ForAll long seed, @ForAll @IntRange(min = 1, max = 4) int edits) {
+        Random rnd = new Random(seed);
+        Building b = RederivationProperties.model(rnd, seed);
+        Rederivation again = new Rederivation();
+        Typicals.Grouping last = null;
+        for (int e = 0; e <= edits; e++) {
+            Derived d;
+            try {
+                d = again.derive(b);
+            } catch (InputError refused) {
+                b = RederivationProperties.edit(b, rnd.nextInt(RederivationProperties.EDITS), rnd);
+                continue;
+            }
+            Typicals.Grouping now = Typicals.grouped(d, last);
+            List<TypicalGroup> whole = Typicals.of(d);
+            assertThat(now.groups()).as("seed %d, edit %d", seed, e).hasSameSizeAs(whole);
+            for (int g = 0; g < whole.size(); g++) {
+                assertThat(now.groups().get(g).role()).isEqualTo(whole.get(g).role());
+                assertThat(now.groups().get(g).memberIds()).as("seed %d, edit %d, group %d", seed, e, g).isEqualTo(whole.get(g).memberIds());
+                assertThat(now.groups().get(g).calculation()).isEqualTo(whole.get(g).calculation());
+            }
+            last = now;
+            b = RederivationProperties.edit(b, rnd.nextInt(RederivationProperties.EDITS), rnd);
         }
     }
 }

@@ -1,0 +1,96 @@
+package com.baysheet.store;
+
+import com.baysheet.engine.InputError;
+import com.baysheet.framing.Derivation;
+import com.baysheet.framing.Rederivation;
+import com.baysheet.framing.model.Bay;
+import com.baysheet.framing.model.Direction;
+import com.baysheet.framing.model.Framing;
+import com.baysheet.project.BayAssignment;
+import com.baysheet.project.Cell;
+import com.baysheet.project.Project;
+import com.baysheet.project.StoredLevel;
+import org.junit.jupiter.api.Test;
+
+import java.sql.Connection;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.Clock;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Random;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+/**
+ * A model write that starts from what the project's last write left its marks as (the typical members grouped from
+ * that write's grouping, the rows taken as kept) leaves exactly the rows a write that reads them leaves: the same
+ * random edits on two databases, one through a store that keeps its marks from write to write (and derives again from
+ * the last state, as the server does), the other through a new store for every edit, so that each write reads the rows.
+ */
+class KeptMarksTest {
+    @Test
+    void writesFromKeptMarksLeaveTheRowsThatWritesReadingThemLeave() throws SQLException {
+        try (Database a = Database.open(TestDatabases.h2()); Database b = Database.open(TestDatabases.h2())) {
+            Clock clock = Clock.systemUTC();
+            Sql sql = new Sql(a.dataSource(), clock);
+            Rederivation again = new Rederivation();
+            ModelWrites writes = new ModelWrites(sql, again::derive, new Results(sql, again::derive));
+            BayStore kept = new BayStore(writes, new OccupancyStore(sql));
+            Store first = Store.on(a.dataSource(), again::derive, clock);
+            List<Project> projects = Demo.loadIfEmpty(first);
+            Demo.loadIfEmpty(Store.on(b.dataSource(), Derivation::derive, clock));
+            Project p = projects.stream().max(Comparator.comparingInt(x -> first.results().of(x.id()).derived().members().size())).orElseThrow();
+            List<StoredLevel> levels = first.levels().findByProject(p.id());
+            Random rnd = new Random(20261204);
+            for (int e = 0; e < 30; e++) {
+                StoredLevel level = levels.get(rnd.nextInt(levels.size()));
+                List<Bay> bays = kept.findByLevel(p.id(), level.id()).stream().filter(x -> !x.opening()).toList();
+                if (bays.isEmpty()) continue;
+                BayAssignment edit = edit(bays.get(rnd.nextInt(bays.size())), rnd);
+                Store fresh = Store.on(b.dataSource(), Derivation::derive, clock);
+                try {
+                    kept.assign(Editor.DEMO, p.id(), first.projects().find(p.id()).version(), level.id(), edit);
+                } catch (InputError refused) {
+                    // a turned bay the framing refuses is refused alike on the other database, and nothing is written
+                    assertThatThrownBy(() -> fresh.bays().assign(Editor.DEMO, p.id(), fresh.projects().find(p.id()).version(), level.id(), edit))
+                            .isInstanceOf(InputError.class).hasMessage(refused.getMessage());
+                    continue;
+                }
+                fresh.bays().assign(Editor.DEMO, p.id(), fresh.projects().find(p.id()).version(), level.id(), edit);
+                assertThat(rows(a, p.id())).as("edit %d", e).isEqualTo(rows(b, p.id()));
+            }
+            // all but the first write started from the marks the write before it left
+            assertThat(writes.keptStarts()).isGreaterThanOrEqualTo(20);
+        }
+    }
+
+    /** The bay with its dead load moved by a step of 5 (often back to where it was), or its beams turned. */
+    private static BayAssignment edit(Bay x, Random rnd) {
+        Framing f = x.framing();
+        if (rnd.nextInt(4) == 0 && f != null)
+            f = new Framing(f.beams() == Direction.X ? Direction.Y : Direction.X, f.infillBeams());
+        double dead = x.deadLoad() + 5 * (rnd.nextInt(3) - 1);
+        return new BayAssignment(List.of(new Cell(x.col(), x.row())), false, x.occupancy(), dead, f, x.cantilevers(), x.cantileverOccupancy());
+    }
+
+    /** The project's marks and which member carries which, as rows of text. */
+    private static List<String> rows(Database db, long projectId) throws SQLException {
+        List<String> out = new ArrayList<>();
+        try (Connection c = db.dataSource().getConnection(); Statement s = c.createStatement()) {
+            try (ResultSet r = s.executeQuery("SELECT id, prefix, seq_no, mark_text, calc_sha256, origin_id, active FROM member_mark "
+                    + "WHERE project_id = " + projectId + " ORDER BY id")) {
+                while (r.next()) out.add("mark " + r.getLong(1) + " " + r.getString(2) + r.getInt(3) + " " + r.getString(4) + " "
+                        + r.getString(5) + " from " + r.getObject(6) + " " + r.getBoolean(7));
+            }
+            try (ResultSet r = s.executeQuery("SELECT member_id, mark_id FROM member_mark_location WHERE project_id = " + projectId
+                    + " ORDER BY member_id")) {
+                while (r.next()) out.add(r.getString(1) + " " + r.getLong(2));
+            }
+        }
+        return out;
+    }
+}
