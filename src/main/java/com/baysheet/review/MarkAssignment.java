@@ -44,14 +44,34 @@ public final class MarkAssignment {
 
     /** As {@link #of(List, List, Map)}, each group's calculation fingerprinted by {@code fingerprint} (as {@link CalcFingerprint#of} does). */
     public static Result of(List<TypicalGroup> groups, List<Mark> stored, Map<String, Long> carried, Function<CalcRecord, String> fingerprint) {
+        return of(groups, stored, carried, fingerprint, Map.of());
+    }
+
+    /**
+     * As {@link #of(List, List, Map, Function)}, where each group of {@code unchanged} (by identity) is known to be a group
+     * the last assignment gave its mark, every member carrying it, with the same members and calculation: rule 1 gives
+     * it that mark again (no other group's members carried it), so it is given without counting its members, and only
+     * the other groups are worked out. An edit of one bay leaves most groups of a building unchanged.
+     */
+    public static Result of(List<TypicalGroup> groups, List<Mark> stored, Map<String, Long> carried, Function<CalcRecord, String> fingerprint,
+                            Map<TypicalGroup, Mark> unchanged) {
         // keyed by the group itself: a group's own hash would hash every member it holds, and no two groups are equal
         Map<TypicalGroup, Mark> chosen = new IdentityHashMap<>();
         Map<TypicalGroup, String> calc = new IdentityHashMap<>();
         Set<Long> taken = new HashSet<>();
-        for (TypicalGroup g : groups) calc.put(g, fingerprint.apply(g.calculation()));
+        for (TypicalGroup g : groups) {
+            Mark m = unchanged.isEmpty() ? null : unchanged.get(g);
+            if (m == null) calc.put(g, fingerprint.apply(g.calculation()));
+            else {
+                calc.put(g, m.calc());
+                chosen.put(g, m.given(m.calc(), true));
+                taken.add(m.id());
+            }
+        }
         Map<Long, Mark> byId = new HashMap<>();
         for (Mark m : stored) byId.put(m.id(), m);
         for (TypicalGroup g : groups) {
+            if (chosen.containsKey(g)) continue;
             Mark m = byId.get(mostCarried(g, carried, byId, x -> x.calc().equals(calc.get(g))));
             if (m != null && !taken.contains(m.id()) && m.prefix().equals(Mark.prefix(g.role()))) {
                 chosen.put(g, m.given(calc.get(g), true));

@@ -6,10 +6,13 @@ import com.baysheet.framing.MemberLabel;
 import com.baysheet.framing.MemberLabels;
 import com.baysheet.framing.TypicalGroup;
 
+import java.util.Collections;
 import java.util.HashMap;
+import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 
 /**
  * A project's typical members, each with its mark: one sheet per mark, the unit of review. A mark sheet's
@@ -31,16 +34,62 @@ public final class MarkSheets {
         public boolean stored() { return mark.id() != 0; }
     }
 
+    /** How many {@link #after} sheets may be laid over one another before a lookup table is made whole again. */
+    private static final int LAYERS = 4;
+    /** Where a member of an earlier layer has no sheet in this one. */
+    private static final MarkSheet NONE = new MarkSheet(null, null, null);
+
     private final List<MarkSheet> sheets;
-    private final Map<String, MarkSheet> byMember = new HashMap<>();
+    /** Each member's sheet: all of them, or (laid over {@link #under}) those whose sheet is not {@code under}'s. */
+    private final Map<String, MarkSheet> byMember;
+    private final MarkSheets under;
+    private final int depth;
     private final Map<Long, MarkSheet> byId = new HashMap<>();
 
     public MarkSheets(List<MarkSheet> sheets) {
         this.sheets = List.copyOf(sheets);
+        this.byMember = new HashMap<>();
+        this.under = null;
+        this.depth = 0;
         for (MarkSheet s : this.sheets) {
             for (DerivedMember m : s.group().members()) byMember.put(m.id(), s);
             if (s.stored()) byId.put(s.mark().id(), s);
         }
+    }
+
+    private MarkSheets(List<MarkSheet> sheets, Map<String, MarkSheet> byMember, MarkSheets under) {
+        this.sheets = sheets;
+        this.byMember = byMember;
+        this.under = under;
+        this.depth = under.depth + 1;
+        for (MarkSheet s : sheets) if (s.stored()) byId.put(s.mark().id(), s);
+    }
+
+    /**
+     * The sheets {@code now}, where those that are the very sheet objects of {@code before} have the same members: each
+     * member's sheet is looked up among the sheets that changed, then in {@code before}, so that a write which changed a
+     * few groups of a large building indexes only their members. Made whole again every few writes.
+     */
+    public static MarkSheets after(MarkSheets before, List<MarkSheet> now) {
+        if (before.depth >= LAYERS) return new MarkSheets(now);
+        Set<MarkSheet> kept = Collections.newSetFromMap(new IdentityHashMap<>());
+        kept.addAll(now);
+        Map<String, MarkSheet> changed = new HashMap<>();
+        for (MarkSheet s : before.sheets)
+            if (!kept.contains(s)) for (DerivedMember m : s.group().members()) changed.put(m.id(), NONE);
+        Set<MarkSheet> was = Collections.newSetFromMap(new IdentityHashMap<>());
+        was.addAll(before.sheets);
+        for (MarkSheet s : now)
+            if (!was.contains(s)) for (DerivedMember m : s.group().members()) changed.put(m.id(), s);
+        return new MarkSheets(List.copyOf(now), changed, before);
+    }
+
+    private MarkSheet sheetOf(String memberId) {
+        for (MarkSheets at = this; at != null; at = at.under) {
+            MarkSheet s = at.byMember.get(memberId);
+            if (s != null) return s == NONE ? null : s;
+        }
+        return null;
     }
 
     /** The marks a derivation is given when none are stored yet (what a project's first model write stores), unsaved. */
@@ -52,13 +101,13 @@ public final class MarkSheets {
     /** In reading order (by each mark's first location). */
     public List<MarkSheet> all() { return sheets; }
 
-    public Optional<MarkSheet> ofMember(String memberId) { return Optional.ofNullable(byMember.get(memberId)); }
+    public Optional<MarkSheet> ofMember(String memberId) { return Optional.ofNullable(sheetOf(memberId)); }
 
     public Optional<MarkSheet> byId(long markId) { return Optional.ofNullable(byId.get(markId)); }
 
     /** The member → label lookup other sheets and schedules print: the member's mark, or its id where it has none. */
     public String label(String memberId) {
-        MarkSheet s = byMember.get(memberId);
+        MarkSheet s = sheetOf(memberId);
         return s == null ? memberId : s.text();
     }
 
@@ -68,7 +117,7 @@ public final class MarkSheets {
      */
     public MemberLabels labels() {
         return m -> {
-            MarkSheet s = byMember.get(m.id());
+            MarkSheet s = sheetOf(m.id());
             return s == null ? MemberLabel.of(m) : s.text();
         };
     }

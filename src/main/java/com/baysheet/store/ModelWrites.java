@@ -11,6 +11,7 @@ import com.baysheet.review.Fingerprints;
 import com.baysheet.store.review.AuditTrail;
 import com.baysheet.store.review.IssuedChanges;
 import com.baysheet.store.review.MarkBook;
+import com.baysheet.store.review.MarkWrites;
 import com.baysheet.review.MarkSheets;
 
 import java.sql.Connection;
@@ -85,7 +86,7 @@ public final class ModelWrites {
         T out = sql.tx(c -> {
             Instant at = sql.now();
             ProjectVersions.Version start = ProjectVersions.read(c, projectId);
-            MarkBook.Kept from = kept.at(projectId, start);
+            MarkWrites.Kept from = kept.at(projectId, start);
             long next = ProjectStore.touch(c, projectId, version, at);
             String said = action.run(c);
             // the model as it stands before the change: the one derived at these versions where it is held (the same but
@@ -98,7 +99,7 @@ public final class ModelWrites {
             String diff = ModelDiff.between(was, m);
             Derived d = checked(m);
             done[0] = new Results.Computed(m, d);
-            MarkBook.Reconciled given = MarkBook.reconcile(c, projectId, d, at, r -> fingerprints.of(projectId, r), from);
+            MarkWrites.Reconciled given = MarkWrites.reconcile(c, projectId, d, at, r -> fingerprints.of(projectId, r), from);
             marked[0] = given.sheets();
             fingerprints.turn(projectId);
             ProjectVersions.Version now = ProjectVersions.read(c, projectId);
@@ -132,7 +133,7 @@ public final class ModelWrites {
             Model m = BuildingMapper.load(c, id);
             Derived d = checked(m);
             done[0] = new Results.Computed(m, d);
-            MarkBook.Kept given = MarkBook.reconcile(c, id, d, sql.now(), r -> fingerprints.of(id, r), null).kept();
+            MarkWrites.Kept given = MarkWrites.reconcile(c, id, d, sql.now(), r -> fingerprints.of(id, r), null).kept();
             fingerprints.turn(id);
             left[0] = new KeptMarks.Entry(ProjectVersions.read(c, id), given);
             append(c, who, subject(m.project()), action, sql.now());
@@ -156,7 +157,7 @@ public final class ModelWrites {
                 work.run(c);
                 Model m = BuildingMapper.load(c, projectId);
                 Derived d = checked(m);
-                throw new TriedOnly(issuedAfter(c, projectId, d, before, MarkBook.reconcile(c, projectId, d, sql.now())));
+                throw new TriedOnly(issuedAfter(c, projectId, d, before, MarkWrites.reconcile(c, projectId, d, sql.now())));
             });
         } catch (TriedOnly t) {
             return t.touched;
@@ -213,7 +214,7 @@ public final class ModelWrites {
                 }
                 // the firm's settings are saved already: the sheets are compared with what was issued
                 List<String> changed = IssuedChanges.between(IssuedChanges.asIssued(c, id),
-                        IssuedChanges.snapshot(c, id, d, MarkBook.reconcile(c, id, d, at)));
+                        IssuedChanges.snapshot(c, id, d, MarkWrites.reconcile(c, id, d, at)));
                 if (!changed.isEmpty())
                     append(c, who, subject(m.project()), action + "; changed since issue: " + String.join(", ", changed), at);
                 return null;

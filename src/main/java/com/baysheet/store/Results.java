@@ -89,7 +89,7 @@ public final class Results {
     }
 
     /**
-     * As {@link #offer(Computed)}, with the marks the write gave the building ({@code MarkBook.reconcile}) and the count of
+     * As {@link #offer(Computed)}, with the marks the write gave the building ({@code MarkWrites.reconcile}) and the count of
      * mark renames committed with it: a page of this building at that count has exactly these marks.
      */
     void offer(Computed c, MarkSheets marks, long renames) {

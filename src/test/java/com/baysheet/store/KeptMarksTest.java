@@ -38,7 +38,9 @@ class KeptMarksTest {
             Clock clock = Clock.systemUTC();
             Sql sql = new Sql(a.dataSource(), clock);
             Rederivation again = new Rederivation();
-            ModelWrites writes = new ModelWrites(sql, again::derive, new Results(sql, again::derive));
+            Results results = new Results(sql, again::derive);
+            ModelWrites writes = new ModelWrites(sql, again::derive, results);
+            ProjectVersions pages = new ProjectVersions(sql, results);
             BayStore kept = new BayStore(writes, new OccupancyStore(sql));
             Store first = Store.on(a.dataSource(), again::derive, clock);
             List<Project> projects = Demo.loadIfEmpty(first);
@@ -62,6 +64,11 @@ class KeptMarksTest {
                 }
                 fresh.bays().assign(Editor.DEMO, p.id(), fresh.projects().find(p.id()).version(), level.id(), edit);
                 assertThat(rows(a, p.id())).as("edit %d", e).isEqualTo(rows(b, p.id()));
+                // and the marks a page labels each member with: the write's own, against those assigned from the rows
+                var shown = pages.state(p.id());
+                var read = fresh.versions().state(p.id());
+                for (var m : read.computed().derived().members())
+                    assertThat(shown.marks().label(m.id())).as("edit %d, %s", e, m.id()).isEqualTo(read.marks().label(m.id()));
             }
             // all but the first write started from the marks the write before it left
             assertThat(writes.keptStarts()).isGreaterThanOrEqualTo(20);

@@ -10,6 +10,8 @@ import java.sql.Connection;
 import java.time.Instant;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
+import java.util.Set;
 import java.util.stream.Collectors;
 
 /** Rows of member_mark and member_mark_location, on the caller's connection. */
@@ -66,21 +68,25 @@ final class MarkRows {
 
     /**
      * Brings the project's member → mark rows from {@code before} (as stored) to {@code after}, writing only the rows
-     * that differ: an edit of one bay moves a few members of a building of tens of thousands.
+     * that differ: an edit of one bay moves a few members of a building of tens of thousands. {@code moved}, where
+     * known, holds every member whose row may differ (null: compare them all).
      */
-    static void locate(Connection c, long projectId, Map<String, Long> before, Map<String, Long> after) {
+    static void locate(Connection c, long projectId, Map<String, Long> before, Map<String, Long> after, Set<String> moved) {
         try (Handle h = Sql.on(c)) {
             PreparedBatch gone = h.prepareBatch("DELETE FROM member_mark_location WHERE project_id = :project AND member_id = :member");
-            PreparedBatch moved = h.prepareBatch("UPDATE member_mark_location SET mark_id = :mark WHERE project_id = :project AND member_id = :member");
+            PreparedBatch shifted = h.prepareBatch("UPDATE member_mark_location SET mark_id = :mark WHERE project_id = :project AND member_id = :member");
             PreparedBatch added = h.prepareBatch("INSERT INTO member_mark_location (project_id, member_id, mark_id) VALUES (:project, :member, :mark)");
-            for (String member : before.keySet())
-                if (!after.containsKey(member)) gone.bind("project", projectId).bind("member", member).add();
-            for (var e : after.entrySet()) {
-                Long was = before.get(e.getKey());
-                if (e.getValue().equals(was)) continue;
-                (was == null ? added : moved).bind("project", projectId).bind("member", e.getKey()).bind("mark", e.getValue()).add();
+            for (String member : moved != null ? moved : before.keySet()) {
+                Long was = before.get(member), now = after.get(member);
+                if (Objects.equals(was, now)) continue;
+                if (now == null) gone.bind("project", projectId).bind("member", member).add();
+                else (was == null ? added : shifted).bind("project", projectId).bind("member", member).bind("mark", now).add();
             }
-            for (PreparedBatch b : new PreparedBatch[]{gone, moved, added}) if (b.size() > 0) b.execute();
+            if (moved == null)
+                for (var e : after.entrySet())
+                    if (!before.containsKey(e.getKey()))
+                        added.bind("project", projectId).bind("member", e.getKey()).bind("mark", e.getValue()).add();
+            for (PreparedBatch b : new PreparedBatch[]{gone, shifted, added}) if (b.size() > 0) b.execute();
         }
     }
 }

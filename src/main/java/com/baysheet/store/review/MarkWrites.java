@@ -1,0 +1,138 @@
+package com.baysheet.store.review;
+
+import com.baysheet.engine.record.CalcRecord;
+import com.baysheet.framing.Derived;
+import com.baysheet.framing.DerivedMember;
+import com.baysheet.framing.TypicalGroup;
+import com.baysheet.framing.Typicals;
+import com.baysheet.review.CalcFingerprint;
+import com.baysheet.review.Mark;
+import com.baysheet.review.MarkAssignment;
+import com.baysheet.review.MarkSheets;
+
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.IdentityHashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Set;
+import java.util.function.Function;
+
+/**
+ * A model write's marks: every typical group of the derivation given its mark ({@link MarkAssignment}) and stored on
+ * the write's connection, so that a mark, once given, is the same on every page. Only the rows that differ are written.
+ *
+ * <p>A write may start from what the project's last write left its marks as ({@link Kept}), when the caller knows the
+ * rows are unchanged since. Then the groups are worked out from that write's grouping, and a group it left as it was
+ * (the same group object: same members, same calculation) keeps its mark, its members' rows and its sheet without being
+ * looked at again: the work is that of the groups the edit changed. The rows written are exactly those a write that
+ * reads them would write (KeptMarksTest).
+ */
+public final class MarkWrites {
+    private MarkWrites() {}
+
+    /**
+     * What a model write left a project's marks as: its stored marks (as their rows now stand), which member carries
+     * which, the grouping the marks were given to, and the sheets.
+     */
+    public record Kept(List<Mark> stored, Map<String, Long> carried, Typicals.Grouping grouping, MarkSheets sheets) {}
+
+    /** The marks a write gave, and what it left them as. */
+    public record Reconciled(MarkSheets sheets, Kept kept) {}
+
+    /** Gives every group of the derivation its mark and stores them; returns them. */
+    public static MarkSheets reconcile(Connection c, long projectId, Derived d, Instant at) throws SQLException {
+        return reconcile(c, projectId, d, at, CalcFingerprint::of, null).sheets();
+    }
+
+    /**
+     * As {@link #reconcile(Connection, long, Derived, Instant)}, each calculation fingerprinted by {@code fingerprint}, from
+     * {@code before}: what the project's last write left its marks as, its rows unchanged since (null: read the rows).
+     */
+    public static Reconciled reconcile(Connection c, long projectId, Derived d, Instant at, Function<CalcRecord, String> fingerprint,
+                                       Kept before) throws SQLException {
+        List<Mark> stored = before != null ? before.stored() : MarkRows.all(c, projectId);
+        Typicals.Grouping grouping = d.members().isEmpty() ? null : Typicals.grouped(d, before == null ? null : before.grouping());
+        List<TypicalGroup> groups = grouping == null ? List.of() : grouping.groups();
+        Map<String, Long> carriedBefore = before != null ? before.carried() : MarkRows.carried(c, projectId);
+        // the groups the last write gave a mark to, by identity: those still here are unchanged
+        Map<TypicalGroup, MarkSheets.MarkSheet> last = new IdentityHashMap<>();
+        if (before != null) for (MarkSheets.MarkSheet s : before.sheets().all()) last.put(s.group(), s);
+        Map<TypicalGroup, Mark> unchanged = new IdentityHashMap<>();
+        for (TypicalGroup g : groups) {
+            MarkSheets.MarkSheet s = last.get(g);
+            if (s != null) unchanged.put(g, s.mark());
+        }
+        MarkAssignment.Result r = MarkAssignment.of(groups, stored, carriedBefore, fingerprint, unchanged);
+        // the rows as they will stand, by id in the order read: each written row is the mark as written
+        Map<Long, Mark> rows = new LinkedHashMap<>();
+        for (Mark m : stored) rows.put(m.id(), m);
+        Map<Long, Mark> was = Map.copyOf(rows);
+        for (Mark m : r.retired()) {
+            updateChanged(c, was, m);
+            rows.put(m.id(), m);
+        }
+        Map<String, Long> carried = before != null ? new HashMap<>(carriedBefore) : new HashMap<>(carriedBefore.size() * 4 / 3 + 1);
+        // the members whose row may change: those of every group that is not unchanged, before and after
+        Set<String> moved = before != null ? new HashSet<>() : null;
+        if (before != null)
+            for (MarkSheets.MarkSheet s : before.sheets().all())
+                if (!unchanged.containsKey(s.group()))
+                    for (DerivedMember x : s.group().members()) {
+                        carried.remove(x.id());
+                        moved.add(x.id());
+                    }
+        List<MarkSheets.MarkSheet> sheets = new ArrayList<>(r.assigned().size());
+        Map<Long, String> text = null;
+        for (MarkAssignment.Assigned a : r.assigned()) {
+            Mark m = a.mark();
+            if (unchanged.containsKey(a.group())) {
+                sheets.add(last.get(a.group()));
+                continue;
+            }
+            if (m.id() == 0) m = new Mark(MarkRows.insert(c, projectId, m, at), m.prefix(), m.seq(), m.text(), m.calc(), m.originId(), true);
+            else updateChanged(c, was, m);
+            rows.put(m.id(), m);
+            for (DerivedMember x : a.group().members()) {
+                carried.put(x.id(), m.id());
+                if (moved != null) moved.add(x.id());
+            }
+            if (text == null) text = texts(stored);
+            sheets.add(new MarkSheets.MarkSheet(m, a.group(), m.originId() == null ? null : text.get(m.originId())));
+        }
+        MarkRows.locate(c, projectId, carriedBefore, carried, moved);
+        List<Mark> after = new ArrayList<>(rows.values());
+        after.sort(Comparator.comparing((Mark m) -> m.prefix()).thenComparingInt(Mark::seq));
+        MarkSheets given = before != null ? MarkSheets.after(before.sheets(), sheets) : new MarkSheets(sheets);
+        return new Reconciled(given, new Kept(List.copyOf(after), Collections.unmodifiableMap(carried), grouping, given));
+    }
+
+    /** The sheets of an assignment, each with the text of the mark it was split from. */
+    static MarkSheets sheets(MarkAssignment.Result r, List<Mark> stored) {
+        Map<Long, String> text = texts(stored);
+        List<MarkSheets.MarkSheet> out = new ArrayList<>();
+        for (MarkAssignment.Assigned a : r.assigned())
+            out.add(new MarkSheets.MarkSheet(a.mark(), a.group(), a.mark().originId() == null ? null : text.get(a.mark().originId())));
+        return new MarkSheets(out);
+    }
+
+    private static Map<Long, String> texts(List<Mark> stored) {
+        Map<Long, String> text = new HashMap<>();
+        for (Mark m : stored) text.put(m.id(), m.text());
+        return text;
+    }
+
+    /** Writes a stored mark's calculation and whether it is carried, where either differs from its row. */
+    private static void updateChanged(Connection c, Map<Long, Mark> stored, Mark m) {
+        Mark was = stored.get(m.id());
+        if (was == null || !Objects.equals(was.calc(), m.calc()) || was.active() != m.active()) MarkRows.update(c, m);
+    }
+}
