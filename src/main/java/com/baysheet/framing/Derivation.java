@@ -21,7 +21,7 @@ public final class Derivation {
 
     /** @throws com.baysheet.engine.InputError naming the level, grid line or bay where the model is wrong */
     public static Derived derive(Building b) {
-        return derive(b, new MemberCache(b.context()), null, Map.of()).derived();
+        return derive(b, new MemberCache(b.context()), null, Map.of(), null).derived();
     }
 
     /**
@@ -37,8 +37,10 @@ public final class Derivation {
      * @param earlier levels framed before in a building with the same {@link LevelInputs.Shared} inputs, by their
      *                inputs (null: frame every level and keep no inputs)
      * @param stacks  the stacks taken down before in that building, by grid point
+     * @param before  that building's derivation, whose members a part derived again keeps where they come out the same (null: none)
      */
-    static Framed derive(Building b, MemberCache cache, Map<LevelInputs, LevelFraming> earlier, Map<Integer, Stack> stacks) {
+    static Framed derive(Building b, MemberCache cache, Map<LevelInputs, LevelFraming> earlier, Map<Integer, Stack> stacks, Derived before) {
+        SameMembers unchanged = new SameMembers(before);
         // before the model check, so that clearing the last bays beneath a line load names the load
         for (var l : b.lineLoads())
             if (b.levels().stream().noneMatch(v -> v.name().equals(l.level())))
@@ -80,6 +82,7 @@ public final class Derivation {
                     f = new LevelFraming(cache, plan, b.selfWeights(), lines, steps, points, open).derive();
                     if (shape != null) typical.put(shape, plans.size());
                 }
+                unchanged.keep(f.members, 0);
             }
             if (in != null) framed.put(in, f);
             plans.add(plan);
@@ -97,7 +100,9 @@ public final class Derivation {
                 Stack was = in == null ? null : stacks.get(i * ny + j);
                 if (was == null || !was.inputs().equals(in)) {
                     int first = members.size();
-                    was = new Stack(in, down.stack(i, j, members), List.copyOf(members.subList(first, members.size())));
+                    TakeDown t = down.stack(i, j, members);
+                    unchanged.keep(members, first);
+                    was = new Stack(in, t, List.copyOf(members.subList(first, members.size())));
                 } else members.addAll(was.columns());
                 if (!was.columns().isEmpty()) parts.add(was.columns());
                 if (was.takeDown() != null) takeDowns.add(was.takeDown());

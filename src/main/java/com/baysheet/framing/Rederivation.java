@@ -51,7 +51,8 @@ public final class Rederivation {
         LevelInputs.Shared shared = LevelInputs.Shared.of(b);
         boolean reuse = before != null && before.shared.equals(shared);
         MemberCache cache = new MemberCache(b.context(), reuse ? before.results : Map.of());
-        Derivation.Framed f = Derivation.derive(b, cache, reuse ? before.levels : Map.of(), reuse ? before.stacks : Map.of());
+        Derivation.Framed f = Derivation.derive(b, cache, reuse ? before.levels : Map.of(), reuse ? before.stacks : Map.of(),
+                reuse ? before.derived : null);
         keep(before, new Kept(b, f.derived(), shared, f.levels(), f.stacks(), cache.kept()));
         return f.derived();
     }

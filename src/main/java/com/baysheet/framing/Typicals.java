@@ -3,7 +3,6 @@ package com.baysheet.framing;
 import com.baysheet.engine.record.CalcRecord;
 
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.IdentityHashMap;
@@ -19,10 +18,11 @@ import java.util.Set;
  * the reading order of their first members.
  *
  * <p>A {@link Grouping} keeps what the next state of the building is grouped from ({@link #grouped(Derived, Grouping)}).
- * A derivation is made of parts (a level's framing, a column stack), and a part an edit left alone is the same list
- * in the next derivation ({@link Derived#parts}). So only the members of the parts an edit made or dropped are placed
- * and compared, only the groups they belong to are made again, and every other group is the very group object of the
- * last grouping: an edit of one bay in a building of seventy thousand members regroups a few thousand. The groups are
+ * A derivation is made of parts (a level's framing, a column stack): a part an edit left alone is the same list in
+ * the next derivation ({@link Derived#parts}), and in a part derived again each member that came out as it was is the
+ * same object ({@link SameMembers}). So only the members an edit changed are placed and compared, only the groups they
+ * leave or join are made again, and every other group is the very group object of the last grouping: an edit of one
+ * bay in a building of seventy thousand members regroups the few groups its members belong to. The groups are
  * exactly those worked out from nothing (TypicalsProperties compares them on random edits).
  */
 public final class Typicals {
@@ -80,7 +80,11 @@ public final class Typicals {
             parts.replaceAll((p, was) -> was.places == null ? was : new Part(p));
         }
         Keys keys = new Keys(before);
-        // what the parts made or dropped changes: the groups their members belong to
+        // the members of the parts dropped: one that a new part holds again (the same object, unchanged) keeps its place
+        Map<DerivedMember, Place> left = new IdentityHashMap<>();
+        for (var e : before.parts.entrySet())
+            if (!parts.containsKey(e.getKey())) for (Place at : e.getValue().places) left.put(at.member, at);
+        // what arrives or goes changes the groups of its members, and no others
         Set<Key> touched = new LinkedHashSet<>();
         Map<Key, List<Place>> arriving = new HashMap<>();
         int seq = 0;
@@ -90,27 +94,25 @@ public final class Typicals {
                 part.places = new ArrayList<>(p.size());
                 for (int k = 0; k < p.size(); k++) {
                     DerivedMember m = p.get(k);
-                    Place at = new Place(levels.get(m.level()), Math.min(m.plan().x1(), m.plan().x2()),
-                            Math.min(m.plan().y1(), m.plan().y2()), m, keys.of(m), seq + k, part);
+                    Place at = left.remove(m);
+                    if (at == null) {
+                        at = new Place(levels.get(m.level()), Math.min(m.plan().x1(), m.plan().x2()),
+                                Math.min(m.plan().y1(), m.plan().y2()), m, keys.of(m), seq + k);
+                        touched.add(at.key);
+                        arriving.computeIfAbsent(at.key, x -> new ArrayList<>()).add(at);
+                    }
                     part.places.add(at);
-                    touched.add(at.key);
-                    arriving.computeIfAbsent(at.key, x -> new ArrayList<>()).add(at);
                 }
             }
             seq += p.size();
         }
-        Set<Part> dropped = Collections.newSetFromMap(new IdentityHashMap<>());
-        for (var e : before.parts.entrySet())
-            if (!parts.containsKey(e.getKey())) {
-                dropped.add(e.getValue());
-                for (Place at : e.getValue().places) touched.add(at.key);
-            }
-        return regrouped(before, levels, parts, keys, touched, arriving, dropped);
+        for (Place at : left.values()) touched.add(at.key);
+        return regrouped(before, levels, parts, keys, touched, arriving, left.keySet());
     }
 
     /** The groups: those no touched key names kept as they were, the touched ones made again from who stays and who arrives. */
     private static Grouping regrouped(Grouping before, Map<String, Integer> levels, Map<List<DerivedMember>, Part> parts, Keys keys,
-                                      Set<Key> touched, Map<Key, List<Place>> arriving, Set<Part> dropped) {
+                                      Set<Key> touched, Map<Key, List<Place>> arriving, Set<DerivedMember> gone) {
         Map<Key, Group> byKey = new HashMap<>(before.byKey.size() * 4 / 3 + touched.size() + 1);
         List<Group> kept = new ArrayList<>(before.order.size());
         for (Group g : before.order)
@@ -122,7 +124,7 @@ public final class Typicals {
         for (Key k : touched) {
             Group was = before.byKey.get(k);
             List<Place> stay = new ArrayList<>();
-            if (was != null) for (Place at : was.places) if (!dropped.contains(at.part)) stay.add(at);
+            if (was != null) for (Place at : was.places) if (!gone.contains(at.member)) stay.add(at);
             List<Place> come = arriving.getOrDefault(k, new ArrayList<>());
             come.sort(null);
             List<Place> places = merged(stay, come);
@@ -263,10 +265,10 @@ public final class Typicals {
     }
 
     /**
-     * A member's place in reading order, its group's key and the part it was derived in. {@code seq}, its place in the
-     * derivation, breaks a tie only where ids repeat (then the derivation's order stands, as a stable sort keeps it).
+     * A member's place in reading order and its group's key. {@code seq}, its place in the derivation, breaks a tie
+     * only where ids repeat (then the derivation's order stands, as a stable sort keeps it).
      */
-    private record Place(int level, double x, double y, DerivedMember member, Key key, int seq, Part part) implements Comparable<Place> {
+    private record Place(int level, double x, double y, DerivedMember member, Key key, int seq) implements Comparable<Place> {
         @Override
         public int compareTo(Place o) {
             int c = Integer.compare(level, o.level);

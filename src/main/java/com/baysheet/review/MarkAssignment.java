@@ -44,16 +44,16 @@ public final class MarkAssignment {
 
     /** As {@link #of(List, List, Map)}, each group's calculation fingerprinted by {@code fingerprint} (as {@link CalcFingerprint#of} does). */
     public static Result of(List<TypicalGroup> groups, List<Mark> stored, Map<String, Long> carried, Function<CalcRecord, String> fingerprint) {
-        return of(groups, stored, carried, fingerprint, Map.of());
+        return of(groups, stored, carried::get, fingerprint, Map.of());
     }
 
     /**
-     * As {@link #of(List, List, Map, Function)}, where each group of {@code unchanged} (by identity) is known to be a group
+     * As {@link #of(List, List, Map, Function)}, {@code carried} looked up by member id, where each group of {@code unchanged} (by identity) is known to be a group
      * the last assignment gave its mark, every member carrying it, with the same members and calculation: rule 1 gives
      * it that mark again (no other group's members carried it), so it is given without counting its members, and only
      * the other groups are worked out. An edit of one bay leaves most groups of a building unchanged.
      */
-    public static Result of(List<TypicalGroup> groups, List<Mark> stored, Map<String, Long> carried, Function<CalcRecord, String> fingerprint,
+    public static Result of(List<TypicalGroup> groups, List<Mark> stored, Function<String, Long> carried, Function<CalcRecord, String> fingerprint,
                             Map<TypicalGroup, Mark> unchanged) {
         // keyed by the group itself: a group's own hash would hash every member it holds, and no two groups are equal
         Map<TypicalGroup, Mark> chosen = new IdentityHashMap<>();
@@ -119,16 +119,16 @@ public final class MarkAssignment {
     }
 
     /** The stored mark most of the group's members carried (the first in reading order on a tie), or null. */
-    private static Long mostCarried(TypicalGroup g, Map<String, Long> carried, Map<Long, Mark> stored) {
+    private static Long mostCarried(TypicalGroup g, Function<String, Long> carried, Map<Long, Mark> stored) {
         return mostCarried(g, carried, stored, m -> true);
     }
 
-    /** As {@link #mostCarried(TypicalGroup, Map, Map)}, among the marks that pass {@code which}. */
-    private static Long mostCarried(TypicalGroup g, Map<String, Long> carried, Map<Long, Mark> stored, java.util.function.Predicate<Mark> which) {
+    /** As {@link #mostCarried(TypicalGroup, Function, Map)}, among the marks that pass {@code which}. */
+    private static Long mostCarried(TypicalGroup g, Function<String, Long> carried, Map<Long, Mark> stored, java.util.function.Predicate<Mark> which) {
         Map<Long, Integer> count = new HashMap<>();
         Long best = null;
-        for (String id : g.memberIds()) {
-            Long m = carried.get(id);
+        for (var x : g.members()) {
+            Long m = carried.apply(x.id());
             if (m == null || !stored.containsKey(m) || !which.test(stored.get(m))) continue;
             int n = count.merge(m, 1, Integer::sum);
             if (best == null || n > count.get(best)) best = m;

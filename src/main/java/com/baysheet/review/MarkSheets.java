@@ -98,6 +98,12 @@ public final class MarkSheets {
         return new MarkSheets(r.assigned().stream().map(a -> new MarkSheet(a.mark(), a.group(), null)).toList());
     }
 
+    /** The id of the mark the member carries, or null where it has none (as the member → mark rows stand after the write of these sheets). */
+    public Long markOf(String memberId) {
+        MarkSheet s = sheetOf(memberId);
+        return s == null ? null : s.mark().id();
+    }
+
     /** In reading order (by each mark's first location). */
     public List<MarkSheet> all() { return sheets; }
 

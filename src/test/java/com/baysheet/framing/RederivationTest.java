@@ -43,6 +43,21 @@ class RederivationTest {
     }
 
     @Test
+    void aLevelFramedAgainKeepsEachMemberTheEditLeftAsItWasAsTheSameObject() {
+        Rederivation again = new Rederivation();
+        Derived before = again.derive(typicalFloors(60));
+        Building edited = typicalFloors(85);
+        Derived after = again.derive(edited);
+        Rederivations.assertSame(after, Rederivations.full(edited), "typical edited");
+        // F2 is framed again: the beam of a bay away from the edited one comes out as it was, the edited bay's does not
+        String away = "L2-bay0x1-b1", edit = "L2-bay1x0-b1";
+        assertThat(after.member(away).orElseThrow()).isSameAs(before.member(away).orElseThrow());
+        assertThat(after.member(edit).orElseThrow()).isNotSameAs(before.member(edit).orElseThrow());
+        assertThat(after.member(edit).orElseThrow().result().record()).isNotEqualTo(before.member(edit).orElseThrow().result().record());
+        assertThat(Rederivations.reusedLevels(before, after)).doesNotContain("F2");
+    }
+
+    @Test
     void derivingTheSameBuildingAgainGivesTheSameResult() {
         Rederivation again = new Rederivation();
         Derived before = again.derive(typicalFloors(60));

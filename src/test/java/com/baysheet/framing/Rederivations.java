@@ -59,11 +59,12 @@ final class Rederivations {
 
     /** The levels of {@code later} whose members are the very objects {@code earlier} holds (reused, not framed again). */
     static List<String> reusedLevels(Derived earlier, Derived later) {
-        java.util.Set<DerivedMember> before = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
-        before.addAll(earlier.members());
+        // a level reused is its framing's very part (a level framed again may keep unchanged members, never its part)
+        java.util.Set<List<DerivedMember>> before = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
+        before.addAll(earlier.parts());
         List<String> out = new ArrayList<>();
-        for (DerivedMember m : later.members())
-            if (m.role() != MemberRole.COLUMN && before.contains(m) && !out.contains(m.level())) out.add(m.level());
+        for (List<DerivedMember> p : later.parts())
+            if (p.get(0).role() != MemberRole.COLUMN && before.contains(p) && !out.contains(p.get(0).level())) out.add(p.get(0).level());
         return out;
     }
 

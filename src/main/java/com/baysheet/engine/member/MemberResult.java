@@ -27,9 +27,19 @@ public final class MemberResult {
     private volatile CalcRecord record;
     private final Supplier<List<MethodComparison.Row>> comparer;
     private volatile List<MethodComparison.Row> methods;
+    /** The calculation this one is under another subject (null: this is one), and that subject. */
+    private final MemberResult base;
+    private final String subject;
 
     MemberResult(RecordNumbers numbers, EndShare left, EndShare right, LiveFactors reduction, Supplier<CalcRecord> writer,
                  Supplier<List<MethodComparison.Row>> comparer) {
+        this(numbers, left, right, reduction, writer, comparer, null, null);
+    }
+
+    private MemberResult(RecordNumbers numbers, EndShare left, EndShare right, LiveFactors reduction, Supplier<CalcRecord> writer,
+                         Supplier<List<MethodComparison.Row>> comparer, MemberResult base, String subject) {
+        this.base = base;
+        this.subject = subject;
         this.comparer = comparer;
         this.numbers = numbers;
         this.left = left;
@@ -88,7 +98,16 @@ public final class MemberResult {
 
     /** The same calculation under another subject. */
     public MemberResult withSubject(String subject) {
-        MemberResult base = this;
-        return new MemberResult(numbers, left, right, reduction, () -> base.record().withSubject(subject), base::methods);
+        MemberResult base = this.base != null ? this.base : this;
+        return new MemberResult(numbers, left, right, reduction, () -> base.record().withSubject(subject), base::methods, base, subject);
+    }
+
+    /**
+     * Whether {@code o} is this very calculation under the same subject (both made by {@link #withSubject} from one
+     * calculation, or the same object): then their records and numbers are equal, whichever is read. A cheap test that
+     * never compares records, so false says nothing about two calculations made apart.
+     */
+    public boolean sameAs(MemberResult o) {
+        return this == o || base != null && base == o.base && subject.equals(o.subject);
     }
 }

@@ -11,7 +11,8 @@ import java.time.Instant;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
-import java.util.Set;
+import java.util.Collection;
+import java.util.function.Function;
 import java.util.stream.Collectors;
 
 /** Rows of member_mark and member_mark_location, on the caller's connection. */
@@ -67,25 +68,21 @@ final class MarkRows {
     }
 
     /**
-     * Brings the project's member → mark rows from {@code before} (as stored) to {@code after}, writing only the rows
-     * that differ: an edit of one bay moves a few members of a building of tens of thousands. {@code moved}, where
-     * known, holds every member whose row may differ (null: compare them all).
+     * Brings the rows of {@code members} from the mark each carried ({@code before}, as stored; null: no row) to the mark
+     * it carries now ({@code after}; null: no row), writing only the rows that differ: an edit of one bay moves a few
+     * members of a building of tens of thousands.
      */
-    static void locate(Connection c, long projectId, Map<String, Long> before, Map<String, Long> after, Set<String> moved) {
+    static void locate(Connection c, long projectId, Collection<String> members, Function<String, Long> before, Function<String, Long> after) {
         try (Handle h = Sql.on(c)) {
             PreparedBatch gone = h.prepareBatch("DELETE FROM member_mark_location WHERE project_id = :project AND member_id = :member");
             PreparedBatch shifted = h.prepareBatch("UPDATE member_mark_location SET mark_id = :mark WHERE project_id = :project AND member_id = :member");
             PreparedBatch added = h.prepareBatch("INSERT INTO member_mark_location (project_id, member_id, mark_id) VALUES (:project, :member, :mark)");
-            for (String member : moved != null ? moved : before.keySet()) {
-                Long was = before.get(member), now = after.get(member);
+            for (String member : members) {
+                Long was = before.apply(member), now = after.apply(member);
                 if (Objects.equals(was, now)) continue;
                 if (now == null) gone.bind("project", projectId).bind("member", member).add();
                 else (was == null ? added : shifted).bind("project", projectId).bind("member", member).bind("mark", now).add();
             }
-            if (moved == null)
-                for (var e : after.entrySet())
-                    if (!before.containsKey(e.getKey()))
-                        added.bind("project", projectId).bind("member", e.getKey()).bind("mark", e.getValue()).add();
             for (PreparedBatch b : new PreparedBatch[]{gone, shifted, added}) if (b.size() > 0) b.execute();
         }
     }

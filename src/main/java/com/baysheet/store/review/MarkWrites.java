@@ -14,7 +14,6 @@ import java.sql.Connection;
 import java.sql.SQLException;
 import java.time.Instant;
 import java.util.ArrayList;
-import java.util.Collections;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.HashSet;
@@ -40,10 +39,10 @@ public final class MarkWrites {
     private MarkWrites() {}
 
     /**
-     * What a model write left a project's marks as: its stored marks (as their rows now stand), which member carries
-     * which, the grouping the marks were given to, and the sheets.
+     * What a model write left a project's marks as: its stored marks (as their rows now stand), the grouping the marks
+     * were given to, and the sheets (which member carries which mark, as the member → mark rows now stand).
      */
-    public record Kept(List<Mark> stored, Map<String, Long> carried, Typicals.Grouping grouping, MarkSheets sheets) {}
+    public record Kept(List<Mark> stored, Typicals.Grouping grouping, MarkSheets sheets) {}
 
     /** The marks a write gave, and what it left them as. */
     public record Reconciled(MarkSheets sheets, Kept kept) {}
@@ -62,7 +61,8 @@ public final class MarkWrites {
         List<Mark> stored = before != null ? before.stored() : MarkRows.all(c, projectId);
         Typicals.Grouping grouping = d.members().isEmpty() ? null : Typicals.grouped(d, before == null ? null : before.grouping());
         List<TypicalGroup> groups = grouping == null ? List.of() : grouping.groups();
-        Map<String, Long> carriedBefore = before != null ? before.carried() : MarkRows.carried(c, projectId);
+        Map<String, Long> read = before != null ? null : MarkRows.carried(c, projectId);
+        Function<String, Long> carriedBefore = before != null ? before.sheets()::markOf : read::get;
         // the groups the last write gave a mark to, by identity: those still here are unchanged
         Map<TypicalGroup, MarkSheets.MarkSheet> last = new IdentityHashMap<>();
         if (before != null) for (MarkSheets.MarkSheet s : before.sheets().all()) last.put(s.group(), s);
@@ -80,39 +80,32 @@ public final class MarkWrites {
             updateChanged(c, was, m);
             rows.put(m.id(), m);
         }
-        Map<String, Long> carried = before != null ? new HashMap<>(carriedBefore) : new HashMap<>(carriedBefore.size() * 4 / 3 + 1);
-        // the members whose row may change: those of every group that is not unchanged, before and after
-        Set<String> moved = before != null ? new HashSet<>() : null;
+        // the members whose row may change: every member of a group that is not unchanged, before and after
+        Set<String> moved = new HashSet<>();
         if (before != null)
             for (MarkSheets.MarkSheet s : before.sheets().all())
-                if (!unchanged.containsKey(s.group()))
-                    for (DerivedMember x : s.group().members()) {
-                        carried.remove(x.id());
-                        moved.add(x.id());
-                    }
+                if (!unchanged.containsKey(s.group())) for (DerivedMember x : s.group().members()) moved.add(x.id());
+        if (read != null) moved.addAll(read.keySet());
         List<MarkSheets.MarkSheet> sheets = new ArrayList<>(r.assigned().size());
-        Map<Long, String> text = null;
+        Map<Long, String> text = texts(stored);
         for (MarkAssignment.Assigned a : r.assigned()) {
-            Mark m = a.mark();
-            if (unchanged.containsKey(a.group())) {
-                sheets.add(last.get(a.group()));
+            MarkSheets.MarkSheet kept = unchanged.containsKey(a.group()) ? last.get(a.group()) : null;
+            if (kept != null) {
+                sheets.add(kept);
                 continue;
             }
+            Mark m = a.mark();
             if (m.id() == 0) m = new Mark(MarkRows.insert(c, projectId, m, at), m.prefix(), m.seq(), m.text(), m.calc(), m.originId(), true);
             else updateChanged(c, was, m);
             rows.put(m.id(), m);
-            for (DerivedMember x : a.group().members()) {
-                carried.put(x.id(), m.id());
-                if (moved != null) moved.add(x.id());
-            }
-            if (text == null) text = texts(stored);
+            for (DerivedMember x : a.group().members()) moved.add(x.id());
             sheets.add(new MarkSheets.MarkSheet(m, a.group(), m.originId() == null ? null : text.get(m.originId())));
         }
-        MarkRows.locate(c, projectId, carriedBefore, carried, moved);
+        MarkSheets given = before != null ? MarkSheets.after(before.sheets(), sheets) : new MarkSheets(sheets);
+        MarkRows.locate(c, projectId, moved, carriedBefore, given::markOf);
         List<Mark> after = new ArrayList<>(rows.values());
         after.sort(Comparator.comparing((Mark m) -> m.prefix()).thenComparingInt(Mark::seq));
-        MarkSheets given = before != null ? MarkSheets.after(before.sheets(), sheets) : new MarkSheets(sheets);
-        return new Reconciled(given, new Kept(List.copyOf(after), Collections.unmodifiableMap(carried), grouping, given));
+        return new Reconciled(given, new Kept(List.copyOf(after), grouping, given));
     }
 
     /** The sheets of an assignment, each with the text of the mark it was split from. */
