@@ -108,6 +108,6 @@ public final class Derivation {
                 if (was.takeDown() != null) takeDowns.add(was.takeDown());
                 if (in != null) taken.put(i * ny + j, was);
             }
-        return new Framed(Derived.ofParts(b, parts, takeDowns), framed, taken);
+        return new Framed(Derived.ofParts(b, parts, takeDowns, before), framed, taken);
     }
 }

@@ -18,35 +18,34 @@ public final class Derived {
     private final List<DerivedMember> members;
     private final List<List<DerivedMember>> parts;
     private final List<TakeDown> takeDowns;
-    private final Map<String, DerivedMember> memberById;
+    private final MemberIndex memberById;
     private final Map<String, TakeDown> takeDownById;
-    /** Each level's members in derivation order, made on first use (a member page draws its level's plan). */
-    private volatile Map<String, List<DerivedMember>> byLevel;
+    /** Each level's members in derivation order, each level's made on first asking (a member page draws its level's plan). */
+    private final Map<String, List<DerivedMember>> byLevel = new java.util.concurrent.ConcurrentHashMap<>();
 
     public Derived(Building building, List<DerivedMember> members, List<TakeDown> takeDowns) {
-        this(building, List.copyOf(members), takeDowns, null);
+        this(building, List.copyOf(members), takeDowns, null, null);
     }
 
-    private Derived(Building building, List<DerivedMember> members, List<TakeDown> takeDowns, List<List<DerivedMember>> parts) {
+    private Derived(Building building, List<DerivedMember> members, List<TakeDown> takeDowns, List<List<DerivedMember>> parts, Derived before) {
         this.building = building;
         this.members = members;
         this.parts = parts != null ? parts : members.isEmpty() ? List.of() : List.of(members);
         this.takeDowns = List.copyOf(takeDowns);
-        // sized once: a large building has a few hundred thousand members
-        memberById = new HashMap<>(this.members.size() * 4 / 3 + 1);
+        memberById = before == null ? MemberIndex.of(members) : MemberIndex.after(before.memberById, before.parts, this.parts, members);
         takeDownById = new HashMap<>(this.takeDowns.size() * 4 / 3 + 1);
-        for (DerivedMember m : this.members) memberById.putIfAbsent(m.id(), m);
         for (TakeDown t : this.takeDowns) takeDownById.putIfAbsent(t.id(), t);
     }
 
     /**
      * A derivation made of parts (a level's framing, a column stack), their members in this order: a part another
      * derivation of the building reused is the same list object in both, so what is worked out from a part can be kept by it.
+     * {@code before}, where given, is the earlier derivation of the building these parts were made from (its index is reused).
      */
-    static Derived ofParts(Building building, List<List<DerivedMember>> parts, List<TakeDown> takeDowns) {
+    static Derived ofParts(Building building, List<List<DerivedMember>> parts, List<TakeDown> takeDowns, Derived before) {
         List<DerivedMember> all = new ArrayList<>();
         for (List<DerivedMember> p : parts) all.addAll(p);
-        return new Derived(building, List.copyOf(all), takeDowns, List.copyOf(parts));
+        return new Derived(building, List.copyOf(all), takeDowns, List.copyOf(parts), before);
     }
 
     public Building building() { return building; }
@@ -63,17 +62,10 @@ public final class Derived {
     public Optional<TakeDown> takeDown(String id) { return Optional.ofNullable(takeDownById.get(id)); }
 
     /** Whether no two members share an id (the framing's ids are unique; a hand-built derivation may repeat one). */
-    public boolean idsUnique() { return memberById.size() == members.size(); }
+    public boolean idsUnique() { return memberById.unique(); }
 
     public List<DerivedMember> onLevel(String level) {
-        Map<String, List<DerivedMember>> b = byLevel;
-        if (b == null) {
-            Map<String, List<DerivedMember>> made = new HashMap<>();
-            for (DerivedMember m : members) made.computeIfAbsent(m.level(), l -> new ArrayList<>()).add(m);
-            made.replaceAll((l, on) -> List.copyOf(on));
-            byLevel = b = made;
-        }
-        return b.getOrDefault(level, List.of());
+        return byLevel.computeIfAbsent(level, l -> members.stream().filter(m -> m.level().equals(l)).toList());
     }
 
     @Override

@@ -88,9 +88,16 @@ public final class MarkAssignment {
                 taken.add(m.id());
             }
         }
+        // the stored marks by calculation, for the groups still without one (made only if there are such groups)
+        Map<String, List<Mark>> byCalc = null;
         for (TypicalGroup g : groups) {
             if (chosen.containsKey(g)) continue;
-            stored.stream().filter(m -> m.calc().equals(calc.get(g)) && m.prefix().equals(Mark.prefix(g.role())) && !taken.contains(m.id()))
+            if (byCalc == null) {
+                byCalc = new HashMap<>();
+                for (Mark m : stored) byCalc.computeIfAbsent(m.calc(), k -> new ArrayList<>()).add(m);
+            }
+            byCalc.getOrDefault(calc.get(g), List.of()).stream()
+                    .filter(m -> m.prefix().equals(Mark.prefix(g.role())) && !taken.contains(m.id()))
                     .min(Comparator.comparing((Mark m) -> !m.active()).thenComparingInt(Mark::seq))
                     .ifPresent(m -> { chosen.put(g, m.given(calc.get(g), true)); taken.add(m.id()); });
         }

@@ -6,13 +6,10 @@ import com.baysheet.framing.MemberLabel;
 import com.baysheet.framing.MemberLabels;
 import com.baysheet.framing.TypicalGroup;
 
-import java.util.Collections;
 import java.util.HashMap;
-import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
 
 /**
  * A project's typical members, each with its mark: one sheet per mark, the unit of review. A mark sheet's
@@ -66,21 +63,16 @@ public final class MarkSheets {
     }
 
     /**
-     * The sheets {@code now}, where those that are the very sheet objects of {@code before} have the same members: each
-     * member's sheet is looked up among the sheets that changed, then in {@code before}, so that a write which changed a
-     * few groups of a large building indexes only their members. Made whole again every few writes.
+     * The sheets {@code now}: those of {@code before} but the sheets in {@code left}, with those in {@code added} (the
+     * others are the very sheet objects of {@code before}, with the same members). Each member's sheet is looked up
+     * among the sheets that changed, then in {@code before}, so that a write which changed a few groups of a large
+     * building indexes only their members. Made whole again every few writes.
      */
-    public static MarkSheets after(MarkSheets before, List<MarkSheet> now) {
+    public static MarkSheets after(MarkSheets before, List<MarkSheet> now, List<MarkSheet> left, List<MarkSheet> added) {
         if (before.depth >= LAYERS) return new MarkSheets(now);
-        Set<MarkSheet> kept = Collections.newSetFromMap(new IdentityHashMap<>());
-        kept.addAll(now);
         Map<String, MarkSheet> changed = new HashMap<>();
-        for (MarkSheet s : before.sheets)
-            if (!kept.contains(s)) for (DerivedMember m : s.group().members()) changed.put(m.id(), NONE);
-        Set<MarkSheet> was = Collections.newSetFromMap(new IdentityHashMap<>());
-        was.addAll(before.sheets);
-        for (MarkSheet s : now)
-            if (!was.contains(s)) for (DerivedMember m : s.group().members()) changed.put(m.id(), s);
+        for (MarkSheet s : left) for (DerivedMember m : s.group().members()) changed.put(m.id(), NONE);
+        for (MarkSheet s : added) for (DerivedMember m : s.group().members()) changed.put(m.id(), s);
         return new MarkSheets(List.copyOf(now), changed, before);
     }
 

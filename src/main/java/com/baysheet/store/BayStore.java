@@ -116,8 +116,9 @@ public final class BayStore {
      */
     static List<Bay> findByLevel(Connection c, long levelId, Grid g) {
         try (Handle h = Sql.on(c)) {
+            Columns at = new Columns();
             List<Bay> out = new ArrayList<>(h.createQuery("SELECT * FROM bay WHERE level_id = :level").bind("level", levelId)
-                    .map((rs, ctx) -> read(rs, g)).list());
+                    .map((rs, ctx) -> read(rs, at, g)).list());
             out.sort(Comparator.comparingInt(Bay::row).thenComparingInt(Bay::col));
             return out;
         }
@@ -167,21 +168,44 @@ public final class BayStore {
         return "cantilever_" + s.name().toLowerCase();
     }
 
-    private static Bay read(ResultSet rs, Grid g) throws SQLException {
-        int col = g.x().indexOf(rs.getInt("x_line"));
-        int row = g.y().indexOf(rs.getInt("y_line"));
+    /**
+     * The bay columns' places in a result, found on its first row: a tall building reads thousands of bays a save, and
+     * finding a column by its name costs as much as reading it.
+     */
+    private static final class Columns {
+        int xLine, yLine, opening, beams, infill, occupancy, dead, cantileverOccupancy;
+        final int[] cantilever = new int[SIDES.length];
+        boolean found;
+
+        void find(ResultSet rs) throws SQLException {
+            xLine = rs.findColumn("x_line");
+            yLine = rs.findColumn("y_line");
+            opening = rs.findColumn("is_opening");
+            beams = rs.findColumn("beam_direction");
+            infill = rs.findColumn("infill_beams");
+            occupancy = rs.findColumn("occupancy");
+            dead = rs.findColumn("dead_load");
+            cantileverOccupancy = rs.findColumn("cantilever_occupancy");
+            for (int k = 0; k < SIDES.length; k++) cantilever[k] = rs.findColumn(cantileverColumn(SIDES[k]));
+            found = true;
+        }
+    }
+
+    private static Bay read(ResultSet rs, Columns at, Grid g) throws SQLException {
+        if (!at.found) at.find(rs);
+        int col = g.x().indexOf(rs.getInt(at.xLine));
+        int row = g.y().indexOf(rs.getInt(at.yLine));
         // the grid store splits and merges bays with their lines, so this is a fault of ours, not the user's
         if (col < 0 || row < 0 || col >= g.x().cells() || row >= g.y().cells())
-            throw new IllegalStateException("bay at grid line ids " + rs.getInt("x_line") + "x" + rs.getInt("y_line") + " lies outside the grid");
-        if (rs.getBoolean("is_opening")) return Bay.opening(col, row);
+            throw new IllegalStateException("bay at grid line ids " + rs.getInt(at.xLine) + "x" + rs.getInt(at.yLine) + " lies outside the grid");
+        if (rs.getBoolean(at.opening)) return Bay.opening(col, row);
         Map<Side, Double> cantilevers = new EnumMap<>(Side.class);
-        for (Side s : SIDES) {
-            double v = Sql.getDouble(rs, cantileverColumn(s));
-            if (!Double.isNaN(v)) cantilevers.put(s, v);
+        for (int k = 0; k < SIDES.length; k++) {
+            double v = rs.getDouble(at.cantilever[k]);
+            if (!rs.wasNull()) cantilevers.put(SIDES[k], v);
         }
-        Framing f = new Framing(Direction.valueOf(rs.getString("beam_direction")), rs.getInt("infill_beams"));
-        return new Bay(col, row, rs.getString("occupancy"), rs.getDouble("dead_load"), f, false, cantilevers,
-                rs.getString("cantilever_occupancy"));
+        Framing f = new Framing(Direction.valueOf(rs.getString(at.beams)), rs.getInt(at.infill));
+        return new Bay(col, row, rs.getString(at.occupancy), rs.getDouble(at.dead), f, false, cantilevers, rs.getString(at.cantileverOccupancy));
     }
 
     /** The cantilever slabs' occupancy, where one is given, must be in the catalogue (NULL: the default balcony). */

@@ -53,11 +53,13 @@ final class MarkRows {
         }
     }
 
-    /** Writes the calculation a mark now stands for and whether it is carried. */
-    static void update(Connection c, Mark m) {
+    /** Writes the calculation each mark now stands for and whether it is carried, in one batch. */
+    static void update(Connection c, List<Mark> marks) {
+        if (marks.isEmpty()) return;
         try (Handle h = Sql.on(c)) {
-            h.createUpdate("UPDATE member_mark SET calc_sha256 = :calc, active = :active WHERE id = :id")
-                    .bind("calc", m.calc()).bind("active", m.active()).bind("id", m.id()).execute();
+            PreparedBatch b = h.prepareBatch("UPDATE member_mark SET calc_sha256 = :calc, active = :active WHERE id = :id");
+            for (Mark m : marks) b.bind("calc", m.calc()).bind("active", m.active()).bind("id", m.id()).add();
+            b.execute();
         }
     }
 

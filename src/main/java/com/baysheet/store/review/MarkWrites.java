@@ -76,15 +76,20 @@ public final class MarkWrites {
         Map<Long, Mark> rows = new LinkedHashMap<>();
         for (Mark m : stored) rows.put(m.id(), m);
         Map<Long, Mark> was = Map.copyOf(rows);
+        List<Mark> updated = new ArrayList<>();
         for (Mark m : r.retired()) {
-            updateChanged(c, was, m);
+            changed(was, m, updated);
             rows.put(m.id(), m);
         }
         // the members whose row may change: every member of a group that is not unchanged, before and after
         Set<String> moved = new HashSet<>();
+        List<MarkSheets.MarkSheet> left = new ArrayList<>(), added = new ArrayList<>();
         if (before != null)
             for (MarkSheets.MarkSheet s : before.sheets().all())
-                if (!unchanged.containsKey(s.group())) for (DerivedMember x : s.group().members()) moved.add(x.id());
+                if (!unchanged.containsKey(s.group())) {
+                    left.add(s);
+                    for (DerivedMember x : s.group().members()) moved.add(x.id());
+                }
         if (read != null) moved.addAll(read.keySet());
         List<MarkSheets.MarkSheet> sheets = new ArrayList<>(r.assigned().size());
         Map<Long, String> text = texts(stored);
@@ -96,12 +101,15 @@ public final class MarkWrites {
             }
             Mark m = a.mark();
             if (m.id() == 0) m = new Mark(MarkRows.insert(c, projectId, m, at), m.prefix(), m.seq(), m.text(), m.calc(), m.originId(), true);
-            else updateChanged(c, was, m);
+            else changed(was, m, updated);
             rows.put(m.id(), m);
             for (DerivedMember x : a.group().members()) moved.add(x.id());
-            sheets.add(new MarkSheets.MarkSheet(m, a.group(), m.originId() == null ? null : text.get(m.originId())));
+            MarkSheets.MarkSheet made = new MarkSheets.MarkSheet(m, a.group(), m.originId() == null ? null : text.get(m.originId()));
+            sheets.add(made);
+            added.add(made);
         }
-        MarkSheets given = before != null ? MarkSheets.after(before.sheets(), sheets) : new MarkSheets(sheets);
+        MarkRows.update(c, updated);
+        MarkSheets given = before != null ? MarkSheets.after(before.sheets(), sheets, left, added) : new MarkSheets(sheets);
         MarkRows.locate(c, projectId, moved, carriedBefore, given::markOf);
         List<Mark> after = new ArrayList<>(rows.values());
         after.sort(Comparator.comparing((Mark m) -> m.prefix()).thenComparingInt(Mark::seq));
@@ -123,9 +131,9 @@ public final class MarkWrites {
         return text;
     }
 
-    /** Writes a stored mark's calculation and whether it is carried, where either differs from its row. */
-    private static void updateChanged(Connection c, Map<Long, Mark> stored, Mark m) {
+    /** Adds a stored mark to those to write where its calculation or whether it is carried differs from its row. */
+    private static void changed(Map<Long, Mark> stored, Mark m, List<Mark> updated) {
         Mark was = stored.get(m.id());
-        if (was == null || !Objects.equals(was.calc(), m.calc()) || was.active() != m.active()) MarkRows.update(c, m);
+        if (was == null || !Objects.equals(was.calc(), m.calc()) || was.active() != m.active()) updated.add(m);
     }
 }
