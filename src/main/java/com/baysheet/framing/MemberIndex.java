@@ -9,24 +9,24 @@ import java.util.Set;
 
 /**
  * A derivation's members by id. A derivation made again from an earlier one of the building ({@link Rederivation})
- * keeps most of its parts, so its index is the earlier index with the members of the parts it made laid over it (and
- * those of the parts it dropped marked gone): a one-bay edit indexes a few thousand members, not seventy thousand.
- * Made whole again every few layers, and wherever an id repeats (the first member with an id is the one found).
+ * keeps most of its parts, so its index is the earlier one's whole table with the members of the parts made since laid
+ * over it (and those of the parts dropped since marked gone): a one-bay edit indexes a few thousand members, not
+ * seventy thousand. One layer at most, so that a member replaced is held once, not once a write: the layer carries
+ * what the layer before it held, and the table is made whole again once the layer has grown to a quarter of it, or
+ * wherever an id repeats (the first member with an id is the one found).
  */
 final class MemberIndex {
-    private static final int LAYERS = 4;
     /** An id whose member was in a part the later derivation dropped. */
     private static final Object GONE = new Object();
 
-    private final Map<String, Object> byId;
-    private final MemberIndex under;
-    private final int depth;
+    /** The whole table ({@code layer} null), or the one it lies over. */
+    private final Map<String, Object> table;
+    private final Map<String, Object> layer;
     private final boolean unique;
 
-    private MemberIndex(Map<String, Object> byId, MemberIndex under, boolean unique) {
-        this.byId = byId;
-        this.under = under;
-        this.depth = under == null ? 0 : under.depth + 1;
+    private MemberIndex(Map<String, Object> table, Map<String, Object> layer, boolean unique) {
+        this.table = table;
+        this.layer = layer;
         this.unique = unique;
     }
 
@@ -37,31 +37,30 @@ final class MemberIndex {
         return new MemberIndex(byId, null, byId.size() == members.size());
     }
 
-    /** The index of {@code all}, made of {@code parts}, over {@code before}'s (the index of the earlier derivation's {@code was}). */
+    /** The index of {@code all}, made of {@code parts}, from {@code before} (the index of the earlier derivation's {@code was}). */
     static MemberIndex after(MemberIndex before, List<List<DerivedMember>> was, List<List<DerivedMember>> parts, List<DerivedMember> all) {
-        if (before.depth >= LAYERS || !before.unique) return of(all);
+        if (!before.unique) return of(all);
         Set<List<DerivedMember>> now = Collections.newSetFromMap(new IdentityHashMap<>()), then = Collections.newSetFromMap(new IdentityHashMap<>());
         now.addAll(parts);
         then.addAll(was);
-        Map<String, Object> changed = new HashMap<>();
+        Map<String, Object> changed = before.layer == null ? new HashMap<>() : new HashMap<>(before.layer);
+        Map<String, Object> fresh = new HashMap<>();
         for (List<DerivedMember> p : was) if (!now.contains(p)) for (DerivedMember m : p) changed.put(m.id(), GONE);
         for (List<DerivedMember> p : parts)
             if (!then.contains(p))
                 for (DerivedMember m : p) {
-                    Object prev = changed.put(m.id(), m);
                     // the id is another member's of this derivation: one made here, or one of a part kept
-                    if (prev instanceof DerivedMember || prev == null && before.get(m.id()) != null) return of(all);
+                    if (fresh.put(m.id(), m) != null || !(changed.get(m.id()) == GONE) && before.get(m.id()) != null) return of(all);
+                    changed.put(m.id(), m);
                 }
-        return new MemberIndex(changed, before, true);
+        if (changed.size() > before.table.size() / 4) return of(all);
+        return new MemberIndex(before.table, changed, true);
     }
 
     DerivedMember get(String id) {
-        for (MemberIndex at = this; at != null; at = at.under) {
-            Object m = at.byId.get(id);
-            if (m == GONE) return null;
-            if (m != null) return (DerivedMember) m;
-        }
-        return null;
+        Object m = layer == null ? null : layer.get(id);
+        if (m == null) m = table.get(id);
+        return m == GONE ? null : (DerivedMember) m;
     }
 
     /** Whether no two members share an id. */

@@ -228,9 +228,12 @@ public final class Typicals {
             return key;
         }
 
-        /** The calculations for the next grouping: those of groups gone are let go once they outnumber the groups there. */
+        /**
+         * The calculations for the next grouping, those of groups gone let go: each holds a record, and a building entered
+         * bay by bay would otherwise keep the record of every calculation it ever had.
+         */
         Map<Made, Key> kept(Map<Key, Group> now) {
-            if (made.size() > 2 * now.size() + 1024) made.values().removeIf(k -> !now.containsKey(k));
+            made.values().removeIf(k -> !now.containsKey(k));
             return made;
         }
     }

@@ -31,57 +31,52 @@ public final class MarkSheets {
         public boolean stored() { return mark.id() != 0; }
     }
 
-    /** How many {@link #after} sheets may be laid over one another before a lookup table is made whole again. */
-    private static final int LAYERS = 4;
-    /** Where a member of an earlier layer has no sheet in this one. */
+    /** Where a member of the table a layer lies over has no sheet in this one. */
     private static final MarkSheet NONE = new MarkSheet(null, null, null);
 
     private final List<MarkSheet> sheets;
-    /** Each member's sheet: all of them, or (laid over {@link #under}) those whose sheet is not {@code under}'s. */
-    private final Map<String, MarkSheet> byMember;
-    private final MarkSheets under;
-    private final int depth;
+    /** Each member's sheet: all of them ({@code layer} null), or as an earlier write left them. */
+    private final Map<String, MarkSheet> table;
+    /** The members whose sheet has changed since {@code table} was made, and their sheet now. */
+    private final Map<String, MarkSheet> layer;
     private final Map<Long, MarkSheet> byId = new HashMap<>();
 
     public MarkSheets(List<MarkSheet> sheets) {
         this.sheets = List.copyOf(sheets);
-        this.byMember = new HashMap<>();
-        this.under = null;
-        this.depth = 0;
+        this.table = new HashMap<>();
+        this.layer = null;
         for (MarkSheet s : this.sheets) {
-            for (DerivedMember m : s.group().members()) byMember.put(m.id(), s);
+            for (DerivedMember m : s.group().members()) table.put(m.id(), s);
             if (s.stored()) byId.put(s.mark().id(), s);
         }
     }
 
-    private MarkSheets(List<MarkSheet> sheets, Map<String, MarkSheet> byMember, MarkSheets under) {
+    private MarkSheets(List<MarkSheet> sheets, Map<String, MarkSheet> table, Map<String, MarkSheet> layer) {
         this.sheets = sheets;
-        this.byMember = byMember;
-        this.under = under;
-        this.depth = under.depth + 1;
+        this.table = table;
+        this.layer = layer;
         for (MarkSheet s : sheets) if (s.stored()) byId.put(s.mark().id(), s);
     }
 
     /**
      * The sheets {@code now}: those of {@code before} but the sheets in {@code left}, with those in {@code added} (the
      * others are the very sheet objects of {@code before}, with the same members). Each member's sheet is looked up
-     * among the sheets that changed, then in {@code before}, so that a write which changed a few groups of a large
-     * building indexes only their members. Made whole again every few writes.
+     * among those changed since a whole table was last made, then in that table, so that a write which changed a few
+     * groups of a large building indexes only their members. One layer at most (a sheet replaced is held once, not
+     * once a write): made whole again once the changes reach a quarter of the table.
      */
     public static MarkSheets after(MarkSheets before, List<MarkSheet> now, List<MarkSheet> left, List<MarkSheet> added) {
-        if (before.depth >= LAYERS) return new MarkSheets(now);
-        Map<String, MarkSheet> changed = new HashMap<>();
+        Map<String, MarkSheet> changed = before.layer == null ? new HashMap<>() : new HashMap<>(before.layer);
         for (MarkSheet s : left) for (DerivedMember m : s.group().members()) changed.put(m.id(), NONE);
         for (MarkSheet s : added) for (DerivedMember m : s.group().members()) changed.put(m.id(), s);
-        return new MarkSheets(List.copyOf(now), changed, before);
+        if (changed.size() > before.table.size() / 4) return new MarkSheets(now);
+        return new MarkSheets(List.copyOf(now), before.table, changed);
     }
 
     private MarkSheet sheetOf(String memberId) {
-        for (MarkSheets at = this; at != null; at = at.under) {
-            MarkSheet s = at.byMember.get(memberId);
-            if (s != null) return s == NONE ? null : s;
-        }
-        return null;
+        MarkSheet s = layer == null ? null : layer.get(memberId);
+        if (s == null) s = table.get(memberId);
+        return s == NONE ? null : s;
     }
 
     /** The marks a derivation is given when none are stored yet (what a project's first model write stores), unsaved. */
