@@ -103,24 +103,25 @@ public final class Logins {
     public Optional<SignedIn> session(String token) {
         if (token == null || token.isBlank()) return Optional.empty();
         String hash = Tokens.sha256(token);
-        Optional<StoredSession> s = sessions.find(hash);
+        Optional<SessionStore.WithUser> found = sessions.findWithUser(hash);
         Instant now = policy.clock().instant();
-        if (s.isEmpty()) return Optional.empty();
-        if (!s.get().expiresAt().isAfter(now)) {
+        if (found.isEmpty()) return Optional.empty();
+        StoredSession s = found.get().session();
+        if (!s.expiresAt().isAfter(now)) {
             sessions.delete(hash);
             return Optional.empty();
         }
-        UserStore.WithHash w = users.findById(s.get().userId());
+        UserStore.WithHash w = found.get().user();
         User u = w.user();
         if (!u.active()) {
             sessions.deleteAll(u.id());
             return Optional.empty();
         }
-        Instant expires = policy.sessions().expiresAt(s.get().createdAt(), now);
+        Instant expires = policy.sessions().expiresAt(s.createdAt(), now);
         // slide the expiry at most once a minute: a page view should not cost a database write
-        if (expires.isAfter(s.get().expiresAt().plus(EXTEND_STEP))) sessions.extend(hash, expires);
-        else expires = s.get().expiresAt();
-        return Optional.of(new SignedIn(u, token, s.get().csrfToken(), expires).withMustChangePassword(w.mustChangePassword()));
+        if (expires.isAfter(s.expiresAt().plus(EXTEND_STEP))) sessions.extend(hash, expires);
+        else expires = s.expiresAt();
+        return Optional.of(new SignedIn(u, token, s.csrfToken(), expires).withMustChangePassword(w.mustChangePassword()));
     }
 
     public void logout(SignedIn s, String address) {

@@ -4,6 +4,7 @@ import com.baysheet.store.Sql;
 import org.jdbi.v3.core.Handle;
 import org.jdbi.v3.core.statement.Update;
 
+import java.sql.Connection;
 import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.util.Optional;
@@ -28,15 +29,28 @@ public final class SessionStore {
     }
 
     public Optional<StoredSession> find(String tokenHash) {
+        return sql.tx(c -> find(c, tokenHash));
+    }
+
+    /** A session and its user's row, read in one transaction: every page request asks for both. */
+    record WithUser(StoredSession session, UserStore.WithHash user) {}
+
+    Optional<WithUser> findWithUser(String tokenHash) {
         return sql.tx(c -> {
-            try (Handle h = Sql.on(c)) {
-                return h.createQuery("SELECT token_hash, user_id, csrf_token, created_at, expires_at FROM user_session "
-                                + "WHERE token_hash = :hash").bind("hash", tokenHash)
-                        .map((rs, ctx) -> new StoredSession(rs.getString(1), rs.getLong(2), rs.getString(3),
-                                rs.getObject(4, OffsetDateTime.class).toInstant(), rs.getObject(5, OffsetDateTime.class).toInstant()))
-                        .findFirst();
-            }
+            Optional<StoredSession> s = find(c, tokenHash);
+            if (s.isEmpty()) return Optional.<WithUser>empty();
+            return UserStore.one(c, "id", s.get().userId()).map(u -> new WithUser(s.get(), u));
         });
+    }
+
+    private static Optional<StoredSession> find(Connection c, String tokenHash) {
+        try (Handle h = Sql.on(c)) {
+            return h.createQuery("SELECT token_hash, user_id, csrf_token, created_at, expires_at FROM user_session "
+                            + "WHERE token_hash = :hash").bind("hash", tokenHash)
+                    .map((rs, ctx) -> new StoredSession(rs.getString(1), rs.getLong(2), rs.getString(3),
+                            rs.getObject(4, OffsetDateTime.class).toInstant(), rs.getObject(5, OffsetDateTime.class).toInstant()))
+                    .findFirst();
+        }
     }
 
     public void extend(String tokenHash, Instant expiresAt) {

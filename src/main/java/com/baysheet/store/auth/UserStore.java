@@ -157,7 +157,7 @@ public final class UserStore {
     }
 
     /** The user whose {@code column} (id or username, ours, never typed by anyone) holds {@code value}. */
-    private static Optional<WithHash> one(Connection c, String column, Object value) {
+    static Optional<WithHash> one(Connection c, String column, Object value) {
         try (Handle h = Sql.on(c)) {
             return h.createQuery("SELECT " + COLUMNS + " FROM app_user WHERE " + column + " = :value").bind("value", value)
                     .map((rs, ctx) -> read(rs)).findFirst();
