@@ -59,55 +59,60 @@ public final class MarkAssignment {
         Map<TypicalGroup, Mark> chosen = new IdentityHashMap<>();
         Map<TypicalGroup, String> calc = new IdentityHashMap<>();
         Set<Long> taken = new HashSet<>();
+        // the groups left to work out, in the groups' order: each rule below reads only them
+        List<TypicalGroup> open = new ArrayList<>();
         for (TypicalGroup g : groups) {
             Mark m = unchanged.isEmpty() ? null : unchanged.get(g);
-            if (m == null) calc.put(g, fingerprint.apply(g.calculation()));
-            else {
-                calc.put(g, m.calc());
+            if (m == null) {
+                calc.put(g, fingerprint.apply(g.calculation()));
+                open.add(g);
+            } else {
                 chosen.put(g, m.given(m.calc(), true));
                 taken.add(m.id());
             }
         }
         Map<Long, Mark> byId = new HashMap<>();
         for (Mark m : stored) byId.put(m.id(), m);
-        for (TypicalGroup g : groups) {
-            if (chosen.containsKey(g)) continue;
+        for (TypicalGroup g : open) {
             Mark m = byId.get(mostCarried(g, carried, byId, x -> x.calc().equals(calc.get(g))));
             if (m != null && !taken.contains(m.id()) && m.prefix().equals(Mark.prefix(g.role()))) {
                 chosen.put(g, m.given(calc.get(g), true));
                 taken.add(m.id());
             }
         }
-        List<TypicalGroup> bySize = new ArrayList<>(groups);
+        // largest first, a tie in the groups' order (a stable sort)
+        List<TypicalGroup> bySize = new ArrayList<>();
+        for (TypicalGroup g : open) if (!chosen.containsKey(g)) bySize.add(g);
         bySize.sort(Comparator.comparingInt((TypicalGroup g) -> -g.members().size()));
         for (TypicalGroup g : bySize) {
-            if (chosen.containsKey(g)) continue;
             Mark m = byId.get(mostCarried(g, carried, byId));
             if (m != null && !taken.contains(m.id()) && m.prefix().equals(Mark.prefix(g.role()))) {
                 chosen.put(g, m.given(calc.get(g), true));
                 taken.add(m.id());
             }
         }
-        // the stored marks by calculation, for the groups still without one (made only if there are such groups)
+        // the stored marks by calculation, and the numbers and texts given, made only if some group is still without a mark
         Map<String, List<Mark>> byCalc = null;
-        for (TypicalGroup g : groups) {
+        Set<String> texts = null;
+        Map<String, Integer> last = null;
+        for (TypicalGroup g : open) {
             if (chosen.containsKey(g)) continue;
             if (byCalc == null) {
                 byCalc = new HashMap<>();
-                for (Mark m : stored) byCalc.computeIfAbsent(m.calc(), k -> new ArrayList<>()).add(m);
+                texts = new HashSet<>();
+                last = new HashMap<>();
+                for (Mark m : stored) {
+                    byCalc.computeIfAbsent(m.calc(), k -> new ArrayList<>()).add(m);
+                    texts.add(m.text());
+                    last.merge(m.prefix(), m.seq(), Math::max);
+                }
             }
             byCalc.getOrDefault(calc.get(g), List.of()).stream()
                     .filter(m -> m.prefix().equals(Mark.prefix(g.role())) && !taken.contains(m.id()))
                     .min(Comparator.comparing((Mark m) -> !m.active()).thenComparingInt(Mark::seq))
                     .ifPresent(m -> { chosen.put(g, m.given(calc.get(g), true)); taken.add(m.id()); });
         }
-        Set<String> texts = new HashSet<>();
-        Map<String, Integer> last = new HashMap<>();
-        for (Mark m : stored) {
-            texts.add(m.text());
-            last.merge(m.prefix(), m.seq(), Math::max);
-        }
-        List<Assigned> out = new ArrayList<>();
+        List<Assigned> out = new ArrayList<>(groups.size());
         for (TypicalGroup g : groups) {
             Mark m = chosen.get(g);
             if (m == null) {

@@ -18,7 +18,6 @@ import java.util.Comparator;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.IdentityHashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
@@ -72,15 +71,13 @@ public final class MarkWrites {
             if (s != null) unchanged.put(g, s.mark());
         }
         MarkAssignment.Result r = MarkAssignment.of(groups, stored, carriedBefore, fingerprint, unchanged);
-        // the rows as they will stand, by id in the order read: each written row is the mark as written
-        Map<Long, Mark> rows = new LinkedHashMap<>();
-        for (Mark m : stored) rows.put(m.id(), m);
-        Map<Long, Mark> was = Map.copyOf(rows);
+        // the rows as they stand, and those the write changes or adds: each written row is the mark as written
+        Map<Long, Mark> was = new HashMap<>(stored.size() * 4 / 3 + 1);
+        for (Mark m : stored) was.put(m.id(), m);
+        Map<Long, Mark> rewritten = new HashMap<>();
+        List<Mark> inserted = new ArrayList<>();
         List<Mark> updated = new ArrayList<>();
-        for (Mark m : r.retired()) {
-            changed(was, m, updated);
-            rows.put(m.id(), m);
-        }
+        for (Mark m : r.retired()) if (changed(was, m, updated)) rewritten.put(m.id(), m);
         // the members whose row may change: every member of a group that is not unchanged, before and after
         Set<String> moved = new HashSet<>();
         List<MarkSheets.MarkSheet> left = new ArrayList<>(), added = new ArrayList<>();
@@ -92,7 +89,6 @@ public final class MarkWrites {
                 }
         if (read != null) moved.addAll(read.keySet());
         List<MarkSheets.MarkSheet> sheets = new ArrayList<>(r.assigned().size());
-        Map<Long, String> text = texts(stored);
         for (MarkAssignment.Assigned a : r.assigned()) {
             MarkSheets.MarkSheet kept = unchanged.containsKey(a.group()) ? last.get(a.group()) : null;
             if (kept != null) {
@@ -100,19 +96,25 @@ public final class MarkWrites {
                 continue;
             }
             Mark m = a.mark();
-            if (m.id() == 0) m = new Mark(MarkRows.insert(c, projectId, m, at), m.prefix(), m.seq(), m.text(), m.calc(), m.originId(), true);
-            else changed(was, m, updated);
-            rows.put(m.id(), m);
+            if (m.id() == 0) {
+                m = new Mark(MarkRows.insert(c, projectId, m, at), m.prefix(), m.seq(), m.text(), m.calc(), m.originId(), true);
+                inserted.add(m);
+            } else if (changed(was, m, updated)) rewritten.put(m.id(), m);
             for (DerivedMember x : a.group().members()) moved.add(x.id());
-            MarkSheets.MarkSheet made = new MarkSheets.MarkSheet(m, a.group(), m.originId() == null ? null : text.get(m.originId()));
+            Mark origin = m.originId() == null ? null : was.get(m.originId());
+            MarkSheets.MarkSheet made = new MarkSheets.MarkSheet(m, a.group(), origin == null ? null : origin.text());
             sheets.add(made);
             added.add(made);
         }
         MarkRows.update(c, updated);
         MarkSheets given = before != null ? MarkSheets.after(before.sheets(), sheets, left, added) : new MarkSheets(sheets);
         MarkRows.locate(c, projectId, moved, carriedBefore, given::markOf);
-        List<Mark> after = new ArrayList<>(rows.values());
-        after.sort(Comparator.comparing((Mark m) -> m.prefix()).thenComparingInt(Mark::seq));
+        List<Mark> after = new ArrayList<>(stored.size() + inserted.size());
+        for (Mark m : stored) after.add(rewritten.getOrDefault(m.id(), m));
+        if (!inserted.isEmpty()) {
+            after.addAll(inserted);
+            after.sort(Comparator.comparing((Mark m) -> m.prefix()).thenComparingInt(Mark::seq));
+        }
         return new Reconciled(given, new Kept(List.copyOf(after), grouping, given));
     }
 
@@ -131,9 +133,11 @@ public final class MarkWrites {
         return text;
     }
 
-    /** Adds a stored mark to those to write where its calculation or whether it is carried differs from its row. */
-    private static void changed(Map<Long, Mark> stored, Mark m, List<Mark> updated) {
+    /** Adds a stored mark to those to write where its calculation or whether it is carried differs from its row; whether it did. */
+    private static boolean changed(Map<Long, Mark> stored, Mark m, List<Mark> updated) {
         Mark was = stored.get(m.id());
-        if (was == null || !Objects.equals(was.calc(), m.calc()) || was.active() != m.active()) updated.add(m);
+        if (was != null && Objects.equals(was.calc(), m.calc()) && was.active() == m.active()) return false;
+        updated.add(m);
+        return true;
     }
 }
