@@ -21,14 +21,14 @@ public final class Derivation {
 
     /** @throws com.baysheet.engine.InputError naming the level, grid line or bay where the model is wrong */
     public static Derived derive(Building b) {
-        return derive(b, new MemberCache(b.context()), null, Map.of(), null).derived();
+        return derive(b, new MemberCache(b.context()), null, Map.of(), null, List.of()).derived();
     }
 
     /**
      * A derivation, the framing of each level by its inputs and each grid point's stack with its inputs (empty where
-     * nothing earlier was offered).
+     * nothing earlier was offered), and the framings level by level from the top.
      */
-    record Framed(Derived derived, Map<LevelInputs, LevelFraming> levels, Map<Integer, Stack> stacks) {}
+    record Framed(Derived derived, Map<LevelInputs, LevelFraming> levels, Map<Integer, Stack> stacks, List<LevelFraming> order) {}
 
     /** One grid point's take-down (null where no level frames into it) and its columns, and what they were taken from. */
     record Stack(StackInputs inputs, TakeDown takeDown, List<DerivedMember> columns) {}
@@ -38,8 +38,10 @@ public final class Derivation {
      *                inputs (null: frame every level and keep no inputs)
      * @param stacks  the stacks taken down before in that building, by grid point
      * @param before  that building's derivation, whose members a part derived again keeps where they come out the same (null: none)
+     * @param framedBefore that derivation's framings, level by level from the top (empty: none)
      */
-    static Framed derive(Building b, MemberCache cache, Map<LevelInputs, LevelFraming> earlier, Map<Integer, Stack> stacks, Derived before) {
+    static Framed derive(Building b, MemberCache cache, Map<LevelInputs, LevelFraming> earlier, Map<Integer, Stack> stacks, Derived before,
+                         List<LevelFraming> framedBefore) {
         SameMembers unchanged = new SameMembers(before);
         // before the model check, so that clearing the last bays beneath a line load names the load
         for (var l : b.lineLoads())
@@ -91,13 +93,21 @@ public final class Derivation {
             if (!f.members.isEmpty()) parts.add(f.part());
         }
         ColumnTakeDown down = new ColumnTakeDown(b.context(), cache, plans, framings, b.selfWeights());
+        // the levels not framed by the very framing the same level had before: only there can a kept stack read otherwise
+        List<Integer> anew = null;
+        if (framedBefore.size() == framings.size()) {
+            anew = new ArrayList<>();
+            for (int k = 0; k < framings.size(); k++) if (framings.get(k) != framedBefore.get(k)) anew.add(k);
+        }
         List<TakeDown> takeDowns = new ArrayList<>();
         Map<Integer, Stack> taken = new java.util.HashMap<>();
         int ny = b.grid().y().lines();
         for (int i = 0; i < b.grid().x().lines(); i++)
             for (int j = 0; j < ny; j++) {
-                StackInputs in = earlier == null ? null : StackInputs.of(plans, framings, b.selfWeights(), i, j);
-                Stack was = in == null ? null : stacks.get(i * ny + j);
+                Stack was = earlier == null ? null : stacks.get(i * ny + j);
+                StackInputs in;
+                if (was != null && anew != null && was.inputs().sameAt(plans, framings, b.selfWeights(), i, j, anew)) in = was.inputs();
+                else in = earlier == null ? null : StackInputs.of(plans, framings, b.selfWeights(), i, j);
                 if (was == null || !was.inputs().equals(in)) {
                     int first = members.size();
                     TakeDown t = down.stack(i, j, members);
@@ -108,6 +118,6 @@ public final class Derivation {
                 if (was.takeDown() != null) takeDowns.add(was.takeDown());
                 if (in != null) taken.put(i * ny + j, was);
             }
-        return new Framed(Derived.ofParts(b, parts, takeDowns, before), framed, taken);
+        return new Framed(Derived.ofParts(b, parts, takeDowns, before), framed, taken, List.copyOf(framings));
     }
 }

@@ -29,7 +29,7 @@ public final class Rederivation {
     public static final int BUILDINGS = 16;
 
     private record Kept(Building building, Derived derived, LevelInputs.Shared shared, Map<LevelInputs, LevelFraming> levels,
-                        Map<Integer, Derivation.Stack> stacks, Map<MemberInput, MemberResult> results) {
+                        Map<Integer, Derivation.Stack> stacks, Map<MemberInput, MemberResult> results, List<LevelFraming> order) {
         /** Shares a level key with {@code b} (the store's keys are row ids); where neither has keys, has its name. */
         boolean sameBuilding(Building b) {
             for (Level l : b.levels()) for (Level k : building.levels()) if (l.key() != null && l.key().equals(k.key())) return true;
@@ -52,8 +52,8 @@ public final class Rederivation {
         boolean reuse = before != null && before.shared.equals(shared);
         MemberCache cache = new MemberCache(b.context(), reuse ? before.results : Map.of());
         Derivation.Framed f = Derivation.derive(b, cache, reuse ? before.levels : Map.of(), reuse ? before.stacks : Map.of(),
-                reuse ? before.derived : null);
-        keep(before, new Kept(b, f.derived(), shared, f.levels(), f.stacks(), cache.kept()));
+                reuse ? before.derived : null, reuse ? before.order : List.of());
+        keep(before, new Kept(b, f.derived(), shared, f.levels(), f.stacks(), cache.kept(), f.order()));
         return f.derived();
     }
 

@@ -21,14 +21,27 @@ record StackInputs(List<AtLevel> levels) {
 
     static StackInputs of(List<LevelPlan> plans, List<LevelFraming> framings, SelfWeights weights, int i, int j) {
         List<AtLevel> out = new ArrayList<>(plans.size());
-        for (int k = 0; k < plans.size(); k++) {
-            LevelPlan p = plans.get(k);
-            List<EndShare> shares = framings.get(k).atPoint[i][j];
-            out.add(new AtLevel(p.id, p.level.name(), p.level.elevation(), p.level.roofSlope(), p.floored(i - 1, j - 1),
-                    p.floored(i, j - 1), p.floored(i - 1, j), p.floored(i, j), shares == null ? null : List.copyOf(shares),
-                    weights.members().get(p.id + "-c" + p.at(i, j)),
-                    shares == null ? List.of() : framings.get(k).openAmong(ColumnTakeDown.bays(p, i, j))));
-        }
+        for (int k = 0; k < plans.size(); k++) out.add(at(plans, framings, weights, i, j, k));
         return new StackInputs(out);
+    }
+
+    /**
+     * Whether these inputs are the stack's at grid point (i, j) of {@code plans} and {@code framings}, given that they
+     * are at every level but those {@code anew}: where a level's framing is the very one the same level had when these
+     * inputs were read (a framing reused for equal level inputs), what the stack reads there is equal too.
+     */
+    boolean sameAt(List<LevelPlan> plans, List<LevelFraming> framings, SelfWeights weights, int i, int j, List<Integer> anew) {
+        if (levels.size() != plans.size()) return false;
+        for (int k : anew) if (!at(plans, framings, weights, i, j, k).equals(levels.get(k))) return false;
+        return true;
+    }
+
+    private static AtLevel at(List<LevelPlan> plans, List<LevelFraming> framings, SelfWeights weights, int i, int j, int k) {
+        LevelPlan p = plans.get(k);
+        List<EndShare> shares = framings.get(k).atPoint[i][j];
+        return new AtLevel(p.id, p.level.name(), p.level.elevation(), p.level.roofSlope(), p.floored(i - 1, j - 1),
+                p.floored(i, j - 1), p.floored(i - 1, j), p.floored(i, j), shares == null ? null : List.copyOf(shares),
+                weights.members().get(p.id + "-c" + p.at(i, j)),
+                shares == null ? List.of() : framings.get(k).openAmong(ColumnTakeDown.bays(p, i, j)));
     }
 }
