@@ -3,6 +3,7 @@ package com.baysheet.framing;
 import com.baysheet.engine.record.CalcRecord;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.IdentityHashMap;
@@ -113,13 +114,15 @@ public final class Typicals {
     /** The groups: those no touched key names kept as they were, the touched ones made again from who stays and who arrives. */
     private static Grouping regrouped(Grouping before, Map<String, Integer> levels, Map<List<DerivedMember>, Part> parts, Keys keys,
                                       Set<Key> touched, Map<Key, List<Place>> arriving, Set<DerivedMember> gone) {
-        Map<Key, Group> byKey = new HashMap<>(before.byKey.size() * 4 / 3 + touched.size() + 1);
+        // the groups kept: the last grouping's but the touched, found by their first places (the order is by them)
+        Map<Key, Group> byKey = new HashMap<>(before.byKey);
+        boolean[] drop = new boolean[before.order.size()];
+        for (Key k : touched) {
+            Group was = byKey.remove(k);
+            if (was != null) drop[Collections.binarySearch(before.order, was, BY_FIRST)] = true;
+        }
         List<Group> kept = new ArrayList<>(before.order.size());
-        for (Group g : before.order)
-            if (!touched.contains(g.key)) {
-                kept.add(g);
-                byKey.put(g.key, g);
-            }
+        for (int n = 0; n < drop.length; n++) if (!drop[n]) kept.add(before.order.get(n));
         List<Group> made = new ArrayList<>();
         for (Key k : touched) {
             Group was = before.byKey.get(k);
@@ -133,8 +136,8 @@ public final class Typicals {
             made.add(g);
             byKey.put(k, g);
         }
-        made.sort((a, b) -> a.first.compareTo(b.first));
-        List<Group> order = merged(kept, made, (a, b) -> a.first.compareTo(b.first));
+        made.sort(BY_FIRST);
+        List<Group> order = merged(kept, made, BY_FIRST);
         List<TypicalGroup> groups = new ArrayList<>(order.size());
         for (Group g : order) groups.add(g.group);
         return new Grouping(List.copyOf(groups), levels, parts, byKey, order, keys.kept(byKey));
@@ -249,6 +252,9 @@ public final class Typicals {
             levels = List.copyOf(in);
         }
     }
+
+    /** Groups in the reading order of their first members (no two groups share one). */
+    private static final java.util.Comparator<Group> BY_FIRST = (a, b) -> a.first.compareTo(b.first);
 
     /** One typical group, with its members' places in reading order. */
     private static final class Group {
