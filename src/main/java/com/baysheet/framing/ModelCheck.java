@@ -35,24 +35,32 @@ public final class ModelCheck {
     private static void level(Building b, Level l, GridNames bayNames) {
         Grid g = b.grid();
         String at = "levels[" + l.name() + "]";
-        Set<Long> cells = new HashSet<>();
-        boolean anyFloor = false;
+        // a bay's name is written only for a message: a tall building checks thousands of bays a save
+        boolean[] cells = new boolean[g.x().cells() * g.y().cells()];
+        boolean anyFloor = false, anyCantilever = false;
         for (Bay bay : l.bays()) {
             if (bay.col() >= g.x().cells() || bay.row() >= g.y().cells())
                 throw new InputError(at + ".bays[" + bay.col() + "," + bay.row() + "]", bay.col() + "," + bay.row(),
                         "bay lies outside the grid (" + g.x().cells() + " × " + g.y().cells() + " bays)");
-            String name = bayNames.bay(bay.col(), bay.row());
-            if (!cells.add((long) bay.col() << 32 | bay.row()))
+            int cell = bay.row() * g.x().cells() + bay.col();
+            if (cells[cell]) {
+                String name = bayNames.bay(bay.col(), bay.row());
                 throw new InputError(at + ".bays[" + name + "]", name, "bay given twice on this level");
+            }
+            cells[cell] = true;
             if (bay.opening()) continue;
             anyFloor = true;
             if (!b.context().catalogue().contains(bay.occupancy()))
-                throw new InputError(at + ".bays[" + name + "].occupancy", bay.occupancy(), "is not in the occupancy catalogue");
+                throw new InputError(at + ".bays[" + bayNames.bay(bay.col(), bay.row()) + "].occupancy", bay.occupancy(), "is not in the occupancy catalogue");
             if (b.context().catalogue().get(bay.occupancy()).isRoof() && Double.isNaN(l.roofSlope()))
-                throw new InputError(at + ".roofSlope", "nothing", "is required: bay " + name + " carries a roof live load");
-            if (!bay.cantilevers().isEmpty() || bay.cantileverOccupancy() != null) cantileverUse(b, l, bay, at + ".bays[" + name + "]");
+                throw new InputError(at + ".roofSlope", "nothing", "is required: bay " + bayNames.bay(bay.col(), bay.row()) + " carries a roof live load");
+            if (!bay.cantilevers().isEmpty() || bay.cantileverOccupancy() != null) {
+                anyCantilever |= !bay.cantilevers().isEmpty();
+                cantileverUse(b, l, bay, at + ".bays[" + bayNames.bay(bay.col(), bay.row()) + "]");
+            }
         }
         if (!anyFloor) throw new InputError(at + ".bays", l.bays().size(), "level " + l.name() + " has no floor at all");
+        if (!anyCantilever) return;
         LevelPlan plan = new LevelPlan("", l, g);
         for (Bay bay : l.bays()) {
             for (Map.Entry<Side, Double> c : bay.cantilevers().entrySet()) {

@@ -3,6 +3,7 @@ package com.baysheet.review;
 import com.baysheet.engine.InputError;
 import com.baysheet.framing.MemberRole;
 
+import java.util.Objects;
 import java.util.regex.Pattern;
 
 /**
@@ -47,5 +48,9 @@ public record Mark(long id, String prefix, int seq, String text, String calc, Lo
 
     public Mark renamed(String to) { return new Mark(id, prefix, seq, to, calc, originId, active); }
 
-    public Mark given(String newCalc, boolean nowActive) { return new Mark(id, prefix, seq, text, newCalc, originId, nowActive); }
+    public Mark given(String newCalc, boolean nowActive) {
+        // the same mark where nothing changes: a write gives most marks of a large building as they were
+        if (nowActive == active && Objects.equals(newCalc, calc)) return this;
+        return new Mark(id, prefix, seq, text, newCalc, originId, nowActive);
+    }
 }
