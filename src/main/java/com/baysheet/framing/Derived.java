@@ -4,6 +4,7 @@ import com.baysheet.framing.model.Building;
 
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
@@ -22,6 +23,13 @@ public final class Derived {
     private final Map<String, TakeDown> takeDownById;
     /** Each level's members in derivation order, each level's made on first asking (a member page draws its level's plan). */
     private final Map<String, List<DerivedMember>> byLevel = new java.util.concurrent.ConcurrentHashMap<>();
+    /**
+     * Each part's members by level, made on first asking: a level's members are gathered part by part, and a part
+     * this derivation kept from the one before it (the same list) is not read again. Built whole, then published.
+     */
+    private volatile Map<List<DerivedMember>, Map<String, List<DerivedMember>>> partLevels;
+    /** The earlier derivation's {@link #partLevels} for the parts this one kept, where it had them (else null). */
+    private final Map<List<DerivedMember>, Map<String, List<DerivedMember>>> keptPartLevels;
 
     public Derived(Building building, List<DerivedMember> members, List<TakeDown> takeDowns) {
         this(building, List.copyOf(members), takeDowns, null, null);
@@ -35,6 +43,19 @@ public final class Derived {
         memberById = before == null ? MemberIndex.of(members) : MemberIndex.after(before.memberById, before.parts, this.parts, members);
         takeDownById = new HashMap<>(this.takeDowns.size() * 4 / 3 + 1);
         for (TakeDown t : this.takeDowns) takeDownById.putIfAbsent(t.id(), t);
+        keptPartLevels = before == null ? null : kept(before.partLevels, this.parts);
+    }
+
+    /** Of {@code earlier}'s entries, those for {@code parts} (none of the parts this derivation dropped are held on to). */
+    private static Map<List<DerivedMember>, Map<String, List<DerivedMember>>> kept(
+            Map<List<DerivedMember>, Map<String, List<DerivedMember>>> earlier, List<List<DerivedMember>> parts) {
+        if (earlier == null) return null;
+        Map<List<DerivedMember>, Map<String, List<DerivedMember>>> kept = new IdentityHashMap<>(parts.size() * 2);
+        for (List<DerivedMember> p : parts) {
+            Map<String, List<DerivedMember>> l = earlier.get(p);
+            if (l != null) kept.put(p, l);
+        }
+        return kept;
     }
 
     /**
@@ -65,7 +86,32 @@ public final class Derived {
     public boolean idsUnique() { return memberById.unique(); }
 
     public List<DerivedMember> onLevel(String level) {
-        return byLevel.computeIfAbsent(level, l -> members.stream().filter(m -> m.level().equals(l)).toList());
+        return byLevel.computeIfAbsent(level, l -> {
+            Map<List<DerivedMember>, Map<String, List<DerivedMember>>> byPart = partLevels();
+            List<DerivedMember> on = new ArrayList<>();
+            for (List<DerivedMember> p : parts) on.addAll(byPart.get(p).getOrDefault(l, List.of()));
+            return List.copyOf(on);
+        });
+    }
+
+    private Map<List<DerivedMember>, Map<String, List<DerivedMember>>> partLevels() {
+        Map<List<DerivedMember>, Map<String, List<DerivedMember>>> m = partLevels;
+        if (m != null) return m;
+        m = new IdentityHashMap<>(parts.size() * 2);
+        for (List<DerivedMember> p : parts) {
+            Map<String, List<DerivedMember>> l = keptPartLevels == null ? null : keptPartLevels.get(p);
+            m.put(p, l != null ? l : byLevel(p));
+        }
+        partLevels = m;
+        return m;
+    }
+
+    /** A part's members by level, each level's in the part's order. */
+    private static Map<String, List<DerivedMember>> byLevel(List<DerivedMember> part) {
+        Map<String, List<DerivedMember>> by = new HashMap<>();
+        for (DerivedMember x : part) by.computeIfAbsent(x.level(), k -> new ArrayList<>()).add(x);
+        by.replaceAll((k, v) -> List.copyOf(v));
+        return by;
     }
 
     @Override

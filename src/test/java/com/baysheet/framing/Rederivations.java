@@ -31,6 +31,10 @@ final class Rederivations {
 
     static void assertSame(Derived incremental, Derived full, String as) {
         assertThat(incremental.building()).as(as).isEqualTo(full.building());
+        // a level's members as the plans read them, gathered from the parts (those kept from the derivation before too)
+        for (var l : full.building().levels())
+            assertThat(incremental.onLevel(l.name())).as("%s: members on %s", as, l.name())
+                    .containsExactlyElementsOf(incremental.members().stream().filter(m -> m.level().equals(l.name())).toList());
         assertThat(incremental.members()).as(as).hasSameSizeAs(full.members());
         for (int k = 0; k < full.members().size(); k++) {
             DerivedMember a = incremental.members().get(k), b = full.members().get(k);
