@@ -34,17 +34,17 @@ public final class Typicals {
 
     /** A derivation's typical groups, and what grouping the next state of its building starts from. */
     public static final class Grouping {
-        private static final Grouping NONE = new Grouping(List.of(), Map.of(), new IdentityHashMap<>(), Map.of(), List.of(), Map.of());
+        private static final Grouping NONE = new Grouping(List.of(), Map.of(), new IdentityHashMap<>(), Overlaid.empty(), List.of(), Overlaid.empty());
 
         private final List<TypicalGroup> groups;
         private final Map<String, Integer> levels;
         private final Map<List<DerivedMember>, Part> parts;
-        private final Map<Key, Group> byKey;
+        private final Overlaid<Key, Group> byKey;
         private final List<Group> order;
-        private final Map<Made, Key> keys;
+        private final Overlaid<Made, Key> keys;
 
         private Grouping(List<TypicalGroup> groups, Map<String, Integer> levels, Map<List<DerivedMember>, Part> parts,
-                         Map<Key, Group> byKey, List<Group> order, Map<Made, Key> keys) {
+                         Overlaid<Key, Group> byKey, List<Group> order, Overlaid<Made, Key> keys) {
             this.groups = groups;
             this.levels = levels;
             this.parts = parts;
@@ -115,7 +115,7 @@ public final class Typicals {
     private static Grouping regrouped(Grouping before, Map<String, Integer> levels, Map<List<DerivedMember>, Part> parts, Keys keys,
                                       Set<Key> touched, Map<Key, List<Place>> arriving, Set<DerivedMember> gone) {
         // the groups kept: the last grouping's but the touched, found by their first places (the order is by them)
-        Map<Key, Group> byKey = new HashMap<>(before.byKey);
+        Overlaid.Editor<Key, Group> byKey = before.byKey.edit();
         boolean[] drop = new boolean[before.order.size()];
         for (Key k : touched) {
             Group was = byKey.remove(k);
@@ -140,7 +140,8 @@ public final class Typicals {
         List<Group> order = merged(kept, made, BY_FIRST);
         List<TypicalGroup> groups = new ArrayList<>(order.size());
         for (Group g : order) groups.add(g.group);
-        return new Grouping(List.copyOf(groups), levels, parts, byKey, order, keys.kept(byKey));
+        Overlaid<Key, Group> now = byKey.done();
+        return new Grouping(List.copyOf(groups), levels, parts, now, order, keys.kept(now));
     }
 
     private static List<Place> merged(List<Place> a, List<Place> b) {
@@ -208,12 +209,12 @@ public final class Typicals {
      * finding a group by its key compares no record.
      */
     private static final class Keys {
-        private final Map<Made, Key> made;
-        private final Map<Key, Group> groups;
+        private final Overlaid.Editor<Made, Key> made;
+        private final Overlaid<Key, Group> groups;
         private final Map<Key, Key> fresh = new HashMap<>();
 
         Keys(Grouping before) {
-            made = new HashMap<>(before.keys);
+            made = before.keys.edit();
             groups = before.byKey;
         }
 
@@ -222,22 +223,29 @@ public final class Typicals {
             Made k = new Made(m.role(), new RecordParts(r));
             Key key = made.get(k);
             if (key == null) {
-                key = new Key(m.role(), r.withSubject(NEUTRAL));
-                Group g = groups.get(key);
-                Key first = g != null ? g.key : fresh.putIfAbsent(key, key);
-                if (first != null) key = first;
+                key = canonical(new Key(m.role(), r.withSubject(NEUTRAL)));
                 made.put(k, key);
-            }
+            } else key = canonical(key);
             return key;
         }
 
         /**
-         * The calculations for the next grouping, those of groups gone let go: each holds a record, and a building entered
-         * bay by bay would otherwise keep the record of every calculation it ever had.
+         * The one key object of the group {@code key} names: the last grouping's, else the first made in this one. A
+         * calculation remembered from a group since gone (let go only when the changes are folded in) gets the current one.
          */
-        Map<Made, Key> kept(Map<Key, Group> now) {
-            made.values().removeIf(k -> !now.containsKey(k));
-            return made;
+        private Key canonical(Key key) {
+            Group g = groups.get(key);
+            if (g != null) return g.key;
+            Key first = fresh.putIfAbsent(key, key);
+            return first != null ? first : key;
+        }
+
+        /**
+         * The calculations for the next grouping. Those of groups gone are let go when the changes are folded in: each
+         * holds a record, and a building entered bay by bay would otherwise keep the record of every calculation it ever had.
+         */
+        Overlaid<Made, Key> kept(Overlaid<Key, Group> now) {
+            return made.done(k -> now.get(k) != null);
         }
     }
 
