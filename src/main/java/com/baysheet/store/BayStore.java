@@ -42,7 +42,7 @@ public final class BayStore {
 
     /** Gives every selected cell the assignment's bay, replacing what was there. */
     public void assign(Editor who, long projectId, long version, long levelId, BayAssignment a) {
-        writes.change(who, c -> BayText.assigned(c, projectId, levelId, a), projectId, version, assigning(projectId, levelId, a));
+        writes.bayChange(who, c -> BayText.assigned(c, projectId, levelId, a), projectId, version, levelId, false, assigning(projectId, levelId, a));
     }
 
     /**
@@ -51,7 +51,7 @@ public final class BayStore {
      * withdrawn, not removed ({@link ModelWrites#removal}).
      */
     public void clear(Editor who, long projectId, long version, long levelId, List<Cell> cells) {
-        writes.removal(who, c -> BayText.cleared(c, projectId, levelId, cells), projectId, version, c -> {
+        writes.bayChange(who, c -> BayText.cleared(c, projectId, levelId, cells), projectId, version, levelId, true, c -> {
             keep(c, who, projectId, levelId, cells);
             return clearing(projectId, levelId, cells).run(c);
         });

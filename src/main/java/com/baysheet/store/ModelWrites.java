@@ -18,6 +18,7 @@ import java.sql.Connection;
 import java.sql.SQLException;
 import java.time.Instant;
 import java.util.List;
+import java.util.Set;
 import java.util.function.Function;
 
 /**
@@ -66,7 +67,16 @@ public final class ModelWrites {
      * of the work, so that it can say what the model held before ("... was: unframed").
      */
     public <T> T change(Editor who, Sql.Work<String> action, long projectId, long version, Sql.Work<T> work) {
-        return change(who, action, projectId, version, work, false);
+        return change(who, action, projectId, version, work, false, null);
+    }
+
+    /**
+     * As {@link #change(Editor, Sql.Work, long, long, Sql.Work)} for work that writes the bays of level {@code levelId}
+     * and no other level's: the model after it reads that level's bays and takes the others' from the model before
+     * ({@link BuildingMapper#load(Connection, long, Model, Set)}). {@code removes}: members go ({@link #removal}).
+     */
+    <T> T bayChange(Editor who, Sql.Work<String> action, long projectId, long version, long levelId, boolean removes, Sql.Work<T> work) {
+        return change(who, action, projectId, version, work, removes, Set.of(levelId));
     }
 
     /**
@@ -75,10 +85,11 @@ public final class ModelWrites {
      * and the audit entry names them.
      */
     public <T> T removal(Editor who, Sql.Work<String> action, long projectId, long version, Sql.Work<T> work) {
-        return change(who, action, projectId, version, work, true);
+        return change(who, action, projectId, version, work, true, null);
     }
 
-    private <T> T change(Editor who, Sql.Work<String> action, long projectId, long version, Sql.Work<T> work, boolean withdraw) {
+    private <T> T change(Editor who, Sql.Work<String> action, long projectId, long version, Sql.Work<T> work, boolean withdraw,
+                         Set<Long> baysWritten) {
         Results.Computed[] done = new Results.Computed[1];
         MarkSheets[] marked = new MarkSheets[1];
         long[] renames = new long[1];
@@ -95,7 +106,7 @@ public final class ModelWrites {
             Model was = held != null ? held : BuildingMapper.load(c, projectId);
             IssuedChanges.Snapshot before = issuedBefore(c, projectId, was);
             T result = work.run(c);
-            Model m = BuildingMapper.load(c, projectId);
+            Model m = BuildingMapper.load(c, projectId, was, baysWritten);
             String diff = ModelDiff.between(was, m);
             Derived d = checked(m);
             done[0] = new Results.Computed(m, d);

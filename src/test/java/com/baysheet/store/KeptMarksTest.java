@@ -47,14 +47,34 @@ class KeptMarksTest {
             List<Project> projects = Demo.loadIfEmpty(first);
             Demo.loadIfEmpty(Store.on(b.dataSource(), Derivation::derive, clock));
             Project p = projects.stream().max(Comparator.comparingInt(x -> first.results().of(x.id()).derived().members().size())).orElseThrow();
+            Store second = Store.on(b.dataSource(), Derivation::derive, clock);
+            // one floor made the same as another on both, so that an edit of a typical's bays reaches a level linked to it
+            List<StoredLevel> floors = first.levels().findByProject(p.id()).stream().filter(l -> !l.info().roof()).toList();
+            first.typicals().link(Editor.DEMO, p.id(), first.projects().find(p.id()).version(), floors.get(1).id(), List.of(floors.get(2).id()));
+            second.typicals().link(Editor.DEMO, p.id(), second.projects().find(p.id()).version(), floors.get(1).id(), List.of(floors.get(2).id()));
             List<StoredLevel> levels = first.levels().findByProject(p.id());
             Random rnd = new Random(20261204);
             for (int e = 0; e < 40; e++) {
                 StoredLevel level = levels.get(rnd.nextInt(levels.size()));
                 List<Bay> bays = kept.findByLevel(p.id(), level.id());
                 if (bays.isEmpty()) continue;
-                BayAssignment edit = edit(bays.get(rnd.nextInt(bays.size())), rnd);
+                Bay picked = bays.get(rnd.nextInt(bays.size()));
+                BayAssignment edit = edit(picked, rnd);
                 Store fresh = Store.on(b.dataSource(), Derivation::derive, clock);
+                if (rnd.nextInt(10) == 0) {
+                    // a bay cleared (unframed): refused on a linked level, as on the other database
+                    List<Cell> cell = List.of(new Cell(picked.col(), picked.row()));
+                    try {
+                        kept.clear(Editor.DEMO, p.id(), first.projects().find(p.id()).version(), level.id(), cell);
+                    } catch (InputError refused) {
+                        assertThatThrownBy(() -> fresh.bays().clear(Editor.DEMO, p.id(), fresh.projects().find(p.id()).version(), level.id(), cell))
+                                .isInstanceOf(InputError.class).hasMessage(refused.getMessage());
+                        continue;
+                    }
+                    fresh.bays().clear(Editor.DEMO, p.id(), fresh.projects().find(p.id()).version(), level.id(), cell);
+                    compare(pages, fresh, a, b, p.id(), e);
+                    continue;
+                }
                 try {
                     kept.assign(Editor.DEMO, p.id(), first.projects().find(p.id()).version(), level.id(), edit);
                 } catch (InputError refused) {
@@ -64,16 +84,26 @@ class KeptMarksTest {
                     continue;
                 }
                 fresh.bays().assign(Editor.DEMO, p.id(), fresh.projects().find(p.id()).version(), level.id(), edit);
-                assertThat(rows(a, p.id())).as("edit %d", e).isEqualTo(rows(b, p.id()));
-                // and the marks a page labels each member with: the write's own, against those assigned from the rows
-                var shown = pages.state(p.id());
-                var read = fresh.versions().state(p.id());
-                for (var m : read.computed().derived().members())
-                    assertThat(shown.marks().label(m.id())).as("edit %d, %s", e, m.id()).isEqualTo(read.marks().label(m.id()));
+                compare(pages, fresh, a, b, p.id(), e);
             }
             // all but the first write started from the marks the write before it left
             assertThat(writes.keptStarts()).isGreaterThanOrEqualTo(25);
         }
+    }
+
+    /**
+     * The rows alike; the marks a page labels each member with, the write's own against those assigned from the rows;
+     * and the model the write left (the levels it did not write taken from the model before) against the model read whole.
+     */
+    private static void compare(ProjectVersions pages, Store fresh, Database a, Database b, long project, int e) throws SQLException {
+        assertThat(rows(a, project)).as("edit %d", e).isEqualTo(rows(b, project));
+        var shown = pages.state(project);
+        var read = fresh.versions().state(project);
+        assertThat(shown.computed().model().building()).as("edit %d: the building", e).isEqualTo(read.computed().model().building());
+        assertThat(shown.computed().model().levels()).as("edit %d: the levels", e).isEqualTo(read.computed().model().levels());
+        assertThat(shown.computed().model().unframed()).as("edit %d: the unframed levels", e).isEqualTo(read.computed().model().unframed());
+        for (var m : read.computed().derived().members())
+            assertThat(shown.marks().label(m.id())).as("edit %d, %s", e, m.id()).isEqualTo(read.marks().label(m.id()));
     }
 
     /**
