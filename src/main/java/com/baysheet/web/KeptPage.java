@@ -15,8 +15,8 @@ import java.util.List;
  * it in per request is a copy, with no template run over the page and no scan of it.
  */
 final class KeptPage {
-    /** What goes into a place. */
-    enum Part { WHO, NOTICE, TOKEN }
+    /** What goes into a place: the header's who, the notice, the form token, or nothing (segments joined as they are). */
+    enum Part { WHO, NOTICE, TOKEN, NONE }
 
     /**
      * The markers a page is rendered with where its per-request parts go: a random prefix per server, so that no
@@ -31,10 +31,15 @@ final class KeptPage {
         }
 
         String prefix() { return who.substring(0, who.length() - 1); }
+
+        /** The marker of the {@code i}th drawing put in after rendering ({@link #of(String, Places, List)}). */
+        String drawing(int i) { return prefix() + "d" + i + ";"; }
     }
 
     /** One request's parts, as bytes. */
     record Parts(byte[] who, byte[] notice, byte[] token) {
+        private static final byte[] NOTHING = new byte[0];
+
         static Parts of(String who, String notice, String token) {
             return new Parts(utf8(who), utf8(notice), utf8(token == null ? "" : token));
         }
@@ -44,6 +49,7 @@ final class KeptPage {
                 case WHO -> who;
                 case NOTICE -> notice;
                 case TOKEN -> token;
+                case NONE -> NOTHING;
             };
         }
     }
@@ -69,6 +75,14 @@ final class KeptPage {
 
     /** The page rendered with {@code places} for its parts, cut at them. */
     static KeptPage of(String html, Places places) {
+        return of(html, places, List.of());
+    }
+
+    /**
+     * The page rendered with {@code places} for its parts, cut at them, with each of {@code drawings} put in at its
+     * marker ({@link Places#drawing}): markup made apart from the template, none of it a form.
+     */
+    static KeptPage of(String html, Places places, List<String> drawings) {
         String prefix = places.prefix();
         List<byte[]> segments = new ArrayList<>();
         List<Part> parts = new ArrayList<>();
@@ -76,14 +90,32 @@ final class KeptPage {
         for (int at = html.indexOf(prefix); at >= 0; at = html.indexOf(prefix, from)) {
             int end = at + prefix.length();
             char kind = end < html.length() ? html.charAt(end) : ' ';
+            segments.add(utf8(html.substring(from, at)));
+            if (kind == 'd') {
+                int stop = html.indexOf(';', end);
+                int i = stop < 0 ? -1 : index(html.substring(end + 1, stop), drawings.size());
+                if (i < 0) throw new IllegalStateException("a drawing marker with no drawing");
+                // the drawing is a segment of its own, joined to those either side by nothing
+                parts.add(Part.NONE);
+                segments.add(utf8(drawings.get(i)));
+                parts.add(Part.NONE);
+                from = stop + 1;
+                continue;
+            }
             Part p = kind == 'w' ? Part.WHO : kind == 'n' ? Part.NOTICE : kind == 't' ? Part.TOKEN : null;
             if (p == null) throw new IllegalStateException("a page place marker with no part: " + kind);
-            segments.add(utf8(html.substring(from, at)));
             parts.add(p);
             from = end + 1;
         }
         segments.add(utf8(html.substring(from)));
         return new KeptPage(segments.toArray(byte[][]::new), parts.toArray(Part[]::new));
+    }
+
+    /** {@code digits} as an index below {@code n}, or -1. */
+    private static int index(String digits, int n) {
+        if (digits.isEmpty() || digits.length() > 6 || !digits.chars().allMatch(Character::isDigit)) return -1;
+        int i = Integer.parseInt(digits);
+        return i < n ? i : -1;
     }
 
     /** The bytes the page holds, its parts aside: what it costs to keep. */

@@ -8,7 +8,9 @@ import com.baysheet.web.auth.CsrfForms;
 import io.javalin.http.Context;
 import io.javalin.http.HttpStatus;
 
+import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -75,7 +77,15 @@ final class PageCache {
         View v = page.render(state);
         Map<String, Object> model = new HashMap<>(v.model());
         model.put("pageParts", places);
-        KeptPage p = KeptPage.of(CsrfForms.insert(views.render(v.template(), model, ctx), places.token()), places);
+        // a plan is drawn apart and put in the kept page at its marker: thousands of members' markup go through
+        // neither the template engine nor the form-token search
+        List<String> drawings = new ArrayList<>();
+        model.replaceAll((name, x) -> {
+            if (!(x instanceof PlanView plan)) return x;
+            drawings.add(plan.svg());
+            return plan.drawnLater(places.drawing(drawings.size() - 1));
+        });
+        KeptPage p = KeptPage.of(CsrfForms.insert(views.render(v.template(), model, ctx), places.token()), places, drawings);
         // kept under the versions it was rendered from (not those read before): it is exactly their page
         if (state.version() != null) kept.put(new Key(ctx.path(), ctx.queryString(), role, state.version()), p);
         return p;

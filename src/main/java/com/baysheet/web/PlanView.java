@@ -26,9 +26,16 @@ import java.util.Map;
  */
 record PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
                 List<Shape> members, List<Shape> tributary, Map<String, String> legend, List<Shape> lineLoads,
-                List<Shape> drifts, List<Shape> pointLoads, List<Shape> marks) {
+                List<Shape> drifts, List<Shape> pointLoads, List<Shape> marks, String drawnAt) {
     /** One drawn thing: a rectangle (x, y, w, h) or a line (x, y to x2, y2), with its class, fill, link and tooltip. */
     record Shape(double x, double y, double w, double h, double x2, double y2, String cls, String fill, String href, String title) {}
+
+    /** A plan drawn where the template puts it. */
+    PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
+             List<Shape> members, List<Shape> tributary, Map<String, String> legend, List<Shape> lineLoads,
+             List<Shape> drifts, List<Shape> pointLoads, List<Shape> marks) {
+        this(width, height, bays, gridLines, gridLabels, members, tributary, legend, lineLoads, drifts, pointLoads, marks, null);
+    }
 
     /** A plan without line loads. */
     PlanView(double width, double height, List<Shape> bays, List<Shape> gridLines, List<Shape> gridLabels,
@@ -44,8 +51,20 @@ record PlanView(double width, double height, List<Shape> bays, List<Shape> gridL
 
     private static final double MAX_W = 760, MAX_H = 560, PAD = 36;
 
-    /** The plan as SVG markup, escaped; the template inserts it as it is. */
-    public String svg() { return PlanSvg.of(this); }
+    /**
+     * The plan as SVG markup, escaped; the template inserts it as it is. Where the plan is {@link #drawnLater drawn
+     * later}, the marker of its place instead.
+     */
+    public String svg() { return drawnAt != null ? drawnAt : PlanSvg.of(this); }
+
+    /**
+     * This plan with {@code marker} in the place of its drawing, which the page's cache puts there after rendering
+     * ({@link KeptPage}): a plan of thousands of members is then neither copied by the template engine nor read
+     * through again by what the page is filled in with.
+     */
+    PlanView drawnLater(String marker) {
+        return new PlanView(width, height, bays, gridLines, gridLabels, members, tributary, legend, lineLoads, drifts, pointLoads, marks, marker);
+    }
 
     static PlanView of(Grid g, Level level, List<DerivedMember> members, DerivedMember selected,
                        OccupancyCatalogue cat, String memberHref, List<GridLineLoad> lineLoads) {

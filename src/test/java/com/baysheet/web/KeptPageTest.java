@@ -45,6 +45,22 @@ class KeptPageTest {
     }
 
     @Test
+    void aDrawingGoesInAtItsMarkerAsItIsAndTheTagMovesWithIt() {
+        String html = "<header>" + PLACES.who() + "</header><figure>" + PLACES.drawing(1) + "</figure><p>" + PLACES.drawing(0)
+                + "</p><form method=\"post\"><input name=\"_csrf\" value=\"" + PLACES.token() + "\"></form>";
+        java.util.List<String> drawings = java.util.List.of("<svg><a href=\"/m/1\"><title>B1 — x</title></a></svg>", "<svg/>");
+        KeptPage p = KeptPage.of(html, PLACES, drawings);
+        KeptPage.Parts parts = KeptPage.Parts.of("TT", "", "tok1");
+        String sent = "<header>TT</header><figure><svg/></figure><p><svg><a href=\"/m/1\"><title>B1 — x</title></a></svg></p>"
+                + "<form method=\"post\"><input name=\"_csrf\" value=\"tok1\"></form>";
+        assertThat(filled(p, parts)).isEqualTo(sent);
+        assertThat(p.size() + "TT".length() + "tok1".length()).isEqualTo(sent.getBytes(StandardCharsets.UTF_8).length);
+        // the tag reads the drawings: another drawing is another page
+        assertThat(KeptPage.of(html, PLACES, java.util.List.of(drawings.get(0), "<svg></svg>")).etag(parts)).isNotEqualTo(p.etag(parts));
+        assertThatThrownBy(() -> KeptPage.of(html, PLACES, java.util.List.of("<svg/>"))).isInstanceOf(IllegalStateException.class);
+    }
+
+    @Test
     void aMarkerOfAnotherServerIsPlainText() {
         KeptPage.Places other = KeptPage.Places.random();
         KeptPage p = KeptPage.of("<p>" + other.who() + "</p>", PLACES);

@@ -42,6 +42,10 @@ class ResultPagesTest {
         assertThat(body).contains("ASCE 7-16 2.3.1", "ASCE 7-16 2.4.1", "governs");
         assertThat(Html.all(r.body(), "svg .tributary")).isNotEmpty();
         assertThat(Html.all(r.body(), "svg .member.girder.selected")).hasSize(1);
+        // the plan, drawn apart from the template, is in its place: one drawing, inside its figure, no marker left
+        assertThat(Html.all(r.body(), "svg")).hasSize(1);
+        assertThat(Html.all(r.body(), "figure svg .member")).hasSameSizeAs(Html.all(r.body(), "svg .member")).isNotEmpty();
+        assertThat(r.body()).doesNotContainPattern("kept[0-9a-f]{32}");
     }
 
     @Test
