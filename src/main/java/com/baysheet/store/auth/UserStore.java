@@ -18,6 +18,8 @@ import java.util.Optional;
 /** Users and their password hashes. Users are made inactive, never deleted. */
 public final class UserStore {
     private static final String COLUMNS = "id, username, full_name, initials, role, active, password_hash, must_change_password";
+    /** {@link #COLUMNS} of a query where the user table is {@code u}, in the order {@link #read(ResultSet, int)} reads them. */
+    static final String COLUMNS_OF_U = "u.id, u.username, u.full_name, u.initials, u.role, u.active, u.password_hash, u.must_change_password";
 
     /** A user with the stored hash, for checking a login, and whether someone else set that password. */
     public record WithHash(User user, String passwordHash, boolean mustChangePassword) {}
@@ -162,6 +164,13 @@ public final class UserStore {
             return h.createQuery("SELECT " + COLUMNS + " FROM app_user WHERE " + column + " = :value").bind("value", value)
                     .map((rs, ctx) -> read(rs)).findFirst();
         }
+    }
+
+    /** A user read from the columns {@link #COLUMNS_OF_U} from {@code first} on. */
+    static WithHash read(ResultSet rs, int first) throws SQLException {
+        User u = new User(rs.getLong(first), rs.getString(first + 1), rs.getString(first + 2), rs.getString(first + 3),
+                Role.valueOf(rs.getString(first + 4)), rs.getBoolean(first + 5));
+        return new WithHash(u, rs.getString(first + 6), rs.getBoolean(first + 7));
     }
 
     private static WithHash read(ResultSet rs) throws SQLException {

@@ -32,6 +32,9 @@ final class Cookies {
     /** A cookie value we could have issued (URL-safe base64 of 32 bytes), or null. */
     static String token(Context ctx, String name) {
         String v = ctx.cookie(name);
-        return v != null && v.matches("[A-Za-z0-9_-]{43}") ? v : null;
+        return v != null && TOKEN.matcher(v).matches() ? v : null;
     }
+
+    /** Compiled once: every request with a cookie is checked against it. */
+    private static final java.util.regex.Pattern TOKEN = java.util.regex.Pattern.compile("[A-Za-z0-9_-]{43}");
 }
