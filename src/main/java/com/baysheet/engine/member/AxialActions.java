@@ -10,6 +10,12 @@ import com.baysheet.engine.units.Quantity;
 
 /** Axial load on a column: dead, live unreduced and reduced, roof live, concentrated check, combinations. */
 final class AxialActions {
+    /** The keys of the axial results, made once (every column of a building writes them). */
+    private static final ResultKey P_D = ResultKey.axial("D"), P_L0 = ResultKey.axial("L0"), P_L = ResultKey.axial("L"),
+            P_LC = ResultKey.axial("Lc"), P_LDES = ResultKey.axial("Ldes"), P_LR0 = ResultKey.axial("Lr0"), P_LR = ResultKey.axial("Lr"),
+            P_LRFD = ResultKey.axial("LRFD"), P_ASD = ResultKey.axial("ASD"), P_S = ResultKey.axial("S"), P_LRC = ResultKey.axial("Lrc"),
+            P_LRDES = ResultKey.axial("Lrdes");
+
     private AxialActions() {}
 
     static void record(CalcContext ctx, MemberInput in, LoadBook book, BeamLoads floor0, BeamLoads floor,
@@ -45,17 +51,17 @@ final class AxialActions {
         var asd = LoadCombinations.govern(false, "P_a", axial, rec);
         if (halfL && lrfd.combination().halfL()) rec.info("0.5 L used in " + lrfd.combination().name() + ".", ed.clause("combo.halfL"));
 
-        rec.result(ResultKey.axial("D"), "Dead load P_D", d, Quantity.FORCE)
-           .result(ResultKey.axial("L0"), "Live load, unreduced", l0, Quantity.FORCE)
-           .result(ResultKey.axial("L"), "Live load, reduced", l, Quantity.FORCE)
-           .result(ResultKey.axial("Lc"), "Concentrated live load", lc, Quantity.FORCE)
-           .result(ResultKey.axial("Ldes"), "Design live load", ldes, Quantity.FORCE)
-           .result(ResultKey.axial("Lr0"), "Roof live load, unreduced", roof0.total(), Quantity.FORCE)
-           .result(ResultKey.axial("Lr"), "Roof live load Lr", lr, Quantity.FORCE)
-           .result(ResultKey.axial("LRFD"), "Factored axial load P_u (" + lrfd.label() + ")", lrfd.value(), Quantity.FORCE)
-           .result(ResultKey.axial("ASD"), "Service axial load P_a (" + asd.label() + ")", asd.value(), Quantity.FORCE)
-           .governs(ResultKey.axial("LRFD")).governs(ResultKey.axial("ASD"));
-        if (snow) rec.result(ResultKey.axial("S"), "Snow load S, not reduced", s, Quantity.FORCE);
+        rec.result(P_D, "Dead load P_D", d, Quantity.FORCE)
+           .result(P_L0, "Live load, unreduced", l0, Quantity.FORCE)
+           .result(P_L, "Live load, reduced", l, Quantity.FORCE)
+           .result(P_LC, "Concentrated live load", lc, Quantity.FORCE)
+           .result(P_LDES, "Design live load", ldes, Quantity.FORCE)
+           .result(P_LR0, "Roof live load, unreduced", roof0.total(), Quantity.FORCE)
+           .result(P_LR, "Roof live load Lr", lr, Quantity.FORCE)
+           .result(P_LRFD, "Factored axial load P_u (" + lrfd.label() + ")", lrfd.value(), Quantity.FORCE)
+           .result(P_ASD, "Service axial load P_a (" + asd.label() + ")", asd.value(), Quantity.FORCE)
+           .governs(P_LRFD).governs(P_ASD);
+        if (snow) rec.result(P_S, "Snow load S, not reduced", s, Quantity.FORCE);
     }
 
     /**
@@ -71,8 +77,8 @@ final class AxialActions {
         rec.info(p > lr ? "The concentrated roof load governs the axial roof live load (used alone, never added to the uniform roof load)."
                 : "The uniform roof live load governs the axial roof live load; the concentrated roof load is not added.", ed.clause("concentrated"));
         double design = Math.max(p, lr);
-        rec.result(ResultKey.axial("Lrc"), "Concentrated roof live load", p, Quantity.FORCE)
-           .result(ResultKey.axial("Lrdes"), "Design roof live load", design, Quantity.FORCE);
+        rec.result(P_LRC, "Concentrated roof live load", p, Quantity.FORCE)
+           .result(P_LRDES, "Design roof live load", design, Quantity.FORCE);
         return design;
     }
 

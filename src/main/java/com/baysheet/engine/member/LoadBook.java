@@ -92,10 +92,16 @@ final class LoadBook {
         return b;
     }
 
-    /** The floors listed must hold, occupancy by occupancy, exactly the floor areas the loads carry. */
+    /**
+     * The floors listed must hold, occupancy by occupancy, exactly the floor areas the loads carry. A column low in a
+     * tall stack lists every floor above it and carries few occupancies: the sums are kept in a few slots searched in
+     * turn, unboxed, and added in the order the floors list them.
+     */
     private void checkFloors() {
         if (in.floors().isEmpty()) return;
-        Map<String, Double> listed = new LinkedHashMap<>();
+        String[] ids = new String[4];
+        double[] sums = new double[4];
+        int n = 0;
         for (int i = 0; i < in.floors().size(); i++) {
             var areas = in.floors().get(i).areas();
             for (int j = 0; j < areas.size(); j++) {
@@ -103,17 +109,36 @@ final class LoadBook {
                 String id = areas.get(j).occupancy();
                 Occupancy o = ctx.catalogue().contains(id) ? ctx.catalogue().get(id) : occupancy(floorField(i, j), id);
                 if (o.isRoof()) throw new com.baysheet.engine.InputError(floorField(i, j), o.id(), "is a roof occupancy; a supported floor lists floor areas only");
-                listed.merge(o.id(), areas.get(j).area(), Double::sum);
+                int k = slot(ids, n, o.id());
+                if (k == n) {
+                    if (n == ids.length) {
+                        ids = java.util.Arrays.copyOf(ids, 2 * n);
+                        sums = java.util.Arrays.copyOf(sums, 2 * n);
+                    }
+                    ids[n++] = o.id();
+                }
+                sums[k] += areas.get(j).area();
             }
         }
-        java.util.Set<String> ids = new java.util.LinkedHashSet<>(floorAreas.keySet());
-        ids.addAll(listed.keySet());
-        for (String id : ids) {
-            double carried = floorAreas.getOrDefault(id, 0.0), given = listed.getOrDefault(id, 0.0);
-            if (Math.abs(carried - given) > Tolerances.SAME_AREA * Math.max(1, Math.max(carried, given)))
-                throw new com.baysheet.engine.InputError("floors", id + " " + given, "the floors listed must add up to the floor area of "
-                        + id + " the member carries (" + carried + ")");
+        // the occupancies the loads carry first, then those only listed: the refusal names the first that differs
+        for (Map.Entry<String, Double> e : floorAreas.entrySet()) {
+            int k = slot(ids, n, e.getKey());
+            sameArea(e.getKey(), e.getValue(), k < n ? sums[k] : 0.0);
         }
+        for (int k = 0; k < n; k++) if (!floorAreas.containsKey(ids[k])) sameArea(ids[k], 0.0, sums[k]);
+    }
+
+    /** Where {@code id} is among the first {@code n} of {@code ids}, or {@code n}. */
+    private static int slot(String[] ids, int n, String id) {
+        int k = 0;
+        while (k < n && !ids[k].equals(id)) k++;
+        return k;
+    }
+
+    private static void sameArea(String id, double carried, double given) {
+        if (Math.abs(carried - given) > Tolerances.SAME_AREA * Math.max(1, Math.max(carried, given)))
+            throw new com.baysheet.engine.InputError("floors", id + " " + given, "the floors listed must add up to the floor area of "
+                    + id + " the member carries (" + carried + ")");
     }
 
     /** The uniform snow load (psf or kN/m²) on every strip of the member: a line load of pressure × width. */
