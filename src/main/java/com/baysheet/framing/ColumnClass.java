@@ -38,5 +38,8 @@ public enum ColumnClass {
         };
     }
 
-    public String label() { return name().toLowerCase(); }
+    /** The class as the records name it: "corner", "edge", written once (every column of a building asks). */
+    public String label() { return label; }
+
+    private final String label = name().toLowerCase(java.util.Locale.ROOT);
 }

@@ -176,7 +176,7 @@ final class ColumnTakeDown {
 
     /** The quarter of each floored bay nearest the column (the half-way rule on plan). */
     private static List<PlanRect> outline(LevelPlan p, int i, int j) {
-        List<PlanRect> out = new ArrayList<>();
+        List<PlanRect> out = new ArrayList<>(4);
         for (int di = -1; di <= 0; di++)
             for (int dj = -1; dj <= 0; dj++) {
                 int c = i + di, r = j + dj;
