@@ -8,6 +8,7 @@ import com.baysheet.auth.SessionPolicy;
 import com.baysheet.auth.Tokens;
 import com.baysheet.auth.User;
 import com.baysheet.engine.InputError;
+import com.baysheet.project.Firm;
 import com.baysheet.review.AuditEvent;
 import com.baysheet.store.review.AuditTrail;
 import com.baysheet.store.auth.SessionStore.StoredSession;
@@ -101,6 +102,14 @@ public final class Logins {
 
     /** The login a cookie value stands for, if it is live; each use slides its idle expiry. */
     public Optional<SignedIn> session(String token) {
+        return arrive(token).map(Arrival::signedIn);
+    }
+
+    /** A signed-in request, and the firm's settings read with its session (null where their row is absent). */
+    public record Arrival(SignedIn signedIn, Firm firm) {}
+
+    /** As {@link #session}, with the firm's settings read by the same statement: every page asks for both. */
+    public Optional<Arrival> arrive(String token) {
         if (token == null || token.isBlank()) return Optional.empty();
         String hash = Tokens.sha256(token);
         Optional<SessionStore.WithUser> found = sessions.findWithUser(hash);
@@ -121,7 +130,8 @@ public final class Logins {
         // slide the expiry at most once a minute: a page view should not cost a database write
         if (expires.isAfter(s.expiresAt().plus(EXTEND_STEP))) sessions.extend(hash, expires);
         else expires = s.expiresAt();
-        return Optional.of(new SignedIn(u, token, s.csrfToken(), expires).withMustChangePassword(w.mustChangePassword()));
+        return Optional.of(new Arrival(new SignedIn(u, token, s.csrfToken(), expires).withMustChangePassword(w.mustChangePassword()),
+                found.get().firm()));
     }
 
     public void logout(SignedIn s, String address) {

@@ -1,6 +1,8 @@
 package com.baysheet.store.auth;
 
+import com.baysheet.project.Firm;
 import com.baysheet.store.Sql;
+import com.baysheet.store.review.FirmStore;
 import org.jdbi.v3.core.Handle;
 import org.jdbi.v3.core.statement.Update;
 
@@ -34,21 +36,25 @@ public final class SessionStore {
         return sql.tx(c -> find(c, tokenHash));
     }
 
-    /** A session and its user's row, read in one transaction: every page request asks for both. */
-    record WithUser(StoredSession session, UserStore.WithHash user) {}
+    /**
+     * A session, its user's row and the firm's settings (null where their row is absent), read by one statement:
+     * every page request asks for all three.
+     */
+    record WithUser(StoredSession session, UserStore.WithHash user, Firm firm) {}
 
     Optional<WithUser> findWithUser(String tokenHash) {
         // one statement, plain JDBC: every page request runs it, and a second statement and the mapping layer
         // were half its cost
         return sql.tx(c -> {
             try (PreparedStatement st = c.prepareStatement("SELECT s.token_hash, s.user_id, s.csrf_token, s.created_at, s.expires_at, "
-                    + UserStore.COLUMNS_OF_U + " FROM user_session s JOIN app_user u ON u.id = s.user_id WHERE s.token_hash = ?")) {
+                    + UserStore.COLUMNS_OF_U + ", " + FirmStore.COLUMNS_OF_F + " FROM user_session s JOIN app_user u ON u.id = s.user_id "
+                    + "LEFT JOIN firm_setting f ON f.id = 1 WHERE s.token_hash = ?")) {
                 st.setString(1, tokenHash);
                 try (ResultSet rs = st.executeQuery()) {
                     if (!rs.next()) return Optional.<WithUser>empty();
                     StoredSession s = new StoredSession(rs.getString(1), rs.getLong(2), rs.getString(3),
                             rs.getObject(4, OffsetDateTime.class).toInstant(), rs.getObject(5, OffsetDateTime.class).toInstant());
-                    return Optional.of(new WithUser(s, UserStore.read(rs, 6)));
+                    return Optional.of(new WithUser(s, UserStore.read(rs, 6), FirmStore.read(rs, 14)));
                 }
             }
         });

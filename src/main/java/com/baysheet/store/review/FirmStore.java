@@ -6,6 +6,10 @@ import com.baysheet.store.Sql;
 
 import org.jdbi.v3.core.Handle;
 
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+
 /** The one row of firm settings, changed only over the version the form was opened at. */
 public final class FirmStore {
     private final Sql sql;
@@ -16,14 +20,24 @@ public final class FirmStore {
 
     public Firm get() {
         return sql.tx(c -> {
-            try (Handle h = Sql.on(c)) {
-                return h.createQuery("SELECT firm_name, logo_text, default_edition, sw_infill_beam, sw_grid_beam, sw_girder, "
-                                + "sw_column, version FROM firm_setting WHERE id = 1")
-                        .map((rs, ctx) -> new Firm(rs.getString(1), rs.getString(2), rs.getString(3), rs.getDouble(4),
-                                rs.getDouble(5), rs.getDouble(6), rs.getDouble(7), rs.getLong(8)))
-                        .one();
+            try (PreparedStatement st = c.prepareStatement("SELECT " + COLUMNS_OF_F + " FROM firm_setting f WHERE f.id = 1");
+                 ResultSet rs = st.executeQuery()) {
+                if (!rs.next()) throw new IllegalStateException("the firm settings row is missing (migration V100 makes it)");
+                return read(rs, 1);
             }
         });
+    }
+
+    /** The settings' columns of a query where the firm's row is {@code f}, in the order {@link #read} reads them. */
+    public static final String COLUMNS_OF_F = "f.firm_name, f.logo_text, f.default_edition, f.sw_infill_beam, f.sw_grid_beam, "
+            + "f.sw_girder, f.sw_column, f.version";
+
+    /** The settings read from the columns {@link #COLUMNS_OF_F} from {@code first} on; null where the row is absent (a null version). */
+    public static Firm read(ResultSet rs, int first) throws SQLException {
+        long version = rs.getLong(first + 7);
+        if (rs.wasNull()) return null;
+        return new Firm(rs.getString(first), rs.getString(first + 1), rs.getString(first + 2), rs.getDouble(first + 3),
+                rs.getDouble(first + 4), rs.getDouble(first + 5), rs.getDouble(first + 6), version);
     }
 
     public void update(Firm f, AuditEvent event) {

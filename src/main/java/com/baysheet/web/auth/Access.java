@@ -34,6 +34,8 @@ public final class Access {
     static final String CSRF_HEADER = "X-CSRF-Token";
     /** Set on a request whose login is an API token's. */
     static final String BY_TOKEN = "byApiToken";
+    /** The firm's settings as read with the request's session. */
+    private static final String FIRM_READ = "firmReadWithSession";
     private static final Duration FORM_COOKIE_AGE = Duration.ofHours(12);
     public static final String CHANGE_PASSWORD_PAGE = "/account/password";
     public static final String CHANGE_FIRST = "Your password was set by someone else: choose your own password before going on.";
@@ -91,7 +93,9 @@ public final class Access {
         Role role = s.map(x -> x.user().role()).orElse(null);
         Optional<Why> refused = decide(admits, role, s.map(SignedIn::mustChangePassword).orElse(false), setupDone());
         if (refused.isPresent()) throw refusal(refused.get(), role);
-        FirmOnPage.put(ctx, firm.get());
+        // the firm's settings as read with the session, else (no session, an API token) read now
+        Firm read = ctx.attribute(FIRM_READ);
+        FirmOnPage.put(ctx, read != null ? read : firm.get());
     }
 
     /**
@@ -130,10 +134,12 @@ public final class Access {
             ctx.attribute(BY_TOKEN, Boolean.TRUE);
             return Optional.of(t);
         }
-        Optional<SignedIn> s = logins.session(Cookies.token(ctx, Cookies.SESSION));
-        s.ifPresent(x -> {
-            ctx.attribute(SIGNED_IN, x);
-            ctx.attribute(CSRF, x.csrfToken());
+        Optional<Logins.Arrival> arrived = logins.arrive(Cookies.token(ctx, Cookies.SESSION));
+        Optional<SignedIn> s = arrived.map(Logins.Arrival::signedIn);
+        arrived.ifPresent(a -> {
+            ctx.attribute(SIGNED_IN, a.signedIn());
+            ctx.attribute(CSRF, a.signedIn().csrfToken());
+            if (a.firm() != null) ctx.attribute(FIRM_READ, a.firm());
         });
         if (s.isEmpty()) ctx.attribute(CSRF, formToken(ctx));
         return s;
