@@ -158,6 +158,18 @@ final class KeptPage {
     private static byte[] utf8(String s) { return s.getBytes(StandardCharsets.UTF_8); }
 
     private static MessageDigest sha256() {
+        // a copy of one made at start: every request for a kept page hashes its tag, and a look-up of the provider
+        // costs more than the hash of a few hundred bytes
+        try {
+            return (MessageDigest) SHA256.clone();
+        } catch (CloneNotSupportedException e) {
+            return newSha256();
+        }
+    }
+
+    private static final MessageDigest SHA256 = newSha256();
+
+    private static MessageDigest newSha256() {
         try {
             return MessageDigest.getInstance("SHA-256");
         } catch (NoSuchAlgorithmException e) {

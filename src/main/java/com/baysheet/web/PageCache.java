@@ -93,7 +93,8 @@ final class PageCache {
 
     private void send(Context ctx, KeptPage p) {
         String token = CsrfForms.token(ctx);
-        String who = CsrfForms.insert(header(ctx), token);
+        // the header kept with the token's marker in its forms: the request's token put in by a plain replace
+        String who = header(ctx).replace(places.token(), String.valueOf(token));
         String notice = ctx.attribute(Saved.ATTRIBUTE) == null ? "" : views.fragment("fragments/header", "notice", Map.of(), ctx);
         KeptPage.Parts parts = KeptPage.Parts.of(who, notice, token);
         String etag = p.etag(parts);
@@ -113,7 +114,7 @@ final class PageCache {
         Who w = new Who(ctx.attribute(FirmOnPage.ATTRIBUTE), user.role(), user.initials());
         String kept = headers.get(w);
         if (kept != null) return kept;
-        String rendered = views.fragment("fragments/header", "who", Map.of(), ctx);
+        String rendered = CsrfForms.insert(views.fragment("fragments/header", "who", Map.of(), ctx), places.token());
         if (headers.size() >= MAX_HEADERS) headers.clear();
         headers.put(w, rendered);
         return rendered;
