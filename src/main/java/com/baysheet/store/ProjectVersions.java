@@ -39,7 +39,7 @@ public final class ProjectVersions {
 
     /** The versions as they stand: not found when there is no such project. */
     public Version of(long projectId) {
-        return sql.tx(c -> read(c, projectId));
+        return sql.readOne(c -> read(c, projectId));
     }
 
     /**

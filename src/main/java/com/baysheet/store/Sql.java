@@ -77,6 +77,20 @@ public final class Sql {
         return clock;
     }
 
+    /**
+     * Runs a read of one statement on a connection in auto-commit mode, as the pool hands it out: one statement is
+     * its own transaction, so there is nothing to commit, and the connection goes back as it came. For the few reads
+     * every page request makes; work of more than one statement goes through {@link #tx}.
+     */
+    public <T> T readOne(Work<T> work) {
+        try (Connection c = ds.getConnection()) {
+            if (!c.getAutoCommit()) c.setAutoCommit(true);
+            return work.run(c);
+        } catch (SQLException e) {
+            throw failure(e);
+        }
+    }
+
     /** Runs work in one transaction: committed when it returns, rolled back when it throws. */
     public <T> T tx(Work<T> work) {
         try (Connection c = ds.getConnection()) {

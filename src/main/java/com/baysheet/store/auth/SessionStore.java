@@ -45,7 +45,7 @@ public final class SessionStore {
     Optional<WithUser> findWithUser(String tokenHash) {
         // one statement, plain JDBC: every page request runs it, and a second statement and the mapping layer
         // were half its cost
-        return sql.tx(c -> {
+        return sql.readOne(c -> {
             try (PreparedStatement st = c.prepareStatement("SELECT s.token_hash, s.user_id, s.csrf_token, s.created_at, s.expires_at, "
                     + UserStore.COLUMNS_OF_U + ", " + FirmStore.COLUMNS_OF_F + " FROM user_session s JOIN app_user u ON u.id = s.user_id "
                     + "LEFT JOIN firm_setting f ON f.id = 1 WHERE s.token_hash = ?")) {
