@@ -24,8 +24,11 @@ final class Overlaid<K, V> {
 
     static <K, V> Overlaid<K, V> empty() { return new Overlaid<>(Map.of(), Map.of()); }
 
+    V get(K key) { return read(top, base, key); }
+
+    /** {@code key}'s value in {@code top} over {@code base}. */
     @SuppressWarnings("unchecked")
-    V get(K key) {
+    private static <K, V> V read(Map<K, Object> top, Map<K, V> base, K key) {
         Object v = top.get(key);
         if (v == null) return base.get(key);
         return v == GONE ? null : (V) v;
@@ -47,12 +50,7 @@ final class Overlaid<K, V> {
             this.top = new HashMap<>(from.top);
         }
 
-        V get(K key) {
-            Object v = top.get(key);
-            if (v == null) return from.base.get(key);
-            @SuppressWarnings("unchecked") V out = v == GONE ? null : (V) v;
-            return out;
-        }
+        V get(K key) { return read(top, from.base, key); }
 
         void put(K key, V value) {
             if (value == null) throw new IllegalArgumentException("no value is null");
@@ -71,12 +69,6 @@ final class Overlaid<K, V> {
         /** The new state; where the changes reach a quarter of the map, folded in with the entries {@code keep} refuses dropped. */
         Overlaid<K, V> done(Predicate<V> keep) {
             if (top.size() * 4L < from.base.size()) return new Overlaid<>(from.base, top);
-            if (from.base.isEmpty()) {
-                // nothing beneath: the changes are the map (none of them a removal, which only a key beneath makes)
-                @SuppressWarnings("unchecked") Map<K, V> all = (Map<K, V>) (Map<K, ?>) top;
-                all.values().removeIf(keep.negate());
-                return new Overlaid<>(all, Map.of());
-            }
             Map<K, V> all = new HashMap<>(from.base);
             for (Map.Entry<K, Object> e : top.entrySet()) {
                 if (e.getValue() == GONE) all.remove(e.getKey());

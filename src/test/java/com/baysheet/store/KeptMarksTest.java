@@ -61,34 +61,30 @@ class KeptMarksTest {
                 Bay picked = bays.get(rnd.nextInt(bays.size()));
                 BayAssignment edit = edit(picked, rnd);
                 Store fresh = Store.on(b.dataSource(), Derivation::derive, clock);
-                if (rnd.nextInt(10) == 0) {
-                    // a bay cleared (unframed): refused on a linked level, as on the other database
-                    List<Cell> cell = List.of(new Cell(picked.col(), picked.row()));
-                    try {
-                        kept.clear(Editor.DEMO, p.id(), first.projects().find(p.id()).version(), level.id(), cell);
-                    } catch (InputError refused) {
-                        assertThatThrownBy(() -> fresh.bays().clear(Editor.DEMO, p.id(), fresh.projects().find(p.id()).version(), level.id(), cell))
-                                .isInstanceOf(InputError.class).hasMessage(refused.getMessage());
-                        continue;
-                    }
-                    fresh.bays().clear(Editor.DEMO, p.id(), fresh.projects().find(p.id()).version(), level.id(), cell);
-                    compare(pages, fresh, a, b, p.id(), e);
-                    continue;
-                }
+                List<Cell> cell = List.of(new Cell(picked.col(), picked.row()));
+                // now and then a bay cleared (unframed), refused on a linked level; else the assignment, where a turned
+                // bay the framing refuses is refused alike on the other database, and nothing is written
+                BayEdit change = rnd.nextInt(10) == 0
+                        ? (store, version) -> store.clear(Editor.DEMO, p.id(), version, level.id(), cell)
+                        : (store, version) -> store.assign(Editor.DEMO, p.id(), version, level.id(), edit);
                 try {
-                    kept.assign(Editor.DEMO, p.id(), first.projects().find(p.id()).version(), level.id(), edit);
+                    change.on(kept, first.projects().find(p.id()).version());
                 } catch (InputError refused) {
-                    // a turned bay the framing refuses is refused alike on the other database, and nothing is written
-                    assertThatThrownBy(() -> fresh.bays().assign(Editor.DEMO, p.id(), fresh.projects().find(p.id()).version(), level.id(), edit))
+                    assertThatThrownBy(() -> change.on(fresh.bays(), fresh.projects().find(p.id()).version()))
                             .isInstanceOf(InputError.class).hasMessage(refused.getMessage());
                     continue;
                 }
-                fresh.bays().assign(Editor.DEMO, p.id(), fresh.projects().find(p.id()).version(), level.id(), edit);
+                change.on(fresh.bays(), fresh.projects().find(p.id()).version());
                 compare(pages, fresh, a, b, p.id(), e);
             }
             // all but the first write started from the marks the write before it left
             assertThat(writes.keptStarts()).isGreaterThanOrEqualTo(25);
         }
+    }
+
+    /** One edit of the bays, made the same way on either database's store. */
+    private interface BayEdit {
+        void on(BayStore store, long version);
     }
 
     /**

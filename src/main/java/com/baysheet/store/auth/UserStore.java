@@ -19,7 +19,7 @@ import java.util.Optional;
 public final class UserStore {
     private static final String COLUMNS = "id, username, full_name, initials, role, active, password_hash, must_change_password";
     /** {@link #COLUMNS} of a query where the user table is {@code u}, in the order {@link #read(ResultSet, int)} reads them. */
-    static final String COLUMNS_OF_U = "u.id, u.username, u.full_name, u.initials, u.role, u.active, u.password_hash, u.must_change_password";
+    static final String COLUMNS_OF_U = "u." + COLUMNS.replace(", ", ", u.");
 
     /** A user with the stored hash, for checking a login, and whether someone else set that password. */
     public record WithHash(User user, String passwordHash, boolean mustChangePassword) {}
@@ -100,7 +100,7 @@ public final class UserStore {
     public List<User> findAll() {
         return sql.tx(c -> {
             try (Handle h = Sql.on(c)) {
-                return h.createQuery("SELECT " + COLUMNS + " FROM app_user ORDER BY username").map((rs, ctx) -> read(rs).user()).list();
+                return h.createQuery("SELECT " + COLUMNS + " FROM app_user ORDER BY username").map((rs, ctx) -> read(rs, 1).user()).list();
             }
         });
     }
@@ -162,20 +162,15 @@ public final class UserStore {
     static Optional<WithHash> one(Connection c, String column, Object value) {
         try (Handle h = Sql.on(c)) {
             return h.createQuery("SELECT " + COLUMNS + " FROM app_user WHERE " + column + " = :value").bind("value", value)
-                    .map((rs, ctx) -> read(rs)).findFirst();
+                    .map((rs, ctx) -> read(rs, 1)).findFirst();
         }
     }
 
-    /** A user read from the columns {@link #COLUMNS_OF_U} from {@code first} on. */
+    /** A user read from the columns of {@link #COLUMNS} (or {@link #COLUMNS_OF_U}) from {@code first} on. */
     static WithHash read(ResultSet rs, int first) throws SQLException {
         User u = new User(rs.getLong(first), rs.getString(first + 1), rs.getString(first + 2), rs.getString(first + 3),
                 Role.valueOf(rs.getString(first + 4)), rs.getBoolean(first + 5));
         return new WithHash(u, rs.getString(first + 6), rs.getBoolean(first + 7));
     }
 
-    private static WithHash read(ResultSet rs) throws SQLException {
-        User u = new User(rs.getLong("id"), rs.getString("username"), rs.getString("full_name"), rs.getString("initials"),
-                Role.valueOf(rs.getString("role")), rs.getBoolean("active"));
-        return new WithHash(u, rs.getString("password_hash"), rs.getBoolean("must_change_password"));
-    }
 }
